@@ -1,0 +1,2 @@
+export * from './plan-request';
+export * from './plan';

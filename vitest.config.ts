@@ -1,0 +1,43 @@
+import { defineConfig } from 'vitest/config';
+
+// Node-side suites. Client component tests (src/**/*.spec.ts) run through `ng test`.
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: 'engine',
+          environment: 'node',
+          include: [
+            'engine/**/*.spec.ts',
+            'shared/**/*.spec.ts',
+            'rules/**/*.spec.ts',
+            'tests/reference/**/*.spec.ts',
+          ],
+        },
+      },
+      {
+        test: {
+          name: 'api',
+          environment: 'node',
+          include: ['server/**/*.spec.ts', 'tests/api/**/*.spec.ts'],
+          globalSetup: ['tests/support/api-global-setup.ts'],
+          testTimeout: 30_000,
+          hookTimeout: 60_000,
+          fileParallelism: false,
+        },
+      },
+      {
+        test: {
+          name: 'e2e',
+          environment: 'node',
+          include: ['tests/e2e/**/*.spec.ts'],
+          globalSetup: ['tests/support/e2e-global-setup.ts'],
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});
