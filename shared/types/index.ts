@@ -1,2 +1,3 @@
 export * from './plan-request';
 export * from './plan';
+export * from './api';

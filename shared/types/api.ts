@@ -1,0 +1,153 @@
+/** Shapes the API sends and receives. server/ produces them, src/ consumes them. */
+import type { AgeGroup, Equipment, Level, PlanKind, PlanRequest, Space } from './plan-request';
+import type { Plan } from './plan';
+
+export const ROLES = ['lead', 'coach', 'assistant'] as const;
+export type Role = (typeof ROLES)[number];
+
+export interface UserDto {
+  id: string;
+  name: string;
+  email: string;
+  clubId: string;
+  clubName: string;
+  role: Role;
+}
+
+export interface AuthResponse {
+  token: string;
+  user: UserDto;
+}
+
+export interface TeamDto {
+  id: string;
+  name: string;
+  ageGroup: AgeGroup;
+  level: Level;
+  usualSpace: Space;
+  /** User ids of the coaches and assistants attached to the team. */
+  coachIds: string[];
+  playerCount: number;
+}
+
+export interface PlayerDto {
+  id: string;
+  teamId: string;
+  displayName: string;
+  goalkeeper: boolean;
+  active: boolean;
+}
+
+export type KitBagDto = Equipment;
+
+export interface CsvRowError {
+  row: number;
+  field: string;
+  message: string;
+}
+
+export interface CsvPreview {
+  importId: string;
+  rows: { row: number; displayName: string; goalkeeper: boolean }[];
+  errors: CsvRowError[];
+}
+
+export type PlanStatus = 'draft' | 'final';
+
+export interface PlanSummaryDto {
+  id: string;
+  teamId: string;
+  teamName: string;
+  date: string | null;
+  kickOff: string | null;
+  kind: PlanKind;
+  minutes: number;
+  playerCount: number;
+  status: PlanStatus;
+  createdAt: string;
+}
+
+export interface SessionPlanDto extends PlanSummaryDto {
+  request: PlanRequest;
+  plan: Plan;
+  ruleSetId: string;
+  ruleSetVersion: number;
+  seed: string;
+  authorId: string;
+  /** Optimistic concurrency: send back as If-Match on PATCH. */
+  version: number;
+}
+
+export interface Page<T> {
+  items: T[];
+  page: number;
+  pageSize: number;
+  total: number;
+}
+
+export type RuleSetStatus = 'draft' | 'published' | 'archived';
+
+export interface RuleSetDto {
+  id: string;
+  name: string;
+  /** The rule-set document's version number (increments on publish). */
+  version: number;
+  status: RuleSetStatus;
+  body: unknown;
+  authorId: string;
+  authorName: string;
+  createdAt: string;
+  updatedAt: string;
+  /** Optimistic lock: send back as If-Match on PUT. */
+  revision: number;
+}
+
+export type FeedbackVerdict = 'too-easy' | 'right' | 'too-hard';
+
+export interface FeedbackDto {
+  id: string;
+  planId: string;
+  stationId: string;
+  phaseIndex: number;
+  verdict: FeedbackVerdict;
+  note?: string;
+  /** Client-generated id so a replayed offline action is stored once. */
+  clientId?: string;
+  createdAt: string;
+}
+
+export interface AttendanceDto {
+  planId: string;
+  playerIds: string[];
+}
+
+export interface MemberDto {
+  userId: string;
+  name: string;
+  email: string;
+  role: Role;
+}
+
+export interface InvitationDto {
+  id: string;
+  email: string;
+  role: Role;
+  expiresAt: string;
+  acceptedAt: string | null;
+}
+
+export interface HealthDto {
+  status: 'ok' | 'degraded';
+  db: 'up' | 'down';
+  version: string;
+}
+
+/** RFC 9457 problem details, with the fields that failed validation. */
+export interface ProblemDto {
+  type: string;
+  title: string;
+  status: number;
+  detail?: string;
+  instance?: string;
+  errors?: { field: string; message: string }[];
+}
