@@ -1,0 +1,89 @@
+import { Routes } from '@angular/router';
+import { roleGuard, signedInGuard, signedOutGuard } from './core/auth/auth-guards';
+
+/** Every screen is lazy-loaded so the first paint stays small. */
+export const routes: Routes = [
+  {
+    path: 'sign-in',
+    title: 'Sign in · Conewise',
+    canActivate: [signedOutGuard],
+    loadComponent: () => import('./features/auth/sign-in-page').then((m) => m.SignInPage),
+  },
+  {
+    path: 'create-club',
+    title: 'Create a club · Conewise',
+    canActivate: [signedOutGuard],
+    loadComponent: () => import('./features/auth/create-club-page').then((m) => m.CreateClubPage),
+  },
+  {
+    path: 'invitations/:token',
+    title: 'Join your club · Conewise',
+    loadComponent: () => import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
+  },
+  {
+    path: 'status',
+    title: 'System status · Conewise',
+    loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),
+  },
+  {
+    path: '',
+    canActivate: [signedInGuard],
+    children: [
+      {
+        path: '',
+        pathMatch: 'full',
+        title: 'This week · Conewise',
+        loadComponent: () => import('./features/home/home-page').then((m) => m.HomePage),
+      },
+      {
+        path: 'teams',
+        title: 'Teams · Conewise',
+        loadComponent: () => import('./features/teams/team-list-page').then((m) => m.TeamListPage),
+      },
+      {
+        path: 'teams/:teamId',
+        title: 'Team · Conewise',
+        loadComponent: () => import('./features/teams/team-page').then((m) => m.TeamPage),
+      },
+      {
+        path: 'teams/:teamId/plans',
+        title: 'Past plans · Conewise',
+        loadComponent: () => import('./features/plans/plan-history-page').then((m) => m.PlanHistoryPage),
+      },
+      {
+        path: 'teams/:teamId/insight',
+        title: 'Team insight · Conewise',
+        loadComponent: () => import('./features/insight/team-insight-page').then((m) => m.TeamInsightPage),
+      },
+      {
+        path: 'plan/new',
+        title: 'Plan a session · Conewise',
+        canActivate: [roleGuard('lead', 'coach')],
+        loadComponent: () => import('./features/planner/plan-wizard').then((m) => m.PlanWizard),
+      },
+      {
+        path: 'plans/:planId',
+        title: 'Plan · Conewise',
+        loadComponent: () => import('./features/plans/plan-page').then((m) => m.PlanPage),
+      },
+      {
+        path: 'plans/:planId/pitch-side',
+        title: 'Pitch-side · Conewise',
+        loadComponent: () => import('./features/pitch-side/pitch-side-page').then((m) => m.PitchSidePage),
+      },
+      {
+        path: 'club/rules',
+        title: 'Club rules · Conewise',
+        canActivate: [roleGuard('lead')],
+        loadComponent: () => import('./features/club-rules/club-rules-page').then((m) => m.ClubRulesPage),
+      },
+      {
+        path: 'club/members',
+        title: 'Members · Conewise',
+        canActivate: [roleGuard('lead')],
+        loadComponent: () => import('./features/members/members-page').then((m) => m.MembersPage),
+      },
+    ],
+  },
+  { path: '**', redirectTo: '' },
+];

@@ -1,0 +1,30 @@
+import { HttpErrorResponse } from '@angular/common/http';
+import type { ProblemDto } from '../../../../shared/types';
+
+/** Turns an API error into words a coach can act on. */
+export function problemMessage(error: unknown): string {
+  if (error instanceof HttpErrorResponse) {
+    if (error.status === 0) return 'Conewise cannot reach the server. Check the connection and try again.';
+    const problem = error.error as Partial<ProblemDto> | null;
+    if (problem && typeof problem === 'object') {
+      const fields = problem.errors?.map((e) => `${e.field}: ${e.message}`).join('; ');
+      const head = problem.detail ?? problem.title;
+      if (head && fields) return `${head} (${fields})`;
+      if (head) return head;
+    }
+    if (error.status === 403) return 'Your role in the club does not allow this.';
+    if (error.status === 404) return 'That was not found. It may have been removed.';
+    if (error.status >= 500)
+      return 'Something went wrong on the server. Nothing you saved was lost; try again.';
+  }
+  return 'Something went wrong. Try again.';
+}
+
+/** Field errors of a 400 problem, keyed by field name, for showing under form inputs. */
+export function problemFieldErrors(error: unknown): Record<string, string> {
+  if (!(error instanceof HttpErrorResponse)) return {};
+  const problem = error.error as Partial<ProblemDto> | null;
+  const result: Record<string, string> = {};
+  for (const item of problem?.errors ?? []) result[item.field] = item.message;
+  return result;
+}
