@@ -1,0 +1,58 @@
+// @ts-check
+import eslint from '@eslint/js';
+import angular from 'angular-eslint';
+import tseslint from 'typescript-eslint';
+
+export default tseslint.config(
+  { ignores: ['dist/**', '.angular/**', '.data/**', 'node_modules/**', 'coverage/**', 'test-results/**'] },
+  {
+    files: ['**/*.ts'],
+    extends: [eslint.configs.recommended, ...tseslint.configs.recommended],
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+    },
+  },
+  {
+    files: ['src/**/*.ts'],
+    extends: [...angular.configs.tsRecommended],
+    processor: angular.processInlineTemplates,
+    rules: {
+      '@angular-eslint/directive-selector': [
+        'error',
+        { type: 'attribute', prefix: 'cw', style: 'camelCase' },
+      ],
+      '@angular-eslint/component-selector': ['error', { type: 'element', prefix: 'cw', style: 'kebab-case' }],
+      // The 2025 style guide names classes after what they are, without a "Component" suffix.
+      '@angular-eslint/component-class-suffix': 'off',
+      '@angular-eslint/directive-class-suffix': 'off',
+      '@angular-eslint/prefer-on-push-component-change-detection': 'error',
+      '@angular-eslint/prefer-signals': 'error',
+    },
+  },
+  {
+    files: ['src/**/*.html'],
+    extends: [...angular.configs.templateRecommended, ...angular.configs.templateAccessibility],
+    rules: {},
+  },
+  {
+    files: ['engine/**/*.ts'],
+    rules: {
+      // The engine runs in the browser and on the server: no Node built-ins.
+      'no-restricted-imports': [
+        'error',
+        { patterns: ['node:*', 'fs', 'path', 'os', 'child_process', 'crypto', '**/server/**', '**/src/**'] },
+      ],
+      'no-restricted-globals': ['error', 'process', 'Buffer', 'require', '__dirname', 'window', 'document'],
+    },
+  },
+  {
+    files: ['shared/**/*.ts', 'rules/**/*.ts'],
+    rules: {
+      'no-restricted-imports': ['error', { patterns: ['**/server/**', '**/src/**', '**/engine/**'] }],
+    },
+  },
+  {
+    files: ['server/**/*.ts'],
+    rules: { 'no-restricted-imports': ['error', { patterns: ['**/src/**'] }] },
+  },
+);
