@@ -1,4 +1,4 @@
-import type { Content, TDocumentDefinitions, TableCell } from 'pdfmake/interfaces';
+import type { Column, Content, TDocumentDefinitions, TableCell } from 'pdfmake/interfaces';
 import type { Equipment, Phase, Plan, Station } from '../../shared/types';
 import { minuteLabel, planMinutes, sessionStart } from './clock';
 import { CARD_FONT } from './fonts';
@@ -296,7 +296,7 @@ function coachingStack(station: Station): Content {
 
 /** Coaching points and easier/harder steps once per phase when every station runs the same activity. */
 function coachingColumns(station: Station): Content {
-  const list = (title: string, items: string[]): Content => ({
+  const list = (title: string, items: string[]): Column => ({
     width: '*',
     stack: [{ text: title, style: 'label' }, items.length ? { ul: items, style: 'small' } : { text: '—' }],
   });
