@@ -1,0 +1,101 @@
+/**
+ * Headless Chromium for end-to-end tests: Debian's /usr/bin/chromium driven by playwright-core,
+ * a fresh profile each time, and a record of every request so a test can prove the app made none
+ * to outside hosts.
+ */
+import { mkdtempSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+export const CHROMIUM_ARGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--no-first-run',
+];
+
+export const PHONE = { width: 390, height: 844 };
+export const DESKTOP = { width: 1440, height: 900 };
+
+const SCREENSHOT_DIR = new URL('../../../test-results/screenshots/', import.meta.url).pathname;
+
+/** A browser with its own profile, and the URLs it requested outside the app's origin. */
+export interface TestBrowser {
+  context: BrowserContext;
+  /** Requests to anything but the app's origin (data: and blob: URLs are local and not counted). */
+  outsideRequests: string[];
+  newPage(viewport?: { width: number; height: number }): Promise<Page>;
+  close(): Promise<void>;
+}
+
+/** Launches Chromium with a fresh user-data-dir for one suite. */
+export async function launchBrowser(baseUrl: string): Promise<TestBrowser> {
+  const profile = mkdtempSync(join(tmpdir(), 'conewise-chromium-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    args: CHROMIUM_ARGS,
+    headless: true,
+    viewport: DESKTOP,
+    acceptDownloads: true,
+  });
+  const origin = new URL(baseUrl).origin;
+  const outsideRequests: string[] = [];
+  context.on('request', (request) => {
+    const url = request.url();
+    if (/^(data|blob|about|chrome-extension):/.test(url)) return;
+    if (new URL(url).origin !== origin) outsideRequests.push(url);
+  });
+  return {
+    context,
+    outsideRequests,
+    async newPage(viewport = DESKTOP) {
+      const page = await context.newPage();
+      await page.setViewportSize(viewport);
+      return page;
+    },
+    async close() {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Saves a full-page screenshot to test-results/screenshots/<name>-<width>.png and returns its path. */
+export async function screenshot(page: Page, name: string): Promise<string> {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  const width = page.viewportSize()?.width ?? 0;
+  const path = join(SCREENSHOT_DIR, `${name}-${width}.png`);
+  await page.screenshot({ path, fullPage: true });
+  return path;
+}
+
+interface AxeViolation {
+  id: string;
+  impact: string | null;
+  help: string;
+  nodes: { target: string[] }[];
+}
+
+const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
+
+/** Runs axe-core in the page and returns the serious and critical violations, described for a failure message. */
+export async function seriousAccessibilityViolations(page: Page): Promise<string[]> {
+  await page.addScriptTag({ content: axeSource });
+  const violations = await page.evaluate(async () => {
+    const axe = (
+      globalThis as unknown as {
+        axe: { run: (context: Document) => Promise<{ violations: AxeViolation[] }> };
+      }
+    ).axe;
+    const result = await axe.run(document);
+    return result.violations;
+  });
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.impact} ${v.id}: ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+}
