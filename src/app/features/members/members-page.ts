@@ -1,9 +1,114 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCardModule } from '@angular/material/card';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import { DatePipe } from '@angular/common';
+import { forkJoin } from 'rxjs';
+import { ROLES, type InvitationDto, type MemberDto, type Role } from '../../../../shared/types';
+import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { MembersApi } from './services/members-api';
 
-/** Placeholder until the screen is built. */
+/** What each role may do, in the words the invite form shows. */
+export const ROLE_DESCRIPTIONS: Record<Role, string> = {
+  lead: 'Head of coaching: club rules, members and every team',
+  coach: 'Runs their teams: players, kit bag and plans',
+  assistant: 'Helps at sessions: sees plans, records attendance and how stations went',
+};
+
+/** The club's people: who is in, with which role, and who has been invited. */
 @Component({
   selector: 'cw-members-page',
-  template: '<section class="cw-page"><h1>Members</h1></section>',
+  imports: [
+    ReactiveFormsModule,
+    DatePipe,
+    MatButtonModule,
+    MatCardModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatSelectModule,
+  ],
+  templateUrl: './members-page.html',
+  styleUrl: './members-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class MembersPage {}
+export class MembersPage {
+  private readonly api = inject(MembersApi);
+
+  protected readonly roles = ROLES;
+  protected readonly roleDescriptions = ROLE_DESCRIPTIONS;
+  protected readonly members = signal<MemberDto[]>([]);
+  protected readonly invitations = signal<InvitationDto[]>([]);
+  protected readonly loaded = signal(false);
+  protected readonly loadError = signal<string | null>(null);
+  protected readonly sending = signal(false);
+  protected readonly inviteError = signal<string | null>(null);
+  protected readonly inviteNotice = signal<string | null>(null);
+
+  /** Invitations not yet accepted, soonest to expire first. */
+  protected readonly pending = computed(() =>
+    this.invitations()
+      .filter((invitation) => !invitation.acceptedAt)
+      .sort((a, b) => a.expiresAt.localeCompare(b.expiresAt)),
+  );
+  protected readonly sortedMembers = computed(() =>
+    [...this.members()].sort(
+      (a, b) => ROLES.indexOf(a.role) - ROLES.indexOf(b.role) || a.name.localeCompare(b.name),
+    ),
+  );
+
+  protected readonly form = inject(FormBuilder).nonNullable.group({
+    email: ['', [Validators.required, Validators.email, Validators.maxLength(254)]],
+    role: ['coach' as Role, Validators.required],
+  });
+
+  constructor() {
+    this.reload();
+  }
+
+  protected reload(): void {
+    this.loadError.set(null);
+    forkJoin({ members: this.api.listMembers(), invitations: this.api.listInvitations() }).subscribe({
+      next: ({ members, invitations }) => {
+        this.members.set(members);
+        this.invitations.set(invitations);
+        this.loaded.set(true);
+      },
+      error: (error: unknown) => this.loadError.set(problemMessage(error)),
+    });
+  }
+
+  protected isExpired(invitation: InvitationDto): boolean {
+    return new Date(invitation.expiresAt).getTime() < Date.now();
+  }
+
+  protected sendInvitation(): void {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const { email, role } = this.form.getRawValue();
+    const address = email.trim().toLowerCase();
+    this.sending.set(true);
+    this.inviteError.set(null);
+    this.inviteNotice.set(null);
+    this.api.invite(address, role).subscribe({
+      next: (invitation) => {
+        this.sending.set(false);
+        this.invitations.update((list) => [invitation, ...list.filter((i) => i.id !== invitation.id)]);
+        this.inviteNotice.set(`Invitation sent to ${invitation.email} as ${invitation.role}.`);
+        this.form.reset({ email: '', role });
+      },
+      error: (error: unknown) => {
+        this.sending.set(false);
+        const fieldErrors = problemFieldErrors(error);
+        if (fieldErrors['email']) this.form.controls.email.setErrors({ server: fieldErrors['email'] });
+        this.inviteError.set(problemMessage(error));
+      },
+    });
+  }
+}

@@ -1,9 +1,319 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import {
+  DestroyRef,
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  signal,
+  untracked,
+} from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatProgressBarModule } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import type {
+  Phase,
+  Plan,
+  PlayerDto,
+  PlayerMove,
+  PresentPlayer,
+  SessionPlanDto,
+  StationVerdict,
+} from '../../../../shared/types';
+import { problemMessage } from '../../core/http/problem-message';
+import { ActionQueue } from './services/action-queue';
+import { newClientId } from './services/client-id';
+import { adjustRosterLocally } from './services/local-adjust';
+import {
+  formatCountdown,
+  jumpToMinute,
+  pauseClock,
+  readClock,
+  startClock,
+  STOPPED_CLOCK,
+  type ClockState,
+} from './services/phase-clock';
+import { PhaseSignal } from './services/phase-signal';
+import { PitchSideApi } from './services/pitch-side-api';
+import { readSnapshot, saveSnapshot } from './services/plan-snapshot';
+import { ScreenAwake } from './services/screen-awake';
+import { StationCard } from './station-card';
 
-/** Placeholder until the screen is built. */
+/** The running plan at the pitch: countdown, stations, late arrivals and how each station goes. */
 @Component({
   selector: 'cw-pitch-side-page',
-  template: '<section class="cw-page"><h1>Pitch-side</h1></section>',
+  imports: [RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, StationCard],
+  templateUrl: './pitch-side-page.html',
+  styleUrl: './pitch-side-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class PitchSidePage {}
+export class PitchSidePage {
+  /** The plan's id, from the route. */
+  readonly planId = input.required<string>();
+
+  private readonly api = inject(PitchSideApi);
+  protected readonly queue = inject(ActionQueue);
+  private readonly phaseSignal = new PhaseSignal();
+  private readonly screenAwake = new ScreenAwake();
+
+  protected readonly session = signal<SessionPlanDto | null>(null);
+  protected readonly plan = signal<Plan | null>(null);
+  protected readonly roster = signal<PlayerDto[]>([]);
+  protected readonly clock = signal<ClockState>(STOPPED_CLOCK);
+  protected readonly verdicts = signal<Record<string, string>>({});
+  protected readonly moves = signal<PlayerMove[]>([]);
+  protected readonly loadError = signal<string | null>(null);
+  protected readonly fromDevice = signal(false);
+  protected readonly announcement = signal('');
+  protected readonly awake = signal(false);
+  private readonly now = signal(Date.now());
+
+  protected readonly phases = computed(() => this.plan()?.phases ?? []);
+  protected readonly reading = computed(() => readClock(this.clock(), this.phases(), this.now()));
+  protected readonly running = computed(
+    () => this.clock().startedAt !== null && this.clock().pausedAt === null,
+  );
+  protected readonly started = computed(() => this.clock().startedAt !== null);
+  protected readonly currentPhase = computed<Phase | null>(
+    () => this.phases()[this.reading().phaseIndex] ?? null,
+  );
+  protected readonly nextPhase = computed<Phase | null>(
+    () => this.phases()[this.reading().phaseIndex + 1] ?? null,
+  );
+  protected readonly countdown = computed(() => {
+    const phase = this.currentPhase();
+    if (!phase) return '0:00';
+    if (!this.started()) return formatCountdown((phase.endMinute - phase.startMinute) * 60);
+    return formatCountdown(this.reading().secondsLeft);
+  });
+  protected readonly pendingCount = computed(
+    () => this.queue.pending().filter((action) => action.planId === this.planId()).length,
+  );
+
+  /** Names by player id: the roster first, then whatever the plan carries. */
+  protected readonly names = computed(() => {
+    const names: Record<string, string> = {};
+    for (const player of this.roster()) names[player.id] = player.displayName;
+    for (const player of this.plan()?.request.players ?? [])
+      if (player.name) names[player.id] ??= player.name;
+    return names;
+  });
+  protected readonly present = computed(() =>
+    (this.plan()?.request.players ?? [])
+      .map((player) => ({ id: player.id, name: this.names()[player.id] ?? player.id }))
+      .sort((a, b) => a.name.localeCompare(b.name)),
+  );
+  protected readonly absent = computed(() => {
+    const here = new Set((this.plan()?.request.players ?? []).map((player) => player.id));
+    return this.roster()
+      .filter((player) => player.active && !here.has(player.id))
+      .sort((a, b) => a.displayName.localeCompare(b.displayName));
+  });
+
+  /** Who moved in the last re-plan, for the phases still to come, in words. */
+  protected readonly moveLines = computed(() => {
+    const phases = this.phases();
+    const names = this.names();
+    const from = this.reading().phaseIndex;
+    return this.moves()
+      .filter((move) => move.phaseIndex >= from)
+      .map((move) => {
+        const phase = phases[move.phaseIndex];
+        const stationLabel = (id: string | null) => {
+          const index = phase?.stations.findIndex((s) => s.id === id) ?? -1;
+          return index >= 0 ? `station ${index + 1} (${phase.stations[index].title})` : 'another station';
+        };
+        const who = names[move.playerId] ?? move.playerId;
+        const where =
+          move.toStationId === null
+            ? 'leaves'
+            : move.fromStationId === null
+              ? `joins ${stationLabel(move.toStationId)}`
+              : `moves to ${stationLabel(move.toStationId)}`;
+        return {
+          key: `${move.phaseIndex}-${move.playerId}`,
+          text: `${phase?.name ?? 'Later'}: ${who} ${where}`,
+        };
+      });
+  });
+  /** Players who just joined a station of the current phase. */
+  protected readonly arrivalsByStation = computed(() => {
+    const byStation: Record<string, string[]> = {};
+    for (const move of this.moves()) {
+      if (move.phaseIndex !== this.reading().phaseIndex || !move.toStationId) continue;
+      (byStation[move.toStationId] ??= []).push(move.playerId);
+    }
+    return byStation;
+  });
+
+  constructor() {
+    const destroyRef = inject(DestroyRef);
+    effect(() => {
+      const planId = this.planId();
+      untracked(() => this.load(planId));
+    });
+
+    const ticker = setInterval(() => this.now.set(Date.now()), 1000);
+    destroyRef.onDestroy(() => {
+      clearInterval(ticker);
+      this.phaseSignal.close();
+      void this.screenAwake.release();
+    });
+
+    // A gentle signal whenever the running clock crosses into a new phase.
+    let lastPhase = -1;
+    effect(() => {
+      const { phaseIndex, finished } = this.reading();
+      const running = this.running();
+      const marker = finished ? this.phases().length : phaseIndex;
+      if (running && lastPhase !== -1 && marker !== lastPhase) {
+        this.phaseSignal.play();
+        const phase = untracked(this.currentPhase);
+        this.announcement.set(finished ? 'Session finished.' : `Now: ${phase?.name ?? ''}.`);
+      }
+      lastPhase = running ? marker : -1;
+    });
+
+    effect(() => {
+      const session = this.session();
+      const plan = this.plan();
+      if (!session || !plan) return;
+      saveSnapshot(session.id, {
+        session: { ...session, plan },
+        roster: this.roster(),
+        clock: this.clock(),
+        verdicts: this.verdicts(),
+      });
+    });
+
+    this.queue.synced.pipe(takeUntilDestroyed()).subscribe(({ action, change }) => {
+      if (action.planId !== this.planId() || !change?.plan?.phases) return;
+      const stillQueued = this.queue
+        .pending()
+        .some((other) => other.planId === action.planId && other.kind !== 'feedback');
+      if (stillQueued) return;
+      this.plan.set(change.plan);
+      if (action.kind === 'replan') this.moves.set(change.moves);
+    });
+    void this.queue.flush();
+  }
+
+  protected startSession(): void {
+    this.phaseSignal.unlock();
+    this.clock.update((state) => startClock(state, Date.now()));
+    void this.screenAwake.keepOn().then((on) => this.awake.set(on));
+  }
+
+  protected pauseSession(): void {
+    this.clock.update((state) => pauseClock(state, Date.now()));
+  }
+
+  protected goToPhase(index: number): void {
+    const phase = this.phases()[index];
+    if (!phase) return;
+    this.phaseSignal.unlock();
+    this.clock.update((state) => jumpToMinute(state, phase.startMinute, Date.now()));
+    this.announcement.set(`Now: ${phase.name}.`);
+  }
+
+  protected arrivalsOf(stationId: string): string[] {
+    return this.arrivalsByStation()[stationId] ?? [];
+  }
+
+  protected verdictFor(stationId: string): string | null {
+    return this.verdicts()[`${this.reading().phaseIndex}:${stationId}`] ?? null;
+  }
+
+  protected verdictQueued(stationId: string): boolean {
+    const phaseIndex = this.reading().phaseIndex;
+    return this.queue
+      .pending()
+      .some(
+        (action) =>
+          action.planId === this.planId() &&
+          action.kind !== 'replan' &&
+          action.body.stationId === stationId &&
+          action.body.phaseIndex === phaseIndex,
+      );
+  }
+
+  /** Records how a station is going; too easy or too hard also steps the station. */
+  protected judgeStation(stationId: string, verdict: StationVerdict): void {
+    const phaseIndex = this.reading().phaseIndex;
+    this.verdicts.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: verdict }));
+    const body = { phaseIndex, stationId, verdict };
+    void this.queue.enqueue({
+      kind: verdict === 'right' ? 'feedback' : 'progression',
+      clientId: newClientId(),
+      planId: this.planId(),
+      queuedAt: new Date().toISOString(),
+      body,
+    });
+    this.announcement.set(
+      verdict === 'right'
+        ? 'Noted: about right.'
+        : `Noted: ${verdict.replace('-', ' ')}. The station steps ${verdict === 'too-easy' ? 'harder' : 'easier'}.`,
+    );
+  }
+
+  /** One tap: a late arrival joins. */
+  protected addPlayer(player: PlayerDto): void {
+    this.changeRoster({ add: [{ id: player.id, name: player.displayName, goalkeeper: player.goalkeeper }] });
+  }
+
+  /** One tap: an early leaver goes. */
+  protected removePlayer(playerId: string): void {
+    if ((this.plan()?.request.players.length ?? 0) <= 1) return;
+    this.changeRoster({ remove: [playerId] });
+  }
+
+  private changeRoster(change: { add?: PresentPlayer[]; remove?: string[] }): void {
+    const plan = this.plan();
+    if (!plan) return;
+    const fromMinute = this.started() ? Math.floor(this.reading().elapsedSeconds / 60) : 0;
+    const local = adjustRosterLocally(plan, { ...change, fromMinute });
+    this.plan.set(local.plan);
+    this.moves.set(local.moves);
+    const who = change.add?.[0]?.name ?? this.names()[change.remove?.[0] ?? ''] ?? 'A player';
+    this.announcement.set(`${who} ${change.add ? 'joins' : 'leaves'}. Re-planning the rest of the session.`);
+    void this.queue.enqueue({
+      kind: 'replan',
+      clientId: newClientId(),
+      planId: this.planId(),
+      queuedAt: new Date().toISOString(),
+      body: { ...change, fromMinute },
+    });
+  }
+
+  private load(planId: string): void {
+    const snapshot = readSnapshot(planId);
+    if (snapshot) {
+      this.session.set(snapshot.session);
+      this.plan.set(snapshot.session.plan);
+      this.roster.set(snapshot.roster);
+      this.clock.set(snapshot.clock);
+      this.verdicts.set(snapshot.verdicts);
+      this.fromDevice.set(true);
+    }
+    this.api.getPlan(planId).subscribe({
+      next: (session) => {
+        this.loadError.set(null);
+        this.fromDevice.set(false);
+        this.session.set(session);
+        const waiting = this.queue.pendingFor(planId).some((action) => action.kind !== 'feedback');
+        // Changes made offline stay on screen until the server has them.
+        if (!waiting || !snapshot) this.plan.set(session.plan);
+        this.api.listPlayers(session.teamId).subscribe({
+          next: (players) => this.roster.set(players),
+          error: () => undefined,
+        });
+      },
+      error: (error: unknown) => {
+        if (!snapshot) this.loadError.set(problemMessage(error));
+      },
+    });
+  }
+}

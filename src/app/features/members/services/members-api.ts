@@ -1,0 +1,25 @@
+import { HttpClient } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { Observable } from 'rxjs';
+import type { InvitationDto, MemberDto, Role } from '../../../../../shared/types';
+
+/** The club's members and the invitations still open. Lead only. */
+@Injectable({ providedIn: 'root' })
+export class MembersApi {
+  private readonly http = inject(HttpClient);
+
+  /** GET /api/members: everyone in the caller's club with their role. */
+  listMembers(): Observable<MemberDto[]> {
+    return this.http.get<MemberDto[]>('/api/members');
+  }
+
+  /** GET /api/invitations: invitations sent by the club, accepted or not. */
+  listInvitations(): Observable<InvitationDto[]> {
+    return this.http.get<InvitationDto[]>('/api/invitations');
+  }
+
+  /** POST /api/invitations: e-mails a single-use link that joins the club with the role. */
+  invite(email: string, role: Role): Observable<InvitationDto> {
+    return this.http.post<InvitationDto>('/api/invitations', { email, role });
+  }
+}

@@ -1,0 +1,135 @@
+import { HttpErrorResponse } from '@angular/common/http';
+import { DestroyRef, inject, Injectable, signal } from '@angular/core';
+import { firstValueFrom, Subject } from 'rxjs';
+import { problemMessage } from '../../../core/http/problem-message';
+import { PitchSideApi, type PlanChange, type ReplanBody, type VerdictBody } from './pitch-side-api';
+
+/** One pitch-side action waiting to reach the server. */
+export type QueuedAction =
+  | { kind: 'replan'; clientId: string; planId: string; queuedAt: string; body: ReplanBody }
+  | { kind: 'progression'; clientId: string; planId: string; queuedAt: string; body: VerdictBody }
+  | { kind: 'feedback'; clientId: string; planId: string; queuedAt: string; body: VerdictBody };
+
+/** What the server made of a synced action. */
+export interface SyncedAction {
+  action: QueuedAction;
+  change: PlanChange | null;
+}
+
+const STORAGE_KEY = 'conewise.pitch-side.queue';
+
+/**
+ * Pitch-side actions go through this queue, online or not: each is kept in localStorage with its
+ * client id until the server confirms it, so a dropped connection loses nothing, and the server's
+ * dedupe by client id means a replay after a lost answer is stored once.
+ */
+@Injectable({ providedIn: 'root' })
+export class ActionQueue {
+  private readonly api = inject(PitchSideApi);
+  private readonly syncedActions = new Subject<SyncedAction>();
+  private flushing = false;
+
+  /** Actions not yet confirmed by the server, oldest first. */
+  readonly pending = signal<QueuedAction[]>(readStored());
+  /** Whether the browser believes it has a network. */
+  readonly online = signal(typeof navigator === 'undefined' ? true : navigator.onLine);
+  /** Actions the server refused for good (e.g. the plan was deleted), with its reason. */
+  readonly refused = signal<{ action: QueuedAction; message: string }[]>([]);
+  /** Emits each action once the server has it. */
+  readonly synced = this.syncedActions.asObservable();
+
+  constructor() {
+    const goOnline = () => {
+      this.online.set(true);
+      void this.flush();
+    };
+    const goOffline = () => this.online.set(false);
+    globalThis.addEventListener?.('online', goOnline);
+    globalThis.addEventListener?.('offline', goOffline);
+    inject(DestroyRef).onDestroy(() => {
+      globalThis.removeEventListener?.('online', goOnline);
+      globalThis.removeEventListener?.('offline', goOffline);
+    });
+  }
+
+  /** Pending actions of one plan. */
+  pendingFor(planId: string): QueuedAction[] {
+    return this.pending().filter((action) => action.planId === planId);
+  }
+
+  /** Keeps the action, then tries to send everything queued. */
+  enqueue(action: QueuedAction): Promise<void> {
+    this.pending.update((list) => [...list, action]);
+    this.persist();
+    return this.flush();
+  }
+
+  /** Sends queued actions in order; stops at the first one the network or server cannot take now. */
+  async flush(): Promise<void> {
+    if (this.flushing) return;
+    this.flushing = true;
+    try {
+      while (this.pending().length > 0) {
+        const action = this.pending()[0];
+        try {
+          const change = await this.send(action);
+          this.online.set(true);
+          this.remove(action);
+          this.syncedActions.next({ action, change });
+        } catch (error) {
+          if (isRetryable(error)) {
+            if (error instanceof HttpErrorResponse && error.status === 0) this.online.set(false);
+            return;
+          }
+          this.remove(action);
+          this.refused.update((list) => [...list, { action, message: problemMessage(error) }]);
+        }
+      }
+    } finally {
+      this.flushing = false;
+    }
+  }
+
+  private send(action: QueuedAction): Promise<PlanChange | null> {
+    const clientId = action.clientId;
+    switch (action.kind) {
+      case 'replan':
+        return firstValueFrom(this.api.replan(action.planId, { ...action.body, clientId }));
+      case 'progression':
+        return firstValueFrom(this.api.progression(action.planId, { ...action.body, clientId }));
+      case 'feedback':
+        return firstValueFrom(this.api.feedback(action.planId, { ...action.body, clientId })).then(
+          () => null,
+        );
+    }
+  }
+
+  private remove(action: QueuedAction): void {
+    this.pending.update((list) => list.filter((item) => item.clientId !== action.clientId));
+    this.persist();
+  }
+
+  private persist(): void {
+    try {
+      localStorage.setItem(STORAGE_KEY, JSON.stringify(this.pending()));
+    } catch {
+      // Storage full or blocked: the queue still lives in memory until the page closes.
+    }
+  }
+}
+
+/** No network, a timeout, a busy or failing server: try again later. 4xx answers are final. */
+function isRetryable(error: unknown): boolean {
+  if (!(error instanceof HttpErrorResponse)) return false;
+  return error.status === 0 || error.status === 408 || error.status === 429 || error.status >= 500;
+}
+
+function readStored(): QueuedAction[] {
+  try {
+    const raw = globalThis.localStorage?.getItem(STORAGE_KEY);
+    const parsed: unknown = raw ? JSON.parse(raw) : [];
+    return Array.isArray(parsed) ? (parsed as QueuedAction[]).filter((a) => a && a.clientId && a.planId) : [];
+  } catch {
+    return [];
+  }
+}

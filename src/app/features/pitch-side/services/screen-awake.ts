@@ -1,0 +1,46 @@
+interface WakeLockSentinelLike {
+  released: boolean;
+  release(): Promise<void>;
+}
+
+/** Keeps the phone's screen on while the session runs, where the browser offers Wake Lock. */
+export class ScreenAwake {
+  private sentinel: WakeLockSentinelLike | null = null;
+  private wanted = false;
+  private readonly reacquire = () => {
+    if (this.wanted && document.visibilityState === 'visible') void this.acquire();
+  };
+
+  /** Whether this browser can keep the screen awake at all. */
+  get supported(): boolean {
+    return typeof navigator !== 'undefined' && 'wakeLock' in navigator;
+  }
+
+  async keepOn(): Promise<boolean> {
+    this.wanted = true;
+    document.addEventListener('visibilitychange', this.reacquire);
+    return this.acquire();
+  }
+
+  async release(): Promise<void> {
+    this.wanted = false;
+    document.removeEventListener('visibilitychange', this.reacquire);
+    const sentinel = this.sentinel;
+    this.sentinel = null;
+    if (sentinel && !sentinel.released) await sentinel.release().catch(() => undefined);
+  }
+
+  private async acquire(): Promise<boolean> {
+    if (!this.supported) return false;
+    try {
+      const lock = (
+        navigator as unknown as { wakeLock: { request(type: 'screen'): Promise<WakeLockSentinelLike> } }
+      ).wakeLock;
+      this.sentinel = await lock.request('screen');
+      return true;
+    } catch {
+      // Refused (battery saver, hidden tab): the session still runs, the screen may dim.
+      return false;
+    }
+  }
+}
