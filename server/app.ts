@@ -1,0 +1,85 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pino, type Logger } from 'pino';
+import { pinoHttp } from 'pino-http';
+import type { DataSource } from 'typeorm';
+import type { AppConfig } from './config';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { createRequireAuth } from './middleware/require-auth';
+import { createApiRouter } from './routes';
+import { outboxMailQueue, type MailQueue } from './services/mail-queue';
+
+export interface AppDeps {
+  dataSource: DataSource;
+  config: AppConfig;
+  logger?: Logger;
+  /** Defaults to queueing rows in the outbox table. */
+  mail?: MailQueue;
+}
+
+/** JSON bodies above this answer 413. */
+export const JSON_BODY_LIMIT = '256kb';
+
+/** The Express app: API under /api, the built client everywhere else. */
+export function createApp(deps: AppDeps): Express {
+  const logger = deps.logger ?? pino({ level: deps.config.logLevel });
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        // Everything from this origin only: Conewise must work on a closed network.
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          // Angular writes component styles into <style> tags.
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          workerSrc: ["'self'"],
+          manifestSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          frameAncestors: ["'none'"],
+        },
+      },
+    }),
+  );
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use('/api', express.json({ limit: JSON_BODY_LIMIT, type: ['application/json', 'application/*+json'] }));
+
+  const requireAuth = createRequireAuth(deps.dataSource, deps.config);
+  app.use(
+    '/api',
+    createApiRouter({
+      dataSource: deps.dataSource,
+      config: deps.config,
+      logger,
+      requireAuth,
+      mail: deps.mail ?? outboxMailQueue,
+    }),
+  );
+  app.use('/api', apiNotFound);
+
+  const staticDir = deps.config.staticDir;
+  if (staticDir && existsSync(join(staticDir, 'index.html'))) {
+    app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
+    // History fallback: client routes such as /teams/42 load the app shell.
+    app.get(/^(?!\/api(\/|$)).*/, (req, res, next) => {
+      if (!req.accepts('html')) return next();
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(join(staticDir, 'index.html'));
+    });
+  }
+
+  app.use(apiNotFound);
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,82 @@
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+
+/** The project root (one level above server/). */
+export const PROJECT_ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..');
+/** Git-ignored folder for local state: the private cluster, the generated JWT secret, caught mail. */
+export const DATA_DIR = process.env['CONEWISE_DATA_DIR'] ?? join(PROJECT_ROOT, '.data');
+/** Where `ng build` writes the browser bundle. */
+export const CLIENT_DIST = join(PROJECT_ROOT, 'dist', 'conewise', 'browser');
+
+export interface AppConfig {
+  /** Reported by GET /api/health. */
+  version: string;
+  /** HS256 signing secret for session tokens. */
+  jwtSecret: string;
+  /** Token lifetime in seconds. */
+  jwtExpiresInSeconds: number;
+  /** Requests per window and IP on /api/auth/* before a 429. */
+  authRateLimit: { windowMs: number; max: number };
+  /** Base URL put into invitation links, e.g. http://127.0.0.1:4300. */
+  publicUrl: string;
+  /** Folder of the built Angular app; null serves no client. */
+  staticDir: string | null;
+  /** Invitation tokens expire after this many hours. */
+  invitationTtlHours: number;
+  /** pino level; 'silent' in tests. */
+  logLevel: string;
+}
+
+function packageVersion(): string {
+  try {
+    const pkg = JSON.parse(readFileSync(join(PROJECT_ROOT, 'package.json'), 'utf8')) as { version?: string };
+    return pkg.version ?? '0.0.0';
+  } catch {
+    return '0.0.0';
+  }
+}
+
+/**
+ * The JWT secret: JWT_SECRET from the environment, else one generated on first use and kept in
+ * the data folder, so restarts and several instances on one machine accept each other's tokens.
+ */
+export function loadJwtSecret(dataDir = DATA_DIR): string {
+  const fromEnv = process.env['JWT_SECRET'];
+  if (fromEnv && fromEnv.length >= 16) return fromEnv;
+  const file = join(dataDir, 'jwt-secret');
+  if (existsSync(file)) {
+    const kept = readFileSync(file, 'utf8').trim();
+    if (kept.length >= 32) return kept;
+  }
+  mkdirSync(dirname(file), { recursive: true });
+  const secret = randomBytes(48).toString('base64url');
+  writeFileSync(file, secret + '\n', { mode: 0o600 });
+  return secret;
+}
+
+function intFromEnv(name: string, fallback: number): number {
+  const raw = process.env[name];
+  const value = raw === undefined ? NaN : Number(raw);
+  return Number.isInteger(value) && value > 0 ? value : fallback;
+}
+
+/** Configuration from the environment with the defaults `npm start` uses. */
+export function loadConfig(overrides: Partial<AppConfig> = {}): AppConfig {
+  const port = intFromEnv('PORT', 4300);
+  return {
+    version: packageVersion(),
+    jwtSecret: overrides.jwtSecret ?? loadJwtSecret(),
+    jwtExpiresInSeconds: intFromEnv('JWT_EXPIRES_IN_SECONDS', 12 * 3600),
+    authRateLimit: {
+      windowMs: intFromEnv('AUTH_RATE_WINDOW_MS', 15 * 60_000),
+      max: intFromEnv('AUTH_RATE_MAX', 100),
+    },
+    publicUrl: process.env['PUBLIC_URL'] ?? `http://127.0.0.1:${port}`,
+    staticDir: existsSync(CLIENT_DIST) ? CLIENT_DIST : null,
+    invitationTtlHours: intFromEnv('INVITATION_TTL_HOURS', 72),
+    logLevel: process.env['LOG_LEVEL'] ?? 'info',
+    ...overrides,
+  };
+}

@@ -1,0 +1,43 @@
+import { Attendance } from './attendance';
+import { Club } from './club';
+import { Feedback } from './feedback';
+import { Invitation } from './invitation';
+import { KitBag } from './kit-bag';
+import { Membership } from './membership';
+import { OutboxMessage } from './outbox-message';
+import { Player } from './player';
+import { RuleSet } from './rule-set';
+import { SessionPlan } from './session-plan';
+import { Team } from './team';
+import { User } from './user';
+
+export {
+  Attendance,
+  Club,
+  Feedback,
+  Invitation,
+  KitBag,
+  Membership,
+  OutboxMessage,
+  Player,
+  RuleSet,
+  SessionPlan,
+  Team,
+  User,
+};
+
+/** Every entity, listed explicitly for the DataSource (no globs under ESM). */
+export const ENTITIES = [
+  Club,
+  User,
+  Membership,
+  Team,
+  Player,
+  KitBag,
+  RuleSet,
+  SessionPlan,
+  Attendance,
+  Feedback,
+  Invitation,
+  OutboxMessage,
+];

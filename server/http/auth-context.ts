@@ -1,0 +1,28 @@
+import type { Request } from 'express';
+import type { Role } from '../../shared/types/api';
+import { unauthorized } from './problem';
+
+/** Who is calling, loaded from the database on every request (nothing kept in memory). */
+export interface AuthContext {
+  userId: string;
+  clubId: string;
+  clubName: string;
+  role: Role;
+  name: string;
+  email: string;
+}
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface Request {
+      auth?: AuthContext;
+    }
+  }
+}
+
+/** The signed-in caller; throws 401 when requireAuth did not run. */
+export function authOf(req: Request): AuthContext {
+  if (!req.auth) throw unauthorized();
+  return req.auth;
+}

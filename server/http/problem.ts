@@ -1,0 +1,40 @@
+import type { ProblemDto } from '../../shared/types/api';
+
+export type FieldError = { field: string; message: string };
+
+/** An error that becomes an RFC 9457 problem response. Services throw these. */
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly title: string,
+    readonly detail?: string,
+    readonly errors?: FieldError[],
+    readonly type = `/problems/${slug(title)}`,
+  ) {
+    super(detail ?? title);
+  }
+
+  toProblem(instance?: string): ProblemDto {
+    const problem: ProblemDto = { type: this.type, title: this.title, status: this.status };
+    if (this.detail) problem.detail = this.detail;
+    if (instance) problem.instance = instance;
+    if (this.errors?.length) problem.errors = this.errors;
+    return problem;
+  }
+}
+
+function slug(text: string): string {
+  return text
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '');
+}
+
+export const badRequest = (detail: string, errors?: FieldError[]) =>
+  new HttpError(400, 'Invalid request', detail, errors, '/problems/validation');
+export const unauthorized = (detail = 'Sign in to continue.') => new HttpError(401, 'Unauthorized', detail);
+export const forbidden = (detail = 'Your role does not allow this.') =>
+  new HttpError(403, 'Forbidden', detail);
+export const notFound = (what = 'resource') => new HttpError(404, 'Not found', `No such ${what}.`);
+export const conflict = (detail: string) => new HttpError(409, 'Conflict', detail);
+export const payloadTooLarge = (detail: string) => new HttpError(413, 'Payload too large', detail);

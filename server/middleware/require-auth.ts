@@ -1,0 +1,74 @@
+import type { RequestHandler } from 'express';
+import { Passport } from 'passport';
+import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
+import type { DataSource } from 'typeorm';
+import type { AppConfig } from '../config';
+import { Membership } from '../entities/membership';
+import type { AuthContext } from '../http/auth-context';
+import { HttpError, unauthorized } from '../http/problem';
+
+/** Claims Conewise puts in its tokens. */
+export interface TokenClaims {
+  sub: string;
+  club: string;
+}
+
+/** Only HS256 is accepted: tokens signed otherwise, or with `alg: none`, are refused. */
+export const JWT_ALGORITHM = 'HS256' as const;
+
+/** Builds the requireAuth middleware: a valid bearer token of a current member, else 401. */
+export function createRequireAuth(dataSource: DataSource, config: AppConfig): RequestHandler {
+  const passport = new Passport();
+  passport.use(
+    new JwtStrategy(
+      {
+        jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+        secretOrKey: config.jwtSecret,
+        algorithms: [JWT_ALGORITHM],
+        ignoreExpiration: false,
+      },
+      (claims: Partial<TokenClaims>, done: (error: unknown, user?: AuthContext | false) => void) => {
+        if (typeof claims.sub !== 'string' || typeof claims.club !== 'string') return done(null, false);
+        loadAuthContext(dataSource, claims.sub, claims.club).then(
+          (auth) => done(null, auth ?? false),
+          (error) => done(error),
+        );
+      },
+    ),
+  );
+  const authenticate = passport.initialize();
+  return (req, res, next) => {
+    authenticate(req, res, () => {
+      passport.authenticate('jwt', { session: false }, (error: unknown, auth: AuthContext | false) => {
+        if (error) return next(error instanceof HttpError ? error : error);
+        if (!auth) return next(unauthorized('A valid sign-in token is required.'));
+        req.auth = auth;
+        next();
+      })(req, res, next);
+    });
+  };
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** The caller's membership, or null when the user or membership no longer exists. */
+export async function loadAuthContext(
+  dataSource: DataSource,
+  userId: string,
+  clubId: string,
+): Promise<AuthContext | null> {
+  if (!UUID.test(userId) || !UUID.test(clubId)) return null;
+  const membership = await dataSource.getRepository(Membership).findOne({
+    where: { userId, clubId },
+    relations: { user: true, club: true },
+  });
+  if (!membership?.user || !membership.club) return null;
+  return {
+    userId,
+    clubId,
+    clubName: membership.club.name,
+    role: membership.role,
+    name: membership.user.name,
+    email: membership.user.email,
+  };
+}

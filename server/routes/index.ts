@@ -1,0 +1,24 @@
+import { Router } from 'express';
+import type { ApiDeps } from './api-deps';
+import { authRouter } from './auth';
+import { healthRouter } from './health';
+import { invitationsRouter } from './invitations';
+import { kitRouter } from './kit';
+import { membersRouter } from './members';
+import { playersRouter } from './players';
+import { teamsRouter } from './teams';
+
+export type { ApiDeps } from './api-deps';
+
+/** Every API router, mounted under /api. Add one line per resource. */
+export function createApiRouter(deps: ApiDeps): Router {
+  const api = Router();
+  api.use(healthRouter(deps));
+  api.use(authRouter(deps));
+  api.use(invitationsRouter(deps));
+  api.use(membersRouter(deps));
+  api.use(teamsRouter(deps));
+  api.use(playersRouter(deps));
+  api.use(kitRouter(deps));
+  return api;
+}

@@ -1,0 +1,44 @@
+import { Router } from 'express';
+import { requireRole } from '../middleware/require-role';
+import { validate } from '../middleware/validate';
+import { InvitationAcceptService, MemberService } from '../services/member-service';
+import type { ApiDeps } from './api-deps';
+import { scopeOf } from './scoped';
+
+/** /invitations: the lead invites by e-mail; the invitee looks the link up and accepts it. */
+export function invitationsRouter({ dataSource, config, mail, requireAuth }: ApiDeps): Router {
+  const router = Router();
+  const members = (req: Parameters<typeof scopeOf>[0]) =>
+    new MemberService(scopeOf(req, dataSource), config, mail);
+  const accepting = new InvitationAcceptService(dataSource, config);
+
+  router.get('/invitations/lookup', validate({ query: 'invitation-lookup-query' }), async (req, res) => {
+    res.json(await accepting.lookup((req.query as { token: string }).token));
+  });
+  router.post('/invitations/accept', validate({ body: 'invitation-accept' }), async (req, res) => {
+    res.status(201).json(await accepting.accept(req.body));
+  });
+  router.get('/invitations', requireAuth, requireRole('lead'), async (req, res) => {
+    res.json(await members(req).invitations());
+  });
+  router.post(
+    '/invitations',
+    requireAuth,
+    requireRole('lead'),
+    validate({ body: 'invitation-create' }),
+    async (req, res) => {
+      res.status(201).json(await members(req).invite(req.body));
+    },
+  );
+  router.delete(
+    '/invitations/:id',
+    requireAuth,
+    requireRole('lead'),
+    validate({ params: 'id-param' }),
+    async (req, res) => {
+      await members(req).revoke(req.params['id'] as string);
+      res.status(204).end();
+    },
+  );
+  return router;
+}

@@ -1,0 +1,63 @@
+import { Router } from 'express';
+import multer from 'multer';
+import { validate } from '../middleware/validate';
+import { PlayerService } from '../services/player-service';
+import { RosterImportService } from '../services/roster-import-service';
+import type { ApiDeps } from './api-deps';
+import { scopeOf } from './scoped';
+
+/** CSV uploads above this answer 413. */
+export const CSV_UPLOAD_LIMIT_BYTES = 1024 * 1024;
+
+/** /teams/:id/players, /players/:id and the CSV roster import. */
+export function playersRouter({ dataSource, config, requireAuth }: ApiDeps): Router {
+  const router = Router();
+  const id = validate({ params: 'id-param' });
+  const players = (req: Parameters<typeof scopeOf>[0]) => new PlayerService(scopeOf(req, dataSource));
+  const imports = (req: Parameters<typeof scopeOf>[0]) =>
+    new RosterImportService(scopeOf(req, dataSource), config.jwtSecret);
+  const upload = multer({
+    storage: multer.memoryStorage(),
+    limits: { fileSize: CSV_UPLOAD_LIMIT_BYTES, files: 1, fields: 10 },
+  });
+
+  router.get(
+    '/teams/:id/players',
+    requireAuth,
+    id,
+    validate({ query: 'player-list-query' }),
+    async (req, res) => {
+      const includeInactive = (req.query as { includeInactive?: boolean }).includeInactive === true;
+      res.json(await players(req).list(req.params['id'] as string, includeInactive));
+    },
+  );
+  router.post(
+    '/teams/:id/players',
+    requireAuth,
+    id,
+    validate({ body: 'player-create' }),
+    async (req, res) => {
+      res.status(201).json(await players(req).create(req.params['id'] as string, req.body));
+    },
+  );
+  router.post('/teams/:id/players/import', requireAuth, id, upload.single('file'), async (req, res) => {
+    res.json(await imports(req).preview(req.params['id'] as string, req.file?.buffer));
+  });
+  router.post(
+    '/teams/:id/players/import/commit',
+    requireAuth,
+    id,
+    validate({ body: 'player-import-commit' }),
+    async (req, res) => {
+      res.status(201).json(await imports(req).commit(req.params['id'] as string, req.body));
+    },
+  );
+  router.patch('/players/:id', requireAuth, id, validate({ body: 'player-update' }), async (req, res) => {
+    res.json(await players(req).update(req.params['id'] as string, req.body));
+  });
+  router.delete('/players/:id', requireAuth, id, async (req, res) => {
+    await players(req).remove(req.params['id'] as string);
+    res.status(204).end();
+  });
+  return router;
+}

@@ -1,0 +1,92 @@
+import type { EntityManager, EntityTarget, FindOptionsWhere, ObjectLiteral } from 'typeorm';
+import { Player } from '../entities/player';
+import { RuleSet } from '../entities/rule-set';
+import { SessionPlan } from '../entities/session-plan';
+import { Team } from '../entities/team';
+import type { AuthContext } from '../http/auth-context';
+import { forbidden, notFound } from '../http/problem';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/**
+ * The one place that ties data to the caller's club. Every service loads club-owned rows by
+ * id through here, so another club's id answers 404 and never its data.
+ */
+export class ClubScope {
+  constructor(
+    readonly manager: EntityManager,
+    readonly auth: AuthContext,
+  ) {}
+
+  get clubId(): string {
+    return this.auth.clubId;
+  }
+
+  /** A where-clause limited to the caller's club. */
+  where<T extends { clubId: string }>(extra: FindOptionsWhere<T> = {}): FindOptionsWhere<T> {
+    return { ...extra, clubId: this.clubId } as FindOptionsWhere<T>;
+  }
+
+  /** A club-owned row by id, or 404 (also for ids that are not uuids). */
+  async byId<T extends ObjectLiteral & { clubId: string }>(
+    entity: EntityTarget<T>,
+    id: string,
+    what: string,
+  ): Promise<T> {
+    if (!UUID.test(id)) throw notFound(what);
+    const row = await this.manager
+      .getRepository(entity)
+      .findOne({ where: this.where<T>({ id } as unknown as FindOptionsWhere<T>) });
+    if (!row) throw notFound(what);
+    return row;
+  }
+
+  team(id: string): Promise<Team> {
+    return this.byId(Team, id, 'team');
+  }
+
+  player(id: string): Promise<Player> {
+    return this.byId(Player, id, 'player');
+  }
+
+  plan(id: string): Promise<SessionPlan> {
+    return this.byId(SessionPlan, id, 'plan');
+  }
+
+  ruleSet(id: string): Promise<RuleSet> {
+    return this.byId(RuleSet, id, 'rule set');
+  }
+
+  /** Whether the caller is attached to the team as coach or assistant. */
+  async isAttached(teamId: string): Promise<boolean> {
+    const rows: unknown[] = await this.manager.query(
+      'SELECT 1 FROM team_coach WHERE "teamId" = $1 AND "userId" = $2',
+      [teamId, this.auth.userId],
+    );
+    return rows.length > 0;
+  }
+
+  /** Lead: every team. Coach: the teams they are attached to. Assistant: none. */
+  async canManage(team: Team): Promise<boolean> {
+    if (this.auth.role === 'lead') return true;
+    if (this.auth.role === 'coach') return this.isAttached(team.id);
+    return false;
+  }
+
+  /** A team the caller may change (squad, kit, plans), else 404 / 403. */
+  async teamToManage(id: string): Promise<Team> {
+    const team = await this.team(id);
+    if (!(await this.canManage(team)))
+      throw forbidden('Only the club lead and the team’s coaches can change this team.');
+    return team;
+  }
+
+  /** Lead and coaches: any team of the club; assistants: the teams they are attached to. */
+  async teamToRead(id: string): Promise<Team> {
+    const team = await this.team(id);
+    if (this.auth.role === 'assistant' && !(await this.isAttached(team.id))) {
+      throw forbidden('Assistants see the teams they help with.');
+    }
+    return team;
+  }
+}

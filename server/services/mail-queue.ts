@@ -1,0 +1,41 @@
+import type { EntityManager } from 'typeorm';
+import { OutboxMessage, type OutboxAttachment } from '../entities/outbox-message';
+
+/** A message to send later through the outbox. */
+export interface QueuedMail {
+  clubId: string | null;
+  kind: string;
+  recipients: string[];
+  subject: string;
+  text: string;
+  html?: string;
+  attachments?: OutboxAttachment[];
+}
+
+/**
+ * The small interface routes use to send e-mail. Messages are queued inside the caller's
+ * transaction, so an invitation and its e-mail are stored together or not at all.
+ */
+export interface MailQueue {
+  enqueue(manager: EntityManager, mail: QueuedMail): Promise<string>;
+}
+
+/** Writes a pending outbox row; the outbox sender delivers it with retries. */
+export const outboxMailQueue: MailQueue = {
+  async enqueue(manager, mail) {
+    const row = manager.getRepository(OutboxMessage).create({
+      clubId: mail.clubId,
+      kind: mail.kind,
+      recipients: mail.recipients,
+      subject: mail.subject,
+      textBody: mail.text,
+      htmlBody: mail.html ?? null,
+      attachments: mail.attachments ?? [],
+      status: 'pending',
+      attempts: 0,
+      nextAttemptAt: new Date(),
+    });
+    const saved = await manager.getRepository(OutboxMessage).save(row);
+    return saved.id;
+  },
+};

@@ -1,0 +1,216 @@
+import { createHash, randomBytes } from 'node:crypto';
+import { IsNull, MoreThan, type DataSource } from 'typeorm';
+import type { AuthResponse, InvitationDto, MemberDto, Role } from '../../shared/types/api';
+import type { AppConfig } from '../config';
+import { Club } from '../entities/club';
+import { Invitation } from '../entities/invitation';
+import { Membership } from '../entities/membership';
+import { User } from '../entities/user';
+import { badRequest, conflict, notFound } from '../http/problem';
+import { AuthService, emailTaken, hashPassword, normaliseEmail } from './auth-service';
+import type { ClubScope } from './club-scope';
+import type { MailQueue } from './mail-queue';
+
+export function hashInvitationToken(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}
+
+function invitationDto(invitation: Invitation): InvitationDto {
+  return {
+    id: invitation.id,
+    email: invitation.email,
+    role: invitation.role,
+    expiresAt: invitation.expiresAt.toISOString(),
+    acceptedAt: invitation.acceptedAt ? invitation.acceptedAt.toISOString() : null,
+  };
+}
+
+/** The invitation e-mail: a link to the client's join page with the single-use token. */
+export function invitationMail(
+  config: AppConfig,
+  clubName: string,
+  inviter: string,
+  role: Role,
+  token: string,
+) {
+  const link = `${config.publicUrl.replace(/\/$/, '')}/join?token=${encodeURIComponent(token)}`;
+  return {
+    subject: `${inviter} invited you to ${clubName} on Conewise`,
+    text: [
+      `${inviter} invited you to join ${clubName} on Conewise as ${role === 'assistant' ? 'an' : 'a'} ${role}.`,
+      '',
+      `Choose your name and password here: ${link}`,
+      '',
+      `The link works once and expires in ${config.invitationTtlHours} hours.`,
+      'If you were not expecting this, you can ignore this e-mail.',
+    ].join('\n'),
+    link,
+  };
+}
+
+/** Members of the caller's club and invitations to it (lead only, enforced in the router). */
+export class MemberService {
+  constructor(
+    private readonly scope: ClubScope,
+    private readonly config: AppConfig,
+    private readonly mail: MailQueue,
+  ) {}
+
+  async list(): Promise<MemberDto[]> {
+    const memberships = await this.scope.manager.getRepository(Membership).find({
+      where: this.scope.where<Membership>(),
+      relations: { user: true },
+    });
+    return memberships
+      .filter((m) => m.user)
+      .map((m) => ({ userId: m.userId, name: m.user!.name, email: m.user!.email, role: m.role }))
+      .sort((a, b) => a.name.localeCompare(b.name));
+  }
+
+  private async membership(userId: string): Promise<Membership> {
+    return this.scope.byId(Membership, userId, 'member').catch(async () => {
+      // Members are addressed by user id, not by membership id.
+      const row = await this.scope.manager
+        .getRepository(Membership)
+        .findOneBy({ clubId: this.scope.clubId, userId });
+      if (!row) throw notFound('member');
+      return row;
+    });
+  }
+
+  private async leadCount(): Promise<number> {
+    return this.scope.manager.getRepository(Membership).countBy({ clubId: this.scope.clubId, role: 'lead' });
+  }
+
+  async changeRole(userId: string, role: Role): Promise<MemberDto> {
+    const membership = await this.membership(userId);
+    if (membership.role === 'lead' && role !== 'lead' && (await this.leadCount()) <= 1) {
+      throw conflict('The club needs at least one lead. Make someone else lead first.');
+    }
+    membership.role = role;
+    await this.scope.manager.getRepository(Membership).save(membership);
+    const [dto] = (await this.list()).filter((m) => m.userId === userId);
+    return dto!;
+  }
+
+  async remove(userId: string): Promise<void> {
+    const membership = await this.membership(userId);
+    if (membership.userId === this.scope.auth.userId) throw conflict('You cannot remove yourself.');
+    if (membership.role === 'lead' && (await this.leadCount()) <= 1)
+      throw conflict('The club needs at least one lead.');
+    // A user belongs to one club, so leaving it removes the account; their plans stay.
+    await this.scope.manager.getRepository(User).delete({ id: membership.userId });
+  }
+
+  async invitations(): Promise<InvitationDto[]> {
+    const rows = await this.scope.manager
+      .getRepository(Invitation)
+      .find({ where: this.scope.where<Invitation>(), order: { createdAt: 'DESC' } });
+    return rows.map(invitationDto);
+  }
+
+  async invite(input: { email: string; role: Role; teamId?: string }): Promise<InvitationDto> {
+    const email = normaliseEmail(input.email);
+    if (input.teamId) await this.scope.team(input.teamId);
+    return this.scope.manager.transaction(async (manager) => {
+      if (await manager.getRepository(User).existsBy({ email })) throw emailTaken();
+      const token = randomBytes(32).toString('base64url');
+      const invitation = await manager.getRepository(Invitation).save({
+        clubId: this.scope.clubId,
+        email,
+        role: input.role,
+        teamId: input.teamId ?? null,
+        tokenHash: hashInvitationToken(token),
+        expiresAt: new Date(Date.now() + this.config.invitationTtlHours * 3600_000),
+        acceptedAt: null,
+        invitedById: this.scope.auth.userId,
+      });
+      const message = invitationMail(
+        this.config,
+        this.scope.auth.clubName,
+        this.scope.auth.name,
+        input.role,
+        token,
+      );
+      await this.mail.enqueue(manager, {
+        clubId: this.scope.clubId,
+        kind: 'invitation',
+        recipients: [email],
+        subject: message.subject,
+        text: message.text,
+      });
+      return invitationDto(invitation);
+    });
+  }
+
+  async revoke(id: string): Promise<void> {
+    const invitation = await this.scope.byId(Invitation, id, 'invitation');
+    await this.scope.manager.getRepository(Invitation).delete({ id: invitation.id });
+  }
+}
+
+const invalidToken = () =>
+  badRequest('This invitation link is not valid: it may have expired or been used already.', [
+    { field: 'token', message: 'has expired, was used already or is unknown' },
+  ]);
+
+/** The public side of invitations: look one up by token, accept it. */
+export class InvitationAcceptService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly config: AppConfig,
+  ) {}
+
+  async lookup(token: string): Promise<{ email: string; role: Role; clubName: string; expiresAt: string }> {
+    const invitation = await this.dataSource.getRepository(Invitation).findOne({
+      where: { tokenHash: hashInvitationToken(token), acceptedAt: IsNull(), expiresAt: MoreThan(new Date()) },
+      relations: { club: true },
+    });
+    if (!invitation?.club) throw invalidToken();
+    return {
+      email: invitation.email,
+      role: invitation.role,
+      clubName: invitation.club.name,
+      expiresAt: invitation.expiresAt.toISOString(),
+    };
+  }
+
+  async accept(input: { token: string; name: string; password: string }): Promise<AuthResponse> {
+    const passwordHash = await hashPassword(input.password);
+    const auth = await this.dataSource.transaction(async (manager) => {
+      // Claiming the row and marking it used in one statement keeps the token single-use.
+      const claimed: Invitation[] = await manager.query(
+        `UPDATE invitation SET "acceptedAt" = now()
+         WHERE "tokenHash" = $1 AND "acceptedAt" IS NULL AND "expiresAt" > now()
+         RETURNING id, "clubId", email, role, "teamId"`,
+        [hashInvitationToken(input.token)],
+      );
+      const invitation =
+        (claimed as unknown as [Invitation[], number])[0]?.[0] ?? (claimed[0] as Invitation | undefined);
+      if (!invitation || !invitation.clubId) throw invalidToken();
+      if (await manager.getRepository(User).existsBy({ email: invitation.email })) throw emailTaken();
+      const user = await manager
+        .getRepository(User)
+        .save({ email: invitation.email, name: input.name.trim(), passwordHash });
+      await manager
+        .getRepository(Membership)
+        .save({ clubId: invitation.clubId, userId: user.id, role: invitation.role });
+      if (invitation.teamId) {
+        await manager.query(
+          'INSERT INTO team_coach ("teamId", "userId") SELECT id, $2 FROM team WHERE id = $1 AND "clubId" = $3',
+          [invitation.teamId, user.id, invitation.clubId],
+        );
+      }
+      const club = await manager.getRepository(Club).findOneByOrFail({ id: invitation.clubId });
+      return {
+        userId: user.id,
+        clubId: club.id,
+        clubName: club.name,
+        role: invitation.role,
+        name: user.name,
+        email: user.email,
+      };
+    });
+    return new AuthService(this.dataSource, this.config).respond(auth);
+  }
+}

@@ -1,0 +1,145 @@
+import { In } from 'typeorm';
+import type { TeamDto } from '../../shared/types/api';
+import type { AgeGroup, Level, Space } from '../../shared/types/plan-request';
+import { KitBag } from '../entities/kit-bag';
+import { Membership } from '../entities/membership';
+import { Player } from '../entities/player';
+import { Team } from '../entities/team';
+import { badRequest, forbidden } from '../http/problem';
+import type { ClubScope } from './club-scope';
+
+export interface TeamInput {
+  name: string;
+  ageGroup: AgeGroup;
+  level: Level;
+  usualSpace: Space;
+  coachIds?: string[];
+}
+
+/** Squads of the caller's club. */
+export class TeamService {
+  constructor(private readonly scope: ClubScope) {}
+
+  private get manager() {
+    return this.scope.manager;
+  }
+
+  /** Lead and coaches see every team; assistants the teams they help with. */
+  async list(): Promise<TeamDto[]> {
+    const query = this.manager
+      .getRepository(Team)
+      .createQueryBuilder('team')
+      .where('team.clubId = :clubId', { clubId: this.scope.clubId })
+      .orderBy('team.name', 'ASC');
+    if (this.scope.auth.role === 'assistant') {
+      query.andWhere('team.id IN (SELECT "teamId" FROM team_coach WHERE "userId" = :userId)', {
+        userId: this.scope.auth.userId,
+      });
+    }
+    return this.toDtos(await query.getMany());
+  }
+
+  async get(id: string): Promise<TeamDto> {
+    const [dto] = await this.toDtos([await this.scope.teamToRead(id)]);
+    return dto!;
+  }
+
+  async create(input: TeamInput): Promise<TeamDto> {
+    const auth = this.scope.auth;
+    if (auth.role === 'assistant') throw forbidden('Assistants cannot create teams.');
+    const coachIds = new Set(input.coachIds ?? []);
+    if (auth.role === 'coach') coachIds.add(auth.userId);
+    await this.checkStaff([...coachIds]);
+    const team = await this.manager.getRepository(Team).save({
+      clubId: this.scope.clubId,
+      name: input.name.trim(),
+      ageGroup: input.ageGroup,
+      level: input.level,
+      spaceWidth: input.usualSpace.width,
+      spaceLength: input.usualSpace.length,
+    });
+    await this.setStaff(team.id, [...coachIds]);
+    await this.manager
+      .getRepository(KitBag)
+      .save({ teamId: team.id, clubId: this.scope.clubId, balls: 0, cones: 0, bibs: 0, goals: 0 });
+    return this.get(team.id);
+  }
+
+  async update(id: string, input: Partial<TeamInput>): Promise<TeamDto> {
+    const team = await this.scope.teamToManage(id);
+    if (input.name !== undefined) team.name = input.name.trim();
+    if (input.ageGroup !== undefined) team.ageGroup = input.ageGroup;
+    if (input.level !== undefined) team.level = input.level;
+    if (input.usualSpace !== undefined) {
+      team.spaceWidth = input.usualSpace.width;
+      team.spaceLength = input.usualSpace.length;
+    }
+    await this.manager.getRepository(Team).save(team);
+    if (input.coachIds !== undefined) {
+      const coachIds = [...new Set(input.coachIds)];
+      // A coach cannot take themselves off their own team; the lead can.
+      if (this.scope.auth.role === 'coach' && !coachIds.includes(this.scope.auth.userId)) {
+        coachIds.push(this.scope.auth.userId);
+      }
+      await this.checkStaff(coachIds);
+      await this.setStaff(team.id, coachIds);
+    }
+    return this.get(team.id);
+  }
+
+  async remove(id: string): Promise<void> {
+    const team = await this.scope.teamToManage(id);
+    await this.manager.getRepository(Team).delete({ id: team.id, clubId: this.scope.clubId });
+  }
+
+  /** Staff must be members of this club (coaches or assistants; the lead may attach too). */
+  private async checkStaff(userIds: string[]): Promise<void> {
+    if (!userIds.length) return;
+    const members = await this.manager
+      .getRepository(Membership)
+      .findBy({ clubId: this.scope.clubId, userId: In(userIds) });
+    const known = new Set(members.map((m) => m.userId));
+    const unknown = userIds.filter((id) => !known.has(id));
+    if (unknown.length) {
+      throw badRequest('Some coaches are not members of this club.', [
+        { field: 'coachIds', message: `not members of this club: ${unknown.join(', ')}` },
+      ]);
+    }
+  }
+
+  private async setStaff(teamId: string, userIds: string[]): Promise<void> {
+    await this.manager.query('DELETE FROM team_coach WHERE "teamId" = $1', [teamId]);
+    for (const userId of userIds) {
+      await this.manager.query('INSERT INTO team_coach ("teamId", "userId") VALUES ($1, $2)', [
+        teamId,
+        userId,
+      ]);
+    }
+  }
+
+  async toDtos(teams: Team[]): Promise<TeamDto[]> {
+    if (!teams.length) return [];
+    const ids = teams.map((t) => t.id);
+    const staff: { teamId: string; userId: string }[] = await this.manager.query(
+      'SELECT "teamId", "userId" FROM team_coach WHERE "teamId" = ANY($1::uuid[]) ORDER BY "userId"',
+      [ids],
+    );
+    const counts: { teamId: string; count: string }[] = await this.manager
+      .getRepository(Player)
+      .createQueryBuilder('p')
+      .select('p.teamId', 'teamId')
+      .addSelect('COUNT(*)', 'count')
+      .where('p.teamId IN (:...ids) AND p.active = true', { ids })
+      .groupBy('p.teamId')
+      .getRawMany();
+    return teams.map((team) => ({
+      id: team.id,
+      name: team.name,
+      ageGroup: team.ageGroup,
+      level: team.level,
+      usualSpace: { width: team.spaceWidth, length: team.spaceLength },
+      coachIds: staff.filter((s) => s.teamId === team.id).map((s) => s.userId),
+      playerCount: Number(counts.find((c) => c.teamId === team.id)?.count ?? 0),
+    }));
+  }
+}
