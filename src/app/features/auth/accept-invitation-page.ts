@@ -1,9 +1,67 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCardModule } from '@angular/material/card';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { Router } from '@angular/router';
+import { AuthApi } from '../../core/api/auth-api';
+import { AuthStore } from '../../core/auth/auth-store';
+import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
+import { checkAgainstSchema } from '../../core/forms/schema-form';
+import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 
-/** Placeholder until the screen is built. */
+const LABELS = { name: 'Your name', password: 'Password' };
+
+/** The page an invitation link opens: the invitee sets their name and password and joins. */
 @Component({
   selector: 'cw-accept-invitation-page',
-  template: '<section class="cw-page"><h1>Join your club</h1></section>',
+  imports: [ReactiveFormsModule, MatCardModule, MatFormFieldModule, MatInputModule, MatButtonModule],
+  templateUrl: './accept-invitation-page.html',
+  styleUrl: './auth-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class AcceptInvitationPage {}
+export class AcceptInvitationPage {
+  private readonly authApi = inject(AuthApi);
+  private readonly auth = inject(AuthStore);
+  private readonly router = inject(Router);
+
+  /** The single-use token from the link. */
+  readonly token = input.required<string>();
+
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    name: ['', Validators.required],
+    password: ['', [Validators.required, Validators.minLength(8)]],
+  });
+  protected readonly labels = LABELS;
+  protected readonly error = signal<string | null>(null);
+  protected readonly sending = signal(false);
+  protected readonly message = controlMessage;
+
+  protected async submit(): Promise<void> {
+    this.error.set(null);
+    const value = this.form.getRawValue();
+    const check = await checkAgainstSchema(
+      this.form,
+      'invitation-accept',
+      { token: this.token(), ...value },
+      LABELS,
+    );
+    if (!check.ok) {
+      this.error.set(check.unmatched.join(' ') || null);
+      return;
+    }
+    this.sending.set(true);
+    this.authApi.acceptInvitation(this.token(), value).subscribe({
+      next: (response) => {
+        this.auth.signIn(response);
+        void this.router.navigateByUrl('/');
+      },
+      error: (error: unknown) => {
+        this.sending.set(false);
+        applyFieldErrors(this.form, problemFieldErrors(error));
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+}

@@ -1,9 +1,68 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCardModule } from '@angular/material/card';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { Router, RouterLink } from '@angular/router';
+import { AuthApi } from '../../core/api/auth-api';
+import { AuthStore } from '../../core/auth/auth-store';
+import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
+import { checkAgainstSchema } from '../../core/forms/schema-form';
+import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 
-/** Placeholder until the screen is built. */
+const LABELS = { clubName: 'Club name', name: 'Your name', email: 'E-mail', password: 'Password' };
+
+/** Creates a club with the person signing up as its lead. */
 @Component({
   selector: 'cw-create-club-page',
-  template: '<section class="cw-page"><h1>Create a club</h1></section>',
+  imports: [
+    ReactiveFormsModule,
+    RouterLink,
+    MatCardModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatButtonModule,
+  ],
+  templateUrl: './create-club-page.html',
+  styleUrl: './auth-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class CreateClubPage {}
+export class CreateClubPage {
+  private readonly authApi = inject(AuthApi);
+  private readonly auth = inject(AuthStore);
+  private readonly router = inject(Router);
+
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    clubName: ['', Validators.required],
+    name: ['', Validators.required],
+    email: ['', [Validators.required, Validators.email]],
+    password: ['', [Validators.required, Validators.minLength(8)]],
+  });
+  protected readonly labels = LABELS;
+  protected readonly error = signal<string | null>(null);
+  protected readonly sending = signal(false);
+  protected readonly message = controlMessage;
+
+  protected async submit(): Promise<void> {
+    this.error.set(null);
+    const value = this.form.getRawValue();
+    const check = await checkAgainstSchema(this.form, 'auth-register', value, LABELS);
+    if (!check.ok) {
+      this.error.set(check.unmatched.join(' ') || null);
+      return;
+    }
+    this.sending.set(true);
+    this.authApi.createClub(value).subscribe({
+      next: (response) => {
+        this.auth.signIn(response);
+        void this.router.navigateByUrl('/teams');
+      },
+      error: (error: unknown) => {
+        this.sending.set(false);
+        applyFieldErrors(this.form, problemFieldErrors(error));
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+}

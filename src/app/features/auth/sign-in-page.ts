@@ -1,9 +1,69 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCardModule } from '@angular/material/card';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { Router, RouterLink } from '@angular/router';
+import { AuthApi } from '../../core/api/auth-api';
+import { AuthStore } from '../../core/auth/auth-store';
+import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
+import { checkAgainstSchema } from '../../core/forms/schema-form';
+import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 
-/** Placeholder until the screen is built. */
+/** E-mail and password in, a session out. */
 @Component({
   selector: 'cw-sign-in-page',
-  template: '<section class="cw-page"><h1>Sign in</h1></section>',
+  imports: [
+    ReactiveFormsModule,
+    RouterLink,
+    MatCardModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatButtonModule,
+  ],
+  templateUrl: './sign-in-page.html',
+  styleUrl: './auth-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class SignInPage {}
+export class SignInPage {
+  private readonly authApi = inject(AuthApi);
+  private readonly auth = inject(AuthStore);
+  private readonly router = inject(Router);
+
+  /** Where to go after signing in (set by the guard). */
+  readonly returnTo = input<string>();
+
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    email: ['', [Validators.required, Validators.email]],
+    password: ['', Validators.required],
+  });
+  protected readonly error = signal<string | null>(null);
+  protected readonly sending = signal(false);
+  protected readonly message = controlMessage;
+
+  protected async submit(): Promise<void> {
+    this.error.set(null);
+    const value = this.form.getRawValue();
+    const check = await checkAgainstSchema(this.form, 'auth-login', value, {
+      email: 'E-mail',
+      password: 'Password',
+    });
+    if (!check.ok) {
+      this.error.set(check.unmatched.join(' ') || null);
+      return;
+    }
+    this.sending.set(true);
+    this.authApi.signIn(value).subscribe({
+      next: (response) => {
+        this.auth.signIn(response);
+        void this.router.navigateByUrl(this.returnTo() || '/');
+      },
+      error: (error: unknown) => {
+        this.sending.set(false);
+        applyFieldErrors(this.form, problemFieldErrors(error));
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+}

@@ -1,9 +1,135 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCardModule } from '@angular/material/card';
+import { MatDialog } from '@angular/material/dialog';
+import { MatExpansionModule } from '@angular/material/expansion';
+import { MatIconModule } from '@angular/material/icon';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { RouterLink } from '@angular/router';
+import type { KitBagDto, PlayerDto, TeamDto } from '../../../../shared/types';
+import { PlayerBody, PlayersApi } from '../../core/api/players-api';
+import { TeamBody, TeamsApi } from '../../core/api/teams-api';
+import { AuthStore } from '../../core/auth/auth-store';
+import { problemMessage } from '../../core/http/problem-message';
+import { LEVEL_LABELS } from '../../core/labels/plan-labels';
+import { CsvImport } from './components/csv-import';
+import { KitBagForm } from './components/kit-bag-form';
+import { PlayerDialog } from './components/player-dialog';
+import { PlayersTable } from './components/players-table';
+import { TeamDefaultsForm } from './components/team-defaults-form';
 
-/** Placeholder until the screen is built. */
+/** One team: its players, CSV import, kit bag and defaults, with the way into planning. */
 @Component({
   selector: 'cw-team-page',
-  template: '<section class="cw-page"><h1>Team</h1></section>',
+  imports: [
+    RouterLink,
+    MatButtonModule,
+    MatCardModule,
+    MatIconModule,
+    MatExpansionModule,
+    PlayersTable,
+    CsvImport,
+    KitBagForm,
+    TeamDefaultsForm,
+  ],
+  templateUrl: './team-page.html',
+  styleUrl: './team-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class TeamPage {}
+export class TeamPage {
+  private readonly teamsApi = inject(TeamsApi);
+  private readonly playersApi = inject(PlayersApi);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly auth = inject(AuthStore);
+
+  readonly teamId = input.required<string>();
+
+  protected readonly team = signal<TeamDto | null>(null);
+  protected readonly players = signal<PlayerDto[]>([]);
+  protected readonly kit = signal<KitBagDto | null>(null);
+  protected readonly error = signal<string | null>(null);
+  protected readonly levelLabels = LEVEL_LABELS;
+  protected readonly canEdit = computed(() => this.auth.hasRole('lead', 'coach'));
+  protected readonly activeCount = computed(() => this.players().filter((p) => p.active).length);
+
+  constructor() {
+    effect(() => this.load(this.teamId()));
+  }
+
+  private load(id: string): void {
+    this.teamsApi.get(id).subscribe({
+      next: (team) => this.team.set(team),
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+    this.loadPlayers(id);
+    this.teamsApi.kit(id).subscribe({
+      next: (kit) => this.kit.set(kit),
+      error: () => this.kit.set({ balls: 0, cones: 0, bibs: 0, goals: 0 }),
+    });
+  }
+
+  protected loadPlayers(id = this.teamId()): void {
+    this.playersApi.list(id).subscribe({
+      next: (players) => this.players.set(players),
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+  }
+
+  protected openPlayer(player: PlayerDto | null): void {
+    this.dialog
+      .open<PlayerDialog, PlayerDto | null, PlayerBody>(PlayerDialog, { data: player, width: '420px' })
+      .afterClosed()
+      .subscribe((body) => {
+        if (!body) return;
+        const call = player
+          ? this.playersApi.update(player.id, body)
+          : this.playersApi.create(this.teamId(), body);
+        call.subscribe({
+          next: () => {
+            this.say(player ? `${body.displayName} saved.` : `${body.displayName} added.`);
+            this.loadPlayers();
+          },
+          error: (error: unknown) => this.error.set(problemMessage(error)),
+        });
+      });
+  }
+
+  protected changeFlag(change: { player: PlayerDto; goalkeeper?: boolean; active?: boolean }): void {
+    const { player, ...body } = change;
+    this.playersApi.update(player.id, body).subscribe({
+      next: (saved) => {
+        this.players.update((list) => list.map((p) => (p.id === saved.id ? { ...p, ...saved } : p)));
+        if (body.active === false) this.say(`${player.displayName} is no longer in the active squad.`);
+      },
+      error: (error: unknown) => {
+        this.error.set(problemMessage(error));
+        this.loadPlayers();
+      },
+    });
+  }
+
+  protected saveKit(kit: KitBagDto): void {
+    this.teamsApi.saveKit(this.teamId(), kit).subscribe({
+      next: (saved) => {
+        this.kit.set(saved);
+        this.say('Kit bag saved.');
+      },
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+  }
+
+  protected saveTeam(body: TeamBody): void {
+    this.teamsApi.update(this.teamId(), body).subscribe({
+      next: (saved) => {
+        this.team.set(saved);
+        this.say('Team details saved.');
+      },
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+  }
+
+  private say(text: string): void {
+    this.snackBar.open(text, undefined, { duration: 3000, politeness: 'polite' });
+  }
+}

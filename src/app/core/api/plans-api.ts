@@ -1,0 +1,69 @@
+import { HttpClient, HttpParams } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { Observable } from 'rxjs';
+import type { Page, PlanSummaryDto, PlanRequest, SessionPlanDto } from '../../../../shared/types';
+import type { Plan } from '../../../../shared/types';
+import type { PlanEdit } from '../../../../shared/types/plan-edit';
+
+export interface CreatePlanBody {
+  teamId: string;
+  /** YYYY-MM-DD. */
+  date?: string;
+  /** HH:MM. */
+  kickOff?: string;
+  request: PlanRequest;
+}
+
+export interface PlanQuery {
+  teamId?: string;
+  from?: string;
+  to?: string;
+  page?: number;
+}
+
+/** Body of PATCH /api/plans/:id: the edits made, or the plan as the browser's engine re-checked it. */
+export interface UpdatePlanBody {
+  edits?: PlanEdit[];
+  plan?: Plan;
+  status?: 'draft' | 'final';
+}
+
+/** Session plans: generate, list, read, edit, print and share. */
+@Injectable({ providedIn: 'root' })
+export class PlansApi {
+  private readonly http = inject(HttpClient);
+
+  create(body: CreatePlanBody): Observable<SessionPlanDto> {
+    return this.http.post<SessionPlanDto>('/api/plans', body);
+  }
+
+  list(query: PlanQuery = {}): Observable<Page<PlanSummaryDto>> {
+    let params = new HttpParams();
+    for (const [key, value] of Object.entries(query)) {
+      if (value !== undefined && value !== '') params = params.set(key, String(value));
+    }
+    return this.http.get<Page<PlanSummaryDto>>('/api/plans', { params });
+  }
+
+  get(id: string): Observable<SessionPlanDto> {
+    return this.http.get<SessionPlanDto>(`/api/plans/${id}`);
+  }
+
+  /** Saves edits; `version` guards against overwriting someone else's newer save. */
+  update(id: string, body: UpdatePlanBody, version?: number): Observable<SessionPlanDto> {
+    const headers: Record<string, string> = version === undefined ? {} : { 'If-Match': String(version) };
+    return this.http.patch<SessionPlanDto>(`/api/plans/${id}`, body, { headers });
+  }
+
+  /** The printable card as a PDF file. */
+  pdf(id: string, paper: 'a4' | 'letter' = 'a4'): Observable<Blob> {
+    return this.http.get(`/api/plans/${id}/pdf`, { params: { paper }, responseType: 'blob' });
+  }
+
+  share(id: string, recipients: string[], message?: string): Observable<{ queued: number }> {
+    return this.http.post<{ queued: number }>(`/api/plans/${id}/share`, {
+      recipients,
+      ...(message ? { message } : {}),
+    });
+  }
+}

@@ -1,0 +1,47 @@
+import { HttpClient } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { Observable } from 'rxjs';
+import type { CsvPreview, PlayerDto } from '../../../../shared/types';
+
+export interface PlayerBody {
+  displayName: string;
+  goalkeeper?: boolean;
+  active?: boolean;
+}
+
+/** A team's players, one by one or from a CSV file. */
+@Injectable({ providedIn: 'root' })
+export class PlayersApi {
+  private readonly http = inject(HttpClient);
+
+  list(teamId: string): Observable<PlayerDto[]> {
+    return this.http.get<PlayerDto[]>(`/api/teams/${teamId}/players`);
+  }
+
+  create(teamId: string, body: PlayerBody): Observable<PlayerDto> {
+    return this.http.post<PlayerDto>(`/api/teams/${teamId}/players`, body);
+  }
+
+  update(id: string, body: Partial<PlayerBody>): Observable<PlayerDto> {
+    return this.http.patch<PlayerDto>(`/api/players/${id}`, body);
+  }
+
+  remove(id: string): Observable<void> {
+    return this.http.delete<void>(`/api/players/${id}`);
+  }
+
+  /** Uploads a CSV file; the server answers with the rows it read and each row's errors. */
+  previewImport(teamId: string, file: File): Observable<CsvPreview> {
+    const form = new FormData();
+    form.append('file', file, file.name);
+    return this.http.post<CsvPreview>(`/api/teams/${teamId}/players/import`, form);
+  }
+
+  /** Adds the previewed rows that had no errors. */
+  commitImport(teamId: string, importId: string): Observable<{ created: number }> {
+    return this.http.post<{ created: number }>(
+      `/api/teams/${teamId}/players/import/${encodeURIComponent(importId)}/commit`,
+      {},
+    );
+  }
+}

@@ -1,0 +1,45 @@
+import { HttpClient } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { Observable } from 'rxjs';
+import type { AgeGroup, KitBagDto, Level, Space, TeamDto } from '../../../../shared/types';
+
+export interface TeamBody {
+  name: string;
+  ageGroup: AgeGroup;
+  level: Level;
+  usualSpace?: Space;
+}
+
+/** Teams of the caller's club and each team's kit bag. */
+@Injectable({ providedIn: 'root' })
+export class TeamsApi {
+  private readonly http = inject(HttpClient);
+
+  list(): Observable<TeamDto[]> {
+    return this.http.get<TeamDto[]>('/api/teams');
+  }
+
+  get(id: string): Observable<TeamDto> {
+    return this.http.get<TeamDto>(`/api/teams/${id}`);
+  }
+
+  create(body: TeamBody): Observable<TeamDto> {
+    return this.http.post<TeamDto>('/api/teams', body);
+  }
+
+  update(id: string, body: Partial<TeamBody>): Observable<TeamDto> {
+    return this.http.patch<TeamDto>(`/api/teams/${id}`, body);
+  }
+
+  remove(id: string): Observable<void> {
+    return this.http.delete<void>(`/api/teams/${id}`);
+  }
+
+  kit(id: string): Observable<KitBagDto> {
+    return this.http.get<KitBagDto>(`/api/teams/${id}/kit`);
+  }
+
+  saveKit(id: string, kit: KitBagDto): Observable<KitBagDto> {
+    return this.http.put<KitBagDto>(`/api/teams/${id}/kit`, kit);
+  }
+}

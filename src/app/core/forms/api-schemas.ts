@@ -1,0 +1,43 @@
+/**
+ * Where each form finds the server's JSON Schema for its request body (shared/schemas/api).
+ * Loaded lazily so schemas and ajv stay out of the initial bundle.
+ */
+export type SchemaName =
+  | 'auth-login'
+  | 'auth-register'
+  | 'invitation-accept'
+  | 'team-create'
+  | 'team-update'
+  | 'player-create'
+  | 'player-update'
+  | 'kit-bag'
+  | 'plan-request'
+  | 'plan-create'
+  | 'plan-share';
+
+type Json = { default: object };
+
+const loaders: Partial<Record<SchemaName, () => Promise<Json>>> = {
+  'auth-login': () => import('../../../../shared/schemas/api/auth-login.schema.json'),
+  'auth-register': () => import('../../../../shared/schemas/api/auth-register.schema.json'),
+  'invitation-accept': () => import('../../../../shared/schemas/api/invitation-accept.schema.json'),
+  'team-create': () => import('../../../../shared/schemas/api/team-create.schema.json'),
+  'team-update': () => import('../../../../shared/schemas/api/team-update.schema.json'),
+  'player-create': () => import('../../../../shared/schemas/api/player-create.schema.json'),
+  'player-update': () => import('../../../../shared/schemas/api/player-update.schema.json'),
+  'kit-bag': () => import('../../../../shared/schemas/api/kit-bag.schema.json'),
+  'plan-request': () => import('../../../../shared/schemas/plan-request.schema.json'),
+};
+
+/** Schemas the others refer to by $id. */
+export function loadCommonSchemas(): Promise<object[]> {
+  return Promise.all([import('../../../../shared/schemas/api/common.schema.json')]).then((mods) =>
+    mods.map((m) => (m as Json).default),
+  );
+}
+
+/** The schema for a request body, or null when the API has none for it yet. */
+export async function loadApiSchema(name: SchemaName): Promise<object | null> {
+  const load = loaders[name];
+  return load ? (await load()).default : null;
+}

@@ -1,0 +1,38 @@
+import { AbstractControl, FormGroup } from '@angular/forms';
+import type { FieldErrors } from './schema-validator';
+
+/**
+ * Pins field messages (from the schema check or from a server 400) to the form's controls.
+ * Returns the messages no control matched, so the page can show them above the form.
+ */
+export function applyFieldErrors(form: FormGroup, errors: FieldErrors): string[] {
+  const unmatched: string[] = [];
+  for (const [path, message] of Object.entries(errors)) {
+    const control = findControl(form, path);
+    if (control) {
+      control.setErrors({ ...(control.errors ?? {}), message });
+      control.markAsTouched();
+    } else {
+      unmatched.push(message);
+    }
+  }
+  return unmatched;
+}
+
+function findControl(form: FormGroup, path: string): AbstractControl | null {
+  const dotted = path.replace(/^\//, '').replace(/\//g, '.');
+  return form.get(dotted) ?? form.get(dotted.split('.').pop() ?? dotted);
+}
+
+/** The message to show under a control: the pinned one, else a plain reading of Angular's own keys. */
+export function controlMessage(control: AbstractControl | null, label: string): string | null {
+  if (!control || !control.errors) return null;
+  const errors = control.errors;
+  if (typeof errors['message'] === 'string') return errors['message'];
+  if (errors['required']) return `${label} is needed.`;
+  if (errors['email']) return `${label} must be an e-mail address like name@example.org.`;
+  if (errors['min']) return `${label} must be at least ${errors['min'].min}.`;
+  if (errors['max']) return `${label} must be at most ${errors['max'].max}.`;
+  if (errors['minlength']) return `${label} needs at least ${errors['minlength'].requiredLength} characters.`;
+  return `${label} is not valid.`;
+}

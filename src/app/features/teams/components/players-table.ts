@@ -1,0 +1,70 @@
+import {
+  AfterViewInit,
+  ChangeDetectionStrategy,
+  Component,
+  effect,
+  input,
+  output,
+  signal,
+  viewChild,
+} from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatCheckboxModule } from '@angular/material/checkbox';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatIconModule } from '@angular/material/icon';
+import { MatInputModule } from '@angular/material/input';
+import { MatSlideToggleModule } from '@angular/material/slide-toggle';
+import { MatSort, MatSortModule } from '@angular/material/sort';
+import { MatTableDataSource, MatTableModule } from '@angular/material/table';
+import type { PlayerDto } from '../../../../../shared/types';
+
+/** The squad as a sortable, filterable table with edit, goalkeeper and active switches. */
+@Component({
+  selector: 'cw-players-table',
+  imports: [
+    MatTableModule,
+    MatSortModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatButtonModule,
+    MatIconModule,
+    MatCheckboxModule,
+    MatSlideToggleModule,
+  ],
+  templateUrl: './players-table.html',
+  styleUrl: './players-table.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class PlayersTable implements AfterViewInit {
+  readonly players = input.required<PlayerDto[]>();
+  readonly editable = input(true);
+  readonly edit = output<PlayerDto>();
+  readonly changeFlag = output<{ player: PlayerDto; goalkeeper?: boolean; active?: boolean }>();
+
+  private readonly sort = viewChild(MatSort);
+  protected readonly columns = ['displayName', 'goalkeeper', 'active', 'actions'];
+  protected readonly dataSource = new MatTableDataSource<PlayerDto>([]);
+  protected readonly filterText = signal('');
+
+  constructor() {
+    this.dataSource.filterPredicate = (player, filter) => player.displayName.toLowerCase().includes(filter);
+    this.dataSource.sortingDataAccessor = (player, column) => {
+      if (column === 'goalkeeper') return player.goalkeeper ? 0 : 1;
+      if (column === 'active') return player.active ? 0 : 1;
+      return player.displayName.toLowerCase();
+    };
+    effect(() => {
+      this.dataSource.data = this.players();
+    });
+  }
+
+  ngAfterViewInit(): void {
+    const sort = this.sort();
+    if (sort) this.dataSource.sort = sort;
+  }
+
+  protected applyFilter(text: string): void {
+    this.filterText.set(text);
+    this.dataSource.filter = text.trim().toLowerCase();
+  }
+}

@@ -1,0 +1,64 @@
+import { ChangeDetectionStrategy, Component, effect, inject, input, output } from '@angular/core';
+import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import { AGE_GROUPS, LEVELS, type AgeGroup, type Level, type TeamDto } from '../../../../../shared/types';
+import type { TeamBody } from '../../../core/api/teams-api';
+import { controlMessage } from '../../../core/forms/form-errors';
+import { checkAgainstSchema } from '../../../core/forms/schema-form';
+import { LEVEL_LABELS } from '../../../core/labels/plan-labels';
+
+const LABELS = {
+  name: 'Team name',
+  'usualSpace.width': 'Usual space width',
+  'usualSpace.length': 'Usual space length',
+};
+
+/** The team's name, age group, level and the space it usually trains on. */
+@Component({
+  selector: 'cw-team-defaults-form',
+  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule],
+  templateUrl: './team-defaults-form.html',
+  styles: `
+    .cw-defaults {
+      display: grid;
+      gap: 0 12px;
+      grid-template-columns: repeat(auto-fit, minmax(160px, 1fr));
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class TeamDefaultsForm {
+  readonly team = input<TeamDto | null>(null);
+  readonly editable = input(true);
+  readonly save = output<TeamBody>();
+
+  protected readonly ageGroups = AGE_GROUPS;
+  protected readonly levels = LEVELS;
+  protected readonly levelLabels = LEVEL_LABELS;
+  protected readonly message = controlMessage;
+  private readonly metres = [Validators.required, Validators.min(5), Validators.max(130)];
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    name: ['', Validators.required],
+    ageGroup: ['U10' as AgeGroup],
+    level: ['beginner' as Level],
+    usualSpace: inject(NonNullableFormBuilder).group({ width: [30, this.metres], length: [40, this.metres] }),
+  });
+
+  constructor() {
+    effect(() => {
+      const team = this.team();
+      if (team) this.form.reset({ ...team, usualSpace: { ...team.usualSpace } });
+      if (this.editable()) this.form.enable();
+      else this.form.disable();
+    });
+  }
+
+  protected async submit(): Promise<void> {
+    const value = this.form.getRawValue();
+    const check = await checkAgainstSchema(this.form, 'team-update', value, LABELS);
+    if (check.ok) this.save.emit(value);
+  }
+}
