@@ -50,9 +50,25 @@ export function createApp(deps: AppDeps): Express {
           frameAncestors: ["'none'"],
         },
       },
+      // Served over plain HTTP on a club laptop or closed network; HSTS would only get in the way.
+      strictTransportSecurity: false,
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      // One short line per request: no headers, so tokens never reach the log.
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({
+          id: req.id,
+          method: req.method,
+          url: req.url,
+        }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT, type: ['application/json', 'application/*+json'] }));
 
   const requireAuth = createRequireAuth(deps.dataSource, deps.config);
