@@ -7,6 +7,7 @@ import { Membership } from './membership';
 import { OutboxMessage } from './outbox-message';
 import { Player } from './player';
 import { RuleSet } from './rule-set';
+import { RuleSetChange } from './rule-set-change';
 import { SessionPlan } from './session-plan';
 import { Team } from './team';
 import { User } from './user';
@@ -21,6 +22,7 @@ export {
   OutboxMessage,
   Player,
   RuleSet,
+  RuleSetChange,
   SessionPlan,
   Team,
   User,
@@ -40,4 +42,5 @@ export const ENTITIES = [
   Feedback,
   Invitation,
   OutboxMessage,
+  RuleSetChange,
 ];

@@ -1,4 +1,5 @@
 import { InitialSchema1764627000000 } from './1764627000000-initial-schema';
+import { RuleSetHistory1764628000000 } from './1764628000000-rule-set-history';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
-export const MIGRATIONS = [InitialSchema1764627000000];
+export const MIGRATIONS = [InitialSchema1764627000000, RuleSetHistory1764628000000];

@@ -5,7 +5,11 @@ import { healthRouter } from './health';
 import { invitationsRouter } from './invitations';
 import { kitRouter } from './kit';
 import { membersRouter } from './members';
+import { planActivityRouter } from './plan-activity';
+import { plansRouter } from './plans';
 import { playersRouter } from './players';
+import { ruleSetsRouter } from './rule-sets';
+import { teamInsightRouter } from './team-insight';
 import { teamsRouter } from './teams';
 
 export type { ApiDeps } from './api-deps';
@@ -20,5 +24,9 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(teamsRouter(deps));
   api.use(playersRouter(deps));
   api.use(kitRouter(deps));
+  api.use(plansRouter(deps));
+  api.use(planActivityRouter(deps));
+  api.use(ruleSetsRouter(deps));
+  api.use(teamInsightRouter(deps));
   return api;
 }

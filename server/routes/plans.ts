@@ -1,0 +1,72 @@
+import { Router, type Request } from 'express';
+import { authOf } from '../http/auth-context';
+import { ifMatchNumber } from '../http/detailed-problem';
+import { badRequest } from '../http/problem';
+import { requireRole } from '../middleware/require-role';
+import { validate } from '../middleware/validate';
+import type { Paper } from '../pdf';
+import { PlanCardService } from '../services/plan-card-service';
+import { PlanService, type ListPlansQuery } from '../services/plan-service';
+import type { ApiDeps } from './api-deps';
+
+/** The If-Match version, or 400 when the header is not a number. */
+export function ifMatchOf(req: Request): number | null {
+  const value = ifMatchNumber(req.get('if-match'));
+  if (value === 'invalid')
+    throw badRequest('If-Match must be a version number.', [
+      { field: 'If-Match', message: 'must be a number' },
+    ]);
+  return value;
+}
+
+/** /plans: generate, list, read, edit, print and share session plans. */
+export function plansRouter({ dataSource, requireAuth, mail }: ApiDeps): Router {
+  const router = Router();
+  const plans = new PlanService(dataSource);
+  const cards = new PlanCardService(dataSource, mail);
+  const id = validate({ params: 'id-param' });
+  const planners = requireRole('lead', 'coach');
+
+  router.post('/plans', requireAuth, planners, validate({ body: 'plan-create' }), async (req, res) => {
+    const dto = await plans.create(authOf(req), req.body);
+    res.status(201).location(`/api/plans/${dto.id}`).json(dto);
+  });
+  router.get('/plans', requireAuth, validate({ query: 'plan-list-query' }), async (req, res) => {
+    res.json(await plans.list(authOf(req), req.query as unknown as ListPlansQuery));
+  });
+  router.get('/plans/:id', requireAuth, id, async (req, res) => {
+    const dto = await plans.get(authOf(req), req.params['id'] as string);
+    res.setHeader('ETag', `"${dto.version}"`).json(dto);
+  });
+  router.patch(
+    '/plans/:id',
+    requireAuth,
+    planners,
+    id,
+    validate({ body: 'plan-update' }),
+    async (req, res) => {
+      const dto = await plans.update(authOf(req), req.params['id'] as string, req.body, ifMatchOf(req));
+      res.setHeader('ETag', `"${dto.version}"`).json(dto);
+    },
+  );
+  router.get('/plans/:id/pdf', requireAuth, id, validate({ query: 'plan-pdf-query' }), async (req, res) => {
+    const paper = (req.query as { paper: Paper }).paper;
+    const { pdf, filename } = await cards.pdf(authOf(req), req.params['id'] as string, paper);
+    res
+      .type('application/pdf')
+      .setHeader('Content-Disposition', `inline; filename="${filename}"`)
+      .setHeader('Cache-Control', 'private, no-store')
+      .send(pdf);
+  });
+  router.post(
+    '/plans/:id/share',
+    requireAuth,
+    planners,
+    id,
+    validate({ body: 'plan-share' }),
+    async (req, res) => {
+      res.status(202).json(await cards.share(authOf(req), req.params['id'] as string, req.body));
+    },
+  );
+  return router;
+}

@@ -1,0 +1,81 @@
+import { Router } from 'express';
+import { authOf } from '../http/auth-context';
+import { HttpError } from '../http/problem';
+import { requireRole } from '../middleware/require-role';
+import { validate } from '../middleware/validate';
+import { RuleSetPreviewService } from '../services/rule-set-preview';
+import { RuleSetService } from '../services/rule-set-service';
+import type { ApiDeps } from './api-deps';
+import { ifMatchOf } from './plans';
+
+/** /rule-sets: the club's rules. Every member reads; the lead drafts, tries, publishes and rolls back. */
+export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
+  const router = Router();
+  const ruleSets = new RuleSetService(dataSource);
+  const previews = new RuleSetPreviewService(dataSource, ruleSets);
+  const lead = requireRole('lead');
+  const id = validate({ params: 'rule-set-param' });
+  const draftId = validate({ params: 'id-param' });
+
+  router.get('/rule-sets', requireAuth, async (req, res) => {
+    res.json(await ruleSets.list(authOf(req)));
+  });
+  router.get(
+    '/rule-sets/history',
+    requireAuth,
+    validate({ query: 'rule-set-history-query' }),
+    async (req, res) => {
+      res.json(await ruleSets.history(authOf(req), (req.query as { ruleSetId?: string }).ruleSetId));
+    },
+  );
+  router.get('/rule-sets/diff', requireAuth, validate({ query: 'rule-set-diff-query' }), async (req, res) => {
+    const { from, to } = req.query as { from: string; to: string };
+    res.json(await ruleSets.diff(authOf(req), from, to));
+  });
+  router.post('/rule-sets', requireAuth, lead, validate({ body: 'rule-set-create' }), async (req, res) => {
+    const dto = await ruleSets.createDraft(authOf(req), req.body);
+    res.status(201).location(`/api/rule-sets/${dto.id}`).setHeader('ETag', `"${dto.revision}"`).json(dto);
+  });
+  router.post(
+    '/rule-sets/rollback',
+    requireAuth,
+    lead,
+    validate({ body: 'rule-set-rollback' }),
+    async (req, res) => {
+      res.status(201).json(await ruleSets.rollback(authOf(req), req.body.to));
+    },
+  );
+  router.get('/rule-sets/:id', requireAuth, id, async (req, res) => {
+    const dto = await ruleSets.get(authOf(req), req.params['id'] as string);
+    res.setHeader('ETag', `"${dto.revision}"`).json(dto);
+  });
+  router.put(
+    '/rule-sets/:id',
+    requireAuth,
+    lead,
+    draftId,
+    validate({ body: 'rule-set-update' }),
+    async (req, res) => {
+      const revision = ifMatchOf(req);
+      if (revision === null) {
+        throw new HttpError(428, 'Precondition required', 'Send If-Match with the revision you edited.');
+      }
+      const dto = await ruleSets.update(authOf(req), req.params['id'] as string, req.body, revision);
+      res.setHeader('ETag', `"${dto.revision}"`).json(dto);
+    },
+  );
+  router.post('/rule-sets/:id/publish', requireAuth, lead, draftId, async (req, res) => {
+    res.json(await ruleSets.publish(authOf(req), req.params['id'] as string, ifMatchOf(req)));
+  });
+  router.post(
+    '/rule-sets/:id/preview',
+    requireAuth,
+    lead,
+    id,
+    validate({ body: 'rule-set-preview' }),
+    async (req, res) => {
+      res.json(await previews.preview(authOf(req), req.params['id'] as string, req.body));
+    },
+  );
+  return router;
+}

@@ -1,0 +1,109 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import type { FeedbackDto, FeedbackVerdict } from '../../shared/types/api';
+import type { Plan, Station } from '../../shared/types/plan';
+import { Feedback } from '../entities/feedback';
+import type { SessionPlan } from '../entities/session-plan';
+import type { AuthContext } from '../http/auth-context';
+import { badRequest } from '../http/problem';
+import { ClubScope } from './club-scope';
+import { feedbackDto } from './plan-dto';
+
+export interface FeedbackInput {
+  stationId: string;
+  phaseIndex: number;
+  verdict: FeedbackVerdict;
+  note?: string;
+  clientId?: string;
+}
+
+/** The station a verdict is about, or 400 naming the field that does not match the plan. */
+export function stationOf(plan: Plan, phaseIndex: number, stationId: string): Station {
+  const phase = plan.phases[phaseIndex];
+  if (!phase)
+    throw badRequest('No such phase in this plan.', [
+      { field: 'phaseIndex', message: 'is not a phase of this plan' },
+    ]);
+  const station = phase.stations.find((s) => s.id === stationId);
+  if (!station) {
+    throw badRequest('No such station in that phase.', [
+      { field: 'stationId', message: 'is not a station of that phase' },
+    ]);
+  }
+  return station;
+}
+
+/**
+ * Stores a verdict once per clientId: a replayed offline action finds the first row.
+ * `station` is the station as it ran (before any progression step), so the next plan knows its area.
+ */
+export async function storeFeedback(
+  manager: EntityManager,
+  auth: AuthContext,
+  row: SessionPlan,
+  station: Station,
+  input: FeedbackInput,
+): Promise<{ feedback: Feedback; created: boolean }> {
+  const repo = manager.getRepository(Feedback);
+  if (input.clientId) {
+    const existing = await repo.findOne({ where: { planId: row.id, clientId: input.clientId } });
+    if (existing) return { feedback: existing, created: false };
+  }
+  const inserted = await manager
+    .createQueryBuilder()
+    .insert()
+    .into(Feedback)
+    .values({
+      clubId: auth.clubId,
+      teamId: row.teamId,
+      planId: row.id,
+      stationId: input.stationId,
+      phaseIndex: input.phaseIndex,
+      activityKind: station.activityKind,
+      areaWidth: station.area.width,
+      areaLength: station.area.length,
+      verdict: input.verdict,
+      note: input.note ?? null,
+      clientId: input.clientId ?? null,
+      authorId: auth.userId,
+    })
+    .orIgnore()
+    .returning('*')
+    .execute();
+  const id = (inserted.raw as { id?: string }[])[0]?.id;
+  if (id) return { feedback: await repo.findOneByOrFail({ id }), created: true };
+  // Lost a race with the same clientId: the other insert won, return its row.
+  return {
+    feedback: await repo.findOneByOrFail({ planId: row.id, clientId: input.clientId! }),
+    created: false,
+  };
+}
+
+/** Feedback on a plan's stations: record (idempotent by clientId) and list. */
+export class FeedbackService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async record(
+    auth: AuthContext,
+    planId: string,
+    input: FeedbackInput,
+  ): Promise<{ dto: FeedbackDto; created: boolean }> {
+    return this.dataSource.transaction(async (manager) => {
+      const scope = new ClubScope(manager, auth);
+      const row = await scope.plan(planId);
+      await scope.teamToRead(row.teamId);
+      const station = stationOf(row.plan, input.phaseIndex, input.stationId);
+      const { feedback, created } = await storeFeedback(manager, auth, row, station, input);
+      return { dto: feedbackDto(feedback), created };
+    });
+  }
+
+  async list(auth: AuthContext, planId: string): Promise<FeedbackDto[]> {
+    const scope = new ClubScope(this.dataSource.manager, auth);
+    const row = await scope.plan(planId);
+    await scope.teamToRead(row.teamId);
+    const rows = await this.dataSource.manager
+      .getRepository(Feedback)
+      .find({ where: { planId: row.id, clubId: auth.clubId }, order: { createdAt: 'ASC' } });
+    return rows.map(feedbackDto);
+  }
+}

@@ -1,0 +1,92 @@
+import { In, type DataSource } from 'typeorm';
+import type { StationVerdict } from '../../shared/types/plan-edit';
+import type { PlanChangeDto } from '../../shared/types/plan-api';
+import type { PresentPlayer } from '../../shared/types/plan-request';
+import { Player } from '../entities/player';
+import { SessionPlan } from '../entities/session-plan';
+import type { AuthContext } from '../http/auth-context';
+import { badRequest, type FieldError } from '../http/problem';
+import { ClubScope } from './club-scope';
+import * as engine from './engine-port';
+import { storeFeedback, stationOf } from './feedback-service';
+import { feedbackDto, sessionPlanDto } from './plan-dto';
+import { lockPlan, planColumns } from './plan-service';
+import { rulesOfPlan } from './rules-resolver';
+
+export interface ReplanInput {
+  add?: (string | PresentPlayer)[];
+  remove?: string[];
+  fromMinute: number;
+}
+
+export interface ProgressionInput {
+  phaseIndex: number;
+  stationId: string;
+  verdict: StationVerdict;
+  note?: string;
+  clientId?: string;
+}
+
+/** Changes while the session runs: arrivals and leavers, and too easy / too hard on a station. */
+export class PitchSideService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  /**
+   * Re-plans the remaining phases. Adding someone already there or removing someone already gone
+   * does nothing, so a replayed offline action changes the plan once.
+   */
+  async replan(auth: AuthContext, planId: string, input: ReplanInput): Promise<PlanChangeDto> {
+    return this.dataSource.transaction(async (manager) => {
+      const scope = new ClubScope(manager, auth);
+      const row = await lockPlan(manager, scope, planId);
+      const team = await scope.teamToRead(row.teamId);
+      const present = new Set(row.plan.request.players.map((p) => p.id));
+      const addIds = (input.add ?? []).map((a) => (typeof a === 'string' ? a : a.id));
+      const roster = addIds.length
+        ? await manager
+            .getRepository(Player)
+            .find({ where: { id: In(addIds), teamId: row.teamId, clubId: auth.clubId } })
+        : [];
+      const byId = new Map(roster.map((p) => [p.id, p]));
+      const errors: FieldError[] = [];
+      addIds.forEach((id, i) => {
+        if (!byId.has(id)) errors.push({ field: `add/${i}`, message: 'is not a player of this team' });
+      });
+      if (errors.length) throw badRequest('Some arrivals are not in this team.', errors);
+      const add: PresentPlayer[] = [...new Set(addIds)]
+        .filter((id) => !present.has(id))
+        .map((id) => ({ id, name: byId.get(id)!.displayName, goalkeeper: byId.get(id)!.goalkeeper }));
+      const remove = [...new Set(input.remove ?? [])].filter((id) => present.has(id));
+      if (!add.length && !remove.length) return { plan: sessionPlanDto(row, team.name), moves: [] };
+      if (present.size + add.length - remove.length < 1) {
+        throw badRequest('A plan needs at least one player.', [
+          { field: 'remove', message: 'would leave nobody' },
+        ]);
+      }
+      const rules = await rulesOfPlan(manager, auth.clubId, row.ruleSetId);
+      const result = await engine.replan(row.plan, { add, remove, fromMinute: input.fromMinute }, rules);
+      Object.assign(row, planColumns(result.plan));
+      const saved = await manager.getRepository(SessionPlan).save(row);
+      return { plan: sessionPlanDto(saved, team.name), moves: result.moves };
+    });
+  }
+
+  /** Applies the station's progression step and stores the verdict once per clientId. */
+  async progression(auth: AuthContext, planId: string, input: ProgressionInput): Promise<PlanChangeDto> {
+    return this.dataSource.transaction(async (manager) => {
+      const scope = new ClubScope(manager, auth);
+      const row = await lockPlan(manager, scope, planId);
+      const team = await scope.teamToRead(row.teamId);
+      const station = stationOf(row.plan, input.phaseIndex, input.stationId);
+      const { feedback, created } = await storeFeedback(manager, auth, row, station, input);
+      if (!created || input.verdict === 'right') {
+        return { plan: sessionPlanDto(row, team.name), moves: [], feedback: feedbackDto(feedback) };
+      }
+      const rules = await rulesOfPlan(manager, auth.clubId, row.ruleSetId);
+      const plan = await engine.applyProgression(row.plan, input, rules);
+      Object.assign(row, planColumns(plan));
+      const saved = await manager.getRepository(SessionPlan).save(row);
+      return { plan: sessionPlanDto(saved, team.name), moves: [], feedback: feedbackDto(feedback) };
+    });
+  }
+}

@@ -1,0 +1,97 @@
+import type { DataSource } from 'typeorm';
+import type { ShareResultDto } from '../../shared/types/plan-api';
+import type { AuthContext } from '../http/auth-context';
+import { minuteLabel, planMinutes, sessionStart } from '../pdf/clock';
+import { type Paper, renderPlanPdf } from '../pdf';
+import type { SessionPlan } from '../entities/session-plan';
+import type { Team } from '../entities/team';
+import { ClubScope } from './club-scope';
+import type { MailQueue } from './mail-queue';
+
+export interface SharePlanInput {
+  recipients: string[];
+  message?: string;
+  paper?: Paper;
+}
+
+/** The printed card of a stored plan: download it, or e-mail it through the outbox. */
+export class PlanCardService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly mail: MailQueue,
+  ) {}
+
+  async pdf(auth: AuthContext, planId: string, paper: Paper): Promise<{ pdf: Buffer; filename: string }> {
+    const scope = new ClubScope(this.dataSource.manager, auth);
+    const row = await scope.plan(planId);
+    const team = await scope.teamToRead(row.teamId);
+    return { pdf: await render(row, team, paper), filename: cardFilename(row, team) };
+  }
+
+  /** Queues one message per recipient (so parents do not see each other's addresses) with the card attached. */
+  async share(auth: AuthContext, planId: string, input: SharePlanInput): Promise<ShareResultDto> {
+    const scope = new ClubScope(this.dataSource.manager, auth);
+    const row = await scope.plan(planId);
+    const team = await scope.teamToManage(row.teamId);
+    const pdf = await render(row, team, input.paper ?? 'a4');
+    const subject = `${team.name}: ${kindLabel(row)}${row.date ? ` on ${row.date}` : ''}${row.kickOff ? ` (${row.kickOff})` : ''}`;
+    const text = shareText(row, team, auth.name, input.message);
+    const attachment = {
+      filename: cardFilename(row, team),
+      contentType: 'application/pdf',
+      contentBase64: pdf.toString('base64'),
+    };
+    const messageIds = await this.dataSource.transaction(async (manager) => {
+      const ids: string[] = [];
+      for (const recipient of input.recipients) {
+        ids.push(
+          await this.mail.enqueue(manager, {
+            clubId: auth.clubId,
+            kind: 'plan-share',
+            recipients: [recipient],
+            subject,
+            text,
+            attachments: [attachment],
+          }),
+        );
+      }
+      return ids;
+    });
+    return { queued: messageIds.length, messageIds };
+  }
+}
+
+function render(row: SessionPlan, team: Team, paper: Paper): Promise<Buffer> {
+  return renderPlanPdf({ plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff }, paper);
+}
+
+function kindLabel(row: SessionPlan): string {
+  return row.kind === 'match-warm-up' ? 'match warm-up' : 'training session';
+}
+
+function cardFilename(row: SessionPlan, team: Team): string {
+  const slug =
+    team.name
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-|-$/g, '') || 'team';
+  return `${slug}-${row.date ?? 'plan'}-card.pdf`;
+}
+
+function shareText(row: SessionPlan, team: Team, sender: string, message?: string): string {
+  const start = sessionStart(row.plan, row.kickOff);
+  const lines = row.plan.phases.map(
+    (p) => `${minuteLabel(start, p.startMinute)}–${minuteLabel(start, p.endMinute)}  ${p.name}`,
+  );
+  return [
+    `${sender} shared the ${kindLabel(row)} for ${team.name} with you.`,
+    message ? `\n${message}\n` : '',
+    `${planMinutes(row.plan)} minutes, ${row.playerCount} players:`,
+    ...lines,
+    '',
+    'The printable card is attached (PDF).',
+    'Anchor or weight movable goals and never let anyone climb them; follow your local rules and the club safeguarding policy.',
+  ]
+    .filter((l) => l !== '')
+    .join('\n');
+}

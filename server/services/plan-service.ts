@@ -1,0 +1,244 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import type { Page, PlanSummaryDto, SessionPlanDto } from '../../shared/types/api';
+import type { Plan } from '../../shared/types/plan';
+import type { PlanEdit } from '../../shared/types/plan-edit';
+import type { FeedbackFact, PlanRequest, PresentPlayer } from '../../shared/types/plan-request';
+import type { RuleSetDocument } from '../../shared/types/plan-rules';
+import { Feedback } from '../entities/feedback';
+import { Player } from '../entities/player';
+import { SessionPlan } from '../entities/session-plan';
+import { Team } from '../entities/team';
+import type { AuthContext } from '../http/auth-context';
+import { DetailedProblem } from '../http/detailed-problem';
+import { badRequest, type FieldError } from '../http/problem';
+import { ClubScope } from './club-scope';
+import * as engine from './engine-port';
+import { planSummaryDto, sessionPlanDto } from './plan-dto';
+import { checkPlanShape } from './plan-shape';
+import { publishedRules, rulesOfPlan } from './rules-resolver';
+
+export interface CreatePlanInput {
+  teamId: string;
+  date?: string;
+  kickOff?: string;
+  request: PlanRequest;
+}
+
+export interface ListPlansQuery {
+  teamId?: string;
+  from?: string;
+  to?: string;
+  page: number;
+  pageSize: number;
+}
+
+export interface UpdatePlanInput {
+  edit?: PlanEdit;
+  edits?: PlanEdit[];
+  plan?: Plan;
+  status?: 'draft' | 'final';
+  date?: string | null;
+  kickOff?: string | null;
+}
+
+/** How many of the team's latest station verdicts the next plan hears about. */
+export const RECENT_FEEDBACK_LIMIT = 12;
+
+/** Plans: generate with the club's rules, list, read, edit with engine re-checks. */
+export class PlanService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async create(auth: AuthContext, input: CreatePlanInput): Promise<SessionPlanDto> {
+    const manager = this.dataSource.manager;
+    const scope = new ClubScope(manager, auth);
+    const requestErrors = engine.planRequestErrors(input.request);
+    if (requestErrors.length) throw badRequest('The plan request is not valid.', requestErrors);
+    const team = await scope.teamToManage(input.teamId);
+    const request = await completeRequest(manager, team, input.request);
+    const rules = await publishedRules(manager, auth.clubId);
+    const plan = await engine.generatePlan(request, rules);
+    const row = manager.getRepository(SessionPlan).create({
+      clubId: auth.clubId,
+      teamId: team.id,
+      date: input.date ?? null,
+      kickOff: input.kickOff ?? null,
+      status: 'draft',
+      authorId: auth.userId,
+      ...planColumns(plan),
+    });
+    const saved = await manager.getRepository(SessionPlan).save(row);
+    return sessionPlanDto(saved, team.name);
+  }
+
+  async list(auth: AuthContext, query: ListPlansQuery): Promise<Page<PlanSummaryDto>> {
+    const manager = this.dataSource.manager;
+    const scope = new ClubScope(manager, auth);
+    const qb = manager
+      .getRepository(SessionPlan)
+      .createQueryBuilder('p')
+      .innerJoin(Team, 't', 't.id = p."teamId"')
+      .addSelect('t.name', 'team_name')
+      .where('p."clubId" = :clubId', { clubId: auth.clubId });
+    if (query.teamId) {
+      await scope.teamToRead(query.teamId);
+      qb.andWhere('p."teamId" = :teamId', { teamId: query.teamId });
+    } else if (auth.role === 'assistant') {
+      qb.andWhere('p."teamId" IN (SELECT tc."teamId" FROM team_coach tc WHERE tc."userId" = :userId)', {
+        userId: auth.userId,
+      });
+    }
+    if (query.from) qb.andWhere('p.date >= :from', { from: query.from });
+    if (query.to) qb.andWhere('p.date <= :to', { to: query.to });
+    const total = await qb.getCount();
+    const { entities, raw } = await qb
+      .orderBy('p.date', 'DESC', 'NULLS LAST')
+      .addOrderBy('p."createdAt"', 'DESC')
+      .offset((query.page - 1) * query.pageSize)
+      .limit(query.pageSize)
+      .getRawAndEntities();
+    const names = new Map((raw as { p_id: string; team_name: string }[]).map((r) => [r.p_id, r.team_name]));
+    return {
+      items: entities.map((row) => planSummaryDto(row, names.get(row.id) ?? '')),
+      page: query.page,
+      pageSize: query.pageSize,
+      total,
+    };
+  }
+
+  async get(auth: AuthContext, id: string): Promise<SessionPlanDto> {
+    const scope = new ClubScope(this.dataSource.manager, auth);
+    const row = await scope.plan(id);
+    const team = await scope.teamToRead(row.teamId);
+    return sessionPlanDto(row, team.name);
+  }
+
+  /** One edit, several edits or a whole edited plan; every result is re-checked against the plan's rules. */
+  async update(
+    auth: AuthContext,
+    id: string,
+    input: UpdatePlanInput,
+    ifMatch: number | null,
+  ): Promise<SessionPlanDto> {
+    return this.dataSource.transaction(async (manager) => {
+      const scope = new ClubScope(manager, auth);
+      const row = await lockPlan(manager, scope, id);
+      const team = await scope.teamToManage(row.teamId);
+      if (ifMatch !== null && ifMatch !== row.version) {
+        throw new DetailedProblem(
+          409,
+          'Conflict',
+          `The plan changed since version ${ifMatch}; it is now at version ${row.version}. Reload and re-apply.`,
+          { currentVersion: row.version },
+        );
+      }
+      const rules = await rulesOfPlan(manager, auth.clubId, row.ruleSetId);
+      const edits = input.edits ?? (input.edit ? [input.edit] : []);
+      let plan = row.plan;
+      if (input.plan) plan = await this.replaceWhole(row, input.plan, rules);
+      for (const edit of edits) {
+        const result = await engine.applyEdit(plan, edit, rules);
+        if (result.violations.length) throw violationsProblem(result.violations);
+        plan = result.plan;
+      }
+      if (input.plan || edits.length) Object.assign(row, planColumns(plan));
+      if (input.status) row.status = input.status;
+      if (input.date !== undefined) row.date = input.date;
+      if (input.kickOff !== undefined) row.kickOff = input.kickOff;
+      const saved = await manager.getRepository(SessionPlan).save(row);
+      return sessionPlanDto(saved, team.name);
+    });
+  }
+
+  /** A whole plan from the client: it keeps the stored request, rules and seed, and must pass the engine's check. */
+  private async replaceWhole(row: SessionPlan, sent: Plan, rules: RuleSetDocument): Promise<Plan> {
+    const plan: Plan = { ...sent, request: row.plan.request, ruleSet: row.plan.ruleSet, seed: row.plan.seed };
+    const shapeErrors = checkPlanShape(plan);
+    if (shapeErrors.length) throw badRequest('The edited plan is not a valid plan.', shapeErrors);
+    const violations = await engine.checkPlan(plan, rules);
+    if (violations.length) throw violationsProblem(violations);
+    return plan;
+  }
+}
+
+/** The stored plan, locked for the rest of the transaction (404 outside the caller's club). */
+export async function lockPlan(manager: EntityManager, scope: ClubScope, id: string): Promise<SessionPlan> {
+  await scope.plan(id);
+  return manager
+    .getRepository(SessionPlan)
+    .findOneOrFail({ where: { id, clubId: scope.clubId }, lock: { mode: 'pessimistic_write' } });
+}
+
+/** Columns that follow from a plan. */
+export function planColumns(plan: Plan): Partial<SessionPlan> {
+  return {
+    kind: plan.request.kind,
+    minutes: plan.phases.reduce((end, phase) => Math.max(end, phase.endMinute), plan.request.minutes),
+    playerCount: plan.request.players.length,
+    request: plan.request,
+    plan,
+    ruleSetId: String(plan.ruleSet.id).slice(0, 64),
+    ruleSetVersion: plan.ruleSet.version,
+    seed: String(plan.seed).slice(0, 64),
+  };
+}
+
+/** 422 listing each rule the plan would break. */
+export function violationsProblem(violations: engine.Violation[]): DetailedProblem {
+  const errors: FieldError[] = violations.map((v) => ({
+    field:
+      v.phaseIndex !== undefined ? `phases/${v.phaseIndex}${v.stationId ? `/${v.stationId}` : ''}` : v.code,
+    message: v.message,
+  }));
+  return new DetailedProblem(
+    422,
+    'Plan breaks the club rules',
+    'The change would break the rules this plan was made with.',
+    { violations },
+    errors,
+    '/problems/rule-violations',
+  );
+}
+
+/**
+ * Checks the request's players against the team (400 naming each stranger), fills in names and
+ * goalkeeper flags from the roster, and adds the team's recent feedback as a fact.
+ */
+export async function completeRequest(
+  manager: EntityManager,
+  team: Team,
+  request: PlanRequest,
+): Promise<PlanRequest> {
+  const roster = await manager
+    .getRepository(Player)
+    .find({ where: { teamId: team.id, clubId: team.clubId } });
+  const byId = new Map(roster.map((p) => [p.id, p]));
+  const errors: FieldError[] = [];
+  const players: PresentPlayer[] = request.players.map((p, i) => {
+    const known = byId.get(p.id);
+    if (!known) {
+      errors.push({ field: `request/players/${i}/id`, message: 'is not a player of this team' });
+      return p;
+    }
+    return { id: p.id, name: known.displayName, goalkeeper: p.goalkeeper ?? known.goalkeeper };
+  });
+  if (errors.length) throw badRequest('Some players are not in this team.', errors);
+  const recentFeedback = request.recentFeedback ?? (await recentFeedbackFacts(manager, team.id));
+  return { ...request, players, ...(recentFeedback.length ? { recentFeedback } : {}) };
+}
+
+/** The team's latest station verdicts, newest first, as facts for the engine. */
+export async function recentFeedbackFacts(manager: EntityManager, teamId: string): Promise<FeedbackFact[]> {
+  const rows = await manager.getRepository(Feedback).find({
+    where: { teamId },
+    order: { createdAt: 'DESC' },
+    take: RECENT_FEEDBACK_LIMIT,
+  });
+  return rows
+    .filter((r) => r.activityKind)
+    .map((r) => ({
+      activityKind: r.activityKind as string,
+      verdict: r.verdict,
+      ...(r.areaWidth !== null ? { areaWidth: r.areaWidth } : {}),
+      ...(r.areaLength !== null ? { areaLength: r.areaLength } : {}),
+    }));
+}

@@ -1,0 +1,165 @@
+import type { DataSource } from 'typeorm';
+import type { Plan } from '../../shared/types/plan';
+import type { AgeGroup, Level, PlanRequest } from '../../shared/types/plan-request';
+import type { RuleSetDocument } from '../../shared/types/plan-rules';
+import type { PlanOutline, PreviewCase, RuleSetPreviewDto } from '../../shared/types/rule-set-api';
+import { SessionPlan } from '../entities/session-plan';
+import { Team } from '../entities/team';
+import type { AuthContext } from '../http/auth-context';
+import { badRequest } from '../http/problem';
+import * as engine from './engine-port';
+import type { RuleSetService } from './rule-set-service';
+
+export interface PreviewInput {
+  recentPlans?: number;
+  ageGroup?: AgeGroup;
+  level?: Level;
+}
+
+interface Case {
+  label: string;
+  source: PreviewCase['source'];
+  request: PlanRequest;
+}
+
+/** Squads that stress the rules: few, odd, many, a tiny patch, no goals. */
+export function sampleRequests(ageGroup: AgeGroup, level: Level): Case[] {
+  const squad = (n: number) =>
+    Array.from({ length: n }, (_, i) => ({ id: `sample-${i + 1}`, name: `Player ${i + 1}` }));
+  const base = (n: number): PlanRequest => ({
+    ageGroup,
+    level,
+    players: squad(n),
+    coaches: 2,
+    equipment: { balls: n + 2, cones: 40, bibs: 12, goals: 4 },
+    space: { width: 40, length: 30 },
+    minutes: 25,
+    kind: 'match-warm-up',
+    seed: 'rules-preview',
+  });
+  return [
+    { label: 'sample: small squad (6)', source: 'sample', request: base(6) },
+    { label: 'sample: odd numbers (13)', source: 'sample', request: base(13) },
+    { label: 'sample: large squad (22)', source: 'sample', request: base(22) },
+    {
+      label: 'sample: tiny space (12 on 15 × 12 m)',
+      source: 'sample',
+      request: { ...base(12), space: { width: 15, length: 12 } },
+    },
+    {
+      label: 'sample: no goals (12)',
+      source: 'sample',
+      request: { ...base(12), equipment: { ...base(12).equipment, goals: 0 } },
+    },
+  ];
+}
+
+/** "Try it": the draft against the published rules on sample squads and the club's recent plans. */
+export class RuleSetPreviewService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly ruleSets: RuleSetService,
+  ) {}
+
+  async preview(auth: AuthContext, draftId: string, input: PreviewInput): Promise<RuleSetPreviewDto> {
+    const manager = this.dataSource.manager;
+    const draft = await this.ruleSets.resolve(manager, auth, draftId);
+    const errors = engine.ruleSetErrors(draft.body);
+    if (errors.length) throw badRequest('The draft is not a valid rule set; fix it to try it.', errors);
+    const against = await this.ruleSets.resolve(manager, auth, 'published');
+    const firstTeam = await manager
+      .getRepository(Team)
+      .findOne({ where: { clubId: auth.clubId }, order: { createdAt: 'ASC' } });
+    const cases = sampleRequests(
+      input.ageGroup ?? firstTeam?.ageGroup ?? 'U10',
+      input.level ?? firstTeam?.level ?? 'intermediate',
+    );
+    const recent = await manager
+      .getRepository(SessionPlan)
+      .createQueryBuilder('p')
+      .innerJoin(Team, 't', 't.id = p."teamId"')
+      .addSelect('t.name', 'team_name')
+      .where('p."clubId" = :clubId', { clubId: auth.clubId })
+      .orderBy('p."createdAt"', 'DESC')
+      .limit(input.recentPlans ?? 3)
+      .getRawAndEntities();
+    recent.entities.forEach((row, i) => {
+      const teamName = (recent.raw[i] as { team_name?: string })?.team_name ?? 'team';
+      cases.push({
+        label: `recent plan: ${teamName}, ${row.date ?? row.createdAt.toISOString().slice(0, 10)}`,
+        source: 'recent-plan',
+        request: { ...row.request, seed: row.seed },
+      });
+    });
+    const out: PreviewCase[] = [];
+    for (const c of cases) {
+      const current = await outlineWith(c.request, against.body);
+      const next = await outlineWith(c.request, draft.body);
+      out.push({
+        label: c.label,
+        source: c.source,
+        current,
+        draft: next,
+        differences: differences(current, next),
+      });
+    }
+    return {
+      draft: { id: draft.ref.id, version: draft.ref.version },
+      against: { id: against.ref.id, version: against.ref.version },
+      cases: out,
+    };
+  }
+}
+
+async function outlineWith(request: PlanRequest, rules: RuleSetDocument): Promise<PlanOutline> {
+  try {
+    return outline(await engine.generatePlan(request, rules));
+  } catch (error) {
+    return { phases: [], warnings: [], cautions: [], error: (error as Error)?.message ?? String(error) };
+  }
+}
+
+/** What a head of coaching compares: per phase the minutes, group sizes and areas; the notices. */
+export function outline(plan: Plan): PlanOutline {
+  return {
+    phases: plan.phases.map((p) => ({
+      name: p.name,
+      minutes: p.endMinute - p.startMinute,
+      groups: p.stations.map((s) => s.playerIds.length + s.coachJoins),
+      areas: [...new Set(p.stations.map((s) => `${s.area.width} × ${s.area.length} m`))],
+    })),
+    warnings: plan.warnings.map((w) => w.message),
+    cautions: plan.cautions.map((c) => c.message),
+  };
+}
+
+/** Plain-words differences between two outlines. */
+export function differences(a: PlanOutline, b: PlanOutline): string[] {
+  const out: string[] = [];
+  if (a.error || b.error) {
+    if (a.error !== b.error) out.push(`plan: ${a.error ?? 'made'} → ${b.error ?? 'made'}`);
+    return out;
+  }
+  if (a.phases.length !== b.phases.length) out.push(`phases: ${a.phases.length} → ${b.phases.length}`);
+  const n = Math.max(a.phases.length, b.phases.length);
+  for (let i = 0; i < n; i++) {
+    const x = a.phases[i];
+    const y = b.phases[i];
+    if (!x || !y) {
+      out.push(x ? `phase ${i + 1} (${x.name}) dropped` : `phase ${i + 1} (${y!.name}) added`);
+      continue;
+    }
+    const label = x.name === y.name ? x.name : `${x.name} → ${y.name}`;
+    if (x.name !== y.name) out.push(`phase ${i + 1}: ${label}`);
+    if (x.minutes !== y.minutes) out.push(`${label}: ${x.minutes} → ${y.minutes} min`);
+    if (x.groups.join() !== y.groups.join())
+      out.push(`${label}: groups ${x.groups.join(', ')} → ${y.groups.join(', ')}`);
+    if (x.areas.join() !== y.areas.join())
+      out.push(`${label}: area ${x.areas.join(', ')} → ${y.areas.join(', ')}`);
+  }
+  for (const w of b.warnings.filter((w) => !a.warnings.includes(w))) out.push(`new warning: ${w}`);
+  for (const w of a.warnings.filter((w) => !b.warnings.includes(w))) out.push(`warning gone: ${w}`);
+  for (const c of b.cautions.filter((c) => !a.cautions.includes(c))) out.push(`new caution: ${c}`);
+  for (const c of a.cautions.filter((c) => !b.cautions.includes(c))) out.push(`caution gone: ${c}`);
+  return out;
+}

@@ -1,0 +1,328 @@
+import { randomUUID } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import type { RuleSetDto } from '../../shared/types/api';
+import type { RuleSetDocument } from '../../shared/types/plan-rules';
+import type { RuleSetChangeDto, RuleSetDiffDto, RuleSetRef } from '../../shared/types/rule-set-api';
+import { RuleSet } from '../entities/rule-set';
+import { RuleSetChange, type RuleSetChangeAction } from '../entities/rule-set-change';
+import { User } from '../entities/user';
+import type { AuthContext } from '../http/auth-context';
+import { DetailedProblem } from '../http/detailed-problem';
+import { badRequest, conflict } from '../http/problem';
+import { ClubScope } from './club-scope';
+import { defaultRules, ruleSetErrors } from './engine-port';
+import { jsonDiff } from './json-diff';
+import { documentOf } from './rules-resolver';
+
+/** 'default' (the engine's), 'published' (the club's current), or a rule set's id. */
+export type RuleSetRefInput = string;
+
+export const DEFAULT_RULE_SET_ID = 'default';
+const MAX_CHANGED_PATHS = 200;
+
+/** A rule-set document with where it came from. */
+interface Resolved {
+  ref: RuleSetRef;
+  body: RuleSetDocument;
+  row: RuleSet | null;
+}
+
+/**
+ * The club's rule sets. Each row is one version: drafts are edited under an optimistic revision,
+ * publishing freezes a draft and archives the one before, so old plans keep the version they name.
+ */
+export class RuleSetService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async list(auth: AuthContext): Promise<RuleSetDto[]> {
+    const rows = await this.dataSource.manager.getRepository(RuleSet).find({
+      where: { clubId: auth.clubId },
+      relations: { author: true },
+      order: { version: 'DESC', createdAt: 'DESC' },
+    });
+    return rows.map(ruleSetDto);
+  }
+
+  async get(auth: AuthContext, id: RuleSetRefInput): Promise<RuleSetDto> {
+    const resolved = await this.resolve(this.dataSource.manager, auth, id);
+    return resolved.row ? ruleSetDto(resolved.row) : defaultDto(resolved.body);
+  }
+
+  /** A new draft copied from the published rules (or the default, or a named version). */
+  async createDraft(
+    auth: AuthContext,
+    input: { name?: string; from?: RuleSetRefInput },
+  ): Promise<RuleSetDto> {
+    return this.dataSource.transaction(async (manager) => {
+      await lockClubRuleSets(manager, auth.clubId);
+      const base = await this.resolve(manager, auth, input.from ?? 'published');
+      const repo = manager.getRepository(RuleSet);
+      const draft = repo.create({
+        id: randomUUID(),
+        clubId: auth.clubId,
+        name: input.name ?? `${base.body.name ?? 'Club rules'} (draft)`.slice(0, 120),
+        version: (await maxVersion(manager, auth.clubId)) + 1,
+        status: 'draft',
+        body: base.body,
+        authorId: auth.userId,
+        basedOnId: base.row?.id ?? null,
+      });
+      draft.body = documentOf(draft);
+      const row = await repo.save(draft);
+      await recordChange(manager, auth, row, 'create', []);
+      return this.reload(manager, row.id);
+    });
+  }
+
+  /** Saves a draft when If-Match names its current revision; otherwise 409 with the current one. */
+  async update(
+    auth: AuthContext,
+    id: string,
+    input: { name?: string; body?: unknown },
+    ifMatch: number,
+  ): Promise<RuleSetDto> {
+    if (input.body !== undefined) {
+      const errors = ruleSetErrors(input.body);
+      if (errors.length) throw badRequest('The rule set is not valid.', errors);
+    }
+    return this.dataSource.transaction(async (manager) => {
+      const scope = new ClubScope(manager, auth);
+      const current = await scope.ruleSet(id);
+      if (current.status !== 'draft') {
+        throw conflict(
+          `Version ${current.version} is ${current.status} and cannot change; start a draft from it.`,
+        );
+      }
+      const body = input.body === undefined ? current.body : { ...(input.body as object) };
+      const name = input.name ?? current.name;
+      const result: { id: string }[] = await manager.query(
+        `UPDATE rule_set SET body = $1, name = $2, revision = revision + 1, "updatedAt" = now(), "authorId" = $3
+          WHERE id = $4 AND "clubId" = $5 AND revision = $6 AND status = 'draft' RETURNING id`,
+        [JSON.stringify(body), name, auth.userId, id, auth.clubId, ifMatch],
+      );
+      const updated = (Array.isArray(result[0]) ? result[0] : result) as { id: string }[];
+      if (!updated.length) {
+        const fresh = await this.reload(manager, id);
+        throw new DetailedProblem(
+          409,
+          'Conflict',
+          `Someone saved this draft after revision ${ifMatch}; it is now at revision ${fresh.revision}. ` +
+            'Reload it and re-apply your change.',
+          { currentRevision: fresh.revision, current: fresh },
+          undefined,
+          '/problems/stale-revision',
+        );
+      }
+      const row = await manager.getRepository(RuleSet).findOneByOrFail({ id });
+      const paths = jsonDiff(current.body, row.body).map((d) => d.path);
+      if (input.name !== undefined && input.name !== current.name) paths.unshift('(name)');
+      await recordChange(manager, auth, row, 'update', paths);
+      return this.reload(manager, id);
+    });
+  }
+
+  /** Makes a draft the club's rules for new plans; the previously published version is archived. */
+  async publish(auth: AuthContext, id: string, ifMatch: number | null): Promise<RuleSetDto> {
+    return this.dataSource.transaction(async (manager) => {
+      await lockClubRuleSets(manager, auth.clubId);
+      const scope = new ClubScope(manager, auth);
+      const row = await scope.ruleSet(id);
+      if (row.status !== 'draft') throw conflict(`Version ${row.version} is already ${row.status}.`);
+      if (ifMatch !== null && ifMatch !== row.revision) {
+        const current = await this.reload(manager, id);
+        throw new DetailedProblem(
+          409,
+          'Conflict',
+          `The draft changed after revision ${ifMatch}; review revision ${row.revision} before publishing.`,
+          { currentRevision: row.revision, current },
+          undefined,
+          '/problems/stale-revision',
+        );
+      }
+      const errors = ruleSetErrors(row.body);
+      if (errors.length)
+        throw badRequest('The draft is not a valid rule set; fix it before publishing.', errors);
+      return this.makePublished(manager, auth, row, 'publish');
+    });
+  }
+
+  /** Publishes a copy of an earlier version (or the default) as the newest version. */
+  async rollback(auth: AuthContext, to: RuleSetRefInput): Promise<RuleSetDto> {
+    return this.dataSource.transaction(async (manager) => {
+      await lockClubRuleSets(manager, auth.clubId);
+      const target = await this.resolve(manager, auth, to);
+      const repo = manager.getRepository(RuleSet);
+      const row = repo.create({
+        id: randomUUID(),
+        clubId: auth.clubId,
+        name: target.row ? target.row.name : (target.body.name ?? 'Default rules'),
+        version: (await maxVersion(manager, auth.clubId)) + 1,
+        status: 'draft',
+        body: target.body,
+        authorId: auth.userId,
+        basedOnId: target.row?.id ?? null,
+      });
+      return this.makePublished(manager, auth, row, 'rollback');
+    });
+  }
+
+  async history(auth: AuthContext, ruleSetId?: string): Promise<RuleSetChangeDto[]> {
+    const scope = new ClubScope(this.dataSource.manager, auth);
+    if (ruleSetId) await scope.ruleSet(ruleSetId);
+    const rows = await this.dataSource.manager.getRepository(RuleSetChange).find({
+      where: { clubId: auth.clubId, ...(ruleSetId ? { ruleSetId } : {}) },
+      order: { createdAt: 'DESC' },
+      take: 200,
+    });
+    return rows.map((r) => ({
+      id: r.id,
+      ruleSetId: r.ruleSetId,
+      action: r.action,
+      version: r.version,
+      revision: r.revision,
+      authorId: r.authorId,
+      authorName: r.authorName,
+      changedPaths: r.changedPaths,
+      createdAt: r.createdAt.toISOString(),
+    }));
+  }
+
+  async diff(auth: AuthContext, from: RuleSetRefInput, to: RuleSetRefInput): Promise<RuleSetDiffDto> {
+    const manager = this.dataSource.manager;
+    const [a, b] = [await this.resolve(manager, auth, from), await this.resolve(manager, auth, to)];
+    // The id and version inside a document always differ between versions; they are not rule changes.
+    const strip = (d: RuleSetDocument) => ({ ...d, id: undefined, version: undefined });
+    return { from: a.ref, to: b.ref, changes: jsonDiff(strip(a.body), strip(b.body)) };
+  }
+
+  /** Resolves 'default', 'published' or an id of the caller's club (404 otherwise). */
+  async resolve(manager: EntityManager, auth: AuthContext, ref: RuleSetRefInput): Promise<Resolved> {
+    if (ref === 'published') {
+      const row = await manager
+        .getRepository(RuleSet)
+        .findOne({ where: { clubId: auth.clubId, status: 'published' }, order: { version: 'DESC' } });
+      if (!row) return this.resolve(manager, auth, DEFAULT_RULE_SET_ID);
+      return { row, body: documentOf(row), ref: refOf(row) };
+    }
+    if (ref === DEFAULT_RULE_SET_ID) {
+      const body = defaultRules();
+      return {
+        row: null,
+        body,
+        ref: {
+          id: DEFAULT_RULE_SET_ID,
+          name: body.name ?? 'Default rules',
+          version: body.version,
+          status: 'built-in',
+        },
+      };
+    }
+    const row = await new ClubScope(manager, auth).ruleSet(ref);
+    return { row, body: documentOf(row), ref: refOf(row) };
+  }
+
+  private async makePublished(
+    manager: EntityManager,
+    auth: AuthContext,
+    row: RuleSet,
+    action: RuleSetChangeAction,
+  ): Promise<RuleSetDto> {
+    const version = Math.max(row.version, (await maxPublishedVersion(manager, auth.clubId)) + 1);
+    await manager.query(
+      `UPDATE rule_set SET status = 'archived', revision = revision + 1, "updatedAt" = now()
+        WHERE "clubId" = $1 AND status = 'published'`,
+      [auth.clubId],
+    );
+    row.version = version;
+    row.status = 'published';
+    row.publishedAt = new Date();
+    row.body = documentOf(row);
+    const saved = await manager.getRepository(RuleSet).save(row);
+    await recordChange(manager, auth, saved, action, []);
+    return this.reload(manager, saved.id);
+  }
+
+  private async reload(manager: EntityManager, id: string): Promise<RuleSetDto> {
+    const row = await manager
+      .getRepository(RuleSet)
+      .findOneOrFail({ where: { id }, relations: { author: true } });
+    return ruleSetDto(row);
+  }
+}
+
+/** Serialises rule-set writes of one club (version numbers, the single published row). */
+async function lockClubRuleSets(manager: EntityManager, clubId: string): Promise<void> {
+  await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', [`rule_set:${clubId}`]);
+}
+
+async function maxVersion(manager: EntityManager, clubId: string): Promise<number> {
+  const [row] = await manager.query(
+    'SELECT COALESCE(MAX(version), 0) AS v FROM rule_set WHERE "clubId" = $1',
+    [clubId],
+  );
+  return Math.max(Number(row?.v ?? 0), defaultRules().version ?? 0);
+}
+
+async function maxPublishedVersion(manager: EntityManager, clubId: string): Promise<number> {
+  const [row] = await manager.query(
+    `SELECT COALESCE(MAX(version), 0) AS v FROM rule_set WHERE "clubId" = $1 AND status <> 'draft'`,
+    [clubId],
+  );
+  return Number(row?.v ?? 0);
+}
+
+async function recordChange(
+  manager: EntityManager,
+  auth: AuthContext,
+  row: RuleSet,
+  action: RuleSetChangeAction,
+  changedPaths: string[],
+): Promise<void> {
+  const repo = manager.getRepository(RuleSetChange);
+  await repo.insert({
+    clubId: auth.clubId,
+    ruleSetId: row.id,
+    action,
+    version: row.version,
+    revision: row.revision,
+    authorId: auth.userId,
+    authorName: auth.name,
+    changedPaths: changedPaths.slice(0, MAX_CHANGED_PATHS),
+    body: row.body as object,
+  });
+}
+
+function refOf(row: RuleSet): RuleSetRef {
+  return { id: row.id, name: row.name, version: row.version, status: row.status };
+}
+
+export function ruleSetDto(row: RuleSet & { author?: User | null }): RuleSetDto {
+  return {
+    id: row.id,
+    name: row.name,
+    version: row.version,
+    status: row.status,
+    body: row.body,
+    authorId: row.authorId ?? '',
+    authorName: row.author?.name ?? '',
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+    revision: row.revision,
+  };
+}
+
+function defaultDto(body: RuleSetDocument): RuleSetDto {
+  const epoch = new Date(0).toISOString();
+  return {
+    id: DEFAULT_RULE_SET_ID,
+    name: body.name ?? 'Default rules',
+    version: body.version,
+    status: 'published',
+    body,
+    authorId: '',
+    authorName: 'Conewise',
+    createdAt: epoch,
+    updatedAt: epoch,
+    revision: 0,
+  };
+}

@@ -1,0 +1,32 @@
+import type { EntityManager } from 'typeorm';
+import type { RuleSetDocument } from '../../shared/types/plan-rules';
+import { RuleSet } from '../entities/rule-set';
+import { defaultRules } from './engine-port';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** A stored rule set as the engine reads it: the row's id and version written into the document. */
+export function documentOf(row: RuleSet): RuleSetDocument {
+  return { ...(row.body as RuleSetDocument), id: row.id, version: row.version, name: row.name };
+}
+
+/** The club's published rules, or the engine's default when it has published none. */
+export async function publishedRules(manager: EntityManager, clubId: string): Promise<RuleSetDocument> {
+  const row = await manager
+    .getRepository(RuleSet)
+    .findOne({ where: { clubId, status: 'published' }, order: { version: 'DESC' } });
+  return row ? documentOf(row) : defaultRules();
+}
+
+/** The rules a stored plan was made with (its id and version), so old plans keep their rules. */
+export async function rulesOfPlan(
+  manager: EntityManager,
+  clubId: string,
+  ruleSetId: string,
+): Promise<RuleSetDocument> {
+  if (UUID.test(ruleSetId)) {
+    const row = await manager.getRepository(RuleSet).findOne({ where: { id: ruleSetId, clubId } });
+    if (row) return documentOf(row);
+  }
+  return defaultRules();
+}

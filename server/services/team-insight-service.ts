@@ -1,0 +1,90 @@
+import { In, type DataSource } from 'typeorm';
+import type { InsightPlayerDto, InsightSessionDto, TeamInsightDto } from '../../shared/types/plan-api';
+import { Attendance } from '../entities/attendance';
+import { Player } from '../entities/player';
+import { SessionPlan } from '../entities/session-plan';
+import type { AuthContext } from '../http/auth-context';
+import { ClubScope } from './club-scope';
+
+/** How many of the team's latest sessions the insight covers. */
+export const INSIGHT_SESSIONS = 30;
+
+const ESTIMATE_NOTE =
+  'Touches are estimates from each activity’s typical rate per minute, not counts. Sessions without recorded ' +
+  'attendance count the players the plan was made for.';
+
+/** Attendance over time and estimated touches per player, from stored plans and attendance. */
+export class TeamInsightService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async insight(auth: AuthContext, teamId: string): Promise<TeamInsightDto> {
+    const manager = this.dataSource.manager;
+    const team = await new ClubScope(manager, auth).teamToRead(teamId);
+    const latest = await manager.getRepository(SessionPlan).find({
+      where: { teamId: team.id, clubId: auth.clubId },
+      order: { date: { direction: 'DESC', nulls: 'LAST' }, createdAt: 'DESC' },
+      take: INSIGHT_SESSIONS,
+    });
+    const plans = latest.reverse();
+    const attendance = plans.length
+      ? await manager
+          .getRepository(Attendance)
+          .find({ where: { planId: In(plans.map((p) => p.id)), clubId: auth.clubId } })
+      : [];
+    const cameTo = new Map<string, Set<string>>();
+    for (const a of attendance) {
+      if (!cameTo.has(a.planId)) cameTo.set(a.planId, new Set());
+      cameTo.get(a.planId)!.add(a.playerId);
+    }
+    const roster = await manager
+      .getRepository(Player)
+      .find({ where: { teamId: team.id, clubId: auth.clubId } });
+    const totals = new Map<string, { sessions: number; touches: number }>(
+      roster.map((p) => [p.id, { sessions: 0, touches: 0 }]),
+    );
+
+    const sessions: InsightSessionDto[] = plans.map((row) => {
+      const recorded = cameTo.get(row.id);
+      const present = recorded ?? new Set(row.plan.request.players.map((p) => p.id));
+      const touches: Record<string, number> = {};
+      for (const id of present) {
+        const estimate = Math.round(row.plan.touches?.[id] ?? 0);
+        touches[id] = estimate;
+        const t = totals.get(id);
+        if (t) {
+          t.sessions++;
+          t.touches += estimate;
+        }
+      }
+      return {
+        planId: row.id,
+        date: row.date,
+        createdAt: row.createdAt.toISOString(),
+        kind: row.kind,
+        present: present.size,
+        recorded: !!recorded,
+        touches,
+      };
+    });
+    const players: InsightPlayerDto[] = roster
+      .map((p) => {
+        const t = totals.get(p.id)!;
+        return {
+          playerId: p.id,
+          displayName: p.displayName,
+          active: p.active,
+          sessionsAttended: t.sessions,
+          totalTouches: t.touches,
+          averageTouches: t.sessions ? Math.round(t.touches / t.sessions) : 0,
+        };
+      })
+      .sort((a, b) => a.displayName.localeCompare(b.displayName));
+    return {
+      teamId: team.id,
+      squadSize: roster.filter((p) => p.active).length,
+      sessions,
+      players,
+      estimateNote: ESTIMATE_NOTE,
+    };
+  }
+}

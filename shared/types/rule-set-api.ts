@@ -1,0 +1,79 @@
+/** API shapes for the club-rules workspace: history, diff and "try it" previews. */
+import type { RuleSetDto } from './api';
+
+export type RuleSetChangeAction = 'create' | 'update' | 'publish' | 'rollback';
+
+/** One line of a club's rule-set history. */
+export interface RuleSetChangeDto {
+  id: string;
+  ruleSetId: string;
+  action: RuleSetChangeAction;
+  version: number;
+  revision: number;
+  authorId: string | null;
+  authorName: string;
+  /** JSON pointers the change touched. */
+  changedPaths: string[];
+  createdAt: string;
+}
+
+/** One difference between two rule-set documents. */
+export interface RuleSetDiffEntry {
+  /** JSON pointer into the document. */
+  path: string;
+  change: 'added' | 'removed' | 'changed';
+  before?: unknown;
+  after?: unknown;
+}
+
+export interface RuleSetRef {
+  id: string;
+  name: string;
+  version: number;
+  status: string;
+}
+
+/** Answer of GET /api/rule-sets/diff?from=&to=. */
+export interface RuleSetDiffDto {
+  from: RuleSetRef;
+  to: RuleSetRef;
+  changes: RuleSetDiffEntry[];
+}
+
+/** The parts of a generated plan a head of coaching compares. */
+export interface PlanOutline {
+  /** Per phase: name, minutes, group sizes and area sides. */
+  phases: { name: string; minutes: number; groups: number[]; areas: string[] }[];
+  warnings: string[];
+  cautions: string[];
+  /** Set when the engine could not make a plan with these rules. */
+  error?: string;
+}
+
+/** One squad tried with the current rules and with the draft. */
+export interface PreviewCase {
+  /** e.g. "sample: odd numbers" or "recent plan: U10 Otters, 2026-11-28". */
+  label: string;
+  source: 'sample' | 'recent-plan';
+  current: PlanOutline;
+  draft: PlanOutline;
+  /** Plain-words differences: groups, areas, timing, warnings. */
+  differences: string[];
+}
+
+/** Answer of POST /api/rule-sets/:id/preview. */
+export interface RuleSetPreviewDto {
+  draft: { id: string; version: number };
+  against: { id: string; version: number };
+  cases: PreviewCase[];
+}
+
+/** 409 answer of PUT /api/rule-sets/:id when If-Match is stale. */
+export interface RuleSetConflictProblem {
+  type: string;
+  title: string;
+  status: 409;
+  detail: string;
+  currentRevision: number;
+  current: RuleSetDto;
+}
