@@ -23,7 +23,7 @@ export interface PlanQuery {
 
 /** Body of PATCH /api/plans/:id: the edits made, or the plan as the browser's engine re-checked it. */
 export interface UpdatePlanBody {
-  edits?: PlanEdit[];
+  edit?: PlanEdit;
   plan?: Plan;
   status?: 'draft' | 'final';
 }

@@ -14,8 +14,10 @@ export interface PlayerBody {
 export class PlayersApi {
   private readonly http = inject(HttpClient);
 
-  list(teamId: string): Observable<PlayerDto[]> {
-    return this.http.get<PlayerDto[]>(`/api/teams/${teamId}/players`);
+  /** The team's players; inactive ones too when asked (the squad table shows them). */
+  list(teamId: string, includeInactive = false): Observable<PlayerDto[]> {
+    const params = includeInactive ? { includeInactive: 'true' } : undefined;
+    return this.http.get<PlayerDto[]>(`/api/teams/${teamId}/players`, { params });
   }
 
   create(teamId: string, body: PlayerBody): Observable<PlayerDto> {
@@ -37,11 +39,11 @@ export class PlayersApi {
     return this.http.post<CsvPreview>(`/api/teams/${teamId}/players/import`, form);
   }
 
-  /** Adds the previewed rows that had no errors. */
-  commitImport(teamId: string, importId: string): Observable<{ created: number }> {
-    return this.http.post<{ created: number }>(
-      `/api/teams/${teamId}/players/import/${encodeURIComponent(importId)}/commit`,
-      {},
-    );
+  /** Adds the previewed rows that had no errors; the server checks they are the rows it previewed. */
+  commitImport(teamId: string, preview: Pick<CsvPreview, 'importId' | 'rows'>): Observable<PlayerDto[]> {
+    return this.http.post<PlayerDto[]>(`/api/teams/${teamId}/players/import/commit`, {
+      importId: preview.importId,
+      rows: preview.rows,
+    });
   }
 }

@@ -170,6 +170,27 @@ export class PlanWizard {
           ...kit,
           ...(team ? { width: team.usualSpace.width, length: team.usualSpace.length } : {}),
         });
+        const from = this.from();
+        if (from) this.reuse(from);
+      },
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+  }
+
+  /** Starts from a past plan's kit, space, timing and aim; who is here stays today's answer. */
+  private reuse(planId: string): void {
+    this.plansApi.get(planId).subscribe({
+      next: (past) => {
+        const r = past.request;
+        this.form.controls.who.controls.coaches.setValue(r.coaches);
+        this.form.controls.kit.patchValue({ ...r.equipment, width: r.space.width, length: r.space.length });
+        this.form.controls.time.patchValue({
+          minutes: r.minutes,
+          kind: r.kind,
+          focus: r.focus ?? [],
+          kickOff: past.kickOff ?? '',
+        });
+        this.status.set(`Started from the plan of ${past.date ?? 'an earlier day'}. Tick who is here today.`);
       },
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });

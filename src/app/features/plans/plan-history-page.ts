@@ -1,9 +1,67 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatPaginatorModule, PageEvent } from '@angular/material/paginator';
+import { MatTableModule } from '@angular/material/table';
+import { RouterLink } from '@angular/router';
+import type { PlanSummaryDto, TeamDto } from '../../../../shared/types';
+import { PlansApi } from '../../core/api/plans-api';
+import { TeamsApi } from '../../core/api/teams-api';
+import { AuthStore } from '../../core/auth/auth-store';
+import { problemMessage } from '../../core/http/problem-message';
+import { KIND_LABELS } from '../../core/labels/plan-labels';
+import { shortDay } from '../../core/time/dates';
 
-/** Placeholder until the screen is built. */
+/** A team's past plans, newest first, each reusable for today with today's players. */
 @Component({
   selector: 'cw-plan-history-page',
-  template: '<section class="cw-page"><h1>Past plans</h1></section>',
+  imports: [RouterLink, MatTableModule, MatPaginatorModule, MatButtonModule, MatIconModule],
+  templateUrl: './plan-history-page.html',
+  styleUrl: './plan-history-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class PlanHistoryPage {}
+export class PlanHistoryPage {
+  private readonly plansApi = inject(PlansApi);
+  private readonly teamsApi = inject(TeamsApi);
+  private readonly auth = inject(AuthStore);
+
+  readonly teamId = input.required<string>();
+
+  protected readonly team = signal<TeamDto | null>(null);
+  protected readonly plans = signal<PlanSummaryDto[]>([]);
+  protected readonly total = signal(0);
+  protected readonly pageSize = signal(20);
+  protected readonly pageIndex = signal(0);
+  protected readonly error = signal<string | null>(null);
+  protected readonly loaded = signal(false);
+  protected readonly kindLabels: Record<string, string> = KIND_LABELS;
+  protected readonly day = shortDay;
+  protected readonly canPlan = computed(() => this.auth.hasRole('lead', 'coach'));
+  protected readonly columns = computed(() =>
+    this.canPlan() ? ['date', 'kind', 'players', 'status', 'reuse'] : ['date', 'kind', 'players', 'status'],
+  );
+
+  constructor() {
+    effect(() => {
+      const id = this.teamId();
+      this.teamsApi.get(id).subscribe({ next: (team) => this.team.set(team), error: () => undefined });
+      this.load(id, this.pageIndex());
+    });
+  }
+
+  private load(teamId: string, pageIndex: number): void {
+    this.plansApi.list({ teamId, page: pageIndex + 1 }).subscribe({
+      next: (page) => {
+        this.plans.set(page.items);
+        this.total.set(page.total);
+        this.pageSize.set(page.pageSize);
+        this.loaded.set(true);
+      },
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+  }
+
+  protected changePage(event: PageEvent): void {
+    this.pageIndex.set(event.pageIndex);
+  }
+}

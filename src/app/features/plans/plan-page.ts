@@ -1,9 +1,144 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIconModule } from '@angular/material/icon';
+import { MatMenuModule } from '@angular/material/menu';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { CdkDropListGroup } from '@angular/cdk/drag-drop';
+import { Router, RouterLink } from '@angular/router';
+import type { Phase, SessionPlanDto } from '../../../../shared/types';
+import { PlansApi } from '../../core/api/plans-api';
+import { AuthStore } from '../../core/auth/auth-store';
+import { ActivityOption, BrowserEngine } from '../../core/engine/browser-engine';
+import { problemMessage } from '../../core/http/problem-message';
+import { KIND_LABELS } from '../../core/labels/plan-labels';
+import { shortDay } from '../../core/time/dates';
+import { PhaseTimeline } from './components/phase-timeline';
+import { PlanNotices } from './components/plan-notices';
+import { ShareDialog } from './components/share-dialog';
+import { PlayerMoveRequest, StationCard } from './components/station-card';
+import { WhyPanel } from './components/why-panel';
+import { PlanSession } from './services/plan-session';
 
-/** Placeholder until the screen is built. */
+/** The plan: timeline to kick-off, station cards with diagrams, cautions, why, edits, print and share. */
 @Component({
   selector: 'cw-plan-page',
-  template: '<section class="cw-page"><h1>Plan</h1></section>',
+  imports: [
+    RouterLink,
+    CdkDropListGroup,
+    MatButtonModule,
+    MatIconModule,
+    MatMenuModule,
+    PhaseTimeline,
+    PlanNotices,
+    StationCard,
+    WhyPanel,
+  ],
+  providers: [PlanSession],
+  templateUrl: './plan-page.html',
+  styleUrl: './plan-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class PlanPage {}
+export class PlanPage {
+  protected readonly session = inject(PlanSession);
+  private readonly plansApi = inject(PlansApi);
+  private readonly engine = inject(BrowserEngine);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
+  private readonly auth = inject(AuthStore);
+  private readonly router = inject(Router);
+
+  readonly planId = input.required<string>();
+
+  protected readonly kindLabels = KIND_LABELS;
+  protected readonly day = shortDay;
+  protected readonly canEdit = computed(() => this.auth.hasRole('lead', 'coach'));
+  protected readonly activities = signal<ActivityOption[]>([]);
+  protected readonly printing = signal(false);
+
+  protected readonly totalPlayers = computed(() => this.session.plan()?.request.players.length ?? 0);
+
+  constructor() {
+    const handedOver = (this.router.getCurrentNavigation()?.extras.state?.['plan'] ??
+      history.state?.plan ??
+      null) as SessionPlanDto | null;
+    effect(() => this.session.open(this.planId(), handedOver));
+  }
+
+  protected movePlayer(phaseIndex: number, move: PlayerMoveRequest, phase: Phase): void {
+    const name = this.session.names().get(move.playerId) ?? 'Player';
+    const to = phase.stations.find((s) => s.id === move.toStationId)?.title ?? 'another station';
+    void this.session.edit(
+      { type: 'move-player', playerId: move.playerId, toStationId: move.toStationId, phaseIndex },
+      `${name} moved to ${to} in ${phase.name}`,
+    );
+  }
+
+  protected resize(phaseIndex: number, stationId: string, step: 'larger' | 'smaller', title: string): void {
+    void this.session.edit(
+      { type: 'resize-area', stationId, phaseIndex, step },
+      `${title}: area made ${step}`,
+    );
+  }
+
+  /** Fills the swap menu from the engine's activity list, leaving out what the club rules forbid. */
+  protected async loadActivities(phase: Phase): Promise<void> {
+    const engine = await this.engine.load();
+    const forbidden = this.session.plan()?.forbiddenActivities ?? [];
+    this.activities.set(
+      engine
+        .activities()
+        .filter((a) => a.id !== phase.activityId)
+        .filter((a) => !forbidden.some((f) => f.activityId === a.id || f.kind === a.kind)),
+    );
+  }
+
+  protected swap(phaseIndex: number, activity: ActivityOption): void {
+    void this.session.edit(
+      { type: 'swap-activity', phaseIndex, activityId: activity.id },
+      `Phase ${phaseIndex + 1} swapped to ${activity.title}`,
+    );
+  }
+
+  protected regenerate(): void {
+    const seed = Math.random().toString(36).slice(2, 10);
+    void this.session.edit({ type: 'regenerate', seed }, 'New groups and layout made');
+  }
+
+  protected print(): void {
+    const saved = this.session.saved();
+    if (!saved) return;
+    this.printing.set(true);
+    this.plansApi.pdf(saved.id).subscribe({
+      next: (blob) => {
+        this.printing.set(false);
+        const url = URL.createObjectURL(blob);
+        const link = document.createElement('a');
+        link.href = url;
+        link.download = `conewise-${saved.teamName.replace(/\W+/g, '-').toLowerCase()}-${saved.date ?? 'plan'}.pdf`;
+        link.click();
+        setTimeout(() => URL.revokeObjectURL(url), 10_000);
+      },
+      error: (error: unknown) => {
+        this.printing.set(false);
+        this.session.error.set(problemMessage(error));
+      },
+    });
+  }
+
+  protected share(): void {
+    const saved = this.session.saved();
+    if (!saved) return;
+    this.dialog
+      .open<ShareDialog, string, number>(ShareDialog, { data: saved.id, width: '480px' })
+      .afterClosed()
+      .subscribe((sent) => {
+        if (sent) {
+          this.snackBar.open(`Plan sent to ${sent} recipient${sent === 1 ? '' : 's'}.`, undefined, {
+            duration: 4000,
+            politeness: 'polite',
+          });
+        }
+      });
+  }
+}

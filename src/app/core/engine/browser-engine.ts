@@ -1,0 +1,32 @@
+import { Injectable } from '@angular/core';
+import type { ActivityKind, Notice, Plan } from '../../../../shared/types';
+import type { PlanEdit } from '../../../../shared/types/plan-edit';
+
+/** An activity the coach may swap a phase to. */
+export interface ActivityOption {
+  id: string;
+  kind: ActivityKind;
+  title: string;
+}
+
+/** What the plan page needs from the engine, running in the browser. */
+export interface BrowserEngineApi {
+  applyEdit(plan: Plan, edit: PlanEdit): Promise<Plan>;
+  /** Problems the edited plan has (empty when it holds every rule). */
+  checkPlan(plan: Plan): Notice[];
+  activities(): ActivityOption[];
+}
+
+/**
+ * Loads the engine on first use, so it stays out of the initial bundle; the plan page re-checks
+ * each edit with it at once, before the server saves it.
+ */
+@Injectable({ providedIn: 'root' })
+export class BrowserEngine {
+  private loading: Promise<BrowserEngineApi> | null = null;
+
+  load(): Promise<BrowserEngineApi> {
+    this.loading ??= import('./engine-adapter').then((m) => m.createEngineAdapter());
+    return this.loading;
+  }
+}

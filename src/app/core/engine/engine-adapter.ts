@@ -1,0 +1,11 @@
+/** Binds the engine (loaded lazily by BrowserEngine) to what the plan page needs. */
+import { applyEdit, checkPlan, listActivities } from '../../../../engine/index';
+import type { BrowserEngineApi } from './browser-engine';
+
+export function createEngineAdapter(): BrowserEngineApi {
+  return {
+    applyEdit: async (plan, edit) => await applyEdit(plan, edit),
+    checkPlan: (plan) => checkPlan(plan),
+    activities: () => listActivities().map((a) => ({ id: a.id, kind: a.kind, title: a.title })),
+  };
+}

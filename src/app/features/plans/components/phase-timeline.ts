@@ -1,0 +1,64 @@
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import type { Phase } from '../../../../../shared/types';
+import { clockTime, minutesOfDay } from '../../../core/time/dates';
+
+interface TimelineRow {
+  index: number;
+  name: string;
+  minutes: number;
+  clock: string | null;
+  toKickOff: number;
+  share: number;
+}
+
+/** The phases in order, with clock times that count down to kick-off. */
+@Component({
+  selector: 'cw-phase-timeline',
+  template: `
+    <ol class="cw-timeline" aria-label="Timeline">
+      @for (row of rows(); track row.index) {
+        <li [style.flex-grow]="row.share">
+          <a [href]="'#phase-' + row.index" class="cw-slot">
+            <span class="cw-clock">{{ row.clock ?? 'min ' + (total() - row.toKickOff) }}</span>
+            <span class="cw-name">{{ row.name }}</span>
+            <span class="cw-left">{{ row.minutes }} min · {{ row.toKickOff }} to {{ endLabel() }}</span>
+          </a>
+        </li>
+      }
+      <li class="cw-end">
+        <span class="cw-clock">{{ endClock() ?? 'min ' + total() }}</span>
+        <span class="cw-name">{{ endLabel() === 'kick-off' ? 'Kick-off' : 'End' }}</span>
+      </li>
+    </ol>
+  `,
+  styleUrl: './phase-timeline.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class PhaseTimeline {
+  readonly phases = input.required<Phase[]>();
+  /** HH:MM the plan ends at (kick-off for a match warm-up). */
+  readonly kickOff = input<string | null>(null);
+  readonly matchDay = input(true);
+
+  protected readonly total = computed(() => this.phases().at(-1)?.endMinute ?? 0);
+  protected readonly endLabel = computed(() => (this.matchDay() ? 'kick-off' : 'the end'));
+  private readonly startOfDay = computed(() => {
+    const end = minutesOfDay(this.kickOff());
+    return end === null ? null : end - this.total();
+  });
+  protected readonly endClock = computed(() => {
+    const end = minutesOfDay(this.kickOff());
+    return end === null ? null : clockTime(end);
+  });
+
+  protected readonly rows = computed<TimelineRow[]>(() =>
+    this.phases().map((phase, index) => ({
+      index,
+      name: phase.name,
+      minutes: phase.endMinute - phase.startMinute,
+      clock: this.startOfDay() === null ? null : clockTime((this.startOfDay() ?? 0) + phase.startMinute),
+      toKickOff: this.total() - phase.startMinute,
+      share: Math.max(1, phase.endMinute - phase.startMinute),
+    })),
+  );
+}

@@ -1,0 +1,101 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import {
+  AbstractControl,
+  NonNullableFormBuilder,
+  ReactiveFormsModule,
+  ValidationErrors,
+  Validators,
+} from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { PlansApi } from '../../../core/api/plans-api';
+import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
+import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
+
+const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+
+/** Splits "a@x.org, b@y.org" or one address a line into addresses. */
+export function parseRecipients(text: string): string[] {
+  return text
+    .split(/[\s,;]+/)
+    .map((s) => s.trim())
+    .filter(Boolean);
+}
+
+function recipientsValidator(control: AbstractControl): ValidationErrors | null {
+  const list = parseRecipients(String(control.value ?? ''));
+  if (list.length === 0) return { message: 'Add at least one e-mail address.' };
+  const bad = list.filter((address) => !EMAIL.test(address));
+  if (bad.length) return { message: `Not an e-mail address: ${bad.join(', ')}` };
+  if (list.length > 20) return { message: 'At most 20 recipients at once.' };
+  return null;
+}
+
+/** Sends the printed card by e-mail to the people the coach names. */
+@Component({
+  selector: 'cw-share-dialog',
+  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatButtonModule],
+  template: `
+    <h2 mat-dialog-title>Share the plan</h2>
+    <form [formGroup]="form" (ngSubmit)="send()" novalidate>
+      <mat-dialog-content>
+        <p>Each person gets an e-mail with the one-page card attached as a PDF.</p>
+        @if (error(); as text) {
+          <p class="cw-form-error" role="alert">{{ text }}</p>
+        }
+        <mat-form-field appearance="outline" class="cw-wide">
+          <mat-label>E-mail addresses</mat-label>
+          <textarea
+            matInput
+            formControlName="recipients"
+            rows="3"
+            cdkFocusInitial
+            data-testid="share-recipients"
+          ></textarea>
+          <mat-hint>Separate with commas or put one a line.</mat-hint>
+          <mat-error>{{ message(form.controls.recipients, 'Recipients') }}</mat-error>
+        </mat-form-field>
+        <mat-form-field appearance="outline" class="cw-wide">
+          <mat-label>Note (optional)</mat-label>
+          <input matInput formControlName="message" maxlength="500" />
+        </mat-form-field>
+      </mat-dialog-content>
+      <mat-dialog-actions align="end">
+        <button mat-button type="button" mat-dialog-close>Cancel</button>
+        <button mat-flat-button type="submit" [disabled]="sending()" data-testid="share-send">Send</button>
+      </mat-dialog-actions>
+    </form>
+  `,
+  styles: '.cw-wide { width: 100%; min-width: 260px; }',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ShareDialog {
+  private readonly planId = inject<string>(MAT_DIALOG_DATA);
+  private readonly plansApi = inject(PlansApi);
+  private readonly ref = inject<MatDialogRef<ShareDialog, number>>(MatDialogRef);
+  protected readonly message = controlMessage;
+  protected readonly error = signal<string | null>(null);
+  protected readonly sending = signal(false);
+  protected readonly form = inject(NonNullableFormBuilder).group({
+    recipients: ['', [Validators.required, recipientsValidator]],
+    message: [''],
+  });
+
+  protected send(): void {
+    this.form.markAllAsTouched();
+    if (this.form.invalid) return;
+    const recipients = parseRecipients(this.form.controls.recipients.value);
+    this.sending.set(true);
+    this.plansApi.share(this.planId, recipients, this.form.controls.message.value.trim()).subscribe({
+      next: () => this.ref.close(recipients.length),
+      error: (error: unknown) => {
+        this.sending.set(false);
+        const fields = problemFieldErrors(error);
+        const unmatched = applyFieldErrors(this.form, fields);
+        this.error.set([problemMessage(error), ...unmatched].join(' '));
+      },
+    });
+  }
+}

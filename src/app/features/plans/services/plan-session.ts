@@ -1,0 +1,82 @@
+import { computed, inject, Injectable, signal } from '@angular/core';
+import { firstValueFrom } from 'rxjs';
+import type { Notice, Plan, SessionPlanDto } from '../../../../../shared/types';
+import type { PlanEdit } from '../../../../../shared/types/plan-edit';
+import { PlansApi } from '../../../core/api/plans-api';
+import { BrowserEngine } from '../../../core/engine/browser-engine';
+import { problemMessage } from '../../../core/http/problem-message';
+
+/**
+ * One plan being looked at and edited: each edit is applied and re-checked by the engine in the
+ * browser at once, then saved; the server's answer is the plan of record.
+ */
+@Injectable()
+export class PlanSession {
+  private readonly plansApi = inject(PlansApi);
+  private readonly engine = inject(BrowserEngine);
+
+  readonly saved = signal<SessionPlanDto | null>(null);
+  readonly plan = signal<Plan | null>(null);
+  readonly problems = signal<Notice[]>([]);
+  readonly busy = signal(false);
+  readonly error = signal<string | null>(null);
+  /** Read out by screen readers after every change. */
+  readonly announcement = signal('');
+
+  readonly names = computed(
+    () => new Map((this.plan()?.request.players ?? []).map((p) => [p.id, p.name ?? p.id] as const)),
+  );
+  readonly goalkeepers = computed(
+    () => new Set((this.plan()?.request.players ?? []).filter((p) => p.goalkeeper).map((p) => p.id)),
+  );
+
+  /** Starts from a plan handed over by the wizard, else fetches it. */
+  open(id: string, handedOver?: SessionPlanDto | null): void {
+    if (handedOver && handedOver.id === id) {
+      this.accept(handedOver);
+      return;
+    }
+    this.plansApi.get(id).subscribe({
+      next: (dto) => this.accept(dto),
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+  }
+
+  private accept(dto: SessionPlanDto): void {
+    this.saved.set(dto);
+    this.plan.set(dto.plan);
+    this.error.set(null);
+  }
+
+  /** Applies an edit in the browser, shows it, then saves it; a refused save puts the plan back. */
+  async edit(edit: PlanEdit, describe: string): Promise<void> {
+    const saved = this.saved();
+    const before = this.plan();
+    if (!saved || !before || this.busy()) return;
+    this.busy.set(true);
+    this.error.set(null);
+    try {
+      const engine = await this.engine.load();
+      const next = await engine.applyEdit(before, edit);
+      const problems = engine.checkPlan(next);
+      this.plan.set(next);
+      this.problems.set(problems);
+      this.announcement.set(
+        problems.length
+          ? `${describe}. Re-checked: ${problems.length} problem${problems.length === 1 ? '' : 's'} to look at.`
+          : `${describe}. Re-checked: the plan still holds every rule.`,
+      );
+      const stored = await firstValueFrom(this.plansApi.update(saved.id, { edit }, saved.version));
+      this.saved.set(stored);
+      this.plan.set(stored.plan);
+    } catch (error: unknown) {
+      this.plan.set(before);
+      this.problems.set([]);
+      const text = error instanceof Error && !('status' in error) ? error.message : problemMessage(error);
+      this.error.set(`That change was not saved: ${text}`);
+      this.announcement.set(`That change was not saved: ${text}`);
+    } finally {
+      this.busy.set(false);
+    }
+  }
+}
