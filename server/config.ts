@@ -8,7 +8,8 @@ export const PROJECT_ROOT = resolve(dirname(fileURLToPath(import.meta.url)), '..
 /** Git-ignored folder for local state: the private cluster, the generated JWT secret, caught mail. */
 export const DATA_DIR = process.env['CONEWISE_DATA_DIR'] ?? join(PROJECT_ROOT, '.data');
 /** Where `ng build` writes the browser bundle. */
-export const CLIENT_DIST = join(PROJECT_ROOT, 'dist', 'conewise', 'browser');
+export const CLIENT_DIST =
+  process.env['CONEWISE_CLIENT_DIST'] ?? join(PROJECT_ROOT, 'dist', 'conewise', 'browser');
 
 export interface AppConfig {
   /** Reported by GET /api/health. */

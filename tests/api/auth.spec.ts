@@ -1,0 +1,150 @@
+import fc from 'fast-check';
+import jwt from 'jsonwebtoken';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import {
+  registerClub,
+  startTestApp,
+  TEST_PASSWORD,
+  uniqueEmail,
+  type SignedIn,
+  type TestApp,
+} from '../support/api-test-app';
+
+describe('auth: register, login, me', () => {
+  let app: TestApp;
+  let lead: SignedIn;
+  beforeAll(async () => {
+    app = await startTestApp();
+    lead = await registerClub(app, 'Auth Test Club');
+  });
+  afterAll(() => app.close());
+
+  it('register creates a club and its lead and returns a token', async () => {
+    const email = uniqueEmail('Founder');
+    const response = await app.api.post('/api/auth/register', {
+      clubName: '  Hollin Park Youth ',
+      name: 'Founding Lead',
+      email,
+      password: TEST_PASSWORD,
+    });
+    expect(response.status).toBe(201);
+    expect(response.body.user).toMatchObject({
+      email: email.toLowerCase(),
+      role: 'lead',
+      clubName: 'Hollin Park Youth',
+    });
+    const claims = jwt.decode(response.body.token, { complete: true })!;
+    expect(claims.header.alg).toBe('HS256');
+    expect((claims.payload as jwt.JwtPayload).exp).toBeGreaterThan(Date.now() / 1000);
+  });
+
+  it('register refuses an e-mail that is already taken (any case) with 409', async () => {
+    const response = await app.api.post('/api/auth/register', {
+      clubName: 'Another',
+      name: 'Someone',
+      email: lead.user.email.toUpperCase(),
+      password: TEST_PASSWORD,
+    });
+    expect(response.status).toBe(409);
+    expect(response.body.errors[0].field).toBe('email');
+  });
+
+  it('login answers a token for the right password and 401 otherwise', async () => {
+    const ok = await app.api.post('/api/auth/login', { email: lead.user.email, password: TEST_PASSWORD });
+    expect(ok.status).toBe(200);
+    expect(ok.body.user.id).toBe(lead.user.id);
+    const wrong = await app.api.post('/api/auth/login', {
+      email: lead.user.email,
+      password: 'not-the-password',
+    });
+    expect(wrong.status).toBe(401);
+    const unknown = await app.api.post('/api/auth/login', { email: uniqueEmail(), password: TEST_PASSWORD });
+    expect(unknown.status).toBe(401);
+    expect(unknown.body.detail).toBe(wrong.body.detail);
+  });
+
+  it('me returns the signed-in user', async () => {
+    const response = await app.api.get('/api/auth/me', { token: lead.token });
+    expect(response.status).toBe(200);
+    expect(response.body).toEqual(lead.user);
+  });
+
+  it('me without a token, with a forged token, alg none or an expired token answers 401', async () => {
+    const claims = { club: lead.user.clubId, sub: lead.user.id };
+    const forged = jwt.sign(claims, 'some-other-secret-that-is-long', { algorithm: 'HS256' });
+    const none = jwt.sign(claims, '', { algorithm: 'none' });
+    const [header, payload] = lead.token.split('.');
+    const stripped = `${header}.${payload}.`;
+    const noneHeader = Buffer.from(JSON.stringify({ alg: 'none', typ: 'JWT' })).toString('base64url');
+    const handMadeNone = `${noneHeader}.${payload}.`;
+    const hs512 = jwt.sign(claims, app.config.jwtSecret, { algorithm: 'HS512' });
+    const expired = jwt.sign({ ...claims, exp: Math.floor(Date.now() / 1000) - 60 }, app.config.jwtSecret, {
+      algorithm: 'HS256',
+    });
+    for (const token of [undefined, 'garbage', forged, none, stripped, handMadeNone, hs512, expired]) {
+      const response = await app.api.get('/api/auth/me', { token });
+      expect(response.status, `token ${token}`).toBe(401);
+      expect(response.headers.get('content-type')).toMatch(/problem\+json/);
+    }
+  });
+
+  it('a token for a user that no longer exists answers 401', async () => {
+    const ghost = jwt.sign({ club: lead.user.clubId }, app.config.jwtSecret, {
+      algorithm: 'HS256',
+      subject: '00000000-0000-4000-8000-000000000000',
+    });
+    expect((await app.api.get('/api/auth/me', { token: ghost })).status).toBe(401);
+  });
+
+  it('junk bodies for register and login never cause a 5xx', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.jsonValue(),
+        fc.constantFrom('/api/auth/register', '/api/auth/login'),
+        async (junk, path) => {
+          const response = await app.api.post(path, junk);
+          expect(response.status).toBeGreaterThanOrEqual(400);
+          expect(response.status).toBeLessThan(500);
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+
+  it('records with the right keys but junk values never cause a 5xx', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.record({
+          clubName: fc.anything(),
+          name: fc.anything(),
+          email: fc.anything(),
+          password: fc.anything(),
+        }),
+        async (junk) => {
+          const response = await app.api.post('/api/auth/register', junk);
+          expect(response.status).toBeLessThan(500);
+        },
+      ),
+      { numRuns: 40 },
+    );
+  });
+});
+
+describe('auth rate limit', () => {
+  let app: TestApp;
+  beforeAll(async () => {
+    app = await startTestApp({ authRateLimit: { windowMs: 60_000, max: 3 } });
+  });
+  afterAll(() => app.close());
+
+  it('answers 429 after too many sign-in attempts', async () => {
+    const statuses: number[] = [];
+    for (let i = 0; i < 5; i++) {
+      statuses.push(
+        (await app.api.post('/api/auth/login', { email: 'x@example.org', password: 'wrong' })).status,
+      );
+    }
+    expect(statuses.slice(0, 3)).toEqual([401, 401, 401]);
+    expect(statuses.slice(3)).toEqual([429, 429]);
+  });
+});
