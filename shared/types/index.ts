@@ -1,3 +1,5 @@
 export * from './plan-request';
 export * from './plan';
+export * from './plan-edit';
+export * from './plan-rules';
 export * from './api';

@@ -56,7 +56,9 @@ export interface Station {
   progressions: { easier: string[]; harder: string[] };
   coachingPoints: string[];
   /** What the players do, in a sentence or two. */
-  description?: string;
+  description: string;
+  /** Players beyond the activity's active slots (at most one by the club's rule). */
+  waiting?: number;
 }
 
 export interface Phase {
@@ -97,4 +99,22 @@ export interface Plan {
   trace: TraceEntry[];
   ruleSet: { id: string; version: number };
   seed: string;
+  /** Says that touches and activeShare are estimates from the rule set's per-activity rates. */
+  estimateNote?: string;
+  /** Activities the club rules ruled out for this request, and why (for the swap menu). */
+  forbiddenActivities?: ForbiddenActivity[];
+  /** Pitch-side arrivals and departures; phases that ended before a change keep the old roster. */
+  rosterChanges?: RosterChangeRecord[];
+}
+
+export interface RosterChangeRecord {
+  fromMinute: number;
+  added: string[];
+  removed: string[];
+}
+
+export interface ForbiddenActivity {
+  kind?: ActivityKind;
+  activityId?: string;
+  reason: string;
 }

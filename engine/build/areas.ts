@@ -1,0 +1,44 @@
+/** Area sides from the rule set's tables: scaled with group size and level, stepped, clamped. */
+import type { ActivityKind, AgeBand, Area, AreaSize, Level, RuleParameters, Space } from '../../shared/types';
+
+export function areaTable(params: RuleParameters, kind: ActivityKind, band: AgeBand): AreaSize {
+  return params.areas[kind][band];
+}
+
+/** Width from the table for a group of `total` (players and any coach), before steps. */
+export function baseWidth(
+  params: RuleParameters,
+  kind: ActivityKind,
+  band: AgeBand,
+  level: Level,
+  total: number,
+) {
+  const t = areaTable(params, kind, band);
+  return t.width * Math.sqrt(Math.max(1, total) / t.forPlayers) * params.areaLevelScale[level];
+}
+
+/** Whole-metre area for a width, keeping the table's proportion and the rule's bounds and the space. */
+export function areaForWidth(table: AreaSize, width: number, space: Space): Area {
+  const w = Math.min(table.maxWidth, Math.max(table.minWidth, width));
+  let area = { width: Math.round(w), length: Math.round((w * table.length) / table.width) };
+  // Too big for the space: shrink proportionally, the layout warns if below the rule minimum.
+  const fit = Math.min(1, space.width / area.width, space.length / area.length);
+  const fitRotated = Math.min(1, space.width / area.length, space.length / area.width);
+  const scale = Math.max(fit, fitRotated);
+  if (scale < 1) {
+    area = {
+      width: Math.max(1, Math.floor(area.width * scale)),
+      length: Math.max(1, Math.floor(area.length * scale)),
+    };
+  }
+  return area;
+}
+
+/** Steps a width by whole table steps within the rule's bounds. */
+export function steppedWidth(table: AreaSize, width: number, steps: number): number {
+  return Math.min(table.maxWidth, Math.max(table.minWidth, width + steps * table.step));
+}
+
+export function describeArea(a: Area): string {
+  return a.width === a.length ? `${a.width} m` : `${a.width} × ${a.length} m`;
+}

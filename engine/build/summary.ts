@@ -1,0 +1,42 @@
+/** Plan-wide figures after the phases are built: kit needed, touches, active share, touch target. */
+import type { Equipment, Notice, Phase, Plan, RuleParameters } from '../../shared/types';
+import { estimateTouches } from './touches';
+
+export function equipmentNeeded(phases: Phase[]): Equipment {
+  const need: Equipment = { balls: 0, cones: 0, bibs: 0, goals: 0 };
+  for (const phase of phases) {
+    const sum: Equipment = { balls: 0, cones: 0, bibs: 0, goals: 0 };
+    for (const s of phase.stations) {
+      sum.balls += s.equipment.balls;
+      sum.cones += s.equipment.cones;
+      sum.bibs += s.equipment.bibs;
+      sum.goals += s.equipment.goals;
+    }
+    need.balls = Math.max(need.balls, sum.balls);
+    need.cones = Math.max(need.cones, sum.cones);
+    need.bibs = Math.max(need.bibs, sum.bibs);
+    need.goals = Math.max(need.goals, sum.goals);
+  }
+  return need;
+}
+
+export function summarize(
+  phases: Phase[],
+  params: RuleParameters,
+  minutes: number,
+  warnings: Notice[],
+): Pick<Plan, 'touches' | 'activeShare' | 'equipmentNeeded'> {
+  const { touches, activeShare } = estimateTouches(phases, params);
+  const target = params.touchTarget;
+  if (target.active && minutes >= target.fromMinutes) {
+    const values = Object.values(touches);
+    const below = values.filter((t) => t < target.minPerPlayer).length;
+    if (below > 0) {
+      warnings.push({
+        code: 'touches-below-target',
+        message: `Estimated touches: ${below} player(s) below ${target.minPerPlayer} (lowest ${Math.min(...values)}); aim at ${target.minPerPlayer}–${target.maxPerPlayer} before kick-off — more ball-mastery or more balls would help.`,
+      });
+    }
+  }
+  return { touches, activeShare, equipmentNeeded: equipmentNeeded(phases) };
+}

@@ -1,0 +1,30 @@
+/** All randomness in the engine goes through seedrandom, so a seed reproduces a plan exactly. */
+import seedrandom from 'seedrandom';
+
+export type Rng = () => number;
+
+export function createRng(seed: string): Rng {
+  return seedrandom(seed);
+}
+
+/** A fresh seed for a request that brought none; returned in the plan so it can be replayed. */
+export function generateSeed(): string {
+  const rng = seedrandom();
+  return Math.floor(rng() * 36 ** 8)
+    .toString(36)
+    .padStart(8, '0');
+}
+
+/** Fisher–Yates shuffle driven by the seeded generator; returns a new array. */
+export function shuffle<T>(items: readonly T[], rng: Rng): T[] {
+  const out = items.slice();
+  for (let i = out.length - 1; i > 0; i--) {
+    const j = Math.floor(rng() * (i + 1));
+    [out[i], out[j]] = [out[j], out[i]];
+  }
+  return out;
+}
+
+export function pick<T>(items: readonly T[], rng: Rng): T {
+  return items[Math.floor(rng() * items.length)];
+}

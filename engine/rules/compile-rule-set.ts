@@ -1,0 +1,63 @@
+/**
+ * Validates and compiles a rule set once per (id, version, content) and caches it, so a plan
+ * only pays for running the rules.
+ */
+import { Engine } from 'json-rules-engine';
+import type { RuleSetDocument } from '../../shared/types';
+import { validateRuleSet, type PointerError } from '../schema/validate-rule-set';
+
+export interface CompiledRuleSet {
+  document: RuleSetDocument;
+  engine: Engine;
+  /** Document order of each rule id, for a stable trace. */
+  order: Map<string, number>;
+}
+
+export class RuleSetError extends Error {
+  constructor(readonly errors: PointerError[]) {
+    super(`Rule set refused: ${errors.map((e) => `${e.pointer} ${e.message}`).join('; ')}`);
+    this.name = 'RuleSetError';
+  }
+}
+
+const byObject = new WeakMap<object, CompiledRuleSet>();
+const byVersion = new Map<string, CompiledRuleSet>();
+
+export function compileRuleSet(document: RuleSetDocument): CompiledRuleSet {
+  const hit = byObject.get(document);
+  if (hit) return hit;
+  const key = `${document.id}@${document.version}#${fingerprint(document)}`;
+  const known = byVersion.get(key);
+  if (known) {
+    byObject.set(document, known);
+    return known;
+  }
+  const validation = validateRuleSet(document);
+  if (!validation.ok) throw new RuleSetError(validation.errors);
+
+  const engine = new Engine([], { allowUndefinedFacts: true });
+  const order = new Map<string, number>();
+  document.rules.forEach((rule, i) => {
+    order.set(rule.id, i);
+    engine.addRule({
+      name: rule.id,
+      conditions: rule.conditions as never,
+      event: rule.event as never,
+    });
+  });
+  const compiled: CompiledRuleSet = { document, engine, order };
+  byVersion.set(key, compiled);
+  byObject.set(document, compiled);
+  return compiled;
+}
+
+/** FNV-1a over the JSON text: two drafts sharing an id and version never share a cache entry. */
+function fingerprint(document: RuleSetDocument): string {
+  const text = JSON.stringify(document);
+  let hash = 0x811c9dc5;
+  for (let i = 0; i < text.length; i++) {
+    hash ^= text.charCodeAt(i);
+    hash = Math.imul(hash, 0x01000193);
+  }
+  return (hash >>> 0).toString(36) + text.length.toString(36);
+}

@@ -1,0 +1,109 @@
+/** Runs the club's json-rules-engine rules on the facts and turns fired events into effects. */
+import type {
+  ActivityKind,
+  ForbiddenActivity,
+  Notice,
+  RuleEvent,
+  RuleParameters,
+  TraceEntry,
+} from '../../shared/types';
+import type { CompiledRuleSet } from './compile-rule-set';
+import type { Facts } from './facts';
+
+export interface ProgressionStep {
+  direction: 'harder' | 'easier' | 'keep';
+  reason: string;
+  ruleId: string;
+}
+
+export interface RuleOutcome {
+  /** The rule set's parameters with every fired set-parameter applied. */
+  parameters: RuleParameters;
+  forbidden: ForbiddenActivity[];
+  required: { kind: ActivityKind; reason: string }[];
+  warnings: Notice[];
+  cautions: Notice[];
+  steps: Partial<Record<ActivityKind, ProgressionStep>>;
+  trace: TraceEntry[];
+}
+
+interface EngineResult {
+  name?: string | number;
+  event?: { type: string; params?: Record<string, unknown> };
+}
+
+export async function evaluateRules(compiled: CompiledRuleSet, facts: Facts): Promise<RuleOutcome> {
+  const { results, failureResults } = await compiled.engine.run(facts);
+  const doc = compiled.document;
+  const fired = new Set((results as EngineResult[]).map((r) => String(r.name)));
+  const evaluated = new Set([...fired, ...(failureResults as EngineResult[]).map((r) => String(r.name))]);
+
+  const outcome: RuleOutcome = {
+    parameters: doc.parameters,
+    forbidden: [],
+    required: [],
+    warnings: [],
+    cautions: [],
+    steps: {},
+    trace: [],
+  };
+  const overrides: { path: string; value: unknown }[] = [];
+
+  for (const rule of doc.rules) {
+    if (!evaluated.has(rule.id)) continue;
+    const didFire = fired.has(rule.id);
+    const entry: TraceEntry = { ruleId: rule.id, description: rule.description, fired: didFire };
+    if (didFire) entry.effect = applyEvent(rule.id, rule.event, outcome, overrides);
+    outcome.trace.push(entry);
+  }
+  if (overrides.length) outcome.parameters = withOverrides(doc.parameters, overrides);
+  return outcome;
+}
+
+function applyEvent(
+  ruleId: string,
+  event: RuleEvent,
+  outcome: RuleOutcome,
+  overrides: { path: string; value: unknown }[],
+): string {
+  switch (event.type) {
+    case 'set-parameter':
+      overrides.push({ path: event.params.path, value: event.params.value });
+      return event.params.effect;
+    case 'forbid-activity':
+      outcome.forbidden.push({ ...event.params });
+      return `forbids ${event.params.activityId ?? event.params.kind}: ${event.params.reason}`;
+    case 'require-activity':
+      outcome.required.push({ kind: event.params.kind, reason: event.params.reason });
+      return `requires ${event.params.kind}: ${event.params.reason}`;
+    case 'warning':
+      outcome.warnings.push({ code: event.params.code, message: event.params.message });
+      return `warning ${event.params.code}`;
+    case 'caution':
+      outcome.cautions.push({ ...event.params });
+      return `caution ${event.params.code}`;
+    case 'progression-step':
+      outcome.steps[event.params.kind] = {
+        direction: event.params.direction,
+        reason: event.params.reason,
+        ruleId,
+      };
+      return event.params.reason;
+  }
+}
+
+/** Copies only the branches an override touches; the cached document stays untouched. */
+function withOverrides(base: RuleParameters, overrides: { path: string; value: unknown }[]): RuleParameters {
+  const root: Record<string, unknown> = { ...base };
+  for (const { path, value } of overrides) {
+    const keys = path.split('.');
+    let node = root;
+    for (let i = 0; i < keys.length - 1; i++) {
+      const child = { ...(node[keys[i]] as Record<string, unknown>) };
+      node[keys[i]] = child;
+      node = child;
+    }
+    node[keys[keys.length - 1]] = value;
+  }
+  return root as unknown as RuleParameters;
+}
