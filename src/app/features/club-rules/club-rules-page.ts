@@ -1,9 +1,240 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { HttpErrorResponse } from '@angular/common/http';
+import { DatePipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatTabsModule } from '@angular/material/tabs';
+import type { RuleSetDto } from '../../../../shared/types';
+import { problemMessage } from '../../core/http/problem-message';
+import { RuleHistory } from './rule-history';
+import { RuleJsonEditor } from './rule-json-editor';
+import { RuleTables, type RuleEdit } from './rule-tables';
+import { RuleTryIt } from './rule-try-it';
+import { diffJson } from './services/json-diff';
+import { setAt } from './services/json-pointer';
+import { rebaseEdits, type Rebased } from './services/rebase-edits';
+import { RuleSetsApi } from './services/rule-sets-api';
+import { loadRuleValidator, type RuleProblem } from './services/rule-validation';
 
-/** Placeholder until the screen is built. */
+/** A save refused because another lead saved first. */
+interface Conflict {
+  message: string;
+  currentRevision: number | null;
+}
+
+/** The head of coaching's workspace: tune the club's rules, try them, publish, look back, roll back. */
 @Component({
   selector: 'cw-club-rules-page',
-  template: '<section class="cw-page"><h1>Club rules</h1></section>',
+  imports: [
+    DatePipe,
+    MatButtonModule,
+    MatIconModule,
+    MatTabsModule,
+    RuleTables,
+    RuleJsonEditor,
+    RuleHistory,
+    RuleTryIt,
+  ],
+  templateUrl: './club-rules-page.html',
+  styleUrl: './club-rules-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class ClubRulesPage {}
+export class ClubRulesPage {
+  private readonly api = inject(RuleSetsApi);
+
+  protected readonly versions = signal<RuleSetDto[]>([]);
+  protected readonly draft = signal<RuleSetDto | null>(null);
+  protected readonly published = signal<RuleSetDto | null>(null);
+  /** The draft as last saved (what a 409 rebases from). */
+  protected readonly baseBody = signal<unknown>(null);
+  /** The draft as edited on screen. */
+  protected readonly body = signal<unknown>(null);
+  protected readonly problems = signal<RuleProblem[]>([]);
+  protected readonly loading = signal(true);
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+  protected readonly notice = signal<string | null>(null);
+  protected readonly conflict = signal<Conflict | null>(null);
+  protected readonly rebased = signal<Rebased | null>(null);
+
+  protected readonly editing = computed(() => this.draft() !== null);
+  protected readonly shownBody = computed(() =>
+    this.editing() ? this.body() : (this.published()?.body ?? null),
+  );
+  protected readonly unsavedCount = computed(() =>
+    this.editing() ? diffJson(this.baseBody(), this.body()).length : 0,
+  );
+  protected readonly unpublishedCount = computed(() => {
+    const published = this.published();
+    return this.editing() && published ? diffJson(published.body, this.body()).length : 0;
+  });
+
+  constructor() {
+    this.load();
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    effect(() => {
+      const body = this.shownBody();
+      clearTimeout(timer);
+      if (!body) return;
+      timer = setTimeout(() => {
+        void loadRuleValidator().then((validate) => this.problems.set(validate(body).errors));
+      }, 150);
+    });
+  }
+
+  protected load(): void {
+    this.loading.set(true);
+    this.error.set(null);
+    this.api.list().subscribe({
+      next: (list) => {
+        const versions = [...list].sort(
+          (a, b) => b.version - a.version || b.updatedAt.localeCompare(a.updatedAt),
+        );
+        this.versions.set(versions);
+        const published = versions.find((v) => v.status === 'published') ?? null;
+        const draft = versions.find((v) => v.status === 'draft') ?? null;
+        this.withBody(published, (full) => this.published.set(full));
+        this.withBody(draft, (full) => this.takeDraft(full));
+        if (!draft) this.takeDraft(null);
+        this.loading.set(false);
+      },
+      error: (error: unknown) => {
+        this.loading.set(false);
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+
+  protected startEditing(): void {
+    const from = this.published()?.id ?? 'default';
+    const name = this.published()?.name ?? 'Club rules';
+    this.run(this.api.createDraft(name, from), (draft) => {
+      this.versions.update((list) => [draft, ...list]);
+      this.withBody(draft, (full) => this.takeDraft(full));
+      this.notice.set('Draft started. Nothing changes for coaches until you publish.');
+    });
+  }
+
+  protected applyEdit(edit: RuleEdit): void {
+    this.body.update((body) => setAt(body, edit.pointer, edit.value));
+  }
+
+  protected replaceBody(body: unknown): void {
+    this.body.set(body);
+  }
+
+  protected discard(): void {
+    this.body.set(this.baseBody());
+    this.rebased.set(null);
+    this.notice.set('Unsaved changes discarded.');
+  }
+
+  protected save(then?: () => void): void {
+    const draft = this.draft();
+    if (!draft) return;
+    this.conflict.set(null);
+    this.busy.set(true);
+    this.api.save(draft, this.body()).subscribe({
+      next: (saved) => {
+        this.busy.set(false);
+        const body = saved.body ?? this.body();
+        this.draft.set({ ...saved, body });
+        this.baseBody.set(body);
+        this.body.set(body);
+        this.rebased.set(null);
+        this.versions.update((list) => list.map((v) => (v.id === saved.id ? { ...saved, body } : v)));
+        this.notice.set('Draft saved.');
+        then?.();
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        if (error instanceof HttpErrorResponse && error.status === 409) {
+          const current = (error.error as { revision?: number; currentRevision?: number } | null) ?? {};
+          this.conflict.set({
+            message: problemMessage(error),
+            currentRevision: current.currentRevision ?? current.revision ?? null,
+          });
+        } else {
+          this.error.set(problemMessage(error));
+        }
+      },
+    });
+  }
+
+  /** After a 409: takes the other lead's save and puts this lead's edits back on top of it. */
+  protected reloadAndReapply(): void {
+    const draft = this.draft();
+    if (!draft) return;
+    this.run(this.api.get(draft.id), (theirs) => {
+      const result = rebaseEdits(this.baseBody(), this.body(), theirs.body);
+      this.draft.set(theirs);
+      this.baseBody.set(theirs.body);
+      this.body.set(result.body);
+      this.rebased.set(result);
+      this.conflict.set(null);
+      this.versions.update((list) => list.map((v) => (v.id === theirs.id ? theirs : v)));
+      this.notice.set(
+        `Loaded ${theirs.authorName}'s save and re-applied your ${result.reapplied.length} change${result.reapplied.length === 1 ? '' : 's'}. Check, then save.`,
+      );
+    });
+  }
+
+  protected publish(): void {
+    const draft = this.draft();
+    if (!draft) return;
+    if (this.problems().length) {
+      this.error.set('Fix the problems listed before publishing; coaches would get plans from broken rules.');
+      return;
+    }
+    const go = () =>
+      this.run(this.api.publish(draft.id), (published) => {
+        this.notice.set(
+          `Published as version ${published.version}. New plans use it; old plans keep theirs.`,
+        );
+        this.load();
+      });
+    if (this.unsavedCount() > 0) this.save(go);
+    else go();
+  }
+
+  protected rollbackTo(version: RuleSetDto): void {
+    if (!confirm(`Publish version ${version.version} again? New plans will use it.`)) return;
+    this.run(this.api.rollback(version.id), (published) => {
+      this.notice.set(
+        `Rolled back: version ${version.version}'s rules are published again as version ${published.version}.`,
+      );
+      this.load();
+    });
+  }
+
+  private takeDraft(draft: RuleSetDto | null): void {
+    this.draft.set(draft);
+    this.baseBody.set(draft?.body ?? null);
+    this.body.set(draft?.body ?? null);
+  }
+
+  /** Calls back with the version's body loaded (the list may send summaries). */
+  private withBody(version: RuleSetDto | null, use: (full: RuleSetDto) => void): void {
+    if (!version) return;
+    if (version.body && typeof version.body === 'object') use(version);
+    else
+      this.api
+        .get(version.id)
+        .subscribe({ next: use, error: (e: unknown) => this.error.set(problemMessage(e)) });
+  }
+
+  private run<T>(call: import('rxjs').Observable<T>, next: (value: T) => void): void {
+    this.busy.set(true);
+    this.error.set(null);
+    call.subscribe({
+      next: (value) => {
+        this.busy.set(false);
+        next(value);
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+}

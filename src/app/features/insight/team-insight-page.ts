@@ -1,9 +1,136 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { DatePipe, DecimalPipe } from '@angular/common';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  signal,
+  untracked,
+} from '@angular/core';
+import { RouterLink } from '@angular/router';
+import type { ChartConfiguration } from 'chart.js';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import type { TeamDto } from '../../../../shared/types';
+import type { TeamInsightDto } from '../../../../shared/types/plan-api';
+import { problemMessage } from '../../core/http/problem-message';
+import { InsightChart } from './insight-chart';
+import { InsightApi } from './services/insight-api';
+import { LOW_TOUCH_SHARE, summariseInsight } from './services/insight-summary';
 
-/** Placeholder until the screen is built. */
+const PITCH = '#2f7d4f';
+const CONE = '#d9631c';
+
+/** Who comes and who gets the ball: a team's attendance and estimated touches over its sessions. */
 @Component({
   selector: 'cw-team-insight-page',
-  template: '<section class="cw-page"><h1>Team insight</h1></section>',
+  imports: [DatePipe, DecimalPipe, RouterLink, MatButtonModule, MatIconModule, InsightChart],
+  templateUrl: './team-insight-page.html',
+  styleUrl: './team-insight-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class TeamInsightPage {}
+export class TeamInsightPage {
+  /** The team's id, from the route. */
+  readonly teamId = input.required<string>();
+
+  private readonly api = inject(InsightApi);
+  protected readonly insight = signal<TeamInsightDto | null>(null);
+  protected readonly team = signal<TeamDto | null>(null);
+  protected readonly error = signal<string | null>(null);
+
+  protected readonly summary = computed(() => {
+    const insight = this.insight();
+    return insight ? summariseInsight(insight) : null;
+  });
+  protected readonly lowIds = computed(
+    () => new Set(this.summary()?.fewestTouches.map((p) => p.playerId) ?? []),
+  );
+  protected readonly playersByTouches = computed(() =>
+    [...(this.insight()?.players ?? [])]
+      .filter((p) => p.sessionsAttended > 0)
+      .sort((a, b) => a.averageTouches - b.averageTouches),
+  );
+
+  protected readonly attendanceChart = computed<ChartConfiguration | null>(() => {
+    const insight = this.insight();
+    if (!insight?.sessions.length) return null;
+    return {
+      type: 'bar',
+      data: {
+        labels: insight.sessions.map((s) => this.sessionLabel(s.date ?? s.createdAt)),
+        datasets: [
+          {
+            label: 'Players present',
+            data: insight.sessions.map((s) => s.present),
+            backgroundColor: insight.sessions.map((s) => (s.recorded ? PITCH : '#9cc7ad')),
+            borderRadius: 4,
+          },
+        ],
+      },
+      options: {
+        scales: {
+          y: {
+            beginAtZero: true,
+            suggestedMax: insight.squadSize,
+            ticks: { precision: 0 },
+            title: { display: true, text: 'players' },
+          },
+        },
+        plugins: { legend: { display: false } },
+      },
+    };
+  });
+
+  protected readonly touchesChart = computed<ChartConfiguration | null>(() => {
+    const players = this.playersByTouches();
+    if (!players.length) return null;
+    const low = this.lowIds();
+    return {
+      type: 'bar',
+      data: {
+        labels: players.map((p) => p.displayName),
+        datasets: [
+          {
+            label: 'Estimated touches per session attended',
+            data: players.map((p) => Math.round(p.averageTouches)),
+            backgroundColor: players.map((p) => (low.has(p.playerId) ? CONE : PITCH)),
+            borderRadius: 4,
+          },
+        ],
+      },
+      options: {
+        indexAxis: 'y',
+        scales: { x: { beginAtZero: true, title: { display: true, text: 'touches (estimate)' } } },
+        plugins: { legend: { display: false } },
+      },
+    };
+  });
+
+  protected readonly touchesHeight = computed(() => Math.max(200, this.playersByTouches().length * 28 + 60));
+  protected readonly lowShare = Math.round(LOW_TOUCH_SHARE * 100);
+
+  constructor() {
+    effect(() => {
+      const teamId = this.teamId();
+      untracked(() => this.load(teamId));
+    });
+  }
+
+  private load(teamId: string): void {
+    this.error.set(null);
+    this.api.insight(teamId).subscribe({
+      next: (insight) => this.insight.set(insight),
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+    this.api.team(teamId).subscribe({ next: (team) => this.team.set(team), error: () => undefined });
+  }
+
+  private sessionLabel(iso: string): string {
+    const date = new Date(iso);
+    return Number.isNaN(date.getTime())
+      ? iso
+      : date.toLocaleDateString(undefined, { day: 'numeric', month: 'short' });
+  }
+}

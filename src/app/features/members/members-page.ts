@@ -10,6 +10,7 @@ import { DatePipe } from '@angular/common';
 import { forkJoin } from 'rxjs';
 import { ROLES, type InvitationDto, type MemberDto, type Role } from '../../../../shared/types';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { AuthStore } from '../../core/auth/auth-store';
 import { MembersApi } from './services/members-api';
 
 /** What each role may do, in the words the invite form shows. */
@@ -48,6 +49,9 @@ export class MembersPage {
   protected readonly sending = signal(false);
   protected readonly inviteError = signal<string | null>(null);
   protected readonly inviteNotice = signal<string | null>(null);
+  protected readonly rowError = signal<string | null>(null);
+  /** The signed-in lead, who cannot demote or remove themselves here. */
+  protected readonly me = inject(AuthStore).user;
 
   /** Invitations not yet accepted, soonest to expire first. */
   protected readonly pending = computed(() =>
@@ -84,6 +88,44 @@ export class MembersPage {
 
   protected isExpired(invitation: InvitationDto): boolean {
     return new Date(invitation.expiresAt).getTime() < Date.now();
+  }
+
+  protected changeRole(member: MemberDto, role: Role): void {
+    if (role === member.role) return;
+    this.rowError.set(null);
+    this.api.changeRole(member.userId, role).subscribe({
+      next: (updated) => {
+        this.members.update((list) => list.map((m) => (m.userId === updated.userId ? updated : m)));
+        this.inviteNotice.set(`${updated.name} is now ${updated.role}.`);
+      },
+      error: (error: unknown) => {
+        // Put the select back to what the server still holds.
+        this.members.update((list) => [...list]);
+        this.rowError.set(problemMessage(error));
+      },
+    });
+  }
+
+  protected removeMember(member: MemberDto): void {
+    if (!confirm(`Remove ${member.name} from the club? They lose access at once.`)) return;
+    this.rowError.set(null);
+    this.api.removeMember(member.userId).subscribe({
+      next: () => {
+        this.members.update((list) => list.filter((m) => m.userId !== member.userId));
+        this.inviteNotice.set(`${member.name} was removed from the club.`);
+      },
+      error: (error: unknown) => this.rowError.set(problemMessage(error)),
+    });
+  }
+
+  protected revoke(invitation: InvitationDto): void {
+    this.api.revoke(invitation.id).subscribe({
+      next: () => {
+        this.invitations.update((list) => list.filter((i) => i.id !== invitation.id));
+        this.inviteNotice.set(`The invitation to ${invitation.email} no longer works.`);
+      },
+      error: (error: unknown) => this.rowError.set(problemMessage(error)),
+    });
   }
 
   protected sendInvitation(): void {

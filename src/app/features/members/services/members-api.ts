@@ -18,6 +18,21 @@ export class MembersApi {
     return this.http.get<InvitationDto[]>('/api/invitations');
   }
 
+  /** PATCH /api/members/:userId: gives a member another role. */
+  changeRole(userId: string, role: Role): Observable<MemberDto> {
+    return this.http.patch<MemberDto>(`/api/members/${encodeURIComponent(userId)}`, { role });
+  }
+
+  /** DELETE /api/members/:userId: takes someone out of the club. */
+  removeMember(userId: string): Observable<void> {
+    return this.http.delete<void>(`/api/members/${encodeURIComponent(userId)}`);
+  }
+
+  /** DELETE /api/invitations/:id: the link stops working. */
+  revoke(invitationId: string): Observable<void> {
+    return this.http.delete<void>(`/api/invitations/${encodeURIComponent(invitationId)}`);
+  }
+
   /** POST /api/invitations: e-mails a single-use link that joins the club with the role. */
   invite(email: string, role: Role): Observable<InvitationDto> {
     return this.http.post<InvitationDto>('/api/invitations', { email, role });

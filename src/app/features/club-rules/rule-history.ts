@@ -1,0 +1,123 @@
+import { DatePipe } from '@angular/common';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  output,
+  signal,
+} from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import type { RuleSetDto } from '../../../../shared/types';
+import type { RuleSetChangeDto } from '../../../../shared/types/rule-set-api';
+import { problemMessage } from '../../core/http/problem-message';
+import { diffJson, showValue, type JsonChange } from './services/json-diff';
+import { RuleSetsApi } from './services/rule-sets-api';
+
+/** Every version with who saved it and when, a diff between any two, and roll back. */
+@Component({
+  selector: 'cw-rule-history',
+  imports: [DatePipe, MatButtonModule, MatIconModule],
+  templateUrl: './rule-history.html',
+  styleUrl: './rule-history.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RuleHistory {
+  private readonly api = inject(RuleSetsApi);
+
+  /** All versions, newest first. */
+  readonly versions = input.required<RuleSetDto[]>();
+  /** The id of the version new plans use. */
+  readonly publishedId = input<string | null>(null);
+  /** Asks the page to publish an earlier version again. */
+  readonly rollback = output<RuleSetDto>();
+
+  protected readonly fromId = signal<string | null>(null);
+  protected readonly toId = signal<string | null>(null);
+  private readonly bodies = signal<Record<string, unknown>>({});
+  protected readonly error = signal<string | null>(null);
+  protected readonly showValue = showValue;
+  /** The change log: who saved, published or rolled back what. */
+  protected readonly log = signal<RuleSetChangeDto[]>([]);
+
+  protected readonly fromVersion = computed(
+    () => this.versions().find((v) => v.id === this.fromId()) ?? null,
+  );
+  protected readonly toVersion = computed(() => this.versions().find((v) => v.id === this.toId()) ?? null);
+  protected readonly changes = computed<JsonChange[] | null>(() => {
+    const from = this.fromId();
+    const to = this.toId();
+    if (!from || !to) return null;
+    const bodies = this.bodies();
+    if (!(from in bodies) || !(to in bodies)) return null;
+    return diffJson(bodies[from], bodies[to]).filter((c) => c.pointer !== '/version' && c.pointer !== '/id');
+  });
+
+  constructor() {
+    this.api.history().subscribe({
+      next: (entries) => this.log.set(entries),
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+    // Default comparison: the newest version against the one before it.
+    effect(() => {
+      const versions = this.versions();
+      if (!this.toId() && versions[0]) this.toId.set(versions[0].id);
+      if (!this.fromId() && versions[1]) this.fromId.set(versions[1].id);
+    });
+    effect(() => {
+      for (const id of [this.fromId(), this.toId()]) if (id) this.ensureBody(id);
+    });
+  }
+
+  protected actionWord(action: string): string {
+    const words: Record<string, string> = {
+      create: 'started draft',
+      update: 'saved',
+      publish: 'published',
+      rollback: 'rolled back to',
+    };
+    return words[action] ?? action;
+  }
+
+  protected paths(entry: RuleSetChangeDto): string {
+    const shown = entry.changedPaths.slice(0, 3).join(', ');
+    const more = entry.changedPaths.length - 3;
+    return more > 0 ? `${shown} and ${more} more` : shown;
+  }
+
+  protected versionOf(entry: RuleSetChangeDto): number {
+    return this.versions().find((v) => v.id === entry.ruleSetId)?.version ?? entry.version;
+  }
+
+  protected label(version: RuleSetDto): string {
+    return `v${version.version} · ${version.status} · ${version.authorName}`;
+  }
+
+  protected choose(which: 'from' | 'to', event: Event): void {
+    const id = (event.target as HTMLSelectElement).value;
+    (which === 'from' ? this.fromId : this.toId).set(id);
+  }
+
+  protected compareWithPrevious(version: RuleSetDto): void {
+    const list = this.versions();
+    const index = list.findIndex((v) => v.id === version.id);
+    this.toId.set(version.id);
+    this.fromId.set(list[index + 1]?.id ?? version.id);
+  }
+
+  private ensureBody(id: string): void {
+    if (id in this.bodies()) return;
+    const known = this.versions().find((v) => v.id === id);
+    if (known?.body && typeof known.body === 'object') {
+      this.bodies.update((all) => ({ ...all, [id]: known.body }));
+      return;
+    }
+    this.api.get(id).subscribe({
+      next: (full) => this.bodies.update((all) => ({ ...all, [id]: full.body })),
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+  }
+}

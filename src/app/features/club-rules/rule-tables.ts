@@ -1,0 +1,128 @@
+import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatExpansionModule } from '@angular/material/expansion';
+import { ACTIVITY_KINDS, AGE_BANDS, AGE_GROUPS, LEVELS, PLAN_KINDS } from '../../../../shared/types';
+import { getAt, toPointer } from './services/json-pointer';
+
+/** An edit from the tables: the value to put at a pointer of the rule-set document. */
+export interface RuleEdit {
+  pointer: string;
+  value: unknown;
+}
+
+/** Words for the activity kinds, as the tables show them. */
+export const KIND_LABELS: Record<string, string> = {
+  'ball-mastery': 'Ball mastery',
+  'passing-finishing': 'Pass and finish',
+  'keep-ball': 'Keep-ball',
+  pairs: 'Pairs',
+  'small-sided-game': 'Small-sided game',
+  'movement-prep': 'Movement prep',
+};
+
+/** "4v1, 3v1" ⇄ [{attackers:4, defenders:1}, …]. */
+export function formatsToText(formats: unknown): string {
+  return Array.isArray(formats)
+    ? formats.map((f: { attackers: number; defenders: number }) => `${f.attackers}v${f.defenders}`).join(', ')
+    : '';
+}
+
+export function textToFormats(text: string): { attackers: number; defenders: number }[] | null {
+  const parts = text.split(/[,;\s]+/).filter(Boolean);
+  const formats = parts.map((part) => /^(\d+)\s*v\s*(\d+)$/i.exec(part));
+  if (parts.length === 0 || formats.some((m) => !m)) return null;
+  return formats.map((m) => ({ attackers: Number(m![1]), defenders: Number(m![2]) }));
+}
+
+/** The rule set's main tables as forms, so a lead tunes numbers without touching JSON. */
+@Component({
+  selector: 'cw-rule-tables',
+  imports: [MatExpansionModule, MatButtonToggleModule],
+  templateUrl: './rule-tables.html',
+  styleUrl: './rule-tables.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RuleTables {
+  /** The rule-set document being edited. */
+  readonly body = input.required<unknown>();
+  /** Shows the tables without inputs that change anything. */
+  readonly readOnly = input(false);
+  /** Emits each edit as a pointer and value. */
+  readonly edited = output<RuleEdit>();
+
+  protected readonly levels = LEVELS;
+  protected readonly bands = AGE_BANDS;
+  protected readonly planKinds = PLAN_KINDS;
+  protected readonly level = signal<string>('beginner');
+  protected readonly band = signal<string>('U6-U8');
+  protected readonly planKind = signal<string>('match-warm-up');
+  protected readonly formatErrors = signal<Record<string, string>>({});
+
+  /** Kinds the document has tables for (falls back to the known list). */
+  protected readonly kinds = computed(() => {
+    const sizes = getAt(this.body(), '/parameters/groupSizes');
+    return sizes && typeof sizes === 'object' ? Object.keys(sizes) : [...ACTIVITY_KINDS];
+  });
+  protected readonly ageGroups = computed(() => {
+    const groups = getAt(this.body(), '/parameters/ageGroups');
+    return groups && typeof groups === 'object' ? Object.keys(groups) : [...AGE_GROUPS];
+  });
+  protected readonly phaseRows = computed(() => {
+    const rows = getAt(this.body(), `/parameters/phaseTemplates/${this.planKind()}/${this.band()}`);
+    return Array.isArray(rows) ? (rows as { kind: string; name: string; share: number }[]) : [];
+  });
+  protected readonly phaseShareTotal = computed(() =>
+    this.phaseRows().reduce((sum, row) => sum + (row.share || 0), 0),
+  );
+
+  protected kindLabel(kind: string): string {
+    return KIND_LABELS[kind] ?? kind;
+  }
+
+  protected ptr(...tokens: (string | number)[]): string {
+    return toPointer(['parameters', ...tokens]);
+  }
+
+  protected value(pointer: string): unknown {
+    return getAt(this.body(), pointer);
+  }
+
+  protected numberAt(pointer: string): number | null {
+    const v = this.value(pointer);
+    return typeof v === 'number' ? v : null;
+  }
+
+  protected setNumber(pointer: string, event: Event): void {
+    const input = event.target as HTMLInputElement;
+    if (input.value.trim() === '' || Number.isNaN(input.valueAsNumber)) return;
+    this.edited.emit({ pointer, value: input.valueAsNumber });
+  }
+
+  protected setBoolean(pointer: string, event: Event): void {
+    this.edited.emit({ pointer, value: (event.target as HTMLInputElement).checked });
+  }
+
+  protected formatsText(level: string): string {
+    return formatsToText(this.value(this.ptr('keepBall', level, 'formats')));
+  }
+
+  protected setFormats(level: string, event: Event): void {
+    const text = (event.target as HTMLInputElement).value;
+    const formats = textToFormats(text);
+    this.formatErrors.update((all) => ({ ...all, [level]: formats ? '' : 'Write formats like 4v1, 3v1' }));
+    if (formats) this.edited.emit({ pointer: this.ptr('keepBall', level, 'formats'), value: formats });
+  }
+
+  protected allows(age: string, kind: string): boolean {
+    const kinds = this.value(this.ptr('ageGroups', age, 'allowedKinds'));
+    return Array.isArray(kinds) && kinds.includes(kind);
+  }
+
+  protected toggleAllowed(age: string, kind: string, event: Event): void {
+    const checked = (event.target as HTMLInputElement).checked;
+    const pointer = this.ptr('ageGroups', age, 'allowedKinds');
+    const current = (this.value(pointer) as string[] | undefined) ?? [];
+    const next = checked ? [...new Set([...current, kind])] : current.filter((k) => k !== kind);
+    this.edited.emit({ pointer, value: this.kinds().filter((k) => next.includes(k)) });
+  }
+}

@@ -1,0 +1,39 @@
+import type { Plan } from '../../../../../shared/types';
+
+/** The parts of a plan a head of coaching compares between two rule sets. */
+export interface PlanOutline {
+  groups: string;
+  areas: string;
+  timing: string;
+  warnings: string;
+}
+
+export const OUTLINE_ROWS: { key: keyof PlanOutline; label: string }[] = [
+  { key: 'groups', label: 'Groups' },
+  { key: 'areas', label: 'Areas' },
+  { key: 'timing', label: 'Timing' },
+  { key: 'warnings', label: 'Warnings' },
+];
+
+/** One line per aspect, phase by phase, so two outlines compare as text. */
+export function outlinePlan(plan: Plan): PlanOutline {
+  const groups = plan.phases.map((phase) => {
+    const sizes = phase.stations.map((s) => {
+      const defenders = s.roles.defenders?.length ?? 0;
+      return defenders ? `${s.playerIds.length - defenders}v${defenders}` : String(s.playerIds.length);
+    });
+    return `${phase.name}: ${sizes.join(' · ')}`;
+  });
+  const areas = plan.phases.map(
+    (phase) =>
+      `${phase.name}: ${[...new Set(phase.stations.map((s) => `${s.area.width}×${s.area.length} m`))].join(', ')}`,
+  );
+  const timing = plan.phases.map((phase) => `${phase.name} ${phase.endMinute - phase.startMinute}′`);
+  const warnings = plan.warnings.map((w) => w.message);
+  return {
+    groups: groups.join('\n'),
+    areas: areas.join('\n'),
+    timing: timing.join(' → '),
+    warnings: warnings.length ? warnings.join('\n') : 'none',
+  };
+}

@@ -1,0 +1,27 @@
+import { diffJson, type JsonChange } from './json-diff';
+import { setAt } from './json-pointer';
+
+/** The outcome of putting one lead's edits on top of another lead's newer save. */
+export interface Rebased {
+  body: unknown;
+  /** Every edit of mine that was re-applied. */
+  reapplied: JsonChange[];
+  /** Places both of us changed: mine won, theirs is shown so the lead can choose. */
+  overlaps: { pointer: string; theirs: unknown; mine: unknown }[];
+}
+
+const related = (a: string, b: string) => a === b || a.startsWith(`${b}/`) || b.startsWith(`${a}/`);
+
+/** Re-applies the changes from base to mine onto theirs, so a 409 never loses an edit. */
+export function rebaseEdits(base: unknown, mine: unknown, theirs: unknown): Rebased {
+  const myChanges = diffJson(base, mine);
+  const theirChanges = diffJson(base, theirs);
+  let body = theirs;
+  const overlaps: Rebased['overlaps'] = [];
+  for (const change of myChanges) {
+    body = setAt(body, change.pointer, change.kind === 'removed' ? undefined : change.after);
+    const clash = theirChanges.find((other) => related(other.pointer, change.pointer));
+    if (clash) overlaps.push({ pointer: change.pointer, theirs: clash.after, mine: change.after });
+  }
+  return { body, reapplied: myChanges, overlaps };
+}
