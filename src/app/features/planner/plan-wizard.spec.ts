@@ -1,0 +1,153 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import { provideRouter, Router } from '@angular/router';
+import type { PlanRequest, PlayerDto, TeamDto } from '../../../../shared/types';
+import { PlanWizard } from './plan-wizard';
+
+const TEAM: TeamDto = {
+  id: 'team-1',
+  name: 'Harbour Hawks U10',
+  ageGroup: 'U10',
+  level: 'intermediate',
+  usualSpace: { width: 36, length: 44 },
+  coachIds: [],
+  playerCount: 15,
+};
+
+const NAMES = ['Ada P.', 'Ben O.', 'Cleo R.', 'Dev S.', 'Edie T.', 'Finn U.', 'Gia V.', 'Hal W.'];
+const MORE = ['Ines X.', 'Jon Y.', 'Kit Z.', 'Lou A.', 'Max B.', 'Nia C.', 'Oli D.'];
+const ROSTER: PlayerDto[] = [...NAMES, ...MORE].map((displayName, i) => ({
+  id: `p${i + 1}`,
+  teamId: TEAM.id,
+  displayName,
+  goalkeeper: i === 2,
+  // Two players are no longer in the squad and must not be ticked.
+  active: i < 13,
+}));
+
+describe('PlanWizard', () => {
+  async function setUp() {
+    TestBed.configureTestingModule({
+      imports: [PlanWizard],
+      providers: [
+        provideHttpClient(),
+        provideHttpClientTesting(),
+        provideRouter([]),
+        provideNoopAnimations(),
+      ],
+    });
+    const fixture = TestBed.createComponent(PlanWizard);
+    fixture.componentRef.setInput('teamId', TEAM.id);
+    const http = TestBed.inject(HttpTestingController);
+    fixture.detectChanges();
+    http.expectOne('/api/teams').flush([TEAM]);
+    http.expectOne((r) => r.url === `/api/teams/${TEAM.id}/players`).flush(ROSTER);
+    http.expectOne(`/api/teams/${TEAM.id}/kit`).flush({ balls: 14, cones: 30, bibs: 10, goals: 4 });
+    await fixture.whenStable();
+    const root = fixture.nativeElement as HTMLElement;
+    const input = (name: string) => root.querySelector<HTMLInputElement>(`input[formcontrolname="${name}"]`)!;
+    const type = async (name: string, value: string) => {
+      const el = input(name);
+      el.value = value;
+      el.dispatchEvent(new Event('input'));
+      await fixture.whenStable();
+    };
+    const submit = async () => {
+      root.querySelector<HTMLButtonElement>('[data-testid="make-plan"]')!.click();
+      // The schema check loads ajv lazily; let it settle.
+      for (let i = 0; i < 20; i++) await new Promise((resolve) => setTimeout(resolve, 10));
+      await fixture.whenStable();
+    };
+    return { fixture, http, root, input, type, submit };
+  }
+
+  it('ticks the active roster and fills kit and space from the bag and the usual space', async () => {
+    const { root, input } = await setUp();
+    expect(root.querySelector('[data-testid="present-count"]')?.textContent).toContain('13 here');
+    expect(root.querySelectorAll('mat-list-option').length).toBe(13);
+    expect(input('cones').value).toBe('30');
+    expect(input('goals').value).toBe('4');
+    expect(input('width').value).toBe('36');
+    expect(input('length').value).toBe('44');
+  });
+
+  it('sends the request the coach described and opens the plan', async () => {
+    const { http, type, submit } = await setUp();
+    const navigate = vi.spyOn(TestBed.inject(Router), 'navigate').mockResolvedValue(true);
+    await type('cones', '12');
+    await type('goals', '2');
+    await type('minutes', '25');
+    await submit();
+    const call = http.expectOne('/api/plans');
+    expect(call.request.method).toBe('POST');
+    const body = call.request.body as { teamId: string; request: PlanRequest };
+    expect(body.teamId).toBe(TEAM.id);
+    expect(body.request.players).toHaveLength(13);
+    expect(body.request.players.find((p) => p.id === 'p3')).toEqual({
+      id: 'p3',
+      name: 'Cleo R.',
+      goalkeeper: true,
+    });
+    expect(body.request.players.some((p) => p.id === 'p14')).toBe(false);
+    expect(body.request.equipment).toEqual({ balls: 14, cones: 12, bibs: 10, goals: 2 });
+    expect(body.request).toMatchObject({
+      ageGroup: 'U10',
+      level: 'intermediate',
+      minutes: 25,
+      space: { width: 36, length: 44 },
+    });
+    call.flush({ id: 'plan-9', plan: {} });
+    await new Promise((resolve) => setTimeout(resolve, 0));
+    expect(navigate).toHaveBeenCalledWith(['/plans', 'plan-9'], expect.anything());
+  });
+
+  it('adds a guest with an id of its own', async () => {
+    const { fixture, http, root, submit } = await setUp();
+    const addGuest = Array.from(root.querySelectorAll('button')).find((b) =>
+      b.textContent?.includes('Add a guest'),
+    )!;
+    addGuest.click();
+    await fixture.whenStable();
+    const guestName = root.querySelector<HTMLInputElement>('.cw-guest input[formcontrolname="name"]')!;
+    guestName.value = 'Pip Q.';
+    guestName.dispatchEvent(new Event('input'));
+    await fixture.whenStable();
+    await submit();
+    const body = http.expectOne('/api/plans').request.body as { request: PlanRequest };
+    expect(body.request.players).toHaveLength(14);
+    expect(body.request.players.at(-1)).toEqual({ id: 'guest-1', name: 'Pip Q.' });
+  });
+
+  it('refuses minutes outside what the engine accepts, in plain words, without calling the server', async () => {
+    const { fixture, http, root, type, submit } = await setUp();
+    await type('minutes', '200');
+    await submit();
+    http.expectNone('/api/plans');
+    fixture.detectChanges();
+    expect(root.textContent).toContain('Minutes must be at most 120.');
+  });
+
+  it('pins a server 400 to the field it names', async () => {
+    const { fixture, http, root, submit } = await setUp();
+    await submit();
+    http.expectOne('/api/plans').flush(
+      {
+        type: 'about:blank',
+        title: 'Bad request',
+        status: 400,
+        detail: 'The request has bad fields.',
+        errors: [{ field: 'request.equipment.cones', message: 'Cones must be a whole number.' }],
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
+    await fixture.whenStable();
+    fixture.detectChanges();
+    const conesField = root.querySelector('input[formcontrolname="cones"]')!.closest('mat-form-field')!;
+    expect(conesField.textContent).toContain('Cones must be a whole number.');
+    expect(root.querySelector('[data-testid="wizard-error"]')?.textContent).toContain(
+      'The request has bad fields.',
+    );
+  });
+});
