@@ -33,7 +33,7 @@ export function invitationMail(
   role: Role,
   token: string,
 ) {
-  const link = `${config.publicUrl.replace(/\/$/, '')}/join?token=${encodeURIComponent(token)}`;
+  const link = `${config.publicUrl.replace(/\/$/, '')}/invitations/${encodeURIComponent(token)}`;
   return {
     subject: `${inviter} invited you to ${clubName} on Conewise`,
     text: [
