@@ -6,7 +6,7 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
-import { ensureSystemPackages } from './support/system-packages';
+import { ensureSystemPackages } from '../server/db/system-packages';
 
 interface Step {
   name: string;
@@ -93,9 +93,10 @@ function run(step: Step): Outcome {
   return { name: step.name, ok, passed: ok ? 1 : 0, failed: ok ? 0 : 1, skipped: 0, seconds };
 }
 
-const preflight = ensureSystemPackages();
-if (!preflight.ok) {
-  console.error(preflight.message);
+try {
+  ensureSystemPackages(['postgresql', 'chromium', 'pdftotext']);
+} catch (error) {
+  console.error((error as Error).message);
   process.exit(1);
 }
 
