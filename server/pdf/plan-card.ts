@@ -2,6 +2,7 @@ import type { Column, Content, TDocumentDefinitions, TableCell } from 'pdfmake/i
 import type { Equipment, Phase, Plan, Station } from '../../shared/types';
 import { minuteLabel, planMinutes, sessionStart } from './clock';
 import { CARD_FONT } from './fonts';
+import { printable, printableContent } from './printable';
 import { placePlayers, stationDiagramSvg } from './station-diagram';
 
 export type Paper = 'a4' | 'letter';
@@ -20,10 +21,33 @@ export interface CardInput {
 }
 
 /** Printed on every card, whatever the plan says (US CPSC movable-goal guidance; common practice otherwise). */
-export const STANDING_SAFETY_NOTE =
+export const GOAL_SAFETY_NOTE =
   'Anchor or weight every movable goal and never let anyone climb or hang on one (US Consumer Product Safety ' +
-  'Commission, movable soccer goal safety). Check the surface before you start, keep water to hand and give ' +
-  'breaks in the heat. Follow your local rules, the club safeguarding policy and qualified first-aid advice.';
+  'Commission, movable soccer goal safety).';
+export const STANDING_SAFETY_NOTE =
+  'Check the surface before you start, keep water to hand and give breaks in the heat. Follow your local ' +
+  'rules, the club safeguarding policy and qualified first-aid advice.';
+
+/** Sizes that shrink when a card would run onto a second page. */
+export interface CardDensity {
+  baseFont: number;
+  smallFont: number;
+  gridDiagramHeight: number;
+  soloDiagramHeight: number;
+}
+
+export const REGULAR: CardDensity = {
+  baseFont: 7.5,
+  smallFont: 6.8,
+  gridDiagramHeight: 64,
+  soloDiagramHeight: 88,
+};
+export const COMPACT: CardDensity = {
+  baseFont: 6.8,
+  smallFont: 6.2,
+  gridDiagramHeight: 50,
+  soloDiagramHeight: 66,
+};
 
 const KIT_LABELS: Record<keyof Equipment, [one: string, many: string]> = {
   balls: ['ball', 'balls'],
@@ -44,7 +68,12 @@ const STATIONS_PER_ROW = 5;
 const TINT = ['#f3f7f1', '#e4efdf', '#d5e7cc', '#f4e4c8', '#f1d2bd'];
 
 /** The pdfmake document for one plan's card: header, timeline, a block per phase, kit and cautions. */
-export function planCardDefinition(input: CardInput, paper: Paper = 'a4'): TDocumentDefinitions {
+export function planCardDefinition(
+  input: CardInput,
+  paper: Paper = 'a4',
+  density: CardDensity = REGULAR,
+  onPageCount?: (pages: number) => void,
+): TDocumentDefinitions {
   const { plan } = input;
   const contentWidth = PAGE_WIDTH[paper] - 2 * MARGIN;
   const start = sessionStart(plan, input.kickOff);
@@ -53,28 +82,31 @@ export function planCardDefinition(input: CardInput, paper: Paper = 'a4'): TDocu
   return {
     pageSize: paper === 'a4' ? 'A4' : 'LETTER',
     pageMargins: [MARGIN, MARGIN, MARGIN, MARGIN + 6],
-    info: { title: `${input.teamName} — ${kindLabel(plan)}`, creator: 'Conewise' },
-    defaultStyle: { font: CARD_FONT, fontSize: 7.5, lineHeight: 1.1, color: '#1d2620' },
+    info: { title: printable(`${input.teamName} — ${kindLabel(plan)}`), creator: 'Conewise' },
+    defaultStyle: { font: CARD_FONT, fontSize: density.baseFont, lineHeight: 1.1, color: '#1d2620' },
     styles: {
       title: { fontSize: 15, bold: true },
       subtitle: { fontSize: 8.5, color: '#44524a' },
       phase: { fontSize: 9.5, bold: true, color: '#1f3d28' },
       station: { fontSize: 8, bold: true },
       label: { bold: true, color: '#3d6b47' },
-      small: { fontSize: 6.8 },
+      small: { fontSize: density.smallFont },
     },
-    footer: (page: number, pages: number) => ({
-      text: `Conewise card · rules ${plan.ruleSet.id} v${plan.ruleSet.version} · seed ${plan.seed} · page ${page} of ${pages}`,
-      fontSize: 6,
-      color: '#7a857e',
-      margin: [MARGIN, 8, MARGIN, 0],
-    }),
-    content: [
+    footer: (page: number, pages: number) => {
+      onPageCount?.(pages);
+      return {
+        text: `Conewise card · rules ${plan.ruleSet.id} v${plan.ruleSet.version} · seed ${plan.seed} · page ${page} of ${pages}`,
+        fontSize: 6,
+        color: '#7a857e',
+        margin: [MARGIN, 8, MARGIN, 0],
+      };
+    },
+    content: printableContent([
       header(input, start),
       timeline(plan, start, contentWidth),
-      ...plan.phases.map((phase) => phaseBlock(phase, start, names, contentWidth)),
+      ...plan.phases.map((phase) => phaseBlock(phase, start, names, contentWidth, density)),
       closingBlock(plan),
-    ],
+    ]),
   };
 }
 
@@ -163,6 +195,7 @@ function phaseBlock(
   start: number | null,
   names: (id: string) => string,
   width: number,
+  density: CardDensity,
 ): Content {
   const shared = sharesOneActivity(phase);
   const perRow = Math.min(STATIONS_PER_ROW, Math.max(phase.stations.length, 1));
@@ -171,7 +204,7 @@ function phaseBlock(
   for (let i = 0; i < phase.stations.length; i += perRow) {
     const row: TableCell[] = phase.stations
       .slice(i, i + perRow)
-      .map((station, j) => stationCell(station, i + j + 1, names, cellWidth, !shared));
+      .map((station, j) => stationCell(station, i + j + 1, names, cellWidth, !shared, density));
     while (row.length < perRow) row.push({ text: '' });
     rows.push(row);
   }
@@ -180,7 +213,7 @@ function phaseBlock(
     return {
       unbreakable: true,
       margin: [0, 2, 0, 6],
-      stack: [phaseHeading(phase, start), soloStation(first, names, width)],
+      stack: [phaseHeading(phase, start), soloStation(first, names, width, density)],
     };
   }
   return {
@@ -217,8 +250,13 @@ function phaseHeading(phase: Phase, start: number | null): Content {
 }
 
 /** A phase with one station: the diagram on the left, group and coaching beside it. */
-function soloStation(station: Station, names: (id: string) => string, width: number): Content {
-  const diagram = stationDiagramSvg(station, { maxWidth: 160, maxHeight: 88 });
+function soloStation(
+  station: Station,
+  names: (id: string) => string,
+  width: number,
+  density: CardDensity,
+): Content {
+  const diagram = stationDiagramSvg(station, { maxWidth: 160, maxHeight: density.soloDiagramHeight });
   return {
     columnGap: 10,
     columns: [
@@ -254,8 +292,12 @@ function stationCell(
   names: (id: string) => string,
   width: number,
   withCoaching: boolean,
+  density: CardDensity,
 ): TableCell {
-  const diagram = stationDiagramSvg(station, { maxWidth: Math.min(width - 8, 150), maxHeight: 64 });
+  const diagram = stationDiagramSvg(station, {
+    maxWidth: Math.min(width - 8, 150),
+    maxHeight: density.gridDiagramHeight,
+  });
   const group = groupList(station, names);
   return {
     stack: [
@@ -342,7 +384,14 @@ function closingBlock(plan: Plan): Content {
         stack: [
           { text: 'Cautions', style: 'phase', margin: [0, 0, 0, 2] },
           ...(notices.length ? [{ ul: notices }] : []),
-          { text: STANDING_SAFETY_NOTE, margin: [0, 2, 0, 0], italics: true },
+          {
+            text: [
+              plan.cautions.some((c) => /anchor|weight/i.test(c.message)) ? '' : GOAL_SAFETY_NOTE + ' ',
+              STANDING_SAFETY_NOTE,
+            ],
+            margin: [0, 2, 0, 0],
+            italics: true,
+          },
         ],
       },
     ],

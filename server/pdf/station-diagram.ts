@@ -86,7 +86,7 @@ export function stationDiagramSvg(
   const goals = (station.goalPositions ?? []).map((g) => ({ ...g, ...local(g) }));
   const xs = [0, station.area.width, ...cones.map((c) => c.x), ...goals.map((g) => g.x)];
   const ys = [0, station.area.length, ...cones.map((c) => c.y), ...goals.map((g) => g.y)];
-  const margin = 1.6;
+  const margin = 2;
   const minX = Math.min(...xs) - margin;
   const minY = Math.min(...ys) - margin;
   const spanX = Math.max(...xs) + margin - minX;
@@ -164,11 +164,11 @@ function goalSvg(goal: GoalPlacement, at: Point, scale: number): string {
   }" stroke-width="1.4"/></g>`;
 }
 
-function text(x: number, y: number, content: string, size: number, rotate = 0): string {
+function text(x: number, y: number, content: string, size: number, rotate = 0, anchor = 'middle'): string {
   const transform = rotate ? ` transform="rotate(${rotate} ${round(x)} ${round(y)})"` : '';
   return `<text x="${round(x)}" y="${round(y)}" font-family="${CARD_FONT}" font-size="${size}" fill="${
     INK.label
-  }" text-anchor="middle"${transform}>${escapeXml(content)}</text>`;
+  }" text-anchor="${anchor}"${transform}>${escapeXml(content)}</text>`;
 }
 
 function escapeXml(value: string): string {

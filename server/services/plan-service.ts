@@ -184,11 +184,7 @@ export function planColumns(plan: Plan): Partial<SessionPlan> {
 
 /** 422 listing each rule the plan would break. */
 export function violationsProblem(violations: engine.Violation[]): DetailedProblem {
-  const errors: FieldError[] = violations.map((v) => ({
-    field:
-      v.phaseIndex !== undefined ? `phases/${v.phaseIndex}${v.stationId ? `/${v.stationId}` : ''}` : v.code,
-    message: v.message,
-  }));
+  const errors: FieldError[] = violations.map((v) => ({ field: `plan/${v.code}`, message: v.message }));
   return new DetailedProblem(
     422,
     'Plan breaks the club rules',

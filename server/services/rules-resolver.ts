@@ -5,9 +5,22 @@ import { defaultRules } from './engine-port';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
+// A row's document never changes without its revision changing, so (id, revision) names one
+// document on every instance; keeping the same object lets the engine reuse its compiled rules.
+const documents = new Map<string, RuleSetDocument>();
+const MAX_CACHED = 200;
+
 /** A stored rule set as the engine reads it: the row's id and version written into the document. */
 export function documentOf(row: RuleSet): RuleSetDocument {
-  return { ...(row.body as RuleSetDocument), id: row.id, version: row.version, name: row.name };
+  const key = `${row.id}#${row.revision}#${row.version}`;
+  const hit = documents.get(key);
+  if (hit && row.revision !== undefined) return hit;
+  const doc = { ...(row.body as RuleSetDocument), id: row.id, version: row.version, name: row.name };
+  if (row.revision !== undefined) {
+    if (documents.size >= MAX_CACHED) documents.delete(documents.keys().next().value!);
+    documents.set(key, doc);
+  }
+  return doc;
 }
 
 /** The club's published rules, or the engine's default when it has published none. */
