@@ -38,7 +38,7 @@ export class OutboxMessage {
   @Column({ type: 'text', nullable: true })
   htmlBody!: string | null;
 
-  @Column({ type: 'jsonb', default: () => "'[]'::jsonb" })
+  @Column({ type: 'jsonb', default: () => "'[]'" })
   attachments!: OutboxAttachment[];
 
   @Column({ type: 'varchar', length: 10, default: 'pending' })

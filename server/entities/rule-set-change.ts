@@ -34,7 +34,7 @@ export class RuleSetChange {
   authorName!: string;
 
   /** JSON pointers the change touched (empty for create/publish). */
-  @Column({ type: 'jsonb', default: () => "'[]'::jsonb" })
+  @Column({ type: 'jsonb', default: () => "'[]'" })
   changedPaths!: string[];
 
   /** The document as it stood after the change. */
