@@ -39,13 +39,26 @@ export function buildPhase(
       ...rules,
       maxStations: cap,
     });
-    if (!Number.isFinite(allocation.cost) && Number.isFinite(cap)) break;
     if (!Number.isFinite(allocation.cost)) {
-      addWarning(
-        ctx,
-        'groups-outside-rules',
-        `${spec.name}: no grouping within the club's sizes fits ${request.players.length} players; they play as one group.`,
-      );
+      // No grouping within the club's sizes fits: everyone works in one shared grid instead.
+      if (!Number.isFinite(cap)) {
+        addWarning(
+          ctx,
+          'groups-outside-rules',
+          `${spec.name}: no grouping within the club's sizes fits ${request.players.length} players.`,
+        );
+        stations = [
+          makeStation(
+            ctx,
+            `p${phaseIndex + 1}-s1`,
+            spec.activity,
+            allocation.groups[0],
+            request.players,
+            startWidths,
+          ),
+        ];
+      }
+      break;
     }
     const groups = fillGroups(allocation.groups, request.players, ctx);
     stations = groups.map((g, k) =>
@@ -205,7 +218,8 @@ export function placeStations(
   return null;
 }
 
-function sharedGrid(
+/** Everyone in one ball-mastery grid as large as the space and the rule allow. */
+export function sharedGrid(
   ctx: Pick<BuildContext, 'params' | 'request' | 'band' | 'warnings' | 'trace'>,
   spec: { name: string },
   stations: Station[],

@@ -16,10 +16,10 @@ import type {
 } from '../../shared/types';
 import { activityById, chooseActivity, kindBlocked } from '../build/activities';
 import { allocatePhase, kindFeasible, type AllocationRules, type GroupPlan } from '../build/allocation';
-import { makeStation, placeStations } from '../build/build-phase';
+import { makeStation, placeStations, sharedGrid } from '../build/build-phase';
 import { assignRoles } from '../build/roles';
 import { checkPlan } from '../check-plan';
-import { PlanRequestError } from '../generate-plan';
+import { generatePlan, PlanRequestError } from '../generate-plan';
 import { gapBetween, insideSpace, overlaps, rectOf } from '../geometry';
 import { createRng } from '../random';
 import { defaultRuleSet } from '../rule-sets';
@@ -59,44 +59,34 @@ export async function replan(
   const rng = createRng(`${plan.seed}:replan:${change.fromMinute}:${players.length}`);
   const ctx = { params, request, band, warnings: [...outcome.warnings], trace: [...plan.trace] };
   const moves: PlayerMove[] = [];
+  const fresh = await generatePlan({ ...request, seed: plan.seed }, ruleSet);
 
   const phases: Phase[] = plan.phases.map((phase, phaseIndex) => {
     if (phase.endMinute <= change.fromMinute) return phase;
-    for (const s of phase.stations) {
-      for (const id of s.playerIds) {
-        if (removed.has(id)) moves.push({ playerId: id, fromStationId: s.id, toStationId: null, phaseIndex });
-      }
-    }
-    const activity = phaseActivity(phase, params, request, outcome.forbidden, rules, rng);
-    let cap = Number.POSITIVE_INFINITY;
-    for (;;) {
-      const target = allocatePhase(players.length, request.coaches, activity.kind, {
-        ...rules,
-        maxStations: cap,
-      });
-      const { stations, phaseMoves } = regroup(
+    // Keep the phase's activity if it still works; take the fresh plan's when that moves fewer.
+    const candidates = [phaseActivity(phase, params, request, outcome.forbidden, rules, rng)];
+    const freshActivity = activityById(params, fresh.phases[phaseIndex]?.activityId ?? '');
+    if (freshActivity && freshActivity.kind !== candidates[0].kind) candidates.push(freshActivity);
+    let best: { phase: Phase; moves: PlayerMove[]; count: number } | null = null;
+    for (const activity of candidates) {
+      const next = regroupPhase(
         phase,
-        target.groups,
+        phaseIndex,
+        activity,
+        players.length,
+        request.coaches,
+        rules,
         removed,
         arrivals,
         byId,
-        activity,
-        phaseIndex,
         ctx,
       );
-      const placed =
-        keepPositions(stations, phase, request.space) ?? placeStations(ctx, { name: phase.name }, stations);
-      if (placed || stations.length <= 1 || !Number.isFinite(target.cost)) {
-        moves.push(...phaseMoves);
-        return {
-          ...phase,
-          activityId: activity.id,
-          intensity: activity.intensity,
-          stations: placed ?? stations,
-        };
-      }
-      cap = stations.length - 1;
+      const phaseMoves = movesBetween(phase, next, phaseIndex);
+      const count = phaseMoves.filter((m) => m.fromStationId && m.toStationId).length;
+      if (!best || count < best.count) best = { phase: next, moves: phaseMoves, count };
     }
+    moves.push(...best!.moves);
+    return best!.phase;
   });
 
   const changed: Plan = {
@@ -136,6 +126,37 @@ export async function replan(
     },
     moves,
   };
+}
+
+/** One candidate re-plan of a phase for an activity: fewest moves, then fewer stations if the space needs it. */
+function regroupPhase(
+  phase: Phase,
+  phaseIndex: number,
+  activity: ActivityDefinition,
+  count: number,
+  coaches: number,
+  rules: AllocationRules,
+  removed: Set<string>,
+  arrivals: PresentPlayer[],
+  byId: Map<string, PresentPlayer>,
+  ctx: Parameters<typeof placeStations>[0],
+): Phase {
+  let cap = Number.POSITIVE_INFINITY;
+  for (;;) {
+    const target = allocatePhase(count, coaches, activity.kind, { ...rules, maxStations: cap });
+    if (!Number.isFinite(target.cost)) {
+      const everyone = phase.stations.flatMap((s) => s.playerIds).filter((id) => !removed.has(id));
+      const asOne = [{ ...phase.stations[0], playerIds: [...everyone, ...arrivals.map((p) => p.id)] }];
+      return { ...phase, stations: [sharedGrid(ctx, { name: phase.name }, asOne, phaseIndex)] };
+    }
+    const stations = regroup(phase, target.groups, removed, arrivals, byId, activity, phaseIndex, ctx);
+    const placed =
+      keepPositions(stations, phase, ctx.request.space) ?? placeStations(ctx, { name: phase.name }, stations);
+    if (placed) return { ...phase, activityId: activity.id, intensity: activity.intensity, stations: placed };
+    if (stations.length <= 1)
+      return { ...phase, stations: [sharedGrid(ctx, { name: phase.name }, stations, phaseIndex)] };
+    cap = stations.length - 1;
+  }
 }
 
 /** The phase's activity, or a substitute when the new numbers or rules rule it out. */
@@ -206,6 +227,18 @@ function regroup(
       matched.add(c.station);
     });
   }
+  // When the activity changed, a group that stays together is still no move: match the rest by size.
+  const openSlots = slots.filter((s) => !s.station).sort((a, b) => b.plan.players - a.plan.players);
+  const spare = current
+    .filter((c) => !matched.has(c.station) && c.ids.length > 0)
+    .sort((a, b) => b.ids.length - a.ids.length);
+  openSlots.forEach((slot, i) => {
+    const c = spare[i];
+    if (!c) return;
+    slot.station = c.station;
+    slot.ids = c.ids;
+    matched.add(c.station);
+  });
   const pool: { id: string; from: string | null }[] = [];
   for (const c of current)
     if (!matched.has(c.station)) for (const id of c.ids) pool.push({ id, from: c.station.id });
@@ -227,7 +260,6 @@ function regroup(
     usedIds.add(id);
     return id;
   };
-  const phaseMoves: PlayerMove[] = [];
   const stations = slots.map((slot) => {
     const wantsKeeper =
       GOALKEEPER_KINDS.includes(slot.plan.kind) && !slot.ids.some((id) => byId.get(id)?.goalkeeper);
@@ -240,7 +272,6 @@ function regroup(
       if (k < 0) k = 0;
       const [p] = pool.splice(k, 1);
       slot.ids.push(p.id);
-      phaseMoves.push({ playerId: p.id, fromStationId: p.from, toStationId: id, phaseIndex });
     }
     const players = slot.ids.map((x) => byId.get(x)!);
     const unchanged =
@@ -264,7 +295,23 @@ function regroup(
     }
     return fresh;
   });
-  return { stations, phaseMoves };
+  return stations;
+}
+
+/** Every player whose station differs between two versions of a phase (null: arriving or leaving). */
+function movesBetween(before: Phase, after: Phase, phaseIndex: number): PlayerMove[] {
+  const was = new Map<string, string>();
+  for (const s of before.stations) for (const id of s.playerIds) was.set(id, s.id);
+  const now = new Map<string, string>();
+  for (const s of after.stations) for (const id of s.playerIds) now.set(id, s.id);
+  const moves: PlayerMove[] = [];
+  for (const [id, from] of was) {
+    const to = now.get(id) ?? null;
+    if (to !== from) moves.push({ playerId: id, fromStationId: from, toStationId: to, phaseIndex });
+  }
+  for (const [id, to] of now)
+    if (!was.has(id)) moves.push({ playerId: id, fromStationId: null, toStationId: to, phaseIndex });
+  return moves;
 }
 
 function sameMembers(a: string[], b: string[]): boolean {

@@ -52,7 +52,8 @@ function fieldOf(instancePath: string, child?: string): string {
     .slice(1)
     .map((p) => p.replace(/~1/g, '/').replace(/~0/g, '~'));
   if (child !== undefined) parts.push(child);
-  return parts.length ? parts.join('/') : '(request)';
+  // An empty key still needs a visible name.
+  return parts.length ? parts.map((p) => (p === '' ? '""' : p)).join('/') : '(request)';
 }
 
 function describe(e: ErrorObject): FieldError {
