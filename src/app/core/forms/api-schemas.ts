@@ -26,6 +26,8 @@ const loaders: Partial<Record<SchemaName, () => Promise<Json>>> = {
   'player-create': () => import('../../../../shared/schemas/api/player-create.schema.json'),
   'player-update': () => import('../../../../shared/schemas/api/player-update.schema.json'),
   'kit-bag': () => import('../../../../shared/schemas/api/kit-bag.schema.json'),
+  'plan-create': () => import('../../../../shared/schemas/api/plan-create.schema.json'),
+  'plan-share': () => import('../../../../shared/schemas/api/plan-share.schema.json'),
   'plan-request': () => import('../../../../shared/schemas/plan-request.schema.json'),
 };
 

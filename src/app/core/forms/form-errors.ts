@@ -19,9 +19,14 @@ export function applyFieldErrors(form: FormGroup, errors: FieldErrors): string[]
   return unmatched;
 }
 
+/** The control a path names, else its nearest named parent ("recipients.2" → recipients). */
 function findControl(form: FormGroup, path: string): AbstractControl | null {
-  const dotted = path.replace(/^\//, '').replace(/\//g, '.');
-  return form.get(dotted) ?? form.get(dotted.split('.').pop() ?? dotted);
+  const parts = path.replace(/^\//, '').split(/[./]/).filter(Boolean);
+  for (let end = parts.length; end > 0; end--) {
+    const control = form.get(parts.slice(0, end).join('.'));
+    if (control && control !== form) return control;
+  }
+  return parts.length ? form.get(parts[parts.length - 1]) : null;
 }
 
 /** The message to show under a control: the pinned one, else a plain reading of Angular's own keys. */

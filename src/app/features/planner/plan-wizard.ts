@@ -13,7 +13,7 @@ import { MatListModule } from '@angular/material/list';
 import { MatSelectModule } from '@angular/material/select';
 import { MatStepperModule } from '@angular/material/stepper';
 import { Router, RouterLink } from '@angular/router';
-import { forkJoin, map } from 'rxjs';
+import { firstValueFrom, forkJoin, map } from 'rxjs';
 import {
   FOCUSES,
   PLAN_KINDS,
@@ -238,10 +238,19 @@ export class PlanWizard {
     }
     this.sending.set(true);
     this.status.set('Making the plan…');
+    let guestIds: string[];
+    try {
+      guestIds = await this.registerGuests(team.id, value.guests);
+    } catch (error: unknown) {
+      this.sending.set(false);
+      this.status.set('');
+      this.error.set(problemMessage(error));
+      return;
+    }
     this.plansApi
       .create({
         teamId: team.id,
-        request,
+        request: buildPlanRequest(team, this.roster(), value, guestIds),
         date: raw.time.date || undefined,
         kickOff: raw.time.kickOff || undefined,
       })
@@ -257,15 +266,31 @@ export class PlanWizard {
       });
   }
 
+  /**
+   * The server plans only with the team's own players, so a guest joins the team's list as
+   * not active: they appear in this plan and in attendance, but are not ticked next time.
+   */
+  private async registerGuests(teamId: string, guests: WizardValue['guests']): Promise<string[]> {
+    const ids: string[] = [];
+    for (const guest of guests) {
+      const created = await firstValueFrom(
+        this.playersApi.create(teamId, { displayName: guest.name.trim(), goalkeeper: guest.goalkeeper }),
+      );
+      await firstValueFrom(this.playersApi.update(created.id, { active: false }));
+      ids.push(created.id);
+    }
+    return ids;
+  }
+
   private showFieldErrors(errors: Record<string, string>): void {
     const mapped: Record<string, string> = {};
     for (const [path, text] of Object.entries(errors)) {
       mapped[
         wizardFieldOf(
           path
-            .replace(/^request\./, '')
             .replace(/^\//, '')
-            .replace(/\//g, '.'),
+            .replace(/\//g, '.')
+            .replace(/^request\./, ''),
         )
       ] = text;
     }

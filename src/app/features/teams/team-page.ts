@@ -70,7 +70,7 @@ export class TeamPage {
   }
 
   protected loadPlayers(id = this.teamId()): void {
-    this.playersApi.list(id).subscribe({
+    this.playersApi.list(id, true).subscribe({
       next: (players) => this.players.set(players),
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });

@@ -17,11 +17,16 @@ export interface WizardValue {
   temperatureC: number | null;
 }
 
-/** Guests have no roster id; they get one that cannot clash with a player's. */
+/** A stand-in id for a guest until the server has given them one. */
 export const guestId = (index: number) => `guest-${index + 1}`;
 
-/** Turns the wizard's answers into the engine's request. */
-export function buildPlanRequest(team: TeamDto, roster: PlayerDto[], value: WizardValue): PlanRequest {
+/** Turns the wizard's answers into the engine's request; `guestIds` are the ids the guests were given. */
+export function buildPlanRequest(
+  team: TeamDto,
+  roster: PlayerDto[],
+  value: WizardValue,
+  guestIds: string[] = value.guests.map((_, i) => guestId(i)),
+): PlanRequest {
   const byId = new Map(roster.map((p) => [p.id, p]));
   const players = [
     ...value.present
@@ -29,7 +34,7 @@ export function buildPlanRequest(team: TeamDto, roster: PlayerDto[], value: Wiza
       .filter((p): p is PlayerDto => !!p)
       .map((p) => ({ id: p.id, name: p.displayName, ...(p.goalkeeper ? { goalkeeper: true } : {}) })),
     ...value.guests.map((g, i) => ({
-      id: guestId(i),
+      id: guestIds[i] ?? guestId(i),
       name: g.name.trim() || `Guest ${i + 1}`,
       ...(g.goalkeeper ? { goalkeeper: true } : {}),
     })),

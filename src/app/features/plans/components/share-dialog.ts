@@ -12,6 +12,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { PlansApi } from '../../../core/api/plans-api';
 import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
+import { checkAgainstSchema } from '../../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
 
 const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
@@ -83,12 +84,17 @@ export class ShareDialog {
     message: [''],
   });
 
-  protected send(): void {
-    this.form.markAllAsTouched();
-    if (this.form.invalid) return;
-    const recipients = parseRecipients(this.form.controls.recipients.value);
+  protected async send(): Promise<void> {
+    const recipients = [...new Set(parseRecipients(this.form.controls.recipients.value))];
+    const message = this.form.controls.message.value.trim();
+    const body = { recipients, ...(message ? { message } : {}) };
+    const check = await checkAgainstSchema(this.form, 'plan-share', body, {
+      recipients: 'Recipients',
+      message: 'Note',
+    });
+    if (!check.ok) return;
     this.sending.set(true);
-    this.plansApi.share(this.planId, recipients, this.form.controls.message.value.trim()).subscribe({
+    this.plansApi.share(this.planId, recipients, message).subscribe({
       next: () => this.ref.close(recipients.length),
       error: (error: unknown) => {
         this.sending.set(false);

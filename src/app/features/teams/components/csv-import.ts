@@ -47,8 +47,9 @@ export class CsvImport {
   protected confirm(): void {
     const preview = this.preview();
     if (!preview) return;
-    this.playersApi.commitImport(this.teamId(), preview.importId).subscribe({
-      next: ({ created }) => {
+    this.playersApi.commitImport(this.teamId(), preview).subscribe({
+      next: (players) => {
+        const created = players.length;
         this.preview.set(null);
         this.done.set(`${created} player${created === 1 ? '' : 's'} added.`);
         this.imported.emit(created);

@@ -1,0 +1,192 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import { provideRouter } from '@angular/router';
+import { generatePlan } from '../../../../engine/index';
+import type { Plan, PlanRequest, SessionPlanDto } from '../../../../shared/types';
+import type { PlanEdit } from '../../../../shared/types/plan-edit';
+import { AuthStore } from '../../core/auth/auth-store';
+import { PlanPage } from './plan-page';
+
+const NAMES = ['Ada P.', 'Ben O.', 'Cleo R.', 'Dev S.', 'Edie T.', 'Finn U.', 'Gia V.', 'Hal W.', 'Ines X.'];
+const ALL = [...NAMES, 'Jon Y.', 'Kit Z.', 'Lou A.', 'Max B.'];
+
+const REQUEST: PlanRequest = {
+  ageGroup: 'U10',
+  level: 'intermediate',
+  players: ALL.map((name, i) => ({ id: `p${i + 1}`, name, ...(i === 0 ? { goalkeeper: true } : {}) })),
+  coaches: 2,
+  equipment: { balls: 14, cones: 12, bibs: 8, goals: 2 },
+  space: { width: 36, length: 44 },
+  minutes: 20,
+  kind: 'match-warm-up',
+  seed: 'harbour-hawks',
+};
+
+function dto(plan: Plan, version = 1): SessionPlanDto {
+  return {
+    id: 'plan-1',
+    teamId: 'team-1',
+    teamName: 'Harbour Hawks U10',
+    date: '2026-12-05',
+    kickOff: '10:30',
+    kind: 'match-warm-up',
+    minutes: plan.request.minutes,
+    playerCount: plan.request.players.length,
+    status: 'draft',
+    createdAt: '2026-12-01T18:00:00Z',
+    request: plan.request,
+    plan,
+    ruleSetId: plan.ruleSet.id,
+    ruleSetVersion: plan.ruleSet.version,
+    seed: plan.seed,
+    authorId: 'u1',
+    version,
+  };
+}
+
+const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges(): void }) => {
+  for (let i = 0; i < 30; i++) await new Promise((resolve) => setTimeout(resolve, 10));
+  await fixture.whenStable();
+  fixture.detectChanges();
+};
+
+// A shared, busy machine can make the first render slow; the checks, not the clock, are the test.
+vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
+
+describe('PlanPage', () => {
+  let plan: Plan;
+
+  beforeAll(async () => {
+    plan = await generatePlan(REQUEST);
+  });
+
+  async function setUp() {
+    TestBed.configureTestingModule({
+      imports: [PlanPage],
+      providers: [
+        provideHttpClient(),
+        provideHttpClientTesting(),
+        provideRouter([]),
+        provideNoopAnimations(),
+      ],
+    });
+    TestBed.inject(AuthStore).signIn({
+      token: 't',
+      user: {
+        id: 'u1',
+        name: 'Rhea Coach',
+        email: 'rhea@example.org',
+        clubId: 'c1',
+        clubName: 'Harbour',
+        role: 'coach',
+      },
+    });
+    const fixture = TestBed.createComponent(PlanPage);
+    fixture.componentRef.setInput('planId', 'plan-1');
+    const http = TestBed.inject(HttpTestingController);
+    fixture.detectChanges();
+    http.expectOne('/api/plans/plan-1').flush(dto(plan));
+    await fixture.whenStable();
+    fixture.detectChanges();
+    return { fixture, http, root: fixture.nativeElement as HTMLElement };
+  }
+
+  afterEach(() => localStorage.clear());
+
+  it('shows every phase with clock times counting to kick-off, and every player once in each', async () => {
+    const { root } = await setUp();
+    const phases = root.querySelectorAll('[data-testid="phase"]');
+    expect(phases.length).toBe(plan.phases.length);
+    // Kick-off 10:30 after a 20-minute warm-up: the first phase starts at 10:10.
+    const timeline = root.querySelector('cw-phase-timeline')!.textContent!;
+    expect(timeline).toContain('10:10');
+    expect(timeline).toContain('10:30');
+    for (const phase of Array.from(phases)) {
+      const ids = Array.from(phase.querySelectorAll('[data-player]')).map((el) =>
+        el.getAttribute('data-player'),
+      );
+      expect(ids.sort()).toEqual(REQUEST.players.map((p) => p.id).sort());
+    }
+    expect(root.textContent).toContain('Cleo R.');
+  });
+
+  it('draws each station from the engine coordinates, with its cones and numbered players', async () => {
+    const { root } = await setUp();
+    const station = plan.phases[0].stations[0];
+    const svg = root.querySelector('cw-station-diagram svg')!;
+    expect(svg.getAttribute('aria-label')).toContain(
+      `${station.area.width} by ${station.area.length} metres`,
+    );
+    expect(svg.querySelectorAll('polygon').length).toBe(station.conePositions.length);
+    expect(svg.querySelectorAll('circle').length).toBe(station.playerIds.length);
+    const area = svg.querySelector('rect')!;
+    expect(Number(area.getAttribute('x'))).toBe(station.position.x);
+    expect(Number(area.getAttribute('width'))).toBe(station.area.width);
+  });
+
+  it('puts cautions where they cannot be missed, and the rules that fired in the why panel', async () => {
+    const { root } = await setUp();
+    expect(plan.cautions.length).toBeGreaterThan(0);
+    const cautions = root.querySelector('[data-testid="cautions"]')!;
+    for (const caution of plan.cautions) expect(cautions.textContent).toContain(caution.message);
+    const fired = plan.trace.filter((t) => t.fired);
+    expect(root.querySelector('cw-why-panel')!.textContent).toContain(`${fired.length} club rules applied`);
+  });
+
+  it('moves a player to another station, re-checks it in the browser, announces it and saves the edit', async () => {
+    const { fixture, http, root } = await setUp();
+    const phaseIndex = plan.phases.findIndex((p) => p.stations.length > 1);
+    expect(phaseIndex).toBeGreaterThanOrEqual(0);
+    const [from, to] = plan.phases[phaseIndex].stations;
+    const playerId = from.playerIds[0];
+    const phaseEl = root.querySelectorAll('[data-testid="phase"]')[phaseIndex];
+    const chip = phaseEl.querySelector(`[data-player="${playerId}"]`)!;
+    chip.querySelector<HTMLButtonElement>('button.cw-move')!.click();
+    await fixture.whenStable();
+    const item = Array.from(document.querySelectorAll<HTMLButtonElement>('[mat-menu-item]')).find((b) =>
+      b.textContent?.includes(to.title),
+    )!;
+    item.click();
+    await settle(fixture);
+
+    const save = http.expectOne({ method: 'PATCH', url: '/api/plans/plan-1' });
+    expect(save.request.headers.get('If-Match')).toBe('1');
+    const edit = (save.request.body as { edit: PlanEdit }).edit;
+    expect(edit).toEqual({ type: 'move-player', playerId, toStationId: to.id, phaseIndex });
+
+    // Before the server answers, the browser's engine has already moved the player.
+    const target = phaseEl.querySelector(`[data-station="${to.id}"]`)!;
+    expect(target.querySelector(`[data-player="${playerId}"]`)).not.toBeNull();
+    expect(root.querySelector('[data-testid="plan-announcement"]')!.textContent).toContain('moved to');
+    expect(root.querySelector('[data-testid="plan-announcement"]')!.textContent).toContain('Re-checked');
+
+    const stored = structuredClone(plan);
+    stored.phases[phaseIndex].stations[0].playerIds = from.playerIds.slice(1);
+    stored.phases[phaseIndex].stations[1].playerIds = [...to.playerIds, playerId];
+    save.flush(dto(stored, 2));
+    await settle(fixture);
+    expect(root.querySelector(`[data-station="${to.id}"] [data-player="${playerId}"]`)).not.toBeNull();
+  });
+
+  it('puts the plan back and says so when the server refuses the edit', async () => {
+    const { fixture, http, root } = await setUp();
+    const station = plan.phases[0].stations[0];
+    const smaller = Array.from(root.querySelectorAll<HTMLButtonElement>('button')).find((b) =>
+      b.textContent?.includes('Smaller area'),
+    )!;
+    smaller.click();
+    await settle(fixture);
+    http
+      .expectOne({ method: 'PATCH', url: '/api/plans/plan-1' })
+      .flush(
+        { type: 'about:blank', title: 'Conflict', status: 409, detail: 'The plan changed since version 1.' },
+        { status: 409, statusText: 'Conflict' },
+      );
+    await settle(fixture);
+    expect(root.querySelector('[role="alert"]')!.textContent).toContain('The plan changed since version 1.');
+    const label = root.querySelector('cw-station-diagram svg')!.getAttribute('aria-label')!;
+    expect(label).toContain(`${station.area.width} by ${station.area.length} metres`);
+  });
+});
