@@ -27,6 +27,7 @@ import { problemMessage } from '../../core/http/problem-message';
 import { ActionQueue } from './services/action-queue';
 import { newClientId } from './services/client-id';
 import { adjustRosterLocally } from './services/local-adjust';
+import { preloadEngine, progressLocally, replanLocally } from './services/offline-engine';
 import {
   formatCountdown,
   jumpToMinute,
@@ -62,6 +63,7 @@ export class PitchSidePage {
   protected readonly session = signal<SessionPlanDto | null>(null);
   protected readonly plan = signal<Plan | null>(null);
   protected readonly roster = signal<PlayerDto[]>([]);
+  private readonly rules = signal<unknown>(null);
   protected readonly clock = signal<ClockState>(STOPPED_CLOCK);
   protected readonly verdicts = signal<Record<string, string>>({});
   protected readonly moves = signal<PlayerMove[]>([]);
@@ -184,6 +186,7 @@ export class PitchSidePage {
       saveSnapshot(session.id, {
         session: { ...session, plan },
         roster: this.roster(),
+        rules: this.rules(),
         clock: this.clock(),
         verdicts: this.verdicts(),
       });
@@ -245,8 +248,18 @@ export class PitchSidePage {
     const phaseIndex = this.reading().phaseIndex;
     this.verdicts.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: verdict }));
     const body = { phaseIndex, stationId, verdict };
+    const plan = this.plan();
+    if (plan && verdict !== 'right') {
+      // Step the station on screen at once; the server's answer replaces it when it arrives.
+      progressLocally(plan, phaseIndex, stationId, verdict, this.rules())
+        .then((stepped) => {
+          if (this.plan() === plan) this.plan.set(stepped);
+        })
+        .catch(() => undefined);
+    }
+    // The progression call records the feedback too (once per clientId), for every verdict.
     void this.queue.enqueue({
-      kind: verdict === 'right' ? 'feedback' : 'progression',
+      kind: 'progression',
       clientId: newClientId(),
       planId: this.planId(),
       queuedAt: new Date().toISOString(),
@@ -277,6 +290,15 @@ export class PitchSidePage {
     const local = adjustRosterLocally(plan, { ...change, fromMinute });
     this.plan.set(local.plan);
     this.moves.set(local.moves);
+    // The engine's re-plan in the browser gives the same answer the server will; show it as soon as it is ready.
+    replanLocally(plan, { ...change, fromMinute }, this.rules())
+      .then((result) => {
+        if (this.plan() === local.plan) {
+          this.plan.set(result.plan);
+          this.moves.set(result.moves);
+        }
+      })
+      .catch(() => undefined);
     const who = change.add?.[0]?.name ?? this.names()[change.remove?.[0] ?? ''] ?? 'A player';
     this.announcement.set(`${who} ${change.add ? 'joins' : 'leaves'}. Re-planning the rest of the session.`);
     void this.queue.enqueue({
@@ -294,6 +316,7 @@ export class PitchSidePage {
       this.session.set(snapshot.session);
       this.plan.set(snapshot.session.plan);
       this.roster.set(snapshot.roster);
+      this.rules.set(snapshot.rules ?? null);
       this.clock.set(snapshot.clock);
       this.verdicts.set(snapshot.verdicts);
       this.fromDevice.set(true);
@@ -310,6 +333,11 @@ export class PitchSidePage {
           next: (players) => this.roster.set(players),
           error: () => undefined,
         });
+        this.api.ruleSet(session.ruleSetId).subscribe({
+          next: (ruleSet) => this.rules.set(ruleSet.body),
+          error: () => undefined,
+        });
+        preloadEngine();
       },
       error: (error: unknown) => {
         if (!snapshot) this.loadError.set(problemMessage(error));

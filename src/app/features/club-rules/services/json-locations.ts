@@ -84,26 +84,115 @@ export function locatePointer(locations: Map<string, TextLocation>, pointer: str
   }
 }
 
-/** Line and column of a JSON.parse failure, from the message's position where the browser gives one. */
-export function syntaxErrorLocation(text: string, error: unknown): TextLocation | null {
-  const message = error instanceof Error ? error.message : '';
-  const line = /line (\d+) column (\d+)/.exec(message);
-  if (line) {
-    const lineNo = Number(line[1]);
-    const column = Number(line[2]);
-    const offset =
-      text
-        .split('\n')
-        .slice(0, lineNo - 1)
-        .join('\n').length +
-      (lineNo > 1 ? 1 : 0) +
-      column -
-      1;
-    return { line: lineNo, column, offset };
-  }
-  const position = /position (\d+)/.exec(message);
-  if (!position) return null;
-  const offset = Number(position[1]);
+/** Line and column of the first JSON syntax error (browsers do not always say where). */
+export function syntaxErrorLocation(text: string, error?: unknown): TextLocation | null {
+  const offset = firstSyntaxError(text) ?? positionFromMessage(error);
+  if (offset === null) return null;
   const before = text.slice(0, offset).split('\n');
   return { line: before.length, column: before.at(-1)!.length + 1, offset };
+}
+
+function positionFromMessage(error: unknown): number | null {
+  const position = /position (\d+)/.exec(error instanceof Error ? error.message : '');
+  return position ? Number(position[1]) : null;
+}
+
+/** Offset of the first character a strict JSON reader cannot take, or null when the text is valid. */
+export function firstSyntaxError(text: string): number | null {
+  let i = 0;
+  class Stop {
+    constructor(readonly at: number) {}
+  }
+  const fail = (): never => {
+    throw new Stop(i);
+  };
+  const skip = () => {
+    while (i < text.length && /[ \t\n\r]/.test(text[i])) i++;
+  };
+  const literal = (word: string) => {
+    if (text.startsWith(word, i)) i += word.length;
+    else fail();
+  };
+  const string = () => {
+    i++;
+    while (i < text.length && text[i] !== '"') {
+      if (text[i] === '\\') {
+        i++;
+        if (!/["\\/bfnrtu]/.test(text[i] ?? '')) fail();
+      } else if (text.charCodeAt(i) < 0x20) fail();
+      i++;
+    }
+    if (text[i] !== '"') fail();
+    i++;
+  };
+  const number = () => {
+    const match = /^-?(0|[1-9]\d*)(\.\d+)?([eE][+-]?\d+)?/.exec(text.slice(i));
+    if (!match) fail();
+    i += match![0].length;
+  };
+  const value = (): void => {
+    skip();
+    const c = text[i];
+    if (c === '{') {
+      i++;
+      skip();
+      if (text[i] === '}') {
+        i++;
+        return;
+      }
+      for (;;) {
+        skip();
+        if (text[i] !== '"') fail();
+        string();
+        skip();
+        if (text[i] !== ':') fail();
+        i++;
+        value();
+        skip();
+        if (text[i] === ',') {
+          i++;
+          continue;
+        }
+        if (text[i] === '}') {
+          i++;
+          return;
+        }
+        fail();
+      }
+    }
+    if (c === '[') {
+      i++;
+      skip();
+      if (text[i] === ']') {
+        i++;
+        return;
+      }
+      for (;;) {
+        value();
+        skip();
+        if (text[i] === ',') {
+          i++;
+          continue;
+        }
+        if (text[i] === ']') {
+          i++;
+          return;
+        }
+        fail();
+      }
+    }
+    if (c === '"') return string();
+    if (c === 't') return literal('true');
+    if (c === 'f') return literal('false');
+    if (c === 'n') return literal('null');
+    return number();
+  };
+  try {
+    value();
+    skip();
+    return i < text.length ? i : null;
+  } catch (stop) {
+    if (stop instanceof Stop) return Math.min(stop.at, text.length);
+    throw stop;
+  }
 }

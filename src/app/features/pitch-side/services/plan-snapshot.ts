@@ -6,6 +6,8 @@ export interface PitchSnapshot {
   session: SessionPlanDto;
   roster: PlayerDto[];
   clock: ClockState;
+  /** The rule-set document the plan was made with, for re-plans without a network. */
+  rules?: unknown;
   /** Latest verdict per station key (`phaseIndex:stationId`). */
   verdicts: Record<string, string>;
 }

@@ -1,0 +1,127 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import type { RuleSetDto } from '../../../../shared/types';
+import defaultRules from '../../../../rules/default-rule-set.json';
+import { ClubRulesPage } from './club-rules-page';
+
+const body = () =>
+  structuredClone(defaultRules) as unknown as { parameters: { cautions: { heatC: number; coldC: number } } };
+const ruleSet = (over: Partial<RuleSetDto>): RuleSetDto => ({
+  id: 'r1',
+  name: 'Club rules',
+  version: 1,
+  status: 'published',
+  body: body(),
+  authorId: 'u1',
+  authorName: 'Rhona Lead',
+  createdAt: '2026-11-01T10:00:00Z',
+  updatedAt: '2026-11-01T10:00:00Z',
+  revision: 1,
+  ...over,
+});
+
+describe('ClubRulesPage', () => {
+  function setUp(versions: RuleSetDto[]) {
+    TestBed.configureTestingModule({
+      imports: [ClubRulesPage],
+      providers: [provideHttpClient(), provideHttpClientTesting(), provideNoopAnimations()],
+    });
+    const fixture = TestBed.createComponent(ClubRulesPage);
+    const http = TestBed.inject(HttpTestingController);
+    http.expectOne('/api/rule-sets').flush(versions);
+    const el = fixture.nativeElement as HTMLElement;
+    const button = (label: string) =>
+      Array.from(el.querySelectorAll('button')).find((b) =>
+        b.textContent?.includes(label),
+      ) as HTMLButtonElement;
+    const input = (pointer: string) =>
+      el.querySelector(`input[data-pointer="${pointer}"]`) as HTMLInputElement;
+    return { fixture, http, el, button, input };
+  }
+
+  it('shows the published version read-only until the lead starts a draft', async () => {
+    const { fixture, http, el, button, input } = setUp([ruleSet({})]);
+    await fixture.whenStable();
+    expect(el.textContent).toContain('version 1');
+    expect(input('/parameters/keepBall/beginner/maxAttackersPerDefender').readOnly).toBe(true);
+    button('Start editing').click();
+    const create = http.expectOne('/api/rule-sets');
+    expect(create.request.method).toBe('POST');
+    expect(create.request.body).toEqual({ name: 'Club rules', from: 'r1' });
+    create.flush(ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 }));
+    await fixture.whenStable();
+    expect(input('/parameters/keepBall/beginner/maxAttackersPerDefender').readOnly).toBe(false);
+    expect(el.querySelector('[data-testid=draft-state]')?.textContent).toContain('Draft v2');
+  });
+
+  it('on a 409 keeps the edit, then reloads the other save and re-applies it on top', async () => {
+    const { fixture, http, el, button, input } = setUp([
+      ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 3 }),
+      ruleSet({}),
+    ]);
+    await fixture.whenStable();
+    const cold = input('/parameters/cautions/coldC');
+    cold.value = '2';
+    cold.dispatchEvent(new Event('change'));
+    await fixture.whenStable();
+    expect(el.querySelector('[data-testid=draft-state]')?.textContent).toContain('1 unsaved');
+
+    button('Save draft').click();
+    const stale = http.expectOne('/api/rule-sets/d2');
+    expect(stale.request.method).toBe('PUT');
+    expect(stale.request.headers.get('If-Match')).toBe('"3"');
+    stale.flush(
+      {
+        type: '/problems/stale-revision',
+        title: 'Conflict',
+        status: 409,
+        detail: 'Someone saved this draft.',
+        currentRevision: 4,
+      },
+      { status: 409, statusText: 'Conflict' },
+    );
+    await fixture.whenStable();
+    expect(el.querySelector('[data-testid=conflict]')?.textContent).toContain('nothing of yours is lost');
+
+    button('re-apply my changes').click();
+    const theirs = body();
+    theirs.parameters.cautions.heatC = 30;
+    http.expectOne('/api/rule-sets/d2').flush(
+      ruleSet({
+        id: 'd2',
+        version: 2,
+        status: 'draft',
+        revision: 4,
+        body: theirs,
+        authorName: 'Other Lead',
+      }),
+    );
+    await fixture.whenStable();
+    expect(el.querySelector('[data-testid=conflict]')).toBeNull();
+    expect(el.textContent).toContain("Loaded Other Lead's save and re-applied your 1 change");
+
+    button('Save draft').click();
+    const retry = http.expectOne('/api/rule-sets/d2');
+    expect(retry.request.headers.get('If-Match')).toBe('"4"');
+    const sent = retry.request.body as {
+      body: { parameters: { cautions: { heatC: number; coldC: number } } };
+    };
+    expect(sent.body.parameters.cautions).toEqual({ heatC: 30, coldC: 2 });
+  });
+
+  it('pins a rule problem found by the engine in the browser', async () => {
+    const { fixture, el, input } = setUp([ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 })]);
+    await fixture.whenStable();
+    const formats = input('/parameters/keepBall/beginner/formats');
+    formats.value = '5v1';
+    formats.dispatchEvent(new Event('change'));
+    await expect
+      .poll(async () => {
+        await fixture.whenStable();
+        return el.querySelector('[data-testid=problem-count]')?.textContent ?? '';
+      })
+      .toContain('1 problem');
+  });
+});

@@ -1,0 +1,162 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import type { Plan, SessionPlanDto, Station } from '../../../../shared/types';
+import { PitchSidePage } from './pitch-side-page';
+
+const station = (id: string, title: string, playerIds: string[], width = 10): Station => ({
+  id,
+  activityId: title,
+  activityKind: 'keep-ball',
+  title,
+  playerIds,
+  coachJoins: 0,
+  roles: { defenders: [playerIds[0]] },
+  area: { width, length: width },
+  position: { x: 0, y: 0 },
+  equipment: { balls: 1, cones: 4, bibs: 1, goals: 0 },
+  conePositions: [],
+  progressions: { easier: ['area 10 → 12 m'], harder: ['area 10 → 8 m'] },
+  coachingPoints: [],
+  description: '',
+});
+
+const plan: Plan = {
+  request: {
+    ageGroup: 'U10',
+    level: 'beginner',
+    players: ['a', 'b', 'c', 'd', 'e'].map((id) => ({ id, name: id.toUpperCase() })),
+    coaches: 1,
+    equipment: { balls: 6, cones: 20, bibs: 6, goals: 0 },
+    space: { width: 30, length: 30 },
+    minutes: 10,
+    kind: 'match-warm-up',
+  },
+  phases: [
+    {
+      name: 'Rondo start',
+      activityId: 'r',
+      startMinute: 0,
+      endMinute: 6,
+      stations: [station('s1', 'Square one', ['a', 'b', 'c', 'd', 'e'])],
+    },
+    {
+      name: 'Second go',
+      activityId: 'r',
+      startMinute: 6,
+      endMinute: 10,
+      stations: [station('s2', 'Square two', ['a', 'b', 'c', 'd', 'e'])],
+    },
+  ],
+  equipmentNeeded: { balls: 1, cones: 4, bibs: 1, goals: 0 },
+  equipmentAvailable: { balls: 6, cones: 20, bibs: 6, goals: 0 },
+  touches: {},
+  activeShare: 0.8,
+  warnings: [],
+  cautions: [{ code: 'conditions', message: 'The coach judges the weather and the ground.' }],
+  trace: [],
+  ruleSet: { id: 'rs1', version: 1 },
+  seed: 'x',
+};
+
+const session = { id: 'p1', teamId: 't1', teamName: 'U10 Kites', plan, ruleSetId: 'rs1' } as SessionPlanDto;
+
+describe('PitchSidePage', () => {
+  beforeEach(() => localStorage.clear());
+
+  function setUp() {
+    TestBed.configureTestingModule({
+      imports: [PitchSidePage],
+      providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])],
+    });
+    const fixture = TestBed.createComponent(PitchSidePage);
+    fixture.componentRef.setInput('planId', 'p1');
+    fixture.detectChanges();
+    const http = TestBed.inject(HttpTestingController);
+    const el = fixture.nativeElement as HTMLElement;
+    const button = (selector: string) => el.querySelector(selector) as HTMLButtonElement;
+    const settle = async () => {
+      await fixture.whenStable();
+      fixture.detectChanges();
+    };
+    return { fixture, http, el, button, settle };
+  }
+
+  async function opened() {
+    const t = setUp();
+    t.http.expectOne('/api/plans/p1').flush(session);
+    t.http
+      .expectOne('/api/teams/t1/players')
+      .flush([
+        ...['a', 'b', 'c', 'd', 'e'].map((id) => ({
+          id,
+          teamId: 't1',
+          displayName: id.toUpperCase(),
+          goalkeeper: false,
+          active: true,
+        })),
+        { id: 'f', teamId: 't1', displayName: 'Fen Q.', goalkeeper: false, active: true },
+      ]);
+    t.http.expectOne('/api/rule-sets/rs1').flush({ id: 'rs1', body: null });
+    await t.settle();
+    return t;
+  }
+
+  it('shows the current phase with its countdown, the next phase and the station group', async () => {
+    const { el } = await opened();
+    expect(el.querySelector('#current-phase-name')?.textContent).toContain('Rondo start');
+    expect(el.querySelector('[data-testid=countdown]')?.textContent?.trim()).toBe('6:00');
+    expect(el.textContent).toContain('Next: Second go at minute 6');
+    expect(el.querySelector('cw-station-card')?.textContent).toContain('Square one');
+    expect(el.textContent).toContain('Fen Q.');
+  });
+
+  it('records a verdict with a client id, and replays the same id after the network returns', async () => {
+    const { http, el, button, settle } = await opened();
+    button('[data-verdict=too-easy]').click();
+    const first = http.expectOne('/api/plans/p1/progression');
+    const sent = first.request.body as {
+      clientId: string;
+      verdict: string;
+      stationId: string;
+      phaseIndex: number;
+    };
+    expect(sent).toMatchObject({ verdict: 'too-easy', stationId: 's1', phaseIndex: 0 });
+    expect(sent.clientId).toMatch(/^[0-9a-f-]{36}$/);
+    first.error(new ProgressEvent('error'), { status: 0 });
+    await settle();
+    expect(el.querySelector('[data-testid=offline-badge]')?.textContent).toContain('1 queued');
+    expect(JSON.parse(localStorage.getItem('conewise.pitch-side.queue')!)).toHaveLength(1);
+
+    window.dispatchEvent(new Event('online'));
+    const replay = http.expectOne('/api/plans/p1/progression');
+    expect((replay.request.body as { clientId: string }).clientId).toBe(sent.clientId);
+    const stepped = structuredClone(plan);
+    stepped.phases[0].stations[0].area = { width: 8, length: 8 };
+    replay.flush({ plan: { ...session, plan: stepped }, moves: [] });
+    await settle();
+    expect(el.querySelector('[data-testid=offline-badge]')).toBeNull();
+    expect(JSON.parse(localStorage.getItem('conewise.pitch-side.queue')!)).toEqual([]);
+    expect(el.querySelector('cw-station-card')?.textContent).toContain('8 × 8 m');
+  });
+
+  it('adds a late arrival in one tap, shows who moves and asks the server to re-plan from now', async () => {
+    const { http, el, button, settle } = await opened();
+    button('button[aria-label="Fen Q. arrives"]').click();
+    const request = http.expectOne('/api/plans/p1/replan');
+    expect(request.request.body).toMatchObject({ add: [{ id: 'f', name: 'Fen Q.' }], fromMinute: 0 });
+    const replanned = structuredClone(plan);
+    replanned.request.players.push({ id: 'f', name: 'Fen Q.' });
+    replanned.phases.forEach((p) => p.stations[0].playerIds.push('f'));
+    request.flush({
+      plan: { ...session, plan: replanned },
+      moves: [{ playerId: 'f', fromStationId: null, toStationId: 's1', phaseIndex: 0 }],
+    });
+    await settle();
+    expect(el.querySelector('[data-testid=moves]')?.textContent).toContain(
+      'Rondo start: Fen Q. joins station 1 (Square one)',
+    );
+    expect(el.querySelector('button[aria-label="Fen Q. leaves early"]')).not.toBeNull();
+  });
+});
