@@ -1,7 +1,6 @@
 import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import { authOf } from '../http/auth-context';
-import { HttpError } from '../http/problem';
+import { authRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
 import { AuthService, userDto } from '../services/auth-service';
 import type { ApiDeps } from './api-deps';
@@ -10,16 +9,7 @@ import type { ApiDeps } from './api-deps';
 export function authRouter(deps: ApiDeps): Router {
   const router = Router();
   const service = new AuthService(deps.dataSource, deps.config);
-  const limiter = rateLimit({
-    windowMs: deps.config.authRateLimit.windowMs,
-    limit: deps.config.authRateLimit.max,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) =>
-      next(
-        new HttpError(429, 'Too many requests', 'Too many sign-in attempts from here. Wait a few minutes.'),
-      ),
-  });
+  const limiter = authRateLimit(deps.config);
 
   router.post('/auth/register', limiter, validate({ body: 'auth-register' }), async (req, res) => {
     res.status(201).json(await service.register(req.body));

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { authRateLimit } from '../middleware/rate-limit';
 import { requireRole } from '../middleware/require-role';
 import { validate } from '../middleware/validate';
 import { InvitationAcceptService, MemberService } from '../services/member-service';
@@ -11,11 +12,17 @@ export function invitationsRouter({ dataSource, config, mail, requireAuth }: Api
   const members = (req: Parameters<typeof scopeOf>[0]) =>
     new MemberService(scopeOf(req, dataSource), config, mail);
   const accepting = new InvitationAcceptService(dataSource, config);
+  const limiter = authRateLimit(config);
 
-  router.get('/invitations/lookup', validate({ query: 'invitation-lookup-query' }), async (req, res) => {
-    res.json(await accepting.lookup((req.query as { token: string }).token));
-  });
-  router.post('/invitations/accept', validate({ body: 'invitation-accept' }), async (req, res) => {
+  router.get(
+    '/invitations/lookup',
+    limiter,
+    validate({ query: 'invitation-lookup-query' }),
+    async (req, res) => {
+      res.json(await accepting.lookup((req.query as { token: string }).token));
+    },
+  );
+  router.post('/invitations/accept', limiter, validate({ body: 'invitation-accept' }), async (req, res) => {
     res.status(201).json(await accepting.accept(req.body));
   });
   router.get('/invitations', requireAuth, requireRole('lead'), async (req, res) => {
