@@ -153,19 +153,25 @@ export function nameFor(kind: ActivityKind): string {
 }
 
 /**
- * Whole minutes in proportion to the shares (largest remainder), each at least `minEach`
- * when the total allows, summing exactly to `total`.
+ * Whole minutes in proportion to the shares (largest remainder), then each raised to `minEach`
+ * when the total allows by taking from the longest phases; sums exactly to `total`.
  */
 export function splitMinutes(total: number, shares: number[], minEach: number): number[] {
   const sum = shares.reduce((s, x) => s + x, 0) || 1;
-  const floor = Math.min(minEach, Math.floor(total / shares.length));
-  const spare = total - floor * shares.length;
-  const exact = shares.map((s) => (s / sum) * spare);
+  const exact = shares.map((s) => (s / sum) * total);
   const out = exact.map((x) => Math.floor(x));
-  let left = spare - out.reduce((s, x) => s + x, 0);
+  let left = total - out.reduce((s, x) => s + x, 0);
   const order = exact
     .map((x, i) => ({ i, frac: x - Math.floor(x) }))
     .sort((a, b) => b.frac - a.frac || a.i - b.i);
   for (let k = 0; left > 0; k = (k + 1) % order.length, left--) out[order[k].i]++;
-  return out.map((x) => x + floor);
+  const floor = Math.min(minEach, Math.floor(total / shares.length));
+  for (let i = 0; i < out.length; i++) {
+    while (out[i] < floor) {
+      const donor = out.reduce((best, x, j) => (x > out[best] ? j : best), 0);
+      out[donor]--;
+      out[i]++;
+    }
+  }
+  return out;
 }

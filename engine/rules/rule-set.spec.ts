@@ -1,0 +1,154 @@
+/** The rule-set document: schema and semantic checks with JSON pointers, compile cache, rule effects. */
+import { describe, expect, it } from 'vitest';
+import type { PlanRequest, RuleSetDocument } from '../../shared/types';
+import { defaultRuleSet, generatePlan, RuleSetError, validateRuleSet } from '../index';
+import { compileRuleSet } from './compile-rule-set';
+
+const clone = (): RuleSetDocument => structuredClone(defaultRuleSet);
+
+const request: PlanRequest = {
+  ageGroup: 'U10',
+  level: 'beginner',
+  players: Array.from({ length: 12 }, (_, i) => ({ id: `p${i + 1}` })),
+  coaches: 0,
+  equipment: { balls: 20, cones: 60, bibs: 12, goals: 4 },
+  space: { width: 60, length: 40 },
+  minutes: 15,
+  kind: 'match-warm-up',
+  seed: 'rules',
+};
+
+describe('validateRuleSet', () => {
+  it('accepts the default rule set', () => {
+    expect(validateRuleSet(defaultRuleSet)).toEqual({ ok: true, errors: [] });
+  });
+
+  it('points at a missing table entry', () => {
+    const doc = clone() as unknown as { parameters: { groupSizes: Record<string, unknown> } };
+    delete doc.parameters.groupSizes['pairs'];
+    const result = validateRuleSet(doc);
+    expect(result.ok).toBe(false);
+    expect(result.errors).toContainEqual({ pointer: '/parameters/groupSizes/pairs', message: 'is required' });
+  });
+
+  it('points at a wrong type deep in the document', () => {
+    const doc = clone() as unknown as {
+      parameters: { areas: { 'keep-ball': { 'U9-U10': { step: unknown } } } };
+    };
+    doc.parameters.areas['keep-ball']['U9-U10'].step = 'two';
+    expect(validateRuleSet(doc).errors.map((e) => e.pointer)).toContain(
+      '/parameters/areas/keep-ball/U9-U10/step',
+    );
+  });
+
+  it('refuses 5v1 keep-ball (more than four attackers per defender)', () => {
+    const doc = clone();
+    doc.parameters.keepBall.beginner.formats[0] = { attackers: 5, defenders: 1 };
+    const result = validateRuleSet(doc);
+    expect(result.ok).toBe(false);
+    expect(result.errors[0].pointer).toBe('/parameters/keepBall/beginner/formats/0');
+  });
+
+  it('refuses an unknown operator and an unknown event type inside a rule', () => {
+    const doc = clone() as unknown as {
+      rules: { conditions: { all: { operator: string }[] }; event: { type: string } }[];
+    };
+    doc.rules[2].conditions.all[0].operator = 'roughly';
+    doc.rules[3].event.type = 'launch';
+    const pointers = validateRuleSet(doc).errors.map((e) => e.pointer);
+    expect(pointers.some((p) => p.startsWith('/rules/2/conditions/all/0'))).toBe(true);
+    expect(pointers.some((p) => p.startsWith('/rules/3/event'))).toBe(true);
+  });
+
+  it('refuses duplicate rule ids and a parameter path that does not exist', () => {
+    const doc = clone();
+    doc.rules[1].id = doc.rules[0].id;
+    const setter = doc.rules.findIndex((r) => r.event.type === 'set-parameter');
+    (doc.rules[setter].event.params as { path: string }).path = 'layout.nowhere';
+    const errors = validateRuleSet(doc).errors;
+    expect(errors).toContainEqual({ pointer: '/rules/1/id', message: 'duplicates /rules/0/id' });
+    expect(errors).toContainEqual({
+      pointer: `/rules/${setter}/event/params/path`,
+      message: 'does not name an existing parameter',
+    });
+  });
+
+  it('generatePlan refuses a bad rule set with the pointers', async () => {
+    const doc = clone();
+    doc.parameters.groupSizes.pairs.beginner.min = 5;
+    await expect(generatePlan(request, doc)).rejects.toBeInstanceOf(RuleSetError);
+  });
+});
+
+describe('compileRuleSet', () => {
+  it('compiles once per id and version and content', () => {
+    const a = compileRuleSet(defaultRuleSet);
+    expect(compileRuleSet(defaultRuleSet)).toBe(a);
+    expect(compileRuleSet(clone())).toBe(a); // same id, version and content
+    const draft = clone();
+    draft.parameters.layout.bufferM = 4;
+    expect(compileRuleSet(draft)).not.toBe(a);
+  });
+});
+
+describe('club rules change plans', () => {
+  it('a lead who allows only 3v1 for beginners gets 3v1 squares in the next plan', async () => {
+    const doc = clone();
+    doc.version = 2;
+    doc.parameters.keepBall.beginner.formats = [{ attackers: 3, defenders: 1 }];
+    const plan = await generatePlan(request, doc);
+    const kb = plan.phases.flatMap((p) => p.stations).filter((s) => s.activityKind === 'keep-ball');
+    expect(kb.length).toBe(3);
+    expect(kb.every((s) => s.roles.attackers?.length === 3 && s.roles.defenders?.length === 1)).toBe(true);
+    expect(plan.ruleSet).toEqual({ id: 'default', version: 2 });
+  });
+
+  it('heat: a caution with hydration and a shorter game, both in the trace', async () => {
+    const plan = await generatePlan({
+      ...request,
+      kind: 'training',
+      minutes: 40,
+      conditions: { temperatureC: 31 },
+    });
+    const cool = await generatePlan({
+      ...request,
+      kind: 'training',
+      minutes: 40,
+      conditions: { temperatureC: 18 },
+    });
+    expect(plan.cautions.map((c) => c.code)).toContain('heat');
+    expect(cool.cautions.map((c) => c.code)).not.toContain('heat');
+    const gameMinutes = (p: typeof plan) =>
+      p.phases
+        .filter((ph) => ph.stations.some((s) => s.activityKind === 'small-sided-game'))
+        .reduce((m, ph) => m + ph.endMinute - ph.startMinute, 0);
+    expect(gameMinutes(plan)).toBeLessThan(gameMinutes(cool));
+    expect(plan.trace.find((t) => t.ruleId === 'heat.shorter-game')?.fired).toBe(true);
+  });
+
+  it('a pressing focus lengthens keep-ball and picks the pressing keep-ball activity', async () => {
+    // 20 minutes, shares 35/35/30: 7/7/6 min; pressing makes keep-ball 30 × 1.4 = 42: 6/6/8 min.
+    const plain = await generatePlan({ ...request, minutes: 20 });
+    const pressing = await generatePlan({ ...request, minutes: 20, focus: ['pressing'] });
+    const kbMinutes = (p: typeof plain) => {
+      const ph = p.phases.find((x) => x.stations.some((s) => s.activityKind === 'keep-ball'))!;
+      return { minutes: ph.endMinute - ph.startMinute, id: ph.activityId };
+    };
+    expect([kbMinutes(plain).minutes, kbMinutes(pressing).minutes]).toEqual([6, 8]);
+    expect(kbMinutes(pressing).id).toBe('kb-win-break');
+  });
+
+  it('the trace lists every rule of the set, fired or not', async () => {
+    const plan = await generatePlan(request);
+    for (const rule of defaultRuleSet.rules) {
+      expect(plan.trace.find((t) => t.ruleId === rule.id)).toBeDefined();
+    }
+  });
+
+  it('an absent seed is generated and returned, and replays the same plan', async () => {
+    const { seed: _omit, ...noSeed } = request;
+    const plan = await generatePlan(noSeed);
+    expect(plan.seed).toMatch(/^[0-9a-z]{8}$/);
+    expect(JSON.stringify(await generatePlan({ ...noSeed, seed: plan.seed }))).toBe(JSON.stringify(plan));
+  });
+});
