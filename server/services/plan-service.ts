@@ -54,8 +54,11 @@ export class PlanService {
     const requestErrors = engine.planRequestErrors(input.request);
     if (requestErrors.length) throw badRequest('The plan request is not valid.', requestErrors);
     const team = await scope.teamToManage(input.teamId);
-    const request = await completeRequest(manager, team, input.request);
-    const rules = await publishedRules(manager, auth.clubId);
+    // Independent reads go out together: roster and feedback for the request, the club's rules.
+    const [request, rules] = await Promise.all([
+      completeRequest(manager, team, input.request),
+      publishedRules(manager, auth.clubId),
+    ]);
     const plan = await engine.generatePlan(request, rules);
     const row = manager.getRepository(SessionPlan).create({
       clubId: auth.clubId,
@@ -66,8 +69,9 @@ export class PlanService {
       authorId: auth.userId,
       ...planColumns(plan),
     });
-    const saved = await manager.getRepository(SessionPlan).save(row);
-    return sessionPlanDto(saved, team.name);
+    // One INSERT … RETURNING: a single new row needs no wrapping transaction or reload.
+    await manager.getRepository(SessionPlan).insert(row);
+    return sessionPlanDto(row, team.name);
   }
 
   async list(auth: AuthContext, query: ListPlansQuery): Promise<Page<PlanSummaryDto>> {
@@ -204,9 +208,10 @@ export async function completeRequest(
   team: Team,
   request: PlanRequest,
 ): Promise<PlanRequest> {
-  const roster = await manager
-    .getRepository(Player)
-    .find({ where: { teamId: team.id, clubId: team.clubId } });
+  const [roster, recent] = await Promise.all([
+    manager.getRepository(Player).find({ where: { teamId: team.id, clubId: team.clubId } }),
+    request.recentFeedback ? Promise.resolve(null) : recentFeedbackFacts(manager, team.id),
+  ]);
   const byId = new Map(roster.map((p) => [p.id, p]));
   const errors: FieldError[] = [];
   const players: PresentPlayer[] = request.players.map((p, i) => {
@@ -218,7 +223,7 @@ export async function completeRequest(
     return { id: p.id, name: known.displayName, goalkeeper: p.goalkeeper ?? known.goalkeeper };
   });
   if (errors.length) throw badRequest('Some players are not in this team.', errors);
-  const recentFeedback = request.recentFeedback ?? (await recentFeedbackFacts(manager, team.id));
+  const recentFeedback = request.recentFeedback ?? recent ?? [];
   return { ...request, players, ...(recentFeedback.length ? { recentFeedback } : {}) };
 }
 

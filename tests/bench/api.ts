@@ -1,0 +1,170 @@
+/**
+ * `npm run -s bench:api`: a throwaway PostgreSQL cluster, the API in its own process, then
+ * autocannon for 20 s at 10 connections against GET /api/health, GET /api/teams and
+ * POST /api/plans (16 players). Prints req/s, p50 and p99 per route and each route's req/s as a
+ * share of health's; the last line is the figures as JSON keyed by route.
+ * Targets: POST /api/plans p99 ≤ 50 ms and its req/s ≥ 1/10 of GET /api/health's.
+ */
+import { spawn, type ChildProcess } from 'node:child_process';
+import { join } from 'node:path';
+import autocannon from 'autocannon';
+import { startThrowawayCluster } from '../../server/db/pg-cluster';
+import { freePort } from '../../server/db/free-port';
+import { PROJECT_ROOT } from '../../server/config';
+
+const DURATION_S = Number(process.env['BENCH_SECONDS'] ?? 20);
+const CONNECTIONS = 10;
+
+interface Figures {
+  rps: number;
+  p50Ms: number;
+  p99Ms: number;
+}
+
+async function startApi(databaseUrl: string, port: number): Promise<ChildProcess> {
+  const child = spawn(
+    join(PROJECT_ROOT, 'node_modules', '.bin', 'tsx'),
+    ['--tsconfig', 'tsconfig.server.json', 'server/main.ts'],
+    {
+      cwd: PROJECT_ROOT,
+      env: {
+        ...process.env,
+        DATABASE_URL: databaseUrl,
+        PORT: String(port),
+        SEND_MAIL: 'false',
+        LOG_LEVEL: 'warn',
+        JWT_SECRET: 'bench-secret-0123456789abcdef0123456789',
+        AUTH_RATE_MAX: '100000',
+      },
+      stdio: ['ignore', 'inherit', 'inherit'],
+    },
+  );
+  const deadline = Date.now() + 60_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`API exited with ${child.exitCode}`);
+    try {
+      if ((await fetch(`http://127.0.0.1:${port}/api/health`)).ok) return child;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  child.kill('SIGTERM');
+  throw new Error('API did not become healthy within 60 s');
+}
+
+async function json(url: string, method: string, body: unknown, token?: string) {
+  const response = await fetch(url, {
+    method,
+    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
+    body: JSON.stringify(body),
+  });
+  if (!response.ok) throw new Error(`${method} ${url}: ${response.status} ${await response.text()}`);
+  return response.json();
+}
+
+function run(options: autocannon.Options): Promise<Figures> {
+  return new Promise((resolve, reject) => {
+    autocannon({ connections: CONNECTIONS, duration: DURATION_S, ...options }, (error, result) => {
+      if (error) return reject(error);
+      if (result.non2xx || result.errors) {
+        return reject(new Error(`${options.url}: ${result.non2xx} non-2xx, ${result.errors} errors`));
+      }
+      resolve({
+        rps: Math.round(result.requests.average),
+        p50Ms: result.latency.p50,
+        p99Ms: result.latency.p99,
+      });
+    });
+  });
+}
+
+const cluster = await startThrowawayCluster(() => undefined);
+let api: ChildProcess | null = null;
+try {
+  const port = await freePort();
+  api = await startApi(cluster.url, port);
+  const base = `http://127.0.0.1:${port}`;
+  const { token } = await json(`${base}/api/auth/register`, 'POST', {
+    clubName: 'Bench Park Juniors',
+    name: 'Bea Bench',
+    email: 'bea.bench@example.org',
+    password: 'bench-password-1',
+  });
+  const team = await json(
+    `${base}/api/teams`,
+    'POST',
+    {
+      name: 'U10 Bench Larks',
+      ageGroup: 'U10',
+      level: 'intermediate',
+      usualSpace: { width: 40, length: 30 },
+    },
+    token,
+  );
+  const players: { id: string }[] = [];
+  for (let i = 0; i < 16; i++) {
+    players.push(
+      await json(
+        `${base}/api/teams/${team.id}/players`,
+        'POST',
+        { displayName: `Player ${String.fromCharCode(65 + i)}.` },
+        token,
+      ),
+    );
+  }
+  const planBody = JSON.stringify({
+    teamId: team.id,
+    date: '2026-12-05',
+    kickOff: '10:30',
+    request: {
+      ageGroup: 'U10',
+      level: 'intermediate',
+      players: players.map((p) => ({ id: p.id })),
+      coaches: 2,
+      equipment: { balls: 18, cones: 40, bibs: 12, goals: 4 },
+      space: { width: 40, length: 30 },
+      minutes: 25,
+      kind: 'match-warm-up',
+    },
+  });
+  const auth = { authorization: `Bearer ${token}` };
+  // Warm the engine's compiled rules and the JIT before measuring.
+  await run({
+    url: `${base}/api/plans`,
+    method: 'POST',
+    headers: { ...auth, 'content-type': 'application/json' },
+    body: planBody,
+    duration: 3,
+  });
+
+  const results: Record<string, Figures> = {
+    'GET /api/health': await run({ url: `${base}/api/health` }),
+    'GET /api/teams': await run({ url: `${base}/api/teams`, headers: auth }),
+    'POST /api/plans': await run({
+      url: `${base}/api/plans`,
+      method: 'POST',
+      headers: { ...auth, 'content-type': 'application/json' },
+      body: planBody,
+    }),
+  };
+  const health = results['GET /api/health'].rps || 1;
+  console.log(
+    `route              req/s    p50 ms   p99 ms   share of health   (${DURATION_S} s, ${CONNECTIONS} connections)`,
+  );
+  for (const [route, f] of Object.entries(results)) {
+    console.log(
+      `${route.padEnd(18)} ${String(f.rps).padStart(6)} ${String(f.p50Ms).padStart(9)} ${String(f.p99Ms).padStart(8)}   ${((f.rps / health) * 100).toFixed(1).padStart(14)} %`,
+    );
+  }
+  const post = results['POST /api/plans'];
+  console.log(
+    `targets: POST /api/plans p99 ${post.p99Ms} ms (≤ 50: ${post.p99Ms <= 50 ? 'met' : 'missed'}), ` +
+      `req/s share ${((post.rps / health) * 100).toFixed(1)} % (≥ 10 %: ${post.rps * 10 >= health ? 'met' : 'missed'})`,
+  );
+  console.log(JSON.stringify(results));
+} finally {
+  api?.kill('SIGTERM');
+  await new Promise((resolve) => setTimeout(resolve, 500));
+  await cluster.stop();
+}
