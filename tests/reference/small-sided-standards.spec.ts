@@ -1,0 +1,49 @@
+/**
+ * Source: US Soccer Player Development Initiatives (2016), small-sided standards —
+ * U6–U8 4v4 on 25–35 × 15–25 yd, U9–U10 7v7 on 55–65 × 35–45 yd, U11–U12 9v9 on 70–80 × 45–55 yd;
+ * ball size 3 for U6–U8, 4 for U9–U12, 5 from U13.
+ */
+import { describe, expect, it } from 'vitest';
+import {
+  ballSizeFor,
+  METRES_PER_YARD,
+  spacePresetsFor,
+  US_SOCCER_SMALL_SIDED_2016,
+} from '../../shared/types';
+import { defaultRuleSet } from '../../engine';
+
+describe('US Soccer Player Development Initiatives (2016) small-sided standards', () => {
+  it('the shared table holds the published formats and field sizes', () => {
+    expect(US_SOCCER_SMALL_SIDED_2016.map((s) => [s.ages[0], s.format, s.lengthYd, s.widthYd])).toEqual([
+      ['U6', '4v4', { min: 25, max: 35 }, { min: 15, max: 25 }],
+      ['U9', '7v7', { min: 55, max: 65 }, { min: 35, max: 45 }],
+      ['U11', '9v9', { min: 70, max: 80 }, { min: 45, max: 55 }],
+    ]);
+  });
+
+  it('ball size: 3 for U6–U8, 4 for U9–U12, 5 from U13', () => {
+    expect(['U6', 'U7', 'U8'].map((a) => ballSizeFor(a as 'U6'))).toEqual([3, 3, 3]);
+    expect(['U9', 'U10', 'U11', 'U12'].map((a) => ballSizeFor(a as 'U9'))).toEqual([4, 4, 4, 4]);
+    expect(['U13', 'U16', 'adult'].map((a) => ballSizeFor(a as 'U13'))).toEqual([5, 5, 5]);
+  });
+
+  it('presets: the U9–U10 7v7 pitch at the middle of 55–65 × 35–45 yd, and its half and third', () => {
+    const [full, half, third] = spacePresetsFor('U10');
+    expect(full.space).toEqual({
+      width: Math.round(40 * METRES_PER_YARD * 10) / 10,
+      length: Math.round(60 * METRES_PER_YARD * 10) / 10,
+    });
+    expect(full.space).toEqual({ width: 36.6, length: 54.9 });
+    expect(half.space).toEqual({ width: 36.6, length: 27.5 });
+    expect(third.space).toEqual({ width: 36.6, length: 18.3 });
+  });
+
+  it("the rule set's U6–U8 small-sided game area sits inside the 4v4 field range", () => {
+    const area = defaultRuleSet.parameters.areas['small-sided-game']['U6-U8'];
+    const yd = (m: number) => m / METRES_PER_YARD;
+    expect(yd(area.width)).toBeGreaterThanOrEqual(15);
+    expect(yd(area.width)).toBeLessThanOrEqual(25);
+    expect(yd(area.length)).toBeGreaterThanOrEqual(25);
+    expect(yd(area.length)).toBeLessThanOrEqual(35);
+  });
+});
