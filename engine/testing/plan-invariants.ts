@@ -46,6 +46,19 @@ export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, fromMinut
           b.position.y + b.area.length <= a.position.y + 1e-9;
         if (!apart) out.push(`phase ${pi}: ${a.id} overlaps ${b.id}`);
       }
+      for (const c of a.conePositions) {
+        if (c.x < a.position.x - 0.05 || c.x > ax2 + 0.05 || c.y < a.position.y - 0.05 || c.y > ay2 + 0.05) {
+          out.push(`phase ${pi}: ${a.id} has a cone outside its area`);
+        }
+      }
+      for (const g of a.goalPositions ?? []) {
+        const onEdge =
+          Math.abs(g.x - a.position.x) < 0.05 ||
+          Math.abs(g.x - ax2) < 0.05 ||
+          Math.abs(g.y - a.position.y) < 0.05 ||
+          Math.abs(g.y - ay2) < 0.05;
+        if (!onEdge) out.push(`phase ${pi}: ${a.id} has a goal or gate off its edge`);
+      }
       if (a.activityKind === 'keep-ball') {
         const d = a.roles.defenders?.length ?? 0;
         const att = (a.roles.attackers?.length ?? 0) + a.coachJoins;
