@@ -17,6 +17,20 @@ import { problemMessage } from '../../core/http/problem-message';
 import { diffJson, showValue, type JsonChange } from './services/json-diff';
 import { RuleSetsApi } from './services/rule-sets-api';
 
+/** Conewise's own starting rules, as the server answers for the id "default". */
+const STARTING_RULES: RuleSetDto = {
+  id: 'default',
+  name: 'Conewise starting rules',
+  version: 0,
+  status: 'archived',
+  body: undefined,
+  authorId: '',
+  authorName: 'Conewise',
+  createdAt: '',
+  updatedAt: '',
+  revision: 0,
+};
+
 /** Every version with who saved it and when, a diff between any two, and roll back. */
 @Component({
   selector: 'cw-rule-history',
@@ -43,10 +57,12 @@ export class RuleHistory {
   /** The change log: who saved, published or rolled back what. */
   protected readonly log = signal<RuleSetChangeDto[]>([]);
 
+  /** Every version plus Conewise's starting rules, which the first version was made from. */
+  protected readonly comparable = computed<RuleSetDto[]>(() => [...this.versions(), STARTING_RULES]);
   protected readonly fromVersion = computed(
-    () => this.versions().find((v) => v.id === this.fromId()) ?? null,
+    () => this.comparable().find((v) => v.id === this.fromId()) ?? null,
   );
-  protected readonly toVersion = computed(() => this.versions().find((v) => v.id === this.toId()) ?? null);
+  protected readonly toVersion = computed(() => this.comparable().find((v) => v.id === this.toId()) ?? null);
   protected readonly changes = computed<JsonChange[] | null>(() => {
     const from = this.fromId();
     const to = this.toId();
@@ -65,7 +81,7 @@ export class RuleHistory {
     effect(() => {
       const versions = this.versions();
       if (!this.toId() && versions[0]) this.toId.set(versions[0].id);
-      if (!this.fromId() && versions[1]) this.fromId.set(versions[1].id);
+      if (!this.fromId() && versions[0]) this.fromId.set(versions[1]?.id ?? STARTING_RULES.id);
     });
     effect(() => {
       for (const id of [this.fromId(), this.toId()]) if (id) this.ensureBody(id);
@@ -92,7 +108,16 @@ export class RuleHistory {
     return this.versions().find((v) => v.id === entry.ruleSetId)?.version ?? entry.version;
   }
 
+  protected captionText(count: number): string {
+    const from = this.fromVersion();
+    const to = this.toVersion();
+    const name = (v: RuleSetDto | null) =>
+      v && v.id !== STARTING_RULES.id ? `v${v.version}` : 'the starting rules';
+    return `${count} difference${count === 1 ? '' : 's'} from ${name(from)} to ${name(to)}`;
+  }
+
   protected label(version: RuleSetDto): string {
+    if (version.id === STARTING_RULES.id) return 'Conewise starting rules';
     return `v${version.version} · ${version.status} · ${version.authorName}`;
   }
 
@@ -105,7 +130,7 @@ export class RuleHistory {
     const list = this.versions();
     const index = list.findIndex((v) => v.id === version.id);
     this.toId.set(version.id);
-    this.fromId.set(list[index + 1]?.id ?? version.id);
+    this.fromId.set(list[index + 1]?.id ?? STARTING_RULES.id);
   }
 
   private ensureBody(id: string): void {

@@ -12,8 +12,9 @@ const isObject = (v: unknown): v is Record<string, unknown> =>
   v !== null && typeof v === 'object' && !Array.isArray(v);
 
 /**
- * Lists what changed from `before` to `after`. Arrays of plain values (allowed kinds, say) are
- * compared whole, so the change reads as one line; arrays of objects are compared item by item.
+ * Lists what changed from `before` to `after`. Arrays are compared whole (one line: "formats
+ * 4v1, 3v1 → 3v1"), except arrays of objects of the same length, which are compared item by item
+ * so one edited field of one rule reads as that field.
  */
 export function diffJson(before: unknown, after: unknown, path: (string | number)[] = []): JsonChange[] {
   if (Object.is(before, after)) return [];
@@ -27,17 +28,14 @@ export function diffJson(before: unknown, after: unknown, path: (string | number
       return diffJson(before[key], after[key], [...path, key]);
     });
   }
-  if (Array.isArray(before) && Array.isArray(after) && before.some(isObject) && after.some(isObject)) {
-    const changes: JsonChange[] = [];
-    const length = Math.max(before.length, after.length);
-    for (let i = 0; i < length; i++) {
-      if (i >= after.length)
-        changes.push({ pointer: toPointer([...path, i]), kind: 'removed', before: before[i] });
-      else if (i >= before.length)
-        changes.push({ pointer: toPointer([...path, i]), kind: 'added', after: after[i] });
-      else changes.push(...diffJson(before[i], after[i], [...path, i]));
-    }
-    return changes;
+  if (
+    Array.isArray(before) &&
+    Array.isArray(after) &&
+    before.length === after.length &&
+    before.some(isObject) &&
+    after.some(isObject)
+  ) {
+    return before.flatMap((item, i) => diffJson(item, after[i], [...path, i]));
   }
   if (JSON.stringify(before) === JSON.stringify(after)) return [];
   return [{ pointer: toPointer(path), kind: 'changed', before, after }];

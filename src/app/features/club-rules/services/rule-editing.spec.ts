@@ -67,15 +67,16 @@ describe('rebaseEdits', () => {
 });
 
 describe('diffJson', () => {
-  it('lists the deepest places that changed, arrays of values as one change', () => {
+  it('lists the deepest places that changed, arrays as one change unless objects of the same length', () => {
     const changes = diffJson(
-      { a: { b: 1, c: [1, 2] }, list: [{ x: 1 }, { x: 2 }], gone: true },
-      { a: { b: 2, c: [1, 2, 3] }, list: [{ x: 1 }, { x: 3 }], added: 1 },
+      { a: { b: 1, c: [1, 2] }, list: [{ x: 1 }, { x: 2 }], short: [{ y: 1 }, { y: 2 }], gone: true },
+      { a: { b: 2, c: [1, 2, 3] }, list: [{ x: 1 }, { x: 3 }], short: [{ y: 1 }], added: 1 },
     );
     expect(changes).toEqual([
       { pointer: '/a/b', kind: 'changed', before: 1, after: 2 },
       { pointer: '/a/c', kind: 'changed', before: [1, 2], after: [1, 2, 3] },
       { pointer: '/list/1/x', kind: 'changed', before: 2, after: 3 },
+      { pointer: '/short', kind: 'changed', before: [{ y: 1 }, { y: 2 }], after: [{ y: 1 }] },
       { pointer: '/gone', kind: 'removed', before: true },
       { pointer: '/added', kind: 'added', after: 1 },
     ]);

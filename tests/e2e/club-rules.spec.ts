@@ -1,0 +1,170 @@
+/**
+ * The head of coaching's workspace end to end: edit a rule in the tables, publish it and see it in
+ * the next plan; two leads saving the same draft at once, where the second gets a 409 and re-applies.
+ */
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { AuthResponse, MemberDto, Plan, RuleSetDto } from '../../shared/types';
+import { ClubSession, LEAD, pageViolations, U12_COACH, U8_COACH } from './support/club-session';
+import { DESKTOP, launchBrowser, PHONE, screenshot, type TestBrowser } from './support/browser';
+
+/** Most attackers per defender in any keep-ball station of the plan. */
+function keepBallRatio(plan: Plan): number {
+  const ratios = plan.phases
+    .flatMap((p) => p.stations)
+    .filter((s) => s.activityKind === 'keep-ball')
+    .map((s) => {
+      const defenders = s.roles.defenders?.length ?? 0;
+      return (s.playerIds.length + s.coachJoins - defenders) / Math.max(1, defenders);
+    });
+  if (!ratios.length) throw new Error('the plan has no keep-ball station');
+  return Math.max(...ratios);
+}
+
+describe('club rules', () => {
+  const baseUrl = inject('baseUrl');
+  const club = new ClubSession(baseUrl);
+  let browser: TestBrowser;
+  let lead: AuthResponse;
+
+  beforeAll(async () => {
+    browser = await launchBrowser(baseUrl);
+    lead = await club.login(LEAD);
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('a lead changes the keep-ball ratio in the tables, publishes, and the next plan follows it', async () => {
+    const coach = await club.login(U8_COACH);
+    const { team, players } = await club.team(coach, 'U8 Foxes');
+    const before = await club.plan(coach, team, players);
+    expect(keepBallRatio(before.plan)).toBe(4);
+
+    const page = await browser.newPage(DESKTOP);
+    await club.open(page, lead, '/club/rules');
+    const start = page.getByRole('button', { name: 'Start editing' });
+    await start.waitFor();
+    await screenshot(page, 'club-rules-published');
+    await start.click();
+    await page.getByTestId('draft-state').waitFor();
+
+    const formats = page.locator('input[data-pointer="/parameters/keepBall/beginner/formats"]');
+    await formats.fill('3v1');
+    await formats.press('Tab');
+    await expect.poll(() => page.getByTestId('draft-state').textContent()).toContain('1 unsaved');
+    await page.getByRole('button', { name: 'Save draft' }).click();
+    await expect.poll(() => page.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
+
+    await page.getByRole('tab', { name: 'Try it' }).click();
+    await page.getByTestId('try-run').click();
+    await page.getByTestId('try-result').first().waitFor({ timeout: 30_000 });
+    expect(await page.getByTestId('try-result').count()).toBeGreaterThanOrEqual(5);
+    expect(await page.locator('[data-testid=try-result]', { hasText: 'changed' }).count()).toBeGreaterThan(0);
+    await screenshot(page, 'club-rules-try-it');
+    expect(await pageViolations(page)).toEqual([]);
+
+    await page.getByRole('button', { name: 'Publish' }).click();
+    await expect.poll(() => page.locator('.cw-rules__sub').textContent()).toContain('version');
+    const published = await club.api.get<RuleSetDto>('/api/rule-sets/published', { token: lead.token });
+    expect(
+      (published.body.body as { parameters: { keepBall: { beginner: { formats: unknown } } } }).parameters
+        .keepBall.beginner.formats,
+    ).toEqual([{ attackers: 3, defenders: 1 }]);
+
+    const after = await club.plan(coach, team, players);
+    expect(after.ruleSetVersion).toBe(published.body.version);
+    expect(keepBallRatio(after.plan)).toBeLessThanOrEqual(3);
+
+    await page.getByRole('tab', { name: 'History' }).click();
+    await page.getByTestId('rule-diff').waitFor();
+    expect(await page.getByTestId('rule-diff').textContent()).toContain(
+      '/parameters/keepBall/beginner/formats',
+    );
+    expect(await page.getByTestId('rule-change-log').textContent()).toContain('Morag Ellison');
+    await screenshot(page, 'club-rules-history');
+    await page.close();
+  });
+
+  it('two leads edit the same draft at once: the second gets a 409, reloads and re-applies, and nothing is lost', async () => {
+    // A second lead: the U12 coach is made a lead for this test.
+    const members = await club.api.get<MemberDto[]>('/api/members', { token: lead.token });
+    const ayesha = members.body.find((m) => m.email === U12_COACH)!;
+    expect(
+      (await club.api.patch(`/api/members/${ayesha.userId}`, { role: 'lead' }, { token: lead.token })).status,
+    ).toBe(200);
+    const secondLead = await club.login(U12_COACH);
+    const draft = await club.api.post<RuleSetDto>(
+      '/api/rule-sets',
+      { name: 'Winter rules', from: 'published' },
+      { token: lead.token },
+    );
+    expect(draft.status).toBe(201);
+
+    const other = await launchBrowser(baseUrl);
+    try {
+      const pageA = await browser.newPage(DESKTOP);
+      const pageB = await other.newPage(PHONE);
+      await club.open(pageA, lead, '/club/rules');
+      await club.open(pageB, secondLead, '/club/rules');
+      for (const page of [pageA, pageB]) await page.getByTestId('draft-state').waitFor();
+
+      // Both open the cautions table; A saves first.
+      for (const page of [pageA, pageB]) await page.getByText('Caution thresholds').click();
+      const heat = pageA.locator('input[data-pointer="/parameters/cautions/heatC"]');
+      await heat.fill('30');
+      await heat.press('Tab');
+      await pageA.getByRole('button', { name: 'Save draft' }).click();
+      await expect.poll(() => pageA.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
+
+      const afterA = await club.api.get<RuleSetDto>(`/api/rule-sets/${draft.body.id}`, { token: lead.token });
+      expect(
+        (afterA.body.body as { parameters: { cautions: { heatC: number } } }).parameters.cautions.heatC,
+      ).toBe(30);
+
+      const cold = pageB.locator('input[data-pointer="/parameters/cautions/coldC"]');
+      await cold.fill('2');
+      await cold.press('Tab');
+      await pageB.getByRole('button', { name: 'Save draft' }).click();
+      const conflict = pageB.getByTestId('conflict');
+      await conflict.waitFor();
+      expect(await conflict.textContent()).toContain('nothing of yours is lost');
+      await screenshot(pageB, 'club-rules-conflict');
+      expect(await pageViolations(pageB)).toEqual([]);
+
+      await pageB.getByRole('button', { name: /re-apply my changes/ }).click();
+      await pageB.getByText('re-applied your 1 change').waitFor();
+      expect(await pageB.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('1');
+      expect(await pageB.locator('input[data-pointer="/parameters/cautions/heatC"]').inputValue()).toBe('30');
+      await pageB.getByRole('button', { name: 'Save draft' }).click();
+      await expect.poll(() => pageB.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
+
+      const stored = await club.api.get<RuleSetDto>(`/api/rule-sets/${draft.body.id}`, { token: lead.token });
+      expect((stored.body.body as { parameters: { cautions: unknown } }).parameters.cautions).toEqual({
+        heatC: 30,
+        coldC: 2,
+      });
+      await pageA.close();
+      await pageB.close();
+    } finally {
+      await other.close();
+      await club.api.patch(`/api/members/${ayesha.userId}`, { role: 'coach' }, { token: lead.token });
+    }
+  });
+
+  it('the members screen lists the club and sends an invitation', async () => {
+    for (const viewport of [PHONE, DESKTOP]) {
+      const page = await browser.newPage(viewport);
+      await club.open(page, lead, '/club/members');
+      await page.getByTestId('member-table').waitFor();
+      expect(await page.getByTestId('member-table').textContent()).toContain('Tomasz Reid');
+      if (viewport === PHONE) {
+        await page.getByLabel('E-mail').fill(`helper.${Date.now()}@fernmoor.example.org`);
+        await page.getByRole('button', { name: 'Send invitation' }).click();
+        await page.getByTestId('pending-invitations').waitFor();
+      }
+      await screenshot(page, 'members');
+      expect(await pageViolations(page)).toEqual([]);
+      await page.close();
+    }
+  });
+});

@@ -1,0 +1,109 @@
+/**
+ * Helpers for end-to-end tests of the club screens: sign in through the API, open a page already
+ * signed in, find the demo teams and make plans. The browser part goes through the real UI.
+ */
+import type { Page } from 'playwright-core';
+import type { AuthResponse, PlanRequest, PlayerDto, SessionPlanDto, TeamDto } from '../../../shared/types';
+import { ApiClient } from '../../support/api-client';
+
+export const DEMO_PASSWORD = 'conewise-demo';
+export const LEAD = 'lead@fernmoor.example.org';
+export const U8_COACH = 'coach.u8@fernmoor.example.org';
+export const U12_COACH = 'coach.u12@fernmoor.example.org';
+
+const SESSION_KEY = 'conewise.session';
+
+export class ClubSession {
+  readonly api: ApiClient;
+  constructor(readonly baseUrl: string) {
+    this.api = new ApiClient(baseUrl);
+  }
+
+  async login(email: string): Promise<AuthResponse> {
+    const response = await this.api.post<AuthResponse>('/api/auth/login', { email, password: DEMO_PASSWORD });
+    if (response.status !== 200) throw new Error(`login ${email}: ${response.status} ${response.text}`);
+    return response.body;
+  }
+
+  /** Opens a path with the session already in storage, as after signing in. */
+  async open(page: Page, auth: AuthResponse, path: string): Promise<void> {
+    await page.addInitScript(
+      ([key, value]) => {
+        if (!localStorage.getItem(key)) localStorage.setItem(key, value);
+      },
+      [SESSION_KEY, JSON.stringify(auth)] as const,
+    );
+    await page.goto(this.baseUrl + path);
+  }
+
+  async team(auth: AuthResponse, name: string): Promise<{ team: TeamDto; players: PlayerDto[] }> {
+    const teams = await this.api.get<TeamDto[] | { items: TeamDto[] }>('/api/teams', { token: auth.token });
+    const list = Array.isArray(teams.body) ? teams.body : teams.body.items;
+    const team = list.find((t) => t.name === name);
+    if (!team) throw new Error(`no team ${name} in ${teams.text}`);
+    const players = await this.api.get<PlayerDto[] | { items: PlayerDto[] }>(
+      `/api/teams/${team.id}/players`,
+      {
+        token: auth.token,
+      },
+    );
+    const roster = Array.isArray(players.body) ? players.body : players.body.items;
+    return { team, players: roster.filter((p) => p.active) };
+  }
+
+  /** A plan for the team with the given players, through POST /api/plans. */
+  async plan(
+    auth: AuthResponse,
+    team: TeamDto,
+    players: PlayerDto[],
+    overrides: Partial<PlanRequest> = {},
+  ): Promise<SessionPlanDto> {
+    const request: PlanRequest = {
+      ageGroup: team.ageGroup,
+      level: team.level,
+      players: players.map((p) => ({ id: p.id, name: p.displayName, goalkeeper: p.goalkeeper })),
+      coaches: 1,
+      equipment: { balls: 12, cones: 40, bibs: 12, goals: 4 },
+      space: team.usualSpace,
+      minutes: 20,
+      kind: 'match-warm-up',
+      seed: 'e2e-fixed-seed',
+      ...overrides,
+    };
+    const response = await this.api.post<SessionPlanDto>(
+      '/api/plans',
+      { teamId: team.id, request },
+      { token: auth.token },
+    );
+    if (response.status !== 201) throw new Error(`plan: ${response.status} ${response.text}`);
+    return response.body;
+  }
+}
+
+/**
+ * Serious and critical axe-core findings inside the routed page (#main), leaving out the shell
+ * around it, which has its own checks.
+ */
+export async function pageViolations(page: Page): Promise<string[]> {
+  const { readFileSync } = await import('node:fs');
+  const { createRequire } = await import('node:module');
+  const source = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
+  await page.evaluate(source);
+  const violations = await page.evaluate(async () => {
+    const axe = (
+      globalThis as unknown as {
+        axe: {
+          run: (
+            context: unknown,
+          ) => Promise<{
+            violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[];
+          }>;
+        };
+      }
+    ).axe;
+    return (await axe.run({ include: [['#main']] })).violations;
+  });
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.impact} ${v.id}: ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+}
