@@ -41,6 +41,15 @@ describe('validateRuleSet', () => {
     );
   });
 
+  it('points at an unknown key in a keyed table', () => {
+    const doc = clone() as unknown as { parameters: { focusBoost: Record<string, number> } };
+    doc.parameters.focusBoost['juggling'] = 2;
+    expect(validateRuleSet(doc).errors).toContainEqual({
+      pointer: '/parameters/focusBoost/juggling',
+      message: 'is not a known key here',
+    });
+  });
+
   it('refuses 5v1 keep-ball (more than four attackers per defender)', () => {
     const doc = clone();
     doc.parameters.keepBall.beginner.formats[0] = { attackers: 5, defenders: 1 };

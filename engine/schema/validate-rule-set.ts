@@ -4,9 +4,9 @@
  * keep-ball never 5v1 or worse, every kind playable).
  */
 import type { ErrorObject, ValidateFunction } from 'ajv';
-import schema from '../../shared/schemas/rule-set.schema.json';
 import { ACTIVITY_KINDS, LEVELS, type RuleSetDocument } from '../../shared/types';
-import { sharedAjv } from './ajv';
+// Precompiled from shared/schemas/rule-set.schema.json: no eval, so it runs under the app's CSP.
+import generated from './generated/rule-set.validator';
 
 export interface PointerError {
   pointer: string;
@@ -18,17 +18,16 @@ export interface RuleSetValidation {
   errors: PointerError[];
 }
 
-let validator: ValidateFunction | undefined;
-
-function compiled(): ValidateFunction {
-  validator ??= sharedAjv().getSchema(schema.$id) ?? sharedAjv().compile(schema);
-  return validator;
-}
+const compiled = () => generated as unknown as ValidateFunction;
 
 export function validateRuleSet(value: unknown): RuleSetValidation {
   const validate = compiled();
   if (!validate(value)) {
-    const errors = dedupe((validate.errors ?? []).filter((e) => e.keyword !== 'oneOf').map(describe));
+    const errors = dedupe(
+      (validate.errors ?? [])
+        .filter((e) => e.keyword !== 'oneOf' && e.keyword !== 'propertyNames')
+        .map(describe),
+    );
     return { ok: false, errors };
   }
   const errors = semanticErrors(value as RuleSetDocument);
@@ -39,6 +38,9 @@ function describe(e: ErrorObject): PointerError {
   const p = e.params as Record<string, unknown>;
   if (e.keyword === 'required') {
     return { pointer: `${e.instancePath}/${String(p['missingProperty'])}`, message: 'is required' };
+  }
+  if (e.keyword === 'enum' && p['propertyName'] !== undefined) {
+    return { pointer: `${e.instancePath}/${String(p['propertyName'])}`, message: 'is not a known key here' };
   }
   if (e.keyword === 'additionalProperties') {
     return {
