@@ -39,8 +39,9 @@ function describe(e: ErrorObject): PointerError {
   if (e.keyword === 'required') {
     return { pointer: `${e.instancePath}/${String(p['missingProperty'])}`, message: 'is required' };
   }
-  if (e.keyword === 'enum' && p['propertyName'] !== undefined) {
-    return { pointer: `${e.instancePath}/${String(p['propertyName'])}`, message: 'is not a known key here' };
+  const propertyName = (e as ErrorObject & { propertyName?: string }).propertyName;
+  if (propertyName !== undefined) {
+    return { pointer: `${e.instancePath}/${propertyName}`, message: 'is not a known key here' };
   }
   if (e.keyword === 'additionalProperties') {
     return {
