@@ -1,6 +1,8 @@
 import { createRequire } from 'node:module';
+import { readFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import type { TFontDictionary } from 'pdfmake/interfaces';
+import { woffToSfnt } from './woff-to-sfnt';
 
 /** Family name the card uses in pdfmake styles and in SVG `font-family`. */
 export const CARD_FONT = 'RobotoCondensed';
@@ -11,10 +13,11 @@ const fontDir = join(
   'files',
 );
 
+// Unpacked once per process from the shipped WOFF files (see woff-to-sfnt.ts for why).
 const file = (weight: number, style: 'normal' | 'italic') =>
-  join(fontDir, `roboto-condensed-latin-${weight}-${style}.woff`);
+  woffToSfnt(readFileSync(join(fontDir, `roboto-condensed-latin-${weight}-${style}.woff`)));
 
-/** pdfmake font dictionary with Roboto Condensed embedded (fontkit reads WOFF; WOFF2 is not needed). */
+/** pdfmake font dictionary with Roboto Condensed embedded (subset into each PDF). */
 export const cardFonts: TFontDictionary = {
   [CARD_FONT]: {
     normal: file(400, 'normal'),
