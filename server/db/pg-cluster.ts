@@ -1,6 +1,15 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { createHash, randomBytes } from 'node:crypto';
-import { chmodSync, chownSync, existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import {
+  chmodSync,
+  chownSync,
+  existsSync,
+  mkdirSync,
+  readdirSync,
+  readFileSync,
+  rmSync,
+  writeFileSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import pg from 'pg';
@@ -201,8 +210,38 @@ export async function startCluster(options: StartClusterOptions): Promise<PgClus
   return { url, port, dataDir, stop };
 }
 
+function processAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (error) {
+    return (error as { code?: string }).code === 'EPERM';
+  }
+}
+
+/**
+ * Stops and deletes throwaway clusters whose test run died before its teardown (e.g. killed):
+ * their folder names carry the pid of the process that made them.
+ */
+export function sweepOrphanedClusters(binDir = findPgBinDir()): number {
+  if (!binDir) return 0;
+  let swept = 0;
+  for (const name of readdirSync(tmpdir())) {
+    const match = /^conewise-test-(\d+)-[0-9a-f]+$/.exec(name);
+    if (!match || processAlive(Number(match[1]))) continue;
+    const base = join(tmpdir(), name);
+    if (existsSync(join(base, 'pg', 'PG_VERSION'))) {
+      runPg(binDir, 'pg_ctl', ['stop', '-D', join(base, 'pg'), '-m', 'immediate', '-w']);
+    }
+    rmSync(base, { recursive: true, force: true });
+    swept++;
+  }
+  return swept;
+}
+
 /** A cluster in a fresh temporary folder, deleted on stop. */
 export async function startThrowawayCluster(log?: (m: string) => void): Promise<PgCluster> {
+  sweepOrphanedClusters();
   const base = join(tmpdir(), `conewise-test-${process.pid}-${randomBytes(4).toString('hex')}`);
   mkdirSync(base, { recursive: true, mode: 0o711 });
   const cluster = await startCluster({ dataDir: join(base, 'pg'), removeOnStop: true, log });
