@@ -4,11 +4,11 @@ import { describe, expect, it } from 'vitest';
 import Ajv from 'ajv';
 import planSchema from '../shared/schemas/plan.schema.json';
 import requestSchema from '../shared/schemas/plan-request.schema.json';
-import { generatePlan, defaultRuleSet, validatePlanRequest, PlanRequestError } from './index';
+import { checkPlan, generatePlan, defaultRuleSet, validatePlanRequest, PlanRequestError } from './index';
 import { requestArb } from './testing/arbitraries';
 import { brokenInvariants } from './testing/plan-invariants';
 
-const RUNS = 200;
+const RUNS = Number(process.env['ENGINE_FC_RUNS'] ?? 200);
 
 describe('generatePlan properties', () => {
   it('keeps every invariant: players once per phase, contiguous minutes, kit, space, ratios, ages, waiting', async () => {
@@ -16,6 +16,8 @@ describe('generatePlan properties', () => {
       fc.asyncProperty(requestArb(), async (request) => {
         const plan = await generatePlan(request);
         expect(brokenInvariants(plan, defaultRuleSet)).toEqual([]);
+        // checkPlan (used after edits) agrees that a fresh plan breaks nothing.
+        expect(checkPlan(plan)).toEqual([]);
       }),
       { numRuns: RUNS },
     );
