@@ -93,9 +93,7 @@ export async function pageViolations(page: Page): Promise<string[]> {
     const axe = (
       globalThis as unknown as {
         axe: {
-          run: (
-            context: unknown,
-          ) => Promise<{
+          run: (context: unknown) => Promise<{
             violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[];
           }>;
         };

@@ -86,18 +86,16 @@ describe('PitchSidePage', () => {
   async function opened() {
     const t = setUp();
     t.http.expectOne('/api/plans/p1').flush(session);
-    t.http
-      .expectOne('/api/teams/t1/players')
-      .flush([
-        ...['a', 'b', 'c', 'd', 'e'].map((id) => ({
-          id,
-          teamId: 't1',
-          displayName: id.toUpperCase(),
-          goalkeeper: false,
-          active: true,
-        })),
-        { id: 'f', teamId: 't1', displayName: 'Fen Q.', goalkeeper: false, active: true },
-      ]);
+    t.http.expectOne('/api/teams/t1/players').flush([
+      ...['a', 'b', 'c', 'd', 'e'].map((id) => ({
+        id,
+        teamId: 't1',
+        displayName: id.toUpperCase(),
+        goalkeeper: false,
+        active: true,
+      })),
+      { id: 'f', teamId: 't1', displayName: 'Fen Q.', goalkeeper: false, active: true },
+    ]);
     t.http.expectOne('/api/rule-sets/rs1').flush({ id: 'rs1', body: null });
     await t.settle();
     return t;

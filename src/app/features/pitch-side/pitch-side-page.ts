@@ -91,6 +91,13 @@ export class PitchSidePage {
     if (!this.started()) return formatCountdown((phase.endMinute - phase.startMinute) * 60);
     return formatCountdown(this.reading().secondsLeft);
   });
+  /** "Start session" before anything ran, "Start phase" after a jump to a phase's start, else "Resume". */
+  protected readonly startLabel = computed(() => {
+    if (!this.started()) return 'Start session';
+    const phase = this.currentPhase();
+    const atPhaseStart = phase && Math.abs(this.reading().elapsedSeconds - phase.startMinute * 60) < 1;
+    return atPhaseStart ? 'Start phase' : 'Resume';
+  });
   protected readonly pendingCount = computed(
     () => this.queue.pending().filter((action) => action.planId === this.planId()).length,
   );

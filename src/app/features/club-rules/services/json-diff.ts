@@ -44,6 +44,15 @@ export function diffJson(before: unknown, after: unknown, path: (string | number
 /** A short, readable rendering of a JSON value for diff rows. */
 export function showValue(value: unknown): string {
   if (value === undefined) return '—';
+  if (
+    Array.isArray(value) &&
+    value.length &&
+    value.every((v) => v && typeof v === 'object' && 'attackers' in v && 'defenders' in v)
+  ) {
+    return value
+      .map((v: { attackers: number; defenders: number }) => `${v.attackers}v${v.defenders}`)
+      .join(', ');
+  }
   const text = JSON.stringify(value);
   return text.length > 80 ? `${text.slice(0, 77)}…` : text;
 }
