@@ -13,7 +13,7 @@ export default defineConfig({
             'shared/**/*.spec.ts',
             'rules/**/*.spec.ts',
             'tests/reference/**/*.spec.ts',
-            'tests/cli/**/*.spec.ts',
+            'tests/tooling/**/*.spec.ts',
           ],
         },
       },

@@ -8,7 +8,7 @@ import { checkPlan, generatePlan, defaultRuleSet, validatePlanRequest, PlanReque
 import { requestArb } from './testing/arbitraries';
 import { brokenInvariants } from './testing/plan-invariants';
 
-const RUNS = Number(process.env['ENGINE_FC_RUNS'] ?? 200);
+const RUNS = 200;
 
 describe('generatePlan properties', () => {
   it('keeps every invariant: players once per phase, contiguous minutes, kit, space, ratios, ages, waiting', async () => {
@@ -18,6 +18,16 @@ describe('generatePlan properties', () => {
         expect(brokenInvariants(plan, defaultRuleSet)).toEqual([]);
         // checkPlan (used after edits) agrees that a fresh plan breaks nothing.
         expect(checkPlan(plan)).toEqual([]);
+      }),
+      { numRuns: RUNS },
+    );
+  }, 120_000);
+
+  it('orders phases by rising intensity', async () => {
+    await fc.assert(
+      fc.asyncProperty(requestArb(), async (request) => {
+        const intensities = (await generatePlan(request)).phases.map((p) => p.intensity ?? 0);
+        expect(intensities).toEqual([...intensities].sort((a, b) => a - b));
       }),
       { numRuns: RUNS },
     );

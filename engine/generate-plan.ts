@@ -90,8 +90,10 @@ function feedbackWidths(ctx: BuildContext): Partial<Record<ActivityKind, number>
     const fb = ctx.request.recentFeedback?.find((f) => f.activityKind === kind);
     const table = areaTable(ctx.params, kind, ctx.band);
     const typical = ctx.params.groupSizes[kind][ctx.request.level].preferred;
-    const from =
-      fb?.areaWidth ?? Math.round(baseWidth(ctx.params, kind, ctx.band, ctx.request.level, typical));
+    // The table's width is the shorter side; a rotated station may report its sides either way round.
+    const reported =
+      fb?.areaWidth !== undefined ? Math.min(fb.areaWidth, fb.areaLength ?? fb.areaWidth) : undefined;
+    const from = reported ?? Math.round(baseWidth(ctx.params, kind, ctx.band, ctx.request.level, typical));
     const harderSign = ctx.params.kinds[kind].harderWhenArea === 'smaller' ? -1 : 1;
     const steps = step.direction === 'keep' ? 0 : step.direction === 'harder' ? harderSign : -harderSign;
     const width = steppedWidth(table, from, steps);

@@ -53,15 +53,15 @@ export function markPhase(
     let chosen: Direction[];
     let clearance: number;
     if (rule === 'two') {
-      const a = Math.min(...long.map((d) => clearanceOf(rects[i], d, others, space, corridorHalf)));
-      const b = Math.min(...short.map((d) => clearanceOf(rects[i], d, others, space, corridorHalf)));
+      const a = Math.min(...long.map((d) => clearanceOf(rects[i], d, others, corridorHalf)));
+      const b = Math.min(...short.map((d) => clearanceOf(rects[i], d, others, corridorHalf)));
       chosen = b > a ? short : long;
       clearance = Math.max(a, b);
     } else {
       let best: Direction = long[0];
       let bestClear = -1;
       for (const d of [...long, ...short]) {
-        const c = clearanceOf(rects[i], d, others, space, corridorHalf);
+        const c = clearanceOf(rects[i], d, others, corridorHalf);
         if (c > bestClear) {
           best = d;
           bestClear = c;
@@ -158,7 +158,7 @@ function rectOfStation(s: Station): Rect {
 }
 
 /** Metres from the station's edge to the first other station in the corridor behind its target. */
-function clearanceOf(r: Rect, d: Direction, others: Rect[], space: Space, half: number): number {
+function clearanceOf(r: Rect, d: Direction, others: Rect[], half: number): number {
   let best = Number.POSITIVE_INFINITY;
   const cx = r.x + r.width / 2;
   const cy = r.y + r.length / 2;
@@ -173,7 +173,6 @@ function clearanceOf(r: Rect, d: Direction, others: Rect[], space: Space, half: 
       if (gap >= 0) best = Math.min(best, gap);
     }
   }
-  void space;
   return best;
 }
 

@@ -69,7 +69,7 @@ describe('replan', () => {
         });
         expect(ours).toBeLessThanOrEqual(theirs);
       }),
-      { numRuns: Number(process.env['ENGINE_FC_RUNS'] ?? 120) },
+      { numRuns: 120 },
     );
   }, 120_000);
 

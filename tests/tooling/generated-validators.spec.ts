@@ -7,7 +7,10 @@ import { validatorSources } from '../../rules/scripts/validator-sources';
 describe('generated validators', () => {
   for (const { file, source } of validatorSources()) {
     it(`${file} is up to date with shared/schemas`, () => {
-      const committed = readFileSync(fileURLToPath(new URL(`./generated/${file}`, import.meta.url)), 'utf8');
+      const committed = readFileSync(
+        fileURLToPath(new URL(`../../engine/schema/generated/${file}`, import.meta.url)),
+        'utf8',
+      );
       expect(committed === source, `run npx tsx rules/scripts/generate-validators.ts`).toBe(true);
     });
   }
