@@ -151,6 +151,32 @@ describe('club rules', () => {
     }
   });
 
+  it('a lead rolls back to an earlier version from the history, and it is published again', async () => {
+    const list = await club.api.get<RuleSetDto[]>('/api/rule-sets', { token: lead.token });
+    const draft = list.body.find((v) => v.status === 'draft')!;
+    const earlier = list.body.find((v) => v.status === 'published')!;
+    const publish = await club.api.post<RuleSetDto>(
+      `/api/rule-sets/${draft.id}/publish`,
+      {},
+      { token: lead.token },
+    );
+    expect(publish.status).toBe(200);
+
+    const page = await browser.newPage(DESKTOP);
+    page.on('dialog', (dialog) => void dialog.accept());
+    await club.open(page, lead, '/club/rules');
+    await page.getByRole('tab', { name: 'History' }).click();
+    await page.getByRole('button', { name: `Roll back to v${earlier.version}` }).click();
+    await page.getByText(`version ${earlier.version}'s rules are published again`).waitFor();
+
+    const now = await club.api.get<RuleSetDto>('/api/rule-sets/published', { token: lead.token });
+    expect(now.body.version).toBeGreaterThan(publish.body.version);
+    const cautions = (body: unknown) => (body as { parameters: { cautions: unknown } }).parameters.cautions;
+    expect(cautions(now.body.body)).toEqual(cautions(earlier.body));
+    expect(cautions(now.body.body)).not.toEqual(cautions(publish.body.body));
+    await page.close();
+  });
+
   it('the members screen lists the club and sends an invitation', async () => {
     for (const viewport of [PHONE, DESKTOP]) {
       const page = await browser.newPage(viewport);
