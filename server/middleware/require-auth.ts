@@ -1,3 +1,4 @@
+import { createSecretKey } from 'node:crypto';
 import type { RequestHandler } from 'express';
 import { Passport } from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
@@ -23,7 +24,9 @@ export function createRequireAuth(dataSource: DataSource, config: AppConfig): Re
     new JwtStrategy(
       {
         jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-        secretOrKey: config.jwtSecret,
+        // A KeyObject made once: given a string, jsonwebtoken first tries (and fails) to parse it
+        // as a public key on every request, which costs milliseconds each time.
+        secretOrKey: createSecretKey(Buffer.from(config.jwtSecret)) as unknown as string,
         algorithms: [JWT_ALGORITHM],
         ignoreExpiration: false,
       },
