@@ -103,7 +103,7 @@ describe('PlanWizard', () => {
     });
     call.flush({ id: 'plan-9', plan: {} });
     await new Promise((resolve) => setTimeout(resolve, 0));
-    expect(navigate).toHaveBeenCalledWith(['/plans', 'plan-9'], expect.anything());
+    expect(navigate).toHaveBeenCalledWith(['/plans', 'plan-9']);
   });
 
   it('adds a guest to the team as not active and plans with them', async () => {

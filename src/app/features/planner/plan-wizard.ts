@@ -33,6 +33,7 @@ import { FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { isoDate } from '../../core/time/dates';
 import { buildPlanRequest, wizardFieldOf, type WizardValue } from './services/plan-request-builder';
 import { SpacePreset, SpacePresets } from './services/space-presets';
+import { PlanHandover } from '../plans/services/plan-handover';
 
 const count = [Validators.required, Validators.min(0), Validators.max(500)];
 const metres = [Validators.required, Validators.min(5), Validators.max(130)];
@@ -64,6 +65,7 @@ export class PlanWizard {
   private readonly plansApi = inject(PlansApi);
   private readonly presetsService = inject(SpacePresets);
   private readonly router = inject(Router);
+  private readonly handover = inject(PlanHandover);
   private readonly fb = inject(NonNullableFormBuilder);
 
   /** Pre-selects a team (?teamId=…). */
@@ -255,7 +257,10 @@ export class PlanWizard {
         kickOff: raw.time.kickOff || undefined,
       })
       .subscribe({
-        next: (saved) => void this.router.navigate(['/plans', saved.id], { state: { plan: saved } }),
+        next: (saved) => {
+          this.handover.give(saved);
+          void this.router.navigate(['/plans', saved.id]);
+        },
         error: (error: unknown) => {
           this.sending.set(false);
           this.status.set('');

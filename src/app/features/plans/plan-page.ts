@@ -5,8 +5,8 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
-import { Router, RouterLink } from '@angular/router';
-import type { Phase, SessionPlanDto } from '../../../../shared/types';
+import { RouterLink } from '@angular/router';
+import type { Phase } from '../../../../shared/types';
 import { PlansApi } from '../../core/api/plans-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ActivityOption, BrowserEngine } from '../../core/engine/browser-engine';
@@ -18,6 +18,7 @@ import { PlanNotices } from './components/plan-notices';
 import { ShareDialog } from './components/share-dialog';
 import { PlayerMoveRequest, StationCard } from './components/station-card';
 import { WhyPanel } from './components/why-panel';
+import { PlanHandover } from './services/plan-handover';
 import { PlanSession } from './services/plan-session';
 
 /** The plan: timeline to kick-off, station cards with diagrams, cautions, why, edits, print and share. */
@@ -46,7 +47,6 @@ export class PlanPage {
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly auth = inject(AuthStore);
-  private readonly router = inject(Router);
 
   readonly planId = input.required<string>();
 
@@ -59,10 +59,11 @@ export class PlanPage {
   protected readonly totalPlayers = computed(() => this.session.plan()?.request.players.length ?? 0);
 
   constructor() {
-    const handedOver = (this.router.getCurrentNavigation()?.extras.state?.['plan'] ??
-      history.state?.plan ??
-      null) as SessionPlanDto | null;
-    effect(() => this.session.open(this.planId(), handedOver));
+    const handover = inject(PlanHandover);
+    effect(() => {
+      const id = this.planId();
+      this.session.open(id, handover.take(id));
+    });
   }
 
   protected movePlayer(phaseIndex: number, move: PlayerMoveRequest, phase: Phase): void {
