@@ -163,7 +163,7 @@ function timeline(plan: Plan, start: number | null, width: number): Content {
   const widths: number[] = plan.phases.map((phase) =>
     Math.max(38, ((phase.endMinute - phase.startMinute) / total) * usable),
   );
-  const scale = usable / widths.reduce((a, b) => a + b, 0 || 1);
+  const scale = usable / (widths.reduce((a, b) => a + b, 0) || 1);
   const fitted = widths.map((w) => Math.floor(w * Math.min(scale, 1)));
   if (endCell) {
     cells.push({

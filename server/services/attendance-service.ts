@@ -28,12 +28,10 @@ export class AttendanceService {
       await scope.teamToRead(plan.teamId);
       const known = new Set(
         (
-          await manager
-            .getRepository(Player)
-            .find({
-              select: { id: true },
-              where: { id: In(playerIds), teamId: plan.teamId, clubId: auth.clubId },
-            })
+          await manager.getRepository(Player).find({
+            select: { id: true },
+            where: { id: In(playerIds), teamId: plan.teamId, clubId: auth.clubId },
+          })
         ).map((p) => p.id),
       );
       const errors = playerIds
