@@ -55,6 +55,29 @@ describe('club rules', () => {
     await page.getByRole('button', { name: 'Save draft' }).click();
     await expect.poll(() => page.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
 
+    // The JSON view pins a rule the engine refuses to its line; discarding puts the saved draft back.
+    await page.getByRole('tab', { name: 'JSON' }).click();
+    const editor = page.locator('#rule-json');
+    const document = JSON.parse(await editor.inputValue());
+    document.parameters.keepBall.beginner.formats = [{ attackers: 5, defenders: 1 }];
+    const text = JSON.stringify(document, null, 2);
+    await editor.fill(text);
+    const problem = page.getByTestId('json-problems').locator('button').first();
+    await problem.waitFor();
+    // The array item's opening brace: the line after "formats": [ under keepBall → beginner.
+    const lines = text.split('\n');
+    const keepBall = lines.findIndex((l) => l.includes('"keepBall"'));
+    const beginner = lines.findIndex((l, i) => i > keepBall && l.includes('"beginner"'));
+    const formatsLine = lines.findIndex((l, i) => i > beginner && l.includes('"formats"'));
+    const line = formatsLine + 2;
+    expect(await problem.textContent()).toContain('/parameters/keepBall/beginner/formats/0');
+    expect(await problem.textContent()).toMatch(new RegExp(`Line ${line}\\b`));
+    await problem.click();
+    await screenshot(page, 'club-rules-json');
+    expect(await pageViolations(page)).toEqual([]);
+    await page.getByRole('button', { name: 'Discard' }).click();
+    await expect.poll(() => page.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
+
     await page.getByRole('tab', { name: 'Try it' }).click();
     await page.getByTestId('try-run').click();
     await page.getByTestId('try-result').first().waitFor({ timeout: 30_000 });
