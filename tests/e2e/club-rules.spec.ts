@@ -32,6 +32,8 @@ describe('club rules', () => {
   });
   afterAll(async () => {
     await browser?.close();
+    // Leave the club on the starting rules for the suites that follow.
+    if (lead) await club.api.post('/api/rule-sets/rollback', { to: 'default' }, { token: lead.token });
   });
 
   it('a lead changes the keep-ball ratio in the tables, publishes, and the next plan follows it', async () => {
