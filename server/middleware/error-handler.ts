@@ -59,6 +59,7 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
     res.end();
     return;
   }
+  if (problem.status === 401) res.setHeader('WWW-Authenticate', 'Bearer realm="conewise"');
   res
     .status(problem.status)
     .type(PROBLEM_TYPE)

@@ -11,6 +11,8 @@ import { AuthService, emailTaken, hashPassword, normaliseEmail } from './auth-se
 import type { ClubScope } from './club-scope';
 import type { MailQueue } from './mail-queue';
 
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
 export function hashInvitationToken(token: string): string {
   return createHash('sha256').update(token).digest('hex');
 }
@@ -67,15 +69,13 @@ export class MemberService {
       .sort((a, b) => a.name.localeCompare(b.name));
   }
 
+  /** Members are addressed by user id; another club's member answers 404. */
   private async membership(userId: string): Promise<Membership> {
-    return this.scope.byId(Membership, userId, 'member').catch(async () => {
-      // Members are addressed by user id, not by membership id.
-      const row = await this.scope.manager
-        .getRepository(Membership)
-        .findOneBy({ clubId: this.scope.clubId, userId });
-      if (!row) throw notFound('member');
-      return row;
-    });
+    const row = UUID.test(userId)
+      ? await this.scope.manager.getRepository(Membership).findOneBy(this.scope.where<Membership>({ userId }))
+      : null;
+    if (!row) throw notFound('member');
+    return row;
   }
 
   private async leadCount(): Promise<number> {
@@ -179,14 +179,14 @@ export class InvitationAcceptService {
     const passwordHash = await hashPassword(input.password);
     const auth = await this.dataSource.transaction(async (manager) => {
       // Claiming the row and marking it used in one statement keeps the token single-use.
-      const claimed: Invitation[] = await manager.query(
+      // For UPDATE … RETURNING the postgres driver answers [rows, affected].
+      const [claimed] = (await manager.query(
         `UPDATE invitation SET "acceptedAt" = now()
          WHERE "tokenHash" = $1 AND "acceptedAt" IS NULL AND "expiresAt" > now()
          RETURNING id, "clubId", email, role, "teamId"`,
         [hashInvitationToken(input.token)],
-      );
-      const invitation =
-        (claimed as unknown as [Invitation[], number])[0]?.[0] ?? (claimed[0] as Invitation | undefined);
+      )) as [Pick<Invitation, 'id' | 'clubId' | 'email' | 'role' | 'teamId'>[], number];
+      const invitation = claimed[0];
       if (!invitation || !invitation.clubId) throw invalidToken();
       if (await manager.getRepository(User).existsBy({ email: invitation.email })) throw emailTaken();
       const user = await manager

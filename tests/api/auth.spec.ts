@@ -85,6 +85,7 @@ describe('auth: register, login, me', () => {
       const response = await app.api.get('/api/auth/me', { token });
       expect(response.status, `token ${token}`).toBe(401);
       expect(response.headers.get('content-type')).toMatch(/problem\+json/);
+      expect(response.headers.get('www-authenticate')).toMatch(/^Bearer/);
     }
   });
 
