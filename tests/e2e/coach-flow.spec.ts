@@ -37,7 +37,7 @@ async function captureScreen(page: Page, name: string): Promise<string[]> {
   const findings: string[] = [];
   for (const viewport of [PHONE, DESKTOP]) {
     await page.setViewportSize(viewport);
-    await page.waitForTimeout(150);
+    await page.waitForTimeout(500);
     await screenshot(page, name);
     findings.push(
       ...(await seriousAccessibilityViolations(page)).map((v) => `${name}@${viewport.width}: ${v}`),

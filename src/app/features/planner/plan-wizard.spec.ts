@@ -106,6 +106,19 @@ describe('PlanWizard', () => {
     expect(navigate).toHaveBeenCalledWith(['/plans', 'plan-9']);
   });
 
+  it('offers half and a third of the age group pitch and fills the space from a pick', async () => {
+    const { fixture, root, input } = await setUp();
+    const buttons = Array.from(root.querySelectorAll<HTMLButtonElement>('.cw-presets button'));
+    const half = buttons.find((b) => b.textContent?.includes('Half a 7v7 pitch'))!;
+    expect(buttons.some((b) => b.textContent?.includes('A third of a 7v7 pitch'))).toBe(true);
+    half.click();
+    await fixture.whenStable();
+    // 7v7 pitch, US Soccer 2016: 35–45 yd wide, 55–65 yd long; midpoints 40 × 60 yd = 36.6 × 54.9 m,
+    // and half of its length 27.45 m, shown to a tenth.
+    expect(input('width').value).toBe('36.6');
+    expect(input('length').value).toBe('27.5');
+  });
+
   it('adds a guest to the team as not active and plans with them', async () => {
     const { fixture, http, root, submit } = await setUp();
     const addGuest = Array.from(root.querySelectorAll('button')).find((b) =>

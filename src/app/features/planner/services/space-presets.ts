@@ -1,16 +1,13 @@
 import { Injectable } from '@angular/core';
-import type { AgeGroup, Space } from '../../../../../shared/types';
+import type { AgeGroup } from '../../../../../shared/types';
+import { spacePresetsFor, type SpacePreset } from '../../../../../shared/types/plan-pitch';
 
-export interface SpacePreset {
-  label: string;
-  space: Space;
-}
+export type { SpacePreset };
 
-/** Quick picks for the space: a half or a third of the pitch the age group plays on. */
+/** Quick picks for the space: the age group's format pitch, its half and its third. */
 @Injectable({ providedIn: 'root' })
 export class SpacePresets {
   async forAgeGroup(ageGroup: AgeGroup): Promise<SpacePreset[]> {
-    void ageGroup;
-    return [];
+    return spacePresetsFor(ageGroup);
   }
 }
