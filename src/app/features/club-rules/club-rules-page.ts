@@ -116,10 +116,12 @@ export class ClubRulesPage {
   }
 
   protected applyEdit(edit: RuleEdit): void {
+    this.notice.set(null);
     this.body.update((body) => setAt(body, edit.pointer, edit.value));
   }
 
   protected replaceBody(body: unknown): void {
+    this.notice.set(null);
     this.body.set(body);
   }
 

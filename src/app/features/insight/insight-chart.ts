@@ -62,7 +62,11 @@ export class InsightChart {
     afterRenderEffect(() => {
       const config = this.config();
       this.chart?.destroy();
-      this.chart = new Chart(this.canvas().nativeElement, {
+      this.chart = null;
+      const canvas = this.canvas().nativeElement;
+      // No 2D context (a test DOM, a locked-down browser): the text summary and tables still say it all.
+      if (!canvas.getContext?.('2d')) return;
+      this.chart = new Chart(canvas, {
         ...config,
         options: { responsive: true, maintainAspectRatio: false, animation: false, ...config.options },
       });
