@@ -31,7 +31,7 @@ export class StationCard {
   readonly busy = input(false);
 
   readonly move = output<PlayerMoveRequest>();
-  readonly resize = output<'larger' | 'smaller'>();
+  readonly stepArea = output<'larger' | 'smaller'>();
 
   protected readonly kindLabels = ACTIVITY_KIND_LABELS;
   protected readonly others = computed(() => this.siblings().filter((s) => s.id !== this.station().id));
