@@ -28,6 +28,11 @@ const http = await startHttpServer({
 const mailSender =
   process.env['SEND_MAIL'] === 'false' ? null : startMailSender({ dataSource, mail: mailSettingsFromEnv() });
 console.log(`[conewise] API listening on ${http.url}`);
+if (!process.env['JWT_SECRET']) {
+  console.log(
+    '[conewise] JWT secret read from the data folder; set JWT_SECRET when instances run on several machines',
+  );
+}
 
 let stopping = false;
 async function stop(signal: string): Promise<void> {

@@ -51,7 +51,10 @@ function asHttpError(error: unknown): HttpError {
   return new HttpError(500, 'Internal error', 'Something went wrong on our side. It has been logged.');
 }
 
-/** Last middleware: every error becomes application/problem+json, never a stack trace. */
+/**
+ * Last middleware: every error becomes application/problem+json, never a stack trace. The
+ * instance is the path without its query, which may carry a token.
+ */
 export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   const problem = asHttpError(error);
   if (problem.status >= 500) req.log?.error({ err: error }, 'request failed');
@@ -63,5 +66,5 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   res
     .status(problem.status)
     .type(PROBLEM_TYPE)
-    .send(JSON.stringify(problem.toProblem(req.originalUrl)));
+    .send(JSON.stringify(problem.toProblem(req.originalUrl.split('?')[0])));
 };
