@@ -79,16 +79,14 @@ async function seedPastPlans(
       status: 'final',
       authorId,
     });
-    await manager
-      .getRepository(Attendance)
-      .save(
-        present.map((p) => ({
-          clubId: team.clubId,
-          planId: saved.id,
-          playerId: p.id,
-          recordedById: authorId,
-        })),
-      );
+    await manager.getRepository(Attendance).save(
+      present.map((p) => ({
+        clubId: team.clubId,
+        planId: saved.id,
+        playerId: p.id,
+        recordedById: authorId,
+      })),
+    );
     made++;
   }
   return made;
@@ -137,17 +135,15 @@ export async function seedDemo(
         ]);
       }
       await manager.getRepository(KitBag).save({ teamId: team.id, clubId: club.id, ...spec.kit });
-      const players = await manager
-        .getRepository(Player)
-        .save(
-          spec.players.map((p) => ({
-            clubId: club.id,
-            teamId: team.id,
-            displayName: p.displayName,
-            goalkeeper: p.goalkeeper ?? false,
-            active: true,
-          })),
-        );
+      const players = await manager.getRepository(Player).save(
+        spec.players.map((p) => ({
+          clubId: club.id,
+          teamId: team.id,
+          displayName: p.displayName,
+          goalkeeper: p.goalkeeper ?? false,
+          active: true,
+        })),
+      );
       if (generate) {
         const author = users.get(spec.staff[0]!)!;
         plans += await seedPastPlans(manager, generate, team, spec, players, author.id, log);
