@@ -1,5 +1,8 @@
-/** Standalone validator source for each schema the engine checks at run time. */
+/** Standalone validator source for each schema the engine and the client check at run time. */
+import { readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import Ajv from 'ajv';
+import addFormats from 'ajv-formats';
 import standaloneCode from 'ajv/dist/standalone';
 import requestSchema from '../../shared/schemas/plan-request.schema.json';
 import ruleSetSchema from '../../shared/schemas/rule-set.schema.json';
@@ -23,7 +26,17 @@ const HELPERS: Record<string, string> = {
 }`,
 };
 
-export function validatorSources(): { file: string; source: string }[] {
+/** A generated file: its path from the repository root and its text. */
+export interface GeneratedSource {
+  path: string;
+  source: string;
+}
+
+export function validatorSources(): GeneratedSource[] {
+  return [...engineSources(), clientSource()];
+}
+
+function engineSources(): GeneratedSource[] {
   return [
     { file: 'plan-request.validator.ts', schema: requestSchema },
     { file: 'rule-set.validator.ts', schema: ruleSetSchema },
@@ -35,13 +48,78 @@ export function validatorSources(): { file: string; source: string }[] {
       inlineRefs: false,
       code: { source: true, esm: true, optimize: 1 },
     });
-    let source = standaloneCode(ajv, ajv.compile(schema));
-    source = source.replace(/require\("([^"]+)"\)\.default/g, (_, id: string) => {
-      const helper = HELPERS[id];
-      if (!helper) throw new Error(`No inline helper for ${id}`);
-      return `(${helper})`;
-    });
-    if (/require\(/.test(source)) throw new Error(`${file}: unexpected require()`);
-    return { file, source: HEADER + source + '\n' };
+    const source = inlineHelpers(standaloneCode(ajv, ajv.compile(schema)), file);
+    return { path: `engine/schema/generated/${file}`, source: HEADER + source + '\n' };
   });
+}
+
+/** The API request bodies the client's forms check before sending (src/app/core/forms/api-schemas.ts). */
+const CLIENT_API_SCHEMAS = [
+  'auth-login',
+  'auth-register',
+  'invitation-accept',
+  'team-create',
+  'team-update',
+  'player-create',
+  'player-update',
+  'kit-bag',
+  'plan-create',
+  'plan-share',
+];
+
+/**
+ * One ES module for the client: a validator per schema, exported by name and in `validatorsById`
+ * keyed by the schema's $id. Same ajv options the forms compiled with before (verbose, so a
+ * pattern's description reaches the message).
+ */
+function clientSource(): GeneratedSource {
+  const read = (name: string) =>
+    JSON.parse(
+      readFileSync(
+        fileURLToPath(new URL(`../../shared/schemas/api/${name}.schema.json`, import.meta.url)),
+        'utf8',
+      ),
+    ) as { $id: string };
+  const schemas = [...CLIENT_API_SCHEMAS.map(read), requestSchema as { $id: string }];
+  const ajv = new Ajv({
+    allErrors: true,
+    strict: false,
+    verbose: true,
+    schemas: [read('common'), ...schemas],
+    code: { source: true, esm: true, optimize: 1 },
+  });
+  addFormats(ajv);
+  const exportNames = new Map(schemas.map((schema) => [exportName(schema.$id), schema.$id]));
+  let source = standaloneCode(ajv, Object.fromEntries(exportNames));
+  // ajv-formats' checks are plain functions and regular expressions: imported, not evaluated.
+  source = source.replaceAll('require("ajv-formats/dist/formats").fullFormats', 'fullFormats');
+  source = inlineHelpers(source, 'api-validators.ts');
+  const byId = [...exportNames].map(([name, id]) => `  ${JSON.stringify(id)}: ${name},`).join('\n');
+  return {
+    path: 'src/app/core/forms/generated/api-validators.ts',
+    source:
+      HEADER +
+      "import { fullFormats } from 'ajv-formats/dist/formats';\n" +
+      source +
+      `\n/** Each validator by its schema's $id. */\nexport const validatorsById = {\n${byId}\n};\n`,
+  };
+}
+
+/** "https://…/plan-request.schema.json" or "auth-login.schema.json" → "validatePlanRequest", "validateAuthLogin". */
+function exportName(id: string): string {
+  const base = id
+    .split('/')
+    .pop()!
+    .replace(/\.schema\.json$/, '');
+  return 'validate' + base.replace(/(^|-)([a-z])/g, (_, __, c: string) => c.toUpperCase());
+}
+
+function inlineHelpers(source: string, file: string): string {
+  const inlined = source.replace(/require\("([^"]+)"\)\.default/g, (_, id: string) => {
+    const helper = HELPERS[id];
+    if (!helper) throw new Error(`No inline helper for ${id}`);
+    return `(${helper})`;
+  });
+  if (/require\(/.test(inlined)) throw new Error(`${file}: unexpected require()`);
+  return inlined;
 }

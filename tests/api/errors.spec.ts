@@ -48,6 +48,10 @@ describe('errors as problems', () => {
     const csp = response.headers.get('content-security-policy') ?? '';
     expect(csp).toContain("default-src 'self'");
     expect(csp).toContain("script-src 'self'");
+    // Validators are precompiled, so nothing may be evaluated in the page.
+    const scriptSrc = csp.split(';').find((directive) => directive.trim().startsWith('script-src')) ?? '';
+    expect(scriptSrc.trim()).toBe("script-src 'self'");
+    expect(csp).not.toContain("'unsafe-eval'");
     expect(csp).not.toMatch(/https?:\/\//);
     expect(response.headers.get('x-content-type-options')).toBe('nosniff');
     expect(response.headers.get('x-powered-by')).toBeNull();

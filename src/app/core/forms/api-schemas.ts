@@ -1,6 +1,6 @@
 /**
  * Where each form finds the server's JSON Schema for its request body (shared/schemas/api).
- * Loaded lazily so schemas and ajv stay out of the initial bundle.
+ * Loaded lazily so the schemas stay out of the initial bundle.
  */
 export type SchemaName =
   | 'auth-login'
@@ -30,13 +30,6 @@ const loaders: Partial<Record<SchemaName, () => Promise<Json>>> = {
   'plan-share': () => import('../../../../shared/schemas/api/plan-share.schema.json'),
   'plan-request': () => import('../../../../shared/schemas/plan-request.schema.json'),
 };
-
-/** Schemas the others refer to by $id. */
-export function loadCommonSchemas(): Promise<object[]> {
-  return Promise.all([import('../../../../shared/schemas/api/common.schema.json')]).then((mods) =>
-    mods.map((m) => (m as Json).default),
-  );
-}
 
 /** The schema for a request body, or null when the API has none for it yet. */
 export async function loadApiSchema(name: SchemaName): Promise<object | null> {

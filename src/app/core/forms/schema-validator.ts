@@ -1,5 +1,4 @@
-import type { ErrorObject, ValidateFunction } from 'ajv';
-import { loadCommonSchemas } from './api-schemas';
+import type { ErrorObject } from 'ajv';
 
 /** Field path ("email", "usualSpace.width") → a message in plain words. */
 export type FieldErrors = Record<string, string>;
@@ -7,34 +6,36 @@ export type FieldErrors = Record<string, string>;
 /** Checks a form value against a JSON Schema and names each bad field. */
 export type SchemaCheck = (value: unknown) => FieldErrors;
 
-const cache = new Map<object, Promise<SchemaCheck>>();
+/** A standalone ajv validator: true when valid, else its errors left on `.errors`. */
+type Validate = ((value: unknown) => boolean) & { errors?: ErrorObject[] | null };
+
+const cache = new Map<object, Promise<Validate>>();
 
 /**
- * Compiles a JSON Schema with ajv, loading ajv only when a form first needs it so it stays out of
- * the initial bundle. The schemas are the server's own, from shared/schemas.
+ * Checks against the server's own JSON Schema (shared/schemas), with the validator precompiled for
+ * it by rules/scripts/generate-validators.ts: nothing is compiled in the browser, so the CSP needs
+ * no 'unsafe-eval'. The validators load only when a form first needs one.
  */
-export function schemaCheck(schema: object, labels: Record<string, string> = {}): Promise<SchemaCheck> {
+export async function schemaCheck(schema: object, labels: Record<string, string> = {}): Promise<SchemaCheck> {
   let pending = cache.get(schema);
   if (!pending) {
-    pending = compile(schema).then((validate) => (value: unknown) => {
-      if (validate(value)) return {};
-      return describeErrors(validate.errors ?? [], labels);
-    });
+    pending = compile(schema);
     cache.set(schema, pending);
   }
-  return pending;
+  const validate = await pending;
+  return (value: unknown) => (validate(value) ? {} : describeErrors(validate.errors ?? [], labels));
 }
 
-async function compile(schema: object): Promise<ValidateFunction> {
-  const [{ default: Ajv }, { default: addFormats }, common] = await Promise.all([
-    import('ajv'),
-    import('ajv-formats'),
-    loadCommonSchemas(),
-  ]);
-  const ajv = new Ajv({ allErrors: true, strict: false, verbose: true });
-  addFormats(ajv);
-  for (const shared of common) ajv.addSchema(shared);
-  return ajv.compile(schema);
+async function compile(schema: object): Promise<Validate> {
+  const id = (schema as { $id?: unknown }).$id;
+  const validators: Record<string, Validate> = (await import('./generated/api-validators')).validatorsById;
+  const validate = typeof id === 'string' ? validators[id] : undefined;
+  if (!validate) {
+    throw new Error(
+      `No precompiled validator for schema ${String(id)}: add it to rules/scripts/validator-sources.ts`,
+    );
+  }
+  return validate;
 }
 
 /** One message per field: the first error ajv reports for it, in words a coach reads. */

@@ -59,7 +59,7 @@ describe('PlanWizard', () => {
     };
     const submit = async () => {
       root.querySelector<HTMLButtonElement>('[data-testid="make-plan"]')!.click();
-      // The schema check loads ajv lazily; let it settle.
+      // The schema check loads its precompiled validator lazily; let it settle.
       for (let i = 0; i < 20; i++) await new Promise((resolve) => setTimeout(resolve, 10));
       await fixture.whenStable();
     };
