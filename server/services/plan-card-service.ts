@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { ShareResultDto } from '../../shared/types/plan-api';
 import type { AuthContext } from '../http/auth-context';
 import { minuteLabel, planMinutes, sessionStart } from '../pdf/clock';
-import { type Paper, renderPlanPdf } from '../pdf';
+import type { Paper } from '../pdf';
 import type { SessionPlan } from '../entities/session-plan';
 import type { Team } from '../entities/team';
 import { ClubScope } from './club-scope';
@@ -61,7 +61,9 @@ export class PlanCardService {
   }
 }
 
-function render(row: SessionPlan, team: Team, paper: Paper): Promise<Buffer> {
+async function render(row: SessionPlan, team: Team, paper: Paper): Promise<Buffer> {
+  // pdfmake, pdfkit and fontkit are large: load them on the first card, not at server start.
+  const { renderPlanPdf } = await import('../pdf');
   return renderPlanPdf({ plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff }, paper);
 }
 
