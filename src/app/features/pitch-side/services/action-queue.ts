@@ -1,6 +1,6 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import { DestroyRef, inject, Injectable, signal } from '@angular/core';
-import { firstValueFrom, Subject } from 'rxjs';
+import { firstValueFrom, Observable, Subject, timeout, TimeoutError } from 'rxjs';
 import { problemMessage } from '../../../core/http/problem-message';
 import { PitchSideApi, type PlanChange, type ReplanBody, type VerdictBody } from './pitch-side-api';
 
@@ -17,6 +17,10 @@ export interface SyncedAction {
 }
 
 const STORAGE_KEY = 'conewise.pitch-side.queue';
+/** First wait before retrying an unsent action, doubling up to the most. */
+const RETRY_FIRST_MS = 3_000;
+const RETRY_MAX_MS = 30_000;
+const SEND_TIMEOUT_MS = 15_000;
 
 /**
  * Pitch-side actions go through this queue, online or not: each is kept in localStorage with its
@@ -28,6 +32,8 @@ export class ActionQueue {
   private readonly api = inject(PitchSideApi);
   private readonly syncedActions = new Subject<SyncedAction>();
   private flushing = false;
+  private retryTimer: ReturnType<typeof setTimeout> | null = null;
+  private retryDelayMs = RETRY_FIRST_MS;
 
   /** Actions not yet confirmed by the server, oldest first. */
   readonly pending = signal<QueuedAction[]>(readStored());
@@ -44,11 +50,17 @@ export class ActionQueue {
       void this.flush();
     };
     const goOffline = () => this.online.set(false);
+    const onVisible = () => {
+      if (globalThis.document?.visibilityState === 'visible') void this.flush();
+    };
     globalThis.addEventListener?.('online', goOnline);
     globalThis.addEventListener?.('offline', goOffline);
+    globalThis.document?.addEventListener('visibilitychange', onVisible);
     inject(DestroyRef).onDestroy(() => {
       globalThis.removeEventListener?.('online', goOnline);
       globalThis.removeEventListener?.('offline', goOffline);
+      globalThis.document?.removeEventListener('visibilitychange', onVisible);
+      if (this.retryTimer) clearTimeout(this.retryTimer);
     });
   }
 
@@ -74,11 +86,14 @@ export class ActionQueue {
         try {
           const change = await this.send(action);
           this.online.set(true);
+          this.retryDelayMs = RETRY_FIRST_MS;
           this.remove(action);
           this.syncedActions.next({ action, change });
         } catch (error) {
           if (isRetryable(error)) {
             if (error instanceof HttpErrorResponse && error.status === 0) this.online.set(false);
+            // The browser's online event is not always sent (or comes before the network works): try again anyway.
+            this.scheduleRetry();
             return;
           }
           this.remove(action);
@@ -90,18 +105,31 @@ export class ActionQueue {
     }
   }
 
+  private scheduleRetry(): void {
+    if (this.retryTimer) return;
+    const delay = this.retryDelayMs;
+    this.retryDelayMs = Math.min(RETRY_MAX_MS, delay * 2);
+    this.retryTimer = setTimeout(() => {
+      this.retryTimer = null;
+      void this.flush();
+    }, delay);
+  }
+
   private send(action: QueuedAction): Promise<PlanChange | null> {
     const clientId = action.clientId;
     switch (action.kind) {
       case 'replan':
-        return firstValueFrom(this.api.replan(action.planId, { ...action.body, clientId }));
+        return this.answer(this.api.replan(action.planId, { ...action.body, clientId }));
       case 'progression':
-        return firstValueFrom(this.api.progression(action.planId, { ...action.body, clientId }));
+        return this.answer(this.api.progression(action.planId, { ...action.body, clientId }));
       case 'feedback':
-        return firstValueFrom(this.api.feedback(action.planId, { ...action.body, clientId })).then(
-          () => null,
-        );
+        return this.answer(this.api.feedback(action.planId, { ...action.body, clientId })).then(() => null);
     }
+  }
+
+  /** The first answer, or a timeout: a request stuck on a dead connection must not block the queue. */
+  private answer<T>(call: Observable<T>): Promise<T> {
+    return firstValueFrom(call.pipe(timeout(SEND_TIMEOUT_MS)));
   }
 
   private remove(action: QueuedAction): void {
@@ -120,6 +148,7 @@ export class ActionQueue {
 
 /** No network, a timeout, a busy or failing server: try again later. 4xx answers are final. */
 function isRetryable(error: unknown): boolean {
+  if (error instanceof TimeoutError) return true;
   if (!(error instanceof HttpErrorResponse)) return false;
   return error.status === 0 || error.status === 408 || error.status === 429 || error.status >= 500;
 }
