@@ -58,9 +58,14 @@ describe('PlanWizard', () => {
       await fixture.whenStable();
     };
     const submit = async () => {
-      root.querySelector<HTMLButtonElement>('[data-testid="make-plan"]')!.click();
-      // The schema check loads its precompiled validator lazily; let it settle.
-      for (let i = 0; i < 20; i++) await new Promise((resolve) => setTimeout(resolve, 10));
+      const button = root.querySelector<HTMLButtonElement>('[data-testid="make-plan"]')!;
+      button.click();
+      // The schema check loads its validator lazily: wait until the wizard sends or says what is wrong.
+      for (let i = 0; i < 150; i++) {
+        await new Promise((resolve) => setTimeout(resolve, 20));
+        fixture.detectChanges();
+        if (button.disabled || root.querySelector('[data-testid="wizard-error"]')) break;
+      }
       await fixture.whenStable();
     };
     return { fixture, http, root, input, type, submit };
