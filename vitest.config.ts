@@ -23,7 +23,8 @@ export default defineConfig({
           environment: 'node',
           include: ['server/**/*.spec.ts', 'tests/api/**/*.spec.ts'],
           globalSetup: ['tests/support/api-global-setup.ts'],
-          testTimeout: 30_000,
+          // Property tests send hundreds of requests; a loaded CI machine needs the headroom.
+          testTimeout: 60_000,
           hookTimeout: 60_000,
           fileParallelism: false,
         },
