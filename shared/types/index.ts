@@ -4,3 +4,5 @@ export * from './plan-edit';
 export * from './plan-rules';
 export * from './plan-pitch';
 export * from './api';
+export * from './plan-api';
+export * from './rule-set-api';

@@ -26,7 +26,10 @@ describe('StatusPage', () => {
     const { fixture, http, text } = setUp();
     http
       .expectOne('/api/health')
-      .flush({ status: 'degraded', db: 'down', version: '1.2.3' }, { status: 503, statusText: 'Unavailable' });
+      .flush(
+        { status: 'degraded', db: 'down', version: '1.2.3' },
+        { status: 503, statusText: 'Unavailable' },
+      );
     await fixture.whenStable();
     expect(text()).toContain('database down');
   });
