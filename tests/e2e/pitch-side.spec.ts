@@ -119,7 +119,8 @@ describe('pitch-side', () => {
     const session = await club.plan(coach, team, roster.slice(0, 8), { seed: 'offline-seed' });
     const page = await browser.newPage(PHONE);
     await openPitchSide(page, session.id);
-    // Let the service worker take over so the app and the plan are cached, then go offline.
+    // Let the service worker take over so the app and the plan are cached, then go offline. The app
+    // registers it once stable or after 30 s at most, so this can take a while.
     await page.evaluate(async () => {
       await navigator.serviceWorker.ready;
     });
@@ -171,5 +172,5 @@ describe('pitch-side', () => {
     });
     expect(again.body).toHaveLength(1);
     await page.close();
-  });
+  }, 150_000);
 });
