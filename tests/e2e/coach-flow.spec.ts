@@ -234,13 +234,18 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     expect(accessibility).toEqual([]);
   });
 
-  it('signed-out screens: create a club', async () => {
+  it('signed-out screens: create a club, accept an invitation', async () => {
     const fresh = await browser.newPage(DESKTOP);
     await fresh.goto(`${baseUrl}/status`);
     await fresh.evaluate(() => localStorage.clear());
     await fresh.goto(`${baseUrl}/create-club`);
     await fresh.getByRole('heading', { name: 'Create a club' }).waitFor();
     expect(await captureScreen(fresh, 'create-club')).toEqual([]);
+    // An invitation link that was never issued says so in plain words.
+    await fresh.goto(`${baseUrl}/invitations/${'x'.repeat(32)}`);
+    await fresh.getByRole('heading', { name: 'Join your club' }).waitFor();
+    await fresh.getByText('has been used or has expired').waitFor();
+    expect(await captureScreen(fresh, 'accept-invitation')).toEqual([]);
     await fresh.close();
   });
 

@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { AuthResponse, UserDto } from '../../../../shared/types';
+import type { AuthResponse, Role, UserDto } from '../../../../shared/types';
 
 export interface SignInBody {
   email: string;
@@ -18,6 +18,14 @@ export interface CreateClubBody {
 export interface AcceptInvitationBody {
   name: string;
   password: string;
+}
+
+/** What an invitation link is for, shown before the invitee joins. */
+export interface InvitationLookup {
+  email: string;
+  role: Role;
+  clubName: string;
+  expiresAt: string;
 }
 
 /** Sign-in, club creation and invitations: the calls that hand out a session. */
@@ -38,6 +46,11 @@ export class AuthApi {
   /** POST /api/invitations/accept: the invitee sets their name and password. */
   acceptInvitation(token: string, body: AcceptInvitationBody): Observable<AuthResponse> {
     return this.http.post<AuthResponse>('/api/invitations/accept', { token, ...body });
+  }
+
+  /** GET /api/invitations/lookup: the club, role and e-mail an unused invitation is for. */
+  lookupInvitation(token: string): Observable<InvitationLookup> {
+    return this.http.get<InvitationLookup>('/api/invitations/lookup', { params: { token } });
   }
 
   /** GET /api/auth/me. */

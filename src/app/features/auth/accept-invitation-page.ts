@@ -1,11 +1,11 @@
-import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { Router } from '@angular/router';
-import { AuthApi } from '../../core/api/auth-api';
+import { AuthApi, InvitationLookup } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../core/forms/schema-form';
@@ -37,6 +37,19 @@ export class AcceptInvitationPage {
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
   protected readonly message = controlMessage;
+  protected readonly invitation = signal<InvitationLookup | null>(null);
+
+  constructor() {
+    effect(() => {
+      this.authApi.lookupInvitation(this.token()).subscribe({
+        next: (found) => this.invitation.set(found),
+        error: () =>
+          this.error.set(
+            'This invitation link has been used or has expired. Ask your club lead for a new one.',
+          ),
+      });
+    });
+  }
 
   protected async submit(): Promise<void> {
     this.error.set(null);
