@@ -14,7 +14,8 @@ export interface BrowserEngineApi {
   applyEdit(plan: Plan, edit: PlanEdit): Promise<Plan>;
   /** Problems the edited plan has (empty when it holds every rule). */
   checkPlan(plan: Plan): Notice[];
-  activities(): ActivityOption[];
+  /** Activities the rules allow for this plan's players, age, kit and space. */
+  activities(plan: Plan): ActivityOption[];
 }
 
 /**

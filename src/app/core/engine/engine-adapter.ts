@@ -6,6 +6,9 @@ export function createEngineAdapter(): BrowserEngineApi {
   return {
     applyEdit: async (plan, edit) => await applyEdit(plan, edit),
     checkPlan: (plan) => checkPlan(plan),
-    activities: () => listActivities().map((a) => ({ id: a.id, kind: a.kind, title: a.title })),
+    activities: (plan) =>
+      listActivities(undefined, plan)
+        .filter((a) => a.allowed)
+        .map((a) => ({ id: a.id, kind: a.kind, title: a.title })),
   };
 }

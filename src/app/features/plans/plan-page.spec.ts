@@ -170,6 +170,26 @@ describe('PlanPage', () => {
     expect(root.querySelector(`[data-station="${to.id}"] [data-player="${playerId}"]`)).not.toBeNull();
   });
 
+  it('offers only activities the rules allow in the swap menu and saves the swap', async () => {
+    const { fixture, http, root } = await setUp();
+    const phase = root.querySelectorAll('[data-testid="phase"]')[0]!;
+    const swap = Array.from(phase.querySelectorAll<HTMLButtonElement>('button')).find((b) =>
+      b.textContent?.includes('Swap activity'),
+    )!;
+    swap.click();
+    await settle(fixture);
+    const items = Array.from(document.querySelectorAll<HTMLButtonElement>('[mat-menu-item]'));
+    expect(items.length).toBeGreaterThan(0);
+    const current = plan.phases[0]!.stations[0]!.title;
+    expect(items.some((b) => b.textContent?.trim() === current)).toBe(false);
+    items[0]!.click();
+    await settle(fixture);
+    const save = http.expectOne({ method: 'PATCH', url: '/api/plans/plan-1' });
+    const edit = (save.request.body as { edit: PlanEdit }).edit;
+    expect(edit).toMatchObject({ type: 'swap-activity', phaseIndex: 0 });
+    expect(edit).not.toMatchObject({ activityId: plan.phases[0]!.activityId });
+  });
+
   it('puts the plan back and says so when the server refuses the edit', async () => {
     const { fixture, http, root } = await setUp();
     const station = plan.phases[0].stations[0];

@@ -85,10 +85,12 @@ export class PlanPage {
   /** Fills the swap menu from the engine's activity list, leaving out what the club rules forbid. */
   protected async loadActivities(phase: Phase): Promise<void> {
     const engine = await this.engine.load();
-    const forbidden = this.session.plan()?.forbiddenActivities ?? [];
+    const plan = this.session.plan();
+    if (!plan) return;
+    const forbidden = plan.forbiddenActivities ?? [];
     this.activities.set(
       engine
-        .activities()
+        .activities(plan)
         .filter((a) => a.id !== phase.activityId)
         .filter((a) => !forbidden.some((f) => f.activityId === a.id || f.kind === a.kind)),
     );
