@@ -4,7 +4,18 @@ import angular from 'angular-eslint';
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['dist/**', '.angular/**', '.data/**', 'node_modules/**', 'coverage/**', 'test-results/**', 'engine/schema/generated/**', 'src/app/core/forms/generated/**'] },
+  {
+    ignores: [
+      'dist/**',
+      '.angular/**',
+      '.data/**',
+      'node_modules/**',
+      'coverage/**',
+      'test-results/**',
+      'engine/schema/generated/**',
+      'src/app/core/forms/generated/**',
+    ],
+  },
   {
     files: ['**/*.ts'],
     extends: [eslint.configs.recommended, ...tseslint.configs.recommended],

@@ -4,8 +4,15 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AuthResponse, MemberDto, Plan, RuleSetDto } from '../../shared/types';
-import { ClubSession, LEAD, pageViolations, U12_COACH, U8_COACH } from './support/club-session';
-import { DESKTOP, launchBrowser, PHONE, screenshot, type TestBrowser } from './support/browser';
+import { ClubSession, LEAD, U12_COACH, U8_COACH } from './support/club-session';
+import {
+  DESKTOP,
+  launchBrowser,
+  PHONE,
+  screenshot,
+  seriousAccessibilityViolations,
+  type TestBrowser,
+} from './support/browser';
 
 /** Most attackers per defender in any keep-ball station of the plan. */
 function keepBallRatio(plan: Plan): number {
@@ -76,7 +83,7 @@ describe('club rules', () => {
     expect(await problem.textContent()).toMatch(new RegExp(`Line ${line}\\b`));
     await problem.click();
     await screenshot(page, 'club-rules-json');
-    expect(await pageViolations(page)).toEqual([]);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.getByRole('button', { name: 'Discard' }).click();
     await expect.poll(() => page.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
 
@@ -86,7 +93,7 @@ describe('club rules', () => {
     expect(await page.getByTestId('try-result').count()).toBeGreaterThanOrEqual(5);
     expect(await page.locator('[data-testid=try-result]', { hasText: 'changed' }).count()).toBeGreaterThan(0);
     await screenshot(page, 'club-rules-try-it');
-    expect(await pageViolations(page)).toEqual([]);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
     await page.getByRole('button', { name: 'Publish' }).click();
     await expect.poll(() => page.locator('.cw-rules__sub').textContent()).toContain('version');
@@ -154,7 +161,7 @@ describe('club rules', () => {
       await conflict.waitFor();
       expect(await conflict.textContent()).toContain('nothing of yours is lost');
       await screenshot(pageB, 'club-rules-conflict');
-      expect(await pageViolations(pageB)).toEqual([]);
+      expect(await seriousAccessibilityViolations(pageB)).toEqual([]);
 
       await pageB.getByRole('button', { name: /re-apply my changes/ }).click();
       await pageB.getByText('re-applied your 1 change').waitFor();
@@ -214,7 +221,7 @@ describe('club rules', () => {
         await page.getByTestId('pending-invitations').waitFor();
       }
       await screenshot(page, 'members');
-      expect(await pageViolations(page)).toEqual([]);
+      expect(await seriousAccessibilityViolations(page)).toEqual([]);
       await page.close();
     }
   });

@@ -6,8 +6,15 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AuthResponse, FeedbackDto, Plan, PlayerDto, SessionPlanDto, TeamDto } from '../../shared/types';
-import { DESKTOP, launchBrowser, PHONE, screenshot, type TestBrowser } from './support/browser';
-import { ClubSession, pageViolations, U8_COACH } from './support/club-session';
+import {
+  DESKTOP,
+  launchBrowser,
+  PHONE,
+  screenshot,
+  seriousAccessibilityViolations,
+  type TestBrowser,
+} from './support/browser';
+import { ClubSession, U8_COACH } from './support/club-session';
 
 /** Every present player in exactly one station of every phase. */
 function eachPlayerOncePerPhase(plan: Plan): boolean {
@@ -57,7 +64,7 @@ describe('pitch-side', () => {
     const page = await browser.newPage(PHONE);
     await openPitchSide(page, session.id);
     await screenshot(page, 'pitch-side');
-    expect(await pageViolations(page)).toEqual([]);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
     await page.getByRole('button', { name: `${late.displayName} arrives` }).click();
     const moves = page.getByTestId('moves');
@@ -108,7 +115,7 @@ describe('pitch-side', () => {
     });
     expect(feedback.body.map((f) => f.verdict)).toEqual(['too-easy']);
     await screenshot(page, 'pitch-side');
-    expect(await pageViolations(page)).toEqual([]);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
     const next = await club.plan(coach, team, roster, request);
     expect(keepBallWidth(next.plan)).toBeLessThan(keepBallWidth(session.plan));

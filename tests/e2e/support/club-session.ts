@@ -79,29 +79,3 @@ export class ClubSession {
     return response.body;
   }
 }
-
-/**
- * Serious and critical axe-core findings inside the routed page (#main), leaving out the shell
- * around it, which has its own checks.
- */
-export async function pageViolations(page: Page): Promise<string[]> {
-  const { readFileSync } = await import('node:fs');
-  const { createRequire } = await import('node:module');
-  const source = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
-  await page.evaluate(source);
-  const violations = await page.evaluate(async () => {
-    const axe = (
-      globalThis as unknown as {
-        axe: {
-          run: (context: unknown) => Promise<{
-            violations: { id: string; impact: string | null; help: string; nodes: { target: string[] }[] }[];
-          }>;
-        };
-      }
-    ).axe;
-    return (await axe.run({ include: [['#main']] })).violations;
-  });
-  return violations
-    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
-    .map((v) => `${v.impact} ${v.id}: ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
-}

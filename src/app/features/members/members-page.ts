@@ -1,5 +1,5 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
-import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { ChangeDetectionStrategy, Component, computed, inject, signal, viewChild } from '@angular/core';
+import { FormBuilder, FormGroupDirective, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -69,6 +69,9 @@ export class MembersPage {
     email: ['', [Validators.required, Validators.email, Validators.maxLength(254)]],
     role: ['coach' as Role, Validators.required],
   });
+
+  /** The form's directive: resetting through it also clears "submitted", so no error shows after a send. */
+  private readonly formDirective = viewChild.required(FormGroupDirective);
 
   constructor() {
     this.reload();
@@ -143,7 +146,7 @@ export class MembersPage {
         this.sending.set(false);
         this.invitations.update((list) => [invitation, ...list.filter((i) => i.id !== invitation.id)]);
         this.inviteNotice.set(`Invitation sent to ${invitation.email} as ${invitation.role}.`);
-        this.form.reset({ email: '', role });
+        this.formDirective().resetForm({ email: '', role });
       },
       error: (error: unknown) => {
         this.sending.set(false);
