@@ -36,7 +36,7 @@ export function createApp(deps: AppDeps): Express {
         // Everything from this origin only: Conewise must work on a closed network.
         directives: {
           defaultSrc: ["'self'"],
-          // JSON Schema validators reach the browser precompiled (rules/scripts/generate-validators.ts),
+          // JSON Schema validators reach the browser precompiled (server/cli/generate-validators.ts),
           // so scripts load from this origin only and nothing is evaluated.
           scriptSrc: ["'self'"],
           // Angular writes component styles into <style> tags.

@@ -13,7 +13,7 @@ const cache = new Map<object, Promise<Validate>>();
 
 /**
  * Checks against the server's own JSON Schema (shared/schemas), with the validator precompiled for
- * it by rules/scripts/generate-validators.ts: nothing is compiled in the browser, so the CSP needs
+ * it by server/cli/generate-validators.ts: nothing is compiled in the browser, so the CSP needs
  * no 'unsafe-eval'. The validators load only when a form first needs one.
  */
 export async function schemaCheck(schema: object, labels: Record<string, string> = {}): Promise<SchemaCheck> {
@@ -32,7 +32,7 @@ async function compile(schema: object): Promise<Validate> {
   const validate = typeof id === 'string' ? validators[id] : undefined;
   if (!validate) {
     throw new Error(
-      `No precompiled validator for schema ${String(id)}: add it to rules/scripts/validator-sources.ts`,
+      `No precompiled validator for schema ${String(id)}: add it to server/cli/validator-sources.ts`,
     );
   }
   return validate;

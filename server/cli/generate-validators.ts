@@ -1,7 +1,7 @@
 /**
  * Precompiles the JSON Schemas the engine and the client's forms check to standalone validator modules, so the browser never
  * needs eval (the app's Content-Security-Policy forbids it). Run after changing a schema:
- *   npx tsx rules/scripts/generate-validators.ts
+ *   npm run generate:validators
  * A spec (tests/tooling/generated-validators.spec.ts) fails when the output is stale.
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
