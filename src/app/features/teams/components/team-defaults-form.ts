@@ -6,7 +6,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { AGE_GROUPS, LEVELS, type AgeGroup, type Level, type TeamDto } from '../../../../../shared/types';
 import type { TeamBody } from '../../../core/api/teams-api';
-import { controlMessage } from '../../../core/forms/form-errors';
+import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
 import { LEVEL_LABELS } from '../../../core/labels/plan-labels';
 
@@ -24,8 +24,13 @@ const LABELS = {
   styles: `
     .cw-defaults {
       display: grid;
-      gap: 0 12px;
+      gap: 4px 12px;
       grid-template-columns: repeat(auto-fit, minmax(160px, 1fr));
+    }
+    .cw-defaults__actions {
+      display: flex;
+      gap: 8px;
+      align-items: center;
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -33,7 +38,16 @@ const LABELS = {
 export class TeamDefaultsForm {
   readonly team = input<TeamDto | null>(null);
   readonly editable = input(true);
+  /** Words on the submit button: "Save team details" on the team page, "Create team" when adding one. */
+  readonly submitLabel = input('Save team details');
+  /** The server schema the value must meet: creating a team asks for more than updating one. */
+  readonly schemaName = input<'team-update' | 'team-create'>('team-update');
+  /** Whether to offer a Cancel button (adding a team), which emits `dismiss`. */
+  readonly cancelable = input(false);
+  /** Field messages from a refused save, pinned to their inputs. */
+  readonly serverErrors = input<Record<string, string>>({});
   readonly save = output<TeamBody>();
+  readonly dismiss = output<void>();
 
   protected readonly ageGroups = AGE_GROUPS;
   protected readonly levels = LEVELS;
@@ -54,11 +68,12 @@ export class TeamDefaultsForm {
       if (this.editable()) this.form.enable();
       else this.form.disable();
     });
+    effect(() => applyFieldErrors(this.form, this.serverErrors()));
   }
 
   protected async submit(): Promise<void> {
     const value = this.form.getRawValue();
-    const check = await checkAgainstSchema(this.form, 'team-update', value, LABELS);
+    const check = await checkAgainstSchema(this.form, this.schemaName(), value, LABELS);
     if (check.ok) this.save.emit(value);
   }
 }
