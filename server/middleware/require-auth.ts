@@ -61,17 +61,19 @@ export async function loadAuthContext(
   clubId: string,
 ): Promise<AuthContext | null> {
   if (!UUID.test(userId) || !UUID.test(clubId)) return null;
-  const membership = await dataSource.getRepository(Membership).findOne({
-    where: { userId, clubId },
-    relations: { user: true, club: true },
-  });
-  if (!membership?.user || !membership.club) return null;
-  return {
-    userId,
-    clubId,
-    clubName: membership.club.name,
-    role: membership.role,
-    name: membership.user.name,
-    email: membership.user.email,
-  };
+  // One joined read per request: the role is re-read every time so a removed member loses access
+  // at once, and a single round trip keeps that check cheap.
+  const rows: { role: Membership['role']; userName: string; email: string; clubName: string }[] =
+    await dataSource.query(
+      `SELECT m.role, u.name AS "userName", u.email, c.name AS "clubName"
+         FROM membership m
+         JOIN app_user u ON u.id = m."userId"
+         JOIN club c ON c.id = m."clubId"
+        WHERE m."userId" = $1 AND m."clubId" = $2
+        LIMIT 1`,
+      [userId, clubId],
+    );
+  const row = rows[0];
+  if (!row) return null;
+  return { userId, clubId, clubName: row.clubName, role: row.role, name: row.userName, email: row.email };
 }

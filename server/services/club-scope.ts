@@ -68,17 +68,29 @@ export class ClubScope {
 
   /** Lead: every team. Coach: the teams they are attached to. Assistant: none. */
   async canManage(team: Team): Promise<boolean> {
+    if (this.auth.role !== 'coach') return this.canManageWhenAttached(false);
+    return this.canManageWhenAttached(await this.isAttached(team.id));
+  }
+
+  /** The same rule as canManage, for a caller who already read whether they are attached. */
+  canManageWhenAttached(attached: boolean): boolean {
     if (this.auth.role === 'lead') return true;
-    if (this.auth.role === 'coach') return this.isAttached(team.id);
+    if (this.auth.role === 'coach') return attached;
     return false;
+  }
+
+  /** 404 when the team is not the club's, 403 when the caller may not change it. */
+  assertManageable(team: Team | null, attached: boolean): Team {
+    if (!team) throw notFound('team');
+    if (!this.canManageWhenAttached(attached))
+      throw forbidden('Only the club lead and the team’s coaches can change this team.');
+    return team;
   }
 
   /** A team the caller may change (squad, kit, plans), else 404 / 403. */
   async teamToManage(id: string): Promise<Team> {
     const team = await this.team(id);
-    if (!(await this.canManage(team)))
-      throw forbidden('Only the club lead and the team’s coaches can change this team.');
-    return team;
+    return this.assertManageable(team, this.auth.role === 'coach' && (await this.isAttached(team.id)));
   }
 
   /** Lead and coaches: any team of the club; assistants: the teams they are attached to. */

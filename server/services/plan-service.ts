@@ -4,7 +4,6 @@ import type { Plan } from '../../shared/types/plan';
 import type { PlanEdit } from '../../shared/types/plan-edit';
 import type { FeedbackFact, PlanRequest, PresentPlayer } from '../../shared/types/plan-request';
 import type { RuleSetDocument } from '../../shared/types/plan-rules';
-import { Feedback } from '../entities/feedback';
 import { Player } from '../entities/player';
 import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
@@ -15,7 +14,8 @@ import { ClubScope } from './club-scope';
 import * as engine from './engine-port';
 import { planSummaryDto, sessionPlanDto } from './plan-dto';
 import { checkPlanShape } from './plan-shape';
-import { publishedRules, rulesOfPlan } from './rules-resolver';
+import { loadPlanInputs } from './plan-inputs';
+import { rulesOfPlan } from './rules-resolver';
 
 export interface CreatePlanInput {
   teamId: string;
@@ -53,12 +53,14 @@ export class PlanService {
     const scope = new ClubScope(manager, auth);
     const requestErrors = engine.planRequestErrors(input.request);
     if (requestErrors.length) throw badRequest('The plan request is not valid.', requestErrors);
-    const team = await scope.teamToManage(input.teamId);
-    // Independent reads go out together: roster and feedback for the request, the club's rules.
-    const [request, rules] = await Promise.all([
-      completeRequest(manager, team, input.request),
-      publishedRules(manager, auth.clubId),
-    ]);
+    // Team, access, roster, feedback and rules in one round trip.
+    const { team, roster, recentFeedback, rules } = await loadPlanInputs(
+      manager,
+      scope,
+      input.teamId,
+      RECENT_FEEDBACK_LIMIT,
+    );
+    const request = requestWithRoster(input.request, roster, recentFeedback);
     const plan = await engine.generatePlan(request, rules);
     const row = manager.getRepository(SessionPlan).create({
       clubId: auth.clubId,
@@ -69,8 +71,7 @@ export class PlanService {
       authorId: auth.userId,
       ...planColumns(plan),
     });
-    // One INSERT … RETURNING: a single new row needs no wrapping transaction or reload.
-    await manager.getRepository(SessionPlan).insert(row);
+    await insertPlanRow(manager, row);
     return sessionPlanDto(row, team.name);
   }
 
@@ -172,6 +173,40 @@ export async function lockPlan(manager: EntityManager, scope: ClubScope, id: str
     .findOneOrFail({ where: { id, clubId: scope.clubId }, lock: { mode: 'pessimistic_write' } });
 }
 
+const INSERT_PLAN_SQL = `
+INSERT INTO session_plan ("clubId", "teamId", "date", "kickOff", "status", "authorId", "kind", "minutes",
+                          "playerCount", "request", "plan", "ruleSetId", "ruleSetVersion", "seed", "version")
+VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10::json, $11::json, $12, $13, $14, 1)
+RETURNING id, "createdAt", "updatedAt", version`;
+
+/**
+ * One INSERT … RETURNING for a new plan row, filling in its id, timestamps and version: a single
+ * new row needs no wrapping transaction or reload, and plain SQL skips the query builder's
+ * per-call work on two large JSON columns.
+ */
+export async function insertPlanRow(manager: EntityManager, row: SessionPlan): Promise<void> {
+  const rows: Pick<SessionPlan, 'id' | 'createdAt' | 'updatedAt' | 'version'>[] = await manager.query(
+    INSERT_PLAN_SQL,
+    [
+      row.clubId,
+      row.teamId,
+      row.date,
+      row.kickOff,
+      row.status,
+      row.authorId,
+      row.kind,
+      row.minutes,
+      row.playerCount,
+      JSON.stringify(row.request),
+      JSON.stringify(row.plan),
+      row.ruleSetId,
+      row.ruleSetVersion,
+      row.seed,
+    ],
+  );
+  Object.assign(row, rows[0]);
+}
+
 /** Columns that follow from a plan. */
 export function planColumns(plan: Plan): Partial<SessionPlan> {
   return {
@@ -200,18 +235,14 @@ export function violationsProblem(violations: engine.Violation[]): DetailedProbl
 }
 
 /**
- * Checks the request's players against the team (400 naming each stranger), fills in names and
- * goalkeeper flags from the roster, and adds the team's recent feedback as a fact.
+ * The request with names and goalkeeper flags from the roster (400 naming each stranger) and the
+ * team's recent feedback, unless the request brings its own.
  */
-export async function completeRequest(
-  manager: EntityManager,
-  team: Team,
+export function requestWithRoster(
   request: PlanRequest,
-): Promise<PlanRequest> {
-  const [roster, recent] = await Promise.all([
-    manager.getRepository(Player).find({ where: { teamId: team.id, clubId: team.clubId } }),
-    request.recentFeedback ? Promise.resolve(null) : recentFeedbackFacts(manager, team.id),
-  ]);
+  roster: Pick<Player, 'id' | 'displayName' | 'goalkeeper'>[],
+  recent: FeedbackFact[],
+): PlanRequest {
   const byId = new Map(roster.map((p) => [p.id, p]));
   const errors: FieldError[] = [];
   const players: PresentPlayer[] = request.players.map((p, i) => {
@@ -223,23 +254,6 @@ export async function completeRequest(
     return { id: p.id, name: known.displayName, goalkeeper: p.goalkeeper ?? known.goalkeeper };
   });
   if (errors.length) throw badRequest('Some players are not in this team.', errors);
-  const recentFeedback = request.recentFeedback ?? recent ?? [];
+  const recentFeedback = request.recentFeedback ?? recent;
   return { ...request, players, ...(recentFeedback.length ? { recentFeedback } : {}) };
-}
-
-/** The team's latest station verdicts, newest first, as facts for the engine. */
-export async function recentFeedbackFacts(manager: EntityManager, teamId: string): Promise<FeedbackFact[]> {
-  const rows = await manager.getRepository(Feedback).find({
-    where: { teamId },
-    order: { createdAt: 'DESC' },
-    take: RECENT_FEEDBACK_LIMIT,
-  });
-  return rows
-    .filter((r) => r.activityKind)
-    .map((r) => ({
-      activityKind: r.activityKind as string,
-      verdict: r.verdict,
-      ...(r.areaWidth !== null ? { areaWidth: r.areaWidth } : {}),
-      ...(r.areaLength !== null ? { areaLength: r.areaLength } : {}),
-    }));
 }

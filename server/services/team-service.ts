@@ -3,7 +3,6 @@ import type { TeamDto } from '../../shared/types/api';
 import type { AgeGroup, Level, Space } from '../../shared/types/plan-request';
 import { KitBag } from '../entities/kit-bag';
 import { Membership } from '../entities/membership';
-import { Player } from '../entities/player';
 import { Team } from '../entities/team';
 import { badRequest, forbidden } from '../http/problem';
 import type { ClubScope } from './club-scope';
@@ -120,26 +119,24 @@ export class TeamService {
   async toDtos(teams: Team[]): Promise<TeamDto[]> {
     if (!teams.length) return [];
     const ids = teams.map((t) => t.id);
-    const staff: { teamId: string; userId: string }[] = await this.manager.query(
-      'SELECT "teamId", "userId" FROM team_coach WHERE "teamId" = ANY($1::uuid[]) ORDER BY "userId"',
+    // Staff and active-player counts for all the teams in one round trip.
+    const extras: { teamId: string; coachIds: string[]; playerCount: string }[] = await this.manager.query(
+      `SELECT t.id AS "teamId",
+              coalesce((SELECT array_agg(tc."userId"::text ORDER BY tc."userId")
+                          FROM team_coach tc WHERE tc."teamId" = t.id), '{}'::text[]) AS "coachIds",
+              (SELECT count(*) FROM player p WHERE p."teamId" = t.id AND p.active) AS "playerCount"
+         FROM unnest($1::uuid[]) AS t(id)`,
       [ids],
     );
-    const counts: { teamId: string; count: string }[] = await this.manager
-      .getRepository(Player)
-      .createQueryBuilder('p')
-      .select('p.teamId', 'teamId')
-      .addSelect('COUNT(*)', 'count')
-      .where('p.teamId IN (:...ids) AND p.active = true', { ids })
-      .groupBy('p.teamId')
-      .getRawMany();
+    const byTeam = new Map(extras.map((e) => [e.teamId, e]));
     return teams.map((team) => ({
       id: team.id,
       name: team.name,
       ageGroup: team.ageGroup,
       level: team.level,
       usualSpace: { width: team.spaceWidth, length: team.spaceLength },
-      coachIds: staff.filter((s) => s.teamId === team.id).map((s) => s.userId),
-      playerCount: Number(counts.find((c) => c.teamId === team.id)?.count ?? 0),
+      coachIds: byTeam.get(team.id)?.coachIds ?? [],
+      playerCount: Number(byTeam.get(team.id)?.playerCount ?? 0),
     }));
   }
 }

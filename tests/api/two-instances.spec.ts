@@ -19,6 +19,9 @@ async function startInstance(env: Record<string, string>): Promise<{ api: ApiCli
     cwd: PROJECT_ROOT,
     env: { ...process.env, ...env, PORT: String(port), LOG_LEVEL: 'silent' },
     stdio: ['ignore', 'pipe', 'pipe'],
+    // Its own process group: npx does not pass SIGTERM on to the server it starts, and a
+    // server left running would keep taking later specs' e-mail from the shared outbox.
+    detached: true,
   });
   let output = '';
   child.stdout!.on('data', (chunk) => (output += chunk));
@@ -35,16 +38,31 @@ async function startInstance(env: Record<string, string>): Promise<{ api: ApiCli
     if (ok) return { api, child };
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
-  child.kill('SIGTERM');
+  process.kill(-child.pid!, 'SIGTERM');
   throw new Error(`instance did not come up: ${output}`);
 }
 
-function stopInstance(child: ChildProcess): Promise<void> {
-  return new Promise((resolve) => {
-    if (child.exitCode !== null) return resolve();
-    child.once('exit', () => resolve());
-    child.kill('SIGTERM');
-  });
+/** Stops the whole process group (npx, tsx and the server) and waits until it has gone. */
+async function stopInstance(child: ChildProcess): Promise<void> {
+  try {
+    process.kill(-child.pid!, 'SIGTERM');
+  } catch {
+    return; // the group has already gone
+  }
+  for (let waited = 0; waited < 10_000; waited += 100) {
+    if (!groupAlive(child.pid!)) return;
+    await new Promise((resolve) => setTimeout(resolve, 100));
+  }
+  process.kill(-child.pid!, 'SIGKILL');
+}
+
+function groupAlive(pgid: number): boolean {
+  try {
+    process.kill(-pgid, 0);
+    return true;
+  } catch {
+    return false;
+  }
 }
 
 describe('two instances on one database', () => {

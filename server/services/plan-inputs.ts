@@ -1,0 +1,94 @@
+import type { EntityManager } from 'typeorm';
+import type { FeedbackFact } from '../../shared/types/plan-request';
+import type { RuleSetDocument } from '../../shared/types/plan-rules';
+import { RuleSet } from '../entities/rule-set';
+import { Team } from '../entities/team';
+import { notFound } from '../http/problem';
+import type { ClubScope } from './club-scope';
+import { defaultRules } from './engine-port';
+import { documentOf } from './rules-resolver';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** A roster entry as a plan request needs it. */
+export interface RosterEntry {
+  id: string;
+  displayName: string;
+  goalkeeper: boolean;
+}
+
+/** Everything a new plan reads from the database, already checked against the caller's access. */
+export interface PlanInputs {
+  team: Team;
+  roster: RosterEntry[];
+  recentFeedback: FeedbackFact[];
+  rules: RuleSetDocument;
+}
+
+interface InputsRow {
+  team: { id: string; clubId: string; name: string } | null;
+  attached: boolean;
+  roster: RosterEntry[];
+  feedback: {
+    activityKind: string | null;
+    verdict: FeedbackFact['verdict'];
+    areaWidth: number | null;
+    areaLength: number | null;
+  }[];
+  rules: { id: string; name: string; version: number; revision: number; body: unknown } | null;
+}
+
+// One round trip instead of five: every part is limited to the caller's club (the feedback by a
+// team that must be the club's), and nothing is returned until the access check has passed.
+const PLAN_INPUTS_SQL = `
+SELECT
+  (SELECT json_build_object('id', t.id, 'clubId', t."clubId", 'name', t.name)
+     FROM team t WHERE t.id = $1 AND t."clubId" = $2) AS team,
+  EXISTS (SELECT 1 FROM team_coach tc WHERE tc."teamId" = $1 AND tc."userId" = $3) AS attached,
+  (SELECT coalesce(json_agg(json_build_object('id', p.id, 'displayName', p."displayName",
+                                              'goalkeeper', p.goalkeeper)), '[]'::json)
+     FROM player p WHERE p."teamId" = $1 AND p."clubId" = $2) AS roster,
+  (SELECT coalesce(json_agg(json_build_object('activityKind', f."activityKind", 'verdict', f.verdict,
+                                              'areaWidth', f."areaWidth", 'areaLength', f."areaLength")
+                            ORDER BY f."createdAt" DESC), '[]'::json)
+     FROM (SELECT * FROM feedback
+            WHERE "teamId" = $1 AND "clubId" = $2
+            ORDER BY "createdAt" DESC LIMIT $4) f) AS feedback,
+  (SELECT json_build_object('id', r.id, 'name', r.name, 'version', r.version,
+                            'revision', r.revision, 'body', r.body)
+     FROM rule_set r WHERE r."clubId" = $2 AND r.status = 'published'
+     ORDER BY r.version DESC LIMIT 1) AS rules`;
+
+/**
+ * The team (404 outside the club, 403 when the caller may not plan for it), its roster, its
+ * latest station verdicts and the club's published rules (the engine's default when none).
+ */
+export async function loadPlanInputs(
+  manager: EntityManager,
+  scope: ClubScope,
+  teamId: string,
+  feedbackLimit: number,
+): Promise<PlanInputs> {
+  if (!UUID.test(teamId)) throw notFound('team');
+  const rows: InputsRow[] = await manager.query(PLAN_INPUTS_SQL, [
+    teamId,
+    scope.clubId,
+    scope.auth.userId,
+    feedbackLimit,
+  ]);
+  const row = rows[0]!;
+  const team = scope.assertManageable(
+    row.team ? manager.getRepository(Team).create(row.team) : null,
+    row.attached,
+  );
+  const recentFeedback: FeedbackFact[] = row.feedback
+    .filter((f) => f.activityKind)
+    .map((f) => ({
+      activityKind: f.activityKind as string,
+      verdict: f.verdict,
+      ...(f.areaWidth !== null ? { areaWidth: f.areaWidth } : {}),
+      ...(f.areaLength !== null ? { areaLength: f.areaLength } : {}),
+    }));
+  const rules = row.rules ? documentOf(manager.getRepository(RuleSet).create(row.rules)) : defaultRules();
+  return { team, roster: row.roster, recentFeedback, rules };
+}
