@@ -38,7 +38,7 @@ export class RuleSetChange {
   changedPaths!: string[];
 
   /** The document as it stood after the change. */
-  @Column({ type: 'jsonb' })
+  @Column({ type: 'json' })
   body!: unknown;
 
   @CreateDateColumn({ type: 'timestamptz' })

@@ -37,7 +37,8 @@ export class RuleSet {
   @Column({ type: 'varchar', length: 16, default: 'draft' })
   status!: RuleSetStatus;
 
-  @Column({ type: 'jsonb' })
+  // json keeps the author's key order (see the DocumentsAsJson migration).
+  @Column({ type: 'json' })
   body!: unknown;
 
   @Column({ type: 'uuid', nullable: true })

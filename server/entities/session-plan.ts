@@ -49,10 +49,11 @@ export class SessionPlan {
   @Column({ type: 'integer' })
   playerCount!: number;
 
-  @Column({ type: 'jsonb' })
+  // json, not jsonb: written and read whole, never queried inside (see the DocumentsAsJson migration).
+  @Column({ type: 'json' })
   request!: PlanRequest;
 
-  @Column({ type: 'jsonb' })
+  @Column({ type: 'json' })
   plan!: Plan;
 
   /** Id of the rule set used: a rule_set row's id, or the built-in default's id. */

@@ -247,4 +247,22 @@ describe('/api/rule-sets', () => {
     });
     expect(junk.status).toBe(400);
   });
+
+  it('gives a saved body back with its keys in the order the lead wrote them', async () => {
+    const fresh = (await app.api.post('/api/rule-sets', { name: 'Key order' }, { token: club.lead.token }))
+      .body as RuleSetDto;
+    const current = fresh.body as RuleSetDocument;
+    const reordered = Object.fromEntries(Object.entries(current.parameters).reverse());
+    const body = { rules: current.rules, parameters: reordered, ...{ name: current.name, id: current.id } };
+    const saved = await app.api.put(
+      `/api/rule-sets/${fresh.id}`,
+      { body: { ...body, version: current.version } },
+      { token: club.lead.token, headers: { 'If-Match': String(fresh.revision) } },
+    );
+    expect(saved.status, saved.text).toBe(200);
+    const read = await app.api.get(`/api/rule-sets/${fresh.id}`, { token: club.lead.token });
+    const readBody = read.body.body as RuleSetDocument;
+    expect(Object.keys(readBody.parameters)).toEqual(Object.keys(reordered));
+    expect(Object.keys(readBody).slice(0, 2)).toEqual(['rules', 'parameters']);
+  });
 });
