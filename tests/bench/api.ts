@@ -4,9 +4,10 @@
  * POST /api/plans (16 players). Prints req/s, p50 and p99 per route and each route's req/s as a
  * share of health's; the last line is the figures as JSON keyed by route.
  * Targets: POST /api/plans p99 ≤ 50 ms and its req/s ≥ 1/10 of GET /api/health's.
+ * BENCH_SECONDS shortens the runs; BENCH_API_NODE_FLAGS passes flags to the API's node.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
-import { join } from 'node:path';
+import { readFileSync } from 'node:fs';
 import autocannon from 'autocannon';
 import { startThrowawayCluster } from '../../server/db/pg-cluster';
 import { freePort } from '../../server/db/free-port';
@@ -21,24 +22,32 @@ interface Figures {
   p99Ms: number;
 }
 
+/** CPU seconds (user + system) the process has used so far, from /proc (Linux clock ticks of 10 ms). */
+function cpuSeconds(pid: number): number {
+  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
+  return (Number(fields[11]) + Number(fields[12])) / 100;
+}
+
+function nodeFlags(): string[] {
+  return (process.env['BENCH_API_NODE_FLAGS'] ?? '').split(/\s+/).filter(Boolean);
+}
+
 async function startApi(databaseUrl: string, port: number): Promise<ChildProcess> {
-  const child = spawn(
-    join(PROJECT_ROOT, 'node_modules', '.bin', 'tsx'),
-    ['--tsconfig', 'tsconfig.server.json', 'server/main.ts'],
-    {
-      cwd: PROJECT_ROOT,
-      env: {
-        ...process.env,
-        DATABASE_URL: databaseUrl,
-        PORT: String(port),
-        SEND_MAIL: 'false',
-        LOG_LEVEL: 'warn',
-        JWT_SECRET: 'bench-secret-0123456789abcdef0123456789',
-        AUTH_RATE_MAX: '100000',
-      },
-      stdio: ['ignore', 'inherit', 'inherit'],
+  // node itself (tsx as a loader), so child.pid is the API's own process and its CPU time can be read.
+  const child = spawn(process.execPath, ['--import', 'tsx', ...nodeFlags(), 'server/main.ts'], {
+    cwd: PROJECT_ROOT,
+    env: {
+      ...process.env,
+      TSX_TSCONFIG_PATH: 'tsconfig.server.json',
+      DATABASE_URL: databaseUrl,
+      PORT: String(port),
+      SEND_MAIL: 'false',
+      LOG_LEVEL: 'warn',
+      JWT_SECRET: 'bench-secret-0123456789abcdef0123456789',
+      AUTH_RATE_MAX: '100000',
     },
-  );
+    stdio: ['ignore', 'inherit', 'inherit'],
+  });
   const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {
     if (child.exitCode !== null) throw new Error(`API exited with ${child.exitCode}`);
@@ -138,10 +147,19 @@ try {
     duration: 3,
   });
 
+  const apiPid = api.pid!;
+  const cpuMsPerRequest: Record<string, number> = {};
+  // The API's own CPU time per request: unlike req/s, it hardly moves with what else the machine runs.
+  async function measured(route: string, options: autocannon.Options): Promise<Figures> {
+    const before = cpuSeconds(apiPid);
+    const figures = await run(options);
+    cpuMsPerRequest[route] = ((cpuSeconds(apiPid) - before) * 1000) / (figures.rps * DURATION_S || 1);
+    return figures;
+  }
   const results: Record<string, Figures> = {
-    'GET /api/health': await run({ url: `${base}/api/health` }),
-    'GET /api/teams': await run({ url: `${base}/api/teams`, headers: auth }),
-    'POST /api/plans': await run({
+    'GET /api/health': await measured('GET /api/health', { url: `${base}/api/health` }),
+    'GET /api/teams': await measured('GET /api/teams', { url: `${base}/api/teams`, headers: auth }),
+    'POST /api/plans': await measured('POST /api/plans', {
       url: `${base}/api/plans`,
       method: 'POST',
       headers: { ...auth, 'content-type': 'application/json' },
@@ -150,11 +168,11 @@ try {
   };
   const health = results['GET /api/health'].rps || 1;
   console.log(
-    `route              req/s    p50 ms   p99 ms   share of health   (${DURATION_S} s, ${CONNECTIONS} connections)`,
+    `route              req/s    p50 ms   p99 ms   share of health   API CPU ms/req   (${DURATION_S} s, ${CONNECTIONS} connections)`,
   );
   for (const [route, f] of Object.entries(results)) {
     console.log(
-      `${route.padEnd(18)} ${String(f.rps).padStart(6)} ${String(f.p50Ms).padStart(9)} ${String(f.p99Ms).padStart(8)}   ${((f.rps / health) * 100).toFixed(1).padStart(14)} %`,
+      `${route.padEnd(18)} ${String(f.rps).padStart(6)} ${String(f.p50Ms).padStart(9)} ${String(f.p99Ms).padStart(8)}   ${((f.rps / health) * 100).toFixed(1).padStart(14)} %   ${cpuMsPerRequest[route]!.toFixed(2).padStart(14)}`,
     );
   }
   const post = results['POST /api/plans'];
