@@ -39,15 +39,18 @@ export function createRequireAuth(dataSource: DataSource, config: AppConfig): Re
       },
     ),
   );
-  const authenticate = passport.initialize();
+  // Built once: passport writes the member straight to req.auth (no login session, so no
+  // passport.initialize), and a refused token comes back as an error for the problem below.
+  const authenticate = passport.authenticate('jwt', {
+    session: false,
+    assignProperty: 'auth',
+    failWithError: true,
+  }) as RequestHandler;
   return (req, res, next) => {
-    authenticate(req, res, () => {
-      passport.authenticate('jwt', { session: false }, (error: unknown, auth: AuthContext | false) => {
-        if (error) return next(error instanceof HttpError ? error : error);
-        if (!auth) return next(unauthorized('A valid sign-in token is required.'));
-        req.auth = auth;
-        next();
-      })(req, res, next);
+    authenticate(req, res, (error?: unknown) => {
+      if (!error) return next();
+      if (error instanceof HttpError || (error as { status?: number }).status !== 401) return next(error);
+      next(unauthorized('A valid sign-in token is required.'));
     });
   };
 }

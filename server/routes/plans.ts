@@ -28,8 +28,14 @@ export function plansRouter({ dataSource, requireAuth, mail }: ApiDeps): Router 
   const planners = requireRole('lead', 'coach');
 
   router.post('/plans', requireAuth, planners, validate({ body: 'plan-create' }), async (req, res) => {
-    const dto = await plans.create(authOf(req), req.body);
-    res.status(201).location(`/api/plans/${dto.id}`).json(dto);
+    const created = await plans.create(authOf(req), req.body);
+    // The version as ETag, as GET /plans/:id answers, and no hash of the 22 kB body.
+    res
+      .status(201)
+      .location(`/api/plans/${created.id}`)
+      .setHeader('ETag', `"${created.version}"`)
+      .type('json')
+      .send(created.json);
   });
   router.get('/plans', requireAuth, validate({ query: 'plan-list-query' }), async (req, res) => {
     res.json(await plans.list(authOf(req), req.query as unknown as ListPlansQuery));

@@ -44,3 +44,19 @@ export function feedbackDto(row: Feedback): FeedbackDto {
     createdAt: row.createdAt.toISOString(),
   };
 }
+
+/** A plan's two large documents, each turned into JSON text once. */
+export interface PlanTexts {
+  request: string;
+  plan: string;
+}
+
+/**
+ * The JSON of sessionPlanDto built around texts already made for the database, so a new plan's
+ * 22 kB document is serialized once per request instead of twice.
+ */
+export function sessionPlanJson(row: SessionPlan, teamName: string, texts: PlanTexts): string {
+  const { request: _request, plan: _plan, ...small } = sessionPlanDto(row, teamName);
+  const head = JSON.stringify(small);
+  return `${head.slice(0, -1)},"request":${texts.request},"plan":${texts.plan}}`;
+}

@@ -12,7 +12,7 @@ import { DetailedProblem } from '../http/detailed-problem';
 import { badRequest, type FieldError } from '../http/problem';
 import { ClubScope } from './club-scope';
 import * as engine from './engine-port';
-import { planSummaryDto, sessionPlanDto } from './plan-dto';
+import { planSummaryDto, sessionPlanDto, sessionPlanJson, type PlanTexts } from './plan-dto';
 import { checkPlanShape } from './plan-shape';
 import { loadPlanInputs } from './plan-inputs';
 import { rulesOfPlan } from './rules-resolver';
@@ -22,6 +22,13 @@ export interface CreatePlanInput {
   date?: string;
   kickOff?: string;
   request: PlanRequest;
+}
+
+export interface CreatedPlan {
+  id: string;
+  version: number;
+  /** The SessionPlanDto as JSON text. */
+  json: string;
 }
 
 export interface ListPlansQuery {
@@ -48,7 +55,8 @@ export const RECENT_FEEDBACK_LIMIT = 12;
 export class PlanService {
   constructor(private readonly dataSource: DataSource) {}
 
-  async create(auth: AuthContext, input: CreatePlanInput): Promise<SessionPlanDto> {
+  /** A new draft, answered as JSON text (see sessionPlanJson) with its id and version for headers. */
+  async create(auth: AuthContext, input: CreatePlanInput): Promise<CreatedPlan> {
     const manager = this.dataSource.manager;
     const scope = new ClubScope(manager, auth);
     const requestErrors = engine.planRequestErrors(input.request);
@@ -71,8 +79,9 @@ export class PlanService {
       authorId: auth.userId,
       ...planColumns(plan),
     });
-    await insertPlanRow(manager, row);
-    return sessionPlanDto(row, team.name);
+    const texts: PlanTexts = { request: JSON.stringify(row.request), plan: JSON.stringify(row.plan) };
+    await insertPlanRow(manager, row, texts);
+    return { id: row.id, version: row.version, json: sessionPlanJson(row, team.name, texts) };
   }
 
   async list(auth: AuthContext, query: ListPlansQuery): Promise<Page<PlanSummaryDto>> {
@@ -184,7 +193,11 @@ RETURNING id, "createdAt", "updatedAt", version`;
  * new row needs no wrapping transaction or reload, and plain SQL skips the query builder's
  * per-call work on two large JSON columns.
  */
-export async function insertPlanRow(manager: EntityManager, row: SessionPlan): Promise<void> {
+export async function insertPlanRow(
+  manager: EntityManager,
+  row: SessionPlan,
+  texts: PlanTexts,
+): Promise<void> {
   const rows: Pick<SessionPlan, 'id' | 'createdAt' | 'updatedAt' | 'version'>[] = await manager.query(
     INSERT_PLAN_SQL,
     [
@@ -197,8 +210,8 @@ export async function insertPlanRow(manager: EntityManager, row: SessionPlan): P
       row.kind,
       row.minutes,
       row.playerCount,
-      JSON.stringify(row.request),
-      JSON.stringify(row.plan),
+      texts.request,
+      texts.plan,
       row.ruleSetId,
       row.ruleSetVersion,
       row.seed,
