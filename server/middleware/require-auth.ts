@@ -4,6 +4,7 @@ import { Passport } from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from '../config';
+import { preparedQuery } from '../db/prepared-query';
 import { Membership } from '../entities/membership';
 import type { AuthContext } from '../http/auth-context';
 import { HttpError, unauthorized } from '../http/problem';
@@ -66,16 +67,22 @@ export async function loadAuthContext(
   if (!UUID.test(userId) || !UUID.test(clubId)) return null;
   // One joined read per request: the role is re-read every time so a removed member loses access
   // at once, and a single round trip keeps that check cheap.
-  const rows: { role: Membership['role']; userName: string; email: string; clubName: string }[] =
-    await dataSource.query(
-      `SELECT m.role, u.name AS "userName", u.email, c.name AS "clubName"
+  const rows = await preparedQuery<{
+    role: Membership['role'];
+    userName: string;
+    email: string;
+    clubName: string;
+  }>(
+    dataSource.manager,
+    'auth-context',
+    `SELECT m.role, u.name AS "userName", u.email, c.name AS "clubName"
          FROM membership m
          JOIN app_user u ON u.id = m."userId"
          JOIN club c ON c.id = m."clubId"
         WHERE m."userId" = $1 AND m."clubId" = $2
         LIMIT 1`,
-      [userId, clubId],
-    );
+    [userId, clubId],
+  );
   const row = rows[0];
   if (!row) return null;
   return { userId, clubId, clubName: row.clubName, role: row.role, name: row.userName, email: row.email };

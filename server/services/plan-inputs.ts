@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { FeedbackFact } from '../../shared/types/plan-request';
 import type { RuleSetDocument } from '../../shared/types/plan-rules';
+import { preparedQuery } from '../db/prepared-query';
 import { RuleSet } from '../entities/rule-set';
 import { Team } from '../entities/team';
 import { notFound } from '../http/problem';
@@ -70,7 +71,7 @@ export async function loadPlanInputs(
   feedbackLimit: number,
 ): Promise<PlanInputs> {
   if (!UUID.test(teamId)) throw notFound('team');
-  const rows: InputsRow[] = await manager.query(PLAN_INPUTS_SQL, [
+  const rows = await preparedQuery<InputsRow>(manager, 'plan-inputs', PLAN_INPUTS_SQL, [
     teamId,
     scope.clubId,
     scope.auth.userId,

@@ -4,6 +4,7 @@ import type { Plan } from '../../shared/types/plan';
 import type { PlanEdit } from '../../shared/types/plan-edit';
 import type { FeedbackFact, PlanRequest, PresentPlayer } from '../../shared/types/plan-request';
 import type { RuleSetDocument } from '../../shared/types/plan-rules';
+import { preparedQuery } from '../db/prepared-query';
 import { Player } from '../entities/player';
 import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
@@ -198,7 +199,9 @@ export async function insertPlanRow(
   row: SessionPlan,
   texts: PlanTexts,
 ): Promise<void> {
-  const rows: Pick<SessionPlan, 'id' | 'createdAt' | 'updatedAt' | 'version'>[] = await manager.query(
+  const rows = await preparedQuery<Pick<SessionPlan, 'id' | 'createdAt' | 'updatedAt' | 'version'>>(
+    manager,
+    'insert-plan',
     INSERT_PLAN_SQL,
     [
       row.clubId,
