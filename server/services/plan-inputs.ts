@@ -7,7 +7,7 @@ import { Team } from '../entities/team';
 import { notFound } from '../http/problem';
 import type { ClubScope } from './club-scope';
 import { defaultRules } from './engine-port';
-import { documentOf } from './rules-resolver';
+import { cachedDocument, documentOf, type RuleSetRevision } from './rules-resolver';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -36,7 +36,7 @@ interface InputsRow {
     areaWidth: number | null;
     areaLength: number | null;
   }[];
-  rules: { id: string; name: string; version: number; revision: number; body: unknown } | null;
+  rules: RuleSetRevision | null;
 }
 
 // One round trip instead of five: every part is limited to the caller's club (the feedback by a
@@ -55,8 +55,7 @@ SELECT
      FROM (SELECT * FROM feedback
             WHERE "teamId" = $1 AND "clubId" = $2
             ORDER BY "createdAt" DESC LIMIT $4) f) AS feedback,
-  (SELECT json_build_object('id', r.id, 'name', r.name, 'version', r.version,
-                            'revision', r.revision, 'body', r.body)
+  (SELECT json_build_object('id', r.id, 'version', r.version, 'revision', r.revision)
      FROM rule_set r WHERE r."clubId" = $2 AND r.status = 'published'
      ORDER BY r.version DESC LIMIT 1) AS rules`;
 
@@ -90,6 +89,18 @@ export async function loadPlanInputs(
       ...(f.areaWidth !== null ? { areaWidth: f.areaWidth } : {}),
       ...(f.areaLength !== null ? { areaLength: f.areaLength } : {}),
     }));
-  const rules = row.rules ? documentOf(manager.getRepository(RuleSet).create(row.rules)) : defaultRules();
+  const rules = row.rules ? await publishedDocument(manager, scope.clubId, row.rules) : defaultRules();
   return { team, roster: row.roster, recentFeedback, rules };
+}
+
+/** The published rules: from the cache when this revision is known, else read (about 46 kB) once. */
+async function publishedDocument(
+  manager: EntityManager,
+  clubId: string,
+  revision: RuleSetRevision,
+): Promise<RuleSetDocument> {
+  const cached = cachedDocument(revision);
+  if (cached) return cached;
+  const row = await manager.getRepository(RuleSet).findOneBy({ id: revision.id, clubId });
+  return row ? documentOf(row) : defaultRules();
 }

@@ -10,9 +10,19 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const documents = new Map<string, RuleSetDocument>();
 const MAX_CACHED = 200;
 
+/** What names one stored document: a rule set row's id, revision and version. */
+export type RuleSetRevision = Pick<RuleSet, 'id' | 'revision' | 'version'>;
+
+const keyOf = (row: RuleSetRevision) => `${row.id}#${row.revision}#${row.version}`;
+
+/** The document of this revision if this instance has already read it. */
+export function cachedDocument(revision: RuleSetRevision): RuleSetDocument | undefined {
+  return documents.get(keyOf(revision));
+}
+
 /** A stored rule set as the engine reads it: the row's id and version written into the document. */
 export function documentOf(row: RuleSet): RuleSetDocument {
-  const key = `${row.id}#${row.revision}#${row.version}`;
+  const key = keyOf(row);
   const hit = documents.get(key);
   if (hit && row.revision !== undefined) return hit;
   const doc = { ...(row.body as RuleSetDocument), id: row.id, version: row.version, name: row.name };
