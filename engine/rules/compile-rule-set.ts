@@ -13,6 +13,9 @@ export interface CompiledRuleSet {
   order: Map<string, number>;
 }
 
+/** The engine rule that carries all club rules; see `compileRuleSet`. */
+const CLUB_RULES = 'club-rules';
+
 export class RuleSetError extends Error {
   constructor(readonly errors: PointerError[]) {
     super(`Rule set refused: ${errors.map((e) => `${e.pointer} ${e.message}`).join('; ')}`);
@@ -37,13 +40,14 @@ export function compileRuleSet(document: RuleSetDocument): CompiledRuleSet {
 
   const engine = new Engine([], { allowUndefinedFacts: true });
   const order = new Map<string, number>();
-  document.rules.forEach((rule, i) => {
-    order.set(rule.id, i);
-    engine.addRule({
-      name: rule.id,
-      conditions: rule.conditions as never,
-      event: rule.event as never,
-    });
+  document.rules.forEach((rule, i) => order.set(rule.id, i));
+  // One engine rule whose `any` holds every club rule's conditions, in document order: the engine
+  // evaluates them all (nothing is skipped within one priority) and reports each one's result, so
+  // a run builds one rule result and emits one event instead of one per club rule.
+  engine.addRule({
+    name: CLUB_RULES,
+    conditions: { any: document.rules.map((rule) => rule.conditions) } as never,
+    event: { type: CLUB_RULES },
   });
   const compiled: CompiledRuleSet = { document, engine, order };
   byVersion.set(key, compiled);

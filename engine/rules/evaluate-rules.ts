@@ -27,16 +27,16 @@ export interface RuleOutcome {
   trace: TraceEntry[];
 }
 
-interface EngineResult {
-  name?: string | number;
-  event?: { type: string; params?: Record<string, unknown> };
+/** The engine's result for the one rule carrying all club rules: one root condition per club rule. */
+interface ClubRulesResult {
+  conditions: { any: { result?: boolean }[] };
 }
 
 export async function evaluateRules(compiled: CompiledRuleSet, facts: Facts): Promise<RuleOutcome> {
   const { results, failureResults } = await compiled.engine.run(facts);
   const doc = compiled.document;
-  const fired = new Set((results as EngineResult[]).map((r) => String(r.name)));
-  const evaluated = new Set([...fired, ...(failureResults as EngineResult[]).map((r) => String(r.name))]);
+  const run = (results[0] ?? failureResults[0]) as unknown as ClubRulesResult | undefined;
+  const verdicts = run?.conditions.any ?? [];
 
   const outcome: RuleOutcome = {
     parameters: doc.parameters,
@@ -49,13 +49,14 @@ export async function evaluateRules(compiled: CompiledRuleSet, facts: Facts): Pr
   };
   const overrides: { path: string; value: unknown }[] = [];
 
-  for (const rule of doc.rules) {
-    if (!evaluated.has(rule.id)) continue;
-    const didFire = fired.has(rule.id);
+  doc.rules.forEach((rule, i) => {
+    const result = verdicts[i]?.result;
+    if (result === undefined) return;
+    const didFire = result === true;
     const entry: TraceEntry = { ruleId: rule.id, description: rule.description, fired: didFire };
     if (didFire) entry.effect = applyEvent(rule.id, rule.event, outcome, overrides);
     outcome.trace.push(entry);
-  }
+  });
   if (overrides.length) outcome.parameters = withOverrides(doc.parameters, overrides);
   return outcome;
 }
