@@ -7,6 +7,7 @@ import type {
   RuleParameters,
   TraceEntry,
 } from '../../shared/types';
+import { Fact } from 'json-rules-engine';
 import type { CompiledRuleSet } from './compile-rule-set';
 import type { Facts } from './facts';
 
@@ -33,7 +34,7 @@ interface ClubRulesResult {
 }
 
 export async function evaluateRules(compiled: CompiledRuleSet, facts: Facts): Promise<RuleOutcome> {
-  const { results, failureResults } = await compiled.engine.run(facts);
+  const { results, failureResults } = await compiled.engine.run(constantFacts(facts));
   const doc = compiled.document;
   const run = (results[0] ?? failureResults[0]) as unknown as ClubRulesResult | undefined;
   const verdicts = run?.conditions.any ?? [];
@@ -59,6 +60,13 @@ export async function evaluateRules(compiled: CompiledRuleSet, facts: Facts): Pr
   });
   if (overrides.length) outcome.parameters = withOverrides(doc.parameters, overrides);
   return outcome;
+}
+
+/** The facts as uncached constants: a constant is read directly, so hashing a cache key would be waste. */
+function constantFacts(facts: Facts): Record<string, Fact> {
+  const out: Record<string, Fact> = {};
+  for (const id of Object.keys(facts)) out[id] = new Fact(id, facts[id], { cache: false });
+  return out;
 }
 
 function applyEvent(
