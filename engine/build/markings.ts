@@ -20,10 +20,18 @@ const FACING: Record<Direction, number> = { N: 180, S: 0, E: 270, W: 90 };
 const GOAL_PRIORITY: ActivityKind[] = ['passing-finishing', 'small-sided-game', 'keep-ball'];
 
 interface Target {
-  station: Station;
+  /** Index of the station in the phase. */
+  index: number;
   direction: Direction;
   kind: 'goal' | 'gate' | 'none';
 }
+
+// Shared, never mutated: the two ends along a station's long or short side, and all four in the
+// order a single target looks for room (long sides first).
+const NS: readonly Direction[] = ['N', 'S'];
+const EW: readonly Direction[] = ['E', 'W'];
+const NSEW: readonly Direction[] = ['N', 'S', 'E', 'W'];
+const EWNS: readonly Direction[] = ['E', 'W', 'N', 'S'];
 
 export function markPhase(
   stations: Station[],
@@ -33,35 +41,37 @@ export function markPhase(
   warnings: Notice[],
   phaseName: string,
 ): void {
-  const rects = stations.map((s) => ({
-    x: s.position.x,
-    y: s.position.y,
-    width: s.area.width,
-    length: s.area.length,
-  }));
+  const rects = stations.map(rectOfStation);
   const targets: Target[] = [];
+  const byStation: Target[][] = stations.map(() => []);
   const corridorHalf = params.layout.gateWidthM / 2 + 2;
   let shotsBlocked = false;
 
   stations.forEach((station, i) => {
     const rule = params.kinds[station.activityKind].goals;
     if (rule === 'none') return;
-    const others = rects.filter((_, j) => j !== i);
-    const long =
-      rects[i].length >= rects[i].width ? (['N', 'S'] as Direction[]) : (['E', 'W'] as Direction[]);
-    const short = long[0] === 'N' ? (['E', 'W'] as Direction[]) : (['N', 'S'] as Direction[]);
-    let chosen: Direction[];
+    const r = rects[i];
+    const lengthways = r.length >= r.width;
+    const long = lengthways ? NS : EW;
+    const short = lengthways ? EW : NS;
+    let chosen: readonly Direction[];
     let clearance: number;
     if (rule === 'two') {
-      const a = Math.min(...long.map((d) => clearanceOf(rects[i], d, others, corridorHalf)));
-      const b = Math.min(...short.map((d) => clearanceOf(rects[i], d, others, corridorHalf)));
+      const a = Math.min(
+        clearanceOf(r, long[0], rects, i, corridorHalf),
+        clearanceOf(r, long[1], rects, i, corridorHalf),
+      );
+      const b = Math.min(
+        clearanceOf(r, short[0], rects, i, corridorHalf),
+        clearanceOf(r, short[1], rects, i, corridorHalf),
+      );
       chosen = b > a ? short : long;
       clearance = Math.max(a, b);
     } else {
       let best: Direction = long[0];
       let bestClear = -1;
-      for (const d of [...long, ...short]) {
-        const c = clearanceOf(rects[i], d, others, corridorHalf);
+      for (const d of lengthways ? NSEW : EWNS) {
+        const c = clearanceOf(r, d, rects, i, corridorHalf);
         if (c > bestClear) {
           best = d;
           bestClear = c;
@@ -72,14 +82,18 @@ export function markPhase(
     }
     const shoots = station.activityKind !== 'keep-ball';
     if (shoots && clearance < params.layout.shotClearanceM && Number.isFinite(clearance)) shotsBlocked = true;
-    for (const d of chosen) targets.push({ station, direction: d, kind: 'none' });
+    for (const d of chosen) {
+      const target: Target = { index: i, direction: d, kind: 'none' };
+      targets.push(target);
+      byStation[i].push(target);
+    }
   });
 
   // Goals: finishing first, then games, then keep-ball breakouts.
   let goalsLeft = kit.goals;
   for (const kind of GOAL_PRIORITY) {
     for (const t of targets) {
-      if (t.station.activityKind === kind && goalsLeft > 0) {
+      if (stations[t.index].activityKind === kind && goalsLeft > 0) {
         t.kind = 'goal';
         goalsLeft--;
       }
@@ -87,47 +101,46 @@ export function markPhase(
   }
 
   let conesLeft = kit.cones;
-  const cones = new Map<Station, Point[]>(stations.map((s) => [s, []]));
+  const cones: Point[][] = stations.map(() => []);
   for (const t of targets) {
     if (t.kind === 'goal' || conesLeft < 2) continue;
     t.kind = 'gate';
     conesLeft -= 2;
-    cones.get(t.station)!.push(...gateCones(rectOfStation(t.station), t.direction, params.layout.gateWidthM));
+    cones[t.index].push(...gateCones(rects[t.index], t.direction, params.layout.gateWidthM));
   }
-  const directionOf = (s: Station): Direction => targets.find((t) => t.station === s)?.direction ?? 'N';
   for (const tier of [essentials, corners, extras]) {
-    for (const station of stations) {
-      const points = tier(station, directionOf(station));
+    stations.forEach((station, i) => {
+      const points = tier(station, rects[i], byStation[i][0]?.direction ?? 'N');
       if (points.length <= conesLeft) {
-        cones.get(station)!.push(...points);
+        cones[i].push(...points);
         conesLeft -= points.length;
       }
-    }
+    });
   }
 
-  for (const station of stations) {
-    const mine = targets.filter((t) => t.station === station);
-    const placed: GoalPlacement[] = mine
-      .filter((t) => t.kind !== 'none')
-      .map((t) => ({
-        ...edgeMidpoint(rectOfStation(station), t.direction),
-        facing: FACING[t.direction],
-        kind: t.kind as 'goal' | 'gate',
-      }));
+  stations.forEach((station, i) => {
+    const placed: GoalPlacement[] = [];
+    let goals = 0;
+    let targetless = false;
+    for (const t of byStation[i]) {
+      if (t.kind === 'none') {
+        targetless = true;
+        continue;
+      }
+      const at = edgeMidpoint(rects[i], t.direction);
+      placed.push({ x: at.x, y: at.y, facing: FACING[t.direction], kind: t.kind });
+      if (t.kind === 'goal') goals++;
+    }
     station.goalPositions = placed;
-    station.conePositions = cones.get(station)!;
-    station.equipment = {
-      ...station.equipment,
-      cones: station.conePositions.length,
-      goals: placed.filter((g) => g.kind === 'goal').length,
-    };
-    if (mine.some((t) => t.kind === 'none')) {
+    station.conePositions = cones[i];
+    station.equipment = { ...station.equipment, cones: cones[i].length, goals };
+    if (targetless) {
       warnings.push({
         code: 'no-target',
         message: `${phaseName}, ${station.title}: no goal or cones left for a gate — ${targetlessAdvice(station.activityKind)}.`,
       });
     }
-  }
+  });
   if (targets.some((t) => t.kind === 'gate') && kit.goals < targets.length) {
     pushOnce(
       warnings,
@@ -158,11 +171,13 @@ function rectOfStation(s: Station): Rect {
 }
 
 /** Metres from the station's edge to the first other station in the corridor behind its target. */
-function clearanceOf(r: Rect, d: Direction, others: Rect[], half: number): number {
+function clearanceOf(r: Rect, d: Direction, rects: Rect[], self: number, half: number): number {
   let best = Number.POSITIVE_INFINITY;
   const cx = r.x + r.width / 2;
   const cy = r.y + r.length / 2;
-  for (const o of others) {
+  for (let j = 0; j < rects.length; j++) {
+    if (j === self) continue;
+    const o = rects[j];
     if (d === 'N' || d === 'S') {
       if (o.x + o.width <= cx - half || o.x >= cx + half) continue;
       const gap = d === 'N' ? o.y - (r.y + r.length) : r.y - (o.y + o.length);
@@ -178,15 +193,10 @@ function clearanceOf(r: Rect, d: Direction, others: Rect[], half: number): numbe
 
 /** Maps station-local (u across, v towards the target) in 0…1 to space coordinates. */
 function local(r: Rect, d: Direction, u: number, v: number): Point {
-  const p =
-    d === 'N'
-      ? { x: r.x + u * r.width, y: r.y + v * r.length }
-      : d === 'S'
-        ? { x: r.x + u * r.width, y: r.y + (1 - v) * r.length }
-        : d === 'E'
-          ? { x: r.x + v * r.width, y: r.y + u * r.length }
-          : { x: r.x + (1 - v) * r.width, y: r.y + u * r.length };
-  return { x: round1(p.x), y: round1(p.y) };
+  if (d === 'N') return { x: round1(r.x + u * r.width), y: round1(r.y + v * r.length) };
+  if (d === 'S') return { x: round1(r.x + u * r.width), y: round1(r.y + (1 - v) * r.length) };
+  if (d === 'E') return { x: round1(r.x + v * r.width), y: round1(r.y + u * r.length) };
+  return { x: round1(r.x + (1 - v) * r.width), y: round1(r.y + u * r.length) };
 }
 
 function edgeMidpoint(r: Rect, d: Direction): Point {
@@ -199,8 +209,7 @@ function gateCones(r: Rect, d: Direction, gateWidth: number): Point[] {
   return [local(r, d, 0.5 - half, 1), local(r, d, 0.5 + half, 1)];
 }
 
-function essentials(s: Station, d: Direction): Point[] {
-  const r = rectOfStation(s);
+function essentials(s: Station, r: Rect, d: Direction): Point[] {
   if (s.activityKind === 'passing-finishing') {
     return [local(r, d, 0.25, 0.15), local(r, d, 0.75, 0.15), local(r, d, 0.5, 0.45)];
   }
@@ -211,13 +220,11 @@ function essentials(s: Station, d: Direction): Point[] {
   return [];
 }
 
-function corners(s: Station): Point[] {
-  const r = rectOfStation(s);
+function corners(_s: Station, r: Rect): Point[] {
   return [local(r, 'N', 0, 0), local(r, 'N', 1, 0), local(r, 'N', 1, 1), local(r, 'N', 0, 1)];
 }
 
-function extras(s: Station): Point[] {
-  const r = rectOfStation(s);
+function extras(s: Station, r: Rect): Point[] {
   if (s.activityKind === 'ball-mastery') {
     return [
       local(r, 'N', 0.3, 0.45),
