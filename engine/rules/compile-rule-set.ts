@@ -3,7 +3,7 @@
  * only pays for running the rules.
  */
 import { Engine } from 'json-rules-engine';
-import type { RuleSetDocument } from '../../shared/types';
+import type { RuleCondition, RuleSetDocument } from '../../shared/types';
 import { validateRuleSet, type PointerError } from '../schema/validate-rule-set';
 
 export interface CompiledRuleSet {
@@ -46,13 +46,28 @@ export function compileRuleSet(document: RuleSetDocument): CompiledRuleSet {
   // a run builds one rule result and emits one event instead of one per club rule.
   engine.addRule({
     name: CLUB_RULES,
-    conditions: { any: document.rules.map((rule) => rule.conditions) } as never,
+    conditions: { any: document.rules.map((rule) => unwrapped(rule.conditions)) } as never,
     event: { type: CLUB_RULES },
   });
   const compiled: CompiledRuleSet = { document, engine, order };
   byVersion.set(key, compiled);
   byObject.set(document, compiled);
   return compiled;
+}
+
+/**
+ * The same test with every one-item `all` or `any` replaced by its item (the engine evaluates a
+ * lone condition directly either way): the engine copies the conditions on each run, so fewer
+ * objects make every run cheaper. The document is not changed.
+ */
+function unwrapped(condition: RuleCondition): RuleCondition {
+  if ('all' in condition || 'any' in condition) {
+    const items = ('all' in condition ? condition.all : condition.any).map(unwrapped);
+    if (items.length === 1) return items[0];
+    return 'all' in condition ? { all: items } : { any: items };
+  }
+  if ('not' in condition) return { not: unwrapped(condition.not) };
+  return condition;
 }
 
 /** FNV-1a over the JSON text: two drafts sharing an id and version never share a cache entry. */

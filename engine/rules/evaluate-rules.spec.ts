@@ -37,6 +37,12 @@ function withNestedRules(): RuleSetDocument {
       conditions: { all: [{ fact: 'bibs', operator: 'lessThan', value: { fact: 'playerCount' } }] },
       event: warning('bibs'),
     },
+    {
+      id: 'spec.one-item',
+      description: 'one-item all, any and not around one condition',
+      conditions: { all: [{ any: [{ not: { all: [{ fact: 'goals', operator: 'equal', value: 0 }] } }] }] },
+      event: warning('one-item'),
+    },
     { id: 'spec.empty-any', description: 'empty any', conditions: { any: [] }, event: warning('empty') },
   );
   return doc;
