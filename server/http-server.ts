@@ -33,10 +33,26 @@ export async function startHttpServer(options: {
     server,
     port,
     url: `http://${host}:${port}`,
-    close: () =>
-      new Promise<void>((resolve) => {
-        server.close(() => resolve());
-        server.closeAllConnections();
-      }),
+    close: () => closeGracefully(server),
   };
+}
+
+/** How long requests already running may take to finish when the server stops. */
+const DRAIN_MS = 5_000;
+
+/**
+ * Stops accepting, lets requests already running finish (so none meets a closed database pool),
+ * closes keep-alive connections as they fall idle, and cuts whatever is left after DRAIN_MS.
+ */
+function closeGracefully(server: Server): Promise<void> {
+  return new Promise<void>((resolve) => {
+    const idle = setInterval(() => server.closeIdleConnections(), 50);
+    const force = setTimeout(() => server.closeAllConnections(), DRAIN_MS);
+    server.close(() => {
+      clearInterval(idle);
+      clearTimeout(force);
+      resolve();
+    });
+    server.closeIdleConnections();
+  });
 }

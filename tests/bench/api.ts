@@ -88,6 +88,26 @@ function run(options: autocannon.Options): Promise<Figures> {
   });
 }
 
+/**
+ * A bare Express route measured the same way first: the targets were set on a machine where it
+ * served about 4,600 req/s, so this line tells how this machine compares.
+ */
+async function bareExpressRps(): Promise<number> {
+  const port = await freePort();
+  const script = `const app = require('express')(); app.get('/', (q, r) => r.json({ ok: true })); app.listen(${port}, '127.0.0.1', () => console.log('up'));`;
+  const bare = spawn(process.execPath, ['-e', script], {
+    cwd: PROJECT_ROOT,
+    stdio: ['ignore', 'pipe', 'inherit'],
+  });
+  await new Promise((resolve) => bare.stdout!.once('data', resolve));
+  try {
+    return (await run({ url: `http://127.0.0.1:${port}/`, duration: Math.min(DURATION_S, 10) })).rps;
+  } finally {
+    bare.kill('SIGTERM');
+  }
+}
+
+const bareRps = await bareExpressRps();
 const cluster = await startThrowawayCluster(() => undefined);
 let api: ChildProcess | null = null;
 try {
@@ -175,6 +195,9 @@ try {
       `${route.padEnd(18)} ${String(f.rps).padStart(6)} ${String(f.p50Ms).padStart(9)} ${String(f.p99Ms).padStart(8)}   ${((f.rps / health) * 100).toFixed(1).padStart(14)} %   ${cpuMsPerRequest[route]!.toFixed(2).padStart(14)}`,
     );
   }
+  console.log(
+    `calibration: a bare Express route here serves ${bareRps} req/s (about 4,600 where the targets were set)`,
+  );
   const post = results['POST /api/plans'];
   console.log(
     `targets: POST /api/plans p99 ${post.p99Ms} ms (≤ 50: ${post.p99Ms <= 50 ? 'met' : 'missed'}), ` +
