@@ -77,10 +77,7 @@ export async function loadPlanInputs(
     feedbackLimit,
   ]);
   const row = rows[0]!;
-  const team = scope.assertManageable(
-    row.team ? manager.getRepository(Team).create(row.team) : null,
-    row.attached,
-  );
+  const team = scope.assertManageable(row.team ? Object.assign(new Team(), row.team) : null, row.attached);
   const recentFeedback: FeedbackFact[] = row.feedback
     .filter((f) => f.activityKind)
     .map((f) => ({

@@ -71,7 +71,8 @@ export class PlanService {
     );
     const request = requestWithRoster(input.request, roster, recentFeedback);
     const plan = await engine.generatePlan(request, rules);
-    const row = manager.getRepository(SessionPlan).create({
+    // A plain entity: the repository's create() would walk the 22 kB plan for nothing.
+    const row = Object.assign(new SessionPlan(), {
       clubId: auth.clubId,
       teamId: team.id,
       date: input.date ?? null,
