@@ -28,7 +28,9 @@ export function estimateTouches(
   phases: Phase[],
   params: RuleParameters,
 ): Pick<Plan, 'touches' | 'activeShare'> {
-  const touches: Record<string, number> = {};
+  // A Map, not an object keyed by player id: ids are arbitrary strings, which puts an object in
+  // slow dictionary mode.
+  const touches = new Map<string, number>();
   let active = 0;
   let total = 0;
   for (const phase of phases) {
@@ -37,9 +39,8 @@ export function estimateTouches(
       const rate = params.touchRates[station.activityKind];
       const busy = busyShare(station, params);
       const balls = ballShare(station, params);
-      for (const id of station.playerIds) {
-        touches[id] = (touches[id] ?? 0) + rate.perMinute * minutes * busy * balls;
-      }
+      const each = rate.perMinute * minutes * busy * balls;
+      for (const id of station.playerIds) touches.set(id, (touches.get(id) ?? 0) + each);
       const n = station.playerIds.length;
       const withBall = station.activityKind === 'movement-prep' ? 1 : balls;
       active += n * minutes * rate.activeShare * busy * (0.3 + 0.7 * withBall);
@@ -47,6 +48,6 @@ export function estimateTouches(
     }
   }
   const rounded: Record<string, number> = {};
-  for (const id of Object.keys(touches).sort()) rounded[id] = Math.round(touches[id]);
+  for (const id of [...touches.keys()].sort()) rounded[id] = Math.round(touches.get(id)!);
   return { touches: rounded, activeShare: total ? Math.round((active / total) * 100) / 100 : 0 };
 }
