@@ -4,6 +4,7 @@ import type { AgeGroup, Level, Space } from '../../shared/types/plan-request';
 import { KitBag } from '../entities/kit-bag';
 import { Membership } from '../entities/membership';
 import { Team } from '../entities/team';
+import { preparedQuery } from '../db/prepared-query';
 import { badRequest, forbidden } from '../http/problem';
 import type { ClubScope } from './club-scope';
 
@@ -15,6 +16,24 @@ export interface TeamInput {
   coachIds?: string[];
 }
 
+interface TeamListRow extends Omit<TeamDto, 'usualSpace'> {
+  spaceWidth: number;
+  spaceLength: number;
+}
+
+// The home page's list in one round trip: the club's teams (an assistant's own only) with their
+// staff and active-player counts, in the order toDtos gives.
+const TEAM_LIST_SQL = `
+SELECT t.id, t.name, t."ageGroup", t.level, t."spaceWidth", t."spaceLength",
+       coalesce((SELECT array_agg(tc."userId"::text ORDER BY tc."userId")
+                   FROM team_coach tc WHERE tc."teamId" = t.id), '{}'::text[]) AS "coachIds",
+       (SELECT count(*)::int FROM player p WHERE p."teamId" = t.id AND p.active) AS "playerCount"
+  FROM team t
+ WHERE t."clubId" = $1
+   AND ($2::uuid IS NULL
+        OR EXISTS (SELECT 1 FROM team_coach tc WHERE tc."teamId" = t.id AND tc."userId" = $2::uuid))
+ ORDER BY t.name`;
+
 /** Squads of the caller's club. */
 export class TeamService {
   constructor(private readonly scope: ClubScope) {}
@@ -25,17 +44,15 @@ export class TeamService {
 
   /** Lead and coaches see every team; assistants the teams they help with. */
   async list(): Promise<TeamDto[]> {
-    const query = this.manager
-      .getRepository(Team)
-      .createQueryBuilder('team')
-      .where('team.clubId = :clubId', { clubId: this.scope.clubId })
-      .orderBy('team.name', 'ASC');
-    if (this.scope.auth.role === 'assistant') {
-      query.andWhere('team.id IN (SELECT "teamId" FROM team_coach WHERE "userId" = :userId)', {
-        userId: this.scope.auth.userId,
-      });
-    }
-    return this.toDtos(await query.getMany());
+    const helper = this.scope.auth.role === 'assistant' ? this.scope.auth.userId : null;
+    const rows = await preparedQuery<TeamListRow>(this.manager, 'team-list', TEAM_LIST_SQL, [
+      this.scope.clubId,
+      helper,
+    ]);
+    return rows.map(({ spaceWidth, spaceLength, ...team }) => ({
+      ...team,
+      usualSpace: { width: spaceWidth, length: spaceLength },
+    }));
   }
 
   async get(id: string): Promise<TeamDto> {

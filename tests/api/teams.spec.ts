@@ -47,6 +47,8 @@ describe('teams', () => {
     expect(list.body.map((t: { id: string }) => t.id)).toContain(team.id);
     const read = await app.api.get(`/api/teams/${team.id}`, { token: club.lead.token });
     expect(read.body.name).toBe('U7 Wrens');
+    // The list's one-query form and the single read agree field by field.
+    expect(list.body.find((t: { id: string }) => t.id === team.id)).toEqual(read.body);
     const patched = await app.api.patch(
       `/api/teams/${team.id}`,
       { level: 'advanced', coachIds: [club.coach.user.id, club.assistant.user.id] },
