@@ -54,6 +54,8 @@ describe('players and kit bags', () => {
     expect(list.body.map((p: { displayName: string }) => p.displayName)).toEqual(['Leo B.', 'Maya O.']);
     const team = await app.api.get(`/api/teams/${teamId}`, { token: club.coach.token });
     expect(team.body.playerCount).toBe(2);
+    const teams = await app.api.get('/api/teams', { token: club.coach.token });
+    expect(teams.body.find((t: { id: string }) => t.id === teamId).playerCount).toBe(2);
 
     const patched = await app.api.patch(
       `/api/players/${created.body.id}`,
