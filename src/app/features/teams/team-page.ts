@@ -1,11 +1,21 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  ElementRef,
+  inject,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatDialog } from '@angular/material/dialog';
 import { MatExpansionModule } from '@angular/material/expansion';
 import { MatIconModule } from '@angular/material/icon';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import type { KitBagDto, PlayerDto, TeamDto } from '../../../../shared/types';
 import { PlayerBody, PlayersApi } from '../../core/api/players-api';
 import { TeamBody, TeamsApi } from '../../core/api/teams-api';
@@ -13,12 +23,14 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { problemMessage } from '../../core/http/problem-message';
 import { LEVEL_LABELS } from '../../core/labels/plan-labels';
 import { CsvImport } from './components/csv-import';
+import { DeleteTeamData, DeleteTeamDialog } from './components/delete-team-dialog';
 import { KitBagForm } from './components/kit-bag-form';
 import { PlayerDialog } from './components/player-dialog';
 import { PlayersTable } from './components/players-table';
+import { RemovePlayerDialog } from './components/remove-player-dialog';
 import { TeamDefaultsForm } from './components/team-defaults-form';
 
-/** One team: its players, CSV import, kit bag and defaults, with the way into planning. */
+/** One team: its players, CSV import, kit bag and defaults, with the way into planning and out. */
 @Component({
   selector: 'cw-team-page',
   imports: [
@@ -42,6 +54,8 @@ export class TeamPage {
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly auth = inject(AuthStore);
+  private readonly router = inject(Router);
+  private readonly playersHeading = viewChild<ElementRef<HTMLElement>>('playersHeading');
 
   readonly teamId = input.required<string>();
 
@@ -52,6 +66,15 @@ export class TeamPage {
   protected readonly levelLabels = LEVEL_LABELS;
   protected readonly canEdit = computed(() => this.auth.hasRole('lead', 'coach'));
   protected readonly activeCount = computed(() => this.players().filter((p) => p.active).length);
+  /** The server lets the lead and the team's own coaches take players off the squad. */
+  protected readonly canRemovePlayers = computed(() => {
+    const user = this.auth.user();
+    if (!user) return false;
+    if (user.role === 'lead') return true;
+    return user.role === 'coach' && (this.team()?.coachIds.includes(user.id) ?? false);
+  });
+  /** Deleting a whole team is the lead's call. */
+  protected readonly canDeleteTeam = computed(() => this.auth.hasRole('lead'));
 
   constructor() {
     effect(() => this.load(this.teamId()));
@@ -107,6 +130,38 @@ export class TeamPage {
         this.loadPlayers();
       },
     });
+  }
+
+  protected confirmRemovePlayer(player: PlayerDto): void {
+    this.dialog
+      .open<RemovePlayerDialog, PlayerDto, boolean>(RemovePlayerDialog, {
+        data: player,
+        width: '460px',
+        maxWidth: 'calc(100vw - 32px)',
+      })
+      .afterClosed()
+      .subscribe((removed) => {
+        if (!removed) return;
+        this.players.update((list) => list.filter((p) => p.id !== player.id));
+        // The row and its button are gone; put focus somewhere that still exists.
+        this.playersHeading()?.nativeElement.focus();
+        this.say(`${player.displayName} removed from the squad.`);
+      });
+  }
+
+  protected confirmDeleteTeam(team: TeamDto): void {
+    this.dialog
+      .open<DeleteTeamDialog, DeleteTeamData, boolean>(DeleteTeamDialog, {
+        data: { team, playerCount: this.players().length },
+        width: '480px',
+        maxWidth: 'calc(100vw - 32px)',
+      })
+      .afterClosed()
+      .subscribe((deleted) => {
+        if (!deleted) return;
+        this.say(`${team.name} deleted.`);
+        void this.router.navigate(['/teams']);
+      });
   }
 
   protected saveKit(kit: KitBagDto): void {

@@ -16,9 +16,10 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { MatSort, MatSortModule } from '@angular/material/sort';
 import { MatTableDataSource, MatTableModule } from '@angular/material/table';
+import { MatTooltipModule } from '@angular/material/tooltip';
 import type { PlayerDto } from '../../../../../shared/types';
 
-/** The squad as a sortable, filterable table with edit, goalkeeper and active switches. */
+/** The squad as a sortable, filterable table with edit, goalkeeper and active switches, and removal. */
 @Component({
   selector: 'cw-players-table',
   imports: [
@@ -30,6 +31,7 @@ import type { PlayerDto } from '../../../../../shared/types';
     MatIconModule,
     MatCheckboxModule,
     MatSlideToggleModule,
+    MatTooltipModule,
   ],
   templateUrl: './players-table.html',
   styleUrl: './players-table.scss',
@@ -38,7 +40,11 @@ import type { PlayerDto } from '../../../../../shared/types';
 export class PlayersTable implements AfterViewInit {
   readonly players = input.required<PlayerDto[]>();
   readonly editable = input(true);
+  /** Whether each row offers to remove the player (the lead and the team's own coaches). */
+  readonly removable = input(false);
   readonly edit = output<PlayerDto>();
+  /** The player whose remove button was pressed; the page asks before anything is deleted. */
+  readonly remove = output<PlayerDto>();
   readonly changeFlag = output<{ player: PlayerDto; goalkeeper?: boolean; active?: boolean }>();
 
   private readonly sort = viewChild(MatSort);

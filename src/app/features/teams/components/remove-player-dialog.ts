@@ -1,0 +1,87 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import type { PlayerDto } from '../../../../../shared/types';
+import { PlayersApi } from '../../../core/api/players-api';
+import { problemMessage } from '../../../core/http/problem-message';
+
+/**
+ * Asks before a player is taken off the squad for good, and does it. Closes with `true` once the
+ * server has removed the player; a refusal stays in the dialog so the coach can read it and retry.
+ */
+@Component({
+  selector: 'cw-remove-player-dialog',
+  imports: [MatDialogModule, MatButtonModule],
+  template: `
+    <h2 mat-dialog-title>Remove {{ player.displayName }} from the squad?</h2>
+    <mat-dialog-content>
+      <ul class="cw-consequences">
+        <li>{{ player.displayName }} goes off the player list and is no longer offered for new plans.</li>
+        <li>Past plans still show the name.</li>
+        <li>Their attendance ticks are deleted, so Team insight no longer counts them.</li>
+      </ul>
+      @if (player.active) {
+        <p class="cw-tip">
+          <strong>Only away for a while, say injured?</strong> Switch off <em>Active</em> instead: they stay
+          on the list with their record and can come back any time.
+        </p>
+      }
+      <p>You can't undo this.</p>
+      @if (error(); as text) {
+        <p class="cw-form-error" role="alert">{{ text }}</p>
+      }
+    </mat-dialog-content>
+    <mat-dialog-actions align="end">
+      <button mat-button type="button" mat-dialog-close cdkFocusInitial>Keep {{ player.displayName }}</button>
+      <button
+        mat-flat-button
+        type="button"
+        class="cw-danger"
+        [disabled]="busy()"
+        data-testid="confirm-remove-player"
+        (click)="removePlayer()"
+      >
+        Remove player
+      </button>
+    </mat-dialog-actions>
+  `,
+  styles: `
+    .cw-consequences {
+      margin: 0 0 12px;
+      padding-left: 20px;
+      li + li {
+        margin-top: 4px;
+      }
+    }
+    .cw-tip {
+      padding: 10px 12px;
+      border-radius: 10px;
+      background: var(--mat-sys-surface-container);
+    }
+    .cw-danger {
+      --mat-button-filled-container-color: var(--mat-sys-error);
+      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RemovePlayerDialog {
+  private readonly playersApi = inject(PlayersApi);
+  private readonly ref = inject<MatDialogRef<RemovePlayerDialog, boolean>>(MatDialogRef);
+  /** The player the coach chose to remove. */
+  protected readonly player = inject<PlayerDto>(MAT_DIALOG_DATA);
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+
+  protected removePlayer(): void {
+    this.busy.set(true);
+    this.error.set(null);
+    this.playersApi.remove(this.player.id).subscribe({
+      next: () => this.ref.close(true),
+      error: (error: unknown) => {
+        this.busy.set(false);
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+}

@@ -1,0 +1,200 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import { provideRouter, Router } from '@angular/router';
+import type { PlayerDto, Role, TeamDto } from '../../../../shared/types';
+import { AuthStore } from '../../core/auth/auth-store';
+import { TeamPage } from './team-page';
+
+const TEAM: TeamDto = {
+  id: 't1',
+  name: 'U9 Herons',
+  ageGroup: 'U9',
+  level: 'beginner',
+  usualSpace: { width: 30, length: 40 },
+  coachIds: ['coach-1'],
+  playerCount: 2,
+};
+const PLAYERS: PlayerDto[] = [
+  { id: 'p1', teamId: 't1', displayName: 'Ola K.', goalkeeper: true, active: true },
+  { id: 'p2', teamId: 't1', displayName: 'Rui M.', goalkeeper: false, active: true },
+  { id: 'p3', teamId: 't1', displayName: 'Tam J.', goalkeeper: false, active: false },
+];
+
+const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges(): void }) => {
+  for (let i = 0; i < 10; i++) await new Promise((resolve) => setTimeout(resolve, 10));
+  await fixture.whenStable();
+  fixture.detectChanges();
+};
+
+/** The open dialog (rendered in the overlay container, outside the page). */
+const dialog = () => document.querySelector('mat-dialog-container') as HTMLElement | null;
+
+function button(root: ParentNode, name: string): HTMLButtonElement {
+  const found = Array.from(root.querySelectorAll('button')).find(
+    (b) => (b.getAttribute('aria-label') ?? b.textContent ?? '').trim() === name,
+  );
+  if (!found) throw new Error(`no button "${name}"`);
+  return found;
+}
+
+vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
+
+describe('TeamPage', () => {
+  async function setUp(role: Role, userId = 'coach-1') {
+    TestBed.configureTestingModule({
+      imports: [TeamPage],
+      providers: [
+        provideHttpClient(),
+        provideHttpClientTesting(),
+        provideRouter([]),
+        provideNoopAnimations(),
+      ],
+    });
+    TestBed.inject(AuthStore).signIn({
+      token: 't',
+      user: { id: userId, name: 'Someone', email: 'x@example.org', clubId: 'c1', clubName: 'Club', role },
+    });
+    const navigate = vi.spyOn(TestBed.inject(Router), 'navigate').mockResolvedValue(true);
+    const fixture = TestBed.createComponent(TeamPage);
+    fixture.componentRef.setInput('teamId', 't1');
+    const http = TestBed.inject(HttpTestingController);
+    fixture.detectChanges();
+    http.expectOne('/api/teams/t1').flush(TEAM);
+    http.expectOne((r) => r.url === '/api/teams/t1/players').flush(PLAYERS);
+    http.expectOne('/api/teams/t1/kit').flush({ balls: 10, cones: 20, bibs: 8, goals: 2 });
+    await settle(fixture);
+    return { fixture, http, navigate, root: fixture.nativeElement as HTMLElement };
+  }
+
+  const rowNames = (root: HTMLElement) =>
+    Array.from(root.querySelectorAll('tbody tr td:first-child')).map((td) => td.textContent?.trim());
+
+  afterEach(() => {
+    TestBed.inject(HttpTestingController).verify();
+    localStorage.clear();
+  });
+
+  it('a coach of the team removes a player after reading what happens, and the row goes', async () => {
+    const { fixture, http, root } = await setUp('coach');
+    button(root, 'Remove Rui M. from the squad').click();
+    await settle(fixture);
+
+    const text = dialog()!.textContent!;
+    expect(text).toContain('Remove Rui M. from the squad?');
+    expect(text).toContain('Past plans still show the name.');
+    expect(text).toContain('Switch off Active instead');
+    http.expectNone('/api/players/p2');
+
+    button(dialog()!, 'Remove player').click();
+    const request = http.expectOne('/api/players/p2');
+    expect(request.request.method).toBe('DELETE');
+    request.flush(null, { status: 204, statusText: 'No Content' });
+    await settle(fixture);
+
+    expect(dialog()).toBeNull();
+    expect(rowNames(root)).toEqual(['Ola K.', 'Tam J.']);
+    expect(root.textContent).toContain('1 active players');
+    expect(document.activeElement?.textContent?.trim()).toBe('Players');
+  });
+
+  it('keeping the player sends nothing and leaves the squad as it was', async () => {
+    const { fixture, http, root } = await setUp('lead', 'lead-1');
+    button(root, 'Remove Ola K. from the squad').click();
+    await settle(fixture);
+    button(dialog()!, 'Keep Ola K.').click();
+    await settle(fixture);
+    http.expectNone('/api/players/p1');
+    expect(dialog()).toBeNull();
+    expect(rowNames(root)).toEqual(['Ola K.', 'Rui M.', 'Tam J.']);
+  });
+
+  it('a refused removal is shown in the dialog and the player stays', async () => {
+    const { fixture, http, root } = await setUp('coach');
+    button(root, 'Remove Tam J. from the squad').click();
+    await settle(fixture);
+    // Tam is already inactive: no advice to switch Active off.
+    expect(dialog()!.textContent).not.toContain('Switch off Active');
+    button(dialog()!, 'Remove player').click();
+    http.expectOne('/api/players/p3').flush(
+      {
+        type: 'about:blank',
+        title: 'Forbidden',
+        status: 403,
+        detail: 'Only the club lead and the team’s coaches can change this team.',
+      },
+      { status: 403, statusText: 'Forbidden' },
+    );
+    await settle(fixture);
+    expect(dialog()!.querySelector('[role=alert]')?.textContent).toContain('Only the club lead');
+    expect(button(dialog()!, 'Remove player').disabled).toBe(false);
+    expect(rowNames(root)).toContain('Tam J.');
+  });
+
+  it('a coach of another team gets no remove buttons and no way to delete the team', async () => {
+    const { root } = await setUp('coach', 'coach-2');
+    expect(root.querySelector('.cw-remove')).toBeNull();
+    expect(root.textContent).not.toContain('Delete this team');
+  });
+
+  it('a coach of the team cannot delete it; that is left to the lead', async () => {
+    const { root } = await setUp('coach');
+    expect(root.textContent).not.toContain('Delete this team');
+  });
+
+  async function openDeleteTeam() {
+    const context = await setUp('lead', 'lead-1');
+    (context.root.querySelector('[data-testid=delete-team]') as HTMLButtonElement).click();
+    await settle(context.fixture);
+    const input = dialog()!.querySelector('[data-testid=delete-team-name]') as HTMLInputElement;
+    const type = async (text: string) => {
+      input.value = text;
+      input.dispatchEvent(new Event('input'));
+      await settle(context.fixture);
+    };
+    const confirm = async () => {
+      button(dialog()!, 'Delete team').click();
+      await settle(context.fixture);
+    };
+    return { ...context, input, type, confirm };
+  }
+
+  it('the lead deletes the team only after typing its name, then goes back to the team list', async () => {
+    const { http, navigate, type, confirm } = await openDeleteTeam();
+    const text = dialog()!.textContent!;
+    expect(text).toContain('Delete U9 Herons?');
+    expect(text).toContain('its 3 players');
+    expect(text).toContain('all its plans, with their attendance and station feedback');
+
+    await confirm();
+    http.expectNone('/api/teams/t1');
+    expect(dialog()!.textContent).toContain('Type U9 Herons to confirm.');
+
+    await type('U9 Heron');
+    await confirm();
+    http.expectNone('/api/teams/t1');
+
+    await type('  u9 herons ');
+    await confirm();
+    const request: TestRequest = http.expectOne('/api/teams/t1');
+    expect(request.request.method).toBe('DELETE');
+    request.flush(null, { status: 204, statusText: 'No Content' });
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    expect(dialog()).toBeNull();
+    expect(navigate).toHaveBeenCalledWith(['/teams']);
+  });
+
+  it('a failed delete keeps the dialog open with the typed name and says why', async () => {
+    const { http, navigate, input, type, confirm } = await openDeleteTeam();
+    await type('U9 Herons');
+    await confirm();
+    http
+      .expectOne('/api/teams/t1')
+      .flush({ message: 'boom' }, { status: 500, statusText: 'Internal Server Error' });
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    expect(dialog()!.querySelector('[role=alert]')?.textContent).toContain('Nothing you saved was lost');
+    expect(input.value).toBe('U9 Herons');
+    expect(navigate).not.toHaveBeenCalled();
+  });
+});
