@@ -34,7 +34,7 @@ export function sizeRule(params: RuleParameters, kind: ActivityKind, level: Leve
     };
   }
   const g = params.groupSizes[kind][level];
-  return { ...g, allows: (t) => t >= g.min && t <= g.max };
+  return { min: g.min, preferred: g.preferred, max: g.max, allows: (t) => t >= g.min && t <= g.max };
 }
 
 /** How many stations of a kind the kit supports (goals, or gates of two cones). */
@@ -53,6 +53,14 @@ export interface AllocationRules {
   usable(kind: ActivityKind): boolean;
   /** Cap on stations in the phase (set when the space cannot hold more). */
   maxStations?: number;
+}
+
+/**
+ * The same rules with a cap on stations. Spelled out rather than a spread: in V8 a spread with
+ * an added key costs microseconds, and allocation asks for capped rules many times per phase.
+ */
+export function withStationCap(rules: AllocationRules, maxStations: number): AllocationRules {
+  return { params: rules.params, level: rules.level, kit: rules.kit, usable: rules.usable, maxStations };
 }
 
 /** All n players in groups of one kind, or null when the sizes cannot work. */
@@ -116,7 +124,7 @@ export function allocatePhase(
     const coachesLeft = coaches - main.groups.reduce((s, g) => s + g.coachJoins, 0);
     const capLeft = (rules.maxStations ?? Number.POSITIVE_INFINITY) - main.groups.length;
     if (capLeft < 1) continue;
-    const rest = leftoverGroups(leftover, coachesLeft, kind, { ...rules, maxStations: capLeft });
+    const rest = leftoverGroups(leftover, coachesLeft, kind, withStationCap(rules, capLeft));
     if (!rest) continue;
     const cost = main.cost + rest.cost + penalty * rest.groups.length;
     if (!best || cost < best.cost - 1e-9) best = { groups: [...main.groups, ...rest.groups], cost };

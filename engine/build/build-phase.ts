@@ -9,7 +9,7 @@ import type {
 } from '../../shared/types';
 import { shuffle } from '../random';
 import { chooseActivity } from './activities';
-import { allocatePhase, type AllocationRules, type GroupPlan } from './allocation';
+import { allocatePhase, withStationCap, type AllocationRules, type GroupPlan } from './allocation';
 import { areaForWidth, areaTable, baseWidth } from './areas';
 import { addWarning, type BuildContext } from './context';
 import { equipPhase } from './kit';
@@ -35,10 +35,12 @@ export function buildPhase(
   let stations: Station[] = [];
   // Fewer, larger groups when the stations do not fit the space even at the rule minimum.
   for (;;) {
-    const allocation = allocatePhase(request.players.length, request.coaches, spec.kind, {
-      ...rules,
-      maxStations: cap,
-    });
+    const allocation = allocatePhase(
+      request.players.length,
+      request.coaches,
+      spec.kind,
+      withStationCap(rules, cap),
+    );
     if (!Number.isFinite(allocation.cost)) {
       // No grouping within the club's sizes fits: everyone works in one shared grid instead.
       if (!Number.isFinite(cap)) {

@@ -15,7 +15,13 @@ import type {
   Station,
 } from '../../shared/types';
 import { activityById, chooseActivity, kindBlocked } from '../build/activities';
-import { allocatePhase, kindFeasible, type AllocationRules, type GroupPlan } from '../build/allocation';
+import {
+  allocatePhase,
+  kindFeasible,
+  withStationCap,
+  type AllocationRules,
+  type GroupPlan,
+} from '../build/allocation';
 import { makeStation, placeStations, sharedGrid } from '../build/build-phase';
 import { assignRoles } from '../build/roles';
 import { checkPlan } from '../check-plan';
@@ -143,7 +149,7 @@ function regroupPhase(
 ): Phase {
   let cap = Number.POSITIVE_INFINITY;
   for (;;) {
-    const target = allocatePhase(count, coaches, activity.kind, { ...rules, maxStations: cap });
+    const target = allocatePhase(count, coaches, activity.kind, withStationCap(rules, cap));
     if (!Number.isFinite(target.cost)) {
       const everyone = phase.stations.flatMap((s) => s.playerIds).filter((id) => !removed.has(id));
       const asOne = [{ ...phase.stations[0], playerIds: [...everyone, ...arrivals.map((p) => p.id)] }];
