@@ -205,6 +205,8 @@ try {
   );
   console.log(JSON.stringify(results));
 } finally {
+  // Let requests whose client autocannon has already dropped finish before the API stops.
+  await new Promise((resolve) => setTimeout(resolve, 1_000));
   api?.kill('SIGTERM');
   await new Promise((resolve) => setTimeout(resolve, 500));
   await cluster.stop();
