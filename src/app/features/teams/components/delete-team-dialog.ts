@@ -34,8 +34,9 @@ function sameName(typed: string, name: string): boolean {
   selector: 'cw-delete-team-dialog',
   imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatButtonModule],
   template: `
-    <h2 mat-dialog-title>Delete {{ data.team.name }}?</h2>
     <form [formGroup]="form" (ngSubmit)="deleteTeam()" novalidate>
+      <!-- Title and content side by side, so the dialog's spacing between them still applies. -->
+      <h2 mat-dialog-title>Delete {{ data.team.name }}?</h2>
       <mat-dialog-content>
         <p>This deletes the team for everyone in the club, together with:</p>
         <ul class="cw-consequences">
