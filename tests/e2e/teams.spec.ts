@@ -1,14 +1,19 @@
-/** Adding a team from the team list: the form checks the name, then the new team's page opens. */
+/**
+ * Teams: adding one from the team list (the form checks the name, then the new team's page opens),
+ * taking a player off the squad, and deleting a team once the lead has typed its name.
+ */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { TeamDto } from '../../shared/types';
+import type { Page } from 'playwright-core';
+import type { PlayerDto, TeamDto } from '../../shared/types';
 import {
+  DESKTOP,
   launchBrowser,
   PHONE,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
 } from './support/browser';
-import { ClubSession, LEAD } from './support/club-session';
+import { ClubSession, LEAD, U8_COACH } from './support/club-session';
 
 describe('teams', () => {
   const baseUrl = inject('baseUrl');
@@ -47,4 +52,104 @@ describe('teams', () => {
     });
     await page.close();
   });
+
+  /** Waits until the dialog's opening and the field's error have finished animating. */
+  async function settled(page: Page): Promise<void> {
+    await page.waitForFunction(() =>
+      document
+        .getAnimations()
+        .every((a) => a.playState !== 'running' || a.effect?.getTiming().iterations === Infinity),
+    );
+  }
+
+  /** The "N active players" figure under the team's name. */
+  async function activeCount(page: Page): Promise<number> {
+    const text = (await page.locator('.cw-sub').textContent()) ?? '';
+    const match = /(\d+) active players/.exec(text);
+    if (!match) throw new Error(`no active count in "${text}"`);
+    return Number(match[1]);
+  }
+
+  for (const [label, viewport] of [
+    ['phone', PHONE],
+    ['desktop', DESKTOP],
+  ] as const) {
+    it(`a coach removes a player from the squad and the count drops (${label})`, async () => {
+      const coach = await club.login(U8_COACH);
+      const { team } = await club.team(coach, 'U8 Foxes');
+      // A player of our own, so the demo squad other specs rely on stays as it was.
+      const displayName = `Quin ${label === 'phone' ? 'P' : 'D'}.`;
+      const created = await club.api.post<PlayerDto>(
+        `/api/teams/${team.id}/players`,
+        { displayName },
+        { token: coach.token },
+      );
+      expect(created.status).toBe(201);
+
+      const page = await browser.newPage(viewport);
+      await club.open(page, coach, `/teams/${team.id}`);
+      await page.getByRole('cell', { name: displayName, exact: true }).waitFor();
+      const before = await activeCount(page);
+
+      await page.getByRole('button', { name: `Remove ${displayName} from the squad` }).click();
+      const dialog = page.getByRole('dialog', { name: `Remove ${displayName} from the squad?` });
+      await dialog.waitFor();
+      expect(await dialog.textContent()).toContain('Past plans still show the name.');
+      await settled(page);
+      await screenshot(page, 'team-remove-player');
+      expect(await seriousAccessibilityViolations(page)).toEqual([]);
+
+      await dialog.getByRole('button', { name: 'Remove player' }).click();
+      await dialog.waitFor({ state: 'detached' });
+      await page.getByRole('cell', { name: displayName, exact: true }).waitFor({ state: 'detached' });
+      await expect.poll(() => activeCount(page)).toBe(before - 1);
+      await page.getByText(`${displayName} removed from the squad.`).first().waitFor();
+
+      const players = await club.api.get<PlayerDto[]>(`/api/teams/${team.id}/players?includeInactive=true`, {
+        token: coach.token,
+      });
+      expect(players.body.map((p) => p.id)).not.toContain(created.body.id);
+      await page.close();
+    });
+
+    it(`the lead deletes a team after typing its name, and it leaves the team list (${label})`, async () => {
+      const lead = await club.login(LEAD);
+      const name = `U11 Larks ${label} ${Date.now() % 10_000}`;
+      const created = await club.api.post<TeamDto>(
+        '/api/teams',
+        { name, ageGroup: 'U11', level: 'intermediate', usualSpace: { width: 35, length: 45 } },
+        { token: lead.token },
+      );
+      expect(created.status).toBe(201);
+      const team = created.body;
+      await club.api.post(`/api/teams/${team.id}/players`, { displayName: 'Ivo N.' }, { token: lead.token });
+
+      const page = await browser.newPage(viewport);
+      await club.open(page, lead, `/teams/${team.id}`);
+      await page.getByRole('heading', { name, level: 1 }).waitFor();
+      await page.getByRole('button', { name: 'Delete team' }).click();
+      const dialog = page.getByRole('dialog', { name: `Delete ${name}?` });
+      await dialog.waitFor();
+      expect(await dialog.textContent()).toContain('its 1 player');
+
+      // A name that does not match is refused in place, and nothing is deleted.
+      const field = dialog.getByLabel('Type the team name to confirm');
+      await field.fill('U11 Larks');
+      await dialog.getByRole('button', { name: 'Delete team' }).click();
+      await dialog.getByText(`Type ${name} to confirm.`).waitFor();
+      await settled(page);
+      await screenshot(page, 'team-delete');
+      expect(await seriousAccessibilityViolations(page)).toEqual([]);
+      expect((await club.api.get(`/api/teams/${team.id}`, { token: lead.token })).status).toBe(200);
+
+      await field.fill(name);
+      await dialog.getByRole('button', { name: 'Delete team' }).click();
+      await page.waitForURL(/\/teams$/);
+      await page.getByRole('heading', { name: 'Teams', level: 1 }).waitFor();
+      await page.getByText('U8 Foxes').first().waitFor();
+      expect(await page.locator('.cw-team-name', { hasText: name }).count()).toBe(0);
+      expect((await club.api.get(`/api/teams/${team.id}`, { token: lead.token })).status).toBe(404);
+      await page.close();
+    });
+  }
 });
