@@ -27,7 +27,7 @@ export function createApp(deps: AppDeps): Express {
   const logger = deps.logger ?? pino({ level: deps.config.logLevel });
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', deps.config.trustProxy);
 
   app.use(
     helmet({

@@ -28,6 +28,12 @@ export interface AppConfig {
   invitationTtlHours: number;
   /** pino level; 'silent' in tests. */
   logLevel: string;
+  /**
+   * Express 'trust proxy': which proxies' X-Forwarded-For to believe when telling clients apart
+   * (the sign-in rate limit counts per client). 'loopback' by default; behind a load balancer on
+   * another machine, its address or subnet (TRUST_PROXY=10.0.0.0/8) or a hop count (TRUST_PROXY=1).
+   */
+  trustProxy: string | number;
 }
 
 function packageVersion(): string {
@@ -78,6 +84,14 @@ export function loadConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     staticDir: existsSync(CLIENT_DIST) ? CLIENT_DIST : null,
     invitationTtlHours: intFromEnv('INVITATION_TTL_HOURS', 72),
     logLevel: process.env['LOG_LEVEL'] ?? 'info',
+    trustProxy: trustProxyFromEnv(process.env['TRUST_PROXY']),
     ...overrides,
   };
+}
+
+/** TRUST_PROXY as Express takes it: a hop count, or addresses and subnet names separated by commas. */
+export function trustProxyFromEnv(raw: string | undefined): string | number {
+  const value = raw?.trim();
+  if (!value) return 'loopback';
+  return /^\d+$/.test(value) ? Number(value) : value;
 }

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import jwt from 'jsonwebtoken';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { trustProxyFromEnv } from '../../server/config';
 import {
   registerClub,
   startTestApp,
@@ -147,5 +148,53 @@ describe('auth rate limit', () => {
     }
     expect(statuses.slice(0, 3)).toEqual([401, 401, 401]);
     expect(statuses.slice(3)).toEqual([429, 429]);
+  });
+});
+
+describe('auth rate limit behind a proxy (TRUST_PROXY)', () => {
+  /** Login attempts from each forwarded client address in turn; the statuses per address. */
+  async function attemptsPerClient(app: TestApp, clients: string[], each: number) {
+    const statuses: Record<string, number[]> = {};
+    for (let i = 0; i < each; i++) {
+      for (const client of clients) {
+        const response = await app.api.post(
+          '/api/auth/login',
+          { email: 'x@example.org', password: 'wrong' },
+          { headers: { 'X-Forwarded-For': client } },
+        );
+        (statuses[client] ??= []).push(response.status);
+      }
+    }
+    return statuses;
+  }
+
+  it('counts each client behind a trusted proxy on its own (the default trusts a proxy on this machine)', async () => {
+    const app = await startTestApp({ authRateLimit: { windowMs: 60_000, max: 2 } });
+    try {
+      const statuses = await attemptsPerClient(app, ['203.0.113.7', '198.51.100.9'], 2);
+      expect(statuses).toEqual({ '203.0.113.7': [401, 401], '198.51.100.9': [401, 401] });
+    } finally {
+      await app.close();
+    }
+  });
+
+  it('ignores X-Forwarded-For from a proxy it does not trust, so those clients share one count', async () => {
+    const app = await startTestApp({
+      authRateLimit: { windowMs: 60_000, max: 2 },
+      trustProxy: trustProxyFromEnv('10.0.0.0/8'),
+    });
+    try {
+      const statuses = await attemptsPerClient(app, ['203.0.113.7', '198.51.100.9'], 2);
+      expect(statuses).toEqual({ '203.0.113.7': [401, 429], '198.51.100.9': [401, 429] });
+    } finally {
+      await app.close();
+    }
+  });
+
+  it('reads TRUST_PROXY as a hop count or as addresses', () => {
+    expect(trustProxyFromEnv(undefined)).toBe('loopback');
+    expect(trustProxyFromEnv(' ')).toBe('loopback');
+    expect(trustProxyFromEnv('1')).toBe(1);
+    expect(trustProxyFromEnv('10.0.0.0/8, loopback')).toBe('10.0.0.0/8, loopback');
   });
 });
