@@ -4,7 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import type { PlayerDto, TeamDto } from '../../shared/types';
+import type { PlayerDto, SessionPlanDto, TeamDto } from '../../shared/types';
 import {
   DESKTOP,
   launchBrowser,
@@ -76,7 +76,7 @@ describe('teams', () => {
   ] as const) {
     it(`a coach removes a player from the squad and the count drops (${label})`, async () => {
       const coach = await club.login(U8_COACH);
-      const { team } = await club.team(coach, 'U8 Foxes');
+      const { team, players: squad } = await club.team(coach, 'U8 Foxes');
       // A player of our own, so the demo squad other specs rely on stays as it was.
       const displayName = `Quin ${label === 'phone' ? 'P' : 'D'}.`;
       const created = await club.api.post<PlayerDto>(
@@ -85,6 +85,8 @@ describe('teams', () => {
         { token: coach.token },
       );
       expect(created.status).toBe(201);
+      // The dialog says past plans keep the name: a plan with the player in it, to check that.
+      const past = await club.plan(coach, team, [...squad, created.body]);
 
       const page = await browser.newPage(viewport);
       await club.open(page, coach, `/teams/${team.id}`);
@@ -109,6 +111,8 @@ describe('teams', () => {
         token: coach.token,
       });
       expect(players.body.map((p) => p.id)).not.toContain(created.body.id);
+      const plan = await club.api.get<SessionPlanDto>(`/api/plans/${past.id}`, { token: coach.token });
+      expect(plan.body.request.players).toContainEqual(expect.objectContaining({ name: displayName }));
       await page.close();
     });
 
