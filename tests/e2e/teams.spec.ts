@@ -4,7 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import type { PlayerDto, SessionPlanDto, TeamDto } from '../../shared/types';
+import type { AuthResponse, PlayerDto, SessionPlanDto, TeamDto } from '../../shared/types';
 import {
   DESKTOP,
   launchBrowser,
@@ -53,6 +53,18 @@ describe('teams', () => {
     await page.close();
   });
 
+  /**
+   * A page signed in as `auth`. The browser profile is shared by the whole file and `club.open`
+   * keeps a session already stored, so the one from an earlier test is cleared first.
+   */
+  async function pageAs(auth: AuthResponse, viewport: { width: number; height: number }, path: string) {
+    const page = await browser.newPage(viewport);
+    await page.goto(baseUrl + '/');
+    await page.evaluate(() => localStorage.removeItem('conewise.session'));
+    await club.open(page, auth, path);
+    return page;
+  }
+
   /** Waits until the dialog's opening and the field's error have finished animating. */
   async function settled(page: Page): Promise<void> {
     await page.waitForFunction(() =>
@@ -88,10 +100,11 @@ describe('teams', () => {
       // The dialog says past plans keep the name: a plan with the player in it, to check that.
       const past = await club.plan(coach, team, [...squad, created.body]);
 
-      const page = await browser.newPage(viewport);
-      await club.open(page, coach, `/teams/${team.id}`);
+      const page = await pageAs(coach, viewport, `/teams/${team.id}`);
       await page.getByRole('cell', { name: displayName, exact: true }).waitFor();
       const before = await activeCount(page);
+      // Signed in as the coach: deleting the whole team is left to the lead.
+      expect(await page.getByRole('button', { name: 'Delete team' }).count()).toBe(0);
 
       await page.getByRole('button', { name: `Remove ${displayName} from the squad` }).click();
       const dialog = page.getByRole('dialog', { name: `Remove ${displayName} from the squad?` });
@@ -128,8 +141,7 @@ describe('teams', () => {
       const team = created.body;
       await club.api.post(`/api/teams/${team.id}/players`, { displayName: 'Ivo N.' }, { token: lead.token });
 
-      const page = await browser.newPage(viewport);
-      await club.open(page, lead, `/teams/${team.id}`);
+      const page = await pageAs(lead, viewport, `/teams/${team.id}`);
       await page.getByRole('heading', { name, level: 1 }).waitFor();
       await page.getByRole('button', { name: 'Delete team' }).click();
       const dialog = page.getByRole('dialog', { name: `Delete ${name}?` });
