@@ -77,7 +77,7 @@ describe('teams', () => {
   /** The "N active players" figure under the team's name. */
   async function activeCount(page: Page): Promise<number> {
     const text = (await page.locator('.cw-sub').textContent()) ?? '';
-    const match = /(\d+) active players/.exec(text);
+    const match = /(\d+) active players?/.exec(text);
     if (!match) throw new Error(`no active count in "${text}"`);
     return Number(match[1]);
   }

@@ -25,14 +25,17 @@ export class ClubSession {
     return response.body;
   }
 
-  /** Opens a path with the session already in storage, as after signing in. */
+  /**
+   * Opens a path signed in as `auth`, as after signing in. The session is written on the app's
+   * origin first (a small JSON page), so it replaces whoever was signed in before in this browser
+   * profile, and later reloads keep it as a real sign-in would.
+   */
   async open(page: Page, auth: AuthResponse, path: string): Promise<void> {
-    await page.addInitScript(
-      ([key, value]) => {
-        if (!localStorage.getItem(key)) localStorage.setItem(key, value);
-      },
-      [SESSION_KEY, JSON.stringify(auth)] as const,
-    );
+    await page.goto(`${this.baseUrl}/api/health`);
+    await page.evaluate(([key, value]) => localStorage.setItem(key, value), [
+      SESSION_KEY,
+      JSON.stringify(auth),
+    ] as const);
     await page.goto(this.baseUrl + path);
   }
 
