@@ -21,6 +21,9 @@ export interface PlanQuery {
   page?: number;
 }
 
+/** Paper sizes the printed card comes in (the plan-pdf-query and plan-share schemas). */
+export type CardPaper = 'a4' | 'letter';
+
 /** Body of PATCH /api/plans/:id: the edits made, or the plan as the browser's engine re-checked it. */
 export interface UpdatePlanBody {
   edit?: PlanEdit;
@@ -56,14 +59,21 @@ export class PlansApi {
   }
 
   /** The printable card as a PDF file. */
-  pdf(id: string, paper: 'a4' | 'letter' = 'a4'): Observable<Blob> {
+  pdf(id: string, paper: CardPaper = 'a4'): Observable<Blob> {
     return this.http.get(`/api/plans/${id}/pdf`, { params: { paper }, responseType: 'blob' });
   }
 
-  share(id: string, recipients: string[], message?: string): Observable<{ queued: number }> {
+  /** E-mails the card, printed on `paper`, to each recipient. */
+  share(
+    id: string,
+    recipients: string[],
+    message?: string,
+    paper?: CardPaper,
+  ): Observable<{ queued: number }> {
     return this.http.post<{ queued: number }>(`/api/plans/${id}/share`, {
       recipients,
       ...(message ? { message } : {}),
+      ...(paper ? { paper } : {}),
     });
   }
 }

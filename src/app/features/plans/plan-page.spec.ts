@@ -1,5 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
@@ -93,7 +93,87 @@ describe('PlanPage', () => {
     return { fixture, http, root: fixture.nativeElement as HTMLElement };
   }
 
-  afterEach(() => localStorage.clear());
+  afterEach(() => {
+    localStorage.clear();
+    vi.restoreAllMocks();
+  });
+
+  /** The toggle button of the paper group that reads `label`. */
+  const paperButton = (root: HTMLElement, label: string) =>
+    Array.from(root.querySelectorAll<HTMLButtonElement>('[data-testid="paper"] button')).find(
+      (b) => b.textContent?.trim() === label,
+    )!;
+
+  /** Clicks "Print card" and answers the PDF request; returns the paper it asked for. */
+  async function printCard(
+    fixture: Awaited<ReturnType<typeof setUp>>['fixture'],
+    http: HttpTestingController,
+  ) {
+    const root = fixture.nativeElement as HTMLElement;
+    root.querySelector<HTMLButtonElement>('[data-testid="print"]')!.click();
+    await settle(fixture);
+    const request = http.expectOne((r) => r.url === '/api/plans/plan-1/pdf');
+    request.flush(new Blob(['%PDF-1.7'], { type: 'application/pdf' }));
+    await settle(fixture);
+    return request.request.params.get('paper');
+  }
+
+  function stubDownload() {
+    // jsdom has no object URLs and no navigation; the page's own logic is what is tested.
+    Object.assign(URL, { createObjectURL: vi.fn(() => 'blob:card'), revokeObjectURL: vi.fn() });
+    return vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => undefined);
+  }
+
+  it('prints on A4 for a browser in an A4 country until the coach picks US Letter, then asks for Letter', async () => {
+    vi.spyOn(navigator, 'languages', 'get').mockReturnValue(['en-GB']);
+    const download = stubDownload();
+    const { fixture, http, root } = await setUp();
+    expect(paperButton(root, 'A4').getAttribute('aria-checked')).toBe('true');
+    expect(await printCard(fixture, http)).toBe('a4');
+
+    paperButton(root, 'US Letter').click();
+    await settle(fixture);
+    expect(paperButton(root, 'US Letter').getAttribute('aria-checked')).toBe('true');
+    expect(await printCard(fixture, http)).toBe('letter');
+    expect(download).toHaveBeenCalledTimes(2);
+    http.verify();
+  });
+
+  it('remembers Letter on the device: after a reload the next card is Letter again', async () => {
+    vi.spyOn(navigator, 'languages', 'get').mockReturnValue(['de-DE']);
+    stubDownload();
+    const first = await setUp();
+    paperButton(first.root, 'US Letter').click();
+    await settle(first.fixture);
+    expect(localStorage.getItem('conewise.paper')).toBe('letter');
+
+    // A reload: a fresh injector and page, only localStorage carried over.
+    TestBed.resetTestingModule();
+    const { fixture, http, root } = await setUp();
+    expect(paperButton(root, 'US Letter').getAttribute('aria-checked')).toBe('true');
+    expect(await printCard(fixture, http)).toBe('letter');
+  });
+
+  it('attaches the card to a shared e-mail on the paper the coach chose', async () => {
+    localStorage.setItem('conewise.paper', 'letter');
+    const { fixture, http, root } = await setUp();
+    root.querySelector<HTMLButtonElement>('[data-testid="share"]')!.click();
+    await settle(fixture);
+    expect(document.querySelector('cw-share-dialog')!.textContent).toContain('US Letter paper');
+    const recipients = document.querySelector<HTMLTextAreaElement>('[data-testid="share-recipients"]')!;
+    recipients.value = 'helper@example.org';
+    recipients.dispatchEvent(new Event('input'));
+    document.querySelector<HTMLButtonElement>('[data-testid="share-send"]')!.click();
+    // The dialog checks the body against the share schema first, which loads on demand.
+    let sent: TestRequest[] = [];
+    for (let i = 0; i < 50 && !sent.length; i++) {
+      await settle(fixture);
+      sent = http.match({ method: 'POST', url: '/api/plans/plan-1/share' });
+    }
+    expect(sent).toHaveLength(1);
+    const [send] = sent;
+    expect(send.request.body).toEqual({ recipients: ['helper@example.org'], paper: 'letter' });
+  });
 
   it('shows every phase with clock times counting to kick-off, and every player once in each', async () => {
     const { root } = await setUp();

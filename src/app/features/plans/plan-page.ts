@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
@@ -7,7 +8,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
 import { RouterLink } from '@angular/router';
 import type { Phase } from '../../../../shared/types';
-import { PlansApi } from '../../core/api/plans-api';
+import { CardPaper, PlansApi } from '../../core/api/plans-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ActivityOption, BrowserEngine } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
@@ -15,9 +16,10 @@ import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay } from '../../core/time/dates';
 import { PhaseTimeline } from './components/phase-timeline';
 import { PlanNotices } from './components/plan-notices';
-import { ShareDialog } from './components/share-dialog';
+import { ShareDialog, ShareDialogData } from './components/share-dialog';
 import { PlayerMoveRequest, StationCard } from './components/station-card';
 import { WhyPanel } from './components/why-panel';
+import { PAPER_LABELS, PaperPreference } from './services/paper-preference';
 import { PlanHandover } from './services/plan-handover';
 import { PlanSession } from './services/plan-session';
 
@@ -28,6 +30,7 @@ import { PlanSession } from './services/plan-session';
     RouterLink,
     CdkDropListGroup,
     MatButtonModule,
+    MatButtonToggleModule,
     MatIconModule,
     MatMenuModule,
     PhaseTimeline,
@@ -47,6 +50,7 @@ export class PlanPage {
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly auth = inject(AuthStore);
+  private readonly paperPreference = inject(PaperPreference);
 
   readonly planId = input.required<string>();
 
@@ -55,6 +59,8 @@ export class PlanPage {
   protected readonly canEdit = computed(() => this.auth.hasRole('lead', 'coach'));
   protected readonly activities = signal<ActivityOption[]>([]);
   protected readonly printing = signal(false);
+  protected readonly paper = this.paperPreference.paper;
+  protected readonly paperLabels = PAPER_LABELS;
 
   protected readonly totalPlayers = computed(() => this.session.plan()?.request.players.length ?? 0);
 
@@ -108,11 +114,15 @@ export class PlanPage {
     void this.session.edit({ type: 'regenerate', seed }, 'New groups and layout made');
   }
 
+  protected choosePaper(paper: CardPaper): void {
+    this.paperPreference.choose(paper);
+  }
+
   protected print(): void {
     const saved = this.session.saved();
     if (!saved) return;
     this.printing.set(true);
-    this.plansApi.pdf(saved.id).subscribe({
+    this.plansApi.pdf(saved.id, this.paper()).subscribe({
       next: (blob) => {
         this.printing.set(false);
         const url = URL.createObjectURL(blob);
@@ -133,7 +143,10 @@ export class PlanPage {
     const saved = this.session.saved();
     if (!saved) return;
     this.dialog
-      .open<ShareDialog, string, number>(ShareDialog, { data: saved.id, width: '480px' })
+      .open<ShareDialog, ShareDialogData, number>(ShareDialog, {
+        data: { planId: saved.id, paper: this.paper() },
+        width: '480px',
+      })
       .afterClosed()
       .subscribe((sent) => {
         if (sent) {

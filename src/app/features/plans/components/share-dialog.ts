@@ -10,10 +10,11 @@ import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { PlansApi } from '../../../core/api/plans-api';
+import { CardPaper, PlansApi } from '../../../core/api/plans-api';
 import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
+import { PAPER_LABELS } from '../services/paper-preference';
 
 const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
@@ -34,6 +35,12 @@ function recipientsValidator(control: AbstractControl): ValidationErrors | null 
   return null;
 }
 
+/** What the plan page hands the dialog: the plan, and the paper the coach prints on. */
+export interface ShareDialogData {
+  planId: string;
+  paper: CardPaper;
+}
+
 /** Sends the printed card by e-mail to the people the coach names. */
 @Component({
   selector: 'cw-share-dialog',
@@ -42,7 +49,10 @@ function recipientsValidator(control: AbstractControl): ValidationErrors | null 
     <h2 mat-dialog-title>Share the plan</h2>
     <form [formGroup]="form" (ngSubmit)="send()" novalidate>
       <mat-dialog-content>
-        <p>Each person gets an e-mail with the one-page card attached as a PDF.</p>
+        <p>
+          Each person gets an e-mail with the one-page card attached as a PDF on
+          {{ paperLabels[data.paper] }} paper.
+        </p>
         @if (error(); as text) {
           <p class="cw-form-error" role="alert">{{ text }}</p>
         }
@@ -73,7 +83,8 @@ function recipientsValidator(control: AbstractControl): ValidationErrors | null 
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ShareDialog {
-  private readonly planId = inject<string>(MAT_DIALOG_DATA);
+  protected readonly data = inject<ShareDialogData>(MAT_DIALOG_DATA);
+  protected readonly paperLabels = PAPER_LABELS;
   private readonly plansApi = inject(PlansApi);
   private readonly ref = inject<MatDialogRef<ShareDialog, number>>(MatDialogRef);
   protected readonly message = controlMessage;
@@ -94,7 +105,7 @@ export class ShareDialog {
     });
     if (!check.ok) return;
     this.sending.set(true);
-    this.plansApi.share(this.planId, recipients, message).subscribe({
+    this.plansApi.share(this.data.planId, recipients, message, this.data.paper).subscribe({
       next: () => this.ref.close(recipients.length),
       error: (error: unknown) => {
         this.sending.set(false);
