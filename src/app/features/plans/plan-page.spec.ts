@@ -1,8 +1,10 @@
+import { BreakpointObserver } from '@angular/cdk/layout';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
+import { of } from 'rxjs';
 import { generatePlan } from '../../../../engine/index';
 import type { Plan, PlanRequest, SessionPlanDto } from '../../../../shared/types';
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
@@ -62,7 +64,8 @@ describe('PlanPage', () => {
     plan = await generatePlan(REQUEST);
   });
 
-  async function setUp() {
+  /** `phone` answers the page's breakpoint query as a 390 px screen would. */
+  async function setUp({ phone = false } = {}) {
     TestBed.configureTestingModule({
       imports: [PlanPage],
       providers: [
@@ -70,6 +73,14 @@ describe('PlanPage', () => {
         provideHttpClientTesting(),
         provideRouter([]),
         provideNoopAnimations(),
+        ...(phone
+          ? [
+              {
+                provide: BreakpointObserver,
+                useValue: { observe: () => of({ matches: true, breakpoints: {} }) },
+              },
+            ]
+          : []),
       ],
     });
     TestBed.inject(AuthStore).signIn({
@@ -173,6 +184,33 @@ describe('PlanPage', () => {
     expect(sent).toHaveLength(1);
     const [send] = sent;
     expect(send.request.body).toEqual({ recipients: ['helper@example.org'], paper: 'letter' });
+  });
+
+  it("folds each station's details on a phone and keeps title, area and diagram in view", async () => {
+    const { root } = await setUp({ phone: true });
+    const stations = Array.from(root.querySelectorAll('cw-station-card'));
+    expect(stations.length).toBe(plan.phases.reduce((n, p) => n + p.stations.length, 0));
+    for (const card of stations) {
+      const details = card.querySelector<HTMLDetailsElement>('[data-testid="station-details"]')!;
+      expect(details.open).toBe(false);
+      expect(details.querySelector('summary')!.textContent).toContain('coaching points');
+      // What the coach scans first stays outside the fold.
+      expect(details.contains(card.querySelector('h4'))).toBe(false);
+      expect(details.contains(card.querySelector('cw-station-diagram'))).toBe(false);
+      expect(details.contains(card.querySelector('.cw-group'))).toBe(true);
+      const description = card.querySelector('.cw-description');
+      if (description) expect(details.contains(description)).toBe(true);
+    }
+  });
+
+  it("keeps every station's details open on a wide screen, with no fold to open", async () => {
+    const { root } = await setUp();
+    const details = Array.from(root.querySelectorAll<HTMLDetailsElement>('[data-testid="station-details"]'));
+    expect(details.length).toBeGreaterThan(0);
+    for (const d of details) {
+      expect(d.open).toBe(true);
+      expect(d.classList).toContain('cw-details-fixed');
+    }
   });
 
   it('shows every phase with clock times counting to kick-off, and every player once in each', async () => {

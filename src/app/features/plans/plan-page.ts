@@ -1,4 +1,6 @@
+import { BreakpointObserver } from '@angular/cdk/layout';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
@@ -7,6 +9,7 @@ import { MatMenuModule } from '@angular/material/menu';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
 import { RouterLink } from '@angular/router';
+import { map } from 'rxjs';
 import type { Phase } from '../../../../shared/types';
 import { CardPaper, PlansApi } from '../../core/api/plans-api';
 import { AuthStore } from '../../core/auth/auth-store';
@@ -61,6 +64,14 @@ export class PlanPage {
   protected readonly printing = signal(false);
   protected readonly paper = this.paperPreference.paper;
   protected readonly paperLabels = PAPER_LABELS;
+
+  /** Phones fold each station's details (the shell's own phone breakpoint); wider screens keep them open. */
+  protected readonly compact = toSignal(
+    inject(BreakpointObserver)
+      .observe('(max-width: 840px)')
+      .pipe(map((state) => state.matches)),
+    { initialValue: false },
+  );
 
   protected readonly totalPlayers = computed(() => this.session.plan()?.request.players.length ?? 0);
 

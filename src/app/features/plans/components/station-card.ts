@@ -1,5 +1,5 @@
 import { CdkDrag, CdkDragDrop, CdkDropList } from '@angular/cdk/drag-drop';
-import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
@@ -12,7 +12,11 @@ export interface PlayerMoveRequest {
   toStationId: string;
 }
 
-/** One station: diagram, group (drag players in and out), roles, coaching points and steps. */
+/**
+ * One station: diagram, group (drag players in and out), roles, coaching points and steps. On a
+ * phone the details below the diagram fold into a native disclosure, so the page shows every
+ * station's title, area and diagram first; wider screens and print show them open.
+ */
 @Component({
   selector: 'cw-station-card',
   imports: [CdkDropList, CdkDrag, MatButtonModule, MatIconModule, MatMenuModule, StationDiagram],
@@ -29,6 +33,8 @@ export class StationCard {
   readonly goalkeepers = input<ReadonlySet<string>>(new Set());
   readonly editable = input(true);
   readonly busy = input(false);
+  /** Whether the group, coaching points, steps and kit fold away until the coach opens them. */
+  readonly collapsible = input(false);
 
   readonly move = output<PlayerMoveRequest>();
   readonly stepArea = output<'larger' | 'smaller'>();
@@ -46,6 +52,14 @@ export class StationCard {
     if (roles.rotation?.length) lines.push({ label: 'Rotation', text: names(roles.rotation) });
     return lines;
   });
+
+  /** Whether the coach has opened the folded details; kept while the card stays on screen. */
+  protected readonly expanded = signal(false);
+
+  /** Follows the native disclosure, which opens and closes itself on tap, Enter and Space. */
+  protected toggled(event: Event): void {
+    if (this.collapsible()) this.expanded.set((event.target as HTMLDetailsElement).open);
+  }
 
   protected name(id: string): string {
     return this.names().get(id) ?? id;

@@ -1,0 +1,154 @@
+/**
+ * The plan page on a 390 × 844 phone: each station shows its title, area and diagram with the
+ * rest folded away, a tap or Enter opens a station's details, the page is far shorter than with
+ * everything open, print still shows everything, and the card comes on the paper the coach chose.
+ * The same page on a desktop keeps every station open.
+ */
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { AuthResponse, SessionPlanDto } from '../../shared/types';
+import {
+  DESKTOP,
+  launchBrowser,
+  PHONE,
+  screenshot,
+  seriousAccessibilityViolations,
+  type TestBrowser,
+} from './support/browser';
+import { ClubSession, U12_COACH } from './support/club-session';
+
+const pageHeight = (page: Page) => page.evaluate(() => document.documentElement.scrollHeight);
+
+/** Whether each station's details element is open, in page order. */
+const openStates = (page: Page) =>
+  page.getByTestId('station-details').evaluateAll((els) => els.map((el) => (el as HTMLDetailsElement).open));
+
+describe('the plan page on a phone', () => {
+  const baseUrl = inject('baseUrl');
+  const club = new ClubSession(baseUrl);
+  const workDir = mkdtempSync(join(tmpdir(), 'conewise-e2e-phone-'));
+  let browser: TestBrowser;
+  let coach: AuthResponse;
+  let saved: SessionPlanDto;
+  let page: Page;
+  let stationCount: number;
+
+  beforeAll(async () => {
+    browser = await launchBrowser(baseUrl);
+    coach = await club.login(U12_COACH);
+    const { team, players } = await club.team(coach, 'U12 Otters');
+    // The coach flow's evening: 13 of the squad, 12 cones and 2 goals.
+    saved = await club.plan(coach, team, players.slice(0, 13), {
+      equipment: { balls: 12, cones: 12, bibs: 12, goals: 2 },
+    });
+    stationCount = saved.plan.phases.reduce((n, phase) => n + phase.stations.length, 0);
+    page = await browser.newPage(PHONE);
+    page.on('pageerror', (error) => console.log(`[page error] ${error.message}`));
+    await club.open(page, coach, `/plans/${saved.id}`);
+    await page.getByTestId('phase').first().waitFor();
+    await page.evaluate(() => document.fonts.ready.then(() => undefined));
+  });
+  afterAll(async () => {
+    await browser?.close();
+    rmSync(workDir, { recursive: true, force: true });
+  });
+
+  it('shows every station folded: title, area and diagram in view, the details behind a summary', async () => {
+    expect(saved.plan.phases.length).toBeGreaterThan(1);
+    expect(await openStates(page)).toEqual(Array(stationCount).fill(false));
+    const first = page.locator('cw-station-card').first();
+    expect(await first.locator('h4').isVisible()).toBe(true);
+    expect(await first.locator('cw-station-diagram svg').isVisible()).toBe(true);
+    expect(await first.locator('summary').isVisible()).toBe(true);
+    expect(await first.locator('.cw-points').isVisible()).toBe(false);
+    expect(await first.locator('.cw-group').isVisible()).toBe(false);
+    await screenshot(page, 'plan-page-phone');
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  });
+
+  it('opens a station on a tap and another with Enter from the keyboard, and closes it again', async () => {
+    const cards = page.locator('cw-station-card');
+    await cards.nth(0).locator('summary').click();
+    await expect.poll(async () => (await openStates(page))[0]).toBe(true);
+    expect(await cards.nth(0).locator('.cw-points').isVisible()).toBe(true);
+    expect(await cards.nth(0).locator('[data-player]').first().isVisible()).toBe(true);
+
+    const second = cards.nth(1).locator('summary');
+    await second.focus();
+    await page.keyboard.press('Enter');
+    await expect.poll(async () => (await openStates(page))[1]).toBe(true);
+    // The summary tells a screen reader which station it opens.
+    const secondTitle = saved.plan.phases.flatMap((phase) => phase.stations)[1]!.title;
+    expect(await second.textContent()).toContain(secondTitle);
+    await page.keyboard.press('Enter');
+    await expect.poll(async () => (await openStates(page))[1]).toBe(false);
+    // Back to the top, so the full-page picture does not catch the sticky toolbar half-way down.
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await screenshot(page, 'plan-page-phone-open');
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  });
+
+  it('is far shorter folded than with every station open', async () => {
+    await page.reload();
+    await page.getByTestId('phase').first().waitFor();
+    await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    const folded = await pageHeight(page);
+    const summaries = page.locator('cw-station-card summary');
+    for (let i = 0; i < stationCount; i++) await summaries.nth(i).click();
+    await expect.poll(() => openStates(page)).toEqual(Array(stationCount).fill(true));
+    const unfolded = await pageHeight(page);
+    console.log(`[plan page at 390×844] scrollHeight folded ${folded} px, every station open ${unfolded} px`);
+    expect(folded).toBeLessThan(unfolded * 0.6);
+  });
+
+  it('prints every station open, also those folded on screen', async () => {
+    await page.reload();
+    await page.getByTestId('phase').first().waitFor();
+    const points = page.locator('cw-station-card .cw-points');
+    expect(await points.first().isVisible()).toBe(false);
+    await page.emulateMedia({ media: 'print' });
+    try {
+      const shown = await points.evaluateAll((els) => els.map((el) => el.getBoundingClientRect().height > 0));
+      expect(shown.length).toBeGreaterThan(0);
+      expect(shown.every(Boolean)).toBe(true);
+      expect(await page.locator('cw-station-card summary').first().isVisible()).toBe(false);
+    } finally {
+      await page.emulateMedia({ media: 'screen' });
+    }
+  });
+
+  it('downloads the card on US Letter after the coach picks it, and keeps Letter after a reload', async () => {
+    await page.getByRole('radio', { name: 'US Letter' }).click();
+    const asked = page.waitForRequest((r) => r.url().includes(`/api/plans/${saved.id}/pdf`));
+    const download = page.waitForEvent('download');
+    await page.getByTestId('print').click();
+    expect(new URL((await asked).url()).searchParams.get('paper')).toBe('letter');
+    const file = join(workDir, 'card-letter.pdf');
+    await (await download).saveAs(file);
+    const info = execFileSync('pdfinfo', [file], { encoding: 'utf8' });
+    // US Letter is 8.5 × 11 in: 612 × 792 PostScript points.
+    expect(info).toMatch(/Page size:\s+612 x 792 pts/);
+
+    await page.reload();
+    await page.getByTestId('phase').first().waitFor();
+    expect(await page.getByRole('radio', { name: 'US Letter' }).getAttribute('aria-checked')).toBe('true');
+    expect(await page.getByRole('radio', { name: 'A4' }).getAttribute('aria-checked')).toBe('false');
+  });
+
+  it('keeps every station open on a desktop, with no summary to open', async () => {
+    const desktop = await browser.newPage(DESKTOP);
+    await club.open(desktop, coach, `/plans/${saved.id}`);
+    await desktop.getByTestId('phase').first().waitFor();
+    expect(await openStates(desktop)).toEqual(Array(stationCount).fill(true));
+    expect(await desktop.locator('cw-station-card summary').first().isVisible()).toBe(false);
+    expect(await desktop.locator('cw-station-card .cw-points').first().isVisible()).toBe(true);
+    console.log(`[plan page at 1440×900] scrollHeight ${await pageHeight(desktop)} px`);
+    await screenshot(desktop, 'plan-page-desktop');
+    expect(await seriousAccessibilityViolations(desktop)).toEqual([]);
+    await desktop.close();
+  });
+});
