@@ -60,7 +60,9 @@ export function createApp(deps: AppDeps): Express {
     pinoHttp({
       logger,
       autoLogging: { ignore: (req) => req.url === '/api/health' },
-      // One short line per request: no headers, so tokens never reach the log.
+      // One short line per request: no headers, so tokens never reach the log. The serializers
+      // read the raw request and response (no standard serializer copying every header first).
+      wrapSerializers: false,
       serializers: {
         req: (req: { id: unknown; method: string; url: string }) => ({
           id: req.id,
