@@ -1,13 +1,19 @@
 import { createSecretKey } from 'node:crypto';
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import { Passport } from 'passport';
-import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
+import {
+  ExtractJwt,
+  Strategy as JwtStrategy,
+  type StrategyOptionsWithRequest,
+  type VerifyCallbackWithRequest,
+} from 'passport-jwt';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from '../config';
 import { preparedQuery } from '../db/prepared-query';
 import { Membership } from '../entities/membership';
 import type { AuthContext } from '../http/auth-context';
 import { HttpError, unauthorized } from '../http/problem';
+import { VerifiedTokens } from '../http/verified-tokens';
 
 /** Claims Conewise puts in its tokens. */
 export interface TokenClaims {
@@ -21,23 +27,40 @@ export const JWT_ALGORITHM = 'HS256' as const;
 /** Builds the requireAuth middleware: a valid bearer token of a current member, else 401. */
 export function createRequireAuth(dataSource: DataSource, config: AppConfig): RequestHandler {
   const passport = new Passport();
+  const tokens = new VerifiedTokens<Partial<TokenClaims> & { exp?: number }>();
+  const bearer = ExtractJwt.fromAuthHeaderAsBearerToken();
+  const member = (
+    claims: Partial<TokenClaims>,
+    done: (error: unknown, user?: AuthContext | false) => void,
+  ) => {
+    if (typeof claims.sub !== 'string' || typeof claims.club !== 'string') return done(null, false);
+    loadAuthContext(dataSource, claims.sub, claims.club).then(
+      (auth) => done(null, auth ?? false),
+      (error) => done(error),
+    );
+  };
   passport.use(
-    new JwtStrategy(
+    new RememberingJwtStrategy(
       {
-        jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
+        jwtFromRequest: bearer,
         // A KeyObject made once: given a string, jsonwebtoken first tries (and fails) to parse it
         // as a public key on every request, which costs milliseconds each time.
         secretOrKey: createSecretKey(Buffer.from(config.jwtSecret)) as unknown as string,
         algorithms: [JWT_ALGORITHM],
         ignoreExpiration: false,
+        passReqToCallback: true,
       },
-      (claims: Partial<TokenClaims>, done: (error: unknown, user?: AuthContext | false) => void) => {
-        if (typeof claims.sub !== 'string' || typeof claims.club !== 'string') return done(null, false);
-        loadAuthContext(dataSource, claims.sub, claims.club).then(
-          (auth) => done(null, auth ?? false),
-          (error) => done(error),
-        );
+      (req, claims: Partial<TokenClaims> & { exp?: number }, done) => {
+        // Only reached once jsonwebtoken has checked the signature, algorithm and expiry.
+        const token = bearer(req);
+        if (token) tokens.remember(token, claims);
+        member(claims, done);
       },
+      (req) => {
+        const token = bearer(req);
+        return token ? tokens.get(token) : undefined;
+      },
+      member,
     ),
   );
   // Built once: passport writes the member straight to req.auth (no login session, so no
@@ -86,4 +109,31 @@ export async function loadAuthContext(
   const row = rows[0];
   if (!row) return null;
   return { userId, clubId, clubName: row.clubName, role: row.role, name: row.userName, email: row.email };
+}
+
+type Done = (error: unknown, user?: AuthContext | false) => void;
+
+/**
+ * passport-jwt's strategy, except that a token it has already verified skips straight to the
+ * member lookup (see VerifiedTokens).
+ */
+class RememberingJwtStrategy extends JwtStrategy {
+  constructor(
+    options: StrategyOptionsWithRequest,
+    verify: VerifyCallbackWithRequest,
+    private readonly knownClaims: (req: Request) => Partial<TokenClaims> | undefined,
+    private readonly member: (claims: Partial<TokenClaims>, done: Done) => void,
+  ) {
+    super(options, verify);
+  }
+
+  override authenticate(req: Request, options?: object): void {
+    const claims = this.knownClaims(req);
+    if (!claims) return super.authenticate(req, options);
+    this.member(claims, (error, user) => {
+      if (error) return this.error(error as Error);
+      if (!user) return this.fail(401);
+      this.success(user);
+    });
+  }
 }

@@ -3,6 +3,7 @@ import jwt from 'jsonwebtoken';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { trustProxyFromEnv } from '../../server/config';
 import {
+  addMember,
   registerClub,
   startTestApp,
   TEST_PASSWORD,
@@ -88,6 +89,31 @@ describe('auth: register, login, me', () => {
       expect(response.headers.get('content-type')).toMatch(/problem\+json/);
       expect(response.headers.get('www-authenticate')).toMatch(/^Bearer/);
     }
+  });
+
+  it('a token already accepted is still checked: a changed signature, its expiry, a removed member', async () => {
+    const claims = { club: lead.user.clubId, sub: lead.user.id };
+    const soon = jwt.sign({ ...claims, exp: Math.floor(Date.now() / 1000) + 2 }, app.config.jwtSecret, {
+      algorithm: 'HS256',
+    });
+    expect((await app.api.get('/api/auth/me', { token: soon })).status).toBe(200);
+    expect((await app.api.get('/api/auth/me', { token: soon })).status).toBe(200);
+    const [header, payload, signature] = soon.split('.');
+    const flipped = `${signature!.slice(0, -2)}${signature!.endsWith('AA') ? 'BB' : 'AA'}`;
+    expect((await app.api.get('/api/auth/me', { token: `${header}.${payload}.${flipped}` })).status).toBe(
+      401,
+    );
+
+    // A second member signs in, is accepted, then leaves the club: the same token stops working.
+    const coach = await addMember(app, lead.user.clubId, 'coach');
+    expect((await app.api.get('/api/auth/me', { token: coach.token })).status).toBe(200);
+    await app.dataSource.query('DELETE FROM membership WHERE "userId" = $1', [coach.user.id]);
+    expect((await app.api.get('/api/auth/me', { token: coach.token })).status).toBe(401);
+
+    await new Promise((resolve) => setTimeout(resolve, 3_100));
+    const late = await app.api.get('/api/auth/me', { token: soon });
+    expect(late.status).toBe(401);
+    expect(late.headers.get('content-type')).toMatch(/problem\+json/);
   });
 
   it('a token for a user that no longer exists answers 401', async () => {
