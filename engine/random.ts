@@ -24,7 +24,10 @@ export function shuffle<T>(items: readonly T[], rng: Rng): T[] {
   const out = items.slice();
   for (let i = out.length - 1; i > 0; i--) {
     const j = Math.floor(rng() * (i + 1));
-    [out[i], out[j]] = [out[j], out[i]];
+    // A plain swap: the destructuring form builds a throwaway array per step.
+    const held = out[i];
+    out[i] = out[j];
+    out[j] = held;
   }
   return out;
 }

@@ -133,10 +133,11 @@ function activityFor(ctx: BuildContext, spec: PhaseSpec, kind: ActivityKind): Ac
 function fillGroups(plans: GroupPlan[], players: PresentPlayer[], ctx: BuildContext) {
   const groups = plans.map((plan) => ({ plan, players: [] as PresentPlayer[] }));
   const shuffled = shuffle(players, ctx.rng);
-  const keepers = shuffled.filter((p) => p.goalkeeper);
-  const rest = shuffled.filter((p) => !p.goalkeeper);
-  const pool: PresentPlayer[] = [];
-  for (const keeper of keepers) {
+  // Outfield players in shuffled order, then any keeper no finishing or game station took.
+  const queue: PresentPlayer[] = [];
+  for (const p of shuffled) if (!p.goalkeeper) queue.push(p);
+  for (const keeper of shuffled) {
+    if (!keeper.goalkeeper) continue;
     const target = groups.find(
       (g) =>
         GOALKEEPER_KINDS.includes(g.plan.kind) &&
@@ -144,11 +145,11 @@ function fillGroups(plans: GroupPlan[], players: PresentPlayer[], ctx: BuildCont
         !g.players.some((p) => p.goalkeeper),
     );
     if (target) target.players.push(keeper);
-    else pool.push(keeper);
+    else queue.push(keeper);
   }
-  const queue = [...rest, ...pool];
+  let next = 0;
   for (const g of groups) {
-    while (g.players.length < g.plan.players) g.players.push(queue.shift()!);
+    while (g.players.length < g.plan.players) g.players.push(queue[next++]);
   }
   return groups;
 }

@@ -17,38 +17,39 @@ export function packStations(
 ): Placement[] | null {
   // A little clearance always, so rounding positions to 0.1 m can never make stations touch.
   const buffer = Math.max(requestedBuffer, 0.5);
-  const order = areas
-    .map((a, i) => i)
-    .sort(
-      (i, j) =>
-        Math.max(areas[j].length, areas[j].width) - Math.max(areas[i].length, areas[i].width) || i - j,
-    );
+  const order = largestFirst(areas);
   const rows: { y: number; length: number; items: { index: number; x: number; area: Area }[] }[] = [];
   let row = { y: 0, length: 0, items: [] as { index: number; x: number; area: Area }[] };
   let x = 0;
   for (const index of order) {
-    const options = orientations(areas[index], rotatable[index]);
-    let placed = false;
-    for (const area of options) {
-      const startX = row.items.length ? x + buffer : 0;
-      if (startX + area.width <= space.width && row.y + area.length <= space.length) {
-        row.items.push({ index, x: startX, area });
-        row.length = Math.max(row.length, area.length);
-        x = startX + area.width;
-        placed = true;
-        break;
-      }
+    const given = areas[index];
+    // The turned option is tried second and only built when it is the one placed.
+    const turnable = rotatable[index] && given.width !== given.length;
+    const startX = row.items.length ? x + buffer : 0;
+    const area = fits(startX, row.y, given.width, given.length, space)
+      ? given
+      : turnable && fits(startX, row.y, given.length, given.width, space)
+        ? { width: given.length, length: given.width }
+        : null;
+    if (area) {
+      row.items.push({ index, x: startX, area });
+      row.length = Math.max(row.length, area.length);
+      x = startX + area.width;
+      continue;
     }
-    if (placed) continue;
     if (!row.items.length) return null;
     rows.push(row);
     row = { y: row.y + row.length + buffer, length: 0, items: [] };
     x = 0;
-    const area = options.find((a) => a.width <= space.width && row.y + a.length <= space.length);
-    if (!area) return null;
-    row.items.push({ index, x: 0, area });
-    row.length = area.length;
-    x = area.width;
+    const fresh = fits(0, row.y, given.width, given.length, space)
+      ? given
+      : turnable && fits(0, row.y, given.length, given.width, space)
+        ? { width: given.length, length: given.width }
+        : null;
+    if (!fresh) return null;
+    row.items.push({ index, x: 0, area: fresh });
+    row.length = fresh.length;
+    x = fresh.width;
   }
   if (row.items.length) rows.push(row);
 
@@ -71,9 +72,27 @@ export function packStations(
   return out;
 }
 
-function orientations(area: Area, rotatable: boolean): Area[] {
-  if (!rotatable || area.width === area.length) return [area];
-  return [area, { width: area.length, length: area.width }];
+function fits(x: number, y: number, width: number, length: number, space: Space): boolean {
+  return x + width <= space.width && y + length <= space.length;
+}
+
+/**
+ * Indices by longest side, largest first, ties in index order: an insertion sort, since a
+ * handful of stations is packed many times per plan and the built-in sort allocates each call.
+ */
+function largestFirst(areas: Area[]): number[] {
+  const order: number[] = new Array(areas.length);
+  for (let i = 0; i < areas.length; i++) {
+    const side = Math.max(areas[i].length, areas[i].width);
+    let k = i;
+    for (; k > 0; k--) {
+      const prev = areas[order[k - 1]];
+      if (Math.max(prev.length, prev.width) >= side) break;
+      order[k] = order[k - 1];
+    }
+    order[k] = i;
+  }
+  return order;
 }
 
 /** Rounds down to 0.1 m so a spread station never pokes past the space's edge. */

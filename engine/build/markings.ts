@@ -108,14 +108,14 @@ export function markPhase(
     conesLeft -= 2;
     cones[t.index].push(...gateCones(rects[t.index], t.direction, params.layout.gateWidthM));
   }
-  for (const tier of [essentials, corners, extras]) {
-    stations.forEach((station, i) => {
-      const points = tier(station, rects[i], byStation[i][0]?.direction ?? 'N');
-      if (points.length <= conesLeft) {
-        cones[i].push(...points);
-        conesLeft -= points.length;
-      }
-    });
+  for (const tier of TIERS) {
+    for (let i = 0; i < stations.length; i++) {
+      // Counted first: a tier the bag cannot cover is never built.
+      if (tier.count(stations[i].activityKind) > conesLeft) continue;
+      const points = tier.points(stations[i], rects[i], byStation[i][0]?.direction ?? 'N');
+      cones[i].push(...points);
+      conesLeft -= points.length;
+    }
   }
 
   stations.forEach((station, i) => {
@@ -208,6 +208,16 @@ function gateCones(r: Rect, d: Direction, gateWidth: number): Point[] {
   const half = Math.min(0.5, gateWidth / 2 / across);
   return [local(r, d, 0.5 - half, 1), local(r, d, 0.5 + half, 1)];
 }
+
+/** Cone tiers in the order the bag pays for them; each count matches its points' length. */
+const TIERS: readonly {
+  count: (kind: ActivityKind) => number;
+  points: (s: Station, r: Rect, d: Direction) => Point[];
+}[] = [
+  { count: (k) => (k === 'passing-finishing' ? 3 : k === 'pairs' ? 2 : 0), points: essentials },
+  { count: () => 4, points: corners },
+  { count: (k) => (k === 'ball-mastery' ? 4 : k === 'movement-prep' ? 2 : 0), points: extras },
+];
 
 function essentials(s: Station, r: Rect, d: Direction): Point[] {
   if (s.activityKind === 'passing-finishing') {

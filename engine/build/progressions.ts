@@ -52,9 +52,11 @@ export function progressionsFor(
   const kind = station.activityKind;
   const easierArea = steppedArea(params, kind, band, station.area, 'easier', space);
   const harderArea = steppedArea(params, kind, band, station.area, 'harder', space);
-  const easier = [CONDITIONS[kind].easier];
-  const harder = [CONDITIONS[kind].harder];
-  if (easierArea) easier.unshift(`Area ${describeArea(station.area)} → ${describeArea(easierArea)}`);
-  if (harderArea) harder.unshift(`Area ${describeArea(station.area)} → ${describeArea(harderArea)}`);
-  return { easier, harder };
+  const from = describeArea(station.area);
+  const { easier, harder } = CONDITIONS[kind];
+  // Built whole: unshift onto a one-item array reallocates its storage.
+  return {
+    easier: easierArea ? [`Area ${from} → ${describeArea(easierArea)}`, easier] : [easier],
+    harder: harderArea ? [`Area ${from} → ${describeArea(harderArea)}`, harder] : [harder],
+  };
 }

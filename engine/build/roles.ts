@@ -26,7 +26,6 @@ export function assignRoles(
   level: Level,
 ): StationRoles {
   const ids = players.map((p) => p.id);
-  const keepers = players.filter((p) => p.goalkeeper).map((p) => p.id);
   switch (kind) {
     case 'keep-ball': {
       const format = keepBallFormat(params, level, ids.length + coachJoins);
@@ -35,11 +34,11 @@ export function assignRoles(
       return { attackers, defenders, rotation: [...defenders, ...attackers] };
     }
     case 'passing-finishing': {
-      const keeper = keepers.slice(0, 1);
+      const keeper = keeperIdsOf(players, 1);
       return { goalkeeper: keeper, rotation: ids.filter((id) => !keeper.includes(id)) };
     }
     case 'small-sided-game': {
-      const keeperIds = keepers.slice(0, 2);
+      const keeperIds = keeperIdsOf(players, 2);
       const outfield = ids.filter((id) => !keeperIds.includes(id));
       const bibs: string[] = [];
       const others: string[] = [];
@@ -52,4 +51,14 @@ export function assignRoles(
     default:
       return {};
   }
+}
+
+/** The first `limit` goalkeepers' ids; only the kinds with a goal need them. */
+function keeperIdsOf(players: PresentPlayer[], limit: number): string[] {
+  const out: string[] = [];
+  for (const p of players) {
+    if (out.length === limit) break;
+    if (p.goalkeeper) out.push(p.id);
+  }
+  return out;
 }
