@@ -11,6 +11,8 @@ export interface CompiledRuleSet {
   engine: Engine;
   /** Document order of each rule id, for a stable trace. */
   order: Map<string, number>;
+  /** Every fact a condition reads (as its fact or as a fact-valued right side); no others are passed. */
+  factIds: string[];
 }
 
 /** The engine rule that carries all club rules; see `compileRuleSet`. */
@@ -49,7 +51,9 @@ export function compileRuleSet(document: RuleSetDocument): CompiledRuleSet {
     conditions: { any: document.rules.map((rule) => unwrapped(rule.conditions)) } as never,
     event: { type: CLUB_RULES },
   });
-  const compiled: CompiledRuleSet = { document, engine, order };
+  const factIds = new Set<string>();
+  for (const rule of document.rules) collectFacts(rule.conditions, factIds);
+  const compiled: CompiledRuleSet = { document, engine, order, factIds: [...factIds] };
   byVersion.set(key, compiled);
   byObject.set(document, compiled);
   return compiled;
@@ -68,6 +72,21 @@ function unwrapped(condition: RuleCondition): RuleCondition {
   }
   if ('not' in condition) return { not: unwrapped(condition.not) };
   return condition;
+}
+
+function collectFacts(condition: RuleCondition, into: Set<string>): void {
+  if ('all' in condition || 'any' in condition) {
+    for (const c of 'all' in condition ? condition.all : condition.any) collectFacts(c, into);
+  } else if ('not' in condition) {
+    collectFacts(condition.not, into);
+  } else {
+    into.add(condition.fact);
+    const { value } = condition;
+    // The engine reads an object value with its own `fact` key as a reference to that fact.
+    if (value !== null && typeof value === 'object' && Object.prototype.hasOwnProperty.call(value, 'fact')) {
+      into.add(String((value as { fact: unknown }).fact));
+    }
+  }
 }
 
 /** FNV-1a over the JSON text: two drafts sharing an id and version never share a cache entry. */

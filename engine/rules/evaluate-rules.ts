@@ -34,7 +34,7 @@ interface ClubRulesResult {
 }
 
 export async function evaluateRules(compiled: CompiledRuleSet, facts: Facts): Promise<RuleOutcome> {
-  const { results, failureResults } = await compiled.engine.run(constantFacts(facts));
+  const { results, failureResults } = await compiled.engine.run(constantFacts(facts, compiled.factIds));
   const doc = compiled.document;
   const run = (results[0] ?? failureResults[0]) as unknown as ClubRulesResult | undefined;
   const verdicts = run?.conditions.any ?? [];
@@ -62,10 +62,17 @@ export async function evaluateRules(compiled: CompiledRuleSet, facts: Facts): Pr
   return outcome;
 }
 
-/** The facts as uncached constants: a constant is read directly, so hashing a cache key would be waste. */
-function constantFacts(facts: Facts): Record<string, Fact> {
+const UNCACHED = { cache: false };
+
+/**
+ * The facts some condition reads, as uncached constants: a constant is read directly, so hashing
+ * a cache key would be waste, and a fact no condition reads would only be allocated.
+ */
+function constantFacts(facts: Facts, ids: string[]): Record<string, Fact> {
   const out: Record<string, Fact> = {};
-  for (const id of Object.keys(facts)) out[id] = new Fact(id, facts[id], { cache: false });
+  for (const id of ids) {
+    if (Object.prototype.hasOwnProperty.call(facts, id)) out[id] = new Fact(id, facts[id], UNCACHED);
+  }
   return out;
 }
 
