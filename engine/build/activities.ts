@@ -46,12 +46,20 @@ export function chooseActivity(
     (a) => a.kind === kind && activityBlocked(params, age, forbidden, a) === null,
   );
   if (!candidates.length) return null;
-  const score = (a: ActivityDefinition) => a.focus.filter((f) => focus.includes(f)).length;
-  const best = Math.max(...candidates.map(score));
+  // Each score counted once and without a filtered copy of the activity's focus list.
+  const scores = candidates.map((a) => focusScore(a, focus));
+  const best = Math.max(...scores);
   return pick(
-    candidates.filter((a) => score(a) === best),
+    candidates.filter((_, i) => scores[i] === best),
     rng,
   );
+}
+
+/** How many of the request's focuses the activity serves. */
+function focusScore(activity: ActivityDefinition, focus: Focus[]): number {
+  let n = 0;
+  for (const f of activity.focus) if (focus.includes(f)) n++;
+  return n;
 }
 
 export function activityById(params: RuleParameters, id: string): ActivityDefinition | undefined {
