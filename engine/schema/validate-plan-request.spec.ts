@@ -18,6 +18,16 @@ describe('validatePlanRequest', () => {
     expect(validatePlanRequest(valid)).toEqual({ ok: true, errors: [] });
   });
 
+  it('counts a name in characters, so a letter outside the BMP counts once', () => {
+    // 🦊 is one character but two UTF-16 units; the limit is 80 characters.
+    const request = (displayName: string) => ({ ...valid, players: [{ id: 'a', name: displayName }] });
+    expect(validatePlanRequest(request('Zo' + '🦊'.repeat(75) + ' K.'))).toMatchObject({ ok: true });
+    expect(validatePlanRequest(request('Zo' + '🦊'.repeat(76) + ' K.')).errors).toEqual([
+      { field: 'players/0/name', message: expect.stringContaining('80') },
+    ]);
+    expect(validatePlanRequest(request('\ud83e'.repeat(80))).ok).toBe(true);
+  });
+
   it('names players/3/id and equipment/cones', () => {
     const result = validatePlanRequest({
       ...valid,

@@ -13,7 +13,19 @@ const HEADER = `// @ts-nocheck
 
 /** Ajv's two runtime helpers, inlined so the module has no CommonJS require. */
 const HELPERS: Record<string, string> = {
-  'ajv/dist/runtime/ucs2length': '(s) => Array.from(s).length',
+  // Code points, as Array.from(s).length counts them, without building an array per string.
+  'ajv/dist/runtime/ucs2length': `function ucs2length(s) {
+  let length = 0;
+  for (let i = 0; i < s.length; i++) {
+    length++;
+    const code = s.charCodeAt(i);
+    if (code >= 0xd800 && code <= 0xdbff && i + 1 < s.length) {
+      const next = s.charCodeAt(i + 1);
+      if (next >= 0xdc00 && next <= 0xdfff) i++;
+    }
+  }
+  return length;
+}`,
   'ajv/dist/runtime/equal': `function deepEqual(a, b) {
   if (a === b) return true;
   if (a && b && typeof a === 'object' && typeof b === 'object') {
