@@ -79,21 +79,11 @@ function sameName(typed: string, name: string): boolean {
       </mat-dialog-actions>
     </form>
   `,
+  styleUrl: './confirm-dialog.scss',
   styles: `
-    .cw-consequences {
-      margin: 0 0 12px;
-      padding-left: 20px;
-      li + li {
-        margin-top: 4px;
-      }
-    }
     .cw-wide {
       width: 100%;
       margin-top: 8px;
-    }
-    .cw-danger {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

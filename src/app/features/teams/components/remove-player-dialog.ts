@@ -45,22 +45,12 @@ import { problemMessage } from '../../../core/http/problem-message';
       </button>
     </mat-dialog-actions>
   `,
+  styleUrl: './confirm-dialog.scss',
   styles: `
-    .cw-consequences {
-      margin: 0 0 12px;
-      padding-left: 20px;
-      li + li {
-        margin-top: 4px;
-      }
-    }
     .cw-tip {
       padding: 10px 12px;
       border-radius: 10px;
       background: var(--mat-sys-surface-container);
-    }
-    .cw-danger {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
