@@ -1,4 +1,3 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
 import { ChangeDetectionStrategy, Component, computed, inject, viewChild } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
@@ -12,6 +11,7 @@ import { NavigationEnd, Router, RouterLink, RouterLinkActive, RouterOutlet } fro
 import { filter, map } from 'rxjs';
 import { AuthStore } from './core/auth/auth-store';
 import { LoadingState } from './core/http/loading-state';
+import { mediaMatches, PHONE_WIDTH_QUERY } from './core/layout/media-query';
 import { NAV_ITEMS } from './core/layout/nav-items';
 
 /** The app shell: toolbar, navigation drawer, one progress bar, and the routed page. */
@@ -40,12 +40,7 @@ export class App {
   private readonly drawer = viewChild(MatSidenav);
 
   /** Phones get a drawer that slides over; wider screens keep the navigation open. */
-  protected readonly compact = toSignal(
-    inject(BreakpointObserver)
-      .observe('(max-width: 840px)')
-      .pipe(map((state) => state.matches)),
-    { initialValue: false },
-  );
+  protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);
 
   /** Pages that fill the screen on their own (pitch-side) or stand alone (sign-in). */
   private readonly url = toSignal(

@@ -1,4 +1,3 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormArray, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
@@ -13,7 +12,7 @@ import { MatListModule } from '@angular/material/list';
 import { MatSelectModule } from '@angular/material/select';
 import { MatStepperModule } from '@angular/material/stepper';
 import { Router, RouterLink } from '@angular/router';
-import { firstValueFrom, forkJoin, map } from 'rxjs';
+import { firstValueFrom, forkJoin } from 'rxjs';
 import {
   FOCUSES,
   PLAN_KINDS,
@@ -23,6 +22,7 @@ import {
   type TeamDto,
 } from '../../../../shared/types';
 import { PlansApi } from '../../core/api/plans-api';
+import { mediaMatches } from '../../core/layout/media-query';
 import { PlayersApi } from '../../core/api/players-api';
 import { TeamsApi } from '../../core/api/teams-api';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
@@ -84,12 +84,7 @@ export class PlanWizard {
   protected readonly focuses = FOCUSES;
   protected readonly focusLabels = FOCUS_LABELS;
   protected readonly message = controlMessage;
-  protected readonly narrow = toSignal(
-    inject(BreakpointObserver)
-      .observe('(max-width: 720px)')
-      .pipe(map((state) => state.matches)),
-    { initialValue: false },
-  );
+  protected readonly narrow = mediaMatches('(max-width: 720px)');
 
   protected readonly form = this.fb.group({
     who: this.fb.group({

@@ -1,6 +1,4 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
@@ -9,9 +7,9 @@ import { MatMenuModule } from '@angular/material/menu';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
 import { RouterLink } from '@angular/router';
-import { map } from 'rxjs';
 import type { Phase } from '../../../../shared/types';
 import { CardPaper, PlansApi } from '../../core/api/plans-api';
+import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ActivityOption, BrowserEngine } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
@@ -66,12 +64,7 @@ export class PlanPage {
   protected readonly paperLabels = PAPER_LABELS;
 
   /** Phones fold each station's details (the shell's own phone breakpoint); wider screens keep them open. */
-  protected readonly compact = toSignal(
-    inject(BreakpointObserver)
-      .observe('(max-width: 840px)')
-      .pipe(map((state) => state.matches)),
-    { initialValue: false },
-  );
+  protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);
 
   protected readonly totalPlayers = computed(() => this.session.plan()?.request.players.length ?? 0);
 
