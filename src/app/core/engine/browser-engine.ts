@@ -1,5 +1,5 @@
 import { Injectable } from '@angular/core';
-import type { ActivityKind, Notice, Plan } from '../../../../shared/types';
+import type { ActivityKind, Notice, Plan, RuleSetDocument } from '../../../../shared/types';
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 
 /** An activity the coach may swap a phase to. */
@@ -9,13 +9,16 @@ export interface ActivityOption {
   title: string;
 }
 
-/** What the plan page needs from the engine, running in the browser. */
+/**
+ * What the plan page needs from the engine, running in the browser. `rules` is the rule set the
+ * plan was made with (the club's); null means the engine's own, used until the club's arrive.
+ */
 export interface BrowserEngineApi {
-  applyEdit(plan: Plan, edit: PlanEdit): Promise<Plan>;
+  applyEdit(plan: Plan, edit: PlanEdit, rules: RuleSetDocument | null): Promise<Plan>;
   /** Problems the edited plan has (empty when it holds every rule). */
-  checkPlan(plan: Plan): Notice[];
+  checkPlan(plan: Plan, rules: RuleSetDocument | null): Notice[];
   /** Activities the rules allow for this plan's players, age, kit and space. */
-  activities(plan: Plan): ActivityOption[];
+  activities(plan: Plan, rules: RuleSetDocument | null): ActivityOption[];
 }
 
 /**

@@ -4,10 +4,10 @@ import type { BrowserEngineApi } from './browser-engine';
 
 export function createEngineAdapter(): BrowserEngineApi {
   return {
-    applyEdit: async (plan, edit) => await applyEdit(plan, edit),
-    checkPlan: (plan) => checkPlan(plan),
-    activities: (plan) =>
-      listActivities(undefined, plan)
+    applyEdit: async (plan, edit, rules) => await applyEdit(plan, edit, rules ?? undefined),
+    checkPlan: (plan, rules) => checkPlan(plan, rules ?? undefined),
+    activities: (plan, rules) =>
+      listActivities(rules ?? undefined, plan)
         .filter((a) => a.allowed)
         .map((a) => ({ id: a.id, kind: a.kind, title: a.title })),
   };

@@ -23,6 +23,7 @@ import type {
   SessionPlanDto,
   StationVerdict,
 } from '../../../../shared/types';
+import { PlanRulesApi } from '../../core/api/plan-rules-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ActionQueue } from './services/action-queue';
 import { newClientId } from './services/client-id';
@@ -56,6 +57,7 @@ export class PitchSidePage {
   readonly planId = input.required<string>();
 
   private readonly api = inject(PitchSideApi);
+  private readonly planRules = inject(PlanRulesApi);
   protected readonly queue = inject(ActionQueue);
   private readonly phaseSignal = new PhaseSignal();
   private readonly screenAwake = new ScreenAwake();
@@ -340,7 +342,7 @@ export class PitchSidePage {
           next: (players) => this.roster.set(players),
           error: () => undefined,
         });
-        this.api.ruleSet(session.ruleSetId).subscribe({
+        this.planRules.get(session.ruleSetId).subscribe({
           next: (ruleSet) => this.rules.set(ruleSet.body),
           error: () => undefined,
         });

@@ -5,8 +5,14 @@ import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
 import { of } from 'rxjs';
-import { generatePlan } from '../../../../engine/index';
-import type { Plan, PlanRequest, SessionPlanDto } from '../../../../shared/types';
+import { defaultRuleSet, generatePlan, listActivities } from '../../../../engine/index';
+import type {
+  Plan,
+  PlanRequest,
+  RuleSetDocument,
+  RuleSetDto,
+  SessionPlanDto,
+} from '../../../../shared/types';
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 import { AuthStore } from '../../core/auth/auth-store';
 import { PlanPage } from './plan-page';
@@ -48,6 +54,22 @@ function dto(plan: Plan, version = 1): SessionPlanDto {
   };
 }
 
+/** The rule set a plan names, as GET /api/rule-sets/:id answers it. */
+function ruleSetDto(body: RuleSetDocument): RuleSetDto {
+  return {
+    id: body.id,
+    name: body.name,
+    version: body.version,
+    status: 'published',
+    body,
+    authorId: 'u0',
+    authorName: 'Lead',
+    createdAt: '2026-11-01T09:00:00Z',
+    updatedAt: '2026-11-01T09:00:00Z',
+    revision: 1,
+  };
+}
+
 const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges(): void }) => {
   for (let i = 0; i < 30; i++) await new Promise((resolve) => setTimeout(resolve, 10));
   await fixture.whenStable();
@@ -65,7 +87,8 @@ describe('PlanPage', () => {
   });
 
   /** `phone` answers the page's breakpoint query as a 390 px screen would. */
-  async function setUp({ phone = false } = {}) {
+  /** `rules` is what the server answers for the plan's rule set (the club's published rules). */
+  async function setUp({ phone = false, rules = defaultRuleSet as RuleSetDocument } = {}) {
     TestBed.configureTestingModule({
       imports: [PlanPage],
       providers: [
@@ -99,6 +122,7 @@ describe('PlanPage', () => {
     const http = TestBed.inject(HttpTestingController);
     fixture.detectChanges();
     http.expectOne('/api/plans/plan-1').flush(dto(plan));
+    http.expectOne(`/api/rule-sets/${plan.ruleSet.id}`).flush(ruleSetDto(rules));
     await fixture.whenStable();
     fixture.detectChanges();
     return { fixture, http, root: fixture.nativeElement as HTMLElement };
@@ -306,6 +330,24 @@ describe('PlanPage', () => {
     const edit = (save.request.body as { edit: PlanEdit }).edit;
     expect(edit).toMatchObject({ type: 'swap-activity', phaseIndex: 0 });
     expect(edit).not.toMatchObject({ activityId: plan.phases[0]!.activityId });
+  });
+
+  it("fills the swap menu from the club's own rules the plan was made with, not the engine's", async () => {
+    // The club reworded one activity the plan could swap to; the menu must use the club's wording.
+    const offered = listActivities(defaultRuleSet, plan).find(
+      (a) => a.allowed && a.id !== plan.phases[0]!.activityId,
+    )!;
+    const clubRules = structuredClone(defaultRuleSet) as RuleSetDocument;
+    clubRules.parameters.activities.find((a) => a.id === offered.id)!.title = 'Harbour rondo, our way';
+    const { fixture, root } = await setUp({ rules: clubRules });
+    const swap = Array.from(
+      root.querySelectorAll('[data-testid="phase"]')[0]!.querySelectorAll<HTMLButtonElement>('button'),
+    ).find((b) => b.textContent?.includes('Swap activity'))!;
+    swap.click();
+    await settle(fixture);
+    const titles = Array.from(document.querySelectorAll('[mat-menu-item]')).map((b) => b.textContent?.trim());
+    expect(titles).toContain('Harbour rondo, our way');
+    expect(titles).not.toContain(offered.title);
   });
 
   it('puts the plan back and says so when the server refuses the edit', async () => {

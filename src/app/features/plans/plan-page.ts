@@ -11,7 +11,7 @@ import type { Phase } from '../../../../shared/types';
 import { CardPaper, PlansApi } from '../../core/api/plans-api';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 import { AuthStore } from '../../core/auth/auth-store';
-import { ActivityOption, BrowserEngine } from '../../core/engine/browser-engine';
+import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay } from '../../core/time/dates';
@@ -47,7 +47,6 @@ import { PlanSession } from './services/plan-session';
 export class PlanPage {
   protected readonly session = inject(PlanSession);
   private readonly plansApi = inject(PlansApi);
-  private readonly engine = inject(BrowserEngine);
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly auth = inject(AuthStore);
@@ -94,13 +93,11 @@ export class PlanPage {
 
   /** Fills the swap menu from the engine's activity list, leaving out what the club rules forbid. */
   protected async loadActivities(phase: Phase): Promise<void> {
-    const engine = await this.engine.load();
     const plan = this.session.plan();
     if (!plan) return;
     const forbidden = plan.forbiddenActivities ?? [];
     this.activities.set(
-      engine
-        .activities(plan)
+      (await this.session.activities())
         .filter((a) => a.id !== phase.activityId)
         .filter((a) => !forbidden.some((f) => f.activityId === a.id || f.kind === a.kind)),
     );

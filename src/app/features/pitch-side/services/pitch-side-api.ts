@@ -7,7 +7,6 @@ import type {
   PlayerDto,
   PlayerMove,
   PresentPlayer,
-  RuleSetDto,
   SessionPlanDto,
   StationVerdict,
 } from '../../../../../shared/types';
@@ -63,11 +62,6 @@ export class PitchSideApi {
     return this.http
       .get<PlayerDto[] | { items: PlayerDto[] }>(`/api/teams/${encodeURIComponent(teamId)}/players`)
       .pipe(map((body) => (Array.isArray(body) ? body : (body.items ?? []))));
-  }
-
-  /** GET /api/rule-sets/:id: the rules a plan was made with. */
-  ruleSet(ruleSetId: string): Observable<RuleSetDto> {
-    return this.http.get<RuleSetDto>(`/api/rule-sets/${encodeURIComponent(ruleSetId)}`);
   }
 
   /** POST /api/plans/:id/replan: re-plans the remaining phases with as few moves as possible. */

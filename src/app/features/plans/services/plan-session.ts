@@ -1,9 +1,10 @@
 import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { Notice, Plan, SessionPlanDto } from '../../../../../shared/types';
+import type { Notice, Plan, RuleSetDocument, SessionPlanDto } from '../../../../../shared/types';
 import type { PlanEdit } from '../../../../../shared/types/plan-edit';
 import { PlansApi } from '../../../core/api/plans-api';
-import { BrowserEngine } from '../../../core/engine/browser-engine';
+import { PlanRulesApi } from '../../../core/api/plan-rules-api';
+import { ActivityOption, BrowserEngine } from '../../../core/engine/browser-engine';
 import { problemMessage } from '../../../core/http/problem-message';
 
 /**
@@ -14,6 +15,9 @@ import { problemMessage } from '../../../core/http/problem-message';
 export class PlanSession {
   private readonly plansApi = inject(PlansApi);
   private readonly engine = inject(BrowserEngine);
+  private readonly planRules = inject(PlanRulesApi);
+  /** The rules of the open plan's rule set, fetched once per rule set id. */
+  private rules: { id: string; document: Promise<RuleSetDocument | null> } | null = null;
 
   readonly saved = signal<SessionPlanDto | null>(null);
   readonly plan = signal<Plan | null>(null);
@@ -46,6 +50,31 @@ export class PlanSession {
     this.saved.set(dto);
     this.plan.set(dto.plan);
     this.error.set(null);
+    void this.rulesOf(dto);
+  }
+
+  /**
+   * The club rules the plan was made with, so the browser's re-check agrees with the server's.
+   * Unreadable rules (offline, say) fall back to the engine's own; the server re-checks on save.
+   */
+  private rulesOf(dto: SessionPlanDto): Promise<RuleSetDocument | null> {
+    if (this.rules?.id !== dto.ruleSetId) {
+      const document = firstValueFrom(this.planRules.get(dto.ruleSetId)).then(
+        (ruleSet) => (ruleSet.body as RuleSetDocument | null) ?? null,
+        () => null,
+      );
+      this.rules = { id: dto.ruleSetId, document };
+    }
+    return this.rules.document;
+  }
+
+  /** Activities the plan's rules allow, for the swap menu. */
+  async activities(): Promise<ActivityOption[]> {
+    const saved = this.saved();
+    const plan = this.plan();
+    if (!saved || !plan) return [];
+    const [engine, rules] = await Promise.all([this.engine.load(), this.rulesOf(saved)]);
+    return engine.activities(plan, rules);
   }
 
   /** Applies an edit in the browser, shows it, then saves it; a refused save puts the plan back. */
@@ -56,9 +85,9 @@ export class PlanSession {
     this.busy.set(true);
     this.error.set(null);
     try {
-      const engine = await this.engine.load();
-      const next = await engine.applyEdit(before, edit);
-      const problems = engine.checkPlan(next);
+      const [engine, rules] = await Promise.all([this.engine.load(), this.rulesOf(saved)]);
+      const next = await engine.applyEdit(before, edit, rules);
+      const problems = engine.checkPlan(next, rules);
       this.plan.set(next);
       this.problems.set(problems);
       this.announcement.set(
