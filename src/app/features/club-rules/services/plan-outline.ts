@@ -20,7 +20,11 @@ export function outlinePlan(plan: Plan): PlanOutline {
   const groups = plan.phases.map((phase) => {
     const sizes = phase.stations.map((s) => {
       const defenders = s.roles.defenders?.length ?? 0;
-      return defenders ? `${s.playerIds.length - defenders}v${defenders}` : String(s.playerIds.length);
+      const players = defenders
+        ? `${s.playerIds.length - defenders}v${defenders}`
+        : String(s.playerIds.length);
+      // A coach who joins a group fills a place; say so, or a lone "1" reads like a mistake.
+      return s.coachJoins ? `${players} + coach` : players;
     });
     return `${phase.name}: ${sizes.join(' · ')}`;
   });

@@ -1,0 +1,29 @@
+import { generatePlan } from '../../../../../engine/index';
+import type { PlanRequest } from '../../../../../shared/types';
+import { outlinePlan } from './plan-outline';
+
+/** 8 players and 2 coaches: the engine's own allocation puts a coach into one passing group. */
+const REQUEST: PlanRequest = {
+  ageGroup: 'U10',
+  level: 'intermediate',
+  players: Array.from({ length: 8 }, (_, i) => ({ id: `p${i + 1}` })),
+  coaches: 2,
+  equipment: { balls: 8, cones: 40, bibs: 10, goals: 2 },
+  space: { width: 40, length: 30 },
+  minutes: 20,
+  kind: 'match-warm-up',
+  seed: 's1',
+};
+
+describe('outlinePlan', () => {
+  it('marks a group a coach joins with "+ coach" and leaves the other groups as bare counts', async () => {
+    const plan = await generatePlan(REQUEST);
+    const joined = plan.phases.flatMap((phase) => phase.stations.filter((s) => s.coachJoins));
+    expect(joined.length).toBeGreaterThan(0);
+    const lines = outlinePlan(plan).groups.split('\n');
+    plan.phases.forEach((phase, i) => {
+      const withCoach = phase.stations.filter((s) => s.coachJoins).length;
+      expect(lines[i]!.split('+ coach').length - 1).toBe(withCoach);
+    });
+  });
+});
