@@ -1,6 +1,6 @@
 /**
- * Validates and compiles a rule set once per (id, version, content) and caches it, so a plan
- * only pays for running the rules.
+ * Validates and compiles a rule set once per content and caches it, so a plan only pays for
+ * running the rules.
  */
 import { Engine } from 'json-rules-engine';
 import type { RuleCondition, RuleSetDocument } from '../../shared/types';
@@ -9,8 +9,6 @@ import { validateRuleSet, type PointerError } from '../schema/validate-rule-set'
 export interface CompiledRuleSet {
   document: RuleSetDocument;
   engine: Engine;
-  /** Document order of each rule id, for a stable trace. */
-  order: Map<string, number>;
   /** Every fact a condition reads (as its fact or as a fact-valued right side); no others are passed. */
   factIds: string[];
 }
@@ -25,15 +23,21 @@ export class RuleSetError extends Error {
   }
 }
 
+/** How many compiled rule sets are kept by content: every edited draft a lead tries is a new one. */
+export const MAX_COMPILED_RULE_SETS = 64;
+
 const byObject = new WeakMap<object, CompiledRuleSet>();
-const byVersion = new Map<string, CompiledRuleSet>();
+/** Keyed by the document's whole JSON text (no hash that two drafts could share), oldest first. */
+const byText = new Map<string, CompiledRuleSet>();
 
 export function compileRuleSet(document: RuleSetDocument): CompiledRuleSet {
   const hit = byObject.get(document);
   if (hit) return hit;
-  const key = `${document.id}@${document.version}#${fingerprint(document)}`;
-  const known = byVersion.get(key);
+  const text = JSON.stringify(document);
+  const known = byText.get(text);
   if (known) {
+    byText.delete(text);
+    byText.set(text, known);
     byObject.set(document, known);
     return known;
   }
@@ -41,8 +45,6 @@ export function compileRuleSet(document: RuleSetDocument): CompiledRuleSet {
   if (!validation.ok) throw new RuleSetError(validation.errors);
 
   const engine = new Engine([], { allowUndefinedFacts: true });
-  const order = new Map<string, number>();
-  document.rules.forEach((rule, i) => order.set(rule.id, i));
   // One engine rule whose `any` holds every club rule's conditions, in document order: the engine
   // evaluates them all (nothing is skipped within one priority) and reports each one's result, so
   // a run builds one rule result and emits one event instead of one per club rule.
@@ -53,8 +55,9 @@ export function compileRuleSet(document: RuleSetDocument): CompiledRuleSet {
   });
   const factIds = new Set<string>();
   for (const rule of document.rules) collectFacts(rule.conditions, factIds);
-  const compiled: CompiledRuleSet = { document, engine, order, factIds: [...factIds] };
-  byVersion.set(key, compiled);
+  const compiled: CompiledRuleSet = { document, engine, factIds: [...factIds] };
+  byText.set(text, compiled);
+  if (byText.size > MAX_COMPILED_RULE_SETS) byText.delete(byText.keys().next().value!);
   byObject.set(document, compiled);
   return compiled;
 }
@@ -87,15 +90,4 @@ function collectFacts(condition: RuleCondition, into: Set<string>): void {
       into.add(String((value as { fact: unknown }).fact));
     }
   }
-}
-
-/** FNV-1a over the JSON text: two drafts sharing an id and version never share a cache entry. */
-function fingerprint(document: RuleSetDocument): string {
-  const text = JSON.stringify(document);
-  let hash = 0x811c9dc5;
-  for (let i = 0; i < text.length; i++) {
-    hash ^= text.charCodeAt(i);
-    hash = Math.imul(hash, 0x01000193);
-  }
-  return (hash >>> 0).toString(36) + text.length.toString(36);
 }

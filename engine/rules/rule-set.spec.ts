@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import type { PlanRequest, RuleSetDocument } from '../../shared/types';
 import { defaultRuleSet, generatePlan, RuleSetError, validateRuleSet } from '../index';
-import { compileRuleSet } from './compile-rule-set';
+import { compileRuleSet, MAX_COMPILED_RULE_SETS } from './compile-rule-set';
 
 const clone = (): RuleSetDocument => structuredClone(defaultRuleSet);
 
@@ -97,6 +97,24 @@ describe('compileRuleSet', () => {
     const draft = clone();
     draft.parameters.layout.bufferM = 4;
     expect(compileRuleSet(draft)).not.toBe(a);
+  });
+
+  it('keeps a bounded number of compiled drafts, dropping the least recently used', () => {
+    // Each keystroke a lead tries is a new draft: the cache must not grow with them.
+    const draft = (bufferM: number): RuleSetDocument => {
+      const d = clone();
+      d.name = 'Cache bound';
+      d.parameters.layout.bufferM = bufferM;
+      return d;
+    };
+    const first = compileRuleSet(draft(0.5));
+    const kept = compileRuleSet(draft(0.75));
+    for (let i = 1; i < MAX_COMPILED_RULE_SETS; i++) {
+      compileRuleSet(draft(1 + i / 100));
+      if (i % 8 === 0) compileRuleSet(draft(0.75)); // used again, so it stays
+    }
+    expect(compileRuleSet(draft(0.75))).toBe(kept);
+    expect(compileRuleSet(draft(0.5))).not.toBe(first);
   });
 });
 
