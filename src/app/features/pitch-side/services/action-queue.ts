@@ -153,6 +153,11 @@ function isRetryable(error: unknown): boolean {
   return error.status === 0 || error.status === 408 || error.status === 429 || error.status >= 500;
 }
 
+/** Plans with actions on the device not yet confirmed by the server, read straight from storage. */
+export function plansWithQueuedActions(): Set<string> {
+  return new Set(readStored().map((action) => action.planId));
+}
+
 function readStored(): QueuedAction[] {
   try {
     const raw = globalThis.localStorage?.getItem(STORAGE_KEY);

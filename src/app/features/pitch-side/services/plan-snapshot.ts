@@ -1,5 +1,12 @@
 import type { PlayerDto, SessionPlanDto } from '../../../../../shared/types';
+import { plansWithQueuedActions } from './action-queue';
 import type { ClockState } from './phase-clock';
+import {
+  copiesToDrop,
+  SNAPSHOT_RETENTION,
+  type RetentionPolicy,
+  type StoredCopy,
+} from './snapshot-retention';
 
 /** What the pitch-side screen needs to reopen without a network. */
 export interface PitchSnapshot {
@@ -12,14 +19,33 @@ export interface PitchSnapshot {
   verdicts: Record<string, string>;
 }
 
-const key = (planId: string) => `conewise.pitch-side.plan.${planId}`;
+const PREFIX = 'conewise.pitch-side.plan.';
+/** Plan id → last save (epoch ms), kept apart so pruning never parses the copies themselves. */
+const SAVED_AT_KEY = 'conewise.pitch-side.saved-at';
+const key = (planId: string) => `${PREFIX}${planId}`;
 
-/** Keeps the last state of a running plan on the device (beside the service worker's cache). */
-export function saveSnapshot(planId: string, snapshot: PitchSnapshot): void {
+/** With the storage full, every copy that is neither being saved nor waiting to sync makes room. */
+const MAKE_ROOM: RetentionPolicy = { ...SNAPSHOT_RETENTION, maxCopies: 0 };
+
+/**
+ * Keeps the last state of a running plan on the device (beside the service worker's cache), and
+ * drops old copies of other plans so the device's storage does not grow with every session.
+ */
+export function saveSnapshot(planId: string, snapshot: PitchSnapshot, now = Date.now()): void {
   try {
-    localStorage.setItem(key(planId), JSON.stringify(snapshot));
+    const value = JSON.stringify(snapshot);
+    let savedAt = prune(planId, now, SNAPSHOT_RETENTION);
+    try {
+      localStorage.setItem(key(planId), value);
+    } catch (error) {
+      if (!isQuotaError(error)) throw error;
+      savedAt = prune(planId, now, MAKE_ROOM);
+      localStorage.setItem(key(planId), value);
+    }
+    savedAt[planId] = now;
+    localStorage.setItem(SAVED_AT_KEY, JSON.stringify(savedAt));
   } catch {
-    // Storage full: the plan still runs; only a reload offline would lose it.
+    // Storage still full or blocked: the plan still runs; only a reload offline would lose it.
   }
 }
 
@@ -31,4 +57,47 @@ export function readSnapshot(planId: string): PitchSnapshot | null {
   } catch {
     return null;
   }
+}
+
+/** Removes the copies the policy lets go; returns the saved times of those left. */
+function prune(planId: string, now: number, policy: RetentionPolicy): Record<string, number> {
+  const stamps = readSavedAt();
+  // A copy without a stamp predates the stamps: its age counts from now.
+  const copies: StoredCopy[] = storedPlanIds().map((id) => ({ planId: id, savedAt: stamps[id] ?? now }));
+  const drop = new Set(
+    copiesToDrop(copies, { now, queuedPlanIds: plansWithQueuedActions(), keepPlanId: planId }, policy),
+  );
+  for (const id of drop) localStorage.removeItem(key(id));
+  const kept: Record<string, number> = {};
+  for (const copy of copies) if (!drop.has(copy.planId)) kept[copy.planId] = copy.savedAt;
+  return kept;
+}
+
+function storedPlanIds(): string[] {
+  const ids: string[] = [];
+  for (let i = 0; i < localStorage.length; i++) {
+    const name = localStorage.key(i);
+    if (name?.startsWith(PREFIX)) ids.push(name.slice(PREFIX.length));
+  }
+  return ids;
+}
+
+function readSavedAt(): Record<string, number> {
+  try {
+    const parsed: unknown = JSON.parse(localStorage.getItem(SAVED_AT_KEY) ?? '{}');
+    return parsed && typeof parsed === 'object' && !Array.isArray(parsed)
+      ? (parsed as Record<string, number>)
+      : {};
+  } catch {
+    return {};
+  }
+}
+
+/** Browsers name a full storage differently (Firefox has its own name; old engines only set a code). */
+function isQuotaError(error: unknown): boolean {
+  if (typeof error !== 'object' || error === null) return false;
+  const { name, code } = error as { name?: unknown; code?: unknown };
+  return (
+    name === 'QuotaExceededError' || name === 'NS_ERROR_DOM_QUOTA_REACHED' || code === 22 || code === 1014
+  );
 }
