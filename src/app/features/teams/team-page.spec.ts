@@ -42,7 +42,7 @@ function button(root: ParentNode, name: string): HTMLButtonElement {
 vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
 
 describe('TeamPage', () => {
-  async function setUp(role: Role, userId = 'coach-1') {
+  async function setUp(role: Role, userId = 'coach-1', team: TeamDto = TEAM) {
     TestBed.configureTestingModule({
       imports: [TeamPage],
       providers: [
@@ -61,7 +61,7 @@ describe('TeamPage', () => {
     fixture.componentRef.setInput('teamId', 't1');
     const http = TestBed.inject(HttpTestingController);
     fixture.detectChanges();
-    http.expectOne('/api/teams/t1').flush(TEAM);
+    http.expectOne('/api/teams/t1').flush(team);
     http.expectOne((r) => r.url === '/api/teams/t1/players').flush(PLAYERS);
     http.expectOne('/api/teams/t1/kit').flush({ balls: 10, cones: 20, bibs: 8, goals: 2 });
     await settle(fixture);
@@ -132,19 +132,92 @@ describe('TeamPage', () => {
     expect(rowNames(root)).toContain('Tam J.');
   });
 
-  it('a coach of another team gets no remove buttons and no way to delete the team', async () => {
+  /** Every control on the page that changes the team, by what it does; each one the API may refuse. */
+  function changeControls(root: HTMLElement): string[] {
+    const names = Array.from(root.querySelectorAll('a, button')).map((el) =>
+      (el.getAttribute('aria-label') ?? el.textContent ?? '').trim(),
+    );
+    const has = (test: (name: string) => boolean) => names.some(test);
+    return [
+      has((n) => n.endsWith('Plan a warm-up')) && 'plan',
+      has((n) => n.endsWith('Add a player')) && 'add player',
+      has((n) => n === 'Edit Rui M.') && 'edit player',
+      has((n) => n === 'Remove Rui M. from the squad') && 'remove player',
+      root.querySelector('mat-checkbox, mat-slide-toggle') && 'player switches',
+      root.textContent!.includes('Import players from a CSV file') && 'import',
+      has((n) => n === 'Save kit bag') && 'save kit',
+      has((n) => n === 'Save team details') && 'save details',
+      root.querySelector('cw-kit-bag-form input, cw-team-defaults-form input') && 'form fields',
+      root.querySelector('[data-testid=delete-team]') && 'delete team',
+    ].filter((found): found is string => typeof found === 'string');
+  }
+
+  const ALL_CONTROLS = [
+    'plan',
+    'add player',
+    'edit player',
+    'remove player',
+    'player switches',
+    'import',
+    'save kit',
+    'save details',
+    'form fields',
+    'delete team',
+  ];
+  const readOnlyNote = (root: HTMLElement) =>
+    root.querySelector('[data-testid=team-read-only] span')?.textContent?.trim() ?? null;
+
+  it('the lead gets every control, delete included, and no read-only note', async () => {
+    const { root } = await setUp('lead', 'lead-1');
+    expect(changeControls(root)).toEqual(ALL_CONTROLS);
+    expect(readOnlyNote(root)).toBeNull();
+  });
+
+  it('a coach attached to the team gets every control, delete included, as the API allows', async () => {
+    const { root } = await setUp('coach', 'coach-1');
+    expect(changeControls(root)).toEqual(ALL_CONTROLS);
+    expect(readOnlyNote(root)).toBeNull();
+  });
+
+  it('a coach of another team sees the team read-only: no changing it, no deleting it', async () => {
     const { root } = await setUp('coach', 'coach-2');
-    expect(root.querySelector('.cw-remove')).toBeNull();
-    expect(root.textContent).not.toContain('Delete this team');
+    expect(changeControls(root)).toEqual([]);
+    expect(readOnlyNote(root)).toBe('Only the club lead or this team’s coaches can change it.');
+    // The same facts, as text: the squad's switches as Yes/No, kit and details under their labels.
+    const rows = Array.from(root.querySelectorAll('tbody tr')).map((tr) =>
+      Array.from(tr.querySelectorAll('td')).map((td) => td.textContent!.trim()),
+    );
+    expect(rows).toEqual([
+      ['Ola K.', 'Yes', 'Yes'],
+      ['Rui M.', 'No', 'Yes'],
+      ['Tam J.', 'No', 'No'],
+    ]);
+    const facts = Array.from(root.querySelectorAll('.cw-facts div')).map(
+      (d) => `${d.querySelector('dt')!.textContent!.trim()} ${d.querySelector('dd')!.textContent!.trim()}`,
+    );
+    expect(facts).toEqual([
+      'Balls 10',
+      'Cones 20',
+      'Bibs 8',
+      'Small or pop-up goals 2',
+      'Team name U9 Herons',
+      'Age group U9',
+      'Level Beginner',
+      'Usual space 30 × 40 m',
+    ]);
   });
 
-  it('a coach of the team cannot delete it; that is left to the lead', async () => {
-    const { root } = await setUp('coach');
-    expect(root.textContent).not.toContain('Delete this team');
+  it('an assistant attached to the team sees it read-only too: helping is not changing', async () => {
+    const { root } = await setUp('assistant', 'helper-1', { ...TEAM, coachIds: ['coach-1', 'helper-1'] });
+    expect(changeControls(root)).toEqual([]);
+    expect(readOnlyNote(root)).toBe('Only the club lead or this team’s coaches can change it.');
+    // Reading stays open: past plans and insight.
+    expect(root.querySelector('a[href="/teams/t1/plans"]')).not.toBeNull();
+    expect(root.querySelector('a[href="/teams/t1/insight"]')).not.toBeNull();
   });
 
-  async function openDeleteTeam() {
-    const context = await setUp('lead', 'lead-1');
+  async function openDeleteTeam(role: Role = 'lead', userId = 'lead-1') {
+    const context = await setUp(role, userId);
     (context.root.querySelector('[data-testid=delete-team]') as HTMLButtonElement).click();
     await settle(context.fixture);
     const input = dialog()!.querySelector('[data-testid=delete-team-name]') as HTMLInputElement;
@@ -196,5 +269,16 @@ describe('TeamPage', () => {
     expect(dialog()!.querySelector('[role=alert]')?.textContent).toContain('Nothing you saved was lost');
     expect(input.value).toBe('U9 Herons');
     expect(navigate).not.toHaveBeenCalled();
+  });
+
+  it('a coach attached to the team deletes it the same way', async () => {
+    const { http, navigate, type, confirm } = await openDeleteTeam('coach', 'coach-1');
+    await type('U9 Herons');
+    await confirm();
+    const request = http.expectOne('/api/teams/t1');
+    expect(request.request.method).toBe('DELETE');
+    request.flush(null, { status: 204, statusText: 'No Content' });
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    expect(navigate).toHaveBeenCalledWith(['/teams']);
   });
 });

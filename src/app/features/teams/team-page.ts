@@ -29,6 +29,7 @@ import { PlayerDialog } from './components/player-dialog';
 import { PlayersTable } from './components/players-table';
 import { RemovePlayerDialog } from './components/remove-player-dialog';
 import { TeamDefaultsForm } from './components/team-defaults-form';
+import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
 
 /** One team: its players, CSV import, kit bag and defaults, with the way into planning and out. */
 @Component({
@@ -64,17 +65,10 @@ export class TeamPage {
   protected readonly kit = signal<KitBagDto | null>(null);
   protected readonly error = signal<string | null>(null);
   protected readonly levelLabels = LEVEL_LABELS;
-  protected readonly canEdit = computed(() => this.auth.hasRole('lead', 'coach'));
   protected readonly activeCount = computed(() => this.players().filter((p) => p.active).length);
-  /** The server lets the lead and the team's own coaches take players off the squad. */
-  protected readonly canRemovePlayers = computed(() => {
-    const user = this.auth.user();
-    if (!user) return false;
-    if (user.role === 'lead') return true;
-    return user.role === 'coach' && (this.team()?.coachIds.includes(user.id) ?? false);
-  });
-  /** Deleting a whole team is the lead's call. */
-  protected readonly canDeleteTeam = computed(() => this.auth.hasRole('lead'));
+  /** What the signed-in member may do here; the API refuses everything else with 403. */
+  protected readonly can = computed(() => teamPermissions(this.auth.user(), this.team()));
+  protected readonly readOnlyNote = READ_ONLY_NOTE;
 
   constructor() {
     effect(() => this.load(this.teamId()));

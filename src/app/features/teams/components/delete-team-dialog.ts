@@ -20,14 +20,15 @@ export interface DeleteTeamData {
   playerCount: number;
 }
 
-/** Spaces and letter case do not count when the lead types the name back. */
+/** Spaces and letter case do not count when the name is typed back. */
 function sameName(typed: string, name: string): boolean {
   const plain = (text: string) => text.trim().replace(/\s+/g, ' ').toLocaleLowerCase();
   return plain(typed) === plain(name);
 }
 
 /**
- * Deletes a team once the lead has typed its name, saying first everything that goes with it.
+ * Deletes a team once the lead or one of its coaches has typed its name, saying first everything
+ * that goes with it.
  * Closes with `true` once the server has deleted it; a refusal stays in the dialog, typed name kept.
  */
 @Component({

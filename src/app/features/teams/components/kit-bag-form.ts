@@ -9,30 +9,41 @@ import { checkAgainstSchema } from '../../../core/forms/schema-form';
 
 export const KIT_LABELS = { balls: 'Balls', cones: 'Cones', bibs: 'Bibs', goals: 'Small or pop-up goals' };
 
-/** What is in the team's kit bag; the wizard starts from it. */
+/** What is in the team's kit bag, as a form or, for those who may not change it, as plain figures. */
 @Component({
   selector: 'cw-kit-bag-form',
   imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatButtonModule],
   template: `
-    <form [formGroup]="form" (ngSubmit)="submit()" novalidate class="cw-kit">
-      @for (key of keys; track key) {
-        <mat-form-field appearance="outline">
-          <mat-label>{{ labels[key] }}</mat-label>
-          <input matInput type="number" inputmode="numeric" min="0" [formControlName]="key" />
-          <mat-error>{{ message(form.controls[key], labels[key]) }}</mat-error>
-        </mat-form-field>
-      }
-      @if (editable()) {
+    @if (editable()) {
+      <form [formGroup]="form" (ngSubmit)="submit()" novalidate class="cw-kit">
+        @for (key of keys; track key) {
+          <mat-form-field appearance="outline">
+            <mat-label>{{ labels[key] }}</mat-label>
+            <input matInput type="number" inputmode="numeric" min="0" [formControlName]="key" />
+            <mat-error>{{ message(form.controls[key], labels[key]) }}</mat-error>
+          </mat-form-field>
+        }
         <div><button mat-flat-button type="submit">Save kit bag</button></div>
-      }
-    </form>
+      </form>
+    } @else {
+      <dl class="cw-facts">
+        @for (key of keys; track key) {
+          <div>
+            <dt>{{ labels[key] }}</dt>
+            <dd>{{ kit()?.[key] ?? '…' }}</dd>
+          </div>
+        }
+      </dl>
+    }
   `,
+  styleUrl: './read-only-facts.scss',
   styles:
     '.cw-kit { display: grid; gap: 0 12px; grid-template-columns: repeat(auto-fit, minmax(140px, 1fr)); }',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class KitBagForm {
   readonly kit = input<KitBagDto | null>(null);
+  /** False shows the figures without a form: the member may not change this team. */
   readonly editable = input(true);
   readonly save = output<KitBagDto>();
 
@@ -51,8 +62,6 @@ export class KitBagForm {
     effect(() => {
       const kit = this.kit();
       if (kit) this.form.reset(kit);
-      if (this.editable()) this.form.enable();
-      else this.form.disable();
     });
   }
 

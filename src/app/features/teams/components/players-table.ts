@@ -2,6 +2,7 @@ import {
   AfterViewInit,
   ChangeDetectionStrategy,
   Component,
+  computed,
   effect,
   input,
   output,
@@ -39,6 +40,7 @@ import type { PlayerDto } from '../../../../../shared/types';
 })
 export class PlayersTable implements AfterViewInit {
   readonly players = input.required<PlayerDto[]>();
+  /** False shows goalkeeper and active as Yes/No text and drops the edit buttons. */
   readonly editable = input(true);
   /** Whether each row offers to remove the player (the lead and the team's own coaches). */
   readonly removable = input(false);
@@ -48,7 +50,12 @@ export class PlayersTable implements AfterViewInit {
   readonly changeFlag = output<{ player: PlayerDto; goalkeeper?: boolean; active?: boolean }>();
 
   private readonly sort = viewChild(MatSort);
-  protected readonly columns = ['displayName', 'goalkeeper', 'active', 'actions'];
+  /** The actions column only when a row has a button in it. */
+  protected readonly columns = computed(() =>
+    this.editable() || this.removable()
+      ? ['displayName', 'goalkeeper', 'active', 'actions']
+      : ['displayName', 'goalkeeper', 'active'],
+  );
   protected readonly dataSource = new MatTableDataSource<PlayerDto>([]);
   protected readonly filterText = signal('');
 

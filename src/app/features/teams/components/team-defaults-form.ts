@@ -16,11 +16,12 @@ const LABELS = {
   'usualSpace.length': 'Usual space length',
 };
 
-/** The team's name, age group, level and the space it usually trains on. */
+/** The team's name, age group, level and the space it usually trains on: a form, or plain values. */
 @Component({
   selector: 'cw-team-defaults-form',
   imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule],
   templateUrl: './team-defaults-form.html',
+  styleUrl: './read-only-facts.scss',
   styles: `
     .cw-defaults {
       display: grid;
@@ -37,6 +38,7 @@ const LABELS = {
 })
 export class TeamDefaultsForm {
   readonly team = input<TeamDto | null>(null);
+  /** False shows the values without a form: the member may not change this team. */
   readonly editable = input(true);
   /** Words on the submit button: "Save team details" on the team page, "Create team" when adding one. */
   readonly submitLabel = input('Save team details');
@@ -65,8 +67,6 @@ export class TeamDefaultsForm {
     effect(() => {
       const team = this.team();
       if (team) this.form.reset({ ...team, usualSpace: { ...team.usualSpace } });
-      if (this.editable()) this.form.enable();
-      else this.form.disable();
     });
     effect(() => applyFieldErrors(this.form, this.serverErrors()));
   }

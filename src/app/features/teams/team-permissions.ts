@@ -1,0 +1,29 @@
+import type { TeamDto, UserDto } from '../../../../shared/types';
+
+/** What the signed-in member may do to one team, as the API decides it. */
+export interface TeamPermissions {
+  /** Change the team: its details, kit bag and squad (add, edit, import, remove), and plan for it. */
+  readonly change: boolean;
+  /** Delete the team with its players, plans and kit bag. */
+  readonly delete: boolean;
+}
+
+/** Shown instead of the editing controls to everyone else. */
+export const READ_ONLY_NOTE = 'Only the club lead or this team’s coaches can change it.';
+
+const NONE: TeamPermissions = { change: false, delete: false };
+
+/**
+ * Mirrors the server's one rule for every route that changes a team (ClubScope.teamToManage):
+ * the lead may change every team, a coach the teams they are attached to, an assistant none,
+ * attached or not (the team's `coachIds` list assistants too). Deleting follows the same rule.
+ * Nothing is allowed before both the member and the team are known.
+ */
+export function teamPermissions(
+  user: Pick<UserDto, 'id' | 'role'> | null,
+  team: Pick<TeamDto, 'coachIds'> | null,
+): TeamPermissions {
+  if (!user || !team) return NONE;
+  const manage = user.role === 'lead' || (user.role === 'coach' && team.coachIds.includes(user.id));
+  return { change: manage, delete: manage };
+}
