@@ -2,7 +2,7 @@
 import type { ActivityKind, Plan, PlanRequest, RuleSetDocument } from '../shared/types';
 import { kindBlocked } from './build/activities';
 import type { AllocationRules } from './build/allocation';
-import { areaTable, baseWidth, describeArea } from './build/areas';
+import { areaTable, baseWidth, describeArea, type StartWidths } from './build/areas';
 import { buildPhase } from './build/build-phase';
 import type { BuildContext } from './build/context';
 import { steppedWidth } from './build/areas';
@@ -81,10 +81,11 @@ export async function generatePlan(
 
 /**
  * Where last time's feedback says to start: from the area that ran (or the table's), one step
- * harder or easier as the club's feedback rules decide.
+ * harder or easier as the club's feedback rules decide, for the group that gave the verdict;
+ * each new group scales it to its own size (`widthForGroup`).
  */
-function feedbackWidths(ctx: BuildContext): Partial<Record<ActivityKind, number>> {
-  const out: Partial<Record<ActivityKind, number>> = {};
+function feedbackWidths(ctx: BuildContext): StartWidths {
+  const out: StartWidths = {};
   for (const [kind, step] of Object.entries(ctx.outcome.steps) as [
     ActivityKind,
     NonNullable<BuildContext['outcome']['steps'][ActivityKind]>,
@@ -96,15 +97,18 @@ function feedbackWidths(ctx: BuildContext): Partial<Record<ActivityKind, number>
     const reported =
       fb?.areaWidth !== undefined ? Math.min(fb.areaWidth, fb.areaLength ?? fb.areaWidth) : undefined;
     const from = reported ?? Math.round(baseWidth(ctx.params, kind, ctx.band, ctx.request.level, typical));
+    // The group the width was for: the one that ran it, else the table's typical group.
+    const forGroup = reported !== undefined ? fb?.groupSize : typical;
     const harderSign = ctx.params.kinds[kind].harderWhenArea === 'smaller' ? -1 : 1;
     const steps = step.direction === 'keep' ? 0 : step.direction === 'harder' ? harderSign : -harderSign;
     const width = steppedWidth(table, from, steps);
-    out[kind] = width;
+    out[kind] = forGroup ? { width, forGroup } : { width };
+    const group = forGroup ? ` for a group of ${forGroup}, scaled to each group's size` : '';
     ctx.trace.push({
       ruleId: 'engine.feedback-start',
       description: `Start ${kind} from recent feedback (${step.ruleId})`,
       fired: true,
-      effect: `${kind} area starts at ${describeArea({ width, length: width })} wide (last ${from} m): ${step.reason}`,
+      effect: `${kind} area starts at ${describeArea({ width, length: width })} wide${group} (last ${from} m): ${step.reason}`,
     });
   }
   return out;

@@ -42,3 +42,21 @@ export function steppedWidth(table: AreaSize, width: number, steps: number): num
 export function describeArea(a: Area): string {
   return a.width === a.length ? `${a.width} m` : `${a.width} × ${a.length} m`;
 }
+
+/** Where recent feedback says an activity's area should start: a width, and the group it was for. */
+export interface StartWidth {
+  width: number;
+  /** Players (and any coach) the width was for; another group size scales it, as the table does. */
+  forGroup?: number;
+}
+
+/** Start widths by activity kind, from the team's recent feedback. */
+export type StartWidths = Partial<Record<ActivityKind, StartWidth>>;
+
+/**
+ * The start width for a group of `total`: area in proportion to players, the same square-root
+ * law as `baseWidth`, so a square that was right for four stays as roomy for six.
+ */
+export function widthForGroup(start: StartWidth, total: number): number {
+  return start.forGroup ? start.width * Math.sqrt(Math.max(1, total) / start.forGroup) : start.width;
+}

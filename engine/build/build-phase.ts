@@ -10,7 +10,7 @@ import type {
 import { shuffle } from '../random';
 import { chooseActivity } from './activities';
 import { allocatePhase, withStationCap, type AllocationRules, type GroupPlan } from './allocation';
-import { areaForWidth, areaTable, baseWidth } from './areas';
+import { areaForWidth, areaTable, baseWidth, widthForGroup, type StartWidths } from './areas';
 import { addWarning, type BuildContext } from './context';
 import { equipPhase } from './kit';
 import { packStations } from './layout';
@@ -27,7 +27,7 @@ export function buildPhase(
   rules: AllocationRules,
   spec: PhaseSpec,
   phaseIndex: number,
-  startWidths: Partial<Record<ActivityKind, number>>,
+  startWidths: StartWidths,
 ): Phase {
   const { request } = ctx;
   let cap = Number.POSITIVE_INFINITY;
@@ -160,12 +160,13 @@ export function makeStation(
   activity: ActivityDefinition,
   plan: GroupPlan,
   players: PresentPlayer[],
-  startWidths: Partial<Record<ActivityKind, number>>,
+  startWidths: StartWidths,
 ): Station {
   const { params, request, band } = ctx;
   const kind = activity.kind;
   const total = players.length + plan.coachJoins;
-  const width = startWidths[kind] ?? baseWidth(params, kind, band, request.level, total);
+  const start = startWidths[kind];
+  const width = start ? widthForGroup(start, total) : baseWidth(params, kind, band, request.level, total);
   const area = areaForWidth(areaTable(params, kind, band), width, request.space);
   return {
     id,

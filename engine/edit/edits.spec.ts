@@ -176,6 +176,26 @@ describe('recent feedback', () => {
     });
     expect(plan.phases[keepBallPhase(plan)].stations.every((s) => s.area.width === 12)).toBe(true);
   });
+
+  it('sizes the area to the new group: right at 10 m for 4 is about 11 m for 5 and 12 m for 6', async () => {
+    // Area in proportion to players (the table's own square-root law): 10 × √(5/4) = 11.2 → 11 m,
+    // 10 × √(6/4) = 12.2 → 12 m. The brief: "Size the area to the group". 11 players: 6 and 5.
+    const plan = await generatePlan({
+      ...base,
+      recentFeedback: [
+        { activityKind: 'keep-ball', verdict: 'right', areaWidth: 10, areaLength: 10, groupSize: 4 },
+      ],
+    });
+    const kb = plan.phases[keepBallPhase(plan)].stations;
+    expect(kb.length).toBeGreaterThan(0);
+    for (const s of kb) {
+      const group = s.playerIds.length + s.coachJoins;
+      expect(s.area.width).toBe({ 5: 11, 6: 12 }[group]);
+    }
+    expect(plan.trace.find((t) => t.ruleId === 'engine.feedback-start')?.effect).toContain(
+      'for a group of 4',
+    );
+  });
 });
 
 describe('listActivities', () => {

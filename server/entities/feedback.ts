@@ -47,6 +47,10 @@ export class Feedback {
   @Column({ type: 'real', nullable: true })
   areaLength!: number | null;
 
+  /** Players in the station's group plus a coach who joined it; null on rows from before it was kept. */
+  @Column({ type: 'smallint', nullable: true })
+  groupSize!: number | null;
+
   @Column({ type: 'varchar', length: 10 })
   verdict!: FeedbackVerdict;
 

@@ -1,10 +1,12 @@
 import { InitialSchema1764627000000 } from './1764627000000-initial-schema';
 import { RuleSetHistory1764628000000 } from './1764628000000-rule-set-history';
 import { DocumentsAsJson1764629000000 } from './1764629000000-documents-as-json';
+import { FeedbackGroupSize1764630000000 } from './1764630000000-feedback-group-size';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
   InitialSchema1764627000000,
   RuleSetHistory1764628000000,
   DocumentsAsJson1764629000000,
+  FeedbackGroupSize1764630000000,
 ];

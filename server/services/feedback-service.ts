@@ -61,6 +61,7 @@ export async function storeFeedback(
       activityKind: station.activityKind,
       areaWidth: station.area.width,
       areaLength: station.area.length,
+      groupSize: station.playerIds.length + station.coachJoins,
       verdict: input.verdict,
       note: input.note ?? null,
       clientId: input.clientId ?? null,

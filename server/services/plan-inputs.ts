@@ -35,6 +35,7 @@ interface InputsRow {
     verdict: FeedbackFact['verdict'];
     areaWidth: number | null;
     areaLength: number | null;
+    groupSize: number | null;
   }[];
   rules: RuleSetRevision | null;
 }
@@ -50,7 +51,8 @@ SELECT
                                               'goalkeeper', p.goalkeeper)), '[]'::json)
      FROM player p WHERE p."teamId" = $1 AND p."clubId" = $2) AS roster,
   (SELECT coalesce(json_agg(json_build_object('activityKind', f."activityKind", 'verdict', f.verdict,
-                                              'areaWidth', f."areaWidth", 'areaLength', f."areaLength")
+                                              'areaWidth', f."areaWidth", 'areaLength', f."areaLength",
+                                              'groupSize', f."groupSize")
                             ORDER BY f."createdAt" DESC), '[]'::json)
      FROM (SELECT * FROM feedback
             WHERE "teamId" = $1 AND "clubId" = $2
@@ -85,6 +87,7 @@ export async function loadPlanInputs(
       verdict: f.verdict,
       ...(f.areaWidth !== null ? { areaWidth: f.areaWidth } : {}),
       ...(f.areaLength !== null ? { areaLength: f.areaLength } : {}),
+      ...(f.groupSize !== null ? { groupSize: f.groupSize } : {}),
     }));
   const rules = row.rules ? await publishedDocument(manager, scope.clubId, row.rules) : defaultRules();
   return { team, roster: row.roster, recentFeedback, rules };

@@ -54,6 +54,8 @@ export interface FeedbackFact {
   /** Area side the station ran with, in metres, when known. */
   areaWidth?: number;
   areaLength?: number;
+  /** How many were in that group (players plus a coach who joined), when known. */
+  groupSize?: number;
 }
 
 export interface PlanRequest {

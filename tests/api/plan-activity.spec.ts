@@ -77,6 +77,7 @@ describe('attendance, feedback, pitch-side changes and team insight', () => {
 
   it('feeds the team’s recent feedback into the next plan', async () => {
     const { station } = keepBallOf(plan);
+    const group = station.playerIds.length + station.coachJoins;
     const next = await createPlan(
       app,
       club.coach.token,
@@ -88,6 +89,7 @@ describe('attendance, feedback, pitch-side changes and team insight', () => {
       verdict: 'too-easy',
       areaWidth: station.area.width,
       areaLength: station.area.length,
+      groupSize: group,
     });
     expect(
       next.plan.trace.some(
@@ -95,8 +97,14 @@ describe('attendance, feedback, pitch-side changes and team insight', () => {
           t.ruleId === 'engine.feedback-start' && /keep-ball/.test(t.effect ?? ''),
       ),
     ).toBe(true);
-    // Too easy in keep-ball means a smaller square next time (or the same at the club's minimum).
-    expect(keepBallOf(next).station.area.width).toBeLessThanOrEqual(station.area.width);
+    // Too easy in keep-ball means less room per player next time (or the same at the club's
+    // minimum); the side scales with the square root of the group, so compare side / √group,
+    // allowing half a metre for rounding to whole metres.
+    const after = keepBallOf(next).station;
+    const afterGroup = after.playerIds.length + after.coachJoins;
+    expect(after.area.width / Math.sqrt(afterGroup)).toBeLessThanOrEqual(
+      (station.area.width + 0.5) / Math.sqrt(group),
+    );
   });
 
   it('re-plans a late arrival, reports who moved, and ignores a replay', async () => {
