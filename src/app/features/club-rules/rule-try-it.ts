@@ -1,13 +1,23 @@
-import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { firstValueFrom } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
-import { AGE_GROUPS, LEVELS, type AgeGroup, type Level, type PlanRequest } from '../../../../shared/types';
+import {
+  AGE_GROUPS,
+  LEVELS,
+  type AgeGroup,
+  type Level,
+  type PlanRequest,
+  type TeamDto,
+} from '../../../../shared/types';
+import { TeamsApi } from '../../core/api/teams-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { OUTLINE_ROWS, outlinePlan, type PlanOutline } from './services/plan-outline';
 import { runPlan } from './services/plan-runner';
 import { RuleSetsApi } from './services/rule-sets-api';
-import { sampleSquads } from './services/sample-squads';
+import { sampleSquads, type SampleSquad } from './services/sample-squads';
+import { teamSquad } from './services/team-squad';
 
 /** One situation run under both rule sets. */
 export interface TryItResult {
@@ -20,7 +30,11 @@ export interface TryItResult {
 
 const isOutline = (value: PlanOutline | { error: string }): value is PlanOutline => !('error' in value);
 
-/** "Try it": the draft against sample squads and the club's recent plans, beside the rules in use. */
+/**
+ * "Try it": the draft against one of the club's teams as it usually trains, sample squads of that
+ * team's age and level, and the club's recent plans, beside the rules in use. A club without teams
+ * gets the sample squads of a U10 intermediate side.
+ */
 @Component({
   selector: 'cw-rule-try-it',
   imports: [MatButtonModule, MatIconModule],
@@ -30,6 +44,7 @@ const isOutline = (value: PlanOutline | { error: string }): value is PlanOutline
 })
 export class RuleTryIt {
   private readonly api = inject(RuleSetsApi);
+  private readonly teamsApi = inject(TeamsApi);
 
   /** The rules being edited. */
   readonly draftBody = input.required<unknown>();
@@ -39,6 +54,10 @@ export class RuleTryIt {
   protected readonly ageGroups = AGE_GROUPS;
   protected readonly levels = LEVELS;
   protected readonly rows = OUTLINE_ROWS;
+  protected readonly teams = signal<TeamDto[]>([]);
+  protected readonly teamId = signal('');
+  protected readonly team = computed(() => this.teams().find((team) => team.id === this.teamId()) ?? null);
+  /** Until a team is chosen, and for a club with none: a U10 intermediate side. */
   protected readonly ageGroup = signal<AgeGroup>('U10');
   protected readonly level = signal<Level>('intermediate');
   protected readonly running = signal(false);
@@ -46,15 +65,26 @@ export class RuleTryIt {
   protected readonly error = signal<string | null>(null);
   protected readonly isOutline = isOutline;
 
+  constructor() {
+    this.teamsApi
+      .list()
+      .pipe(takeUntilDestroyed())
+      .subscribe({
+        next: (teams) => {
+          this.teams.set(teams);
+          if (teams.length) this.chooseTeam(teams[0].id);
+        },
+        // Without the club's teams the sample squads still work.
+        error: () => undefined,
+      });
+  }
+
   protected async run(): Promise<void> {
     this.running.set(true);
     this.error.set(null);
     try {
-      const cases: { id: string; label: string; request: PlanRequest }[] = sampleSquads(
-        this.ageGroup(),
-        this.level(),
-      );
-      cases.push(...(await this.recentCases()));
+      const [own, recent] = await Promise.all([this.teamCases(), this.recentCases()]);
+      const cases = [...own, ...sampleSquads(this.ageGroup(), this.level()), ...recent];
       const results: TryItResult[] = [];
       for (const item of cases) {
         const [now, draft] = await Promise.all([
@@ -83,12 +113,41 @@ export class RuleTryIt {
     return isOutline(outline) ? outline[key] : '';
   }
 
+  protected pickTeam(event: Event): void {
+    this.chooseTeam((event.target as HTMLSelectElement).value);
+  }
+
   protected setAge(event: Event): void {
     this.ageGroup.set((event.target as HTMLSelectElement).value as AgeGroup);
   }
 
   protected setLevel(event: Event): void {
     this.level.set((event.target as HTMLSelectElement).value as Level);
+  }
+
+  /** A team's age group and level become the sample squads' too; they stay editable. */
+  private chooseTeam(id: string): void {
+    this.teamId.set(id);
+    const team = this.team();
+    if (!team) return;
+    this.ageGroup.set(team.ageGroup);
+    this.level.set(team.level);
+  }
+
+  /** The chosen team with its current kit bag, read when the run starts so a change made since counts. */
+  private async teamCases(): Promise<SampleSquad[]> {
+    const team = this.team();
+    if (!team) return [];
+    try {
+      const squad = teamSquad(team, await firstValueFrom(this.teamsApi.kit(team.id)));
+      return squad ? [squad] : [];
+    } catch (error) {
+      // The sample squads still run; say why the team is missing from them.
+      this.error.set(
+        `${team.name} was left out because its kit bag could not be read. ${problemMessage(error)}`,
+      );
+      return [];
+    }
   }
 
   private async outline(request: PlanRequest, ruleSet: unknown): Promise<PlanOutline | { error: string }> {

@@ -1,0 +1,30 @@
+import type { KitBagDto, TeamDto } from '../../../../../shared/types';
+import type { SampleSquad } from './sample-squads';
+
+/** The engine takes at most this many players in one plan. */
+const MAX_PLAYERS = 60;
+
+/**
+ * A club team as it usually trains: its age group and level, its active players, its usual space and
+ * its kit bag. Null for a team with no active players, which the engine cannot plan for.
+ */
+export function teamSquad(team: TeamDto, kit: KitBagDto): SampleSquad | null {
+  const count = Math.min(team.playerCount, MAX_PLAYERS);
+  if (count < 1) return null;
+  const { width, length } = team.usualSpace;
+  return {
+    id: `team-${team.id}`,
+    label: `${team.name} as usual (${count} players on ${width} × ${length} m, ${kit.balls} balls, ${kit.goals} goals)`,
+    request: {
+      ageGroup: team.ageGroup,
+      level: team.level,
+      players: Array.from({ length: count }, (_, i) => ({ id: `team-${i + 1}`, name: `Player ${i + 1}` })),
+      coaches: 1,
+      equipment: { balls: kit.balls, cones: kit.cones, bibs: kit.bibs, goals: kit.goals },
+      space: { width, length },
+      minutes: 20,
+      kind: 'match-warm-up',
+      seed: 'try-it',
+    },
+  };
+}
