@@ -1,6 +1,7 @@
 /**
  * Teams: adding one from the team list (the form checks the name, then the new team's page opens),
- * taking a player off the squad, and deleting a team once the lead has typed its name.
+ * taking a player off the squad, deleting a team once the lead has typed its name, and a coach of
+ * another team seeing a squad read-only (the controls follow what the API allows).
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -13,7 +14,7 @@ import {
   seriousAccessibilityViolations,
   type TestBrowser,
 } from './support/browser';
-import { ClubSession, LEAD, U8_COACH } from './support/club-session';
+import { ClubSession, LEAD, U12_COACH, U8_COACH } from './support/club-session';
 
 describe('teams', () => {
   const baseUrl = inject('baseUrl');
@@ -103,8 +104,8 @@ describe('teams', () => {
       const page = await pageAs(coach, viewport, `/teams/${team.id}`);
       await page.getByRole('cell', { name: displayName, exact: true }).waitFor();
       const before = await activeCount(page);
-      // Signed in as the coach: deleting the whole team is left to the lead.
-      expect(await page.getByRole('button', { name: 'Delete team' }).count()).toBe(0);
+      // The team's own coach may delete it, as the API allows (after typing its name).
+      expect(await page.getByRole('button', { name: 'Delete team' }).count()).toBe(1);
 
       await page.getByRole('button', { name: `Remove ${displayName} from the squad` }).click();
       const dialog = page.getByRole('dialog', { name: `Remove ${displayName} from the squad?` });
@@ -126,6 +127,32 @@ describe('teams', () => {
       expect(players.body.map((p) => p.id)).not.toContain(created.body.id);
       const plan = await club.api.get<SessionPlanDto>(`/api/plans/${past.id}`, { token: coach.token });
       expect(plan.body.request.players).toContainEqual(expect.objectContaining({ name: displayName }));
+      await page.close();
+    });
+
+    it(`a coach of another team sees the squad read-only, with no control the API would refuse (${label})`, async () => {
+      const u8 = await club.login(U8_COACH);
+      const { team, players: squad } = await club.team(u8, 'U8 Foxes');
+      const other = await club.login(U12_COACH);
+      const page = await pageAs(other, viewport, `/teams/${team.id}`);
+      await page.getByRole('heading', { name: 'U8 Foxes', level: 1 }).waitFor();
+      await page.getByText('Only the club lead or this team’s coaches can change it.').waitFor();
+      await page.getByRole('cell', { name: squad[0]!.displayName, exact: true }).waitFor();
+      for (const name of ['Add a player', 'Delete team', `Remove ${squad[0]!.displayName} from the squad`]) {
+        expect(await page.getByRole('button', { name }).count(), name).toBe(0);
+      }
+      // The only field left is the squad search; nothing that would change the team.
+      expect(await page.getByRole('textbox').count()).toBe(1);
+      await page.getByRole('textbox', { name: 'Find a player' }).waitFor();
+      await screenshot(page, `team-read-only-${label}`);
+      expect(await seriousAccessibilityViolations(page)).toEqual([]);
+      // The API agrees: the same coach may not add a player to this team.
+      const refused = await club.api.post(
+        `/api/teams/${team.id}/players`,
+        { displayName: 'Nope N.' },
+        { token: other.token },
+      );
+      expect(refused.status).toBe(403);
       await page.close();
     });
 
