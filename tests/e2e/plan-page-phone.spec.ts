@@ -2,7 +2,7 @@
  * The plan page on a 390 × 844 phone: each station shows its title, area and diagram with the
  * rest folded away, a tap or Enter opens a station's details, the page is far shorter than with
  * everything open, print still shows everything, and the card comes on the paper the coach chose.
- * The same page on a desktop keeps every station open.
+ * The same page on a desktop keeps every station open, and prints without the shell or controls.
  */
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -27,6 +27,14 @@ const pageHeight = (page: Page) => page.evaluate(() => document.documentElement.
 const openStates = (page: Page) =>
   page.getByTestId('station-details').evaluateAll((els) => els.map((el) => (el as HTMLDetailsElement).open));
 
+/** Text of every control, toolbar or navigation block the current media shows. */
+const visibleControls = (page: Page) =>
+  page.evaluate(() =>
+    Array.from(document.querySelectorAll('button, [role="button"], a.mat-mdc-button-base, mat-toolbar, nav'))
+      .filter((el) => el.getBoundingClientRect().height > 0)
+      .map((el) => `${el.tagName.toLowerCase()}: ${el.textContent?.trim() ?? ''}`),
+  );
+
 describe('the plan page on a phone', () => {
   const baseUrl = inject('baseUrl');
   const club = new ClubSession(baseUrl);
@@ -34,13 +42,15 @@ describe('the plan page on a phone', () => {
   let browser: TestBrowser;
   let coach: AuthResponse;
   let saved: SessionPlanDto;
+  let squad: Awaited<ReturnType<ClubSession['team']>>;
   let page: Page;
   let stationCount: number;
 
   beforeAll(async () => {
     browser = await launchBrowser(baseUrl);
     coach = await club.login(U12_COACH);
-    const { team, players } = await club.team(coach, 'U12 Otters');
+    squad = await club.team(coach, 'U12 Otters');
+    const { team, players } = squad;
     // The coach flow's evening: 13 of the squad, 12 cones and 2 goals.
     saved = await club.plan(coach, team, players.slice(0, 13), {
       equipment: { balls: 12, cones: 12, bibs: 12, goals: 2 },
@@ -116,6 +126,8 @@ describe('the plan page on a phone', () => {
       expect(shown.length).toBeGreaterThan(0);
       expect(shown.every(Boolean)).toBe(true);
       expect(await page.locator('cw-station-card summary').first().isVisible()).toBe(false);
+      // Paper carries the plan only: no toolbar, navigation, buttons or button-styled links.
+      expect(await visibleControls(page)).toEqual([]);
     } finally {
       await page.emulateMedia({ media: 'screen' });
     }
@@ -150,5 +162,31 @@ describe('the plan page on a phone', () => {
     await screenshot(desktop, 'plan-page-desktop');
     expect(await seriousAccessibilityViolations(desktop)).toEqual([]);
     await desktop.close();
+  });
+
+  it('prints the desktop page without the shell or any control, down to the last station', async () => {
+    // The whole squad with a full bag: a plan long enough that a clipping shell lost its last
+    // station's lines on paper.
+    const full = await club.plan(coach, squad.team, squad.players, {
+      equipment: { balls: 16, cones: 50, bibs: 16, goals: 4 },
+    });
+    const fullCount = full.plan.phases.reduce((n, phase) => n + phase.stations.length, 0);
+    const desktop = await browser.newPage(DESKTOP);
+    await club.open(desktop, coach, `/plans/${full.id}`);
+    await desktop.getByTestId('phase').first().waitFor();
+    await desktop.evaluate(() => document.fonts.ready.then(() => undefined));
+    expect(await visibleControls(desktop)).not.toEqual([]);
+    await desktop.emulateMedia({ media: 'print' });
+    expect(await visibleControls(desktop)).toEqual([]);
+    const file = join(workDir, 'browser-print.pdf');
+    await desktop.pdf({ path: file, format: 'A4' });
+    await desktop.close();
+    const text = execFileSync('pdftotext', [file, '-'], { encoding: 'utf8' });
+    // Each station card ends with its kit line: one per station means nothing was cut off.
+    expect(text.match(/^Kit: /gm)?.length).toBe(fullCount);
+    expect(text).toContain(full.plan.phases.at(-1)!.name);
+    for (const chrome of ['Swap activity', 'New groups', 'Print card', 'This week', 'Why this plan']) {
+      expect(text).not.toContain(chrome);
+    }
   });
 });
