@@ -56,6 +56,25 @@ describe('ClubRulesPage', () => {
     expect(el.querySelector('[data-testid=draft-state]')?.textContent).toContain('Draft v2');
   });
 
+  it('with nothing published, shows the starting rules read-only and lets the lead try them', async () => {
+    const { fixture, http, el, input } = setUp([]);
+    http
+      .expectOne('/api/rule-sets/default')
+      .flush(ruleSet({ id: 'default', authorName: 'Conewise', revision: 0 }));
+    await fixture.whenStable();
+    expect(el.textContent).toContain("The club uses Conewise's starting rules until you publish your own.");
+    const ratio = input('/parameters/keepBall/beginner/maxAttackersPerDefender');
+    expect(ratio.readOnly).toBe(true);
+    expect(Number(ratio.value)).toBe(
+      (defaultRules as { parameters: { keepBall: { beginner: { maxAttackersPerDefender: number } } } })
+        .parameters.keepBall.beginner.maxAttackersPerDefender,
+    );
+    expect(Array.from(el.querySelectorAll('[role=tab]')).map((t) => t.textContent?.trim())).toContain(
+      'Try it',
+    );
+    http.verify();
+  });
+
   it('on a 409 keeps the edit, then reloads the other save and re-applies it on top', async () => {
     const { fixture, http, el, button, input } = setUp([
       ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 3 }),

@@ -45,6 +45,10 @@ export class ClubRulesPage {
   protected readonly versions = signal<RuleSetDto[]>([]);
   protected readonly draft = signal<RuleSetDto | null>(null);
   protected readonly published = signal<RuleSetDto | null>(null);
+  /** The engine's starting rules, shown read-only (and tried) while the club has published none. */
+  protected readonly startingRules = signal<RuleSetDto | null>(null);
+  /** What new plans use now: the club's published rules, else the starting rules. */
+  protected readonly inForce = computed(() => this.published() ?? this.startingRules());
   /** The draft as last saved (what a 409 rebases from). */
   protected readonly baseBody = signal<unknown>(null);
   /** The draft as edited on screen. */
@@ -59,7 +63,7 @@ export class ClubRulesPage {
 
   protected readonly editing = computed(() => this.draft() !== null);
   protected readonly shownBody = computed(() =>
-    this.editing() ? this.body() : (this.published()?.body ?? null),
+    this.editing() ? this.body() : (this.inForce()?.body ?? null),
   );
   protected readonly unsavedCount = computed(() =>
     this.editing() ? diffJson(this.baseBody(), this.body()).length : 0,
@@ -94,6 +98,7 @@ export class ClubRulesPage {
         const published = versions.find((v) => v.status === 'published') ?? null;
         const draft = versions.find((v) => v.status === 'draft') ?? null;
         this.withBody(published, (full) => this.published.set(full));
+        if (!published) this.loadStartingRules();
         this.withBody(draft, (full) => this.takeDraft(full));
         if (!draft) this.takeDraft(null);
         this.loading.set(false);
@@ -216,6 +221,14 @@ export class ClubRulesPage {
   }
 
   /** Calls back with the version's body loaded (the list may send summaries). */
+  /** GET /api/rule-sets/default: the engine's own rules, which apply until the club publishes. */
+  private loadStartingRules(): void {
+    this.api.get('default').subscribe({
+      next: (rules) => this.startingRules.set(rules),
+      error: (e: unknown) => this.error.set(problemMessage(e)),
+    });
+  }
+
   private withBody(version: RuleSetDto | null, use: (full: RuleSetDto) => void): void {
     if (!version) return;
     if (version.body && typeof version.body === 'object') use(version);
