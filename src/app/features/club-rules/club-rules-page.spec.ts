@@ -69,10 +69,13 @@ describe('ClubRulesPage', () => {
       (defaultRules as { parameters: { keepBall: { beginner: { maxAttackersPerDefender: number } } } })
         .parameters.keepBall.beginner.maxAttackersPerDefender,
     );
-    expect(Array.from(el.querySelectorAll('[role=tab]')).map((t) => t.textContent?.trim())).toContain(
-      'Try it',
-    );
-    http.verify();
+    const tryIt = Array.from(el.querySelectorAll<HTMLElement>('[role=tab]')).find(
+      (t) => t.textContent?.trim() === 'Try it',
+    )!;
+    tryIt.click();
+    fixture.detectChanges();
+    await fixture.whenStable();
+    expect(el.textContent).toContain('No draft yet: both columns show the rules in use.');
   });
 
   it('on a 409 keeps the edit, then reloads the other save and re-applies it on top', async () => {
