@@ -1,8 +1,9 @@
+import requestSchema from '../../../../../shared/schemas/plan-request.schema.json';
 import type { KitBagDto, TeamDto } from '../../../../../shared/types';
 import type { SampleSquad } from './sample-squads';
 
-/** The engine takes at most this many players in one plan. */
-const MAX_PLAYERS = 60;
+/** The engine takes at most this many players in one plan (the plan-request schema's own limit). */
+const MAX_PLAYERS = requestSchema.properties.players.maxItems;
 
 /**
  * A club team as it usually trains: its age group and level, its active players, its usual space and
