@@ -1,19 +1,27 @@
-/** The pipeline: validate, run the club rules, plan phases, build each phase, sum up, trace. */
-import type { ActivityKind, Plan, PlanRequest, RuleSetDocument } from '../shared/types';
-import { kindBlocked } from './build/activities';
-import type { AllocationRules } from './build/allocation';
-import { areaTable, baseWidth, describeArea, type StartWidths } from './build/areas';
-import { buildPhase } from './build/build-phase';
-import type { BuildContext } from './build/context';
-import { steppedWidth } from './build/areas';
-import { summarize } from './build/summary';
-import { planPhases } from './build/timing';
-import { ESTIMATE_NOTE } from './build/touches';
+/**
+ * The pipeline: validate, run the club rules, check supervision, shape the session (theme,
+ * parts, pins), time it with drinks breaks, plan the keepers, build each phase, count the
+ * changeovers, sum up, trace.
+ */
+import type { Phase, Plan, PlanRequest, RuleSetDocument, StationKind } from '../shared/types';
+import { compileRuleSet } from './club-rules/compile-rule-set';
+import { evaluateRules } from './club-rules/evaluate-rules';
+import { buildFacts } from './club-rules/facts';
+import { rankedActivities } from './planning/activities';
+import type { AllocationRules } from './planning/allocation';
+import { areaTable, baseWidth, describeArea, steppedWidth, type StartWidths } from './planning/areas';
+import { buildPhase } from './planning/build-phase';
+import { changeoverBetween } from './planning/changeover';
+import type { BuildContext } from './planning/context';
+import { effectiveParameters } from './planning/effective-parameters';
+import { eligibleKeepers, planKeepers } from './planning/goalkeepers';
+import { chooseTheme, sessionSlots } from './planning/session-shape';
+import { summarize } from './planning/summary';
+import { superviseRequest } from './planning/supervision';
+import { planTimeline } from './planning/timing';
+import { ESTIMATE_NOTE } from './planning/touches';
 import { createRng, generateSeed } from './random';
 import { defaultRuleSet } from './rule-sets';
-import { compileRuleSet } from './rules/compile-rule-set';
-import { evaluateRules } from './rules/evaluate-rules';
-import { buildFacts } from './rules/facts';
 import { validatePlanRequest, type FieldError } from './schema/validate-plan-request';
 
 export class PlanRequestError extends Error {
@@ -23,46 +31,35 @@ export class PlanRequestError extends Error {
   }
 }
 
-export async function generatePlan(
-  request: PlanRequest,
-  ruleSet: RuleSetDocument = defaultRuleSet,
-): Promise<Plan> {
+export async function generatePlan(request: PlanRequest, ruleSet: RuleSetDocument = defaultRuleSet): Promise<Plan> {
   const validation = validatePlanRequest(request);
   if (!validation.ok) throw new PlanRequestError(validation.errors);
   const compiled = compileRuleSet(ruleSet);
   const seed = request.seed ?? generateSeed();
-  // Object.assign, not a spread: in V8 a spread that adds a key (a request without a seed) costs
-  // about 2 us; the keys and their order are the same.
   const req: PlanRequest = Object.assign({}, request, { seed });
-  const base = compiled.document.parameters;
-  const outcome = await evaluateRules(compiled, buildFacts(req, base));
-  const params = outcome.parameters;
-  const ctx: BuildContext = {
-    request: req,
-    params,
-    band: params.ageGroups[req.ageGroup].band,
-    forbidden: outcome.forbidden,
-    outcome,
-    rng: createRng(seed),
-    warnings: [...outcome.warnings],
-    trace: [...outcome.trace],
-  };
-  const rules: AllocationRules = {
-    params,
-    level: req.level,
-    kit: req.equipment,
-    usable: (kind) => kindBlocked(params, req.ageGroup, ctx.forbidden, kind) === null,
-  };
-  const startWidths = feedbackWidths(ctx);
-  const specs = planPhases(ctx, rules);
-  const phases = specs.map((spec, i) => buildPhase(ctx, rules, spec, i, startWidths));
-  const totals = summarize(phases, params, req.minutes, ctx.warnings);
+  const outcome = await evaluateRules(compiled, buildFacts(req, compiled.document.parameters));
+  const ctx = planContext(req, outcome, seed);
+  const rules = allocationRules(ctx);
+  const theme = chooseTheme(ctx);
+  if (theme) {
+    ctx.focus = [theme, ...ctx.focus.filter((f) => f !== theme)];
+    ctx.trace.push({
+      ruleId: 'engine.theme',
+      fired: true,
+      effect: req.focus?.length ? `theme: ${theme} (the coach's first focus)` : `theme: ${theme} (the one the team's recent plans used least)`,
+    });
+  }
+  const slots = sessionSlots(ctx, rules, theme);
+  const specs = planTimeline(ctx, slots);
+  planKeepers(ctx, specs);
+  const phases = buildPhases(ctx, rules, specs);
+  const totals = summarize(phases, ctx.params, req.minutes, ctx.warnings);
   ctx.trace.push({
     ruleId: 'engine.estimates',
     fired: true,
     effect: `touches per player ${range(Object.values(totals.touches))}, active share ${totals.activeShare} (estimates)`,
   });
-  return {
+  const plan: Plan = {
     request: req,
     phases,
     equipmentNeeded: totals.equipmentNeeded,
@@ -76,7 +73,68 @@ export async function generatePlan(
     seed,
     estimateNote: ESTIMATE_NOTE,
     forbiddenActivities: outcome.forbidden,
+    supervision: ctx.supervision,
   };
+  if (theme) plan.theme = theme;
+  return plan;
+}
+
+/** The build context for a request once the club rules have run. */
+export function planContext(
+  req: PlanRequest,
+  outcome: Awaited<ReturnType<typeof evaluateRules>>,
+  seed: string,
+): BuildContext {
+  const params = effectiveParameters(outcome.parameters, req);
+  const band = params.ageGroups[req.ageGroup].band;
+  const { supervision, warnings: supervisionWarnings } = superviseRequest(req, params);
+  const { keepers, warnings: keeperWarnings } = eligibleKeepers(req, params, band);
+  const t = req.conditions?.temperatureC;
+  return {
+    request: req,
+    params,
+    band,
+    forbidden: outcome.forbidden,
+    outcome,
+    rng: createRng(seed),
+    warnings: [...outcome.warnings, ...supervisionWarnings, ...keeperWarnings],
+    trace: [...outcome.trace],
+    supervision,
+    keepers,
+    cold: t !== undefined && t <= params.cautions.coldC,
+    hot: t !== undefined && t >= params.cautions.heatC,
+    focus: [...(req.focus ?? [])],
+    recent: new Set(req.recentActivityIds ?? []),
+    pinned: new Set(req.pinnedActivityIds ?? []),
+  };
+}
+
+export function allocationRules(ctx: BuildContext): AllocationRules {
+  return {
+    params: ctx.params,
+    level: ctx.request.level,
+    band: ctx.band,
+    kit: ctx.request.equipment,
+    substitutes: (kind: StationKind) => rankedActivities(ctx, kind).map((r) => r.activity),
+  };
+}
+
+/** Every phase in order, each laid out after the last one played, with its changeover. */
+function buildPhases(ctx: BuildContext, rules: AllocationRules, specs: ReturnType<typeof planTimeline>): Phase[] {
+  const startWidths = feedbackWidths(ctx);
+  const phases: Phase[] = [];
+  let lastPlayed: Phase | undefined;
+  let breakSince = false;
+  specs.forEach((spec, i) => {
+    const phase = buildPhase(ctx, rules, spec, i, startWidths, lastPlayed);
+    if (phase.activityKind !== 'break') {
+      phase.changeover = changeoverBetween(lastPlayed, phase, ctx.params, ctx.request.kind === 'training', breakSince || !lastPlayed);
+      lastPlayed = phase;
+      breakSince = false;
+    } else breakSince = true;
+    phases.push(phase);
+  });
+  return phases;
 }
 
 /**
@@ -87,17 +145,16 @@ export async function generatePlan(
 function feedbackWidths(ctx: BuildContext): StartWidths {
   const out: StartWidths = {};
   for (const [kind, step] of Object.entries(ctx.outcome.steps) as [
-    ActivityKind,
-    NonNullable<BuildContext['outcome']['steps'][ActivityKind]>,
+    StationKind,
+    NonNullable<BuildContext['outcome']['steps'][StationKind]>,
   ][]) {
+    if (!ctx.params.areas[kind]) continue;
     const fb = ctx.request.recentFeedback?.find((f) => f.activityKind === kind);
     const table = areaTable(ctx.params, kind, ctx.band);
     const typical = ctx.params.groupSizes[kind][ctx.request.level].preferred;
-    // The table's width is the shorter side; a rotated station may report its sides either way round.
     const reported =
       fb?.areaWidth !== undefined ? Math.min(fb.areaWidth, fb.areaLength ?? fb.areaWidth) : undefined;
     const from = reported ?? Math.round(baseWidth(ctx.params, kind, ctx.band, ctx.request.level, typical));
-    // The group the width was for: the one that ran it, else the table's typical group.
     const forGroup = reported !== undefined ? fb?.groupSize : typical;
     const harderSign = ctx.params.kinds[kind].harderWhenArea === 'smaller' ? -1 : 1;
     const steps = step.direction === 'keep' ? 0 : step.direction === 'harder' ? harderSign : -harderSign;

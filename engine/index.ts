@@ -2,11 +2,14 @@
 export { generatePlan, PlanRequestError } from './generate-plan';
 export { validatePlanRequest, type FieldError, type RequestValidation } from './schema/validate-plan-request';
 export { validateRuleSet, type PointerError, type RuleSetValidation } from './schema/validate-rule-set';
-export { RuleSetError } from './rules/compile-rule-set';
+export { RuleSetError } from './club-rules/compile-rule-set';
 export { defaultRuleSet } from './rule-sets';
 export { checkPlan } from './check-plan';
 export { applyEdit } from './edit/apply-edit';
 export { replan, type ReplanResult } from './edit/replan';
 export { applyProgression } from './edit/apply-progression';
 export { listActivities, type ActivityOption } from './list-activities';
+export { previewActivity, type ActivityPreview } from './preview-activity';
+export { kindLayouts } from './kinds/registry';
+export type { KindLayout } from './kinds/kind-module';
 export type { RuleSetDocument, PlanEdit, PlayerMove, RosterChange, StationVerdict } from '../shared/types';

@@ -1,49 +1,57 @@
-/** The activities of a rule set for the swap menu, each allowed for the request or not, and why. */
-import type { ActivityKind, Plan, PlanRequest, RuleSetDocument } from '../shared/types';
-import { activityBlocked } from './build/activities';
-import { kindFeasible, type AllocationRules } from './build/allocation';
+/** The activities of a rule set for the swap menu and the library, each usable for the request or not, and why. */
+import type { AgeGroup, Level, Plan, PlanRequest, RuleSetDocument, StationKind } from '../shared/types';
+import { compileRuleSet } from './club-rules/compile-rule-set';
+import { activityBlocked } from './planning/activities';
+import { activityFeasible } from './planning/allocation';
+import { effectiveParameters } from './planning/effective-parameters';
 import { defaultRuleSet } from './rule-sets';
-import { compileRuleSet } from './rules/compile-rule-set';
 
 export interface ActivityOption {
   id: string;
-  kind: ActivityKind;
+  kind: StationKind;
   title: string;
+  /** One line for menus. */
+  summary: string;
+  ages: { from: AgeGroup; to: AgeGroup };
+  levels: Level[];
   allowed: boolean;
   reason?: string;
 }
 
 /**
- * With a Plan, the club rules that fired for it are applied; with a bare request, the age table
- * and numbers and kit only (rules need an async run — generatePlan does that).
+ * With a Plan, the club rules that fired for it are applied; with a bare request, the age table,
+ * numbers and kit only (rules need an async run — generatePlan does that). Retired activities
+ * are left out.
  */
-export function listActivities(
-  ruleSet: RuleSetDocument = defaultRuleSet,
-  context?: Plan | PlanRequest,
-): ActivityOption[] {
-  const params = compileRuleSet(ruleSet).document.parameters;
+export function listActivities(ruleSet: RuleSetDocument = defaultRuleSet, context?: Plan | PlanRequest): ActivityOption[] {
+  const base = compileRuleSet(ruleSet).document.parameters;
   const plan = context && 'phases' in context ? context : undefined;
   const request = plan ? plan.request : (context as PlanRequest | undefined);
+  const params = request ? effectiveParameters(base, request) : base;
   const forbidden = plan?.forbiddenActivities ?? [];
-  return params.activities.map((a) => {
-    const option: ActivityOption = { id: a.id, kind: a.kind, title: a.title, allowed: true };
-    if (!request) return option;
-    const blocked = activityBlocked(params, request.ageGroup, forbidden, a);
-    const rules: AllocationRules = {
-      params,
-      level: request.level,
-      kit: request.equipment,
-      usable: () => true,
-    };
-    const reason =
-      blocked ??
-      (kindFeasible(request.players.length, request.coaches, a.kind, rules)
-        ? null
-        : 'too few players or not enough kit for it');
-    if (reason) {
-      option.allowed = false;
-      option.reason = reason;
-    }
-    return option;
-  });
+  const band = request ? params.ageGroups[request.ageGroup].band : undefined;
+  return params.activities
+    .filter((a) => !a.retired)
+    .map((a) => {
+      const option: ActivityOption = {
+        id: a.id,
+        kind: a.kind,
+        title: a.title,
+        summary: a.summary,
+        ages: a.ages,
+        levels: a.levels,
+        allowed: true,
+      };
+      if (!request || !band) return option;
+      const reason =
+        activityBlocked(params, request.ageGroup, request.level, forbidden, a) ??
+        (activityFeasible(request.players.length, request.coaches, a, { params, level: request.level, band, kit: request.equipment })
+          ? null
+          : 'too few players or not enough kit for it');
+      if (reason) {
+        option.allowed = false;
+        option.reason = reason;
+      }
+      return option;
+    });
 }

@@ -1,22 +1,19 @@
 /** A coach's edit to a plan: the edited plan with kit, totals, notices and trace recomputed. */
 import type { Plan, PlanEdit, RuleSetDocument, Station } from '../../shared/types';
-import { activityBlocked, activityById } from '../build/activities';
-import { allocatePhase, type AllocationRules } from '../build/allocation';
-import { makeStation, placeStations } from '../build/build-phase';
-import { assignRoles } from '../build/roles';
 import { checkPlan } from '../check-plan';
+import { compileRuleSet } from '../club-rules/compile-rule-set';
 import { generatePlan } from '../generate-plan';
-import { createRng, generateSeed, shuffle } from '../random';
+import { kindModule, layoutOf } from '../kinds/registry';
+import { activityBlocked, activityById } from '../planning/activities';
+import { buildPhase } from '../planning/build-phase';
+import { effectiveParameters } from '../planning/effective-parameters';
+import { generateSeed } from '../random';
 import { defaultRuleSet } from '../rule-sets';
-import { compileRuleSet } from '../rules/compile-rule-set';
 import { applyProgression } from './apply-progression';
-import { refreshPlan } from './rebuild';
+import { editContext, lastPlayedBefore, specOf } from './plan-context';
+import { activityOfStation, refreshPlan } from './rebuild';
 
-export async function applyEdit(
-  plan: Plan,
-  edit: PlanEdit,
-  ruleSet: RuleSetDocument = defaultRuleSet,
-): Promise<Plan> {
+export async function applyEdit(plan: Plan, edit: PlanEdit, ruleSet: RuleSetDocument = defaultRuleSet): Promise<Plan> {
   switch (edit.type) {
     case 'regenerate':
       return generatePlan({ ...plan.request, seed: edit.seed ?? generateSeed() }, ruleSet);
@@ -27,7 +24,7 @@ export async function applyEdit(
       const smallerIsHarder = params.kinds[station.activityKind].harderWhenArea === 'smaller';
       const verdict = (edit.step === 'smaller') === smallerIsHarder ? 'too-easy' : 'too-hard';
       const out = applyProgression(plan, edit.phaseIndex, edit.stationId, verdict, ruleSet);
-      return relabel(out, plan, `edit.resize-area`, `${edit.stationId}: area ${edit.step}`);
+      return relabel(out, plan, 'edit.resize-area', `${station.title}: area ${edit.step}`);
     }
     case 'move-player':
       return movePlayer(plan, edit, ruleSet);
@@ -52,12 +49,8 @@ function withChecks(plan: Plan, ruleSet: RuleSetDocument): Plan {
   return { ...plan, warnings: [...plan.warnings, ...checks.map((c) => ({ ...c, code: `check:${c.code}` }))] };
 }
 
-function movePlayer(
-  plan: Plan,
-  edit: Extract<PlanEdit, { type: 'move-player' }>,
-  ruleSet: RuleSetDocument,
-): Plan {
-  const params = compileRuleSet(ruleSet).document.parameters;
+function movePlayer(plan: Plan, edit: Extract<PlanEdit, { type: 'move-player' }>, ruleSet: RuleSetDocument): Plan {
+  const params = effectiveParameters(compileRuleSet(ruleSet).document.parameters, plan.request);
   const phase = plan.phases[edit.phaseIndex];
   if (!phase) throw new RangeError(`No phase ${edit.phaseIndex}`);
   const target = stationAt(plan, edit.phaseIndex, edit.toStationId);
@@ -65,16 +58,11 @@ function movePlayer(
   if (!from) throw new RangeError(`Player ${edit.playerId} is in no station of phase ${edit.phaseIndex}`);
   if (from.id === target.id) return plan;
   const byId = new Map(plan.request.players.map((p) => [p.id, p]));
+  const band = params.ageGroups[plan.request.ageGroup].band;
   const stations = phase.stations.map((s) => {
     if (s.id !== from.id && s.id !== target.id) return s;
-    const ids =
-      s.id === from.id ? s.playerIds.filter((id) => id !== edit.playerId) : [...s.playerIds, edit.playerId];
-    const players = ids.map((id) => byId.get(id) ?? { id });
-    return {
-      ...s,
-      playerIds: ids,
-      roles: assignRoles(s.activityKind, players, s.coachJoins, params, plan.request.level),
-    };
+    const ids = s.id === from.id ? s.playerIds.filter((id) => id !== edit.playerId) : [...s.playerIds, edit.playerId];
+    return reRole(s, ids, byId, params, plan, band);
   });
   // A station left empty disappears rather than stand unused.
   const kept = stations.filter((s) => s.playerIds.length > 0);
@@ -86,95 +74,77 @@ function movePlayer(
       ...refreshed,
       trace: [
         ...plan.trace,
-        {
-          ruleId: 'edit.move-player',
-          fired: true,
-          effect: `${who}: ${from.id} → ${target.id} in ${phase.name}`,
-        },
+        { ruleId: 'edit.move-player', fired: true, effect: `${who}: ${from.title} → ${target.title} in ${phase.name}` },
       ],
     },
     ruleSet,
   );
 }
 
-function swapActivity(
+/**
+ * A station's roles for new members, by its kind: keepers still in the group stay in goal
+ * (a two-goal station keeps them only in pairs, one each end).
+ */
+export function reRole(
+  s: Station,
+  ids: string[],
+  byId: Map<string, Plan['request']['players'][number]>,
+  params: ReturnType<typeof effectiveParameters>,
   plan: Plan,
-  edit: Extract<PlanEdit, { type: 'swap-activity' }>,
-  ruleSet: RuleSetDocument,
-): Plan {
-  const params = compileRuleSet(ruleSet).document.parameters;
+  band: ReturnType<typeof effectiveParameters>['ageGroups'][keyof ReturnType<typeof effectiveParameters>['ageGroups']]['band'],
+): Station {
+  const activity = activityOfStation(params, s);
+  const layout = layoutOf(activity);
+  const module = kindModule(s.activityKind);
+  let keepers = (s.roles.goalkeeper ?? []).filter((id) => ids.includes(id));
+  if (module.targets(layout).ends === 2 && keepers.length % 2) keepers = [];
+  const players = ids.map((id) => byId.get(id) ?? { id });
+  const outcome = module.roles({
+    activity,
+    layout,
+    players,
+    keepers,
+    coachJoins: s.coachJoins,
+    params,
+    level: plan.request.level,
+    band,
+  });
+  return {
+    ...s,
+    playerIds: ids,
+    roles: outcome.roles,
+    format: outcome.format,
+    coachingPoints: [...activity.coachingPoints, ...(outcome.points ?? [])],
+  };
+}
+
+async function swapActivity(plan: Plan, edit: Extract<PlanEdit, { type: 'swap-activity' }>, ruleSet: RuleSetDocument): Promise<Plan> {
+  const params = effectiveParameters(compileRuleSet(ruleSet).document.parameters, plan.request);
   const phase = plan.phases[edit.phaseIndex];
   if (!phase) throw new RangeError(`No phase ${edit.phaseIndex}`);
   const activity = activityById(params, edit.activityId);
   if (!activity) throw new RangeError(`No activity ${edit.activityId} in rule set ${ruleSet.id}`);
   const request = plan.request;
-  const blocked = activityBlocked(params, request.ageGroup, plan.forbiddenActivities ?? [], activity);
-  if (blocked) {
-    return {
-      ...plan,
-      warnings: [
-        ...plan.warnings,
-        { code: 'swap-refused', message: `${activity.title} is not used here: ${blocked}` },
-      ],
-      trace: [
-        ...plan.trace,
-        { ruleId: 'edit.swap-activity', fired: false, effect: `${activity.title} refused: ${blocked}` },
-      ],
-    };
-  }
-  const band = params.ageGroups[request.ageGroup].band;
-  const rules: AllocationRules = {
-    params,
-    level: request.level,
-    kit: request.equipment,
-    usable: (k) =>
-      !(plan.forbiddenActivities ?? []).some((f) => f.kind === k && !f.activityId) &&
-      params.ageGroups[request.ageGroup].allowedKinds.includes(k),
-  };
-  const rng = createRng(`${plan.seed}:swap:${edit.phaseIndex}:${edit.activityId}`);
-  const players = shuffle(request.players, rng);
-  const allocation = allocatePhase(players.length, request.coaches, activity.kind, rules);
-  const ctx = { params, request, band, warnings: [...plan.warnings], trace: [...plan.trace] };
-  let next = 0;
-  const stations = allocation.groups.map((g, k) => {
-    const group = players.slice(next, (next += g.players));
-    const chosen = g.kind === activity.kind ? activity : params.activities.find((a) => a.kind === g.kind)!;
-    return makeStation(ctx, `p${edit.phaseIndex + 1}-s${k + 1}`, chosen, g, group, {});
+  const refuse = (reason: string): Plan => ({
+    ...plan,
+    warnings: [...plan.warnings, { code: 'swap-refused', message: `${activity.title} is not used here: ${reason}.` }],
+    trace: [...plan.trace, { ruleId: 'edit.swap-activity', fired: false, effect: `${activity.title} refused: ${reason}` }],
   });
-  const placed = placeStations(ctx, { name: phase.name }, stations);
-  if (!placed) {
-    return {
-      ...plan,
-      warnings: [
-        ...plan.warnings,
-        {
-          code: 'swap-refused',
-          message: `${activity.title} does not fit the space for ${players.length} players.`,
-        },
-      ],
-      trace: [
-        ...plan.trace,
-        { ruleId: 'edit.swap-activity', fired: false, effect: `${activity.title}: does not fit the space` },
-      ],
-    };
+  if (phase.activityKind === 'break') return refuse('a drinks break has no stations');
+  const blocked = activityBlocked(params, request.ageGroup, request.level, plan.forbiddenActivities ?? [], activity);
+  if (blocked) return refuse(blocked);
+  const { ctx, rules } = await editContext(request, ruleSet, `${plan.seed}:swap:${edit.phaseIndex}:${edit.activityId}`);
+  const spec = specOf(plan, edit.phaseIndex, [activity]);
+  const rebuilt = buildPhase(ctx, rules, spec, edit.phaseIndex, {}, lastPlayedBefore(plan, edit.phaseIndex));
+  if (rebuilt.activityId !== activity.id) {
+    return refuse(`it does not fit the space or the kit for ${request.players.length} players`);
   }
-  const phases = plan.phases.map((p, i) =>
-    i === edit.phaseIndex
-      ? { ...p, activityId: activity.id, intensity: activity.intensity, stations: placed }
-      : p,
-  );
-  const refreshed = refreshPlan({ ...plan, warnings: ctx.warnings }, phases, params);
+  const phases = plan.phases.map((p, i) => (i === edit.phaseIndex ? { ...rebuilt, name: p.name } : p));
+  const refreshed = refreshPlan({ ...plan, warnings: plan.warnings }, phases, params);
   return withChecks(
     {
       ...refreshed,
-      trace: [
-        ...ctx.trace,
-        {
-          ruleId: 'edit.swap-activity',
-          fired: true,
-          effect: `${phase.name}: ${phase.activityId} → ${activity.id}`,
-        },
-      ],
+      trace: [...plan.trace, { ruleId: 'edit.swap-activity', fired: true, effect: `${phase.name}: ${phase.activityId} → ${activity.id}` }],
     },
     ruleSet,
   );

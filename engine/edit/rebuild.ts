@@ -1,11 +1,16 @@
-/** Recomputes what depends on a plan's stations after an edit: markings, kit, totals, notices. */
-import type { Notice, Phase, Plan, RuleParameters } from '../../shared/types';
-import { finishPhase } from '../build/build-phase';
-import { summarize } from '../build/summary';
+/** Recomputes what depends on a plan's stations after an edit: markings, kit, steps, changeovers, totals. */
+import type { ActivityDefinition, Notice, Phase, Plan, RuleParameters, Station } from '../../shared/types';
+import { layoutOf } from '../kinds/registry';
+import { activityById } from '../planning/activities';
+import { changeoverBetween } from '../planning/changeover';
+import { effectiveParameters } from '../planning/effective-parameters';
+import { equipPhase } from '../planning/kit';
+import { markPhase } from '../planning/markings';
+import { progressionsFor } from '../planning/progressions';
+import { summarize } from '../planning/summary';
 
 /** Warning codes the phase and summary steps produce; rebuilt from scratch on every edit. */
 const DERIVED_CODES = new Set([
-  'no-target',
   'gates-for-goals',
   'shots-toward-station',
   'balls-short',
@@ -14,18 +19,58 @@ const DERIVED_CODES = new Set([
   'touches-below-target',
 ]);
 
-export function refreshPlan(
-  plan: Plan,
-  phases: Phase[],
-  params: RuleParameters,
-  checks: Notice[] = [],
-): Plan {
+/**
+ * The activity a station runs: from the rule set, or (for an activity the club has since
+ * removed) one rebuilt from what the station itself says, so old plans still refresh.
+ */
+export function activityOfStation(params: RuleParameters, station: Station): ActivityDefinition {
+  const known = activityById(params, station.activityId);
+  if (known && known.kind === station.activityKind) return known;
+  const sameKind = params.activities.find((a) => a.kind === station.activityKind);
+  return {
+    id: station.activityId,
+    kind: station.activityKind,
+    title: station.title,
+    summary: station.description,
+    description: station.description,
+    coachingPoints: station.coachingPoints,
+    easier: [],
+    harder: [],
+    ages: { from: 'U6', to: 'adult' },
+    levels: ['beginner', 'intermediate', 'advanced'],
+    focus: [],
+    intensity: sameKind?.intensity ?? 3,
+    balls: sameKind?.balls ?? 'group',
+    layout: sameKind ? layoutOf(sameKind) : undefined,
+    players: { min: 1, max: 60 },
+  };
+}
+
+export function refreshPlan(plan: Plan, phases: Phase[], ruleParams: RuleParameters, checks: Notice[] = []): Plan {
+  const params = effectiveParameters(ruleParams, plan.request);
   const band = params.ageGroups[plan.request.ageGroup].band;
-  const warnings: Notice[] = plan.warnings.filter(
-    (w) => !DERIVED_CODES.has(w.code) && !w.code.startsWith('check:'),
-  );
+  const warnings: Notice[] = plan.warnings.filter((w) => !DERIVED_CODES.has(w.code) && !w.code.startsWith('check:'));
   const fresh = phases.map((p) => ({ ...p, stations: p.stations.map((s) => ({ ...s })) }));
-  for (const phase of fresh) finishPhase(phase.stations, params, plan.request, band, warnings, phase.name);
+  let lastPlayed: Phase | undefined;
+  let breakSince = false;
+  for (const phase of fresh) {
+    if (phase.activityKind === 'break') {
+      breakSince = true;
+      continue;
+    }
+    const activities = phase.stations.map((s) => activityOfStation(params, s));
+    const previousGoals = lastPlayed
+      ? lastPlayed.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
+      : [];
+    markPhase(phase.stations, activities, plan.request.space, params, plan.request.equipment, warnings, phase.name, previousGoals);
+    equipPhase(phase.stations, activities, plan.request.equipment, warnings, phase.name);
+    phase.stations.forEach((s, i) => {
+      s.progressions = progressionsFor(s, activities[i], params, band, plan.request.space);
+    });
+    phase.changeover = changeoverBetween(lastPlayed, phase, params, plan.request.kind === 'training', breakSince || !lastPlayed);
+    lastPlayed = phase;
+    breakSince = false;
+  }
   const totals = summarize(fresh, params, plan.request.minutes, warnings);
   for (const c of checks) warnings.push({ ...c, code: `check:${c.code}` });
   return { ...plan, phases: fresh, ...totals, warnings };

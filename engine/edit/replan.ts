@@ -1,52 +1,32 @@
 /**
  * Pitch-side re-plan after a late arrival or an early leaver: finished phases stay as they ran;
- * the others keep every player whose group still fits and move as few players as possible.
+ * each later phase takes whichever valid version moves the fewest players — the same groups
+ * with the leaver out or the arrival in where there is room, or the phase rebuilt for the new
+ * squad with its stations matched to the old ones.
  */
-import type {
-  ActivityDefinition,
-  ActivityKind,
-  Phase,
-  Plan,
-  PlayerMove,
-  PresentPlayer,
-  RosterChange,
-  RuleParameters,
-  RuleSetDocument,
-  Station,
-} from '../../shared/types';
-import { activityById, chooseActivity, kindBlocked } from '../build/activities';
-import {
-  allocatePhase,
-  kindFeasible,
-  withStationCap,
-  type AllocationRules,
-  type GroupPlan,
-} from '../build/allocation';
-import { makeStation, placeStations, sharedGrid } from '../build/build-phase';
-import { assignRoles } from '../build/roles';
+import type { AgeBand, Phase, Plan, PlayerMove, PresentPlayer, RosterChange, RuleSetDocument, Station } from '../../shared/types';
 import { checkPlan } from '../check-plan';
 import { generatePlan, PlanRequestError } from '../generate-plan';
-import { gapBetween, insideSpace, overlaps, rectOf } from '../geometry';
-import { createRng } from '../random';
-import { defaultRuleSet } from '../rule-sets';
-import { compileRuleSet } from '../rules/compile-rule-set';
-import { evaluateRules } from '../rules/evaluate-rules';
-import { buildFacts } from '../rules/facts';
+import { insideSpace, overlaps, gapBetween, rectOf } from '../geometry';
+import { kindModule, layoutOf } from '../kinds/registry';
+import { activityById } from '../planning/activities';
+import { sizeRuleOf } from '../planning/allocation';
+import { areaForWidth, baseWidth, boundedTable } from '../planning/areas';
+import { buildPhase } from '../planning/build-phase';
+import type { BuildContext } from '../planning/context';
+import { equipPhase } from '../planning/kit';
 import { validatePlanRequest } from '../schema/validate-plan-request';
-import { refreshPlan } from './rebuild';
+import { reRole } from './apply-edit';
+import { editContext, specOf } from './plan-context';
+import { activityOfStation, refreshPlan } from './rebuild';
 
 export interface ReplanResult {
   plan: Plan;
   moves: PlayerMove[];
 }
 
-const GOALKEEPER_KINDS: ActivityKind[] = ['passing-finishing', 'small-sided-game'];
-
-export async function replan(
-  plan: Plan,
-  change: RosterChange,
-  ruleSet: RuleSetDocument = defaultRuleSet,
-): Promise<ReplanResult> {
+export async function replan(plan: Plan, change: RosterChange, ruleSet?: RuleSetDocument): Promise<ReplanResult> {
+  const rules = ruleSet ?? (await import('../rule-sets')).defaultRuleSet;
   const removed = new Set(change.remove ?? []);
   const known = new Set(plan.request.players.map((p) => p.id));
   const arrivals = (change.add ?? []).filter((p) => !known.has(p.id));
@@ -54,257 +34,197 @@ export async function replan(
   const request = { ...plan.request, players };
   const validation = validatePlanRequest(request);
   if (!validation.ok) throw new PlanRequestError(validation.errors);
-
-  const compiled = compileRuleSet(ruleSet);
-  const outcome = await evaluateRules(compiled, buildFacts(request, compiled.document.parameters));
-  const params = outcome.parameters;
-  const band = params.ageGroups[request.ageGroup].band;
-  const usable = (k: ActivityKind) => kindBlocked(params, request.ageGroup, outcome.forbidden, k) === null;
-  const rules: AllocationRules = { params, level: request.level, kit: request.equipment, usable };
+  const { ctx, rules: allocation } = await editContext(request, rules, `${plan.seed}:replan:${change.fromMinute}:${players.length}`);
+  const fresh = await generatePlan({ ...request, seed: plan.seed }, rules);
   const byId = new Map(players.map((p) => [p.id, p]));
-  const rng = createRng(`${plan.seed}:replan:${change.fromMinute}:${players.length}`);
-  const ctx = { params, request, band, warnings: [...outcome.warnings], trace: [...plan.trace] };
   const moves: PlayerMove[] = [];
-  const fresh = await generatePlan({ ...request, seed: plan.seed }, ruleSet);
-
-  const phases: Phase[] = plan.phases.map((phase, phaseIndex) => {
-    if (phase.endMinute <= change.fromMinute) return phase;
-    // Keep the phase's activity if it still works; take the fresh plan's when that moves fewer.
-    const candidates = [phaseActivity(phase, params, request, outcome.forbidden, rules, rng)];
-    const freshActivity = activityById(params, fresh.phases[phaseIndex]?.activityId ?? '');
-    if (freshActivity && freshActivity.kind !== candidates[0].kind) candidates.push(freshActivity);
-    let best: { phase: Phase; moves: PlayerMove[]; count: number } | null = null;
-    for (const activity of candidates) {
-      const next = regroupPhase(
-        phase,
-        phaseIndex,
-        activity,
-        players.length,
-        request.coaches,
-        rules,
-        removed,
-        arrivals,
-        byId,
-        ctx,
-      );
-      const phaseMoves = movesBetween(phase, next, phaseIndex);
-      const count = phaseMoves.filter((m) => m.fromStationId && m.toStationId).length;
-      if (!best || count < best.count) best = { phase: next, moves: phaseMoves, count };
+  const phases: Phase[] = [];
+  let lastPlayed: Phase | undefined;
+  plan.phases.forEach((phase, phaseIndex) => {
+    if (phase.endMinute <= change.fromMinute || phase.activityKind === 'break') {
+      phases.push(phase);
+      if (phase.activityKind !== 'break') lastPlayed = phase;
+      return;
     }
-    moves.push(...best!.moves);
-    return best!.phase;
+    const options: Phase[] = [];
+    const kept = inPlace(phase, removed, arrivals, byId, ctx);
+    if (kept) options.push(kept);
+    const candidates = [
+      activityById(ctx.params, phase.activityId),
+      activityById(ctx.params, fresh.phases[phaseIndex]?.activityId ?? ''),
+    ].filter((a): a is NonNullable<typeof a> => !!a);
+    if (candidates.length) {
+      const spec = specOf({ ...plan, request }, phaseIndex, candidates);
+      options.push(matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex));
+    }
+    const theirs = fresh.phases[phaseIndex];
+    if (theirs && theirs.startMinute === phase.startMinute && theirs.endMinute === phase.endMinute && theirs.activityKind !== 'break') {
+      options.push(matchIds(phase, theirs, phaseIndex));
+    }
+    let best: { phase: Phase; moves: PlayerMove[]; count: number } | null = null;
+    for (const option of options) {
+      const m = movesBetween(phase, option, phaseIndex);
+      const count = m.filter((x) => x.fromStationId && x.toStationId).length;
+      if (!best || count < best.count) best = { phase: option, moves: m, count };
+    }
+    const chosen = best ?? { phase, moves: [], count: 0 };
+    moves.push(...chosen.moves);
+    phases.push(chosen.phase);
+    lastPlayed = chosen.phase;
   });
 
   const changed: Plan = {
     ...plan,
     request,
     warnings: ctx.warnings,
-    cautions: outcome.cautions,
-    forbiddenActivities: outcome.forbidden,
+    cautions: ctx.outcome.cautions,
+    forbiddenActivities: ctx.outcome.forbidden,
+    supervision: ctx.supervision,
     rosterChanges: [
       ...(plan.rosterChanges ?? []),
-      {
-        fromMinute: change.fromMinute,
-        added: arrivals.map((p) => p.id),
-        removed: [...removed].filter((id) => known.has(id)),
-      },
+      { fromMinute: change.fromMinute, added: arrivals.map((p) => p.id), removed: [...removed].filter((id) => known.has(id)) },
     ],
   };
-  const refreshed = refreshPlan(changed, phases, params);
+  const refreshed = refreshPlan(changed, phases, ctx.params);
   const moved = moves.filter((m) => m.fromStationId && m.toStationId).length;
   const result: Plan = {
     ...refreshed,
     trace: [
-      ...ctx.trace,
-      ...outcome.trace.map((t) => ({ ...t, ruleId: `replan:${t.ruleId}` })),
+      ...plan.trace,
+      ...ctx.outcome.trace.map((t) => ({ ...t, ruleId: `replan:${t.ruleId}` })),
       {
         ruleId: 'engine.replan',
         fired: true,
-        effect: `from minute ${change.fromMinute}: ${arrivals.length} arrive, ${changed.rosterChanges!.at(-1)!.removed.length} leave; ${moved} player(s) change station`,
+        effect: `from minute ${change.fromMinute}: ${arrivals.length} arrive, ${changed.rosterChanges!.at(-1)!.removed.length} leave; ${moved} player(s) change group`,
       },
     ],
   };
-  const checks = checkPlan(result, ruleSet);
+  const checks = checkPlan(result, rules);
   return {
-    plan: {
-      ...result,
-      warnings: [...result.warnings, ...checks.map((c) => ({ ...c, code: `check:${c.code}` }))],
-    },
+    plan: { ...result, warnings: [...result.warnings, ...checks.map((c) => ({ ...c, code: `check:${c.code}` }))] },
     moves,
   };
 }
 
-/** One candidate re-plan of a phase for an activity: fewest moves, then fewer stations if the space needs it. */
-function regroupPhase(
+/**
+ * The same groups with leavers taken out and arrivals put where a group has room, or null when
+ * that breaks a group's size, a keep-ball format, even sides or the space.
+ */
+function inPlace(
   phase: Phase,
-  phaseIndex: number,
-  activity: ActivityDefinition,
-  count: number,
-  coaches: number,
-  rules: AllocationRules,
   removed: Set<string>,
   arrivals: PresentPlayer[],
   byId: Map<string, PresentPlayer>,
-  ctx: Parameters<typeof placeStations>[0],
-): Phase {
-  let cap = Number.POSITIVE_INFINITY;
-  for (;;) {
-    const target = allocatePhase(count, coaches, activity.kind, withStationCap(rules, cap));
-    if (!Number.isFinite(target.cost)) {
-      const everyone = phase.stations.flatMap((s) => s.playerIds).filter((id) => !removed.has(id));
-      const asOne = [{ ...phase.stations[0], playerIds: [...everyone, ...arrivals.map((p) => p.id)] }];
-      return { ...phase, stations: [sharedGrid(ctx, { name: phase.name }, asOne, phaseIndex)] };
-    }
-    const stations = regroup(phase, target.groups, removed, arrivals, byId, activity, phaseIndex, ctx);
-    const placed =
-      keepPositions(stations, phase, ctx.request.space) ?? placeStations(ctx, { name: phase.name }, stations);
-    if (placed) return { ...phase, activityId: activity.id, intensity: activity.intensity, stations: placed };
-    if (stations.length <= 1)
-      return { ...phase, stations: [sharedGrid(ctx, { name: phase.name }, stations, phaseIndex)] };
-    cap = stations.length - 1;
+  ctx: BuildContext,
+): Phase | null {
+  const { params, request, band } = ctx;
+  let stations: Station[] = phase.stations
+    .map((s) => ({ ...s, playerIds: s.playerIds.filter((id) => !removed.has(id)) }))
+    .filter((s) => s.playerIds.length > 0);
+  const changed = new Set(phase.stations.filter((s) => s.playerIds.some((id) => removed.has(id))).map((s) => s.id));
+  for (const p of arrivals) {
+    const room = stations
+      .filter((s) => s.activityKind !== 'goalkeeping')
+      .filter((s) => sizeRuleOf(activityOfStation(params, s), { params, level: request.level, band })?.allows(outfieldAfter(s) + 1))
+      .sort((a, b) => a.playerIds.length - b.playerIds.length)[0];
+    if (!room) return null;
+    stations = stations.map((s) => (s === room ? { ...s, playerIds: [...s.playerIds, p.id] } : s));
+    changed.add(room.id);
   }
+  stations = stations.map((s) => {
+    if (!changed.has(s.id)) return s;
+    const next = reRole(s, s.playerIds, byId, params, { ...phaseOwner(request) } as Plan, band as AgeBand);
+    const activity = activityOfStation(params, next);
+    const size = sizeRuleOf(activity, { params, level: request.level, band });
+    if (activity.kind !== 'goalkeeping' && size && !size.allows(outfieldAfter(next))) return { ...next, id: '' };
+    const total = next.playerIds.length + next.coachJoins;
+    const area = areaForWidth(boundedTable(params, s.activityKind, band, total), baseWidth(params, s.activityKind, band, request.level, total), request.space);
+    const rotated = s.area.width > s.area.length !== area.width > area.length;
+    return { ...next, area: rotated ? { width: area.length, length: area.width } : area };
+  });
+  if (stations.some((s) => !s.id)) return null;
+  const rects = stations.map((s) => rectOf(s.position, s.area));
+  for (let i = 0; i < rects.length; i++) {
+    if (!insideSpace(rects[i], request.space)) return null;
+    for (let j = i + 1; j < rects.length; j++) {
+      if (overlaps(rects[i], rects[j]) || gapBetween(rects[i], rects[j]) < 0.5) return null;
+    }
+  }
+  // Balls and waiting as they would be, so an in-place answer never leaves a queue.
+  const trial = stations.map((s) => ({ ...s }));
+  equipPhase(trial, trial.map((s) => activityOfStation(params, s)), request.equipment, [], phase.name);
+  if (trial.some((s) => (s.waiting ?? 0) > (ctx.cold ? 0 : 1))) return null;
+  void kindModule;
+  void layoutOf;
+  return { ...phase, stations };
 }
 
-/** The phase's activity, or a substitute when the new numbers or rules rule it out. */
-function phaseActivity(
-  phase: Phase,
-  params: RuleParameters,
-  request: Plan['request'],
-  forbidden: Plan['forbiddenActivities'] & object,
-  rules: AllocationRules,
-  rng: () => number,
-): ActivityDefinition {
-  const current =
-    activityById(params, phase.activityId) ?? activityById(params, phase.stations[0]?.activityId ?? '');
-  const ok = (k: ActivityKind) =>
-    rules.usable(k) && kindFeasible(request.players.length, request.coaches, k, rules);
-  if (current && ok(current.kind) && !forbidden.some((f) => f.activityId === current.id)) return current;
-  const queue: ActivityKind[] = current ? [...params.kinds[current.kind].substitutes] : ['ball-mastery'];
-  const seen = new Set<ActivityKind>();
-  while (queue.length) {
-    const k = queue.shift()!;
-    if (seen.has(k)) continue;
-    seen.add(k);
-    if (ok(k)) {
-      const chosen = chooseActivity(params, request.ageGroup, forbidden, k, request.focus ?? [], rng);
-      if (chosen) return chosen;
-    }
-    queue.push(...params.kinds[k].substitutes);
-  }
-  return params.activities.find((a) => a.kind === 'ball-mastery')!;
+function phaseOwner(request: Plan['request']): Pick<Plan, 'request'> {
+  return { request };
+}
+
+/** Outfield players of a station (keepers in goal are extra to a group's size). */
+function outfieldAfter(s: Station): number {
+  return s.playerIds.length - (s.roles.goalkeeper?.filter((id) => s.playerIds.includes(id)).length ?? 0);
 }
 
 /**
- * Matches existing stations to the target groups by kind and size (largest with largest, which
- * minimises how many players must change), then fills gaps from the pool of displaced players
- * and arrivals.
+ * The new phase's stations renamed after the old ones they share most players with (the best
+ * matching), so "who moves" counts only real changes of group.
  */
-function regroup(
-  phase: Phase,
-  targets: GroupPlan[],
-  removed: Set<string>,
-  arrivals: PresentPlayer[],
-  byId: Map<string, PresentPlayer>,
-  activity: ActivityDefinition,
-  phaseIndex: number,
-  ctx: Parameters<typeof makeStation>[0],
-) {
-  const current = phase.stations.map((s) => ({
-    station: s,
-    ids: s.playerIds.filter((id) => !removed.has(id)),
-  }));
-  const slots = targets.map((plan) => ({
-    plan,
-    station: undefined as Station | undefined,
-    ids: [] as string[],
-  }));
-  const kinds = [...new Set(targets.map((t) => t.kind))];
-  const matched = new Set<Station>();
-  for (const kind of kinds) {
-    const mine = slots.filter((s) => s.plan.kind === kind).sort((a, b) => b.plan.players - a.plan.players);
-    const theirs = current
-      .filter((c) => c.station.activityKind === kind && c.ids.length > 0)
-      .sort((a, b) => b.ids.length - a.ids.length);
-    mine.forEach((slot, i) => {
-      const c = theirs[i];
-      if (!c) return;
-      slot.station = c.station;
-      slot.ids = c.ids;
-      matched.add(c.station);
-    });
-  }
-  // When the activity changed, a group that stays together is still no move: match the rest by size.
-  const openSlots = slots.filter((s) => !s.station).sort((a, b) => b.plan.players - a.plan.players);
-  const spare = current
-    .filter((c) => !matched.has(c.station) && c.ids.length > 0)
-    .sort((a, b) => b.ids.length - a.ids.length);
-  openSlots.forEach((slot, i) => {
-    const c = spare[i];
-    if (!c) return;
-    slot.station = c.station;
-    slot.ids = c.ids;
-    matched.add(c.station);
-  });
-  const pool: { id: string; from: string | null }[] = [];
-  for (const c of current)
-    if (!matched.has(c.station)) for (const id of c.ids) pool.push({ id, from: c.station.id });
-  for (const slot of slots) {
-    while (slot.ids.length > slot.plan.players) {
-      // Move an outfield player; a goalkeeper stays in goal.
-      const idx = lastIndex(slot.ids, (id) => !byId.get(id)?.goalkeeper);
-      const [id] = slot.ids.splice(idx >= 0 ? idx : slot.ids.length - 1, 1);
-      pool.push({ id, from: slot.station!.id });
-    }
-  }
-  for (const p of arrivals) pool.push({ id: p.id, from: null });
-
-  const usedIds = new Set(phase.stations.map((s) => s.id));
-  let nextNumber = phase.stations.length + 1;
+function matchIds(before: Phase, after: Phase, phaseIndex: number): Phase {
+  const oldSets = before.stations.map((s) => new Set(s.playerIds));
+  const overlap = after.stations.map((s) => oldSets.map((set) => s.playerIds.filter((id) => set.has(id)).length));
+  const assignment = bestAssignment(overlap, before.stations.length);
+  const used = new Set(assignment.filter((j) => j >= 0).map((j) => before.stations[j].id));
+  let next = 1;
   const freshId = () => {
-    while (usedIds.has(`p${phaseIndex + 1}-s${nextNumber}`)) nextNumber++;
-    const id = `p${phaseIndex + 1}-s${nextNumber++}`;
-    usedIds.add(id);
+    while (used.has(`p${phaseIndex + 1}-s${next}`)) next++;
+    const id = `p${phaseIndex + 1}-s${next++}`;
+    used.add(id);
     return id;
   };
-  const stations = slots.map((slot) => {
-    const wantsKeeper =
-      GOALKEEPER_KINDS.includes(slot.plan.kind) && !slot.ids.some((id) => byId.get(id)?.goalkeeper);
-    const id = slot.station?.id ?? freshId();
-    while (slot.ids.length < slot.plan.players && pool.length) {
-      let k =
-        wantsKeeper && !slot.ids.some((x) => byId.get(x)?.goalkeeper)
-          ? pool.findIndex((p) => byId.get(p.id)?.goalkeeper)
-          : -1;
-      if (k < 0) k = 0;
-      const [p] = pool.splice(k, 1);
-      slot.ids.push(p.id);
-    }
-    const players = slot.ids.map((x) => byId.get(x)!);
-    const unchanged =
-      slot.station &&
-      slot.station.activityKind === slot.plan.kind &&
-      slot.station.coachJoins === slot.plan.coachJoins &&
-      sameMembers(slot.station.playerIds, slot.ids);
-    if (unchanged) return slot.station!;
-    const chosen =
-      slot.plan.kind === activity.kind
-        ? activity
-        : (ctx.params.activities.find((a) => a.kind === slot.plan.kind) ?? activity);
-    const fresh = makeStation(ctx, id, chosen, slot.plan, players, {});
-    if (slot.station && slot.station.activityKind === slot.plan.kind) {
-      // Same activity, new members: the area follows the table for the new size.
-      return {
-        ...fresh,
-        position: slot.station.position,
-        roles: assignRoles(slot.plan.kind, players, slot.plan.coachJoins, ctx.params, ctx.request.level),
-      };
-    }
-    return fresh;
-  });
-  return stations;
+  const stations = after.stations.map((s, i) => ({ ...s, id: assignment[i] >= 0 ? before.stations[assignment[i]].id : freshId() }));
+  return { ...after, name: before.name, stations };
 }
 
-/** Every player whose station differs between two versions of a phase (null: arriving or leaving). */
+/** For each new station, the old station it takes the name of (or -1): most shared players overall. */
+function bestAssignment(overlap: number[][], oldCount: number): number[] {
+  const n = overlap.length;
+  if (oldCount <= 12) {
+    // Exact: dynamic programming over subsets of the old stations.
+    let states = new Map<number, { value: number; picks: number[] }>([[0, { value: 0, picks: [] }]]);
+    for (let i = 0; i < n; i++) {
+      const next = new Map<number, { value: number; picks: number[] }>();
+      for (const [mask, st] of states) {
+        const keep = (m: number, value: number, pick: number) => {
+          const cur = next.get(m);
+          if (!cur || value > cur.value) next.set(m, { value, picks: [...st.picks, pick] });
+        };
+        keep(mask, st.value, -1);
+        for (let j = 0; j < oldCount; j++) {
+          if (mask & (1 << j)) continue;
+          keep(mask | (1 << j), st.value + overlap[i][j], j);
+        }
+      }
+      states = next;
+    }
+    let best = { value: -1, picks: [] as number[] };
+    for (const st of states.values()) if (st.value > best.value) best = st;
+    return best.picks;
+  }
+  const taken = new Set<number>();
+  return overlap.map((row) => {
+    let bestJ = -1;
+    row.forEach((v, j) => {
+      if (!taken.has(j) && (bestJ < 0 || v > row[bestJ])) bestJ = j;
+    });
+    if (bestJ >= 0) taken.add(bestJ);
+    return bestJ;
+  });
+}
+
+/** Every player whose group differs between two versions of a phase (null: arriving or leaving). */
 function movesBetween(before: Phase, after: Phase, phaseIndex: number): PlayerMove[] {
   const was = new Map<string, string>();
   for (const s of before.stations) for (const id of s.playerIds) was.set(id, s.id);
@@ -315,34 +235,6 @@ function movesBetween(before: Phase, after: Phase, phaseIndex: number): PlayerMo
     const to = now.get(id) ?? null;
     if (to !== from) moves.push({ playerId: id, fromStationId: from, toStationId: to, phaseIndex });
   }
-  for (const [id, to] of now)
-    if (!was.has(id)) moves.push({ playerId: id, fromStationId: null, toStationId: to, phaseIndex });
+  for (const [id, to] of now) if (!was.has(id)) moves.push({ playerId: id, fromStationId: null, toStationId: to, phaseIndex });
   return moves;
-}
-
-function sameMembers(a: string[], b: string[]): boolean {
-  return a.length === b.length && a.every((id) => b.includes(id));
-}
-
-function lastIndex<T>(items: T[], test: (item: T) => boolean): number {
-  for (let i = items.length - 1; i >= 0; i--) if (test(items[i])) return i;
-  return -1;
-}
-
-/** Keeps the stations where they were when nothing now overlaps or leaves the space. */
-function keepPositions(
-  stations: Station[],
-  before: Phase,
-  space: Plan['request']['space'],
-): Station[] | null {
-  const oldIds = new Set(before.stations.map((s) => s.id));
-  if (stations.some((s) => !oldIds.has(s.id))) return null;
-  const rects = stations.map((s) => rectOf(s.position, s.area));
-  for (let i = 0; i < rects.length; i++) {
-    if (!insideSpace(rects[i], space)) return null;
-    for (let j = i + 1; j < rects.length; j++) {
-      if (overlaps(rects[i], rects[j]) || gapBetween(rects[i], rects[j]) < 0.5) return null;
-    }
-  }
-  return stations;
 }

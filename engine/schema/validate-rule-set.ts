@@ -4,7 +4,8 @@
  * keep-ball never 5v1 or worse, every kind playable).
  */
 import type { ErrorObject, ValidateFunction } from 'ajv';
-import { ACTIVITY_KINDS, LEVELS, type RuleSetDocument } from '../../shared/types';
+import { AGE_GROUPS, LEVELS, STATION_KINDS, type RuleSetDocument } from '../../shared/types';
+import { kindLayouts } from '../kinds/registry';
 // Precompiled from shared/schemas/rule-set.schema.json: no eval, so it runs under the app's CSP.
 import generated from './generated/rule-set.validator';
 
@@ -80,16 +81,33 @@ function semanticErrors(doc: RuleSetDocument): PointerError[] {
       });
     else activityIds.set(a.id, i);
   });
-  for (const kind of ACTIVITY_KINDS) {
-    if (!params.activities.some((a) => a.kind === kind)) {
+  for (const kind of STATION_KINDS) {
+    if (!params.activities.some((a) => a.kind === kind && !a.retired)) {
       errors.push({
         pointer: '/parameters/activities',
         message: `needs at least one activity of kind ${kind}`,
       });
     }
   }
+  params.activities.forEach((a, i) => {
+    const at = `/parameters/activities/${i}`;
+    if (a.layout !== undefined && !kindLayouts(a.kind).some((l) => l.id === a.layout)) {
+      errors.push({
+        pointer: `${at}/layout`,
+        message: `must be one of ${kindLayouts(a.kind)
+          .map((l) => l.id)
+          .join(', ')} for ${a.kind}`,
+      });
+    }
+    if (AGE_GROUPS.indexOf(a.ages.from) > AGE_GROUPS.indexOf(a.ages.to)) {
+      errors.push({ pointer: `${at}/ages`, message: 'needs the youngest age first' });
+    }
+    if (a.players.min > a.players.max) {
+      errors.push({ pointer: `${at}/players`, message: 'needs min ≤ max' });
+    }
+  });
 
-  for (const kind of ACTIVITY_KINDS) {
+  for (const kind of STATION_KINDS) {
     for (const level of LEVELS) {
       const g = params.groupSizes[kind][level];
       if (!(g.min <= g.preferred && g.preferred <= g.max)) {
@@ -110,10 +128,13 @@ function semanticErrors(doc: RuleSetDocument): PointerError[] {
     const kb = params.keepBall[level];
     kb.formats.forEach((f, i) => {
       const ratio = f.attackers / f.defenders;
-      if (ratio > kb.maxAttackersPerDefender || ratio > 4) {
+      if (ratio > kb.maxAttackersPerDefender || ratio > 4 || ratio < 2) {
         errors.push({
           pointer: `/parameters/keepBall/${level}/formats/${i}`,
-          message: `${f.attackers}v${f.defenders} has more than ${Math.min(4, kb.maxAttackersPerDefender)} attackers per defender`,
+          message:
+            ratio < 2
+              ? `${f.attackers}v${f.defenders} has fewer than 2 attackers per defender`
+              : `${f.attackers}v${f.defenders} has more than ${Math.min(4, kb.maxAttackersPerDefender)} attackers per defender`,
         });
       }
     });

@@ -6,3 +6,4 @@ export * from './plan-pitch';
 export * from './api';
 export * from './plan-api';
 export * from './rule-set-api';
+export * from './activity-words';

@@ -24,7 +24,19 @@ export type Level = (typeof LEVELS)[number];
 export const PLAN_KINDS = ['match-warm-up', 'training'] as const;
 export type PlanKind = (typeof PLAN_KINDS)[number];
 
-export const FOCUSES = ['passing', 'pressing', 'finishing', 'dribbling'] as const;
+/** What a session works on; a training session takes the first as its theme. */
+export const FOCUSES = [
+  'passing',
+  'receiving',
+  'dribbling',
+  '1v1',
+  'finishing',
+  'pressing',
+  'possession',
+  'transition',
+  'goalkeeping',
+  'speed',
+] as const;
 export type Focus = (typeof FOCUSES)[number];
 
 export interface PresentPlayer {
@@ -71,5 +83,9 @@ export interface PlanRequest {
   conditions?: { temperatureC?: number };
   /** The team's recent station feedback, newest first. */
   recentFeedback?: FeedbackFact[];
+  /** Activities the team used lately, newest first: others are preferred where they fit. */
+  recentActivityIds?: string[];
+  /** Activities the coach wants in this plan: used wherever they fit. */
+  pinnedActivityIds?: string[];
   seed?: string;
 }

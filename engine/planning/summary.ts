@@ -29,7 +29,13 @@ export function summarize(
   const { touches, activeShare } = estimateTouches(phases, params);
   const target = params.touchTarget;
   if (target.active && minutes >= target.fromMinutes) {
-    const values = Object.values(touches);
+    const keepers = new Set(
+      phases.flatMap((p) => p.stations.flatMap((s) => [...(s.roles.goalkeeper ?? [])])),
+    );
+    // Keepers are measured against their own work, not the outfield target.
+    const values = Object.entries(touches)
+      .filter(([id]) => !keepers.has(id))
+      .map(([, t]) => t);
     const below = values.filter((t) => t < target.minPerPlayer).length;
     if (below > 0) {
       warnings.push({

@@ -1,27 +1,33 @@
 /** Area sides from the rule set's tables: scaled with group size and level, stepped, clamped. */
-import type { ActivityKind, AgeBand, Area, AreaSize, Level, RuleParameters, Space } from '../../shared/types';
+import type { AgeBand, Area, AreaSize, Level, RuleParameters, Space, StationKind } from '../../shared/types';
 
-export function areaTable(params: RuleParameters, kind: ActivityKind, band: AgeBand): AreaSize {
+export function areaTable(params: RuleParameters, kind: StationKind, band: AgeBand): AreaSize {
   return params.areas[kind][band];
 }
 
 /** Width from the table for a group of `total` (players and any coach), before steps. */
-export function baseWidth(
-  params: RuleParameters,
-  kind: ActivityKind,
-  band: AgeBand,
-  level: Level,
-  total: number,
-) {
+export function baseWidth(params: RuleParameters, kind: StationKind, band: AgeBand, level: Level, total: number) {
   const t = areaTable(params, kind, band);
   return t.width * Math.sqrt(Math.max(1, total) / t.forPlayers) * params.areaLevelScale[level];
+}
+
+/**
+ * The table with the kind's own floor: keep-ball needs its square metres per player and its
+ * shortest side (the club's `keepBallLimits`), whatever the table's minimum says.
+ */
+export function boundedTable(params: RuleParameters, kind: StationKind, band: AgeBand, total: number): AreaSize {
+  const t = areaTable(params, kind, band);
+  if (kind !== 'keep-ball') return t;
+  const limits = params.keepBallLimits;
+  const floor = Math.ceil(Math.max(limits.minSideM, Math.sqrt(limits.minM2PerPlayer * Math.max(1, total))));
+  return floor > t.minWidth ? { ...t, minWidth: floor, maxWidth: Math.max(t.maxWidth, floor) } : t;
 }
 
 /** Whole-metre area for a width, keeping the table's proportion and the rule's bounds and the space. */
 export function areaForWidth(table: AreaSize, width: number, space: Space): Area {
   const w = Math.min(table.maxWidth, Math.max(table.minWidth, width));
   let area = { width: Math.round(w), length: Math.round((w * table.length) / table.width) };
-  // Too big for the space: shrink proportionally, the layout warns if below the rule minimum.
+  // Too big for the space: shrink proportionally; the layout refuses it when below the rule minimum.
   const fit = Math.min(1, space.width / area.width, space.length / area.length);
   const fitRotated = Math.min(1, space.width / area.length, space.length / area.width);
   const scale = Math.max(fit, fitRotated);
@@ -32,6 +38,11 @@ export function areaForWidth(table: AreaSize, width: number, space: Space): Area
     };
   }
   return area;
+}
+
+/** Whether an area keeps the table's minimum on its shorter side. */
+export function meetsMinimum(table: AreaSize, area: Area): boolean {
+  return Math.min(area.width, area.length) >= table.minWidth - 1e-9;
 }
 
 /** Steps a width by whole table steps within the rule's bounds. */
@@ -51,7 +62,7 @@ export interface StartWidth {
 }
 
 /** Start widths by activity kind, from the team's recent feedback. */
-export type StartWidths = Partial<Record<ActivityKind, StartWidth>>;
+export type StartWidths = Partial<Record<StationKind, StartWidth>>;
 
 /**
  * The start width for a group of `total`: area in proportion to players, the same square-root

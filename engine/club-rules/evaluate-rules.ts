@@ -1,6 +1,6 @@
 /** Runs the club's json-rules-engine rules on the facts and turns fired events into effects. */
 import type {
-  ActivityKind,
+  StationKind,
   ForbiddenActivity,
   Notice,
   RuleEvent,
@@ -21,10 +21,10 @@ export interface RuleOutcome {
   /** The rule set's parameters with every fired set-parameter applied. */
   parameters: RuleParameters;
   forbidden: ForbiddenActivity[];
-  required: { kind: ActivityKind; reason: string }[];
+  required: { kind: StationKind; reason: string }[];
   warnings: Notice[];
   cautions: Notice[];
-  steps: Partial<Record<ActivityKind, ProgressionStep>>;
+  steps: Partial<Record<StationKind, ProgressionStep>>;
   trace: TraceEntry[];
 }
 

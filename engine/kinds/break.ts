@@ -1,0 +1,23 @@
+/** The drinks break: a phase of its own in the timeline, with no stations. */
+import type { Phase } from '../../shared/types';
+
+export const BREAK_ACTIVITY_ID = 'drinks-break';
+
+/** A drinks break from `start` for `minutes`; `hot` says why it came early. */
+export function breakPhase(start: number, minutes: number, hot: boolean): Phase {
+  return {
+    name: hot ? 'Drinks break (heat)' : 'Drinks break',
+    activityId: BREAK_ACTIVITY_ID,
+    activityKind: 'break',
+    startMinute: start,
+    endMinute: start + minutes,
+    stations: [],
+    intensity: 1,
+    slot: 'break',
+  };
+}
+
+/** Whether a phase is a drinks break. */
+export function isBreak(phase: Pick<Phase, 'activityKind'>): boolean {
+  return phase.activityKind === 'break';
+}

@@ -1,0 +1,28 @@
+/** Cool-down for U13 and older: easy movement, light passing, stretching and a short talk. */
+import type { KindModule } from './kind-module';
+import { ballNeed, circle, coachAt, groupCount, place, tableSizes, waitingFor } from './common';
+
+export const coolDown: KindModule = {
+  kind: 'cool-down',
+  layouts: [{ id: 'circle', label: 'A circle, the coach in the middle' }],
+  facesShots: false,
+  targets: () => ({ ends: 0, keepers: false }),
+  sizes: (params, level, _band, activity) => tableSizes(params, 'cool-down', level, activity),
+  roles: ({ players }) => ({ roles: { rotation: players.map((p) => p.id) }, format: 'everyone together' }),
+  balls: (activity, station) => ballNeed(activity.balls, groupCount(station), Math.ceil(groupCount(station) / 4)),
+  bibs: () => 0,
+  waiting: (station, activity) => waitingFor(station, activity),
+  draw: ({ across, along }, station) => {
+    const r = Math.max(1, Math.min(across, along) * 0.38);
+    return {
+      essential: [],
+      outline: [],
+      extra: [],
+      positions: [
+        ...place(station.playerIds, circle(station.playerIds.length, across / 2, along / 2, r), 'player'),
+        ...coachAt(station, { u: across / 2, v: along / 2 }),
+      ],
+      markerAdvice: 'no markers needed',
+    };
+  },
+};

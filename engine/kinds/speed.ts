@@ -1,0 +1,48 @@
+/** Speed: short, sharp reaction and sprint races in lanes, with full rest between goes. */
+import type { KindModule, LocalPoint } from './kind-module';
+import { ballNeed, coachAt, groupCount, place, row, tableSizes, waitingFor } from './common';
+
+export const speed: KindModule = {
+  kind: 'speed',
+  layouts: [
+    { id: 'lanes', label: 'Pairs race side by side in lanes' },
+    { id: 'race-to-ball', label: 'A ball between two players: race to win it and dribble over the line' },
+  ],
+  facesShots: false,
+  targets: () => ({ ends: 0, keepers: false }),
+  sizes: (params, level, _band, activity) => tableSizes(params, 'speed', level, activity),
+  roles: ({ players, coachJoins }) => {
+    const total = players.length + coachJoins;
+    const lanes = Math.max(1, Math.floor(total / 2));
+    return {
+      roles: { rotation: players.map((p) => p.id) },
+      format: `${lanes} lane${lanes === 1 ? '' : 's'} of ${total % 2 ? '2–3' : '2'}`,
+      points: ['Full rest between races: walk back, then go again'],
+    };
+  },
+  balls: (activity, station) => ballNeed(activity.balls, groupCount(station), Math.max(1, Math.floor(groupCount(station) / 2))),
+  bibs: () => 0,
+  waiting: (station, activity) => waitingFor(station, activity),
+  draw: ({ across, along }, station, layout) => {
+    const total = station.playerIds.length + station.coachJoins;
+    const lanes = Math.max(1, Math.floor(total / 2));
+    const centres = row(lanes, 0, across, 0.5);
+    const essential: LocalPoint[] = centres.flatMap((c) => [
+      { u: c.u, v: 0 },
+      { u: c.u, v: along },
+    ]);
+    const extra = layout === 'race-to-ball' ? centres.map((c) => ({ u: c.u, v: along / 2 })) : [];
+    const stand = Array.from({ length: total }, (_, i) => {
+      const c = centres[Math.min(Math.floor(i / 2), lanes - 1)];
+      const side = i % 2 === 0 ? -0.5 : 0.5;
+      return { u: c.u + side + (i >= lanes * 2 ? 0.5 : 0), v: i >= lanes * 2 ? 0.2 : 1 };
+    });
+    return {
+      essential,
+      outline: [],
+      extra,
+      positions: [...place(station.playerIds, stand, 'player'), ...coachAt(station, stand[station.playerIds.length] ?? centres[0])],
+      markerAdvice: 'mark the start and finish lines with bibs, bags or bottles',
+    };
+  },
+};

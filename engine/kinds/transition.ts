@@ -1,0 +1,53 @@
+/** Transition: attack against defence, and the moment the ball changes hands. */
+import type { KindModule } from './kind-module';
+import { ballNeed, corners, groupCount, place, tableSizes, twoSides, waitingFor } from './common';
+import { spreadAcross } from './shooting-game';
+
+export const transition: KindModule = {
+  kind: 'transition',
+  layouts: [
+    { id: 'waves', label: 'Attackers go at a goal; defenders who win it counter through the gates' },
+    { id: 'two-goals', label: 'Two sides, two goals; switch from attack to defence the moment the ball is lost' },
+  ],
+  facesShots: true,
+  targets: (layout) => (layout === 'two-goals' ? { ends: 2, keepers: true } : { ends: 1, keepers: false }),
+  sizes: (params, level, _band, activity) => tableSizes(params, 'transition', level, activity),
+  roles: ({ players, keepers }) => {
+    const ids = players.map((p) => p.id);
+    const teams = twoSides(ids, keepers);
+    const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
+    return {
+      roles: { teams, attackers: teams[0], defenders: teams[1], goalkeeper: keepers },
+      format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + keepers' : ''}`,
+    };
+  },
+  balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 3),
+  bibs: (station) => station.roles.teams?.[0].length ?? 0,
+  waiting: (station, activity) => waitingFor(station, activity),
+  draw: ({ across, along }, station, layout) => {
+    const keepers = station.roles.goalkeeper ?? [];
+    const [a, b] = station.roles.teams ?? [[], []];
+    const outA = a.filter((id) => !keepers.includes(id));
+    const outB = b.filter((id) => !keepers.includes(id));
+    const positions = [
+      ...place(outA, spreadAcross(outA.length, along * 0.3, across), 'team-a'),
+      ...place(outB, spreadAcross(outB.length, along * 0.7, across), 'team-b'),
+      ...place(a.filter((id) => keepers.includes(id)), [{ u: across / 2, v: 0.6 }], 'goalkeeper'),
+      ...place(b.filter((id) => keepers.includes(id)), [{ u: across / 2, v: along - 0.6 }], 'goalkeeper'),
+    ];
+    return {
+      essential: [],
+      outline: corners(across, along),
+      extra: [],
+      gates:
+        layout === 'two-goals'
+          ? []
+          : [
+              { u: across * 0.25, v: 0, edge: 'near' },
+              { u: across * 0.75, v: 0, edge: 'near' },
+            ],
+      positions,
+      markerAdvice: 'mark the corners and the counter gates with bibs, bags or bottles',
+    };
+  },
+};

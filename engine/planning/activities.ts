@@ -1,0 +1,115 @@
+/**
+ * Which activities a request may use, and how well each fits: age, level, the club's rules, the
+ * kit, the weather, the focus, the coach's pins and what the team did lately.
+ */
+import type {
+  ActivityDefinition,
+  ActivityKind,
+  AgeGroup,
+  ForbiddenActivity,
+  Level,
+  RuleParameters,
+  StationKind,
+} from '../../shared/types';
+import { AGE_GROUPS } from '../../shared/types';
+import { kindModule, layoutOf } from '../kinds/registry';
+import type { BuildContext } from './context';
+
+/** Keepers the activity's set-up can put in goal (0 when it has no goal for them). */
+function hostsKeepers(a: ActivityDefinition): number {
+  const m = kindModule(a.kind);
+  const t = m.targets(layoutOf(a));
+  return m.facesShots && t.keepers ? t.ends : 0;
+}
+
+/** Why a kind may not be used, or null when it may. */
+export function kindBlocked(
+  params: RuleParameters,
+  age: AgeGroup,
+  forbidden: ForbiddenActivity[],
+  kind: ActivityKind,
+): string | null {
+  if (!params.ageGroups[age].allowedKinds.includes(kind)) return `not in the club's activities for ${age}`;
+  const rule = forbidden.find((f) => f.kind === kind && !f.activityId);
+  return rule ? rule.reason : null;
+}
+
+/** Why an activity may not be used for this age and level, or null when it may. */
+export function activityBlocked(
+  params: RuleParameters,
+  age: AgeGroup,
+  level: Level,
+  forbidden: ForbiddenActivity[],
+  activity: ActivityDefinition,
+): string | null {
+  if (activity.retired) return 'retired by the club';
+  const byKind = kindBlocked(params, age, forbidden, activity.kind);
+  if (byKind) return byKind;
+  const rule = forbidden.find((f) => f.activityId === activity.id);
+  if (rule) return rule.reason;
+  if (!suitsAge(activity, age)) return `made for ${activity.ages.from}–${activity.ages.to}`;
+  if (!activity.levels.includes(level)) return `not for ${level} groups`;
+  return null;
+}
+
+export function suitsAge(activity: Pick<ActivityDefinition, 'ages'>, age: AgeGroup): boolean {
+  const i = AGE_GROUPS.indexOf(age);
+  return i >= AGE_GROUPS.indexOf(activity.ages.from) && i <= AGE_GROUPS.indexOf(activity.ages.to);
+}
+
+export function activityById(params: RuleParameters, id: string): ActivityDefinition | undefined {
+  return params.activities.find((a) => a.id === id);
+}
+
+/** The usable activities of a kind for the request, best first (the seeded jitter breaks ties). */
+/** What choosing needs from the build context. */
+export type ChoiceContext = Pick<
+  BuildContext,
+  'params' | 'request' | 'forbidden' | 'rng' | 'focus' | 'recent' | 'pinned' | 'cold' | 'keepers'
+>;
+
+export function rankedActivities(ctx: ChoiceContext, kind: StationKind, kindRank = 0): Ranked[] {
+  const { params, request } = ctx;
+  const out: Ranked[] = [];
+  for (const a of params.activities) {
+    if (a.kind !== kind) continue;
+    if (activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, a)) continue;
+    out.push({ activity: a, score: activityScore(ctx, a) - kindRank + ctx.rng() * 0.5 });
+  }
+  return out.sort((x, y) => y.score - x.score);
+}
+
+export interface Ranked {
+  activity: ActivityDefinition;
+  score: number;
+}
+
+/**
+ * How well an activity fits: the theme and focuses it serves, a pin, how lately the team used it,
+ * its intensity against the day's limit and its balls against the bag.
+ */
+export function activityScore(ctx: ChoiceContext, a: ActivityDefinition): number {
+  const { request, params } = ctx;
+  let score = 0;
+  ctx.focus.forEach((f, i) => {
+    if (a.focus.includes(f)) score += i === 0 ? 5 : 3;
+  });
+  if (ctx.pinned.has(a.id)) score += 100;
+  if (ctx.recent.has(a.id)) score -= params.variety.recentPenalty;
+  if (a.intensity > params.intensity.max) score -= 50;
+  const n = request.players.length;
+  const balls = request.equipment.balls;
+  const young = params.ageGroups[request.ageGroup].index <= 12;
+  const short =
+    a.balls === 'each' ? Math.max(0, n - balls) / n : a.balls === 'pair' ? Math.max(0, Math.ceil(n / 2) - balls) / n : 0;
+  // Shared balls leave players waiting: the more so, the worse, and never in the cold.
+  score -= short * (ctx.cold ? 40 : 12);
+  if (a.balls === 'none') score += balls === 0 ? 20 : young ? -30 : 0;
+  else if (balls === 0) score -= 60;
+  // Every player with a ball from the first minute when the bag allows it.
+  if (a.balls === 'each' && balls >= n && young) score += 2;
+  // Keepers who are here want a goal to stand in.
+  const hosts = hostsKeepers(a);
+  if (ctx.keepers.length >= hosts && hosts > 0) score += 2;
+  return score;
+}

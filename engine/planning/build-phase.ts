@@ -1,0 +1,455 @@
+/**
+ * One phase from its spec: the keepers' own warm-up station when it is their time, keepers in
+ * real goals once warmed up, groups within the club's sizes and the adults' station limit,
+ * roles by kind, areas, layout (last phase's grids where they still fit), markings, kit,
+ * waiting and steps. Each of the part's activities is tried in turn until one runs cleanly in
+ * the space, kit and weather; the first that runs at all is kept otherwise.
+ */
+import type {
+  ActivityDefinition,
+  Notice,
+  Phase,
+  PresentPlayer,
+  Station,
+  TraceEntry,
+} from '../../shared/types';
+import { breakPhase } from '../kinds/break';
+import { kindModule, layoutOf } from '../kinds/registry';
+import { shuffle } from '../random';
+import { rankedActivities } from './activities';
+import { allocatePhase, withStationCap, type AllocationRules, type GroupPlan } from './allocation';
+import {
+  areaForWidth,
+  baseWidth,
+  boundedTable,
+  meetsMinimum,
+  widthForGroup,
+  type StartWidths,
+} from './areas';
+import type { BuildContext } from './context';
+import { equipPhase } from './kit';
+import { packStations, reuseLayout } from './layout';
+import { markPhase } from './markings';
+import { progressionsFor } from './progressions';
+import type { PhaseSpec } from './timing';
+
+/** What building needs besides the request: the rules, warnings and trace to add to. */
+export type PhaseContext = Pick<
+  BuildContext,
+  'request' | 'params' | 'band' | 'forbidden' | 'rng' | 'supervision' | 'keepers' | 'cold' | 'focus' | 'recent' | 'pinned' | 'hot'
+> & { warnings: Notice[]; trace: TraceEntry[] };
+
+interface Attempt {
+  phase: Phase;
+  clean: boolean;
+  warnings: Notice[];
+  trace: TraceEntry[];
+}
+
+export function buildPhase(
+  ctx: PhaseContext,
+  rules: AllocationRules,
+  spec: PhaseSpec,
+  phaseIndex: number,
+  startWidths: StartWidths,
+  previous: Phase | undefined,
+): Phase {
+  if (spec.slot === 'break') return breakPhase(spec.startMinute, spec.endMinute - spec.startMinute, ctx.hot);
+  if (spec.continues && previous) return continued(spec, phaseIndex, previous);
+  let fallback: Attempt | null = null;
+  for (const activity of spec.candidates.slice(0, 6)) {
+    const attempt = tryActivity(ctx, rules, spec, activity, phaseIndex, startWidths, previous);
+    if (!attempt) continue;
+    if (attempt.clean) return commit(ctx, attempt);
+    fallback ??= attempt;
+  }
+  if (fallback) return commit(ctx, fallback);
+  return sharedGridPhase(ctx, spec, phaseIndex);
+}
+
+function commit(ctx: PhaseContext, attempt: Attempt): Phase {
+  for (const w of attempt.warnings) {
+    if (!ctx.warnings.some((x) => x.code === w.code && x.message === w.message)) ctx.warnings.push(w);
+  }
+  ctx.trace.push(...attempt.trace);
+  return attempt.phase;
+}
+
+/** The second part of a phase split by a drinks break: the same groups in the same places. */
+function continued(spec: PhaseSpec, phaseIndex: number, previous: Phase): Phase {
+  const stations = previous.stations.map((s, k) => ({ ...s, id: `p${phaseIndex + 1}-s${k + 1}` }));
+  return {
+    name: spec.name,
+    activityId: previous.activityId,
+    activityKind: previous.activityKind,
+    startMinute: spec.startMinute,
+    endMinute: spec.endMinute,
+    intensity: previous.intensity,
+    slot: spec.slot,
+    stations,
+  };
+}
+
+function tryActivity(
+  ctx: PhaseContext,
+  rules: AllocationRules,
+  spec: PhaseSpec,
+  activity: ActivityDefinition,
+  phaseIndex: number,
+  startWidths: StartWidths,
+  previous: Phase | undefined,
+): Attempt | null {
+  const { request, params } = ctx;
+  const warnings: Notice[] = [];
+  const trace: TraceEntry[] = [];
+  const players = shuffle(request.players, ctx.rng);
+  let coachesFree = request.coaches;
+
+  // The keepers' own warm-up, when it is their time and a goal is free for it.
+  const keeperGroups = spec.keeperWarmUp ? keeperWarmUpGroups(ctx, players, coachesFree) : [];
+  coachesFree -= keeperGroups.reduce((s, g) => s + g.coachJoins, 0);
+  const inWarmUp = new Set(keeperGroups.flatMap((g) => g.players.map((p) => p.id)));
+  const rest = players.filter((p) => !inWarmUp.has(p.id));
+
+  const module = kindModule(activity.kind);
+  const targets = module.targets(layoutOf(activity));
+  const keeperIds = new Set(ctx.keepers.map((k) => k.id));
+  const pool = spec.keepersInGoal && module.facesShots && targets.keepers ? rest.filter((p) => keeperIds.has(p.id)) : [];
+  const per = targets.ends === 2 ? 2 : 1;
+  const goalsLeft = request.equipment.goals - keeperGroups.length;
+  let wantIn = per === 2 ? 2 * Math.min(Math.floor(pool.length / 2), Math.floor(goalsLeft / 2)) : Math.min(pool.length, goalsLeft);
+
+  const cap0 = Math.max(1, ctx.supervision.maxStations - keeperGroups.length);
+  let cap = cap0;
+  const previousMain = previous?.stations.filter((s) => s.activityKind !== 'goalkeeping').length;
+  rules = previousMain ? { ...rules, sameStationsAs: previousMain } : rules;
+  for (;;) {
+    let inGoal = wantIn;
+    let allocation = allocatePhase(rest.length - inGoal, coachesFree, activity, withStationCap(rules, cap));
+    for (let i = 0; i < 3 && Number.isFinite(allocation.cost); i++) {
+      const hosts = allocation.groups.filter((g) => g.activity === activity).length;
+      if (inGoal <= per * hosts) break;
+      inGoal = per * hosts;
+      allocation = allocatePhase(rest.length - inGoal, coachesFree, activity, withStationCap(rules, cap));
+    }
+    if (!Number.isFinite(allocation.cost)) return null;
+    if (cap === cap0 && cap0 < rest.length) {
+      const free = allocatePhase(rest.length - inGoal, coachesFree, activity, rules);
+      if (Number.isFinite(free.cost) && free.groups.length > allocation.groups.length) {
+        warnings.push({
+          code: 'stations-per-adult',
+          message: `With ${request.coaches || 'no'} adult${request.coaches === 1 ? '' : 's'}, at most ${ctx.supervision.maxStations} stations run at once, so groups are larger than usual; another adult or parent helper would let more groups play.`,
+        });
+      }
+    }
+    const keepersIn = pool.slice(0, inGoal);
+    const groups = fillGroups(allocation.groups, rest, keepersIn, per, activity);
+    const stations: Station[] = groups.map((g, k) =>
+      makeStation(ctx, `p${phaseIndex + 1}-s${k + 1}`, g.plan.activity, g.plan, g.players, g.keepers, startWidths),
+    );
+    const activities = groups.map((g) => g.plan.activity);
+    keeperGroups.forEach((g, k) => {
+      stations.push(
+        makeStation(
+          ctx,
+          `p${phaseIndex + 1}-s${groups.length + k + 1}`,
+          g.activity,
+          { activity: g.activity, players: g.players.length, coachJoins: g.coachJoins },
+          g.players,
+          g.keepers,
+          {},
+        ),
+      );
+      activities.push(g.activity);
+    });
+    const placed = placeStations(ctx, stations, previous);
+    if (placed) {
+      if (cap < cap0) {
+        warnings.push({
+          code: 'fewer-stations',
+          message: `${spec.name}: fewer, larger groups so the stations fit the space.`,
+        });
+      }
+      return finishAttempt(ctx, spec, placed, activities, allocation.cost, previous, warnings, trace);
+    }
+    const main = groups.length;
+    if (main <= 1) return null;
+    cap = main - 1;
+  }
+}
+
+function finishAttempt(
+  ctx: PhaseContext,
+  spec: PhaseSpec,
+  stations: Station[],
+  activities: ActivityDefinition[],
+  cost: number,
+  previous: Phase | undefined,
+  warnings: Notice[],
+  trace: TraceEntry[],
+): Attempt {
+  const { request, params, band } = ctx;
+  const previousGoals = previous
+    ? previous.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
+    : [];
+  markPhase(stations, activities, request.space, params, request.equipment, warnings, spec.name, previousGoals);
+  equipPhase(stations, activities, request.equipment, warnings, spec.name);
+  stations.forEach((s, i) => {
+    s.progressions = progressionsFor(s, activities[i], params, band, request.space);
+  });
+  const coachStations = stations.filter((s) => s.coachJoins);
+  if (coachStations.length) {
+    trace.push({
+      ruleId: 'engine.coach-fill-in',
+      fired: true,
+      effect: `${spec.name}: a coach joins ${coachStations.length} group(s) so numbers work or to serve a keeper`,
+    });
+  }
+  const allowedWait = ctx.cold ? 0 : 1;
+  const main = activities[0];
+  // Leftover groups in another activity are a last resort: another activity may fit everyone.
+  const clean =
+    Number.isFinite(cost) &&
+    activities.every((a) => a === main || a.kind === 'goalkeeping') &&
+    stations.every(
+      (s, i) =>
+        (s.waiting ?? 0) <= allowedWait &&
+        (activities[i].balls === 'none' || s.equipment.balls > 0) &&
+        !(s.notes ?? []).some((n) => n.startsWith('No goal or cones')),
+    );
+  return {
+    phase: {
+      name: spec.name,
+      activityId: main.id,
+      activityKind: main.kind,
+      startMinute: spec.startMinute,
+      endMinute: spec.endMinute,
+      intensity: main.intensity,
+      slot: spec.slot,
+      stations,
+    },
+    clean,
+    warnings,
+    trace,
+  };
+}
+
+interface KeeperGroup {
+  activity: ActivityDefinition;
+  players: PresentPlayer[];
+  keepers: string[];
+  coachJoins: 0 | 1;
+}
+
+/**
+ * Keepers in groups of up to three at a real goal each; a lone keeper is served by a coach when a
+ * second adult can watch the rest, otherwise by a team-mate.
+ */
+function keeperWarmUpGroups(ctx: PhaseContext, players: PresentPlayer[], coaches: number): KeeperGroup[] {
+  const keepers = ctx.keepers.filter((k) => players.some((p) => p.id === k.id));
+  const goals = ctx.request.equipment.goals;
+  const count = Math.min(goals, Math.ceil(keepers.length / 3));
+  if (!count) return [];
+  const ranked = rankedActivities(ctx, 'goalkeeping');
+  if (!ranked.length) return [];
+  const outfield = players.filter((p) => !keepers.some((k) => k.id === p.id));
+  let adults = coaches;
+  const groups: KeeperGroup[] = [];
+  for (let g = 0; g < count; g++) {
+    const mine = keepers.filter((_, i) => i % count === g);
+    let coachJoins: 0 | 1 = 0;
+    const members = [...mine];
+    if (mine.length === 1) {
+      if (adults >= 2) {
+        coachJoins = 1;
+        adults--;
+      } else if (outfield.length) {
+        members.push(outfield.pop()!);
+      }
+    }
+    const total = members.length + coachJoins;
+    const fit = ranked.find((r) => r.activity.players.min <= total && r.activity.players.max >= total) ?? ranked[0];
+    groups.push({ activity: fit.activity, players: members, keepers: mine.map((k) => k.id), coachJoins });
+  }
+  return groups;
+}
+
+/**
+ * Players into the planned groups: keepers in goal to the first groups that host them (one, or
+ * one at each end), other keepers spread one per group, then everyone else in shuffled order.
+ */
+function fillGroups(
+  plans: GroupPlan[],
+  rest: PresentPlayer[],
+  keepersIn: PresentPlayer[],
+  per: number,
+  main: ActivityDefinition,
+) {
+  const groups = plans.map((plan) => ({ plan, players: [] as PresentPlayer[], keepers: [] as string[], outfield: 0 }));
+  const hosts = groups.filter((g) => g.plan.activity === main);
+  keepersIn.forEach((k, i) => {
+    const host = hosts[Math.floor(i / per)];
+    host.players.push(k);
+    host.keepers.push(k.id);
+  });
+  const inGoal = new Set(keepersIn.map((k) => k.id));
+  const others = rest.filter((p) => !inGoal.has(p.id));
+  // Keepers playing out go one to a group before anyone else is placed.
+  for (const k of others.filter((p) => p.goalkeeper)) {
+    const target = groups
+      .filter((g) => g.outfield < g.plan.players)
+      .sort((a, b) => keeperCount(a.players) - keeperCount(b.players))[0];
+    if (!target) break;
+    target.players.push(k);
+    target.outfield++;
+  }
+  const placed = new Set(groups.flatMap((g) => g.players.map((p) => p.id)));
+  const queue = others.filter((p) => !placed.has(p.id));
+  let next = 0;
+  for (const g of groups) {
+    while (g.outfield < g.plan.players && next < queue.length) {
+      g.players.push(queue[next++]);
+      g.outfield++;
+    }
+  }
+  return groups;
+}
+
+function keeperCount(players: PresentPlayer[]): number {
+  let n = 0;
+  for (const p of players) if (p.goalkeeper) n++;
+  return n;
+}
+
+export function makeStation(
+  ctx: Pick<BuildContext, 'params' | 'request' | 'band'>,
+  id: string,
+  activity: ActivityDefinition,
+  plan: GroupPlan,
+  players: PresentPlayer[],
+  keepers: string[],
+  startWidths: StartWidths,
+): Station {
+  const { params, request, band } = ctx;
+  const kind = activity.kind;
+  const layout = layoutOf(activity);
+  const outcome = kindModule(kind).roles({
+    activity,
+    layout,
+    players,
+    keepers,
+    coachJoins: plan.coachJoins,
+    params,
+    level: request.level,
+    band,
+  });
+  const total = players.length + plan.coachJoins;
+  const start = startWidths[kind];
+  const width = start ? widthForGroup(start, total) : baseWidth(params, kind, band, request.level, total);
+  const area = areaForWidth(boundedTable(params, kind, band, total), width, request.space);
+  return {
+    id,
+    activityId: activity.id,
+    activityKind: kind,
+    title: activity.title,
+    playerIds: players.map((p) => p.id),
+    coachJoins: plan.coachJoins,
+    roles: outcome.roles,
+    format: outcome.format,
+    area,
+    position: { x: 0, y: 0 },
+    equipment: { balls: 0, cones: 0, bibs: 0, goals: 0 },
+    conePositions: [],
+    positions: [],
+    progressions: { easier: [], harder: [] },
+    coachingPoints: [...activity.coachingPoints, ...(outcome.points ?? [])],
+    description: activity.description,
+  };
+}
+
+/**
+ * Lays the stations out: last phase's grids where they fit, else packed in rows, shrinking
+ * towards the club's minimum. Null when even that fails (the caller then tries fewer stations,
+ * then another activity — never an overlap, never below the minimum).
+ */
+export function placeStations(
+  ctx: Pick<BuildContext, 'params' | 'request' | 'band'>,
+  stations: Station[],
+  previous: Phase | undefined,
+): Station[] | null {
+  const { params, request, band } = ctx;
+  const tables = stations.map((s) => boundedTable(params, s.activityKind, band, s.playerIds.length + s.coachJoins));
+  if (stations.some((s, i) => !meetsMinimum(tables[i], s.area))) return null;
+  const buffer = params.layout.bufferM;
+  const rotatable = stations.map((s) => params.kinds[s.activityKind].rotatable);
+  if (previous?.stations.length) {
+    const reused = reuseLayout(
+      previous.stations,
+      stations.map((s, i) => ({ area: s.area, minWidth: tables[i].minWidth, maxWidth: tables[i].maxWidth, kind: s.activityKind })),
+      request.space,
+      buffer,
+      rotatable,
+    );
+    if (reused) return stations.map((s, i) => Object.assign({}, s, { area: reused[i].area, position: reused[i].position }));
+  }
+  let areas = stations.map((s) => s.area);
+  for (let attempt = 0; attempt < 12; attempt++) {
+    const placed = packStations(areas, request.space, buffer, rotatable);
+    if (placed) {
+      return stations.map((s, i) => Object.assign({}, s, { area: placed[i].area, position: placed[i].position }));
+    }
+    const next = stations.map((s, i) => {
+      const side = Math.min(areas[i].width, areas[i].length);
+      return areaForWidth(tables[i], Math.max(tables[i].minWidth, side * 0.85), request.space);
+    });
+    if (next.some((a, i) => !meetsMinimum(tables[i], a))) break;
+    if (next.every((a, i) => a.width === areas[i].width && a.length === areas[i].length)) break;
+    areas = next;
+  }
+  return null;
+}
+
+/** Everyone in one grid as large as the space and the rule allow, with the best ball or tag game. */
+function sharedGridPhase(ctx: PhaseContext, spec: PhaseSpec, phaseIndex: number): Phase {
+  const { params, request } = ctx;
+  const ranked = [
+    ...rankedActivities(ctx, 'ball-mastery'),
+    ...rankedActivities(ctx, 'tag-game'),
+  ].sort((a, b) => b.score - a.score);
+  const activity =
+    ranked[0]?.activity ?? params.activities.find((a) => a.kind === 'ball-mastery' && !a.retired) ?? params.activities[0];
+  const table = params.areas[activity.kind][ctx.band];
+  const area = {
+    width: Math.max(1, Math.floor(Math.min(request.space.width, table.maxWidth))),
+    length: Math.max(1, Math.floor(Math.min(request.space.length, table.maxWidth))),
+  };
+  ctx.warnings.push({
+    code: 'space-too-small',
+    message: `${spec.name}: the stations do not fit in ${request.space.width} × ${request.space.length} m even at the club's minimum sizes, so everyone works in one shared grid.`,
+  });
+  ctx.trace.push({ ruleId: 'engine.layout-fallback', fired: true, effect: `${spec.name}: one shared grid (${activity.title})` });
+  const station = makeStation(
+    ctx,
+    `p${phaseIndex + 1}-s1`,
+    activity,
+    { activity, players: request.players.length, coachJoins: 0 },
+    request.players,
+    [],
+    {},
+  );
+  station.area = area;
+  const stations = [station];
+  markPhase(stations, [activity], request.space, params, request.equipment, ctx.warnings, spec.name);
+  equipPhase(stations, [activity], request.equipment, ctx.warnings, spec.name);
+  station.progressions = progressionsFor(station, activity, params, ctx.band, request.space);
+  return {
+    name: spec.name,
+    activityId: activity.id,
+    activityKind: activity.kind,
+    startMinute: spec.startMinute,
+    endMinute: spec.endMinute,
+    intensity: activity.intensity,
+    slot: spec.slot,
+    stations,
+  };
+}

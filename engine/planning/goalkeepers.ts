@@ -1,0 +1,103 @@
+/**
+ * Goalkeepers: who may go in goal today, which phase gives them their own warm-up (handling,
+ * footwork, then shots) and from which phase they stand in a real goal.
+ */
+import type { AgeBand, Notice, PlanRequest, PresentPlayer, RuleParameters } from '../../shared/types';
+import { kindModule, layoutOf } from '../kinds/registry';
+import type { BuildContext } from './context';
+import type { PhaseSpec } from './timing';
+
+/** Keepers who may go in goal: flagged, the age plays with goalkeepers, and a goal in the bag. */
+export function eligibleKeepers(
+  request: PlanRequest,
+  params: RuleParameters,
+  band: AgeBand,
+): { keepers: PresentPlayer[]; warnings: Notice[] } {
+  const flagged = request.players.filter((p) => p.goalkeeper);
+  if (!flagged.length) return { keepers: [], warnings: [] };
+  if (!params.gameFormats[band].goalkeepers) {
+    return {
+      keepers: [],
+      warnings: [
+        {
+          code: 'keepers-play-out',
+          message: `At ${request.ageGroup} everyone plays out: small games at this age have no goalkeepers, so today’s keepers join in as outfield players.`,
+          source: 'US Soccer Player Development Initiatives (2016): 4v4 for U6–U8, no goalkeepers',
+        },
+      ],
+    };
+  }
+  if (request.equipment.goals < 1) {
+    return {
+      keepers: [],
+      warnings: [
+        {
+          code: 'keepers-no-goal',
+          message: 'No goals in the bag: goalkeepers play as outfield players today — a keeper only goes in goal where a real goal stands.',
+        },
+      ],
+    };
+  }
+  return { keepers: flagged, warnings: [] };
+}
+
+/** Whether keepers can stand in goal at the phase's first choice of activity. */
+function hostsKeepers(spec: PhaseSpec): boolean {
+  const a = spec.candidates[0];
+  if (!a) return false;
+  const m = kindModule(a.kind);
+  return m.facesShots && m.targets(layoutOf(a)).keepers;
+}
+
+const NOT_FOR_KEEPERS = new Set(['break', 'movement', 'cool-down']);
+
+/**
+ * Marks the warm-up phase(s) and the phases where keepers go in goal: they warm up in the last
+ * suitable phase before the first one where they would face shots (a match warm-up always
+ * warms them up), and a short warm-up phase takes the one before it too.
+ */
+export function planKeepers(ctx: BuildContext, specs: PhaseSpec[]): void {
+  if (!ctx.keepers.length) return;
+  const playable = specs.map((s, i) => ({ s, i })).filter(({ s }) => s.slot !== 'break');
+  let first = playable.find(({ s }) => hostsKeepers(s))?.i ?? -1;
+  if (first < 0) {
+    if (ctx.request.kind !== 'match-warm-up') return;
+    first = playable.at(-1)?.i ?? -1;
+    if (first < 0) return;
+  }
+  const suits = (s: PhaseSpec) => !NOT_FOR_KEEPERS.has(s.slot) && !s.continues;
+  let warm = -1;
+  for (let i = first - 1; i >= 0; i--) {
+    if (suits(specs[i])) {
+      warm = i;
+      break;
+    }
+  }
+  if (warm < 0) {
+    if (!suits(specs[first])) return;
+    warm = first;
+  }
+  specs[warm].keeperWarmUp = true;
+  const marked = [specs[warm].name];
+  if (specs[warm].endMinute - specs[warm].startMinute < 6) {
+    for (let j = warm - 1; j >= 0; j--) {
+      if (specs[j].slot === 'break') continue;
+      if (suits(specs[j])) {
+        specs[j].keeperWarmUp = true;
+        marked.unshift(specs[j].name);
+      }
+      break;
+    }
+  }
+  for (let i = warm + 1; i < specs.length; i++) {
+    if (specs[i].slot === 'break') continue;
+    if (specs[i].continues && specs[i - 1]?.keeperWarmUp) specs[i].keeperWarmUp = true;
+    else specs[i].keepersInGoal = true;
+  }
+  const inGoal = specs.find((s) => s.keepersInGoal && hostsKeepers(s));
+  ctx.trace.push({
+    ruleId: 'engine.keepers',
+    fired: true,
+    effect: `${ctx.keepers.length} goalkeeper${ctx.keepers.length === 1 ? '' : 's'} warm up as keepers in ${marked.join(' and ')}${inGoal ? `, then go in goal from ${inGoal.name}` : ''}`,
+  });
+}

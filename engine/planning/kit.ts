@@ -1,0 +1,64 @@
+/**
+ * Balls and bibs for a phase's stations, never more than the bag holds: first what lets
+ * everyone play without waiting, shared fairly, then spares. Waiting is counted honestly from
+ * the places and the balls each station ends up with.
+ */
+import type { ActivityDefinition, Notice, Station } from '../../shared/types';
+import { kindModule } from '../kinds/registry';
+
+export function equipPhase(
+  stations: Station[],
+  activities: ActivityDefinition[],
+  kit: { balls: number; bibs: number },
+  warnings: Notice[],
+  phaseName: string,
+): void {
+  const needs = stations.map((s, i) => kindModule(s.activityKind).balls(activities[i], s));
+  const first = share(
+    needs.map((n) => n.needed),
+    kit.balls,
+  );
+  const spares = share(
+    needs.map((n) => n.spare),
+    kit.balls - first.given.reduce((s, x) => s + x, 0),
+  );
+  const bibs = share(
+    stations.map((s) => kindModule(s.activityKind).bibs(s)),
+    kit.bibs,
+  );
+  stations.forEach((s, i) => {
+    s.equipment = { ...s.equipment, balls: first.given[i] + spares.given[i], bibs: bibs.given[i] };
+    s.waiting = kindModule(s.activityKind).waiting(s, activities[i]);
+  });
+  if (first.short > 0) {
+    const waiting = stations.reduce((sum, s) => sum + (s.waiting ?? 0), 0);
+    warnings.push({
+      code: 'balls-short',
+      message: `${phaseName}: ${first.wanted} balls would keep everyone busy, the bag has ${kit.balls}; ${waiting} player${waiting === 1 ? '' : 's'} share${waiting === 1 ? 's' : ''} a ball in turns.`,
+    });
+  }
+  if (stations.some((s, i) => s.equipment.balls === 0 && needs[i].needed > 0)) {
+    warnings.push({ code: 'station-without-ball', message: `${phaseName}: some stations have no ball at all.` });
+  }
+  if (bibs.short > 0) {
+    warnings.push({
+      code: 'bibs-short',
+      message: `${phaseName}: ${bibs.wanted} bibs needed, ${kit.bibs} in the bag — use shirt colours to tell sides apart.`,
+    });
+  }
+}
+
+function share(demand: number[], available: number): { given: number[]; wanted: number; short: number } {
+  const given = demand.map(() => 0);
+  const wanted = demand.reduce((s, d) => s + d, 0);
+  let left = Math.max(0, Math.min(available, wanted));
+  while (left > 0) {
+    for (let i = 0; i < demand.length && left > 0; i++) {
+      if (given[i] < demand[i]) {
+        given[i]++;
+        left--;
+      }
+    }
+  }
+  return { given, wanted, short: Math.max(0, wanted - available) };
+}

@@ -1,0 +1,205 @@
+/**
+ * The parts of a session for the request, from the club's session shapes: a training theme
+ * re-fills the technical and opposed parts, each part gets its activities ranked, the coach's
+ * pins and the club's required kinds find a place, and short slots lose their least important parts.
+ */
+import type {
+  ActivityDefinition,
+  Focus,
+  SessionSlot,
+  SlotRole,
+  StationKind,
+} from '../../shared/types';
+import { FOCUSES } from '../../shared/types';
+import { activityBlocked, activityById, kindBlocked, rankedActivities, type Ranked } from './activities';
+import { activityFeasible, type AllocationRules } from './allocation';
+import { addWarning, type BuildContext } from './context';
+
+export interface SlotPlan {
+  role: SlotRole;
+  name: string;
+  share: number;
+  priority: number;
+  maxMinutes?: number;
+  /** Activities that can fill it, best first; the phase builder falls back along the list. */
+  candidates: ActivityDefinition[];
+}
+
+const KIND_NAMES: Record<StationKind, string> = {
+  'ball-mastery': 'Ball mastery',
+  'tag-game': 'Tag game',
+  duel: '1v1 duels',
+  'receiving-turning': 'Receive and turn',
+  'passing-pattern': 'Passing practice',
+  'passing-finishing': 'Pass and finish',
+  'shooting-game': 'Shooting game',
+  'keep-ball': 'Keep-ball',
+  'directional-possession': 'Possession to a target',
+  transition: 'Transition game',
+  'small-sided-game': 'Small-sided game',
+  goalkeeping: 'Goalkeepers’ warm-up',
+  speed: 'Speed',
+  'movement-prep': 'Movement preparation',
+  'cool-down': 'Cool-down',
+};
+
+export function nameFor(kind: StationKind): string {
+  return KIND_NAMES[kind];
+}
+
+/** The training theme: the coach's first focus, else the one the team's recent plans used least. */
+export function chooseTheme(ctx: BuildContext): Focus | undefined {
+  const { request, params } = ctx;
+  if (request.kind !== 'training') return undefined;
+  if (request.focus?.length) return request.focus[0];
+  const allowed = params.ageGroups[request.ageGroup].allowedKinds;
+  const used = new Map<Focus, number>();
+  for (const id of ctx.recent) for (const f of activityById(params, id)?.focus ?? []) used.set(f, (used.get(f) ?? 0) + 1);
+  const options = FOCUSES.filter(
+    (f) =>
+      (f !== 'goalkeeping' || ctx.keepers.length > 0) &&
+      params.themes[f].technical.some((k) => allowed.includes(k)) &&
+      params.themes[f].opposed.some((k) => allowed.includes(k)),
+  );
+  if (!options.length) return undefined;
+  const fewest = Math.min(...options.map((f) => used.get(f) ?? 0));
+  const best = options.filter((f) => (used.get(f) ?? 0) === fewest);
+  return best[Math.floor(ctx.rng() * best.length)];
+}
+
+export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: Focus | undefined): SlotPlan[] {
+  const { request, params } = ctx;
+  const n = request.players.length;
+  const fits = (a: ActivityDefinition) => activityFeasible(n, request.coaches, a, rules);
+  const shape: SessionSlot[] = params.sessionShapes[request.kind][ctx.band];
+  const chosen = new Set<string>();
+  const slots: SlotPlan[] = [];
+
+  for (const slot of shape) {
+    let kinds = slot.kinds;
+    if (theme && (slot.role === 'technical' || slot.role === 'opposed')) {
+      kinds = unique([...params.themes[theme][slot.role], ...slot.kinds]);
+    }
+    let ranked = rankKinds(ctx, kinds).filter((r) => fits(r.activity));
+    if (!ranked.length) {
+      const subs = substituteKinds(ctx, kinds);
+      ranked = rankKinds(ctx, subs).filter((r) => fits(r.activity));
+      if (ranked.length) {
+        ctx.trace.push({
+          ruleId: 'engine.phase-substitute',
+          fired: true,
+          effect: `${slot.name}: ${kinds.join(' / ')} → ${ranked[0].activity.kind} (${whyNot(ctx, kinds[0], rules)})`,
+        });
+      }
+    }
+    if (!ranked.length) {
+      addWarning(ctx, 'phase-dropped', `No activity could fill “${slot.name}” for this group, so that part is left out.`);
+      continue;
+    }
+    const plan: SlotPlan = {
+      role: slot.role,
+      name: kinds.includes(ranked[0].activity.kind) || slot.kinds.includes(ranked[0].activity.kind) ? slot.name : nameFor(ranked[0].activity.kind),
+      share: slot.share,
+      priority: slot.priority,
+      maxMinutes: slot.maxMinutes,
+      candidates: ranked.map((r) => r.activity),
+    };
+    if (slot.maxMinutes === undefined) delete plan.maxMinutes;
+    slots.push(plan);
+  }
+
+  placePins(ctx, slots, fits);
+  placeRequired(ctx, slots, fits);
+  // Distinct activities: a later part does not repeat an earlier part's first choice.
+  for (const s of slots) {
+    const fresh = s.candidates.filter((a) => !chosen.has(a.id));
+    if (fresh.length) s.candidates = [...fresh, ...s.candidates.filter((a) => chosen.has(a.id))];
+    chosen.add(s.candidates[0].id);
+  }
+  return slots;
+}
+
+function rankKinds(ctx: BuildContext, kinds: StationKind[]): Ranked[] {
+  const out: Ranked[] = [];
+  kinds.forEach((kind, i) => {
+    if (kindBlocked(ctx.params, ctx.request.ageGroup, ctx.forbidden, kind)) return;
+    out.push(...rankedActivities(ctx, kind, i));
+  });
+  return out.sort((a, b) => b.score - a.score);
+}
+
+/** Substitute kinds, breadth first, for kinds that cannot be played. */
+function substituteKinds(ctx: BuildContext, kinds: StationKind[]): StationKind[] {
+  const seen = new Set<StationKind>(kinds);
+  const queue = kinds.flatMap((k) => ctx.params.kinds[k].substitutes);
+  const out: StationKind[] = [];
+  while (queue.length) {
+    const next = queue.shift()!;
+    if (seen.has(next)) continue;
+    seen.add(next);
+    out.push(next);
+    queue.push(...ctx.params.kinds[next].substitutes);
+  }
+  return out;
+}
+
+function whyNot(ctx: BuildContext, kind: StationKind, rules: AllocationRules): string {
+  const blocked = kindBlocked(ctx.params, ctx.request.ageGroup, ctx.forbidden, kind);
+  if (blocked) return blocked;
+  void rules;
+  return 'too few players or not enough kit for it';
+}
+
+/** Pins go first in a part that plays their kind, else into a part of their own before the last. */
+function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefinition) => boolean): void {
+  const { params, request } = ctx;
+  const taken = new Set<SlotPlan>();
+  for (const id of request.pinnedActivityIds ?? []) {
+    const a = activityById(params, id);
+    const blocked = a
+      ? activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, a) ?? (fits(a) ? null : 'too few players or not enough kit for it')
+      : 'not in the club’s activities';
+    if (!a || blocked) {
+      addWarning(ctx, 'pin-not-used', `${a?.title ?? id} was pinned but cannot be used today: ${blocked}.`);
+      continue;
+    }
+    let slot = slots.find((s) => !taken.has(s) && s.candidates.some((c) => c.kind === a.kind));
+    if (!slot) {
+      const average = slots.length ? slots.reduce((s, x) => s + x.share, 0) / slots.length : 1;
+      slot = { role: 'technical', name: nameFor(a.kind), share: average, priority: 0, candidates: [] };
+      slots.splice(a.kind === 'small-sided-game' || !slots.length ? slots.length : slots.length - 1, 0, slot);
+    }
+    slot.candidates = [a, ...slot.candidates.filter((c) => c.id !== a.id)];
+    slot.priority = Math.min(slot.priority, 0);
+    taken.add(slot);
+    ctx.trace.push({ ruleId: 'engine.pinned', fired: true, effect: `${a.title} pinned by the coach: in “${slot.name}”` });
+  }
+}
+
+/** Kinds the club's rules require get a part of their own when no part plays them. */
+function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefinition) => boolean): void {
+  for (const req of ctx.outcome.required) {
+    const present = slots.find((s) => s.candidates[0]?.kind === req.kind);
+    if (present) {
+      present.priority = Math.min(present.priority, -1);
+      continue;
+    }
+    const ranked = rankedActivities(ctx, req.kind).filter((r) => fits(r.activity));
+    if (!ranked.length) continue;
+    const average = slots.length ? slots.reduce((s, x) => s + x.share, 0) / slots.length : 1;
+    const slot: SlotPlan = {
+      role: req.kind === 'small-sided-game' ? 'game' : req.kind === 'movement-prep' ? 'movement' : 'technical',
+      name: nameFor(req.kind),
+      share: average,
+      priority: -1,
+      candidates: ranked.map((r) => r.activity),
+    };
+    if (req.kind === 'movement-prep') slots.unshift(slot);
+    else slots.push(slot);
+    ctx.trace.push({ ruleId: 'engine.required-phase', fired: true, effect: `added ${req.kind}: ${req.reason}` });
+  }
+}
+
+function unique<T>(items: T[]): T[] {
+  return [...new Set(items)];
+}
