@@ -3,6 +3,7 @@ export { generatePlan, PlanRequestError } from './generate-plan';
 export { validatePlanRequest, type FieldError, type RequestValidation } from './schema/validate-plan-request';
 export { validateRuleSet, type PointerError, type RuleSetValidation } from './schema/validate-rule-set';
 export { RuleSetError } from './club-rules/compile-rule-set';
+export { upgradeRuleSet, isFirstFormat } from './club-rules/upgrade-rule-set';
 export { defaultRuleSet } from './rule-sets';
 export { checkPlan } from './check-plan';
 export { applyEdit } from './edit/apply-edit';
