@@ -5,7 +5,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import type { Station } from '../../../../../shared/types';
 import { ACTIVITY_KIND_LABELS } from '../../../core/labels/plan-labels';
-import { StationDiagram } from './station-diagram';
+import { StationDiagram } from '../../../shared/components/station-diagram';
 
 export interface PlayerMoveRequest {
   playerId: string;

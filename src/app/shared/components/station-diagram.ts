@@ -1,0 +1,264 @@
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import {
+  ACTIVITY_KIND_LABELS,
+  MARKER_STYLE,
+  POSITION_ROLES,
+  POSITION_STYLE,
+  type GoalPlacement,
+  type MarkedLine,
+  type Point,
+  type PositionRole,
+  type Station,
+  type Zone,
+} from '../../../../shared/types';
+
+/** One start position as drawn: where, its colours and the number in its circle. */
+interface Dot extends Point {
+  id: string;
+  role: PositionRole;
+  fill: string;
+  text: string;
+  /** The player's number in the group (1-based), or "C" for a joining coach. */
+  mark: string;
+}
+
+/** A goal or a gate, with the ends of its mouth already worked out. */
+interface Target extends GoalPlacement {
+  from: Point;
+  to: Point;
+  /** Whether the two end cones come from the engine's cone list (else they are drawn here). */
+  conesListed: boolean;
+}
+
+/** One legend row: a role's colour or a marker's swatch, and its words. */
+interface LegendItem {
+  key: string;
+  label: string;
+  swatch: 'dot' | 'cone' | 'goal' | 'gate' | 'zone' | 'line';
+  fill?: string;
+  text?: string;
+}
+
+/** Gate cones are found within this distance of a gate's centre, in metres. */
+const GATE_REACH = 2.6;
+
+/**
+ * A station drawn to scale from the engine's own coordinates (metres): the area, zones, lines,
+ * cones, goals and gates, and everyone where the plan starts them, coloured by role with the
+ * colours the printed card uses. Nothing is placed here that the plan did not place.
+ */
+@Component({
+  selector: 'cw-station-diagram',
+  templateUrl: './station-diagram.html',
+  styleUrl: './station-diagram.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class StationDiagram {
+  /** The station to draw. */
+  readonly station = input.required<Station>();
+  /** Whether to show a key below the drawing, listing only the roles and markers drawn. */
+  readonly legend = input(false);
+  /** Player names by id, read out in the drawing's accessible label. */
+  readonly names = input<ReadonlyMap<string, string> | Record<string, string> | null>(null);
+
+  protected readonly marker = MARKER_STYLE;
+
+  /** Marks are sized to the area so a 55 m pitch and a 9 m square both read clearly. */
+  protected readonly scale = computed(() => {
+    const { width, length } = this.station().area;
+    return Math.max(0.45, Math.min(1.4, Math.max(width, length) / 22));
+  });
+
+  protected readonly radius = computed(() => this.scale() * 0.95);
+
+  protected readonly zones = computed<Zone[]>(() => this.station().zones ?? []);
+  protected readonly lines = computed<MarkedLine[]>(() => this.station().lines ?? []);
+
+  /** Goals and gates; a gate's mouth runs between its two cones when the plan listed them. */
+  protected readonly targets = computed<Target[]>(() => {
+    const { conePositions: cones, area } = this.station();
+    // A drawn mouth (a goal, or a gate whose cones are not listed) in proportion to the area.
+    const half = Math.max(2, Math.min(5, Math.min(area.width, area.length) / 6)) / 2;
+    return (this.station().goalPositions ?? []).map((goal) => {
+      const ends = goal.kind === 'gate' ? gateCones(goal, cones) : null;
+      if (ends) return { ...goal, from: ends[0], to: ends[1], conesListed: true };
+      // facing 0 = mouth along +y; the mouth runs across it.
+      const rad = (goal.facing * Math.PI) / 180;
+      const ux = Math.cos(rad);
+      const uy = -Math.sin(rad);
+      return {
+        ...goal,
+        from: { x: goal.x - ux * half, y: goal.y - uy * half },
+        to: { x: goal.x + ux * half, y: goal.y + uy * half },
+        conesListed: false,
+      };
+    });
+  });
+
+  /** Cones that do not stand at the end of a gate (those are counted with their gate). */
+  private readonly looseCones = computed(() => {
+    const gateEnds = this.targets()
+      .filter((t) => t.conesListed)
+      .flatMap((t) => [t.from, t.to]);
+    return this.station().conePositions.filter((c) => !gateEnds.some((e) => e.x === c.x && e.y === c.y));
+  });
+
+  protected readonly dots = computed<Dot[]>(() => {
+    const { positions, playerIds } = this.station();
+    return positions.map((p) => {
+      const style = POSITION_STYLE[p.role] ?? POSITION_STYLE.player;
+      const index = playerIds.indexOf(p.id);
+      return {
+        id: p.id,
+        x: p.x,
+        y: p.y,
+        role: p.role,
+        fill: style.fill,
+        text: style.text,
+        mark: p.id === 'coach' ? 'C' : index >= 0 ? String(index + 1) : '',
+      };
+    });
+  });
+
+  /** Everything drawn fits, with a margin: keepers on the goal line and gates on the edge included. */
+  protected readonly viewBox = computed(() => {
+    const { position, area } = this.station();
+    const xs = [position.x, position.x + area.width];
+    const ys = [position.y, position.y + area.length];
+    for (const p of [
+      ...this.station().conePositions,
+      ...this.dots(),
+      ...this.targets().flatMap((t) => [t.from, t.to]),
+    ]) {
+      xs.push(p.x);
+      ys.push(p.y);
+    }
+    const m = 1 + this.scale() * 1.6;
+    const minX = Math.min(...xs) - m;
+    const minY = Math.min(...ys) - m;
+    const w = Math.max(...xs) + m - minX;
+    const h = Math.max(...ys) + m - minY;
+    return `${round(minX)} ${round(minY)} ${round(w)} ${round(h)}`;
+  });
+
+  protected readonly legendItems = computed<LegendItem[]>(() => {
+    const items: LegendItem[] = [];
+    const used = new Set(this.dots().map((d) => d.role));
+    for (const role of POSITION_ROLES) {
+      if (!used.has(role)) continue;
+      const style = POSITION_STYLE[role];
+      items.push({ key: role, label: style.label, swatch: 'dot', fill: style.fill, text: style.text });
+    }
+    if (this.station().conePositions.length) items.push({ key: 'cone', label: 'Cone', swatch: 'cone' });
+    const targets = this.targets();
+    if (targets.some((t) => t.kind === 'goal')) items.push({ key: 'goal', label: 'Goal', swatch: 'goal' });
+    if (targets.some((t) => t.kind === 'gate')) items.push({ key: 'gate', label: 'Gate', swatch: 'gate' });
+    for (const label of new Set(this.zones().map((z) => zoneWords(z.label)))) {
+      items.push({ key: 'zone-' + label, label, swatch: 'zone' });
+    }
+    for (const label of new Set(this.lines().map((l) => lineWords(l.label)))) {
+      items.push({ key: 'line-' + label, label, swatch: 'line' });
+    }
+    return items;
+  });
+
+  /** What is drawn, in words: "Keep-ball, 4v1 in 12 × 12 m: 4 attackers, 1 defender (bib), 4 cones, 2 gates". */
+  protected readonly label = computed(() => {
+    const s = this.station();
+    const head = `${ACTIVITY_KIND_LABELS[s.activityKind] ?? s.title}${s.format ? ', ' + s.format : ''} in ${s.area.width} × ${s.area.length} m`;
+    const names = this.names();
+    const nameOf = (id: string): string | undefined =>
+      names instanceof Map ? names.get(id) : names ? (names as Record<string, string>)[id] : undefined;
+    const parts: string[] = [];
+    for (const role of POSITION_ROLES) {
+      const dots = this.dots().filter((d) => d.role === role);
+      if (!dots.length) continue;
+      const who = names
+        ? ` (${dots.map((d) => (d.id === 'coach' ? 'C' : `${d.mark} ${nameOf(d.id) ?? d.id}`)).join(', ')})`
+        : '';
+      parts.push(`${dots.length} ${ROLE_WORDS[role][dots.length === 1 ? 0 : 1]}${who}`);
+    }
+    const cones = this.looseCones().length;
+    if (cones) parts.push(count(cones, 'cone'));
+    const targets = this.targets();
+    const goals = targets.filter((t) => t.kind === 'goal').length;
+    const gates = targets.length - goals;
+    if (goals) parts.push(count(goals, 'goal'));
+    if (gates) parts.push(count(gates, 'gate'));
+    for (const [label, n] of tally(this.zones().map((z) => zoneWords(z.label).toLowerCase()))) {
+      parts.push(n === 1 ? `a ${label}` : `${n} × ${label}`);
+    }
+    for (const label of new Set(this.lines().map((l) => lineWords(l.label).toLowerCase())))
+      parts.push(`a ${label}`);
+    return parts.length ? `${head}: ${parts.join(', ')}` : head;
+  });
+
+  /** A cone as a small triangle pointing up, centred on its spot. */
+  protected conePoints(cone: Point): string {
+    const r = this.scale() * 0.6;
+    return `${round(cone.x)},${round(cone.y - r)} ${round(cone.x + r * 0.87)},${round(cone.y + r * 0.5)} ${round(cone.x - r * 0.87)},${round(cone.y + r * 0.5)}`;
+  }
+
+  /** A goal as a frame: posts at the mouth's ends and a back bar behind, away from where it faces. */
+  protected goalPath(goal: Target): string {
+    const depth = this.scale() * 0.9;
+    const rad = (goal.facing * Math.PI) / 180;
+    // Facing 0 points along +y; the net lies the other way.
+    const bx = -Math.sin(rad) * depth;
+    const by = -Math.cos(rad) * depth;
+    const { from, to } = goal;
+    return `M ${round(from.x)} ${round(from.y)} L ${round(from.x + bx)} ${round(from.y + by)} L ${round(to.x + bx)} ${round(to.y + by)} L ${round(to.x)} ${round(to.y)}`;
+  }
+}
+
+/** Singular and plural words for each role in the accessible label. */
+const ROLE_WORDS: Record<PositionRole, [string, string]> = {
+  player: ['player', 'players'],
+  attacker: ['attacker', 'attackers'],
+  defender: ['defender (bib)', 'defenders (bibs)'],
+  goalkeeper: ['goalkeeper', 'goalkeepers'],
+  'team-a': ['on side A (bibs)', 'on side A (bibs)'],
+  'team-b': ['on side B', 'on side B'],
+  server: ['server', 'servers'],
+  neutral: ['neutral', 'neutrals'],
+  coach: ['coach', 'coaches'],
+};
+
+/** The two cones nearest a gate's centre, when the plan listed them there. */
+function gateCones(gate: Point, cones: Point[]): [Point, Point] | null {
+  const near = cones
+    .map((c) => ({ c, d: Math.hypot(c.x - gate.x, c.y - gate.y) }))
+    .filter((n) => n.d > 0.05 && n.d <= GATE_REACH)
+    .sort((a, b) => a.d - b.d);
+  if (near.length < 2) return null;
+  const [a, b] = near;
+  // The gate's centre lies between its two cones.
+  const mid = { x: (a.c.x + b.c.x) / 2, y: (a.c.y + b.c.y) / 2 };
+  return Math.hypot(mid.x - gate.x, mid.y - gate.y) < 0.3 ? [a.c, b.c] : null;
+}
+
+function zoneWords(label: string): string {
+  const text = label.trim() || 'zone';
+  const words = /zone/i.test(text) ? text : `${text} zone`;
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+function lineWords(label: string | undefined): string {
+  const text = label?.trim() || 'marked';
+  const words = /line/i.test(text) ? text : `${text} line`;
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+function count(n: number, word: string): string {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
+}
+
+function tally(labels: string[]): Map<string, number> {
+  const out = new Map<string, number>();
+  for (const l of labels) out.set(l, (out.get(l) ?? 0) + 1);
+  return out;
+}
+
+function round(n: number): number {
+  return Math.round(n * 100) / 100;
+}
