@@ -9,6 +9,7 @@ import { gapBetween, insideSpace, overlaps, rectOf } from './geometry';
 import { kindModule } from './kinds/registry';
 import { keepBallFormat } from './kinds/keep-ball';
 import { effectiveParameters } from './planning/effective-parameters';
+import { keepersAtOnce } from './planning/markings';
 import { defaultRuleSet } from './rule-sets';
 
 const KIT: (keyof Equipment)[] = ['balls', 'cones', 'bibs', 'goals'];
@@ -99,7 +100,7 @@ function stationNotices(
   const out: Notice[] = [];
   const keepers = s.roles.goalkeeper ?? [];
   const goals = (s.goalPositions ?? []).filter((g) => g.kind === 'goal').length;
-  if (keepers.length > goals) {
+  if (keepersAtOnce(s) > goals) {
     out.push({ code: 'keeper-without-goal', message: `${where}: a goalkeeper is placed where there is no real goal.` });
   }
   if (keepers.length && kindModule(s.activityKind).facesShots && !keepersWarm && s.activityKind !== 'goalkeeping') {

@@ -125,8 +125,13 @@ function buildPhases(ctx: BuildContext, rules: AllocationRules, specs: ReturnTyp
   const phases: Phase[] = [];
   let lastPlayed: Phase | undefined;
   let breakSince = false;
-  specs.forEach((spec, i) => {
+  let warmed = false;
+  specs.forEach((planned, i) => {
+    // Keepers go in goal only once their own warm-up has really run; if it could not (the phase
+    // fell back to one shared grid), they warm up as keepers in this phase instead.
+    const spec = planned.keepersInGoal && !warmed ? { ...planned, keepersInGoal: false, keeperWarmUp: true } : planned;
     const phase = buildPhase(ctx, rules, spec, i, startWidths, lastPlayed);
+    if (phase.stations.some((s) => s.activityKind === 'goalkeeping')) warmed = true;
     if (phase.activityKind !== 'break') {
       phase.changeover = changeoverBetween(lastPlayed, phase, ctx.params, ctx.request.kind === 'training', breakSince || !lastPlayed);
       lastPlayed = phase;

@@ -11,6 +11,7 @@ import { summarize } from '../planning/summary';
 
 /** Warning codes the phase and summary steps produce; rebuilt from scratch on every edit. */
 const DERIVED_CODES = new Set([
+  'waiting',
   'gates-for-goals',
   'shots-toward-station',
   'balls-short',
@@ -46,6 +47,12 @@ export function activityOfStation(params: RuleParameters, station: Station): Act
   };
 }
 
+/** At or below the club's cold threshold. */
+function isCold(plan: Plan, params: RuleParameters): boolean {
+  const t = plan.request.conditions?.temperatureC;
+  return t !== undefined && t <= params.cautions.coldC;
+}
+
 export function refreshPlan(plan: Plan, phases: Phase[], ruleParams: RuleParameters, checks: Notice[] = []): Plan {
   const params = effectiveParameters(ruleParams, plan.request);
   const band = params.ageGroups[plan.request.ageGroup].band;
@@ -63,7 +70,7 @@ export function refreshPlan(plan: Plan, phases: Phase[], ruleParams: RuleParamet
       ? lastPlayed.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
       : [];
     markPhase(phase.stations, activities, plan.request.space, params, plan.request.equipment, warnings, phase.name, previousGoals);
-    equipPhase(phase.stations, activities, plan.request.equipment, warnings, phase.name);
+    equipPhase(phase.stations, activities, plan.request.equipment, warnings, phase.name, isCold(plan, params));
     phase.stations.forEach((s, i) => {
       s.progressions = progressionsFor(s, activities[i], params, band, plan.request.space);
     });

@@ -21,7 +21,7 @@ export const goalkeeping: KindModule = {
       ],
     };
   },
-  balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 2, 4),
+  balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 5),
   bibs: () => 0,
   waiting: (station, activity) =>
     waitingFor(station, activity, Math.max(0, (station.roles.goalkeeper?.length ?? 0) - 2)),

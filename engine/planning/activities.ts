@@ -34,7 +34,10 @@ export function kindBlocked(
   return rule ? rule.reason : null;
 }
 
-/** Why an activity may not be used for this age and level, or null when it may. */
+/**
+ * Why an activity may not be used for this age, or null when it may. The level is a preference
+ * (`activityScore`), not a bar: an activity for intermediates still suits an advanced group.
+ */
 export function activityBlocked(
   params: RuleParameters,
   age: AgeGroup,
@@ -48,7 +51,7 @@ export function activityBlocked(
   const rule = forbidden.find((f) => f.activityId === activity.id);
   if (rule) return rule.reason;
   if (!suitsAge(activity, age)) return `made for ${activity.ages.from}–${activity.ages.to}`;
-  if (!activity.levels.includes(level)) return `not for ${level} groups`;
+  void level;
   return null;
 }
 
@@ -97,6 +100,7 @@ export function activityScore(ctx: ChoiceContext, a: ActivityDefinition): number
   if (ctx.pinned.has(a.id)) score += 100;
   if (ctx.recent.has(a.id)) score -= params.variety.recentPenalty;
   if (a.intensity > params.intensity.max) score -= 50;
+  if (!a.levels.includes(request.level)) score -= 8;
   const n = request.players.length;
   const balls = request.equipment.balls;
   const young = params.ageGroups[request.ageGroup].index <= 12;
@@ -104,7 +108,8 @@ export function activityScore(ctx: ChoiceContext, a: ActivityDefinition): number
     a.balls === 'each' ? Math.max(0, n - balls) / n : a.balls === 'pair' ? Math.max(0, Math.ceil(n / 2) - balls) / n : 0;
   // Shared balls leave players waiting: the more so, the worse, and never in the cold.
   score -= short * (ctx.cold ? 40 : 12);
-  if (a.balls === 'none') score += balls === 0 ? 20 : young ? -30 : 0;
+  // Ball-less games only when balls are really short (players of 12 and under want a ball).
+  if (a.balls === 'none') score += balls === 0 ? 20 : young && balls >= Math.ceil(n / 3) ? -30 : 0;
   else if (balls === 0) score -= 60;
   // Every player with a ball from the first minute when the bag allows it.
   if (a.balls === 'each' && balls >= n && young) score += 2;

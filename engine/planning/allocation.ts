@@ -10,6 +10,9 @@ import type { SizeRule } from './size-rule';
 /** What keeping last phase's grids standing is worth, in players away from the preferred size. */
 const SAME_LAYOUT_BONUS = 1;
 
+/** One game for the squad rather than two smaller ones when the format allows it (common practice). */
+const EXTRA_GAME_COST = 3;
+
 export interface GroupPlan {
   activity: ActivityDefinition;
   /** Players in the group (the coach, when joining, is extra). */
@@ -78,6 +81,7 @@ export function groupsOfOneKind(
   if (!size) return null;
   const limit = Math.min(n, stationLimit(activity, rules.kit), rules.maxStations ?? Number.POSITIVE_INFINITY);
   const coachPenalty = rules.params.allocation.coachPenalty;
+  const game = activity.kind === 'small-sided-game';
   let best: Allocation | null = null;
   for (let k = Math.max(1, Math.floor(n / size.max)); k <= limit; k++) {
     if ((n + Math.min(coaches, k)) / k < size.min) break;
@@ -91,8 +95,8 @@ export function groupsOfOneKind(
       const cost =
         r * Math.abs(q + 1 - size.preferred) +
         (k - r) * Math.abs(q - size.preferred) +
-        j * coachPenalty -
-        (k === rules.sameStationsAs ? SAME_LAYOUT_BONUS : 0);
+        j * coachPenalty +
+        (game ? (k - 1) * EXTRA_GAME_COST : k === rules.sameStationsAs ? -SAME_LAYOUT_BONUS : 0);
       if (!best || cost < best.cost - 1e-9) {
         const groups: GroupPlan[] = [];
         for (let g = 0; g < k; g++) {
@@ -128,8 +132,11 @@ export function allocatePhase(
     const coachesLeft = coaches - main.groups.reduce((s, g) => s + g.coachJoins, 0);
     const capLeft = (rules.maxStations ?? Number.POSITIVE_INFINITY) - main.groups.length;
     if (capLeft < 1) continue;
+    // The main groups have taken their balls: the leftover groups share what is left.
+    const ballsLeft = activity.balls === 'none' ? rules.kit.balls : rules.kit.balls - main.groups.length;
+    const restRules = { ...withStationCap(rules, capLeft), kit: { ...rules.kit, balls: Math.max(0, ballsLeft) } };
     for (const sub of substitutes) {
-      const rest = groupsOfOneKind(leftover, coachesLeft, sub, withStationCap(rules, capLeft));
+      const rest = groupsOfOneKind(leftover, coachesLeft, sub, restRules);
       if (!rest) continue;
       const cost = main.cost + rest.cost + penalty * rest.groups.length;
       if (!best || cost < best.cost - 1e-9) best = { groups: [...main.groups, ...rest.groups], cost };
@@ -140,7 +147,10 @@ export function allocatePhase(
   return { groups: [{ activity, players: n, coachJoins: 0 }], cost: Number.POSITIVE_INFINITY };
 }
 
-/** Whether at least one group of an activity can be formed from n players and the free coaches. */
+/**
+ * Whether the whole squad can play an activity: at least one group can be formed from n players
+ * and the free coaches, and the groups the kit and the adults allow can hold everyone.
+ */
 export function activityFeasible(
   n: number,
   coaches: number,
@@ -148,6 +158,8 @@ export function activityFeasible(
   rules: Pick<AllocationRules, 'params' | 'level' | 'band' | 'kit'>,
 ): boolean {
   const size = sizeRuleOf(activity, rules);
-  if (!size || stationLimit(activity, rules.kit) < 1) return false;
-  return n >= 1 && n + Math.min(coaches, 1) >= size.min;
+  const limit = stationLimit(activity, rules.kit);
+  if (!size || limit < 1) return false;
+  const stations = Math.min(limit, rules.params.supervision.stationsPerAdult * Math.max(1, coaches));
+  return n >= 1 && n + Math.min(coaches, 1) >= size.min && n <= stations * size.max + Math.min(coaches, stations);
 }

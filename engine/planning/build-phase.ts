@@ -31,6 +31,7 @@ import { equipPhase } from './kit';
 import { packStations, reuseLayout } from './layout';
 import { markPhase } from './markings';
 import { progressionsFor } from './progressions';
+import { nameFor } from './session-shape';
 import type { PhaseSpec } from './timing';
 
 /** What building needs besides the request: the rules, warnings and trace to add to. */
@@ -56,14 +57,17 @@ export function buildPhase(
 ): Phase {
   if (spec.slot === 'break') return breakPhase(spec.startMinute, spec.endMinute - spec.startMinute, ctx.hot);
   if (spec.continues && previous) return continued(spec, phaseIndex, previous);
-  let fallback: Attempt | null = null;
-  for (const activity of spec.candidates.slice(0, 6)) {
+  // The first that runs cleanly; else the one that leaves the fewest players waiting.
+  let fallback: { attempt: Attempt; waiting: number } | null = null;
+  for (const activity of spec.candidates) {
     const attempt = tryActivity(ctx, rules, spec, activity, phaseIndex, startWidths, previous);
     if (!attempt) continue;
-    if (attempt.clean) return commit(ctx, attempt);
-    fallback ??= attempt;
+    // A coach's pin is honoured whenever it can be laid out; its notices say what it costs.
+    if (attempt.clean || ctx.pinned.has(activity.id)) return commit(ctx, attempt);
+    const waiting = attempt.phase.stations.reduce((s, st) => s + (st.waiting ?? 0), 0);
+    if (!fallback || waiting < fallback.waiting) fallback = { attempt, waiting };
   }
-  if (fallback) return commit(ctx, fallback);
+  if (fallback) return commit(ctx, fallback.attempt);
   return sharedGridPhase(ctx, spec, phaseIndex);
 }
 
@@ -122,7 +126,13 @@ function tryActivity(
   const cap0 = Math.max(1, ctx.supervision.maxStations - keeperGroups.length);
   let cap = cap0;
   const previousMain = previous?.stations.filter((s) => s.activityKind !== 'goalkeeping').length;
-  rules = previousMain ? { ...rules, sameStationsAs: previousMain } : rules;
+  // The keepers' station has its goal and a ball already: the rest share what is left.
+  const kit = request.equipment;
+  rules = {
+    ...rules,
+    kit: { ...kit, balls: Math.max(0, kit.balls - keeperGroups.length), goals: Math.max(0, kit.goals - keeperGroups.length) },
+    ...(previousMain ? { sameStationsAs: previousMain } : {}),
+  };
   for (;;) {
     let inGoal = wantIn;
     let allocation = allocatePhase(rest.length - inGoal, coachesFree, activity, withStationCap(rules, cap));
@@ -193,7 +203,7 @@ function finishAttempt(
     ? previous.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
     : [];
   markPhase(stations, activities, request.space, params, request.equipment, warnings, spec.name, previousGoals);
-  equipPhase(stations, activities, request.equipment, warnings, spec.name);
+  equipPhase(stations, activities, request.equipment, warnings, spec.name, ctx.cold);
   stations.forEach((s, i) => {
     s.progressions = progressionsFor(s, activities[i], params, band, request.space);
   });
@@ -242,13 +252,15 @@ interface KeeperGroup {
 }
 
 /**
- * Keepers in groups of up to three at a real goal each; a lone keeper is served by a coach when a
+ * Keepers in twos at a real goal each (three share one when goals are short); a lone keeper is served by a coach when a
  * second adult can watch the rest, otherwise by a team-mate.
  */
 function keeperWarmUpGroups(ctx: PhaseContext, players: PresentPlayer[], coaches: number): KeeperGroup[] {
   const keepers = ctx.keepers.filter((k) => players.some((p) => p.id === k.id));
   const goals = ctx.request.equipment.goals;
-  const count = Math.min(goals, Math.ceil(keepers.length / 3));
+  // Two to a goal: one saves while the other serves, nobody waits.
+  // A goal and a ball each, leaving at least one ball for everyone else.
+  const count = Math.min(goals, Math.ceil(keepers.length / 2), Math.max(0, ctx.request.equipment.balls - 1));
   if (!count) return [];
   const ranked = rankedActivities(ctx, 'goalkeeping');
   if (!ranked.length) return [];
@@ -256,7 +268,8 @@ function keeperWarmUpGroups(ctx: PhaseContext, players: PresentPlayer[], coaches
   let adults = coaches;
   const groups: KeeperGroup[] = [];
   for (let g = 0; g < count; g++) {
-    const mine = keepers.filter((_, i) => i % count === g);
+    // At most two keepers to a goal: a third warms up as a keeper in the next phase instead.
+    const mine = keepers.slice(0, 2 * count).filter((_, i) => i % count === g);
     let coachJoins: 0 | 1 = 0;
     const members = [...mine];
     if (mine.length === 1) {
@@ -440,7 +453,7 @@ function sharedGridPhase(ctx: PhaseContext, spec: PhaseSpec, phaseIndex: number)
   station.area = area;
   const stations = [station];
   markPhase(stations, [activity], request.space, params, request.equipment, ctx.warnings, spec.name);
-  equipPhase(stations, [activity], request.equipment, ctx.warnings, spec.name);
+  equipPhase(stations, [activity], request.equipment, ctx.warnings, spec.name, ctx.cold);
   station.progressions = progressionsFor(station, activity, params, ctx.band, request.space);
   return {
     name: spec.name,

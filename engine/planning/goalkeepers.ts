@@ -66,12 +66,14 @@ export function planKeepers(ctx: BuildContext, specs: PhaseSpec[]): void {
     if (first < 0) return;
   }
   const suits = (s: PhaseSpec) => !NOT_FOR_KEEPERS.has(s.slot) && !s.continues;
+  // A phase the coach pinned an activity for keeps its players when another phase can serve.
+  const pinned = (s: PhaseSpec) => !!s.candidates[0] && ctx.pinned.has(s.candidates[0].id);
   let warm = -1;
-  for (let i = first - 1; i >= 0; i--) {
-    if (suits(specs[i])) {
-      warm = i;
-      break;
+  for (const avoidPins of [true, false]) {
+    for (let i = first - 1; i >= 0 && warm < 0; i--) {
+      if (suits(specs[i]) && !(avoidPins && pinned(specs[i]))) warm = i;
     }
+    if (warm >= 0) break;
   }
   if (warm < 0) {
     if (!suits(specs[first])) return;

@@ -12,6 +12,7 @@ export function equipPhase(
   kit: { balls: number; bibs: number },
   warnings: Notice[],
   phaseName: string,
+  cold = false,
 ): void {
   const needs = stations.map((s, i) => kindModule(s.activityKind).balls(activities[i], s));
   const first = share(
@@ -35,6 +36,16 @@ export function equipPhase(
     warnings.push({
       code: 'balls-short',
       message: `${phaseName}: ${first.wanted} balls would keep everyone busy, the bag has ${kit.balls}; ${waiting} player${waiting === 1 ? '' : 's'} share${waiting === 1 ? 's' : ''} a ball in turns.`,
+    });
+  }
+  // Waiting is told, not hidden: more than one at a station, or anyone at all in the cold.
+  const limit = cold ? 0 : 1;
+  const over = stations.filter((s) => (s.waiting ?? 0) > limit);
+  if (over.length && first.short === 0) {
+    const n = over.reduce((sum, s) => sum + (s.waiting ?? 0), 0);
+    warnings.push({
+      code: 'waiting',
+      message: `${phaseName}: ${n} player${n === 1 ? '' : 's'} wait${n === 1 ? 's' : ''} for a turn${cold ? ' in the cold' : ''} — keep them busy (juggling, fetching balls) and swap often.`,
     });
   }
   if (stations.some((s, i) => s.equipment.balls === 0 && needs[i].needed > 0)) {

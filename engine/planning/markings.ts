@@ -115,8 +115,8 @@ export function markPhase(
   stations.forEach((station, i) => {
     const keepers = station.roles.goalkeeper ?? [];
     const goals = ends[i].filter((t) => t.kind === 'goal').length;
-    // Never a keeper without a real goal: they play out instead.
-    if (keepers.length && goals < keepers.length) station.roles = { ...station.roles, goalkeeper: [] };
+    // Never a keeper without a real goal: they play out instead (keepers warming up take turns in one).
+    if (keepers.length && goals < keepersAtOnce(station)) station.roles = { ...station.roles, goalkeeper: [] };
   });
   const drawings: Drawing[] = stations.map((s, i) => kindModule(s.activityKind).draw(frames[i], s, layoutOf(activities[i])));
   let conesLeft = kit.cones;
@@ -213,6 +213,12 @@ export function markPhase(
       message: `${phaseName}: the space leaves less than ${params.layout.shotClearanceM} m behind some goals before the next station — shoot low and check the line before each shot.`,
     });
   }
+}
+
+/** Keepers standing in goals at the same time: keepers warming up take turns in one goal. */
+export function keepersAtOnce(station: Pick<Station, 'activityKind' | 'roles'>): number {
+  const keepers = station.roles.goalkeeper?.length ?? 0;
+  return station.activityKind === 'goalkeeping' ? Math.min(1, keepers) : keepers;
 }
 
 const MARKING_NOTE = /^No cones left|^No goal or cones/;

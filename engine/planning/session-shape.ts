@@ -18,6 +18,8 @@ import { addWarning, type BuildContext } from './context';
 export interface SlotPlan {
   role: SlotRole;
   name: string;
+  /** The kinds the part is for: a phase that ends up playing another kind is named after it. */
+  kinds: StationKind[];
   share: number;
   priority: number;
   maxMinutes?: number;
@@ -80,10 +82,22 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
     if (theme && (slot.role === 'technical' || slot.role === 'opposed')) {
       kinds = unique([...params.themes[theme][slot.role], ...slot.kinds]);
     }
-    let ranked = rankKinds(ctx, kinds).filter((r) => fits(r.activity));
+    // Above the day's intensity limit (the heat) only when nothing calmer can fill the part.
+    const calm = (r: Ranked) => r.activity.intensity <= params.intensity.max;
+    const own = rankKinds(ctx, kinds).filter((r) => fits(r.activity));
+    let ranked = own.filter(calm);
+    if (!ranked.length && own.length) {
+      // Only too intense for today (the heat): the part is left out, not swapped for something else.
+      ctx.trace.push({
+        ruleId: 'engine.intensity',
+        fired: true,
+        effect: `${slot.name}: left out, nothing for it is gentle enough today (intensity ${params.intensity.max} or less)`,
+      });
+      continue;
+    }
     if (!ranked.length) {
       const subs = substituteKinds(ctx, kinds);
-      ranked = rankKinds(ctx, subs).filter((r) => fits(r.activity));
+      ranked = rankKinds(ctx, subs).filter((r) => fits(r.activity) && calm(r));
       if (ranked.length) {
         ctx.trace.push({
           ruleId: 'engine.phase-substitute',
@@ -98,6 +112,7 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
     }
     const plan: SlotPlan = {
       role: slot.role,
+      kinds,
       name: kinds.includes(ranked[0].activity.kind) || slot.kinds.includes(ranked[0].activity.kind) ? slot.name : nameFor(ranked[0].activity.kind),
       share: slot.share,
       priority: slot.priority,
@@ -110,11 +125,16 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
 
   placePins(ctx, slots, fits);
   placeRequired(ctx, slots, fits);
+  if (request.equipment.balls < n) addShortBallOptions(ctx, slots, fits);
+  if (!slots.length) {
+    // Nothing in the shape can be played: everyone together in one grid (see sharedGridPhase).
+    slots.push({ role: 'arrival', name: 'Everyone together', kinds: [], share: 1, priority: 0, candidates: [] });
+  }
   // Distinct activities: a later part does not repeat an earlier part's first choice.
   for (const s of slots) {
     const fresh = s.candidates.filter((a) => !chosen.has(a.id));
     if (fresh.length) s.candidates = [...fresh, ...s.candidates.filter((a) => chosen.has(a.id))];
-    chosen.add(s.candidates[0].id);
+    if (s.candidates[0]) chosen.add(s.candidates[0].id);
   }
   return slots;
 }
@@ -166,8 +186,11 @@ function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefin
     let slot = slots.find((s) => !taken.has(s) && s.candidates.some((c) => c.kind === a.kind));
     if (!slot) {
       const average = slots.length ? slots.reduce((s, x) => s + x.share, 0) / slots.length : 1;
-      slot = { role: 'technical', name: nameFor(a.kind), share: average, priority: 0, candidates: [] };
-      slots.splice(a.kind === 'small-sided-game' || !slots.length ? slots.length : slots.length - 1, 0, slot);
+      slot = { role: 'technical', name: nameFor(a.kind), kinds: [a.kind], share: average, priority: 0, maxMinutes: 12, candidates: [] };
+      // Before the session's closing parts (game, sharp finish, cool-down), so those still close it.
+      let at = slots.length;
+      while (at > 0 && CLOSING.has(slots[at - 1].role)) at--;
+      slots.splice(a.kind === 'small-sided-game' || a.kind === 'cool-down' ? slots.length : at, 0, slot);
     }
     slot.candidates = [a, ...slot.candidates.filter((c) => c.id !== a.id)];
     slot.priority = Math.min(slot.priority, 0);
@@ -190,6 +213,7 @@ function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityD
     const slot: SlotPlan = {
       role: req.kind === 'small-sided-game' ? 'game' : req.kind === 'movement-prep' ? 'movement' : 'technical',
       name: nameFor(req.kind),
+      kinds: [req.kind],
       share: average,
       priority: -1,
       candidates: ranked.map((r) => r.activity),
@@ -199,6 +223,25 @@ function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityD
     ctx.trace.push({ ruleId: 'engine.required-phase', fired: true, effect: `added ${req.kind}: ${req.reason}` });
   }
 }
+
+/**
+ * With fewer balls than players, every part may fall back on activities that share a ball in a
+ * group (tried only when its own cannot keep everyone busy with the balls there are).
+ */
+function addShortBallOptions(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefinition) => boolean): void {
+  const shared: ActivityDefinition[] = [];
+  for (const kind of SHARED_BALL_KINDS) {
+    if (kindBlocked(ctx.params, ctx.request.ageGroup, ctx.forbidden, kind)) continue;
+    const best = rankedActivities(ctx, kind).find((r) => fits(r.activity) && r.activity.balls !== 'each');
+    if (best) shared.push(best.activity);
+  }
+  for (const s of slots) s.candidates = [...s.candidates, ...shared.filter((a) => !s.candidates.includes(a))];
+}
+
+/** Kinds whose activities keep a whole group busy with one or two balls. */
+const SHARED_BALL_KINDS: StationKind[] = ['passing-pattern', 'keep-ball', 'directional-possession', 'small-sided-game', 'tag-game'];
+
+const CLOSING = new Set<SlotRole>(['game', 'finish', 'cool-down']);
 
 function unique<T>(items: T[]): T[] {
   return [...new Set(items)];

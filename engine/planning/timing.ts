@@ -3,15 +3,17 @@
  * minutes that sum exactly; drinks breaks in the timeline at least every `drinksEveryMinutes`
  * (`heatDrinksEveryMinutes` in the heat), splitting a part that would run past one.
  */
-import type { ActivityDefinition, SlotRole } from '../../shared/types';
+import type { ActivityDefinition, SlotRole, StationKind } from '../../shared/types';
 import type { BuildContext } from './context';
 import type { SlotPlan } from './session-shape';
 
 export interface PhaseSpec {
   name: string;
   slot: SlotRole | 'break';
-  /** Null for a drinks break. */
+  /** Activities to try, best first (none for a drinks break). */
   candidates: ActivityDefinition[];
+  /** The kinds the part is for; a phase that plays another kind is named after that kind. */
+  kinds?: StationKind[];
   startMinute: number;
   endMinute: number;
   /** Goalkeepers do their own warm-up station in this phase. */
@@ -95,7 +97,7 @@ function dropForTime(ctx: BuildContext, slots: SlotPlan[], minutes: number): Slo
 
 /** Minutes by share (the focus stretching its kinds), each part within its cap where the total allows. */
 function splitWithCaps(total: number, slots: SlotPlan[], minEach: number, ctx: BuildContext): number[] {
-  const shares = slots.map((s) => s.share * (ctx.params.focusBoost[s.candidates[0].kind] ?? 1));
+  const shares = slots.map((s) => s.share * (s.candidates[0] ? (ctx.params.focusBoost[s.candidates[0].kind] ?? 1) : 1));
   const caps = slots.map((s) => s.maxMinutes ?? Number.POSITIVE_INFINITY);
   // Water-filling: parts at their cap keep it, the rest share what is left by their shares.
   const exact = new Array<number>(slots.length).fill(0);
@@ -127,7 +129,7 @@ export function wholeMinutes(total: number, exact: number[], minEach: number): n
   const out = scaled.map((x) => Math.floor(x));
   let left = total - out.reduce((s, x) => s + x, 0);
   const order = scaled.map((x, i) => ({ i, frac: x - Math.floor(x) })).sort((a, b) => b.frac - a.frac || a.i - b.i);
-  for (let k = 0; left > 0; k = (k + 1) % order.length, left--) out[order[k].i]++;
+  for (let k = 0; left > 0 && order.length; k = (k + 1) % order.length, left--) out[order[k].i]++;
   const floor = Math.min(minEach, Math.floor(total / Math.max(1, exact.length)));
   for (let i = 0; i < out.length; i++) {
     while (out[i] < floor) {
@@ -158,6 +160,7 @@ function withBreaks(
       name: continues ? `${slot.name} (continued)` : slot.name,
       slot: slot.role,
       candidates: slot.candidates,
+      kinds: slot.kinds,
       startMinute: clock,
       endMinute: clock + length,
       ...(continues ? { continues: true } : {}),
@@ -186,7 +189,8 @@ function withBreaks(
         drink();
         continue;
       }
-      const first = Math.max(minPhase, room);
+      // Split where the stretch ends, or earlier so what follows the break is a real phase too.
+      const first = Math.max(minPhase, Math.min(room, left - minPhase));
       if (left - first < minPhase) {
         push(slot, left, continues);
         left = 0;

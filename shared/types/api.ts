@@ -28,6 +28,8 @@ export interface TeamDto {
   /** User ids of the coaches and assistants attached to the team. */
   coachIds: string[];
   playerCount: number;
+  /** Activities pinned for the team's next plan (cleared once a plan has taken them). */
+  pinnedActivityIds: string[];
 }
 
 export interface PlayerDto {
@@ -39,6 +41,11 @@ export interface PlayerDto {
 }
 
 export type KitBagDto = Equipment;
+
+/** Body and answer of PUT /api/teams/:id/pinned-activities: the team's pins, in order. */
+export interface PinnedActivitiesDto {
+  activityIds: string[];
+}
 
 export interface CsvRowError {
   row: number;
