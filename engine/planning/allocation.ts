@@ -125,10 +125,11 @@ export function allocatePhase(
   if (whole) return whole;
   const penalty = rules.params.allocation.fallbackStationPenalty;
   let best: Allocation | null = null;
-  const substitutes = rules.params.kinds[activity.kind].substitutes.flatMap((k) => rules.substitutes(k).slice(0, 1));
-  for (let leftover = 1; leftover <= n; leftover++) {
+  const substitutes = rules.params.kinds[activity.kind].substitutes.flatMap((k) => rules.substitutes(k));
+  // At least one group plays the activity itself; the rest go to a substitute.
+  for (let leftover = 1; leftover < n; leftover++) {
     const main = groupsOfOneKind(n - leftover, coaches, activity, rules);
-    if (!main) continue;
+    if (!main || !main.groups.length) continue;
     const coachesLeft = coaches - main.groups.reduce((s, g) => s + g.coachJoins, 0);
     const capLeft = (rules.maxStations ?? Number.POSITIVE_INFINITY) - main.groups.length;
     if (capLeft < 1) continue;
