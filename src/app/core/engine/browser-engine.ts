@@ -2,11 +2,16 @@ import { Injectable } from '@angular/core';
 import type { ActivityKind, Notice, Plan, RuleSetDocument } from '../../../../shared/types';
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 
-/** An activity the coach may swap a phase to. */
+/** An activity of the plan's rules, and whether the coach may swap a phase to it (and why not). */
 export interface ActivityOption {
   id: string;
   kind: ActivityKind;
   title: string;
+  /** One line for the menu. */
+  summary: string;
+  allowed: boolean;
+  /** Why it cannot be used for this plan, when it cannot. */
+  reason?: string;
 }
 
 /**
@@ -17,7 +22,7 @@ export interface BrowserEngineApi {
   applyEdit(plan: Plan, edit: PlanEdit, rules: RuleSetDocument | null): Promise<Plan>;
   /** Problems the edited plan has (empty when it holds every rule). */
   checkPlan(plan: Plan, rules: RuleSetDocument | null): Notice[];
-  /** Activities the rules allow for this plan's players, age, kit and space. */
+  /** The rules' activities for this plan's players, age, kit and space: allowed or not, and why. */
   activities(plan: Plan, rules: RuleSetDocument | null): ActivityOption[];
 }
 

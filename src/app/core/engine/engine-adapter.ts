@@ -7,8 +7,13 @@ export function createEngineAdapter(): BrowserEngineApi {
     applyEdit: async (plan, edit, rules) => await applyEdit(plan, edit, rules ?? undefined),
     checkPlan: (plan, rules) => checkPlan(plan, rules ?? undefined),
     activities: (plan, rules) =>
-      listActivities(rules ?? undefined, plan)
-        .filter((a) => a.allowed)
-        .map((a) => ({ id: a.id, kind: a.kind, title: a.title })),
+      listActivities(rules ?? undefined, plan).map((a) => ({
+        id: a.id,
+        kind: a.kind,
+        title: a.title,
+        summary: a.summary,
+        allowed: a.allowed,
+        ...(a.reason ? { reason: a.reason } : {}),
+      })),
   };
 }

@@ -17,6 +17,7 @@ const station = (id: string, title: string, playerIds: string[], width = 10): St
   position: { x: 0, y: 0 },
   equipment: { balls: 1, cones: 4, bibs: 1, goals: 0 },
   conePositions: [],
+  positions: playerIds.map((pid, i) => ({ id: pid, role: i === 0 ? 'defender' : 'attacker', x: i, y: i })),
   progressions: { easier: ['area 10 → 12 m'], harder: ['area 10 → 8 m'] },
   coachingPoints: [],
   description: '',
@@ -37,6 +38,7 @@ const plan: Plan = {
     {
       name: 'Rondo start',
       activityId: 'r',
+      activityKind: 'keep-ball',
       startMinute: 0,
       endMinute: 6,
       stations: [station('s1', 'Square one', ['a', 'b', 'c', 'd', 'e'])],
@@ -44,6 +46,7 @@ const plan: Plan = {
     {
       name: 'Second go',
       activityId: 'r',
+      activityKind: 'keep-ball',
       startMinute: 6,
       endMinute: 10,
       stations: [station('s2', 'Square two', ['a', 'b', 'c', 'd', 'e'])],
@@ -83,9 +86,9 @@ describe('PitchSidePage', () => {
     return { fixture, http, el, button, settle };
   }
 
-  async function opened() {
+  async function opened(opened: SessionPlanDto = session) {
     const t = setUp();
-    t.http.expectOne('/api/plans/p1').flush(session);
+    t.http.expectOne('/api/plans/p1').flush(opened);
     t.http.expectOne('/api/teams/t1/players').flush([
       ...['a', 'b', 'c', 'd', 'e'].map((id) => ({
         id,
@@ -156,5 +159,71 @@ describe('PitchSidePage', () => {
       'Rondo start: Fen Q. joins station 1 (Square one)',
     );
     expect(el.querySelector('button[aria-label="Fen Q. leaves early"]')).not.toBeNull();
+  });
+
+  it('runs a drinks break as a phase of its own: the countdown says so, no stations, and what to set up next', async () => {
+    const game: Station = {
+      ...station('s3', 'Two goals', ['a', 'b', 'c', 'd', 'e']),
+      activityKind: 'small-sided-game',
+      format: '3v2',
+      roles: {
+        teams: [
+          ['a', 'b', 'c'],
+          ['d', 'e'],
+        ],
+      },
+      positions: ['a', 'b', 'c', 'd', 'e'].map((id, i) => ({
+        id,
+        role: i < 3 ? 'team-a' : 'team-b',
+        x: i,
+        y: i,
+      })),
+      notes: ['No cones left for its corners: mark the corners with bibs, bags or bottles.'],
+    };
+    const withBreak: Plan = {
+      ...plan,
+      phases: [
+        {
+          name: 'Drinks break (heat)',
+          activityId: 'drinks-break',
+          activityKind: 'break',
+          startMinute: 0,
+          endMinute: 2,
+          stations: [],
+        },
+        {
+          name: 'Game',
+          activityId: 'g',
+          activityKind: 'small-sided-game',
+          startMinute: 2,
+          endMinute: 10,
+          stations: [game],
+          changeover: { conesPlaced: 4, conesLifted: 0, goalsMoved: 2, minutes: 0 },
+        },
+      ],
+    };
+    const { el, button, settle } = await opened({ ...session, plan: withBreak });
+    expect(el.querySelector('#current-phase-name')?.textContent).toContain('Drinks break (heat)');
+    expect(el.querySelector('[data-testid=countdown]')?.getAttribute('aria-label')).toBe(
+      'Time left in the drinks break',
+    );
+    expect(el.querySelector('[data-testid=countdown]')?.textContent?.trim()).toBe('2:00');
+    expect(el.querySelector('[data-testid=break-now]')).not.toBeNull();
+    expect(el.querySelectorAll('cw-station-card')).toHaveLength(0);
+    expect(el.querySelector('[data-testid=next-set-up]')?.textContent).toContain(
+      'Set up during the drinks break: 4 cones, move 2 goals',
+    );
+
+    button('button[aria-label="Next phase"]').click();
+    await settle();
+    const card = el.querySelector('cw-station-card')!;
+    expect(card.querySelector('[data-testid=station-kind]')?.textContent).toContain('Small-sided game');
+    expect(card.querySelector('[data-testid=station-kind]')?.textContent).toContain('3v2');
+    expect(card.querySelector('[data-player=a]')?.textContent).toContain('Side A · bib');
+    expect(card.querySelector('[data-player=d]')?.textContent).toContain('Side B');
+    expect(card.querySelector('[data-testid=station-notes]')?.textContent).toContain(
+      'mark the corners with bibs',
+    );
+    expect(card.querySelectorAll('cw-station-diagram g.cw-dot')).toHaveLength(5);
   });
 });

@@ -43,6 +43,7 @@ import { PitchSideApi } from './services/pitch-side-api';
 import { readSnapshot, saveSnapshot } from './services/plan-snapshot';
 import { ScreenAwake } from './services/screen-awake';
 import { StationCard } from './station-card';
+import { changeoverWords, isBreak } from '../plans/services/plan-words';
 
 /** The running plan at the pitch: countdown, stations, late arrivals and how each station goes. */
 @Component({
@@ -86,6 +87,15 @@ export class PitchSidePage {
   );
   protected readonly nextPhase = computed<Phase | null>(
     () => this.phases()[this.reading().phaseIndex + 1] ?? null,
+  );
+  /** Whether the phase now is a drinks break (a phase of its own, with no stations). */
+  protected readonly onBreak = computed(() => {
+    const phase = this.currentPhase();
+    return !!phase && isBreak(phase);
+  });
+  /** What to put out for the next phase, when it needs anything. */
+  protected readonly nextSetUp = computed(() =>
+    changeoverWords(this.phases(), this.reading().phaseIndex + 1),
   );
   protected readonly countdown = computed(() => {
     const phase = this.currentPhase();

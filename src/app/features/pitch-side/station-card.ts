@@ -1,7 +1,10 @@
 import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
-import type { Station, StationVerdict } from '../../../../shared/types';
+import { POSITION_STYLE, type Station, type StationVerdict } from '../../../../shared/types';
+import { ACTIVITY_KIND_LABELS } from '../../core/labels/plan-labels';
+import { StationDiagram } from '../../shared/components/station-diagram';
+import { ROLE_TAGS, startRoles } from '../plans/services/plan-words';
 
 /** The three verdicts a coach can give a station, with their labels and icons. */
 export const VERDICTS: { value: StationVerdict; label: string; icon: string }[] = [
@@ -10,10 +13,13 @@ export const VERDICTS: { value: StationVerdict; label: string; icon: string }[] 
   { value: 'too-hard', label: 'Too hard', icon: 'trending_down' },
 ];
 
-/** One station as a coach reads it at arm's length: group, area, roles and the verdict buttons. */
+/**
+ * One station as a coach reads it at arm's length: kind and format, the set-up drawn, notes for
+ * the day, the group with sides or roles, and the verdict buttons.
+ */
 @Component({
   selector: 'cw-station-card',
-  imports: [MatButtonModule, MatIconModule],
+  imports: [MatButtonModule, MatIconModule, StationDiagram],
   templateUrl: './station-card.html',
   styleUrl: './station-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -37,20 +43,26 @@ export class StationCard {
   readonly judged = output<StationVerdict>();
 
   protected readonly verdicts = VERDICTS;
+  protected readonly kindLabels = ACTIVITY_KIND_LABELS;
   protected readonly headingId = computed(() => `station-${this.station().id}-title`);
 
   protected readonly group = computed(() => {
     const station = this.station();
     const names = this.names();
-    const defenders = new Set(station.roles.defenders ?? []);
-    const keepers = new Set(station.roles.goalkeeper ?? []);
+    const roles = startRoles(station);
     const arrivals = new Set(this.arrivals());
-    return station.playerIds.map((id) => ({
-      id,
-      name: names[id] ?? id,
-      role: keepers.has(id) ? 'keeper' : defenders.has(id) ? 'defender' : null,
-      arrived: arrivals.has(id),
-    }));
+    return station.playerIds.map((id, i) => {
+      const role = roles.get(id) ?? 'player';
+      return {
+        id,
+        number: i + 1,
+        name: names[id] ?? id,
+        fill: POSITION_STYLE[role].fill,
+        text: POSITION_STYLE[role].text,
+        role: ROLE_TAGS[role] ?? null,
+        arrived: arrivals.has(id),
+      };
+    });
   });
 
   protected verdictLabel(value: string | null): string {

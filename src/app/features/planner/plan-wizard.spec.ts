@@ -3,7 +3,13 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter, Router } from '@angular/router';
-import type { PlanRequest, PlayerDto, TeamDto } from '../../../../shared/types';
+import {
+  FOCUSES,
+  FOCUS_LABELS,
+  type PlanRequest,
+  type PlayerDto,
+  type TeamDto,
+} from '../../../../shared/types';
 import { PlanWizard } from './plan-wizard';
 
 const TEAM: TeamDto = {
@@ -14,6 +20,7 @@ const TEAM: TeamDto = {
   usualSpace: { width: 36, length: 44 },
   coachIds: [],
   playerCount: 15,
+  pinnedActivityIds: [],
 };
 
 const NAMES = ['Ada P.', 'Ben O.', 'Cleo R.', 'Dev S.', 'Edie T.', 'Finn U.', 'Gia V.', 'Hal W.'];
@@ -153,6 +160,36 @@ describe('PlanWizard', () => {
     const body = http.expectOne('/api/plans').request.body as { request: PlanRequest };
     expect(body.request.players).toHaveLength(14);
     expect(body.request.players.at(-1)).toEqual({ id: 'p99', name: 'Pip Q.' });
+  });
+
+  it('offers the ten focuses in their words, and a training session names the first one picked as its theme', async () => {
+    const { fixture, http, root, submit } = await setUp();
+    const chips = Array.from(root.querySelectorAll<HTMLElement>('.cw-focus mat-chip-option'));
+    expect(chips.map((c) => c.textContent?.trim())).toEqual(FOCUSES.map((f) => FOCUS_LABELS[f]));
+    expect(chips).toHaveLength(10);
+    const hint = () => root.querySelector('[data-testid="focus-hint"]')!.textContent!;
+    expect(hint()).toContain('first focus you pick as its theme');
+
+    const training = Array.from(root.querySelectorAll<HTMLButtonElement>('.cw-kind button')).find((b) =>
+      b.textContent?.includes('Training'),
+    )!;
+    training.click();
+    const chip = (label: string) =>
+      chips
+        .find((c) => c.textContent?.trim() === label)!
+        .querySelector<HTMLElement>('[role="option"], button') ??
+      chips.find((c) => c.textContent?.trim() === label)!;
+    chip('Possession').click();
+    await fixture.whenStable();
+    chip('Passing').click();
+    await fixture.whenStable();
+    fixture.detectChanges();
+    expect(hint()).toContain('Theme: Possession');
+
+    await submit();
+    const body = http.expectOne('/api/plans').request.body as { request: PlanRequest };
+    expect(body.request.kind).toBe('training');
+    expect(body.request.focus).toEqual(['possession', 'passing']);
   });
 
   it('refuses minutes outside what the engine accepts, in plain words, without calling the server', async () => {

@@ -6,12 +6,14 @@ import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
 import { of } from 'rxjs';
 import { defaultRuleSet, generatePlan, listActivities } from '../../../../engine/index';
-import type {
-  Plan,
-  PlanRequest,
-  RuleSetDocument,
-  RuleSetDto,
-  SessionPlanDto,
+import {
+  ACTIVITY_KIND_LABELS,
+  POSITION_STYLE,
+  type Plan,
+  type PlanRequest,
+  type RuleSetDocument,
+  type RuleSetDto,
+  type SessionPlanDto,
 } from '../../../../shared/types';
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 import { AuthStore } from '../../core/auth/auth-store';
@@ -32,6 +34,25 @@ const REQUEST: PlanRequest = {
   seed: 'harbour-hawks',
 };
 
+/** A hot hour of U12 training with two keepers and one adult: drinks breaks, a game in goals, a supervision warning. */
+const TRAINING: PlanRequest = {
+  ageGroup: 'U12',
+  level: 'intermediate',
+  players: [...ALL, 'Nia C.'].map((name, i) => ({
+    id: `p${i + 1}`,
+    name,
+    ...(i < 2 ? { goalkeeper: true } : {}),
+  })),
+  coaches: 1,
+  equipment: { balls: 14, cones: 40, bibs: 10, goals: 2 },
+  space: { width: 45, length: 60 },
+  minutes: 60,
+  kind: 'training',
+  focus: ['finishing'],
+  conditions: { temperatureC: 29 },
+  seed: 'harbour-hawks',
+};
+
 function dto(plan: Plan, version = 1): SessionPlanDto {
   return {
     id: 'plan-1',
@@ -39,7 +60,7 @@ function dto(plan: Plan, version = 1): SessionPlanDto {
     teamName: 'Harbour Hawks U10',
     date: '2026-12-05',
     kickOff: '10:30',
-    kind: 'match-warm-up',
+    kind: plan.request.kind,
     minutes: plan.request.minutes,
     playerCount: plan.request.players.length,
     status: 'draft',
@@ -81,14 +102,22 @@ vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
 
 describe('PlanPage', () => {
   let plan: Plan;
+  let training: Plan;
 
   beforeAll(async () => {
     plan = await generatePlan(REQUEST);
+    training = await generatePlan(TRAINING);
   });
 
   /** `phone` answers the page's breakpoint query as a 390 px screen would. */
   /** `rules` is what the server answers for the plan's rule set (the club's published rules). */
-  async function setUp({ phone = false, rules = defaultRuleSet as RuleSetDocument } = {}) {
+  /** `shown` is the plan the server answers with (the U10 warm-up unless a test says otherwise). */
+  async function setUp({
+    phone = false,
+    rules = defaultRuleSet as RuleSetDocument,
+    shown = undefined as Plan | undefined,
+  } = {}) {
+    const served = shown ?? plan;
     TestBed.configureTestingModule({
       imports: [PlanPage],
       providers: [
@@ -121,8 +150,8 @@ describe('PlanPage', () => {
     fixture.componentRef.setInput('planId', 'plan-1');
     const http = TestBed.inject(HttpTestingController);
     fixture.detectChanges();
-    http.expectOne('/api/plans/plan-1').flush(dto(plan));
-    http.expectOne(`/api/rule-sets/${plan.ruleSet.id}`).flush(ruleSetDto(rules));
+    http.expectOne('/api/plans/plan-1').flush(dto(served));
+    http.expectOne(`/api/rule-sets/${served.ruleSet.id}`).flush(ruleSetDto(rules));
     await fixture.whenStable();
     fixture.detectChanges();
     return { fixture, http, root: fixture.nativeElement as HTMLElement };
@@ -254,18 +283,94 @@ describe('PlanPage', () => {
     expect(root.textContent).toContain('Cleo R.');
   });
 
-  it('draws each station from the engine coordinates, with its cones and numbered players', async () => {
+  it('draws each station from the engine coordinates: one circle per start position, in its role colour', async () => {
     const { root } = await setUp();
     const station = plan.phases[0].stations[0];
     const svg = root.querySelector('cw-station-diagram svg')!;
-    expect(svg.getAttribute('aria-label')).toContain(
-      `${station.area.width} by ${station.area.length} metres`,
-    );
-    expect(svg.querySelectorAll('polygon').length).toBe(station.conePositions.length);
-    expect(svg.querySelectorAll('circle').length).toBe(station.playerIds.length);
+    expect(svg.getAttribute('aria-label')).toContain(`${station.area.width} × ${station.area.length} m`);
+    expect(svg.querySelectorAll('polygon[data-marker="cone"]').length).toBe(station.conePositions.length);
+    const circles = svg.querySelectorAll('g.cw-dot');
+    expect(circles.length).toBe(station.positions.length);
+    expect(circles.length).toBe(station.playerIds.length + station.coachJoins);
+    station.positions.forEach((position, i) => {
+      expect(circles[i].getAttribute('transform')).toBe(`translate(${position.x} ${position.y})`);
+      expect(circles[i].querySelector('circle')!.getAttribute('fill')).toBe(
+        POSITION_STYLE[position.role].fill,
+      );
+    });
     const area = svg.querySelector('rect')!;
     expect(Number(area.getAttribute('x'))).toBe(station.position.x);
     expect(Number(area.getAttribute('width'))).toBe(station.area.width);
+  });
+
+  it('lists the sides of a game with keepers, who is in goal, its format, and a key to the diagram', async () => {
+    const { root } = await setUp({ shown: training });
+    const phaseIndex = training.phases.findIndex((p) =>
+      p.stations.some(
+        (s) => s.activityKind === 'small-sided-game' && (s.roles.goalkeeper ?? []).length === 2,
+      ),
+    );
+    expect(phaseIndex, 'the training plan has a game with two keepers').toBeGreaterThanOrEqual(0);
+    const game = training.phases[phaseIndex].stations[0];
+    const name = (id: string) => training.request.players.find((p) => p.id === id)!.name!;
+    const card = root.querySelectorAll('[data-testid="phase"]')[phaseIndex].querySelector('cw-station-card')!;
+    const kind = card.querySelector('[data-testid="station-kind"]')!.textContent!;
+    expect(kind).toContain(ACTIVITY_KIND_LABELS['small-sided-game']);
+    expect(kind).toContain(game.format!);
+    const roles = Array.from(card.querySelectorAll('[data-testid="station-roles"] dt')).map((dt) => [
+      dt.textContent!.trim(),
+      dt.nextElementSibling!.textContent!,
+    ]);
+    const [sideA, sideB] = game.roles.teams!;
+    expect(roles.map(([label]) => label)).toEqual(['Side A (bibs)', 'Side B', 'In goal']);
+    for (const id of sideA) expect(roles[0][1]).toContain(name(id));
+    for (const id of sideB) expect(roles[1][1]).toContain(name(id));
+    for (const id of game.roles.goalkeeper!) expect(roles[2][1]).toContain(name(id));
+    const keys = Array.from(card.querySelectorAll('.cw-legend li')).map((li) => li.textContent!.trim());
+    expect(keys).toEqual(expect.arrayContaining(['Goalkeeper', 'Side A (bibs)', 'Side B', 'Goal']));
+    expect(card.querySelectorAll('cw-station-diagram g.cw-dot[data-role="goalkeeper"]').length).toBe(2);
+  });
+
+  it('shows each drinks break as a row of its own with no stations, in the timeline and the page', async () => {
+    const { root } = await setUp({ shown: training });
+    const breaks = training.phases.filter((p) => p.activityKind === 'break');
+    expect(breaks.length).toBeGreaterThan(0);
+    const rows = Array.from(root.querySelectorAll('[data-testid="phase"][data-kind="break"]'));
+    expect(rows).toHaveLength(breaks.length);
+    for (const [i, row] of rows.entries()) {
+      const minutes = breaks[i].endMinute - breaks[i].startMinute;
+      expect(row.textContent).toContain('Drinks break');
+      expect(row.textContent).toContain(`${breaks[i].name} · ${minutes} min`);
+      expect(row.querySelector('cw-station-card')).toBeNull();
+      expect(row.querySelector('.cw-swap')).toBeNull();
+    }
+    expect(root.querySelectorAll('cw-phase-timeline li[data-kind="break"]')).toHaveLength(breaks.length);
+    expect(root.querySelectorAll('[data-testid="phase"]')).toHaveLength(training.phases.length);
+  });
+
+  it('says what to set up before a phase, and the theme of a training session', async () => {
+    const { root } = await setUp({ shown: training });
+    const index = training.phases.findIndex((p) => (p.changeover?.minutes ?? 0) > 0);
+    expect(index).toBeGreaterThan(0);
+    const change = training.phases[index].changeover!;
+    const phases = root.querySelectorAll('[data-testid="phase"]');
+    const line = phases[index].querySelector('[data-testid="changeover"]')!;
+    expect(line.textContent).toContain(`Set up first: ${change.conesPlaced} cones`);
+    expect(line.textContent).toContain(`${change.minutes} min of this phase`);
+    expect(root.querySelector('[data-testid="plan-theme"]')!.textContent).toContain('Theme: Finishing');
+  });
+
+  it('puts a supervision warning first, with the guidance it comes from', async () => {
+    const { root } = await setUp({ shown: training });
+    const warning = training.warnings.find((w) => w.code === 'supervision-ratio')!;
+    expect(warning, 'one adult for 14 U12 players is below the ratio').toBeTruthy();
+    const box = root.querySelector('[data-testid="supervision"]')!;
+    expect(box.textContent).toContain(warning.message);
+    expect(box.textContent).toContain(`Source: ${warning.source}`);
+    expect(box.textContent).toContain('usual guidance 1:8, so 2 adults');
+    // Shown above the other notices, and not twice.
+    expect(root.querySelector('cw-plan-notices section')).toBe(box);
+    expect(root.querySelector('[data-testid="warnings"]')?.textContent ?? '').not.toContain(warning.message);
   });
 
   it('puts cautions where they cannot be missed, and the rules that fired in the why panel', async () => {
@@ -312,7 +417,7 @@ describe('PlanPage', () => {
     expect(root.querySelector(`[data-station="${to.id}"] [data-player="${playerId}"]`)).not.toBeNull();
   });
 
-  it('offers only activities the rules allow in the swap menu and saves the swap', async () => {
+  it('offers every other activity in the swap menu, grouped by kind, those ruled out saying why, and saves the swap', async () => {
     const { fixture, http, root } = await setUp();
     const phase = root.querySelectorAll('[data-testid="phase"]')[0]!;
     const swap = Array.from(phase.querySelectorAll<HTMLButtonElement>('button')).find((b) =>
@@ -321,10 +426,32 @@ describe('PlanPage', () => {
     swap.click();
     await settle(fixture);
     const items = Array.from(document.querySelectorAll<HTMLButtonElement>('[mat-menu-item]'));
-    expect(items.length).toBeGreaterThan(0);
+    const offered = listActivities(defaultRuleSet, plan).filter((a) => a.id !== plan.phases[0]!.activityId);
+    expect(items).toHaveLength(offered.length);
     const current = plan.phases[0]!.stations[0]!.title;
-    expect(items.some((b) => b.textContent?.trim() === current)).toBe(false);
-    items[0]!.click();
+    expect(items.some((b) => b.querySelector('.cw-swap-title')?.textContent?.trim() === current)).toBe(false);
+    // Each option says in a line what it is, or why it is not for this plan; the latter cannot be picked.
+    for (const option of offered) {
+      const item = items.find((b) => b.getAttribute('data-activity') === option.id)!;
+      expect(item.querySelector('.cw-swap-title')!.textContent!.trim()).toBe(option.title);
+      if (option.allowed) {
+        expect(item.disabled).toBe(false);
+        expect(item.querySelector('.cw-swap-summary')!.textContent!.trim()).toBe(option.summary);
+      } else {
+        expect(item.disabled).toBe(true);
+        expect(item.querySelector('.cw-swap-summary')!.textContent).toContain(option.reason!);
+      }
+    }
+    // Grouped by kind, the phase's own kind first.
+    const groups = Array.from(document.querySelectorAll('.mat-mdc-menu-panel [role="group"]'));
+    expect(groups[0].getAttribute('aria-label')).toBe(ACTIVITY_KIND_LABELS[plan.phases[0]!.activityKind]);
+    for (const group of groups) {
+      const kind = group.getAttribute('data-kind');
+      for (const item of Array.from(group.querySelectorAll('[data-activity]'))) {
+        expect(offered.find((a) => a.id === item.getAttribute('data-activity'))!.kind).toBe(kind);
+      }
+    }
+    items.find((b) => !b.disabled)!.click();
     await settle(fixture);
     const save = http.expectOne({ method: 'PATCH', url: '/api/plans/plan-1' });
     const edit = (save.request.body as { edit: PlanEdit }).edit;
@@ -345,7 +472,9 @@ describe('PlanPage', () => {
     ).find((b) => b.textContent?.includes('Swap activity'))!;
     swap.click();
     await settle(fixture);
-    const titles = Array.from(document.querySelectorAll('[mat-menu-item]')).map((b) => b.textContent?.trim());
+    const titles = Array.from(document.querySelectorAll('[mat-menu-item] .cw-swap-title')).map((b) =>
+      b.textContent?.trim(),
+    );
     expect(titles).toContain('Harbour rondo, our way');
     expect(titles).not.toContain(offered.title);
   });
@@ -367,6 +496,6 @@ describe('PlanPage', () => {
     await settle(fixture);
     expect(root.querySelector('[role="alert"]')!.textContent).toContain('The plan changed since version 1.');
     const label = root.querySelector('cw-station-diagram svg')!.getAttribute('aria-label')!;
-    expect(label).toContain(`${station.area.width} by ${station.area.length} metres`);
+    expect(label).toContain(`${station.area.width} × ${station.area.length} m`);
   });
 });

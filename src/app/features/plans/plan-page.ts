@@ -7,13 +7,13 @@ import { MatMenuModule } from '@angular/material/menu';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
 import { RouterLink } from '@angular/router';
-import type { Phase } from '../../../../shared/types';
+import { ACTIVITY_KINDS, type ActivityKind, type Phase } from '../../../../shared/types';
 import { CardPaper, PlansApi } from '../../core/api/plans-api';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 import { AuthStore } from '../../core/auth/auth-store';
 import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
-import { KIND_LABELS } from '../../core/labels/plan-labels';
+import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay } from '../../core/time/dates';
 import { PhaseTimeline } from './components/phase-timeline';
 import { PlanNotices } from './components/plan-notices';
@@ -23,6 +23,14 @@ import { WhyPanel } from './components/why-panel';
 import { PAPER_LABELS, PaperPreference } from './services/paper-preference';
 import { PlanHandover } from './services/plan-handover';
 import { PlanSession } from './services/plan-session';
+import { breakWords, changeoverWords, isBreak } from './services/plan-words';
+
+/** One kind's activities in the swap menu. */
+interface SwapGroup {
+  kind: ActivityKind;
+  label: string;
+  options: ActivityOption[];
+}
 
 /** The plan: timeline to kick-off, station cards with diagrams, cautions, why, edits, print and share. */
 @Component({
@@ -55,9 +63,18 @@ export class PlanPage {
   readonly planId = input.required<string>();
 
   protected readonly kindLabels = KIND_LABELS;
+  protected readonly focusLabels = FOCUS_LABELS;
   protected readonly day = shortDay;
+  protected readonly isBreak = isBreak;
+  protected readonly breakWords = breakWords;
   protected readonly canEdit = computed(() => this.auth.hasRole('lead', 'coach'));
-  protected readonly activities = signal<ActivityOption[]>([]);
+  /** The swap menu's activities, grouped by kind: the phase's own kind first, then the rest. */
+  protected readonly swapGroups = signal<SwapGroup[] | null>(null);
+  /** "Set up first: …" for each phase, in order (null where nothing changes). */
+  protected readonly changeovers = computed(() => {
+    const phases = this.session.plan()?.phases ?? [];
+    return phases.map((_, i) => changeoverWords(phases, i));
+  });
   protected readonly printing = signal(false);
   protected readonly paper = this.paperPreference.paper;
   protected readonly paperLabels = PAPER_LABELS;
@@ -91,19 +108,29 @@ export class PlanPage {
     );
   }
 
-  /** Fills the swap menu from the engine's activity list, leaving out what the club rules forbid. */
+  /**
+   * Fills the swap menu from the engine's list for this plan and its club rules: every activity
+   * but the phase's own, grouped by kind, those the rules or the numbers rule out shown with why.
+   */
   protected async loadActivities(phase: Phase): Promise<void> {
-    const plan = this.session.plan();
-    if (!plan) return;
-    const forbidden = plan.forbiddenActivities ?? [];
-    this.activities.set(
-      (await this.session.activities())
-        .filter((a) => a.id !== phase.activityId)
-        .filter((a) => !forbidden.some((f) => f.activityId === a.id || f.kind === a.kind)),
+    this.swapGroups.set(null);
+    const options = (await this.session.activities()).filter((a) => a.id !== phase.activityId);
+    const order = [phase.activityKind, ...ACTIVITY_KINDS.filter((k) => k !== phase.activityKind)];
+    this.swapGroups.set(
+      order
+        .map((kind) => ({
+          kind,
+          label: ACTIVITY_KIND_LABELS[kind],
+          options: options
+            .filter((a) => a.kind === kind)
+            .sort((a, b) => Number(b.allowed) - Number(a.allowed)),
+        }))
+        .filter((group) => group.options.length > 0),
     );
   }
 
   protected swap(phaseIndex: number, activity: ActivityOption): void {
+    if (!activity.allowed) return;
     void this.session.edit(
       { type: 'swap-activity', phaseIndex, activityId: activity.id },
       `Phase ${phaseIndex + 1} swapped to ${activity.title}`,

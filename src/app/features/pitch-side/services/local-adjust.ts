@@ -1,9 +1,10 @@
 import type { Plan, PlayerMove, PresentPlayer } from '../../../../../shared/types';
 
 /**
- * Without a network the screen still shows who goes where: an arrival joins the smallest group
- * of each phase still to come, a leaver leaves their group, nobody else moves. The server's
- * re-plan replaces this once the queue syncs.
+ * Until the engine's re-plan is ready (it loads lazily; the server's answer replaces both) the
+ * screen still shows who goes where: an arrival joins the smallest group of each phase still to
+ * come (with no start position: the diagram draws only what the engine placed), a leaver leaves
+ * their group, roles and start position, nobody else moves. Drinks breaks have no groups.
  */
 export function adjustRosterLocally(
   plan: Plan,
@@ -17,9 +18,19 @@ export function adjustRosterLocally(
       const leaving = station.playerIds.filter((id) => removed.has(id));
       for (const playerId of leaving)
         moves.push({ playerId, fromStationId: station.id, toStationId: null, phaseIndex });
-      return leaving.length
-        ? { ...station, playerIds: station.playerIds.filter((id) => !removed.has(id)) }
-        : station;
+      if (!leaving.length) return station;
+      const keep = (ids: string[] | undefined) => ids?.filter((id) => !removed.has(id));
+      const { teams, ...lists } = station.roles;
+      const roles = Object.fromEntries(
+        Object.entries(lists).map(([role, ids]) => [role, keep(ids as string[])]),
+      ) as typeof station.roles;
+      if (teams) roles.teams = [keep(teams[0])!, keep(teams[1])!];
+      return {
+        ...station,
+        playerIds: station.playerIds.filter((id) => !removed.has(id)),
+        positions: station.positions.filter((p) => !removed.has(p.id)),
+        roles,
+      };
     });
     for (const player of change.add ?? []) {
       if (stations.length === 0) break;

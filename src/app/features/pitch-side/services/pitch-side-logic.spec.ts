@@ -17,9 +17,12 @@ const phase = (
 ): Phase => ({
   name,
   activityId: name,
+  activityKind: stations.length ? 'keep-ball' : 'break',
   startMinute,
   endMinute,
-  stations: stations.map((s, i) => ({ id: `${name}-${i}`, playerIds: [], ...s }) as Station),
+  stations: stations.map(
+    (s, i) => ({ id: `${name}-${i}`, playerIds: [], positions: [], roles: {}, ...s }) as Station,
+  ),
 });
 
 describe('phase clock', () => {
@@ -74,5 +77,39 @@ describe('adjustRosterLocally', () => {
     expect(next.phases.flatMap((p) => p.stations.flatMap((s) => s.playerIds))).not.toContain('c');
     expect(moves.map((m) => m.phaseIndex)).toEqual([0, 1]);
     expect(next.request.players).toHaveLength(4);
+  });
+
+  it("takes a leaver off a game's side and out of its diagram, and skips a drinks break", () => {
+    const game = {
+      request: { players: ['a', 'b', 'c', 'd'].map((id) => ({ id })) },
+      phases: [
+        phase('Game', 0, 8, [
+          {
+            playerIds: ['a', 'b', 'c', 'd'],
+            roles: {
+              teams: [
+                ['a', 'b'],
+                ['c', 'd'],
+              ],
+              goalkeeper: ['a', 'c'],
+            },
+            positions: ['a', 'b', 'c', 'd'].map((id, i) => ({
+              id,
+              role: i < 2 ? 'team-a' : 'team-b',
+              x: i,
+              y: i,
+            })),
+          },
+        ]),
+        phase('Drinks break', 8, 10),
+      ],
+    } as unknown as Plan;
+    const { plan: next } = adjustRosterLocally(game, { remove: ['c'], add: [{ id: 'e' }], fromMinute: 0 });
+    const [station] = next.phases[0].stations;
+    expect(station.roles.teams).toEqual([['a', 'b'], ['d']]);
+    expect(station.roles.goalkeeper).toEqual(['a']);
+    expect(station.positions.map((p) => p.id)).toEqual(['a', 'b', 'd']);
+    expect(station.playerIds).toEqual(['a', 'b', 'd', 'e']);
+    expect(next.phases[1].stations).toEqual([]);
   });
 });

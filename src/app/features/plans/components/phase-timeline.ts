@@ -1,27 +1,46 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { MatIconModule } from '@angular/material/icon';
 import type { Phase } from '../../../../../shared/types';
 import { clockTime, minutesOfDay } from '../../../core/time/dates';
+import { breakWords, isBreak } from '../services/plan-words';
 
 interface TimelineRow {
   index: number;
   name: string;
+  /** A drinks break: a row of its own, with no stations. */
+  isBreak: boolean;
   minutes: number;
+  /** Minutes of the phase set aside to put out kit first (0 when none). */
+  setUpMinutes: number;
   clock: string | null;
   toKickOff: number;
   share: number;
 }
 
-/** The phases in order, with clock times that count down to kick-off. */
+/** The phases in order, drinks breaks among them, with clock times that count down to kick-off. */
 @Component({
   selector: 'cw-phase-timeline',
+  imports: [MatIconModule],
   template: `
     <ol class="cw-timeline" aria-label="Timeline">
       @for (row of rows(); track row.index) {
-        <li [style.flex-grow]="row.share">
+        <li
+          [style.flex-grow]="row.share"
+          [class.cw-break-row]="row.isBreak"
+          [attr.data-kind]="row.isBreak ? 'break' : null"
+        >
           <a [href]="'#phase-' + row.index" class="cw-slot">
             <span class="cw-clock">{{ row.clock ?? 'min ' + (total() - row.toKickOff) }}</span>
-            <span class="cw-name">{{ row.name }}</span>
-            <span class="cw-left">{{ row.minutes }} min · {{ row.toKickOff }} to {{ endLabel() }}</span>
+            <span class="cw-name">
+              @if (row.isBreak) {
+                <mat-icon aria-hidden="true" class="cw-drop">water_drop</mat-icon>
+              }
+              {{ row.name }}
+            </span>
+            <span class="cw-left"
+              >{{ row.isBreak ? '' : row.minutes + ' min · ' }}{{ row.toKickOff }} to {{ endLabel()
+              }}{{ row.setUpMinutes ? ' · ' + row.setUpMinutes + ' min set-up' : '' }}</span
+            >
           </a>
         </li>
       }
@@ -35,9 +54,11 @@ interface TimelineRow {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PhaseTimeline {
+  /** The plan's phases, drinks breaks included. */
   readonly phases = input.required<Phase[]>();
   /** HH:MM the plan ends at (kick-off for a match warm-up). */
   readonly kickOff = input<string | null>(null);
+  /** Whether the plan ends at a kick-off (a match warm-up) rather than at the end of training. */
   readonly matchDay = input(true);
 
   protected readonly total = computed(() => this.phases().at(-1)?.endMinute ?? 0);
@@ -54,8 +75,10 @@ export class PhaseTimeline {
   protected readonly rows = computed<TimelineRow[]>(() =>
     this.phases().map((phase, index) => ({
       index,
-      name: phase.name,
+      name: isBreak(phase) ? breakWords(phase) : phase.name,
+      isBreak: isBreak(phase),
       minutes: phase.endMinute - phase.startMinute,
+      setUpMinutes: phase.changeover?.minutes ?? 0,
       clock: this.startOfDay() === null ? null : clockTime((this.startOfDay() ?? 0) + phase.startMinute),
       toKickOff: this.total() - phase.startMinute,
       share: Math.max(1, phase.endMinute - phase.startMinute),

@@ -1,12 +1,46 @@
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { MatIconModule } from '@angular/material/icon';
-import type { Notice } from '../../../../../shared/types';
+import type { Notice, Supervision } from '../../../../../shared/types';
 
-/** Cautions (safety) and warnings (shortfalls, adaptations), at the top where no one misses them. */
+/** Warnings about the adults on the pitch: shown first, with the guidance they come from. */
+const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-per-adult']);
+
+/**
+ * Adults and supervision, cautions (safety) and warnings (shortfalls, adaptations), at the top
+ * where no one misses them; each with the source it rests on where there is one.
+ */
 @Component({
   selector: 'cw-plan-notices',
   imports: [MatIconModule],
   template: `
+    @if (adultWarnings().length) {
+      <section
+        class="cw-notices cw-adults"
+        role="alert"
+        aria-labelledby="adults-heading"
+        data-testid="supervision"
+      >
+        <h2 id="adults-heading"><mat-icon aria-hidden="true">groups</mat-icon> Adults on the pitch</h2>
+        @if (supervision(); as s) {
+          @if (s.recommendedAdults) {
+            <p class="cw-ratio">
+              {{ s.children }} players · {{ s.adults }} adult{{ s.adults === 1 ? '' : 's' }} here · usual
+              guidance {{ s.ratio }}, so {{ s.recommendedAdults }} adults
+            </p>
+          }
+        }
+        <ul>
+          @for (warning of adultWarnings(); track warning.code + $index) {
+            <li>
+              {{ warning.message }}
+              @if (warning.source) {
+                <span class="cw-source">Source: {{ warning.source }}</span>
+              }
+            </li>
+          }
+        </ul>
+      </section>
+    }
     @if (cautions().length) {
       <section class="cw-notices cw-cautions" aria-labelledby="cautions-heading" data-testid="cautions">
         <h2 id="cautions-heading"><mat-icon aria-hidden="true">health_and_safety</mat-icon> Safety</h2>
@@ -22,12 +56,17 @@ import type { Notice } from '../../../../../shared/types';
         </ul>
       </section>
     }
-    @if (warnings().length) {
+    @if (otherWarnings().length) {
       <section class="cw-notices cw-warnings" aria-labelledby="warnings-heading" data-testid="warnings">
         <h2 id="warnings-heading"><mat-icon aria-hidden="true">warning</mat-icon> Check before you start</h2>
         <ul>
-          @for (warning of warnings(); track warning.code + $index) {
-            <li>{{ warning.message }}</li>
+          @for (warning of otherWarnings(); track warning.code + $index) {
+            <li>
+              {{ warning.message }}
+              @if (warning.source) {
+                <span class="cw-source">Source: {{ warning.source }}</span>
+              }
+            </li>
           }
         </ul>
       </section>
@@ -48,6 +87,16 @@ import type { Notice } from '../../../../../shared/types';
       background: var(--cw-caution-bg);
       color: var(--cw-caution-fg);
       border-color: #c2410c;
+    }
+    .cw-adults {
+      background: var(--cw-caution-bg);
+      color: var(--cw-caution-fg);
+      border-color: #9f1239;
+      border-width: 1px 1px 1px 8px;
+    }
+    .cw-ratio {
+      margin: 0 0 4px;
+      font-weight: 600;
     }
     .cw-warnings {
       background: var(--cw-warning-bg);
@@ -77,6 +126,17 @@ import type { Notice } from '../../../../../shared/types';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PlanNotices {
+  /** The plan's warnings; those about adults and supervision are shown on their own, first. */
   readonly warnings = input<Notice[]>([]);
+  /** The plan's safety cautions. */
   readonly cautions = input<Notice[]>([]);
+  /** Children and adults against the usual ratio, shown beside the supervision warnings. */
+  readonly supervision = input<Supervision | null>(null);
+
+  protected readonly adultWarnings = computed(() =>
+    this.warnings().filter((w) => SUPERVISION_CODES.has(w.code)),
+  );
+  protected readonly otherWarnings = computed(() =>
+    this.warnings().filter((w) => !SUPERVISION_CODES.has(w.code)),
+  );
 }

@@ -3,8 +3,9 @@ import { ChangeDetectionStrategy, Component, computed, input, output, signal } f
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
-import type { Station } from '../../../../../shared/types';
+import { POSITION_STYLE, type Station } from '../../../../../shared/types';
 import { ACTIVITY_KIND_LABELS } from '../../../core/labels/plan-labels';
+import { ROLE_TAGS, roleLines, startRoles } from '../services/plan-words';
 import { StationDiagram } from '../../../shared/components/station-diagram';
 
 export interface PlayerMoveRequest {
@@ -13,7 +14,8 @@ export interface PlayerMoveRequest {
 }
 
 /**
- * One station: diagram, group (drag players in and out), roles, coaching points and steps. On a
+ * One station: its kind and format, diagram with a key, notes for the day, group (drag players in
+ * and out), sides or roles, coaching points and steps. On a
  * phone the details below the diagram fold into a native disclosure, so the page shows every
  * station's title, area and diagram first; wider screens and print show them open.
  */
@@ -25,33 +27,46 @@ export interface PlayerMoveRequest {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class StationCard {
+  /** The station to show. */
   readonly station = input.required<Station>();
+  /** 1-based number shown on the card. */
   readonly number = input.required<number>();
   /** The other stations of the phase, for the keyboard "move to" menu. */
   readonly siblings = input<Station[]>([]);
+  /** Player names by id. */
   readonly names = input.required<ReadonlyMap<string, string>>();
-  readonly goalkeepers = input<ReadonlySet<string>>(new Set());
+  /** Whether the coach may move players and resize the area. */
   readonly editable = input(true);
+  /** Whether an edit is being saved (controls wait). */
   readonly busy = input(false);
   /** Whether the group, coaching points, steps and kit fold away until the coach opens them. */
   readonly collapsible = input(false);
 
+  /** Emits a player moved to another station of the phase. */
   readonly move = output<PlayerMoveRequest>();
+  /** Emits a request to step the area larger or smaller. */
   readonly stepArea = output<'larger' | 'smaller'>();
 
   protected readonly kindLabels = ACTIVITY_KIND_LABELS;
   protected readonly others = computed(() => this.siblings().filter((s) => s.id !== this.station().id));
 
-  protected readonly roleLines = computed(() => {
-    const { roles } = this.station();
-    const names = (ids?: string[]) => (ids ?? []).map((id) => this.name(id)).join(', ');
-    const lines: { label: string; text: string }[] = [];
-    if (roles.attackers?.length) lines.push({ label: 'Attack', text: names(roles.attackers) });
-    if (roles.defenders?.length) lines.push({ label: 'Defend', text: names(roles.defenders) });
-    if (roles.goalkeeper?.length) lines.push({ label: 'In goal', text: names(roles.goalkeeper) });
-    if (roles.rotation?.length) lines.push({ label: 'Rotation', text: names(roles.rotation) });
-    return lines;
+  /** Sides and who is in goal for a game; attackers, defenders, servers and neutrals otherwise. */
+  protected readonly roleLines = computed(() => roleLines(this.station(), (id) => this.name(id)));
+
+  /** Each player's number badge takes the colour of their circle in the diagram. */
+  protected readonly badges = computed(() => {
+    const roles = startRoles(this.station());
+    return new Map(
+      this.station().playerIds.map((id) => {
+        const role = roles.get(id) ?? 'player';
+        return [
+          id,
+          { ...POSITION_STYLE[role], tag: ROLE_TAGS[role] ?? null, keeper: role === 'goalkeeper' },
+        ] as const;
+      }),
+    );
   });
+  protected readonly coachStyle = POSITION_STYLE.coach;
 
   /** Whether the coach has opened the folded details; kept while the card stays on screen. */
   protected readonly expanded = signal(false);

@@ -30,9 +30,6 @@ export class PlanSession {
   readonly names = computed(
     () => new Map((this.plan()?.request.players ?? []).map((p) => [p.id, p.name ?? p.id] as const)),
   );
-  readonly goalkeepers = computed(
-    () => new Set((this.plan()?.request.players ?? []).filter((p) => p.goalkeeper).map((p) => p.id)),
-  );
 
   /** Starts from a plan handed over by the wizard, else fetches it. */
   open(id: string, handedOver?: SessionPlanDto | null): void {
@@ -68,7 +65,7 @@ export class PlanSession {
     return this.rules.document;
   }
 
-  /** Activities the plan's rules allow, for the swap menu. */
+  /** The plan's rules' activities for the swap menu, each allowed for this plan or not (and why). */
   async activities(): Promise<ActivityOption[]> {
     const saved = this.saved();
     const plan = this.plan();

@@ -1,0 +1,93 @@
+/**
+ * The plan's stations and phases in a coach's words, for the plan page and pitch-side alike:
+ * who plays on which side, who serves, and what to set up before a phase.
+ */
+import type { Phase, PositionRole, Station } from '../../../../../shared/types';
+
+/** One line of a station's roles: "Side A (bibs)" and the names on it. */
+export interface RoleLine {
+  label: string;
+  text: string;
+}
+
+/**
+ * The station's roles as lines: the two sides (side A wears bibs) and who is in goal for a
+ * game-like station; attackers and defenders otherwise; then servers, neutrals and the rotation.
+ */
+export function roleLines(station: Station, nameOf: (id: string) => string): RoleLine[] {
+  const { roles } = station;
+  const keepers = new Set(roles.goalkeeper ?? []);
+  const list = (ids: string[] | undefined, markKeepers = false) =>
+    (ids ?? [])
+      .map((id) => (markKeepers && keepers.has(id) ? `${nameOf(id)} (in goal)` : nameOf(id)))
+      .join(', ');
+  const lines: RoleLine[] = [];
+  if (roles.teams) {
+    const [a, b] = roles.teams;
+    lines.push({ label: 'Side A (bibs)', text: list(a, true) || '—' });
+    lines.push({ label: 'Side B', text: list(b, true) || '—' });
+  } else {
+    if (roles.attackers?.length) lines.push({ label: 'Attack', text: list(roles.attackers) });
+    if (roles.defenders?.length) lines.push({ label: 'Defend (bibs)', text: list(roles.defenders) });
+  }
+  if (keepers.size) lines.push({ label: 'In goal', text: list([...keepers]) });
+  if (roles.servers?.length) lines.push({ label: 'Serve', text: list(roles.servers) });
+  if (roles.neutrals?.length) lines.push({ label: 'Neutral', text: list(roles.neutrals) });
+  if (roles.rotation?.length && !roles.teams) lines.push({ label: 'Rotation', text: list(roles.rotation) });
+  return lines;
+}
+
+/** A short tag beside a player's name for the roles worth saying (attackers and plain players get none). */
+export const ROLE_TAGS: Partial<Record<PositionRole, string>> = {
+  goalkeeper: 'In goal',
+  'team-a': 'Side A · bib',
+  'team-b': 'Side B',
+  defender: 'Defender · bib',
+  server: 'Server',
+  neutral: 'Neutral',
+};
+
+/** The role each player starts in, from the station's start positions (the diagram's colours). */
+export function startRoles(station: Station): ReadonlyMap<string, PositionRole> {
+  return new Map(station.positions.map((p) => [p.id, p.role] as const));
+}
+
+/** A drinks break is a phase of its own, with no stations. */
+export function isBreak(phase: Phase): boolean {
+  return phase.activityKind === 'break';
+}
+
+/** "Drinks break · 2 min" (the engine names a break taken for the heat "Drinks break (heat)"). */
+export function breakWords(phase: Phase): string {
+  return `${phase.name || 'Drinks break'} · ${phase.endMinute - phase.startMinute} min`;
+}
+
+/**
+ * What to put out before a phase: "Set up first: 12 cones, lift 4 cones, move 1 goal · 1 min of
+ * this phase"; during the drinks break when one comes just before and no minutes are set aside;
+ * null when nothing changes.
+ */
+export function changeoverWords(phases: readonly Phase[], index: number): string | null {
+  const phase = phases[index];
+  const change = phase?.changeover;
+  if (!change || isBreak(phase)) return null;
+  const parts: string[] = [];
+  if (change.conesPlaced) parts.push(plural(change.conesPlaced, 'cone'));
+  if (change.conesLifted) parts.push(`lift ${plural(change.conesLifted, 'cone')}`);
+  if (change.goalsMoved)
+    parts.push(`${index === 0 ? 'put out' : 'move'} ${plural(change.goalsMoved, 'goal')}`);
+  if (!parts.length) return null;
+  const before = phases[index - 1];
+  const lead =
+    index === 0
+      ? 'Before you start'
+      : before && isBreak(before) && !change.minutes
+        ? 'Set up during the drinks break'
+        : 'Set up first';
+  const time = change.minutes ? ` · ${plural(change.minutes, 'min')} of this phase` : '';
+  return `${lead}: ${parts.join(', ')}${time}`;
+}
+
+function plural(n: number, word: string): string {
+  return `${n} ${word}${n === 1 || word === 'min' ? '' : 's'}`;
+}
