@@ -25,6 +25,7 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
   const maxStations = params.supervision.stationsPerAdult * Math.max(1, request.coaches);
   let expectedStart = 0;
   let keepersWarm = false;
+  const lastChange = Math.max(-1, ...(plan.rosterChanges ?? []).map((c) => c.fromMinute));
   plan.phases.forEach((phase) => {
     const label = phase.name;
     if (phase.startMinute !== expectedStart || phase.endMinute <= phase.startMinute) {
@@ -70,8 +71,12 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
       if (!allowed.includes(s.activityKind)) {
         notices.push({ code: 'activity-not-for-age', message: `${where(s)}: ${s.title} is not in the club's activities for ${request.ageGroup}.` });
       }
+      // The rules that forbid were run for today's squad: a phase played before someone left
+      // ran with the squad of then.
       const ruled = forbidden.find((f) => f.activityId === s.activityId || (!f.activityId && f.kind === s.activityKind));
-      if (ruled) notices.push({ code: 'activity-forbidden', message: `${where(s)}: ${s.title} — ${ruled.reason}` });
+      if (ruled && phase.endMinute > lastChange) {
+        notices.push({ code: 'activity-forbidden', message: `${where(s)}: ${s.title} — ${ruled.reason}` });
+      }
       notices.push(...stationNotices(plan, params, s, where(s), keepersWarm, cold));
     });
     if (phase.stations.some((s) => s.activityKind === 'goalkeeping')) keepersWarm = true;

@@ -25,10 +25,13 @@ describe('validateRuleSet', () => {
 
   it('points at a missing table entry', () => {
     const doc = clone() as unknown as { parameters: { groupSizes: Record<string, unknown> } };
-    delete doc.parameters.groupSizes['pairs'];
+    delete doc.parameters.groupSizes['passing-pattern'];
     const result = validateRuleSet(doc);
     expect(result.ok).toBe(false);
-    expect(result.errors).toContainEqual({ pointer: '/parameters/groupSizes/pairs', message: 'is required' });
+    expect(result.errors).toContainEqual({
+      pointer: '/parameters/groupSizes/passing-pattern',
+      message: 'is required',
+    });
   });
 
   it('points at a wrong type deep in the document', () => {
@@ -84,7 +87,7 @@ describe('validateRuleSet', () => {
 
   it('generatePlan refuses a bad rule set with the pointers', async () => {
     const doc = clone();
-    doc.parameters.groupSizes.pairs.beginner.min = 5;
+    doc.parameters.groupSizes['passing-pattern'].beginner.min = 9;
     await expect(generatePlan(request, doc)).rejects.toBeInstanceOf(RuleSetError);
   });
 });
@@ -153,16 +156,21 @@ describe('club rules change plans', () => {
     expect(plan.trace.find((t) => t.ruleId === 'heat.shorter-game')?.fired).toBe(true);
   });
 
-  it('a pressing focus lengthens keep-ball and picks the pressing keep-ball activity', async () => {
-    // 20 minutes, shares 35/35/30: 7/7/6 min; pressing makes keep-ball 30 × 1.4 = 42: 6/6/8 min.
-    const plain = await generatePlan({ ...request, minutes: 20 });
-    const pressing = await generatePlan({ ...request, minutes: 20, focus: ['pressing'] });
-    const kbMinutes = (p: typeof plain) => {
-      const ph = p.phases.find((x) => x.stations.some((s) => s.activityKind === 'keep-ball'))!;
-      return { minutes: ph.endMinute - ph.startMinute, id: ph.activityId };
-    };
-    expect([kbMinutes(plain).minutes, kbMinutes(pressing).minutes]).toEqual([6, 8]);
-    expect(kbMinutes(pressing).id).toBe('kb-win-break');
+  it('a pressing focus picks activities that serve pressing, and from U13 keep-ball with two defenders', async () => {
+    const u14: PlanRequest = { ...request, ageGroup: 'U14', level: 'intermediate', minutes: 30 };
+    const plain = await generatePlan(u14);
+    const pressing = await generatePlan({ ...u14, focus: ['pressing'] });
+    const serves = (p: typeof plain) =>
+      p.phases.filter((ph) =>
+        defaultRuleSet.parameters.activities.find((a) => a.id === ph.activityId)?.focus.includes('pressing'),
+      ).length;
+    expect(serves(pressing)).toBeGreaterThan(serves(plain));
+    expect(pressing.trace.find((t) => t.ruleId === 'focus.pressing-two-defenders')?.fired).toBe(true);
+    for (const s of pressing.phases
+      .flatMap((p) => p.stations)
+      .filter((x) => x.activityKind === 'keep-ball')) {
+      expect(s.roles.defenders).toHaveLength(2);
+    }
   });
 
   it('the trace lists every rule of the set, fired or not', async () => {

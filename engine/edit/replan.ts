@@ -4,12 +4,12 @@
  * with the leaver out or the arrival in where there is room, or the phase rebuilt for the new
  * squad with its stations matched to the old ones.
  */
-import type { AgeBand, Phase, Plan, PlayerMove, PresentPlayer, RosterChange, RuleSetDocument, Station } from '../../shared/types';
+import type { ActivityDefinition, AgeBand, Phase, Plan, PlayerMove, PresentPlayer, RosterChange, RuleSetDocument, Station } from '../../shared/types';
 import { checkPlan } from '../check-plan';
 import { generatePlan, PlanRequestError } from '../generate-plan';
 import { insideSpace, overlaps, gapBetween, rectOf } from '../geometry';
 import { kindModule, layoutOf } from '../kinds/registry';
-import { activityById } from '../planning/activities';
+import { activityBlocked, activityById } from '../planning/activities';
 import { sizeRuleOf } from '../planning/allocation';
 import { areaForWidth, baseWidth, boundedTable } from '../planning/areas';
 import { buildPhase } from '../planning/build-phase';
@@ -49,10 +49,13 @@ export async function replan(plan: Plan, change: RosterChange, ruleSet?: RuleSet
     const options: Phase[] = [];
     const kept = inPlace(phase, removed, arrivals, byId, ctx);
     if (kept) options.push(kept);
+    // The new numbers may rule an activity out (too few for a game): only allowed ones are tried.
+    const allowed = (a: ActivityDefinition | undefined): a is ActivityDefinition =>
+      !!a && !activityBlocked(ctx.params, request.ageGroup, request.level, ctx.forbidden, a);
     const candidates = [
       activityById(ctx.params, phase.activityId),
       activityById(ctx.params, fresh.phases[phaseIndex]?.activityId ?? ''),
-    ].filter((a): a is NonNullable<typeof a> => !!a);
+    ].filter(allowed);
     if (candidates.length) {
       const spec = specOf({ ...plan, request }, phaseIndex, candidates);
       options.push(matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex));
@@ -61,13 +64,18 @@ export async function replan(plan: Plan, change: RosterChange, ruleSet?: RuleSet
     if (theirs && theirs.startMinute === phase.startMinute && theirs.endMinute === phase.endMinute && theirs.activityKind !== 'break') {
       options.push(matchIds(phase, theirs, phaseIndex));
     }
+    if (!options.length) {
+      // Nothing that ran before still fits the new numbers: everyone together (see sharedGridPhase).
+      const spec = specOf({ ...plan, request }, phaseIndex, []);
+      options.push(matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex));
+    }
     let best: { phase: Phase; moves: PlayerMove[]; count: number } | null = null;
     for (const option of options) {
       const m = movesBetween(phase, option, phaseIndex);
       const count = m.filter((x) => x.fromStationId && x.toStationId).length;
       if (!best || count < best.count) best = { phase: option, moves: m, count };
     }
-    const chosen = best ?? { phase, moves: [], count: 0 };
+    const chosen = best!;
     moves.push(...chosen.moves);
     phases.push(chosen.phase);
     lastPlayed = chosen.phase;
@@ -118,6 +126,9 @@ function inPlace(
   ctx: BuildContext,
 ): Phase | null {
   const { params, request, band } = ctx;
+  if (phase.stations.some((s) => activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, activityOfStation(params, s)))) {
+    return null;
+  }
   let stations: Station[] = phase.stations
     .map((s) => ({ ...s, playerIds: s.playerIds.filter((id) => !removed.has(id)) }))
     .filter((s) => s.playerIds.length > 0);
@@ -185,7 +196,7 @@ function matchIds(before: Phase, after: Phase, phaseIndex: number): Phase {
     return id;
   };
   const stations = after.stations.map((s, i) => ({ ...s, id: assignment[i] >= 0 ? before.stations[assignment[i]].id : freshId() }));
-  return { ...after, name: before.name, stations };
+  return { ...after, stations };
 }
 
 /** For each new station, the old station it takes the name of (or -1): most shared players overall. */

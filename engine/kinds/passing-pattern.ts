@@ -15,9 +15,15 @@ export const passingPattern: KindModule = {
   roles: ({ players, layout, coachJoins }) => {
     const ids = players.map((p) => p.id);
     const total = ids.length + coachJoins;
+    // An odd number makes one three: 5 is a pair and a three, 7 two pairs and a three.
+    const pairs = Math.floor(total / 2) - (total % 2 && total > 1 ? 1 : 0);
     const format =
       layout === 'pairs'
-        ? `${Math.floor(total / 2)} pair${Math.floor(total / 2) === 1 ? '' : 's'}${total % 2 ? ' and a three' : ''}`
+        ? total % 2 && total > 1
+          ? pairs
+            ? `${pairs} pair${pairs === 1 ? '' : 's'} and a three`
+            : 'a three'
+          : `${pairs} pair${pairs === 1 ? '' : 's'}`
         : `${layout === 'triangle' ? 'triangle' : 'square'} of ${total}`;
     return { roles: { rotation: ids }, format };
   },

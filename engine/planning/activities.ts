@@ -77,10 +77,15 @@ export function rankedActivities(ctx: ChoiceContext, kind: StationKind, kindRank
   for (const a of params.activities) {
     if (a.kind !== kind) continue;
     if (activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, a)) continue;
-    out.push({ activity: a, score: activityScore(ctx, a) - kindRank + ctx.rng() * 0.5 });
+    out.push({ activity: a, score: activityScore(ctx, a) - kindRank + ctx.rng() * JITTER });
   }
-  return out.sort((x, y) => y.score - x.score);
+  // Above the day's intensity limit (the heat) only when the kind has nothing calmer; a pin stays.
+  const calm = out.filter((r) => r.activity.intensity <= params.intensity.max || ctx.pinned.has(r.activity.id));
+  return (calm.length ? calm : out).sort((x, y) => y.score - x.score);
 }
+
+/** A seeded nudge between near-equal activities, so plans vary from one week to the next. */
+const JITTER = 1.5;
 
 export interface Ranked {
   activity: ActivityDefinition;

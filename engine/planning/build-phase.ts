@@ -11,13 +11,14 @@ import type {
   Phase,
   PresentPlayer,
   Station,
+  StationKind,
   TraceEntry,
 } from '../../shared/types';
 import { breakPhase } from '../kinds/break';
 import { kindModule, layoutOf } from '../kinds/registry';
 import { shuffle } from '../random';
 import { rankedActivities } from './activities';
-import { allocatePhase, withStationCap, type AllocationRules, type GroupPlan } from './allocation';
+import { allocatePhase, sizeRuleOf, withStationCap, type AllocationRules, type GroupPlan } from './allocation';
 import {
   areaForWidth,
   baseWidth,
@@ -68,7 +69,7 @@ export function buildPhase(
     if (!fallback || waiting < fallback.waiting) fallback = { attempt, waiting };
   }
   if (fallback) return commit(ctx, fallback.attempt);
-  return sharedGridPhase(ctx, spec, phaseIndex);
+  return sharedGridPhase(ctx, spec, phaseIndex, previous);
 }
 
 function commit(ctx: PhaseContext, attempt: Attempt): Phase {
@@ -83,7 +84,7 @@ function commit(ctx: PhaseContext, attempt: Attempt): Phase {
 function continued(spec: PhaseSpec, phaseIndex: number, previous: Phase): Phase {
   const stations = previous.stations.map((s, k) => ({ ...s, id: `p${phaseIndex + 1}-s${k + 1}` }));
   return {
-    name: spec.name,
+    name: `${previous.name.replace(/ \(continued\)$/, '')} (continued)`,
     activityId: previous.activityId,
     activityKind: previous.activityKind,
     startMinute: spec.startMinute,
@@ -199,11 +200,12 @@ function finishAttempt(
   trace: TraceEntry[],
 ): Attempt {
   const { request, params, band } = ctx;
+  const name = !spec.kinds || spec.kinds.includes(activities[0].kind) ? spec.name : nameFor(activities[0].kind);
   const previousGoals = previous
     ? previous.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
     : [];
-  markPhase(stations, activities, request.space, params, request.equipment, warnings, spec.name, previousGoals);
-  equipPhase(stations, activities, request.equipment, warnings, spec.name, ctx.cold);
+  markPhase(stations, activities, request.space, params, request.equipment, warnings, name, previousGoals);
+  equipPhase(stations, activities, request.equipment, warnings, name, ctx.cold);
   stations.forEach((s, i) => {
     s.progressions = progressionsFor(s, activities[i], params, band, request.space);
   });
@@ -212,7 +214,7 @@ function finishAttempt(
     trace.push({
       ruleId: 'engine.coach-fill-in',
       fired: true,
-      effect: `${spec.name}: a coach joins ${coachStations.length} group(s) so numbers work or to serve a keeper`,
+      effect: `${name}: a coach joins ${coachStations.length} group(s) so numbers work or to serve a keeper`,
     });
   }
   const allowedWait = ctx.cold ? 0 : 1;
@@ -229,7 +231,7 @@ function finishAttempt(
     );
   return {
     phase: {
-      name: spec.name,
+      name,
       activityId: main.id,
       activityKind: main.kind,
       startMinute: spec.startMinute,
@@ -423,24 +425,37 @@ export function placeStations(
 }
 
 /** Everyone in one grid as large as the space and the rule allow, with the best ball or tag game. */
-function sharedGridPhase(ctx: PhaseContext, spec: PhaseSpec, phaseIndex: number): Phase {
+function sharedGridPhase(ctx: PhaseContext, spec: PhaseSpec, phaseIndex: number, previous: Phase | undefined): Phase {
   const { params, request } = ctx;
-  const ranked = [
-    ...rankedActivities(ctx, 'ball-mastery'),
-    ...rankedActivities(ctx, 'tag-game'),
-  ].sort((a, b) => b.score - a.score);
+  const n = request.players.length;
+  // Something the whole squad can play together, true to the part where possible: its own
+  // kinds first, then a game, a tag game, possession to a target, ball mastery.
+  // Keep-ball needs its room per player, which a too-small space cannot give.
+  const kinds = [...new Set<StationKind>([...(spec.kinds ?? []), ...WHOLE_GROUP_KINDS])].filter((k) => k !== 'keep-ball');
+  const options: ActivityDefinition[] = [];
+  for (const kind of kinds) {
+    for (const r of rankedActivities(ctx, kind)) {
+      const size = sizeRuleOf(r.activity, { params, level: request.level, band: ctx.band });
+      if (size?.allows(n) && (r.activity.balls === 'none' || request.equipment.balls > 0)) options.push(r.activity);
+    }
+  }
   const activity =
-    ranked[0]?.activity ?? params.activities.find((a) => a.kind === 'ball-mastery' && !a.retired) ?? params.activities[0];
+    options.find((a) => a.id !== previous?.activityId) ??
+    options[0] ??
+    rankedActivities(ctx, 'ball-mastery')[0]?.activity ??
+    params.activities.find((a) => a.kind === 'ball-mastery' && !a.retired) ??
+    params.activities[0];
+  const name = !spec.kinds || spec.kinds.includes(activity.kind) ? spec.name : nameFor(activity.kind);
   const table = params.areas[activity.kind][ctx.band];
   const area = {
     width: Math.max(1, Math.floor(Math.min(request.space.width, table.maxWidth))),
-    length: Math.max(1, Math.floor(Math.min(request.space.length, table.maxWidth))),
+    length: Math.max(1, Math.floor(Math.min(request.space.length, table.maxWidth * (table.length / table.width)))),
   };
   ctx.warnings.push({
     code: 'space-too-small',
-    message: `${spec.name}: the stations do not fit in ${request.space.width} × ${request.space.length} m even at the club's minimum sizes, so everyone works in one shared grid.`,
+    message: `${name}: the stations do not fit in ${request.space.width} × ${request.space.length} m even at the club's minimum sizes, so everyone plays together in one area.`,
   });
-  ctx.trace.push({ ruleId: 'engine.layout-fallback', fired: true, effect: `${spec.name}: one shared grid (${activity.title})` });
+  ctx.trace.push({ ruleId: 'engine.layout-fallback', fired: true, effect: `${name}: everyone in one area (${activity.title})` });
   const station = makeStation(
     ctx,
     `p${phaseIndex + 1}-s1`,
@@ -452,11 +467,11 @@ function sharedGridPhase(ctx: PhaseContext, spec: PhaseSpec, phaseIndex: number)
   );
   station.area = area;
   const stations = [station];
-  markPhase(stations, [activity], request.space, params, request.equipment, ctx.warnings, spec.name);
-  equipPhase(stations, [activity], request.equipment, ctx.warnings, spec.name, ctx.cold);
+  markPhase(stations, [activity], request.space, params, request.equipment, ctx.warnings, name);
+  equipPhase(stations, [activity], request.equipment, ctx.warnings, name, ctx.cold);
   station.progressions = progressionsFor(station, activity, params, ctx.band, request.space);
   return {
-    name: spec.name,
+    name,
     activityId: activity.id,
     activityKind: activity.kind,
     startMinute: spec.startMinute,
@@ -466,3 +481,6 @@ function sharedGridPhase(ctx: PhaseContext, spec: PhaseSpec, phaseIndex: number)
     stations,
   };
 }
+
+/** Kinds a whole squad can play in one area when the stations do not fit. */
+const WHOLE_GROUP_KINDS: StationKind[] = ['small-sided-game', 'tag-game', 'directional-possession', 'ball-mastery'];

@@ -167,10 +167,11 @@ export function reuseLayout(
 function suits(old: Area, w: Wanted): boolean {
   const side = Math.min(old.width, old.length);
   if (side < w.minWidth - 1e-9 || side > w.maxWidth + 1e-9) return false;
+  // Close enough that passes, runs and shots keep the length the club's tables give them.
   const size = areaOf(old) / areaOf(w.area);
-  if (size < 0.5 || size > 2) return false;
+  if (size < 0.75 || size > 1.35) return false;
   const shape = aspect(old) / aspect(w.area);
-  return shape >= 0.6 && shape <= 1.7;
+  return shape >= 0.75 && shape <= 1.35;
 }
 
 interface FreeRect {

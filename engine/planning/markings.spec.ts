@@ -19,7 +19,7 @@ const request = (overrides: Partial<PlanRequest> = {}): PlanRequest => ({
 describe('markings', () => {
   it('shots from three finishing stations in a row point away from the others', async () => {
     const plan = await generatePlan(request());
-    const pf = plan.phases[1].stations;
+    const pf = plan.phases.find((p) => p.activityKind === 'passing-finishing')!.stations;
     expect(pf).toHaveLength(3);
     for (const s of pf) {
       const goal = s.goalPositions![0];
@@ -55,13 +55,37 @@ describe('markings', () => {
     expect(plan.warnings.map((w) => w.code)).not.toContain('shots-toward-station');
   });
 
-  it('with 3 cones and 0 goals, one gate is made and the other stations are told', async () => {
+  it('with 3 cones and 0 goals: never more cones than the bag, and a station that goes without is told what to use', async () => {
     const plan = await generatePlan(request({ equipment: { balls: 12, cones: 3, bibs: 6, goals: 0 } }));
     for (const phase of plan.phases) {
       expect(phase.stations.reduce((n, s) => n + s.equipment.cones, 0)).toBeLessThanOrEqual(3);
     }
-    const pf = plan.phases.find((p) => p.stations.some((s) => s.activityKind === 'passing-finishing'));
-    // Targets limit finishing stations: 0 goals + 1 gate → one finishing station.
-    expect(pf?.stations.filter((s) => s.activityKind === 'passing-finishing')).toHaveLength(1);
+    const told = plan.phases
+      .flatMap((p) => p.stations)
+      .filter((s) => s.notes?.some((n) => /bibs, bags or bottles|end line|end zone/.test(n)));
+    expect(told.length).toBeGreaterThan(0);
+  });
+
+  it('a keeper stands in the goal: their start position is at the goal mouth', async () => {
+    const plan = await generatePlan(
+      request({
+        ageGroup: 'U12',
+        minutes: 25,
+        coaches: 2,
+        players: Array.from({ length: 12 }, (_, i) => ({ id: `p${i + 1}`, goalkeeper: i < 2 || undefined })),
+      }),
+    );
+    const inGoal = plan.phases
+      .flatMap((p) => p.stations)
+      .filter((s) => s.activityKind !== 'goalkeeping' && s.roles.goalkeeper?.length);
+    expect(inGoal.length).toBeGreaterThan(0);
+    for (const s of inGoal) {
+      for (const id of s.roles.goalkeeper!) {
+        const at = s.positions.find((p) => p.id === id)!;
+        expect(at.role).toBe('goalkeeper');
+        const goals = s.goalPositions!.filter((g) => g.kind === 'goal');
+        expect(goals.some((g) => Math.hypot(g.x - at.x, g.y - at.y) <= 1)).toBe(true);
+      }
+    }
   });
 });

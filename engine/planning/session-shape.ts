@@ -77,14 +77,22 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
   const chosen = new Set<string>();
   const slots: SlotPlan[] = [];
 
-  for (const slot of shape) {
+  // Parts are filled most important first, so a minor part gives way: it avoids the kind its
+  // neighbours already play.
+  const decided: (SlotPlan | null | undefined)[] = new Array(shape.length);
+  const order = shape.map((_, i) => i).sort((a, b) => shape[a].priority - shape[b].priority || a - b);
+  for (const index of order) {
+    const slot = shape[index];
+    const neighbours = [decided[index - 1], decided[index + 1]].flatMap((d) => (d?.candidates[0] ? [d.candidates[0].kind] : []));
     let kinds = slot.kinds;
+    let themed: StationKind[] = [];
     if (theme && (slot.role === 'technical' || slot.role === 'opposed')) {
-      kinds = unique([...params.themes[theme][slot.role], ...slot.kinds]);
+      themed = params.themes[theme][slot.role];
+      kinds = unique([...themed, ...slot.kinds]);
     }
     // Above the day's intensity limit (the heat) only when nothing calmer can fill the part.
     const calm = (r: Ranked) => r.activity.intensity <= params.intensity.max;
-    const own = rankKinds(ctx, kinds).filter((r) => fits(r.activity));
+    const own = rankKinds(ctx, kinds, themed, neighbours).filter((r) => fits(r.activity));
     let ranked = own.filter(calm);
     if (!ranked.length && own.length) {
       // Only too intense for today (the heat): the part is left out, not swapped for something else.
@@ -93,6 +101,7 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
         fired: true,
         effect: `${slot.name}: left out, nothing for it is gentle enough today (intensity ${params.intensity.max} or less)`,
       });
+      decided[index] = null;
       continue;
     }
     if (!ranked.length) {
@@ -108,6 +117,7 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
     }
     if (!ranked.length) {
       addWarning(ctx, 'phase-dropped', `No activity could fill “${slot.name}” for this group, so that part is left out.`);
+      decided[index] = null;
       continue;
     }
     const plan: SlotPlan = {
@@ -120,8 +130,9 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
       candidates: ranked.map((r) => r.activity),
     };
     if (slot.maxMinutes === undefined) delete plan.maxMinutes;
-    slots.push(plan);
+    decided[index] = plan;
   }
+  for (const plan of decided) if (plan) slots.push(plan);
 
   placePins(ctx, slots, fits);
   placeRequired(ctx, slots, fits);
@@ -139,14 +150,24 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
   return slots;
 }
 
-function rankKinds(ctx: BuildContext, kinds: StationKind[]): Ranked[] {
+/**
+ * Activities of the kinds, best first: a kind lower in the list, or a kind a neighbouring part
+ * plays, counts a little against; a kind the training theme names counts for.
+ */
+function rankKinds(ctx: BuildContext, kinds: StationKind[], themed: StationKind[] = [], neighbours: StationKind[] = []): Ranked[] {
   const out: Ranked[] = [];
   kinds.forEach((kind, i) => {
     if (kindBlocked(ctx.params, ctx.request.ageGroup, ctx.forbidden, kind)) return;
-    out.push(...rankedActivities(ctx, kind, i));
+    const rank = i - (themed.includes(kind) ? THEME_BONUS : 0) + (neighbours.includes(kind) ? REPEAT_COST : 0);
+    out.push(...rankedActivities(ctx, kind, rank));
   });
   return out.sort((a, b) => b.score - a.score);
 }
+
+/** How much a kind the theme names outranks others (more than one focus match). */
+const THEME_BONUS = 6;
+/** How much a neighbouring part's kind counts against playing it again next to it. */
+const REPEAT_COST = 8;
 
 /** Substitute kinds, breadth first, for kinds that cannot be played. */
 function substituteKinds(ctx: BuildContext, kinds: StationKind[]): StationKind[] {

@@ -96,7 +96,8 @@ export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, options: 
         const told = plan.warnings.some(
           (w) =>
             (w.code === 'balls-short' || w.code === 'waiting') &&
-            w.message.startsWith(`${phase.name.replace(/ \(continued\)$/, '')}:`),
+            (w.message.startsWith(`${phase.name}:`) ||
+              w.message.startsWith(`${phase.name.replace(/ \(continued\)$/, '')}:`)),
         );
         if (strictWaiting || !told) out.push(`phase ${pi}: ${a.id} has ${a.waiting} waiting${told ? '' : ' and no warning says so'}`);
       }
