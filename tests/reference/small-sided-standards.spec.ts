@@ -47,3 +47,35 @@ describe('US Soccer Player Development Initiatives (2016) small-sided standards'
     expect(yd(area.length)).toBeLessThanOrEqual(35);
   });
 });
+
+describe('US Soccer Player Development Initiatives (2016): game formats in the rule set', () => {
+  it('players a side: 4 for U6–U8 (no goalkeepers), 7 for U9–U10, 9 for U11–U12, goalkeepers from U9', () => {
+    const formats = defaultRuleSet.parameters.gameFormats;
+    expect([
+      formats['U6-U8'].maxPerSide,
+      formats['U9-U10'].maxPerSide,
+      formats['U11-U12'].maxPerSide,
+    ]).toEqual([4, 7, 9]);
+    expect(formats['U6-U8'].goalkeepers).toBe(false);
+    expect(formats['U9-U10'].goalkeepers && formats['U11-U12'].goalkeepers).toBe(true);
+    // The shared table says the same formats.
+    expect(US_SOCCER_SMALL_SIDED_2016.map((s) => Number(s.format.split('v')[0]))).toEqual([4, 7, 9]);
+  });
+
+  it('the U9–U10 and U11–U12 game areas for a full side sit inside the published field sizes', () => {
+    const yd = (m: number) => m / METRES_PER_YARD;
+    const areas = defaultRuleSet.parameters.areas['small-sided-game'];
+    const u10 = areas['U9-U10'];
+    expect(u10.forPlayers).toBe(14); // 7v7
+    expect(yd(u10.width)).toBeGreaterThanOrEqual(35);
+    expect(yd(u10.width)).toBeLessThanOrEqual(45);
+    expect(yd(u10.length)).toBeGreaterThanOrEqual(55);
+    expect(yd(u10.length)).toBeLessThanOrEqual(65);
+    const u12 = areas['U11-U12'];
+    expect(u12.forPlayers).toBe(18); // 9v9
+    expect(yd(u12.width)).toBeGreaterThanOrEqual(45);
+    expect(yd(u12.width)).toBeLessThanOrEqual(55);
+    expect(yd(u12.length)).toBeGreaterThanOrEqual(70);
+    expect(yd(u12.length)).toBeLessThanOrEqual(80);
+  });
+});
