@@ -56,6 +56,11 @@ export const routes: Routes = [
         loadComponent: () => import('./features/insight/team-insight-page').then((m) => m.TeamInsightPage),
       },
       {
+        path: 'library',
+        title: 'Activities · Conewise',
+        loadComponent: () => import('./features/library/library-page').then((m) => m.LibraryPage),
+      },
+      {
         path: 'plan/new',
         title: 'Plan a session · Conewise',
         canActivate: [roleGuard('lead', 'coach')],

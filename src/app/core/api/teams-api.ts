@@ -1,7 +1,14 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import { Observable } from 'rxjs';
-import type { AgeGroup, KitBagDto, Level, Space, TeamDto } from '../../../../shared/types';
+import { map, Observable } from 'rxjs';
+import type {
+  AgeGroup,
+  KitBagDto,
+  Level,
+  PinnedActivitiesDto,
+  Space,
+  TeamDto,
+} from '../../../../shared/types';
 
 export interface TeamBody {
   name: string;
@@ -41,5 +48,16 @@ export class TeamsApi {
 
   saveKit(id: string, kit: KitBagDto): Observable<KitBagDto> {
     return this.http.put<KitBagDto>(`/api/teams/${id}/kit`, kit);
+  }
+
+  /**
+   * PUT /api/teams/:id/pinned-activities: the whole list of activities the team's next plan should
+   * use where they fit (pinning adds to it, unpinning leaves one out); answers the list as kept.
+   */
+  savePinnedActivities(id: string, activityIds: string[]): Observable<string[]> {
+    const body: PinnedActivitiesDto = { activityIds };
+    return this.http
+      .put<PinnedActivitiesDto>(`/api/teams/${id}/pinned-activities`, body)
+      .pipe(map((saved) => saved.activityIds));
   }
 }

@@ -14,6 +14,7 @@ export const NAV_ITEMS: NavItem[] = [
   { label: 'This week', icon: 'calendar_view_week', link: '/' },
   { label: 'Plan a session', icon: 'add_task', link: '/plan/new', roles: ['lead', 'coach'] },
   { label: 'Teams', icon: 'groups', link: '/teams' },
+  { label: 'Activities', icon: 'local_library', link: '/library' },
   { label: 'Club rules', icon: 'rule_settings', link: '/club/rules', roles: ['lead'] },
   { label: 'Members', icon: 'manage_accounts', link: '/club/members', roles: ['lead'] },
   { label: 'System status', icon: 'monitor_heart', link: '/status' },

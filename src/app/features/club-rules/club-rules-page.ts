@@ -6,6 +6,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatTabsModule } from '@angular/material/tabs';
 import type { RuleSetDto } from '../../../../shared/types';
 import { problemMessage } from '../../core/http/problem-message';
+import { ClubActivities, type ActivityEdit } from './club-activities';
 import { RuleHistory } from './rule-history';
 import { RuleJsonEditor } from './rule-json-editor';
 import { RuleTables, type RuleEdit } from './rule-tables';
@@ -34,6 +35,7 @@ interface Conflict {
     RuleJsonEditor,
     RuleHistory,
     RuleTryIt,
+    ClubActivities,
   ],
   templateUrl: './club-rules-page.html',
   styleUrl: './club-rules-page.scss',
@@ -130,13 +132,20 @@ export class ClubRulesPage {
     this.body.set(body);
   }
 
+  /** An activity added, changed, retired or brought back: into the draft, which is saved at once. */
+  protected saveActivityEdit(edit: ActivityEdit): void {
+    if (!this.editing()) return;
+    this.applyEdit(edit);
+    this.save(edit.saved, edit.failed);
+  }
+
   protected discard(): void {
     this.body.set(this.baseBody());
     this.rebased.set(null);
     this.notice.set('Unsaved changes discarded.');
   }
 
-  protected save(then?: () => void): void {
+  protected save(then?: () => void, failed?: (message: string) => void): void {
     const draft = this.draft();
     if (!draft) return;
     this.conflict.set(null);
@@ -161,8 +170,10 @@ export class ClubRulesPage {
             message: problemMessage(error),
             currentRevision: current.currentRevision ?? current.revision ?? null,
           });
+          failed?.('another lead saved the draft first; see the message at the top of the page.');
         } else {
           this.error.set(problemMessage(error));
+          failed?.(problemMessage(error));
         }
       },
     });

@@ -13,6 +13,7 @@ const team = (over: Partial<TeamDto>): TeamDto => ({
   usualSpace: { width: 30, length: 36 },
   coachIds: ['u1'],
   playerCount: 9,
+  pinnedActivityIds: [],
   ...over,
 });
 const herons = team({});

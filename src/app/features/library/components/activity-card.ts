@@ -1,0 +1,137 @@
+import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatMenuModule } from '@angular/material/menu';
+import { suitsAge } from '../../../../../engine/planning/activities';
+import { previewActivity, type ActivityPreview, type RuleSetDocument } from '../../../../../engine/index';
+import type { AgeGroup, Level } from '../../../../../shared/types';
+import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, LEVEL_LABELS } from '../../../core/labels/plan-labels';
+import { StationDiagram } from '../../../shared/components/station-diagram';
+import type { LibraryEntry } from '../services/library-entries';
+
+/** A team the member may pin for, and whether this activity is pinned for it. */
+export interface PinTeam {
+  id: string;
+  name: string;
+  pinned: boolean;
+}
+
+/** A pin or unpin the coach asked for. */
+export interface PinChange {
+  teamId: string;
+  pinned: boolean;
+}
+
+/** A line shown under the card's buttons after a pin or unpin. */
+export interface CardMessage {
+  text: string;
+  error: boolean;
+}
+
+const BALL_WORDS = {
+  each: 'a ball each',
+  pair: 'one ball per pair',
+  group: 'a few balls per group',
+  none: 'no balls',
+} as const;
+
+/**
+ * One activity of the library: what it is, its diagram as the engine would set it up, and on
+ * opening its description, coaching points and steps; with pin controls for the member's teams.
+ */
+@Component({
+  selector: 'cw-activity-card',
+  imports: [MatButtonModule, MatIconModule, MatMenuModule, StationDiagram],
+  templateUrl: './activity-card.html',
+  styleUrl: './activity-card.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ActivityCard {
+  /** The activity to show. */
+  readonly entry = input.required<LibraryEntry>();
+  /** The club's rules the diagram is set up with. */
+  readonly ruleSet = input.required<RuleSetDocument>();
+  /** Age group to draw it for (the activity's middle age when absent or outside its ages). */
+  readonly ageGroup = input<AgeGroup | null>(null);
+  /** Level to draw it for, when the activity suits it. */
+  readonly level = input<Level | null>(null);
+  /** Teams the member may pin for; empty hides the pin control. */
+  readonly pinTeams = input<PinTeam[]>([]);
+  /** Names of every team that has it pinned. */
+  readonly pinnedBy = input<string[]>([]);
+  /** The last pin or unpin's outcome for this activity. */
+  readonly message = input<CardMessage | null>(null);
+  /** Disables the pin control while a pin is being saved. */
+  readonly busy = input(false);
+  /** Emits the pin or unpin the coach chose. */
+  readonly pinChange = output<PinChange>();
+
+  protected readonly kindLabels = ACTIVITY_KIND_LABELS;
+  protected readonly focusLabels = FOCUS_LABELS;
+  protected readonly levelLabels = LEVEL_LABELS;
+  protected readonly ballWords = BALL_WORDS;
+  protected readonly open = signal(false);
+
+  /** The engine's single-station set-up of this activity, or null when it cannot be drawn. */
+  protected readonly preview = computed<ActivityPreview | null>(() => {
+    const entry = this.entry();
+    const age = this.ageGroup();
+    const level = this.level();
+    try {
+      return previewActivity(entry.definition, this.ruleSet(), {
+        ...(age && suitsAge(entry, age) ? { ageGroup: age } : {}),
+        ...(level && entry.levels.includes(level) ? { level } : {}),
+      });
+    } catch {
+      return null;
+    }
+  });
+
+  /** Coaching points as the plan would list them (the set-up adds its own), else the activity's. */
+  protected readonly coachingPoints = computed(
+    () => this.preview()?.station.coachingPoints ?? this.entry().definition.coachingPoints,
+  );
+  protected readonly easier = computed(
+    () => this.preview()?.station.progressions.easier ?? this.entry().definition.easier,
+  );
+  protected readonly harder = computed(
+    () => this.preview()?.station.progressions.harder ?? this.entry().definition.harder,
+  );
+  protected readonly levelsText = computed(() =>
+    this.entry()
+      .levels.map((l) => this.levelLabels[l])
+      .join(', '),
+  );
+  protected readonly agesText = computed(() => {
+    const { from, to } = this.entry().ages;
+    return from === to ? from : `${from}–${to}`;
+  });
+  /** "Drawn for U10 intermediate, 4v1 · 10 × 10 m". */
+  protected readonly setupText = computed(() => {
+    const p = this.preview();
+    if (!p) return '';
+    const format = p.station.format ? `, ${p.station.format}` : '';
+    return `Drawn for ${p.ageGroup} ${this.levelLabels[p.level].toLowerCase()}${format} · ${p.station.area.width} × ${p.station.area.length} m`;
+  });
+  /** "7 cones · 3 balls · 1 goal": what the drawn group needs. */
+  protected readonly kitText = computed(() => {
+    const kit = this.preview()?.station.equipment;
+    if (!kit) return '';
+    const count = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
+    return [
+      count(kit.cones, 'cone'),
+      count(kit.balls, 'ball'),
+      ...(kit.bibs ? [count(kit.bibs, 'bib')] : []),
+      ...(kit.goals ? [count(kit.goals, 'goal')] : []),
+    ].join(' · ');
+  });
+  protected readonly pinnedCount = computed(() => this.pinTeams().filter((t) => t.pinned).length);
+
+  protected toggle(): void {
+    this.open.update((open) => !open);
+  }
+
+  protected togglePin(team: PinTeam): void {
+    this.pinChange.emit({ teamId: team.id, pinned: !team.pinned });
+  }
+}
