@@ -1,7 +1,14 @@
 import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatExpansionModule } from '@angular/material/expansion';
-import { ACTIVITY_KINDS, AGE_BANDS, AGE_GROUPS, LEVELS, PLAN_KINDS } from '../../../../shared/types';
+import {
+  ACTIVITY_KIND_LABELS,
+  AGE_BANDS,
+  AGE_GROUPS,
+  LEVELS,
+  PLAN_KINDS,
+  STATION_KINDS,
+} from '../../../../shared/types';
 import { getAt, toPointer } from './services/json-pointer';
 
 /** An edit from the tables: the value to put at a pointer of the rule-set document. */
@@ -10,15 +17,8 @@ export interface RuleEdit {
   value: unknown;
 }
 
-/** Words for the activity kinds, as the tables show them. */
-export const KIND_LABELS: Record<string, string> = {
-  'ball-mastery': 'Ball mastery',
-  'passing-finishing': 'Pass and finish',
-  'keep-ball': 'Keep-ball',
-  pairs: 'Pairs',
-  'small-sided-game': 'Small-sided game',
-  'movement-prep': 'Movement prep',
-};
+/** Words for the activity kinds, as the tables show them (the same words as the plans). */
+export const KIND_LABELS: Record<string, string> = ACTIVITY_KIND_LABELS;
 
 /** "4v1, 3v1" ⇄ [{attackers:4, defenders:1}, …]. */
 export function formatsToText(formats: unknown): string {
@@ -61,22 +61,36 @@ export class RuleTables {
   /** Kinds the document has tables for (falls back to the known list). */
   protected readonly kinds = computed(() => {
     const sizes = getAt(this.body(), '/parameters/groupSizes');
-    return sizes && typeof sizes === 'object' ? Object.keys(sizes) : [...ACTIVITY_KINDS];
+    return sizes && typeof sizes === 'object' ? Object.keys(sizes) : [...STATION_KINDS];
   });
   protected readonly ageGroups = computed(() => {
     const groups = getAt(this.body(), '/parameters/ageGroups');
     return groups && typeof groups === 'object' ? Object.keys(groups) : [...AGE_GROUPS];
   });
+  /** The parts of a session for the chosen kind of plan and age band, in order. */
   protected readonly phaseRows = computed(() => {
-    const rows = getAt(this.body(), `/parameters/phaseTemplates/${this.planKind()}/${this.band()}`);
-    return Array.isArray(rows) ? (rows as { kind: string; name: string; share: number }[]) : [];
+    const rows = getAt(this.body(), `/parameters/sessionShapes/${this.planKind()}/${this.band()}`);
+    return Array.isArray(rows)
+      ? (rows as { kinds: string[]; name: string; share: number; maxMinutes?: number }[])
+      : [];
   });
+  protected readonly formatBands = AGE_BANDS;
   protected readonly phaseShareTotal = computed(() =>
     this.phaseRows().reduce((sum, row) => sum + (row.share || 0), 0),
   );
 
   protected kindLabel(kind: string): string {
     return KIND_LABELS[kind] ?? kind;
+  }
+
+  /** "Ball mastery or Tag game": the kinds that can fill a part, most preferred first. */
+  protected kindsLabel(kinds: string[]): string {
+    return kinds.map((k) => this.kindLabel(k)).join(' or ');
+  }
+
+  protected ratioRows(): { upToAge: number; childrenPerAdult: number }[] {
+    const rows = this.value(this.ptr('supervision', 'ratios'));
+    return Array.isArray(rows) ? rows : [];
   }
 
   protected ptr(...tokens: (string | number)[]): string {
