@@ -53,5 +53,5 @@ for (const size of SIZES) {
   );
 }
 const ratio = results[40].medianMs / results[6].medianMs;
-console.log(`ratio 40/6 median: ${ratio.toFixed(2)} (target ≤ 5); 16-player median target ≤ 2 ms`);
+console.log(`ratio 40/6 median: ${ratio.toFixed(2)} (target ≤ 3); 16-player median target ≤ 1 ms`);
 console.log(JSON.stringify(results));
