@@ -127,8 +127,16 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
         .nth(i)
         .locator('[data-player]')
         .evaluateAll((els) => els.map((e) => e.getAttribute('data-player')));
-      expect(ids.sort()).toEqual(present);
+      // A drinks break is a phase of its own with no stations, so nobody is listed in it.
+      expect(ids.sort()).toEqual(saved.plan.phases[i]!.activityKind === 'break' ? [] : present);
     }
+    // Each diagram draws the group where the engine starts it: one circle per player (and a joining coach).
+    const drawn = await page
+      .locator('cw-station-card cw-station-diagram svg[role="img"]')
+      .evaluateAll((svgs) => svgs.map((svg) => svg.querySelectorAll('g.cw-dot').length));
+    expect(drawn).toEqual(
+      saved.plan.phases.flatMap((p) => p.stations.map((s) => s.playerIds.length + s.coachJoins)),
+    );
     expect(await page.getByText(ABSENT).count()).toBe(0);
     await expect
       .poll(() => page.getByTestId('cautions').textContent())

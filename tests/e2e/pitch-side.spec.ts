@@ -1,6 +1,7 @@
 /**
  * Pitch-side end to end: a late arrival re-plans the rest of the session; "too easy" steps the
- * station and the team's next plan starts smaller; offline, a verdict waits in the queue and is
+ * station and the team's next plan starts that kind smaller; a hot training session's drinks break
+ * counts down as a phase of its own; offline, a verdict waits in the queue and is
  * stored exactly once when the connection returns.
  */
 import type { Page } from 'playwright-core';
@@ -25,11 +26,12 @@ function eachPlayerOncePerPhase(plan: Plan): boolean {
   });
 }
 
-const keepBallWidth = (plan: Plan) =>
+/** The widest area any station of this kind has in the plan. */
+const kindWidth = (plan: Plan, kind: string) =>
   Math.max(
     ...plan.phases
       .flatMap((p) => p.stations)
-      .filter((s) => s.activityKind === 'keep-ball')
+      .filter((s) => s.activityKind === kind)
       .map((s) => s.area.width),
   );
 
@@ -87,26 +89,29 @@ describe('pitch-side', () => {
     await page.close();
   });
 
-  it('"too easy" on keep-ball steps the area down and the next plan of the team starts smaller', async () => {
+  it('"too easy" steps the station\'s area down and the next plan of the team starts that kind smaller', async () => {
     const request = { seed: 'feedback-seed' };
     const session = await club.plan(coach, team, roster, request);
-    const keepBallPhase = session.plan.phases.findIndex((p) =>
-      p.stations.some((s) => s.activityKind === 'keep-ball'),
-    );
-    expect(keepBallPhase).toBeGreaterThanOrEqual(0);
+    // The first phase with stations (a U8 warm-up opens with ball mastery; a drinks break has none).
+    const phaseIndex = session.plan.phases.findIndex((p) => p.stations.length > 0);
+    expect(phaseIndex).toBeGreaterThanOrEqual(0);
+    const firstStation = session.plan.phases[phaseIndex].stations[0];
     const page = await browser.newPage(DESKTOP);
     await openPitchSide(page, session.id);
-    for (let i = 0; i < keepBallPhase; i++) await page.getByRole('button', { name: 'Next phase' }).click();
+    for (let i = 0; i < phaseIndex; i++) await page.getByRole('button', { name: 'Next phase' }).click();
     await expect
       .poll(() => page.locator('#current-phase-name').textContent())
-      .toBe(session.plan.phases[keepBallPhase].name);
-    const firstStation = session.plan.phases[keepBallPhase].stations[0];
+      .toContain(session.plan.phases[phaseIndex].name);
+    const card = page.locator('cw-station-card').first();
+    expect(await card.getByTestId('station-kind').textContent()).toContain(`${firstStation.area.width} × `);
+    // The card draws the group where the engine starts it.
+    expect(await card.locator('cw-station-diagram g.cw-dot').count()).toBe(
+      firstStation.playerIds.length + firstStation.coachJoins,
+    );
 
-    await page.locator('cw-station-card').first().locator('[data-verdict=too-easy]').click();
-    await expect
-      .poll(() => page.locator('cw-station-card').first().textContent(), { timeout: 10_000 })
-      .toContain('saved');
-    const stepped = (await storedPlan(session.id)).plan.phases[keepBallPhase].stations.find(
+    await card.locator('[data-verdict=too-easy]').click();
+    await expect.poll(() => card.textContent(), { timeout: 10_000 }).toContain('saved');
+    const stepped = (await storedPlan(session.id)).plan.phases[phaseIndex].stations.find(
       (s) => s.id === firstStation.id,
     )!;
     expect(stepped.area.width).toBeLessThan(firstStation.area.width);
@@ -118,7 +123,36 @@ describe('pitch-side', () => {
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
     const next = await club.plan(coach, team, roster, request);
-    expect(keepBallWidth(next.plan)).toBeLessThan(keepBallWidth(session.plan));
+    expect(kindWidth(next.plan, firstStation.activityKind)).toBeLessThan(
+      kindWidth(session.plan, firstStation.activityKind),
+    );
+    await page.close();
+  });
+
+  it('a drinks break in a hot training session counts down as a phase of its own, with no stations', async () => {
+    const session = await club.plan(coach, team, roster, {
+      kind: 'training',
+      minutes: 45,
+      conditions: { temperatureC: 29 },
+      seed: 'hot-evening',
+    });
+    const breakIndex = session.plan.phases.findIndex((p) => p.activityKind === 'break');
+    expect(breakIndex, 'heat brings drinks breaks').toBeGreaterThan(0);
+    const drinks = session.plan.phases[breakIndex];
+    const page = await browser.newPage(PHONE);
+    await openPitchSide(page, session.id);
+    for (let i = 0; i < breakIndex; i++) await page.getByRole('button', { name: 'Next phase' }).click();
+    await expect.poll(() => page.locator('#current-phase-name').textContent()).toContain('Drinks break');
+    expect(await page.getByTestId('countdown').getAttribute('aria-label')).toBe(
+      'Time left in the drinks break',
+    );
+    expect(await page.getByTestId('break-now').isVisible()).toBe(true);
+    expect(await page.locator('cw-station-card').count()).toBe(0);
+    expect(await page.locator('.cw-pitch__next').first().textContent()).toContain(
+      `at minute ${drinks.endMinute}`,
+    );
+    await screenshot(page, 'pitch-side-break');
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.close();
   });
 

@@ -3,6 +3,8 @@
  * rest folded away, a tap or Enter opens a station's details, the page is far shorter than with
  * everything open, print still shows everything, and the card comes on the paper the coach chose.
  * The same page on a desktop keeps every station open, and prints without the shell or controls.
+ * A hot hour of training draws everyone where the engine starts them, runs drinks breaks as rows
+ * of their own and lists a game's sides and keepers.
  */
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
@@ -10,7 +12,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import type { AuthResponse, SessionPlanDto } from '../../shared/types';
+import { POSITION_STYLE, type AuthResponse, type SessionPlanDto } from '../../shared/types';
 import {
   DESKTOP,
   launchBrowser,
@@ -72,7 +74,7 @@ describe('the plan page on a phone', () => {
     expect(await openStates(page)).toEqual(Array(stationCount).fill(false));
     const first = page.locator('cw-station-card').first();
     expect(await first.locator('h4').isVisible()).toBe(true);
-    expect(await first.locator('cw-station-diagram svg').isVisible()).toBe(true);
+    expect(await first.locator('cw-station-diagram svg[role="img"]').isVisible()).toBe(true);
     expect(await first.locator('summary').isVisible()).toBe(true);
     expect(await first.locator('.cw-points').isVisible()).toBe(false);
     expect(await first.locator('.cw-group').isVisible()).toBe(false);
@@ -183,10 +185,123 @@ describe('the plan page on a phone', () => {
     await desktop.close();
     const text = execFileSync('pdftotext', [file, '-'], { encoding: 'utf8' });
     // Each station card ends with its kit line: one per station means nothing was cut off.
-    expect(text.match(/^Kit: /gm)?.length).toBe(fullCount);
+    // (A kit line that opens a new sheet follows the form feed pdftotext puts there.)
+    expect(text.match(/^\f?Kit: /gm)?.length).toBe(fullCount);
     expect(text).toContain(full.plan.phases.at(-1)!.name);
     for (const chrome of ['Swap activity', 'New groups', 'Print card', 'This week', 'Why this plan']) {
       expect(text).not.toContain(chrome);
     }
   });
+});
+
+describe('a hot hour of training on the plan page', () => {
+  const baseUrl = inject('baseUrl');
+  const club = new ClubSession(baseUrl);
+  let browser: TestBrowser;
+  let coach: AuthResponse;
+  let saved: SessionPlanDto;
+
+  beforeAll(async () => {
+    browser = await launchBrowser(baseUrl);
+    coach = await club.login(U12_COACH);
+    const { team, players } = await club.team(coach, 'U12 Otters');
+    // Two keepers among the first 14, so the game can have one in each goal.
+    const keepers = players.filter((p) => p.goalkeeper);
+    const outfield = players.filter((p) => !p.goalkeeper);
+    const squad = [...keepers.slice(0, 2), ...outfield]
+      .slice(0, 14)
+      .map((p, i) => ({ ...p, goalkeeper: i < 2 }));
+    saved = await club.plan(coach, team, squad, {
+      kind: 'training',
+      minutes: 60,
+      focus: ['finishing'],
+      conditions: { temperatureC: 29 },
+      equipment: { balls: 14, cones: 40, bibs: 10, goals: 2 },
+      space: { width: 45, length: 60 },
+      seed: 'e2e-hot-hour',
+    });
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  const stations = () => saved.plan.phases.flatMap((phase) => phase.stations);
+
+  for (const [viewport, label] of [
+    [PHONE, 'phone'],
+    [DESKTOP, 'desktop'],
+  ] as const) {
+    it(`draws one circle per player in every diagram, in the role colours, and a drinks-break row (${label})`, async () => {
+      const page = await browser.newPage(viewport);
+      page.on('pageerror', (error) => console.log(`[page error] ${error.message}`));
+      await club.open(page, coach, `/plans/${saved.id}`);
+      await page.getByTestId('phase').first().waitFor();
+
+      // Heat: drinks breaks are phases of their own, each a row with no stations.
+      const breaks = saved.plan.phases.filter((phase) => phase.activityKind === 'break');
+      expect(breaks.length).toBeGreaterThan(0);
+      const rows = page.locator('[data-testid="phase"][data-kind="break"]');
+      expect(await rows.count()).toBe(breaks.length);
+      expect(await rows.first().textContent()).toContain(
+        `${breaks[0]!.name} · ${breaks[0]!.endMinute - breaks[0]!.startMinute} min`,
+      );
+      expect(await rows.locator('cw-station-card').count()).toBe(0);
+
+      // Every diagram draws exactly the group: its players and a coach who joins.
+      const diagrams = page.locator('cw-station-card cw-station-diagram svg[role="img"]');
+      expect(await diagrams.count()).toBe(stations().length);
+      const drawn = await diagrams.evaluateAll((svgs) =>
+        svgs.map((svg) =>
+          Array.from(svg.querySelectorAll('g.cw-dot')).map((g) => ({
+            role: g.getAttribute('data-role'),
+            fill: g.querySelector('circle')!.getAttribute('fill'),
+          })),
+        ),
+      );
+      stations().forEach((station, i) => {
+        expect(drawn[i]).toHaveLength(station.playerIds.length + station.coachJoins);
+        expect(drawn[i]!.map((d) => d.role)).toEqual(station.positions.map((p) => p.role));
+        for (const d of drawn[i]!)
+          expect(d.fill).toBe(POSITION_STYLE[d.role as keyof typeof POSITION_STYLE].fill);
+      });
+
+      // The game with keepers lists its sides and who is in goal.
+      const gameIndex = saved.plan.phases.findIndex((phase) =>
+        phase.stations.some(
+          (s) => (s.roles.teams ?? []).length === 2 && (s.roles.goalkeeper ?? []).length === 2,
+        ),
+      );
+      expect(gameIndex, 'the hour has a game with a keeper in each goal').toBeGreaterThanOrEqual(0);
+      const game = page.getByTestId('phase').nth(gameIndex).locator('cw-station-card').first();
+      if (label === 'phone') await game.locator('summary').click();
+      const roles = game.getByTestId('station-roles');
+      await roles.waitFor();
+      expect(await roles.locator('dt').allTextContents()).toEqual(['Side A (bibs)', 'Side B', 'In goal']);
+      expect(await game.locator('cw-station-diagram g.cw-dot[data-role="goalkeeper"]').count()).toBe(2);
+
+      await page.evaluate(() => window.scrollTo(0, 0));
+      const full = await screenshot(page, 'plan-page-training');
+      await game.scrollIntoViewIfNeeded();
+      await game.screenshot({ path: full.replace('plan-page-training-', 'plan-page-training-game-') });
+      expect(await seriousAccessibilityViolations(page)).toEqual([]);
+
+      // The swap menu: the game's own kind first, each option with its line, ruled-out ones saying why.
+      await page.getByTestId('phase').nth(gameIndex).getByRole('button', { name: 'Swap activity' }).click();
+      const menu = page.locator('.cw-swap-menu');
+      await menu.locator('[role="group"]').first().waitFor();
+      expect(await menu.locator('[role="group"]').first().getAttribute('aria-label')).toBe(
+        'Small-sided game',
+      );
+      const disabled = menu.locator(
+        'button[mat-menu-item][disabled], button[mat-menu-item][aria-disabled="true"]',
+      );
+      expect(await disabled.count()).toBeGreaterThan(0);
+      expect(await disabled.first().locator('.cw-swap-summary').textContent()).toContain(
+        'Not for this plan:',
+      );
+      await page.screenshot({ path: full.replace('plan-page-training-', 'plan-page-training-swap-') });
+      await page.keyboard.press('Escape');
+      await page.close();
+    });
+  }
 });

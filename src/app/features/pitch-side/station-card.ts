@@ -4,7 +4,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { POSITION_STYLE, type Station, type StationVerdict } from '../../../../shared/types';
 import { ACTIVITY_KIND_LABELS } from '../../core/labels/plan-labels';
 import { StationDiagram } from '../../shared/components/station-diagram';
-import { ROLE_TAGS, startRoles } from '../plans/services/plan-words';
+import { readableOn, ROLE_TAGS, startRoles } from '../plans/services/plan-words';
 
 /** The three verdicts a coach can give a station, with their labels and icons. */
 export const VERDICTS: { value: StationVerdict; label: string; icon: string }[] = [
@@ -58,7 +58,7 @@ export class StationCard {
         number: i + 1,
         name: names[id] ?? id,
         fill: POSITION_STYLE[role].fill,
-        text: POSITION_STYLE[role].text,
+        text: readableOn(POSITION_STYLE[role].fill, POSITION_STYLE[role].text),
         role: ROLE_TAGS[role] ?? null,
         arrived: arrivals.has(id),
       };

@@ -63,10 +63,10 @@ export class StationDiagram {
 
   protected readonly marker = MARKER_STYLE;
 
-  /** Marks are sized to the area so a 55 m pitch and a 9 m square both read clearly. */
+  /** Marks are sized to the area so a 60 m pitch and a 9 m square both read clearly on a phone. */
   protected readonly scale = computed(() => {
     const { width, length } = this.station().area;
-    return Math.max(0.45, Math.min(1.4, Math.max(width, length) / 22));
+    return Math.max(0.45, Math.min(2.6, Math.max(width, length) / 24));
   });
 
   protected readonly radius = computed(() => this.scale() * 0.95);
@@ -133,7 +133,7 @@ export class StationDiagram {
       xs.push(p.x);
       ys.push(p.y);
     }
-    const m = 1 + this.scale() * 1.6;
+    const m = 1 + this.scale() * 1.2;
     const minX = Math.min(...xs) - m;
     const minY = Math.min(...ys) - m;
     const w = Math.max(...xs) + m - minX;

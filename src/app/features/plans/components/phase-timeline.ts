@@ -1,8 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import { MatIconModule } from '@angular/material/icon';
 import type { Phase } from '../../../../../shared/types';
 import { clockTime, minutesOfDay } from '../../../core/time/dates';
-import { breakWords, isBreak } from '../services/plan-words';
+import { isBreak } from '../services/plan-words';
 
 interface TimelineRow {
   index: number;
@@ -20,7 +19,6 @@ interface TimelineRow {
 /** The phases in order, drinks breaks among them, with clock times that count down to kick-off. */
 @Component({
   selector: 'cw-phase-timeline',
-  imports: [MatIconModule],
   template: `
     <ol class="cw-timeline" aria-label="Timeline">
       @for (row of rows(); track row.index) {
@@ -31,14 +29,9 @@ interface TimelineRow {
         >
           <a [href]="'#phase-' + row.index" class="cw-slot">
             <span class="cw-clock">{{ row.clock ?? 'min ' + (total() - row.toKickOff) }}</span>
-            <span class="cw-name">
-              @if (row.isBreak) {
-                <mat-icon aria-hidden="true" class="cw-drop">water_drop</mat-icon>
-              }
-              {{ row.name }}
-            </span>
+            <span class="cw-name">{{ row.name }}</span>
             <span class="cw-left"
-              >{{ row.isBreak ? '' : row.minutes + ' min · ' }}{{ row.toKickOff }} to {{ endLabel()
+              >{{ row.minutes }} min · {{ row.toKickOff }} to {{ endLabel()
               }}{{ row.setUpMinutes ? ' · ' + row.setUpMinutes + ' min set-up' : '' }}</span
             >
           </a>
@@ -75,7 +68,7 @@ export class PhaseTimeline {
   protected readonly rows = computed<TimelineRow[]>(() =>
     this.phases().map((phase, index) => ({
       index,
-      name: isBreak(phase) ? breakWords(phase) : phase.name,
+      name: phase.name,
       isBreak: isBreak(phase),
       minutes: phase.endMinute - phase.startMinute,
       setUpMinutes: phase.changeover?.minutes ?? 0,

@@ -5,7 +5,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { POSITION_STYLE, type Station } from '../../../../../shared/types';
 import { ACTIVITY_KIND_LABELS } from '../../../core/labels/plan-labels';
-import { ROLE_TAGS, roleLines, startRoles } from '../services/plan-words';
+import { readableOn, ROLE_TAGS, roleLines, startRoles } from '../services/plan-words';
 import { StationDiagram } from '../../../shared/components/station-diagram';
 
 export interface PlayerMoveRequest {
@@ -59,10 +59,14 @@ export class StationCard {
     return new Map(
       this.station().playerIds.map((id) => {
         const role = roles.get(id) ?? 'player';
-        return [
-          id,
-          { ...POSITION_STYLE[role], tag: ROLE_TAGS[role] ?? null, keeper: role === 'goalkeeper' },
-        ] as const;
+        const style = POSITION_STYLE[role];
+        const badge = {
+          fill: style.fill,
+          text: readableOn(style.fill, style.text),
+          tag: ROLE_TAGS[role] ?? null,
+          keeper: role === 'goalkeeper',
+        };
+        return [id, badge] as const;
       }),
     );
   });

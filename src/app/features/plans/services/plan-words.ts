@@ -91,3 +91,24 @@ export function changeoverWords(phases: readonly Phase[], index: number): string
 function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 || word === 'min' ? '' : 's'}`;
 }
+
+/**
+ * The number colour for a small badge on `fill`: the role's own colour where it reads at 4.5:1
+ * (WCAG 2.x contrast for normal text), else black or white, whichever reads better.
+ */
+export function readableOn(fill: string, preferred: string): string {
+  if (contrast(fill, preferred) >= 4.5) return preferred;
+  return contrast(fill, '#ffffff') >= contrast(fill, '#1b1b1b') ? '#ffffff' : '#1b1b1b';
+}
+
+function contrast(a: string, b: string): number {
+  const [hi, lo] = [luminance(a), luminance(b)].sort((x, y) => y - x);
+  return (hi + 0.05) / (lo + 0.05);
+}
+
+/** WCAG relative luminance of a #rrggbb colour. */
+function luminance(hex: string): number {
+  const channels = [1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16) / 255);
+  const [r, g, b] = channels.map((c) => (c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4));
+  return 0.2126 * r + 0.7152 * g + 0.0722 * b;
+}
