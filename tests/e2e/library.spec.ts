@@ -32,7 +32,10 @@ function listen(page: Page): void {
 
 /** Full-page pictures start at the top of the scrolling content, so the toolbar stays at the top. */
 async function picture(page: Page, name: string): Promise<void> {
-  await page.evaluate(() => document.querySelector('mat-sidenav-content')?.scrollTo(0, 0));
+  await page.evaluate(() => {
+    document.querySelector('mat-sidenav-content')?.scrollTo(0, 0);
+    window.scrollTo(0, 0);
+  });
   await screenshot(page, name);
 }
 
@@ -201,6 +204,7 @@ describe('activity library', () => {
     const row = page.getByTestId('club-activity-list').locator('li', { hasText: CLUB_TITLE });
     await expect.poll(() => row.textContent()).toContain('Saved');
     await expect.poll(() => state.getAttribute('data-unsaved')).toBe('0');
+    await picture(page, 'club-activities');
     const draftId = (await club.api.get<RuleSetDto[]>('/api/rule-sets', { token: lead.token })).body.find(
       (v) => v.status === 'draft',
     )!.id;

@@ -76,10 +76,8 @@ export class LibraryPage {
   /** The activity whose pin is being saved. */
   protected readonly saving = signal<string | null>(null);
 
-  protected readonly entries = computed<LibraryEntry[]>(() => {
-    const rules = this.ruleSet();
-    return rules ? libraryEntries(rules) : [];
-  });
+  /** The activities the club offers, its own first (set once the rules are read). */
+  protected readonly entries = signal<LibraryEntry[]>([]);
   /** Ids the club offers now (retired ones are not). */
   private readonly offered = computed(() => new Set(this.entries().map((e) => e.id)));
   protected readonly shown = computed(() => filterLibrary(this.entries(), this.filter()));
@@ -127,7 +125,9 @@ export class LibraryPage {
         next: (dto) => {
           this.loading.set(false);
           try {
-            this.ruleSet.set(currentRuleSet(dto.body));
+            const rules = currentRuleSet(dto.body);
+            this.entries.set(libraryEntries(rules));
+            this.ruleSet.set(rules);
           } catch {
             this.error.set(
               'The club’s activities cannot be read. Ask the head of coaching to check the club rules.',
