@@ -215,6 +215,37 @@ describe('LibraryPage', () => {
     expect(message.classList).toContain('cw-activity__message--error');
   });
 
+  it('lets the lead pin for any team from a menu that shows which teams have it', async () => {
+    const lead: UserDto = { ...coach, id: 'u-lead', role: 'lead' };
+    const { fixture, http, el, card, button } = await setUp({
+      user: lead,
+      teams: [team({ pinnedActivityIds: ['kb-ten-or-break-out'] }), otherTeam],
+    });
+    // The lead staffs no team: every age is shown.
+    expect(el.querySelector('[data-testid=library-count]')?.textContent).not.toContain(' for ');
+    const article = card('kb-ten-or-break-out');
+    button(article, 'Pin for a team').click();
+    await fixture.whenStable();
+    const items = Array.from(document.querySelectorAll<HTMLElement>('[role=menuitemcheckbox]'));
+    expect(
+      items.map((i) => [
+        i.querySelector('.mat-mdc-menu-item-text')?.textContent?.trim(),
+        i.getAttribute('aria-checked'),
+      ]),
+    ).toEqual([
+      ['Riverside U12', 'true'],
+      ['Riverside U8', 'false'],
+    ]);
+    items[1].click();
+    const put = http.expectOne('/api/teams/t8/pinned-activities');
+    expect(put.request.body).toEqual({ activityIds: ['kb-ten-or-break-out'] });
+    put.flush({ activityIds: ['kb-ten-or-break-out'] });
+    await fixture.whenStable();
+    expect(article.querySelector('[data-testid=pinned-by]')?.textContent).toContain(
+      'Riverside U12, Riverside U8',
+    );
+  });
+
   it('shows everyone which teams pinned an activity, but offers an assistant no pin button', async () => {
     const assistant: UserDto = { ...coach, id: 'u-assistant', role: 'assistant' };
     const { card, el } = await setUp({
