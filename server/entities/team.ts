@@ -45,6 +45,10 @@ export class Team {
   @Column({ type: 'real' })
   spaceLength!: number;
 
+  /** Activities the staff want in the team's next plan; cleared once a plan has taken them. */
+  @Column({ type: 'varchar', length: 64, array: true, default: () => "'{}'" })
+  pinnedActivityIds!: string[];
+
   /** Coaches and assistants attached to the team. */
   @ManyToMany(() => User)
   @JoinTable({

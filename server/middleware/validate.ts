@@ -16,7 +16,14 @@ function loadSchemas(ajv: Ajv): void {
 }
 
 function makeAjv(coerce: boolean): Ajv {
-  const ajv = new Ajv({ allErrors: true, coerceTypes: coerce, useDefaults: true, strict: false });
+  // verbose: each error carries the schema it broke, so a schema's own `messages` can be read.
+  const ajv = new Ajv({
+    allErrors: true,
+    coerceTypes: coerce,
+    useDefaults: true,
+    strict: false,
+    verbose: true,
+  });
   addFormats(ajv);
   loadSchemas(ajv);
   return ajv;
@@ -31,6 +38,16 @@ function compiled(ajv: Ajv, name: string): ValidateFunction {
   const validator = ajv.getSchema(id);
   if (!validator) throw new Error(`No JSON Schema ${id} in ${API_SCHEMA_DIR}`);
   return validator;
+}
+
+/**
+ * A message the schema words itself: `"messages": { "<keyword>": "…" }` beside the keyword, in a
+ * coach's words (ajv's own, such as "must match pattern", are for developers).
+ */
+function schemaMessage(error: ErrorObject): string | undefined {
+  const messages = (error.parentSchema as { messages?: Record<string, unknown> } | undefined)?.messages;
+  const message = messages?.[error.keyword];
+  return typeof message === 'string' ? message : undefined;
 }
 
 /** Turns ajv errors into one entry per field, named by its path (e.g. "players/3/id"). */
@@ -49,6 +66,7 @@ export function fieldErrors(errors: ErrorObject[] | null | undefined, prefix = '
         .join('/');
       message = 'is not a known field';
     }
+    message = schemaMessage(error) ?? message;
     const field = [prefix, path].filter(Boolean).join('.') || prefix || '(body)';
     const key = `${field}|${message}`;
     if (!seen.has(key)) {

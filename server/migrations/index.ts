@@ -2,6 +2,8 @@ import { InitialSchema1764627000000 } from './1764627000000-initial-schema';
 import { RuleSetHistory1764628000000 } from './1764628000000-rule-set-history';
 import { DocumentsAsJson1764629000000 } from './1764629000000-documents-as-json';
 import { FeedbackGroupSize1764630000000 } from './1764630000000-feedback-group-size';
+import { SixteenActivityKinds1764631000000 } from './1764631000000-sixteen-activity-kinds';
+import { TeamPinnedActivities1764632000000 } from './1764632000000-team-pinned-activities';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -9,4 +11,6 @@ export const MIGRATIONS = [
   RuleSetHistory1764628000000,
   DocumentsAsJson1764629000000,
   FeedbackGroupSize1764630000000,
+  SixteenActivityKinds1764631000000,
+  TeamPinnedActivities1764632000000,
 ];

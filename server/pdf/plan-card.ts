@@ -1,9 +1,10 @@
 import type { Column, Content, TDocumentDefinitions, TableCell } from 'pdfmake/interfaces';
-import type { Equipment, Phase, Plan, Station } from '../../shared/types';
+import type { Changeover, Equipment, Phase, Plan, PositionRole, Station } from '../../shared/types';
+import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, POSITION_STYLE } from '../../shared/types/activity-words';
 import { minuteLabel, planMinutes, sessionStart } from './clock';
 import { CARD_FONT } from './fonts';
 import { printable, printableContent } from './printable';
-import { placePlayers, stationDiagramSvg } from './station-diagram';
+import { diagramMarks, legendSymbolSvg, stationDiagramSvg, type LegendKey } from './station-diagram';
 
 export type Paper = 'a4' | 'letter';
 export const PAPERS: readonly Paper[] = ['a4', 'letter'];
@@ -30,23 +31,60 @@ export const STANDING_SAFETY_NOTE =
 
 /** Sizes that shrink when a card would run onto a second page. */
 export interface CardDensity {
+  /** Page margin in points. */
+  margin: number;
+  /** Points between phases. */
+  gap: number;
+  /** Most stations in one row of a phase. */
+  perRow: number;
   baseFont: number;
+  lineHeight: number;
   smallFont: number;
   gridDiagramHeight: number;
   soloDiagramHeight: number;
 }
 
 export const REGULAR: CardDensity = {
+  margin: 22,
+  gap: 6,
+  perRow: 5,
   baseFont: 7.5,
+  lineHeight: 1.1,
   smallFont: 6.8,
   gridDiagramHeight: 64,
   soloDiagramHeight: 88,
 };
 export const COMPACT: CardDensity = {
+  margin: 22,
+  gap: 5,
+  perRow: 6,
   baseFont: 6.8,
+  lineHeight: 1.1,
   smallFont: 6.2,
   gridDiagramHeight: 50,
   soloDiagramHeight: 66,
+};
+/** For a long session with many groups. */
+export const TIGHT: CardDensity = {
+  margin: 18,
+  gap: 3,
+  perRow: 8,
+  baseFont: 6.3,
+  lineHeight: 1.02,
+  smallFont: 5.8,
+  gridDiagramHeight: 36,
+  soloDiagramHeight: 48,
+};
+/** The last resort before a second page: fine print, as on a fixture list. */
+export const SMALLEST: CardDensity = {
+  margin: 16,
+  gap: 2,
+  perRow: 8,
+  baseFont: 5.9,
+  lineHeight: 1,
+  smallFont: 5.5,
+  gridDiagramHeight: 32,
+  soloDiagramHeight: 42,
 };
 
 const KIT_LABELS: Record<keyof Equipment, [one: string, many: string]> = {
@@ -57,17 +95,49 @@ const KIT_LABELS: Record<keyof Equipment, [one: string, many: string]> = {
 };
 
 const KIT_KEYS = Object.keys(KIT_LABELS) as (keyof Equipment)[];
+/** The same, short, for a station's line. */
+const SHORT_KIT: Record<keyof Equipment, [one: string, many: string]> = {
+  balls: ['ball', 'balls'],
+  cones: ['cone', 'cones'],
+  bibs: ['bib', 'bibs'],
+  goals: ['goal', 'goals'],
+};
 
 function kitCount(kind: keyof Equipment, count: number): string {
   return `${count} ${KIT_LABELS[kind][count === 1 ? 0 : 1]}`;
 }
 
 const PAGE_WIDTH: Record<Paper, number> = { a4: 595.28, letter: 612 };
-const MARGIN = 22;
-const STATIONS_PER_ROW = 5;
+/** Up to this many stations sit in fixed-width cells with their coaching beside them. */
+const SIDE_BY_SIDE_MAX = 4;
+/** Those cells take at most two thirds of the width, each between these widths. */
+const SIDE_CELL_WIDTH = { min: 88, max: 150 };
 const TINT = ['#f3f7f1', '#e4efdf', '#d5e7cc', '#f4e4c8', '#f1d2bd'];
+const BREAK_TINT = '#dcebf3';
+const MUTED = '#44524a';
 
-/** The pdfmake document for one plan's card: header, timeline, a block per phase, kit and cautions. */
+/** The legend's order and words: the start-position roles, then the kit markers. */
+const LEGEND: [LegendKey, string][] = [
+  ...(Object.keys(POSITION_STYLE) as PositionRole[]).map((role): [LegendKey, string] => [
+    role,
+    POSITION_STYLE[role].label,
+  ]),
+  ['cone', 'Cone'],
+  ['goal', 'Goal'],
+  ['gate', 'Gate (two cones)'],
+];
+
+/** Short role tags in the group list, so the list still reads on a grey printout. */
+const ROLE_TAGS: Partial<Record<PositionRole, string>> = {
+  goalkeeper: 'GK',
+  defender: 'def',
+  'team-a': 'A',
+  'team-b': 'B',
+  server: 'server',
+  neutral: 'neutral',
+};
+
+/** The pdfmake document for one plan's card: header, timeline, legend, a block per phase, kit and cautions. */
 export function planCardDefinition(
   input: CardInput,
   paper: Paper = 'a4',
@@ -75,18 +145,30 @@ export function planCardDefinition(
   onPageCount?: (pages: number) => void,
 ): TDocumentDefinitions {
   const { plan } = input;
+  const MARGIN = density.margin;
   const contentWidth = PAGE_WIDTH[paper] - 2 * MARGIN;
   const start = sessionStart(plan, input.kickOff);
-  const names = nameLookup(input);
+  const context: CardContext = {
+    start,
+    names: nameLookup(input),
+    width: contentWidth,
+    density,
+    firstShown: firstPhases(plan),
+  };
 
   return {
     pageSize: paper === 'a4' ? 'A4' : 'LETTER',
     pageMargins: [MARGIN, MARGIN, MARGIN, MARGIN + 6],
     info: { title: printable(`${input.teamName} — ${kindLabel(plan)}`), creator: 'Conewise' },
-    defaultStyle: { font: CARD_FONT, fontSize: density.baseFont, lineHeight: 1.1, color: '#1d2620' },
+    defaultStyle: {
+      font: CARD_FONT,
+      fontSize: density.baseFont,
+      lineHeight: density.lineHeight,
+      color: '#1d2620',
+    },
     styles: {
       title: { fontSize: 15, bold: true },
-      subtitle: { fontSize: 8.5, color: '#44524a' },
+      subtitle: { fontSize: 8.5, color: MUTED },
       phase: { fontSize: 9.5, bold: true, color: '#1f3d28' },
       station: { fontSize: 8, bold: true },
       label: { bold: true, color: '#3d6b47' },
@@ -104,7 +186,9 @@ export function planCardDefinition(
     content: printableContent([
       header(input, start),
       timeline(plan, start, contentWidth),
-      ...plan.phases.map((phase) => phaseBlock(phase, start, names, contentWidth, density)),
+      kitChecklist(plan),
+      legend(plan),
+      ...plan.phases.map((phase, i) => phaseBlock(phase, plan.phases.slice(0, i), context)),
       closingBlock(plan),
     ]),
   };
@@ -126,6 +210,7 @@ function header(input: CardInput, start: number | null): Content {
     `space ${request.space.width} × ${request.space.length} m`,
     start !== null ? `arrive by ${minuteLabel(start, -10)}` : null,
   ].filter(Boolean);
+  const theme = plan.theme ? ` · theme: ${FOCUS_LABELS[plan.theme] ?? plan.theme}` : '';
   return {
     margin: [0, 0, 0, 6],
     columns: [
@@ -133,7 +218,7 @@ function header(input: CardInput, start: number | null): Content {
         width: '*',
         stack: [
           { text: input.teamName, style: 'title' },
-          { text: kindLabel(plan), style: 'subtitle' },
+          { text: `${kindLabel(plan)}${theme}`, style: 'subtitle' },
         ],
       },
       {
@@ -154,10 +239,10 @@ function timeline(plan: Plan, start: number | null, width: number): Content {
   const endCell = plan.request.kind === 'match-warm-up' ? 46 : 0;
   const usable = width - endCell - plan.phases.length * 4;
   const cells: TableCell[] = plan.phases.map((phase) => ({
-    fillColor: TINT[Math.min(Math.max((phase.intensity ?? 2) - 1, 0), 4)],
+    fillColor: isBreak(phase) ? BREAK_TINT : TINT[Math.min(Math.max((phase.intensity ?? 2) - 1, 0), 4)],
     stack: [
       { text: `${minuteLabel(start, phase.startMinute)}–${minuteLabel(start, phase.endMinute)}`, bold: true },
-      { text: phase.name, style: 'small' },
+      { text: isBreak(phase) ? 'Drinks' : phase.name, style: 'small' },
     ],
   }));
   const widths: number[] = plan.phases.map((phase) =>
@@ -177,7 +262,7 @@ function timeline(plan: Plan, start: number | null, width: number): Content {
     fitted.push(endCell - 4);
   }
   return {
-    margin: [0, 0, 0, 6],
+    margin: [0, 0, 0, 4],
     table: { widths: fitted, body: [cells] },
     layout: {
       hLineColor: () => '#ffffff',
@@ -190,73 +275,219 @@ function timeline(plan: Plan, start: number | null, width: number): Content {
   };
 }
 
-function phaseBlock(
-  phase: Phase,
-  start: number | null,
-  names: (id: string) => string,
-  width: number,
-  density: CardDensity,
-): Content {
-  const shared = sharesOneActivity(phase);
-  const perRow = Math.min(STATIONS_PER_ROW, Math.max(phase.stations.length, 1));
-  const cellWidth = (width - (perRow - 1) * 6) / perRow;
-  const rows: TableCell[][] = [];
-  for (let i = 0; i < phase.stations.length; i += perRow) {
-    const row: TableCell[] = phase.stations
-      .slice(i, i + perRow)
-      .map((station, j) => stationCell(station, i + j + 1, names, cellWidth, !shared, density));
-    while (row.length < perRow) row.push({ text: '' });
-    rows.push(row);
-  }
-  const first = phase.stations[0];
-  if (phase.stations.length === 1) {
-    return {
-      unbreakable: true,
-      margin: [0, 2, 0, 6],
-      stack: [phaseHeading(phase, start), soloStation(first, names, width, density)],
-    };
-  }
+/** What this card's diagrams draw, in the diagrams' own colours: only the roles and kit that appear. */
+export function legendKeys(plan: Plan): LegendKey[] {
+  const marks = new Set<LegendKey>();
+  for (const phase of plan.phases)
+    for (const station of phase.stations) diagramMarks(station).forEach((m) => marks.add(m));
+  return LEGEND.map(([key]) => key).filter((key) => marks.has(key));
+}
+
+const LEGEND_FONT = 6.6;
+
+function legend(plan: Plan): Content {
+  const keys = legendKeys(plan);
+  if (!keys.length) return { text: '' };
+  const words = new Map(LEGEND);
+  // Fixed widths from the condensed face's character widths (about half the size, with room to
+  // spare): auto-sized columns squeeze the last entries into two lines.
+  const widthOf = (label: string) => Math.ceil(label.length * LEGEND_FONT * 0.5) + 2;
   return {
-    unbreakable: true,
-    margin: [0, 2, 0, 6],
-    stack: [
-      phaseHeading(phase, start),
-      shared && first?.description ? { text: first.description, margin: [0, 0, 0, 3] } : { text: '' },
-      rows.length
-        ? {
-            table: { widths: Array(perRow).fill(cellWidth - 6), body: rows, dontBreakRows: true },
-            layout: cardLayout(),
-          }
-        : { text: 'No stations in this phase.', italics: true },
-      shared && first ? coachingColumns(first) : { text: '' },
+    margin: [0, 0, 0, 5],
+    columnGap: 2,
+    fontSize: LEGEND_FONT,
+    columns: [
+      { width: 18, text: 'Key', style: 'label' },
+      ...keys.flatMap((key): Column[] => {
+        const label = words.get(key) ?? key;
+        return [
+          { width: 8, svg: legendSymbolSvg(key), margin: [0, 0.2, 0, 0] },
+          { width: widthOf(label) + 6, text: label },
+        ];
+      }),
     ],
   };
 }
 
-function phaseHeading(phase: Phase, start: number | null): Content {
+/** What every phase block needs from the card. */
+interface CardContext {
+  start: number | null;
+  names: (id: string) => string;
+  width: number;
+  density: CardDensity;
+  /** Where each activity's coaching is first printed; later phases point back to it. */
+  firstShown: Map<string, Phase>;
+}
+
+/** Each activity's first phase on the card (drinks breaks and resumed phases print none). */
+function firstPhases(plan: Plan): Map<string, Phase> {
+  const first = new Map<string, Phase>();
+  plan.phases.forEach((phase, i) => {
+    if (isBreak(phase) || resumed(phase, plan.phases.slice(0, i))) return;
+    for (const station of phase.stations)
+      if (!first.has(station.activityId)) first.set(station.activityId, phase);
+  });
+  return first;
+}
+
+function phaseBlock(phase: Phase, allBefore: Phase[], ctx: CardContext): Content {
+  const { start, names, width, density } = ctx;
+  const previous = allBefore.at(-1);
+  if (isBreak(phase) || !phase.stations.length) return breakRow(phase, start, density);
+  const heading = [phaseHeading(phase, previous, start)];
+  const before = resumed(phase, allBefore);
+  if (before) {
+    const same = `same groups, set-up and coaching as ${minuteLabel(start, before.startMinute)}–${minuteLabel(
+      start,
+      before.endMinute,
+    )}: play on`;
+    return { margin: [0, 2, 0, density.gap], stack: [phaseHeading(phase, previous, start, same)] };
+  }
+  if (phase.stations.length === 1) {
+    return {
+      unbreakable: true,
+      margin: [0, 2, 0, density.gap],
+      stack: [...heading, soloStation(phase, phase.stations[0], ctx)],
+    };
+  }
+  const activities = distinctActivities(phase);
+  const count = phase.stations.length;
+  // A few stations leave room beside them: the coaching goes there instead of underneath. The
+  // coaching of several activities is longer, so their cells give it more of the width.
+  const share = activities.length > 1 ? 0.45 : 2 / 3;
+  const sideCell = Math.min(SIDE_CELL_WIDTH.max, Math.floor((width * share) / count));
+  const beside = count <= SIDE_BY_SIDE_MAX && sideCell >= SIDE_CELL_WIDTH.min;
+  const perRow = beside ? count : Math.min(density.perRow, count);
+  const cellWidth = beside ? sideCell : (width - (perRow - 1) * 6) / perRow;
+  const rows: TableCell[][] = [];
+  for (let i = 0; i < count; i += perRow) {
+    const row: TableCell[] = phase.stations
+      .slice(i, i + perRow)
+      .map((station, j) => stationCell(phase, station, i + j + 1, names, cellWidth, density));
+    while (row.length < perRow) row.push({ text: '' });
+    rows.push(row);
+  }
+  const grid: Content = {
+    table: { widths: Array(perRow).fill(cellWidth - 6), body: rows, dontBreakRows: true },
+    layout: cardLayout(),
+  };
+  if (beside) {
+    return {
+      unbreakable: true,
+      margin: [0, 2, 0, density.gap],
+      stack: [
+        ...heading,
+        {
+          columnGap: 10,
+          columns: [
+            { width: perRow * cellWidth - 6, stack: [grid] },
+            { width: '*', stack: [coachingParagraphs(phase, activities, activities.length > 1, ctx)] },
+          ],
+        },
+      ],
+    };
+  }
+  return {
+    unbreakable: true,
+    margin: [0, 2, 0, density.gap],
+    stack: [
+      ...heading,
+      activities.length === 1 && activities[0].description && !shownBefore(activities[0], phase, ctx)
+        ? { text: activities[0].description, margin: [0, 0, 0, 3] }
+        : { text: '' },
+      grid,
+      activities.length > 1 || shownBefore(activities[0], phase, ctx)
+        ? coachingParagraphs(phase, activities, true, ctx)
+        : density === REGULAR
+          ? coachingColumns(activities[0])
+          : coachingRunOn(activities[0]),
+    ],
+  };
+}
+
+/** A drinks break: one tinted row with its time, no stations. */
+function breakRow(phase: Phase, start: number | null, density: CardDensity): Content {
   const minutes = phase.endMinute - phase.startMinute;
+  return {
+    margin: [0, 0, 0, density.gap],
+    table: {
+      widths: ['*'],
+      body: [
+        [
+          {
+            fillColor: BREAK_TINT,
+            text: [
+              {
+                text: `${minuteLabel(start, phase.startMinute)}–${minuteLabel(start, phase.endMinute)}  `,
+                bold: true,
+              },
+              { text: phase.name || ACTIVITY_KIND_LABELS.break, bold: true },
+              { text: `  · ${minutes} min · water for everyone; set up the next part now if you can` },
+            ],
+          },
+        ],
+      ],
+    },
+    layout: 'noBorders',
+  };
+}
+
+/** "10:05–10:12  Keep-ball and breakouts · Keep-ball · 7 min · intensity 4/5", then its set-up work. */
+function phaseHeading(
+  phase: Phase,
+  previous: Phase | undefined,
+  start: number | null,
+  note?: string,
+): Content {
+  const setUp = changeoverText(phase.changeover, previous);
+  const minutes = phase.endMinute - phase.startMinute;
+  const kind = ACTIVITY_KIND_LABELS[phase.activityKind];
+  const kindText = kind && kind.toLowerCase() !== phase.name.toLowerCase() ? ` · ${kind}` : '';
   return {
     text: [
       `${minuteLabel(start, phase.startMinute)}–${minuteLabel(start, phase.endMinute)}  `,
       { text: phase.name },
       {
-        text: `  · ${minutes} min${phase.intensity ? ` · intensity ${phase.intensity}/5` : ''}`,
+        text: `${kindText}  · ${minutes} min${phase.intensity ? ` · intensity ${phase.intensity}/5` : ''}`,
         bold: false,
       },
+      note ? { text: ` · ${note}`, bold: false, fontSize: 7.5 } : '',
+      setUp ? { text: `     ${setUp}`, bold: false, fontSize: 7, color: MUTED } : '',
     ],
     style: 'phase',
     margin: [0, 0, 0, 2],
   };
 }
 
+/** "Set up: 12 cones, move 1 goal — 1 min": the kit work before a phase, where there is any. */
+export function changeoverText(
+  changeover: Changeover | undefined,
+  previous: Phase | undefined,
+): string | null {
+  if (!changeover) return null;
+  const { conesPlaced, conesLifted, goalsMoved, minutes } = changeover;
+  const work = [
+    conesPlaced ? `${conesPlaced} ${conesPlaced === 1 ? 'cone' : 'cones'}` : null,
+    conesLifted ? `lift ${conesLifted}` : null,
+    goalsMoved ? `move ${goalsMoved} ${goalsMoved === 1 ? 'goal' : 'goals'}` : null,
+  ].filter(Boolean);
+  if (!work.length) return null;
+  const when =
+    minutes > 0
+      ? ` — ${minutes} min`
+      : !previous
+        ? ' — before the start'
+        : isBreak(previous)
+          ? ' — during the drinks break'
+          : '';
+  return `Set up: ${work.join(', ')}${when}`;
+}
+
 /** A phase with one station: the diagram on the left, group and coaching beside it. */
-function soloStation(
-  station: Station,
-  names: (id: string) => string,
-  width: number,
-  density: CardDensity,
-): Content {
-  const diagram = stationDiagramSvg(station, { maxWidth: 160, maxHeight: density.soloDiagramHeight });
+function soloStation(phase: Phase, station: Station, ctx: CardContext): Content {
+  const { names, width, density } = ctx;
+  const shownAt = shownBefore(station, phase, ctx);
+  const diagram = stationDiagramSvg(station, { maxWidth: 170, maxHeight: density.soloDiagramHeight });
   return {
     columnGap: 10,
     columns: [
@@ -264,58 +495,119 @@ function soloStation(
       {
         width: width - diagram.width - 10,
         stack: [
-          { text: `1. ${station.title}`, style: 'station' },
-          { text: stationFacts(station), style: 'small', color: '#44524a', margin: [0, 0, 0, 2] },
-          station.description ? { text: station.description, margin: [0, 0, 0, 2] } : '',
+          stationTitle(phase, station, 1),
+          shownAt || !station.description ? '' : { text: station.description, margin: [0, 0, 0, 2] },
           { text: groupList(station, names).join(' · '), style: 'small' },
-          coachingStack(station),
+          notesLine(station),
+          shownAt
+            ? { text: `Coaching as at ${shownAt}.`, style: 'small', italics: true }
+            : coachingStack(station),
         ],
       },
     ],
   };
 }
 
-function groupList(station: Station, names: (id: string) => string): string[] {
-  const placed = new Map(placePlayers(station).map((p) => [p.playerId, p]));
-  const group = station.playerIds.map((id) => {
-    const p = placed.get(id);
-    const role = p?.role === 'defender' ? ' (def)' : p?.role === 'goalkeeper' ? ' (GK)' : '';
-    return `${p?.number ?? '?'} ${names(id)}${role}`;
-  });
-  if (station.coachJoins) group.push('+ a coach joins');
-  return group;
-}
-
-function stationCell(
-  station: Station,
-  index: number,
-  names: (id: string) => string,
-  width: number,
-  withCoaching: boolean,
-  density: CardDensity,
-): TableCell {
-  const diagram = stationDiagramSvg(station, {
-    maxWidth: Math.min(width - 8, 150),
-    maxHeight: density.gridDiagramHeight,
-  });
-  const group = groupList(station, names);
+/** "1. Title  4v1 · 2 balls, 8 cones": the station's title, its format beside it, then its kit. */
+function stationTitle(phase: Phase, station: Station, index: number): Content {
   return {
-    stack: [
+    margin: [0, 0, 0, 2],
+    text: [
       { text: `${index}. ${station.title}`, style: 'station' },
-      { text: stationFacts(station), style: 'small', color: '#44524a', margin: [0, 0, 0, 2] },
-      { svg: diagram.svg, width: diagram.width, height: diagram.height, margin: [0, 0, 0, 2] },
-      { text: group.join(' · '), style: 'small' },
-      ...(withCoaching ? [coachingStack(station)] : []),
+      station.format ? { text: `  ${station.format}`, style: 'station', bold: false, color: MUTED } : '',
+      { text: `  · ${stationFacts(phase, station)}`, style: 'small', color: MUTED },
     ],
   };
 }
 
-function stationFacts(station: Station): string {
-  const attackers = station.roles.attackers?.length;
-  const defenders = station.roles.defenders?.length;
-  const shape = attackers && defenders ? `${attackers}v${defenders} · ` : '';
-  const kit = KIT_KEYS.filter((k) => station.equipment[k] > 0).map((k) => kitCount(k, station.equipment[k]));
-  return `${shape}${station.area.width} × ${station.area.length} m${kit.length ? ' · ' + kit.join(', ') : ''}`;
+/** "1 Ava K. (GK) · 2 Bilal R. …": numbers as in the diagram's circles, roles from the start positions. */
+export function groupList(station: Station, names: (id: string) => string): string[] {
+  const roleOf = new Map(station.positions.map((p) => [p.id, p.role]));
+  const keepers = new Set(station.roles.goalkeeper ?? []);
+  const defenders = new Set(station.roles.defenders ?? []);
+  const entry = (id: string, tags: Partial<Record<PositionRole, string>>) => {
+    const role =
+      roleOf.get(id) ?? (keepers.has(id) ? 'goalkeeper' : defenders.has(id) ? 'defender' : undefined);
+    const tag = role ? tags[role] : undefined;
+    return `${station.playerIds.indexOf(id) + 1} ${names(id)}${tag ? ` (${tag})` : ''}`;
+  };
+  const sides = station.roles.teams;
+  // Two sides: each listed under its name once rather than a tag on every player.
+  const group = sides
+    ? sides.map(
+        (side, i) =>
+          `${POSITION_STYLE[i === 0 ? 'team-a' : 'team-b'].label}: ${side.map((id) => entry(id, { goalkeeper: 'GK' })).join(', ')}`,
+      )
+    : station.playerIds.map((id) => entry(id, ROLE_TAGS));
+  if (station.coachJoins) group.push('C: a coach joins');
+  return group;
+}
+
+function notesLine(station: Station): Content {
+  return station.notes?.length
+    ? { text: [{ text: 'Note: ', style: 'label' }, station.notes.join(' ')], style: 'small', italics: true }
+    : '';
+}
+
+function stationCell(
+  phase: Phase,
+  station: Station,
+  index: number,
+  names: (id: string) => string,
+  width: number,
+  density: CardDensity,
+): TableCell {
+  const inner = width - 6;
+  const diagram = stationDiagramSvg(station, {
+    maxWidth: Math.min(inner - 2, 150),
+    maxHeight: density.gridDiagramHeight,
+  });
+  const group = groupList(station, names);
+  const picture: Content = { svg: diagram.svg, width: diagram.width, height: diagram.height };
+  // Beside the diagram when it fits its height: one name a line in a narrow cell, else a paragraph
+  // (its lines estimated from the condensed face: a character is about 0.45 of the font size wide).
+  const lineHeight = density.smallFont * density.lineHeight * 1.2;
+  const listWidth = inner - diagram.width - 4;
+  const room = Math.floor((diagram.height + 4) / lineHeight);
+  const flowing = listWidth >= 80;
+  const lines = flowing
+    ? Math.ceil((group.join(' · ').length * density.smallFont * 0.45) / listWidth) + 1
+    : group.length;
+  const beside = listWidth >= 44 && lines <= room;
+  const list: Content = flowing
+    ? { text: group.join(' · '), style: 'small' }
+    : { stack: group.map((line) => ({ text: line, style: 'small' })) };
+  return {
+    stack: [
+      stationTitle(phase, station, index),
+      beside
+        ? {
+            columnGap: 4,
+            columns: [
+              { width: diagram.width, ...picture },
+              { width: listWidth, stack: [list] },
+            ],
+            margin: [0, 0, 0, 2],
+          }
+        : {
+            stack: [
+              { ...picture, margin: [0, 0, 0, 2] },
+              { text: group.join(' · '), style: 'small' },
+            ],
+          },
+      notesLine(station),
+    ],
+  };
+}
+
+/** The station's kind (where it differs from its phase's) and kit; the diagram gives the area. */
+function stationFacts(phase: Phase, station: Station): string {
+  const kind =
+    station.activityKind !== phase.activityKind ? ACTIVITY_KIND_LABELS[station.activityKind] : null;
+  const kit = KIT_KEYS.filter((k) => station.equipment[k] > 0).map(
+    (k) => `${station.equipment[k]} ${SHORT_KIT[k][station.equipment[k] === 1 ? 0 : 1]}`,
+  );
+  return [kind, kit.join(', ') || 'no kit'].filter(Boolean).join(' · ');
 }
 
 function coachingStack(station: Station): Content {
@@ -353,46 +645,126 @@ function coachingColumns(station: Station): Content {
   };
 }
 
+/** The same in one paragraph, for a card short of room. */
+function coachingRunOn(station: Station): Content {
+  return {
+    margin: [0, 2, 0, 0],
+    style: 'small',
+    text: [
+      ...coachingPart('Look for', station.coachingPoints),
+      ...coachingPart('Easier', station.progressions.easier),
+      ...coachingPart('Harder', station.progressions.harder),
+    ],
+  };
+}
+
+function coachingPart(label: string, items: string[]): Content[] {
+  return items.length ? [{ text: `${label}: `, style: 'label' }, `${items.join('; ')}. `] : [];
+}
+
+/**
+ * What each activity of a phase is and its coaching, once per activity: one paragraph each,
+ * headed by the activity's title when there are several, else a line per heading.
+ */
+function coachingParagraphs(phase: Phase, activities: Station[], titled: boolean, ctx: CardContext): Content {
+  const part = coachingPart;
+  if (!titled && !shownBefore(activities[0], phase, ctx)) {
+    const [station] = activities;
+    const line = (label: string, items: string[]): Content =>
+      items.length ? { text: part(label, items), margin: [0, 0, 0, 1] } : '';
+    return {
+      style: 'small',
+      stack: [
+        station.description ? { text: station.description, margin: [0, 0, 0, 2] } : '',
+        line('Look for', station.coachingPoints),
+        line('Easier', station.progressions.easier),
+        line('Harder', station.progressions.harder),
+      ],
+    };
+  }
+  return {
+    margin: [0, 3, 0, 0],
+    stack: activities.map((station) => {
+      const shownAt = shownBefore(station, phase, ctx);
+      return {
+        margin: [0, 0, 0, 2],
+        style: 'small',
+        text: shownAt
+          ? [{ text: `${station.title}: `, bold: true }, `coaching as at ${shownAt}.`]
+          : [
+              { text: `${station.title}: `, bold: true },
+              station.description ? `${station.description} ` : '',
+              ...part('Look for', station.coachingPoints),
+              ...part('Easier', station.progressions.easier),
+              ...part('Harder', station.progressions.harder),
+            ],
+      };
+    }),
+  };
+}
+
+/** The kit to pack, one tick box each, with what the bag holds (in red where it is short). */
+function kitChecklist(plan: Plan): Content {
+  const kinds = KIT_KEYS.filter((k) => plan.equipmentNeeded[k] > 0);
+  const fontSize = 7;
+  const widthOf = (text: string) => Math.ceil(text.length * fontSize * 0.5) + 4;
+  const box: Column = {
+    width: 9,
+    svg: '<svg xmlns="http://www.w3.org/2000/svg" width="8" height="8"><rect x="0.5" y="0.8" width="6.5" height="6.5" fill="none" stroke="#3d6b47" stroke-width="0.7"/></svg>',
+  };
+  return {
+    margin: [0, 0, 0, 4],
+    fontSize,
+    columnGap: 2,
+    columns: [
+      { width: 48, text: 'Kit checklist', style: 'label' },
+      ...(kinds.length
+        ? kinds.flatMap((k): Column[] => {
+            const need = kitCount(k, plan.equipmentNeeded[k]);
+            const has = ` (bag has ${plan.equipmentAvailable[k]})`;
+            const short = plan.equipmentAvailable[k] < plan.equipmentNeeded[k];
+            return [
+              box,
+              {
+                width: widthOf(need + has) + 6,
+                text: [need, { text: has, color: short ? '#b8342a' : '#7a857e' }],
+              },
+            ];
+          })
+        : [{ width: '*', text: 'No kit needed.' } as Column]),
+    ],
+  };
+}
+
+/** Cautions and warnings, two columns of them when there are several, then the standing safety note. */
 function closingBlock(plan: Plan): Content {
-  const kitRows: TableCell[][] = KIT_KEYS.filter((k) => plan.equipmentNeeded[k] > 0).map((k) => [
-    { canvas: [{ type: 'rect', x: 0, y: 1, w: 7, h: 7, lineWidth: 0.7, lineColor: '#3d6b47' }] },
-    { text: kitCount(k, plan.equipmentNeeded[k]) },
-    {
-      text: `bag has ${plan.equipmentAvailable[k]}`,
-      color: plan.equipmentAvailable[k] < plan.equipmentNeeded[k] ? '#b8342a' : '#7a857e',
-    },
-  ]);
   const notices = [...plan.cautions, ...plan.warnings].map((n) => ({
     text: [n.message, n.source ? { text: ` (${n.source})`, color: '#7a857e' } : ''],
   }));
+  const half = Math.ceil(notices.length / 2);
+  const list: Content =
+    notices.length > 2
+      ? {
+          columnGap: 12,
+          columns: [
+            { width: '*', ul: notices.slice(0, half) },
+            { width: '*', ul: notices.slice(half) },
+          ],
+        }
+      : { ul: notices };
   return {
     unbreakable: true,
     margin: [0, 4, 0, 0],
-    columnGap: 14,
-    columns: [
+    stack: [
+      { text: 'Cautions', style: 'phase', margin: [0, 0, 0, 2] },
+      ...(notices.length ? [list] : []),
       {
-        width: 150,
-        stack: [
-          { text: 'Kit checklist', style: 'phase', margin: [0, 0, 0, 2] },
-          kitRows.length
-            ? { table: { widths: [8, 'auto', '*'], body: kitRows }, layout: 'noBorders' }
-            : { text: 'No kit needed.' },
+        text: [
+          plan.cautions.some((c) => /anchor|weight/i.test(c.message)) ? '' : GOAL_SAFETY_NOTE + ' ',
+          STANDING_SAFETY_NOTE,
         ],
-      },
-      {
-        width: '*',
-        stack: [
-          { text: 'Cautions', style: 'phase', margin: [0, 0, 0, 2] },
-          ...(notices.length ? [{ ul: notices }] : []),
-          {
-            text: [
-              plan.cautions.some((c) => /anchor|weight/i.test(c.message)) ? '' : GOAL_SAFETY_NOTE + ' ',
-              STANDING_SAFETY_NOTE,
-            ],
-            margin: [0, 2, 0, 0],
-            italics: true,
-          },
-        ],
+        margin: [0, 2, 0, 0],
+        italics: true,
       },
     ],
   };
@@ -409,10 +781,36 @@ function cardLayout() {
   };
 }
 
-function sharesOneActivity(phase: Phase): boolean {
-  return (
-    phase.stations.length > 1 && phase.stations.every((s) => s.activityId === phase.stations[0].activityId)
-  );
+/**
+ * The phase this one carries on from across a drinks break (same activity, groups and places),
+ * so the card points back to it instead of printing it twice.
+ */
+function resumed(phase: Phase, before: Phase[]): Phase | null {
+  const last = before.at(-1);
+  const earlier = before.at(-2);
+  if (!last || !earlier || !isBreak(last)) return null;
+  const key = (p: Phase) =>
+    JSON.stringify(p.stations.map((s) => [s.activityId, s.playerIds, s.position, s.area, s.positions]));
+  return key(earlier) === key(phase) ? earlier : null;
+}
+
+function isBreak(phase: Phase): boolean {
+  return phase.activityKind === 'break';
+}
+
+/** "10:05–10:11" when the station's activity was explained in an earlier phase of the card, else null. */
+function shownBefore(station: Station, phase: Phase, ctx: CardContext): string | null {
+  const first = ctx.firstShown.get(station.activityId);
+  if (!first || first === phase) return null;
+  return `${minuteLabel(ctx.start, first.startMinute)}–${minuteLabel(ctx.start, first.endMinute)}`;
+}
+
+/** The phase's activities in station order, one station standing for each. */
+function distinctActivities(phase: Phase): Station[] {
+  const seen = new Map<string, Station>();
+  for (const station of phase.stations)
+    if (!seen.has(station.activityId)) seen.set(station.activityId, station);
+  return [...seen.values()];
 }
 
 function nameLookup(input: CardInput): (id: string) => string {

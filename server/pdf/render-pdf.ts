@@ -1,8 +1,19 @@
 import PdfPrinter from 'pdfmake';
 import { cardFonts } from './fonts';
-import { type CardInput, COMPACT, type Paper, planCardDefinition, REGULAR } from './plan-card';
+import {
+  type CardDensity,
+  type CardInput,
+  COMPACT,
+  type Paper,
+  planCardDefinition,
+  REGULAR,
+  SMALLEST,
+  TIGHT,
+} from './plan-card';
 
 const printer = new PdfPrinter(cardFonts);
+
+const DENSITIES: CardDensity[] = [REGULAR, COMPACT, TIGHT, SMALLEST];
 
 /**
  * Renders a plan's printed card to PDF bytes. A card that would run onto a second page is laid
@@ -10,8 +21,11 @@ const printer = new PdfPrinter(cardFonts);
  */
 export function renderPlanPdf(input: CardInput, paper: Paper = 'a4'): Promise<Buffer> {
   let pages = 0;
-  let doc = printer.createPdfKitDocument(planCardDefinition(input, paper, REGULAR, (n) => (pages = n)));
-  if (pages > 1) doc = printer.createPdfKitDocument(planCardDefinition(input, paper, COMPACT));
+  let doc!: PDFKit.PDFDocument;
+  for (const density of DENSITIES) {
+    doc = printer.createPdfKitDocument(planCardDefinition(input, paper, density, (n) => (pages = n)));
+    if (pages <= 1) break;
+  }
   return new Promise((resolve, reject) => {
     const chunks: Buffer[] = [];
     doc.on('data', (chunk: Buffer) => chunks.push(chunk));

@@ -1,73 +1,39 @@
-import type { GoalPlacement, Point, Station } from '../../shared/types';
+import type {
+  GoalPlacement,
+  MarkedLine,
+  Point,
+  PositionRole,
+  StartPosition,
+  Station,
+  Zone,
+} from '../../shared/types';
+import { MARKER_STYLE, POSITION_STYLE } from '../../shared/types/activity-words';
 import { CARD_FONT } from './fonts';
+import { printable } from './printable';
 
-/** Colours of the card's diagrams: grass, lines, kit and the three player roles. */
+/** The card's own inks for what the shared styles leave to each medium: grass, edges, labels. */
 const INK = {
-  grass: '#e9f2e3',
-  line: '#3d6b47',
-  cone: '#e8742a',
-  goal: '#2b2b2b',
-  attacker: '#21508f',
-  defender: '#b8342a',
-  goalkeeper: '#6b3d98',
+  grass: '#e3efdc',
+  edge: '#3d6b47',
   label: '#44524a',
 };
 
-export interface PlacedPlayer extends Point {
-  /** 1-based number printed in the circle and in the group list. */
-  number: number;
-  playerId: string;
-  role: 'attacker' | 'defender' | 'goalkeeper';
+/** What a card's legend can list: the start-position roles and the kit markers. */
+export type LegendKey = PositionRole | 'cone' | 'goal' | 'gate';
+
+/** The text in a start position's circle: the player's number in the group list, "C" for a coach. */
+export function positionLabel(station: Station, position: StartPosition): string {
+  if (position.role === 'coach') return 'C';
+  const index = station.playerIds.indexOf(position.id);
+  return index >= 0 ? String(index + 1) : '';
 }
 
-/** Where each role stands inside the area (station-local metres): defenders in the middle, the rest round the edge. */
-export function placePlayers(station: Station): PlacedPlayer[] {
-  const defenders = new Set(station.roles.defenders ?? []);
-  const keepers = new Set(station.roles.goalkeeper ?? []);
-  const { width, length } = station.area;
-  const outer = station.playerIds.filter((id) => !defenders.has(id) && !keepers.has(id));
-  const inner = station.playerIds.filter((id) => defenders.has(id));
-  const placed = new Map<string, PlacedPlayer>();
-  const numberOf = (id: string) => station.playerIds.indexOf(id) + 1;
-
-  outer.forEach((id, i) => {
-    const p = pointOnPerimeter(width, length, (i + 0.5) / Math.max(outer.length, 1));
-    placed.set(id, { ...p, number: numberOf(id), playerId: id, role: 'attacker' });
-  });
-  inner.forEach((id, i) => {
-    const angle = (2 * Math.PI * i) / Math.max(inner.length, 1);
-    const r = inner.length > 1 ? Math.min(width, length) * 0.15 : 0;
-    placed.set(id, {
-      x: width / 2 + r * Math.cos(angle),
-      y: length / 2 + r * Math.sin(angle),
-      number: numberOf(id),
-      playerId: id,
-      role: 'defender',
-    });
-  });
-  const goal = station.goalPositions?.find((g) => g.kind === 'goal');
-  [...keepers].forEach((id, i) => {
-    const at = goal
-      ? { x: goal.x - station.position.x, y: goal.y - station.position.y }
-      : { x: width / 2 + i * 1.5, y: 0.6 };
-    placed.set(id, { ...at, number: numberOf(id), playerId: id, role: 'goalkeeper' });
-  });
-  return station.playerIds.map((id) => placed.get(id)).filter((p): p is PlacedPlayer => !!p);
-}
-
-/** A point at fraction t (0–1) of the way round a rectangle's edge, starting bottom-left, inset a little. */
-function pointOnPerimeter(width: number, length: number, t: number): Point {
-  const inset = Math.min(width, length) * 0.12;
-  const w = width - 2 * inset;
-  const l = length - 2 * inset;
-  let d = t * 2 * (w + l);
-  if (d < w) return { x: inset + d, y: inset + l };
-  d -= w;
-  if (d < l) return { x: inset + w, y: inset + l - d };
-  d -= l;
-  if (d < w) return { x: inset + w - d, y: inset };
-  d -= w;
-  return { x: inset, y: inset + d };
+/** The roles and markers a station's diagram draws, for the card's legend. */
+export function diagramMarks(station: Station): Set<LegendKey> {
+  const marks = new Set<LegendKey>(station.positions.map((p) => p.role));
+  if (station.conePositions.length) marks.add('cone');
+  for (const goal of station.goalPositions ?? []) marks.add(goal.kind);
+  return marks;
 }
 
 export interface DiagramSize {
@@ -75,7 +41,11 @@ export interface DiagramSize {
   maxHeight: number;
 }
 
-/** The station drawn to scale as SVG in points: area, cones, goals or gates, numbered players, side lengths. */
+/**
+ * The station drawn to scale as SVG in points, from the engine's layout only: its area, marked
+ * zones and lines, goals and gates, cones, and everyone's start position numbered as in the
+ * group list. A plan stored before start positions existed draws without players.
+ */
 export function stationDiagramSvg(
   station: Station,
   size: DiagramSize,
@@ -84,51 +54,48 @@ export function stationDiagramSvg(
   const local = (p: Point): Point => ({ x: p.x - origin.x, y: p.y - origin.y });
   const cones = station.conePositions.map(local);
   const goals = (station.goalPositions ?? []).map((g) => ({ ...g, ...local(g) }));
-  const xs = [0, station.area.width, ...cones.map((c) => c.x), ...goals.map((g) => g.x)];
-  const ys = [0, station.area.length, ...cones.map((c) => c.y), ...goals.map((g) => g.y)];
+  const zones = (station.zones ?? []).map((z) => ({ ...z, ...local(z) }));
+  const lines = (station.lines ?? []).map((l) => ({ ...l, from: local(l.from), to: local(l.to) }));
+  const people = station.positions.map((p) => ({ ...p, ...local(p) }));
+  const points: Point[] = [
+    { x: 0, y: 0 },
+    { x: station.area.width, y: station.area.length },
+    ...cones,
+    ...goals,
+    ...people,
+    ...zones.flatMap((z) => [z, { x: z.x + z.width, y: z.y + z.length }]),
+    ...lines.flatMap((l) => [l.from, l.to]),
+  ];
   const margin = 2;
-  const minX = Math.min(...xs) - margin;
-  const minY = Math.min(...ys) - margin;
-  const spanX = Math.max(...xs) + margin - minX;
-  const spanY = Math.max(...ys) + margin - minY;
-  const scale = Math.min(size.maxWidth / spanX, size.maxHeight / spanY);
-  const width = round(spanX * scale);
-  const height = round(spanY * scale);
-  const px = (p: Point) => ({ x: round((p.x - minX) * scale), y: round((p.y - minY) * scale) });
-  const radius = Math.max(4, Math.min(7, scale * 0.7));
+  // A band above and left of the drawing for the side lengths, clear of cones on the edge.
+  const band = 6;
+  const minX = Math.min(...points.map((p) => p.x)) - margin;
+  const minY = Math.min(...points.map((p) => p.y)) - margin;
+  const spanX = Math.max(...points.map((p) => p.x)) + margin - minX;
+  const spanY = Math.max(...points.map((p) => p.y)) + margin - minY;
+  const scale = Math.min((size.maxWidth - band) / spanX, (size.maxHeight - band) / spanY);
+  const width = round(spanX * scale + band);
+  const height = round(spanY * scale + band);
+  const px = (p: Point) => ({ x: round((p.x - minX) * scale + band), y: round((p.y - minY) * scale + band) });
+  const radius = Math.max(3.2, Math.min(6, scale * 0.75));
 
   const parts: string[] = [];
   const corner = px({ x: 0, y: 0 });
+  const areaWidth = station.area.width * scale;
+  const areaLength = station.area.length * scale;
   parts.push(
-    `<rect x="${corner.x}" y="${corner.y}" width="${round(station.area.width * scale)}" height="${round(
-      station.area.length * scale,
-    )}" fill="${INK.grass}" stroke="${INK.line}" stroke-width="0.8"/>`,
+    `<rect x="${corner.x}" y="${corner.y}" width="${round(areaWidth)}" height="${round(areaLength)}" fill="${
+      INK.grass
+    }" stroke="${INK.edge}" stroke-width="0.8"/>`,
   );
-  parts.push(
-    text(corner.x + (station.area.width * scale) / 4, corner.y - 2, `${fmt(station.area.width)} m`, 5.5),
-  );
-  parts.push(
-    text(
-      corner.x - 2,
-      corner.y + (station.area.length * scale) / 2,
-      `${fmt(station.area.length)} m`,
-      5.5,
-      -90,
-    ),
-  );
+  parts.push(text(corner.x + areaWidth / 2, 4.6, `${fmt(station.area.width)} m`, 5));
+  parts.push(text(4.4, corner.y + areaLength / 2, `${fmt(station.area.length)} m`, 5, -90));
+  for (const zone of zones) parts.push(zoneSvg(zone, px(zone), scale));
+  for (const line of lines) parts.push(lineSvg(line, px(line.from), px(line.to)));
   for (const goal of goals) parts.push(goalSvg(goal, px(goal), scale));
   for (const cone of cones) parts.push(coneSvg(px(cone)));
-  for (const player of placePlayers(station)) {
-    const at = px(player);
-    parts.push(
-      `<circle cx="${at.x}" cy="${at.y}" r="${round(radius)}" fill="${INK[player.role]}" stroke="#ffffff" stroke-width="0.6"/>`,
-    );
-    parts.push(
-      `<text x="${at.x}" y="${round(at.y + radius * 0.38)}" font-family="${CARD_FONT}" font-weight="bold" font-size="${round(
-        radius * 1.15,
-      )}" fill="#ffffff" text-anchor="middle">${player.number}</text>`,
-    );
-  }
+  for (const person of people)
+    parts.push(personSvg(person, positionLabel(station, person), px(person), radius));
   return {
     svg: `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}">${parts.join('')}</svg>`,
     width,
@@ -136,23 +103,62 @@ export function stationDiagramSvg(
   };
 }
 
+/** One legend symbol, as the diagrams draw it, in a box of `size` points. */
+export function legendSymbolSvg(key: LegendKey, size = 8): string {
+  const c = size / 2;
+  let body: string;
+  if (key === 'cone') body = coneSvg({ x: c, y: c + 0.4 });
+  else if (key === 'goal' || key === 'gate')
+    body = goalSvg({ x: c, y: c + 1.5, facing: 0, kind: key }, { x: c, y: c + 1.5 }, 2.4);
+  else body = personSvg({ id: '', role: key, x: c, y: c }, '', { x: c, y: c }, c - 0.6);
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="${size}" height="${size}">${body}</svg>`;
+}
+
+function personSvg(position: StartPosition, label: string, at: Point, radius: number): string {
+  const style = POSITION_STYLE[position.role];
+  // A white circle (the coach) needs a dark rim to show on grass and paper.
+  const rim = position.role === 'coach' ? style.text : '#ffffff';
+  const circle = `<circle cx="${at.x}" cy="${at.y}" r="${round(radius)}" fill="${style.fill}" stroke="${rim}" stroke-width="0.6"/>`;
+  if (!label) return circle;
+  const fontSize = round(radius * (label.length > 1 ? 1.05 : 1.2));
+  return `${circle}<text x="${at.x}" y="${round(at.y + fontSize * 0.35)}" font-family="${CARD_FONT}" font-weight="bold" font-size="${fontSize}" fill="${
+    style.text
+  }" text-anchor="middle">${escapeXml(label)}</text>`;
+}
+
+function zoneSvg(zone: Zone, at: Point, scale: number): string {
+  const w = round(zone.width * scale);
+  const h = round(zone.length * scale);
+  const rect = `<rect x="${at.x}" y="${at.y}" width="${w}" height="${h}" fill="${MARKER_STYLE.zone}" stroke="${
+    INK.edge
+  }" stroke-width="0.4" stroke-dasharray="1.5,1"/>`;
+  const fontSize = Math.min(4.5, Math.max(3, h * 0.6));
+  return `${rect}${text(at.x + w / 2, at.y + h / 2 + fontSize * 0.35, zone.label, fontSize)}`;
+}
+
+/** A painted line: white as on grass, with a thin dark edge so it shows on a pale card. */
+function lineSvg(line: MarkedLine, from: Point, to: Point): string {
+  const d = `x1="${from.x}" y1="${from.y}" x2="${to.x}" y2="${to.y}"`;
+  return `<line ${d} stroke="${INK.edge}" stroke-width="1.6"/><line ${d} stroke="${MARKER_STYLE.line}" stroke-width="0.8"/>`;
+}
+
 function coneSvg(at: Point): string {
-  const s = 2.6;
+  const s = 2.4;
   return `<polygon points="${at.x},${round(at.y - s)} ${round(at.x + s)},${round(at.y + s * 0.8)} ${round(
     at.x - s,
-  )},${round(at.y + s * 0.8)}" fill="${INK.cone}"/>`;
+  )},${round(at.y + s * 0.8)}" fill="${MARKER_STYLE.cone}"/>`;
 }
 
 /** A small goal as a frame open towards `facing`; a gate as two cones with a dashed line between. */
 function goalSvg(goal: GoalPlacement, at: Point, scale: number): string {
-  const half = Math.max(4, scale * (goal.kind === 'goal' ? 1 : 0.75));
-  const depth = Math.max(2.5, scale * 0.6);
+  const half = Math.max(3, scale * (goal.kind === 'goal' ? 1 : 0.75));
+  const depth = Math.max(2, scale * 0.6);
   // facing 0 = mouth along +y (down the page); rotate the drawing about the goal's centre.
   const rotate = `rotate(${round(-goal.facing)} ${at.x} ${at.y})`;
   if (goal.kind === 'gate') {
     return `<g transform="${rotate}"><line x1="${round(at.x - half)}" y1="${at.y}" x2="${round(at.x + half)}" y2="${
       at.y
-    }" stroke="${INK.cone}" stroke-width="0.7" stroke-dasharray="1.5,1.5"/>${coneSvg({
+    }" stroke="${MARKER_STYLE.gate}" stroke-width="0.7" stroke-dasharray="1.5,1.5"/>${coneSvg({
       x: round(at.x - half),
       y: at.y,
     })}${coneSvg({ x: round(at.x + half), y: at.y })}</g>`;
@@ -160,15 +166,15 @@ function goalSvg(goal: GoalPlacement, at: Point, scale: number): string {
   return `<g transform="${rotate}"><path d="M ${round(at.x - half)} ${at.y} L ${round(at.x - half)} ${round(
     at.y - depth,
   )} L ${round(at.x + half)} ${round(at.y - depth)} L ${round(at.x + half)} ${at.y}" fill="none" stroke="${
-    INK.goal
+    MARKER_STYLE.goal
   }" stroke-width="1.4"/></g>`;
 }
 
 function text(x: number, y: number, content: string, size: number, rotate = 0, anchor = 'middle'): string {
   const transform = rotate ? ` transform="rotate(${rotate} ${round(x)} ${round(y)})"` : '';
-  return `<text x="${round(x)}" y="${round(y)}" font-family="${CARD_FONT}" font-size="${size}" fill="${
+  return `<text x="${round(x)}" y="${round(y)}" font-family="${CARD_FONT}" font-size="${round(size)}" fill="${
     INK.label
-  }" text-anchor="${anchor}"${transform}>${escapeXml(content)}</text>`;
+  }" text-anchor="${anchor}"${transform}>${escapeXml(printable(content))}</text>`;
 }
 
 function escapeXml(value: string): string {

@@ -5,6 +5,7 @@ import { healthRouter } from './health';
 import { invitationsRouter } from './invitations';
 import { kitRouter } from './kit';
 import { membersRouter } from './members';
+import { pinnedActivitiesRouter } from './pinned-activities';
 import { planActivityRouter } from './plan-activity';
 import { plansRouter } from './plans';
 import { playersRouter } from './players';
@@ -24,6 +25,7 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(teamsRouter(deps));
   api.use(playersRouter(deps));
   api.use(kitRouter(deps));
+  api.use(pinnedActivitiesRouter(deps));
   api.use(plansRouter(deps));
   api.use(planActivityRouter(deps));
   api.use(ruleSetsRouter(deps));

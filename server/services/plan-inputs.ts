@@ -23,11 +23,15 @@ export interface PlanInputs {
   team: Team;
   roster: RosterEntry[];
   recentFeedback: FeedbackFact[];
+  /** Activities of the team's latest plans, newest plan first, each once (no drinks breaks). */
+  recentActivityIds: string[];
+  /** What the team's staff pinned for this plan. */
+  pinnedActivityIds: string[];
   rules: RuleSetDocument;
 }
 
 interface InputsRow {
-  team: { id: string; clubId: string; name: string } | null;
+  team: { id: string; clubId: string; name: string; pinnedActivityIds: string[] } | null;
   attached: boolean;
   roster: RosterEntry[];
   feedback: {
@@ -37,14 +41,23 @@ interface InputsRow {
     areaLength: number | null;
     groupSize: number | null;
   }[];
+  recentActivityIds: string[];
   rules: RuleSetRevision | null;
 }
 
-// One round trip instead of five: every part is limited to the caller's club (the feedback by a
-// team that must be the club's), and nothing is returned until the access check has passed.
+/** How many of the team's latest plans count as "lately" for variety. */
+export const RECENT_PLANS_FOR_VARIETY = 3;
+/** The plan-request schema's limit on recentActivityIds. */
+const MAX_RECENT_ACTIVITY_IDS = 60;
+
+// One round trip instead of six: every part is limited to the caller's club (the feedback and
+// plans by a team that must be the club's), and nothing is returned until the access check has
+// passed. The recent activities are read out of the team's last plans in plan, phase and station
+// order, each kept at its first (newest) place.
 const PLAN_INPUTS_SQL = `
 SELECT
-  (SELECT json_build_object('id', t.id, 'clubId', t."clubId", 'name', t.name)
+  (SELECT json_build_object('id', t.id, 'clubId', t."clubId", 'name', t.name,
+                            'pinnedActivityIds', t."pinnedActivityIds")
      FROM team t WHERE t.id = $1 AND t."clubId" = $2) AS team,
   EXISTS (SELECT 1 FROM team_coach tc WHERE tc."teamId" = $1 AND tc."userId" = $3) AS attached,
   (SELECT coalesce(json_agg(json_build_object('id', p.id, 'displayName', p."displayName",
@@ -57,19 +70,31 @@ SELECT
      FROM (SELECT * FROM feedback
             WHERE "teamId" = $1 AND "clubId" = $2
             ORDER BY "createdAt" DESC LIMIT $4) f) AS feedback,
+  (SELECT coalesce(json_agg(a.id ORDER BY a.at), '[]'::json)
+     FROM (SELECT st.station->>'activityId' AS id, min(ARRAY[p.n, ph.i, st.i]) AS at
+             FROM (SELECT sp.plan, row_number() OVER (ORDER BY sp."createdAt" DESC, sp.id) AS n
+                     FROM session_plan sp
+                    WHERE sp."teamId" = $1 AND sp."clubId" = $2
+                    ORDER BY sp."createdAt" DESC, sp.id LIMIT $5) p
+            CROSS JOIN LATERAL json_array_elements(p.plan->'phases') WITH ORDINALITY AS ph(phase, i)
+            CROSS JOIN LATERAL json_array_elements(ph.phase->'stations') WITH ORDINALITY AS st(station, i)
+            WHERE st.station->>'activityId' IS NOT NULL AND st.station->>'activityId' <> 'drinks-break'
+            GROUP BY 1) a) AS "recentActivityIds",
   (SELECT json_build_object('id', r.id, 'version', r.version, 'revision', r.revision)
      FROM rule_set r WHERE r."clubId" = $2 AND r.status = 'published'
      ORDER BY r.version DESC LIMIT 1) AS rules`;
 
 /**
  * The team (404 outside the club, 403 when the caller may not plan for it), its roster, its
- * latest station verdicts and the club's published rules (the engine's default when none).
+ * latest station verdicts, the activities of its latest plans, its pins and the club's published
+ * rules (the engine's default when none).
  */
 export async function loadPlanInputs(
   manager: EntityManager,
   scope: ClubScope,
   teamId: string,
   feedbackLimit: number,
+  recentPlans = RECENT_PLANS_FOR_VARIETY,
 ): Promise<PlanInputs> {
   if (!UUID.test(teamId)) throw notFound('team');
   const rows = await preparedQuery<InputsRow>(manager, 'plan-inputs', PLAN_INPUTS_SQL, [
@@ -77,9 +102,13 @@ export async function loadPlanInputs(
     scope.clubId,
     scope.auth.userId,
     feedbackLimit,
+    recentPlans,
   ]);
   const row = rows[0]!;
   const team = scope.assertManageable(row.team ? Object.assign(new Team(), row.team) : null, row.attached);
+  const recentActivityIds = row.recentActivityIds
+    .filter((id) => /^[a-z0-9][a-z0-9-]*$/.test(id) && id.length <= 64)
+    .slice(0, MAX_RECENT_ACTIVITY_IDS);
   const recentFeedback: FeedbackFact[] = row.feedback
     .filter((f) => f.activityKind)
     .map((f) => ({
@@ -90,7 +119,14 @@ export async function loadPlanInputs(
       ...(f.groupSize !== null ? { groupSize: f.groupSize } : {}),
     }));
   const rules = row.rules ? await publishedDocument(manager, scope.clubId, row.rules) : defaultRules();
-  return { team, roster: row.roster, recentFeedback, rules };
+  return {
+    team,
+    roster: row.roster,
+    recentFeedback,
+    recentActivityIds,
+    pinnedActivityIds: team.pinnedActivityIds ?? [],
+    rules,
+  };
 }
 
 /** The published rules: from the cache when this revision is known, else read (about 46 kB) once. */

@@ -62,14 +62,10 @@ export class PlanService {
     const scope = new ClubScope(manager, auth);
     const requestErrors = engine.planRequestErrors(input.request);
     if (requestErrors.length) throw badRequest('The plan request is not valid.', requestErrors);
-    // Team, access, roster, feedback and rules in one round trip.
-    const { team, roster, recentFeedback, rules } = await loadPlanInputs(
-      manager,
-      scope,
-      input.teamId,
-      RECENT_FEEDBACK_LIMIT,
-    );
-    const request = requestWithRoster(input.request, roster, recentFeedback);
+    // Team, access, roster, feedback, recent activities, pins and rules in one round trip.
+    const inputs = await loadPlanInputs(manager, scope, input.teamId, RECENT_FEEDBACK_LIMIT);
+    const { team, roster, rules } = inputs;
+    const request = requestWithRoster(input.request, roster, inputs);
     const plan = await engine.generatePlan(request, rules);
     // A plain entity: the repository's create() would walk the 22 kB plan for nothing.
     const row = Object.assign(new SessionPlan(), {
@@ -82,7 +78,9 @@ export class PlanService {
       ...planColumns(plan),
     });
     const texts: PlanTexts = { request: JSON.stringify(row.request), plan: JSON.stringify(row.plan) };
-    await insertPlanRow(manager, row, texts);
+    // The team's pins are for its next plan: this one took them, so they come off with its INSERT.
+    const tookPins = !input.request.pinnedActivityIds && inputs.pinnedActivityIds.length > 0;
+    await insertPlanRow(manager, row, texts, tookPins ? inputs.pinnedActivityIds : null);
     return { id: row.id, version: row.version, json: sessionPlanJson(row, team.name, texts) };
   }
 
@@ -189,21 +187,30 @@ INSERT INTO session_plan ("clubId", "teamId", "date", "kickOff", "status", "auth
                           "playerCount", "request", "plan", "ruleSetId", "ruleSetVersion", "seed", "version")
 VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10::json, $11::json, $12, $13, $14, 1)
 RETURNING id, "createdAt", "updatedAt", version`;
+// One statement, so one transaction: the plan is stored and the team's pins it took are cleared,
+// or neither. Pins changed since they were read stay for the next plan.
+const INSERT_PLAN_CLEAR_PINS_SQL = `
+WITH unpinned AS (
+  UPDATE team SET "pinnedActivityIds" = '{}'
+   WHERE id = $2 AND "clubId" = $1 AND "pinnedActivityIds" = $15::varchar[]
+)${INSERT_PLAN_SQL}`;
 
 /**
  * One INSERT … RETURNING for a new plan row, filling in its id, timestamps and version: a single
  * new row needs no wrapping transaction or reload, and plain SQL skips the query builder's
- * per-call work on two large JSON columns.
+ * per-call work on two large JSON columns. With `clearPins`, the same statement takes those pins
+ * off the plan's team.
  */
 export async function insertPlanRow(
   manager: EntityManager,
   row: SessionPlan,
   texts: PlanTexts,
+  clearPins: string[] | null = null,
 ): Promise<void> {
   const rows = await preparedQuery<Pick<SessionPlan, 'id' | 'createdAt' | 'updatedAt' | 'version'>>(
     manager,
-    'insert-plan',
-    INSERT_PLAN_SQL,
+    clearPins ? 'insert-plan-clear-pins' : 'insert-plan',
+    clearPins ? INSERT_PLAN_CLEAR_PINS_SQL : INSERT_PLAN_SQL,
     [
       row.clubId,
       row.teamId,
@@ -219,6 +226,7 @@ export async function insertPlanRow(
       row.ruleSetId,
       row.ruleSetVersion,
       row.seed,
+      ...(clearPins ? [clearPins] : []),
     ],
   );
   Object.assign(row, rows[0]);
@@ -251,14 +259,21 @@ export function violationsProblem(violations: engine.Violation[]): DetailedProbl
   );
 }
 
+/** What the team's history adds to a request that does not bring its own. */
+export interface TeamHistory {
+  recentFeedback: FeedbackFact[];
+  recentActivityIds: string[];
+  pinnedActivityIds: string[];
+}
+
 /**
- * The request with names and goalkeeper flags from the roster (400 naming each stranger) and the
- * team's recent feedback, unless the request brings its own.
+ * The request with names and goalkeeper flags from the roster (400 naming each stranger), and the
+ * team's recent feedback, recent activities and pins wherever the request brings none of its own.
  */
 export function requestWithRoster(
   request: PlanRequest,
   roster: Pick<Player, 'id' | 'displayName' | 'goalkeeper'>[],
-  recent: FeedbackFact[],
+  history: TeamHistory,
 ): PlanRequest {
   const byId = new Map(roster.map((p) => [p.id, p]));
   const errors: FieldError[] = [];
@@ -271,6 +286,14 @@ export function requestWithRoster(
     return { id: p.id, name: known.displayName, goalkeeper: p.goalkeeper ?? known.goalkeeper };
   });
   if (errors.length) throw badRequest('Some players are not in this team.', errors);
-  const recentFeedback = request.recentFeedback ?? recent;
-  return { ...request, players, ...(recentFeedback.length ? { recentFeedback } : {}) };
+  const recentFeedback = request.recentFeedback ?? history.recentFeedback;
+  const recentActivityIds = request.recentActivityIds ?? history.recentActivityIds;
+  const pinnedActivityIds = request.pinnedActivityIds ?? history.pinnedActivityIds;
+  return {
+    ...request,
+    players,
+    ...(recentFeedback.length ? { recentFeedback } : {}),
+    ...(recentActivityIds.length ? { recentActivityIds } : {}),
+    ...(pinnedActivityIds.length ? { pinnedActivityIds } : {}),
+  };
 }

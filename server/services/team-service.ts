@@ -24,7 +24,7 @@ interface TeamListRow extends Omit<TeamDto, 'usualSpace'> {
 // The home page's list in one round trip: the club's teams (an assistant's own only) with their
 // staff and active-player counts, in the order toDtos gives.
 const TEAM_LIST_SQL = `
-SELECT t.id, t.name, t."ageGroup", t.level, t."spaceWidth", t."spaceLength",
+SELECT t.id, t.name, t."ageGroup", t.level, t."spaceWidth", t."spaceLength", t."pinnedActivityIds",
        coalesce((SELECT array_agg(tc."userId"::text ORDER BY tc."userId")
                    FROM team_coach tc WHERE tc."teamId" = t.id), '{}'::text[]) AS "coachIds",
        (SELECT count(*)::int FROM player p WHERE p."teamId" = t.id AND p.active) AS "playerCount"
@@ -154,6 +154,7 @@ export class TeamService {
       usualSpace: { width: team.spaceWidth, length: team.spaceLength },
       coachIds: byTeam.get(team.id)?.coachIds ?? [],
       playerCount: Number(byTeam.get(team.id)?.playerCount ?? 0),
+      pinnedActivityIds: team.pinnedActivityIds ?? [],
     }));
   }
 }

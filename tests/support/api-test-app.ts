@@ -36,9 +36,15 @@ export function testConfig(overrides: Partial<AppConfig> = {}): AppConfig {
   });
 }
 
-/** The app on the test database (inject('databaseUrl')), listening on a free loopback port. */
-export async function startTestApp(overrides: Partial<AppConfig> = {}): Promise<TestApp> {
-  const dataSource = createDataSource({ url: inject('databaseUrl'), poolSize: 5 });
+/**
+ * The app on the test database (inject('databaseUrl'), or another database of the same cluster),
+ * listening on a free loopback port.
+ */
+export async function startTestApp(
+  overrides: Partial<AppConfig> = {},
+  databaseUrl: string = inject('databaseUrl'),
+): Promise<TestApp> {
+  const dataSource = createDataSource({ url: databaseUrl, poolSize: 5 });
   await dataSource.initialize();
   const config = testConfig(overrides);
   const http = await startHttpServer({ dataSource, config, port: 0, logger: pino({ level: 'silent' }) });
