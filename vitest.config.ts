@@ -8,6 +8,7 @@ export default defineConfig({
         test: {
           name: 'engine',
           environment: 'node',
+          setupFiles: ['tests/support/fast-check-seed.ts'],
           include: [
             'engine/**/*.spec.ts',
             'shared/**/*.spec.ts',
@@ -21,6 +22,7 @@ export default defineConfig({
         test: {
           name: 'api',
           environment: 'node',
+          setupFiles: ['tests/support/fast-check-seed.ts'],
           include: ['server/**/*.spec.ts', 'tests/api/**/*.spec.ts'],
           globalSetup: ['tests/support/api-global-setup.ts'],
           // Property tests send hundreds of requests; a loaded CI machine needs the headroom.

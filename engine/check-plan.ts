@@ -2,7 +2,15 @@
  * Re-checks a plan (typically after a coach's edit) against the rules a fresh plan keeps, and
  * returns each problem as a notice in a coach's words.
  */
-import type { Equipment, Notice, Phase, Plan, RuleParameters, RuleSetDocument, Station } from '../shared/types';
+import type {
+  Equipment,
+  Notice,
+  Phase,
+  Plan,
+  RuleParameters,
+  RuleSetDocument,
+  Station,
+} from '../shared/types';
 import { GAME_LIKE_KINDS } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
 import { gapBetween, insideSpace, overlaps, rectOf } from './geometry';
@@ -13,7 +21,12 @@ import { keepersAtOnce } from './planning/markings';
 import { defaultRuleSet } from './rule-sets';
 
 const KIT: (keyof Equipment)[] = ['balls', 'cones', 'bibs', 'goals'];
-const KIT_WORDS: Record<keyof Equipment, string> = { balls: 'balls', cones: 'cones', bibs: 'bibs', goals: 'goals' };
+const KIT_WORDS: Record<keyof Equipment, string> = {
+  balls: 'balls',
+  cones: 'cones',
+  bibs: 'bibs',
+  goals: 'goals',
+};
 
 export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet): Notice[] {
   const params = effectiveParameters(compileRuleSet(ruleSet).document.parameters, plan.request);
@@ -21,7 +34,9 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
   const request = plan.request;
   const allowed = params.ageGroups[request.ageGroup].allowedKinds;
   const forbidden = plan.forbiddenActivities ?? [];
-  const cold = request.conditions?.temperatureC !== undefined && request.conditions.temperatureC <= params.cautions.coldC;
+  const cold =
+    request.conditions?.temperatureC !== undefined &&
+    request.conditions.temperatureC <= params.cautions.coldC;
   const maxStations = params.supervision.stationsPerAdult * Math.max(1, request.coaches);
   let expectedStart = 0;
   let keepersWarm = false;
@@ -42,13 +57,22 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
     for (const s of phase.stations) {
       for (const id of s.playerIds) {
         const other = seen.get(id);
-        if (other) notices.push({ code: 'player-twice', message: `${label}: ${nameOf(plan, id)} is in two groups (${other} and ${stationName(phase, s)}).` });
+        if (other)
+          notices.push({
+            code: 'player-twice',
+            message: `${label}: ${nameOf(plan, id)} is in two groups (${other} and ${stationName(phase, s)}).`,
+          });
         else seen.set(id, stationName(phase, s));
-        if (!roster.has(id)) notices.push({ code: 'player-unknown', message: `${where(s)}: ${nameOf(plan, id)} is not here today.` });
+        if (!roster.has(id))
+          notices.push({
+            code: 'player-unknown',
+            message: `${where(s)}: ${nameOf(plan, id)} is not here today.`,
+          });
       }
     }
     for (const id of roster) {
-      if (!seen.has(id)) notices.push({ code: 'player-missing', message: `${label}: ${nameOf(plan, id)} is in no group.` });
+      if (!seen.has(id))
+        notices.push({ code: 'player-missing', message: `${label}: ${nameOf(plan, id)} is in no group.` });
     }
     if (phase.stations.length > maxStations) {
       notices.push({
@@ -59,21 +83,35 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
     const rects = phase.stations.map((s) => rectOf(s.position, s.area));
     phase.stations.forEach((s, i) => {
       if (!insideSpace(rects[i], request.space)) {
-        notices.push({ code: 'station-outside-space', message: `${where(s)} goes outside the ${request.space.width} × ${request.space.length} m space.` });
+        notices.push({
+          code: 'station-outside-space',
+          message: `${where(s)} goes outside the ${request.space.width} × ${request.space.length} m space.`,
+        });
       }
       for (let j = i + 1; j < rects.length; j++) {
         if (overlaps(rects[i], rects[j])) {
-          notices.push({ code: 'stations-overlap', message: `${label}: ${stationName(phase, s)} and ${stationName(phase, phase.stations[j])} overlap.` });
+          notices.push({
+            code: 'stations-overlap',
+            message: `${label}: ${stationName(phase, s)} and ${stationName(phase, phase.stations[j])} overlap.`,
+          });
         } else if (gapBetween(rects[i], rects[j]) < Math.min(params.layout.bufferM, 0.5) - 1e-6) {
-          notices.push({ code: 'stations-too-close', message: `${label}: ${stationName(phase, s)} and ${stationName(phase, phase.stations[j])} have no room between them.` });
+          notices.push({
+            code: 'stations-too-close',
+            message: `${label}: ${stationName(phase, s)} and ${stationName(phase, phase.stations[j])} have no room between them.`,
+          });
         }
       }
       if (!allowed.includes(s.activityKind)) {
-        notices.push({ code: 'activity-not-for-age', message: `${where(s)}: ${s.title} is not in the club's activities for ${request.ageGroup}.` });
+        notices.push({
+          code: 'activity-not-for-age',
+          message: `${where(s)}: ${s.title} is not in the club's activities for ${request.ageGroup}.`,
+        });
       }
       // The rules that forbid were run for today's squad: a phase played before someone left
       // ran with the squad of then.
-      const ruled = forbidden.find((f) => f.activityId === s.activityId || (!f.activityId && f.kind === s.activityKind));
+      const ruled = forbidden.find(
+        (f) => f.activityId === s.activityId || (!f.activityId && f.kind === s.activityKind),
+      );
       if (ruled && phase.endMinute > lastChange) {
         notices.push({ code: 'activity-forbidden', message: `${where(s)}: ${s.title} — ${ruled.reason}` });
       }
@@ -83,12 +121,18 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
     for (const key of KIT) {
       const used = phase.stations.reduce((sum, s) => sum + s.equipment[key], 0);
       if (used > request.equipment[key]) {
-        notices.push({ code: 'kit-over', message: `${label} uses ${used} ${KIT_WORDS[key]}; the bag has ${request.equipment[key]}.` });
+        notices.push({
+          code: 'kit-over',
+          message: `${label} uses ${used} ${KIT_WORDS[key]}; the bag has ${request.equipment[key]}.`,
+        });
       }
     }
   });
   if (expectedStart !== request.minutes) {
-    notices.push({ code: 'minutes-mismatch', message: `The phases cover ${expectedStart} minutes; the session has ${request.minutes}.` });
+    notices.push({
+      code: 'minutes-mismatch',
+      message: `The phases cover ${expectedStart} minutes; the session has ${request.minutes}.`,
+    });
   }
   return notices;
 }
@@ -106,10 +150,21 @@ function stationNotices(
   const keepers = s.roles.goalkeeper ?? [];
   const goals = (s.goalPositions ?? []).filter((g) => g.kind === 'goal').length;
   if (keepersAtOnce(s) > goals) {
-    out.push({ code: 'keeper-without-goal', message: `${where}: a goalkeeper is placed where there is no real goal.` });
+    out.push({
+      code: 'keeper-without-goal',
+      message: `${where}: a goalkeeper is placed where there is no real goal.`,
+    });
   }
-  if (keepers.length && kindModule(s.activityKind).facesShots && !keepersWarm && s.activityKind !== 'goalkeeping') {
-    out.push({ code: 'keeper-not-warm', message: `${where}: the goalkeeper faces shots before their own warm-up.` });
+  if (
+    keepers.length &&
+    kindModule(s.activityKind).facesShots &&
+    !keepersWarm &&
+    s.activityKind !== 'goalkeeping'
+  ) {
+    out.push({
+      code: 'keeper-not-warm',
+      message: `${where}: the goalkeeper faces shots before their own warm-up.`,
+    });
   }
   if (GAME_LIKE_KINDS.includes(s.activityKind)) out.push(...sideNotices(plan, params, s, where));
   if (s.activityKind === 'keep-ball') out.push(...keepBallNotices(plan, params, s, where));
@@ -133,12 +188,18 @@ function sideNotices(plan: Plan, params: RuleParameters, s: Station, where: stri
   const outA = teams[0].filter((id) => !keepers.has(id)).length;
   const outB = teams[1].filter((id) => !keepers.has(id)).length;
   if (Math.abs(outA - outB) > 1) {
-    out.push({ code: 'sides-uneven', message: `${where}: sides of ${outA} and ${outB} outfield players differ by more than one.` });
+    out.push({
+      code: 'sides-uneven',
+      message: `${where}: sides of ${outA} and ${outB} outfield players differ by more than one.`,
+    });
   }
   const kA = teams[0].filter((id) => keepers.has(id)).length;
   const kB = teams[1].filter((id) => keepers.has(id)).length;
   if (kA !== kB || kA > 1) {
-    out.push({ code: 'keepers-uneven', message: `${where}: one goalkeeper a side or none, so the game stays even.` });
+    out.push({
+      code: 'keepers-uneven',
+      message: `${where}: one goalkeeper a side or none, so the game stays even.`,
+    });
   }
   if (s.activityKind === 'small-sided-game') {
     const format = params.gameFormats[params.ageGroups[plan.request.ageGroup].band];
@@ -150,7 +211,10 @@ function sideNotices(plan: Plan, params: RuleParameters, s: Station, where: stri
       });
     }
     if (!format.goalkeepers && keepers.size) {
-      out.push({ code: 'keepers-not-at-age', message: `${where}: games at ${plan.request.ageGroup} have no goalkeepers.` });
+      out.push({
+        code: 'keepers-not-at-age',
+        message: `${where}: games at ${plan.request.ageGroup} have no goalkeepers.`,
+      });
     }
   }
   return out;

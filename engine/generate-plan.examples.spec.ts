@@ -71,18 +71,31 @@ describe('worked examples', () => {
     expect(note?.source).toMatch(/US Soccer/);
   });
 
-  it('14 U10s with two keepers: the keepers warm up in their own station, then stand in the two real goals of the finishing groups', async () => {
+  it('14 U10s with two keepers: the keepers warm up in their own station, then stand in real goals with a keeper each end or one each group', async () => {
     const plan = await generatePlan(
       request(14, { minutes: 25, equipment: { balls: 14, cones: 50, bibs: 10, goals: 4 } }, 2),
     );
-    const finishing = playing(plan).findIndex((p) => p.activityKind === 'passing-finishing');
-    const warmUps = playing(plan).findIndex((p) => p.stations.some((s) => s.activityKind === 'goalkeeping'));
-    expect(warmUps).toBeGreaterThanOrEqual(0);
-    expect(warmUps).toBeLessThan(finishing);
-    const keeperStations = playing(plan)[finishing].stations.filter((s) => s.roles.goalkeeper?.length);
-    // One keeper a finishing group, each in a real goal: 2 of the 4 goals.
-    expect(keeperStations).toHaveLength(2);
-    for (const s of keeperStations) expect(s.goalPositions!.filter((g) => g.kind === 'goal')).toHaveLength(1);
+    const phases = playing(plan);
+    const warmUp = phases.findIndex((p) => p.stations.some((s) => s.activityKind === 'goalkeeping'));
+    const inGoal = phases.findIndex((p) =>
+      p.stations.some((s) => s.activityKind !== 'goalkeeping' && s.roles.goalkeeper?.length),
+    );
+    expect(warmUp).toBeGreaterThanOrEqual(0);
+    expect(inGoal).toBeGreaterThan(warmUp);
+    for (const p of phases.slice(inGoal)) {
+      for (const s of p.stations.filter(
+        (x) => x.roles.goalkeeper?.length && x.activityKind !== 'goalkeeping',
+      )) {
+        // Every keeper in goal has a real goal of their own.
+        expect(s.goalPositions!.filter((g) => g.kind === 'goal').length).toBeGreaterThanOrEqual(
+          s.roles.goalkeeper!.length,
+        );
+        if (s.roles.teams) expect(s.roles.goalkeeper).toHaveLength(2);
+      }
+    }
+    // With two keepers and goals, the last game before kick-off has a keeper each end.
+    const lastGame = phases.filter((p) => p.activityKind === 'small-sided-game').at(-1);
+    if (lastGame) expect(lastGame.stations[0].roles.goalkeeper).toHaveLength(2);
     // A keeper's touches are a keeper's (handling and saves), well under an outfield player's.
     const outfield = Object.entries(plan.touches)
       .filter(([id]) => !['p1', 'p2'].includes(id))

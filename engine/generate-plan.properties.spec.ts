@@ -125,9 +125,9 @@ describe('session shapes (common practice; U6–U8 format from US Soccer Player 
   }, 60_000);
 
   it('U9–U12 match warm-ups start on the ball; U13 and older start with movement preparation and end with speed or a short game', async () => {
-    const warmUps = everyday.filter(
-      (r) => r.kind === 'match-warm-up' && r.minutes >= 20 && band(r) !== 'U6-U8',
-    );
+    const warmUps = everyday
+      .filter((r) => r.kind === 'match-warm-up' && r.minutes >= 20 && band(r) !== 'U6-U8')
+      .map(roomy);
     await fc.assert(
       fc.asyncProperty(warmUps, async (request) => {
         const plan = await generatePlan(request);
@@ -228,7 +228,11 @@ describe('games (US Soccer Player Development Initiatives, 2016: 4v4 U6–U8, 7v
       .filter(
         (r) => r.kind === 'training' && band(r) !== 'U6-U8' && r.equipment.goals >= 4 && r.minutes >= 45,
       )
-      .map((r) => ({ ...r, space: { width: 60, length: 90 } }));
+      .map((r) => ({
+        ...r,
+        space: { width: 60, length: 90 },
+        players: r.players.map((p, i) => ({ id: p.id, ...(i < 2 ? { goalkeeper: true } : {}) })),
+      }));
     await fc.assert(
       fc.asyncProperty(oneGame, async (request) => {
         const plan = await generatePlan(request);
@@ -347,14 +351,12 @@ describe('variety and pins', () => {
       );
       // Keepers away at their own warm-up can leave a pinned phase short of players: tested apart.
       const outfield = request.players.map((p) => ({ id: p.id }));
-      return fc
-        .constantFrom(...fit)
-        .map((o) => ({
-          ...roomy(request),
-          players: outfield,
-          pinnedActivityIds: [o.id],
-          conditions: undefined,
-        }));
+      return fc.constantFrom(...fit).map((o) => ({
+        ...roomy(request),
+        players: outfield,
+        pinnedActivityIds: [o.id],
+        conditions: undefined,
+      }));
     });
     await fc.assert(
       fc.asyncProperty(withPin, async (request) => {

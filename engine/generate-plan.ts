@@ -31,7 +31,10 @@ export class PlanRequestError extends Error {
   }
 }
 
-export async function generatePlan(request: PlanRequest, ruleSet: RuleSetDocument = defaultRuleSet): Promise<Plan> {
+export async function generatePlan(
+  request: PlanRequest,
+  ruleSet: RuleSetDocument = defaultRuleSet,
+): Promise<Plan> {
   const validation = validatePlanRequest(request);
   if (!validation.ok) throw new PlanRequestError(validation.errors);
   const compiled = compileRuleSet(ruleSet);
@@ -46,7 +49,9 @@ export async function generatePlan(request: PlanRequest, ruleSet: RuleSetDocumen
     ctx.trace.push({
       ruleId: 'engine.theme',
       fired: true,
-      effect: req.focus?.length ? `theme: ${theme} (the coach's first focus)` : `theme: ${theme} (the one the team's recent plans used least)`,
+      effect: req.focus?.length
+        ? `theme: ${theme} (the coach's first focus)`
+        : `theme: ${theme} (the one the team's recent plans used least)`,
     });
   }
   const slots = sessionSlots(ctx, rules, theme);
@@ -120,7 +125,11 @@ export function allocationRules(ctx: BuildContext): AllocationRules {
 }
 
 /** Every phase in order, each laid out after the last one played, with its changeover. */
-function buildPhases(ctx: BuildContext, rules: AllocationRules, specs: ReturnType<typeof planTimeline>): Phase[] {
+function buildPhases(
+  ctx: BuildContext,
+  rules: AllocationRules,
+  specs: ReturnType<typeof planTimeline>,
+): Phase[] {
   const startWidths = feedbackWidths(ctx);
   const phases: Phase[] = [];
   let lastPlayed: Phase | undefined;
@@ -129,11 +138,18 @@ function buildPhases(ctx: BuildContext, rules: AllocationRules, specs: ReturnTyp
   specs.forEach((planned, i) => {
     // Keepers go in goal only once their own warm-up has really run; if it could not (the phase
     // fell back to one shared grid), they warm up as keepers in this phase instead.
-    const spec = planned.keepersInGoal && !warmed ? { ...planned, keepersInGoal: false, keeperWarmUp: true } : planned;
+    const spec =
+      planned.keepersInGoal && !warmed ? { ...planned, keepersInGoal: false, keeperWarmUp: true } : planned;
     const phase = buildPhase(ctx, rules, spec, i, startWidths, lastPlayed);
     if (phase.stations.some((s) => s.activityKind === 'goalkeeping')) warmed = true;
     if (phase.activityKind !== 'break') {
-      phase.changeover = changeoverBetween(lastPlayed, phase, ctx.params, ctx.request.kind === 'training', breakSince || !lastPlayed);
+      phase.changeover = changeoverBetween(
+        lastPlayed,
+        phase,
+        ctx.params,
+        ctx.request.kind === 'training',
+        breakSince || !lastPlayed,
+      );
       lastPlayed = phase;
       breakSince = false;
     } else breakSince = true;

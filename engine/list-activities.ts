@@ -23,7 +23,10 @@ export interface ActivityOption {
  * numbers and kit only (rules need an async run — generatePlan does that). Retired activities
  * are left out.
  */
-export function listActivities(ruleSet: RuleSetDocument = defaultRuleSet, context?: Plan | PlanRequest): ActivityOption[] {
+export function listActivities(
+  ruleSet: RuleSetDocument = defaultRuleSet,
+  context?: Plan | PlanRequest,
+): ActivityOption[] {
   const base = compileRuleSet(ruleSet).document.parameters;
   const plan = context && 'phases' in context ? context : undefined;
   const request = plan ? plan.request : (context as PlanRequest | undefined);
@@ -45,7 +48,12 @@ export function listActivities(ruleSet: RuleSetDocument = defaultRuleSet, contex
       if (!request || !band) return option;
       const reason =
         activityBlocked(params, request.ageGroup, request.level, forbidden, a) ??
-        (activityFeasible(request.players.length, request.coaches, a, { params, level: request.level, band, kit: request.equipment })
+        (activityFeasible(request.players.length, request.coaches, a, {
+          params,
+          level: request.level,
+          band,
+          kit: request.equipment,
+        })
           ? null
           : 'too few players or not enough kit for it');
       if (reason) {

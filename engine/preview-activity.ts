@@ -3,7 +3,14 @@
  * the club's activity form (live, as the lead types). Synchronous: the club's tables apply,
  * its rules (which need a request) do not.
  */
-import type { ActivityDefinition, AgeGroup, Level, PresentPlayer, RuleSetDocument, Station } from '../shared/types';
+import type {
+  ActivityDefinition,
+  AgeGroup,
+  Level,
+  PresentPlayer,
+  RuleSetDocument,
+  Station,
+} from '../shared/types';
 import { AGE_GROUPS } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
 import { kindModule, layoutOf } from './kinds/registry';
@@ -41,19 +48,25 @@ export function previewActivity(
 ): ActivityPreview {
   const base = compileRuleSet(ruleSet).document.parameters;
   const ageGroup = options.ageGroup ?? middleAge(activity);
-  const level = options.level ?? (activity.levels.includes('intermediate') ? 'intermediate' : (activity.levels[0] ?? 'intermediate'));
+  const level =
+    options.level ??
+    (activity.levels.includes('intermediate') ? 'intermediate' : (activity.levels[0] ?? 'intermediate'));
   const params = effectiveParameters(base, { ageGroup });
   const band = params.ageGroups[ageGroup].band;
   const module = kindModule(activity.kind);
   const size = sizeRuleOf(activity, { params, level, band });
   const count = Math.max(1, options.players ?? size?.preferred ?? activity.players.min);
   const targets = module.targets(layoutOf(activity));
-  const keeperCount = module.facesShots && targets.keepers && params.gameFormats[band].goalkeepers ? targets.ends : 0;
+  const keeperCount =
+    module.facesShots && targets.keepers && params.gameFormats[band].goalkeepers ? targets.ends : 0;
   const keepers = activity.kind === 'goalkeeping' ? Math.min(count, 2) : keeperCount;
-  const players: PresentPlayer[] = Array.from({ length: count + (activity.kind === 'goalkeeping' ? 0 : keepers) }, (_, i) => ({
-    id: `${i + 1}`,
-    ...(i < keepers ? { goalkeeper: true } : {}),
-  }));
+  const players: PresentPlayer[] = Array.from(
+    { length: count + (activity.kind === 'goalkeeping' ? 0 : keepers) },
+    (_, i) => ({
+      id: `${i + 1}`,
+      ...(i < keepers ? { goalkeeper: true } : {}),
+    }),
+  );
   const keeperIds = players.filter((p) => p.goalkeeper).map((p) => p.id);
   const request = {
     ageGroup,

@@ -88,7 +88,14 @@ export function upgradeRuleSet(doc: RuleSetDocument | Loose): RuleSetDocument {
       if (v !== undefined) set(params, ['kinds', kind, field], v);
     }
   }
-  for (const key of ['keepBall', 'areaLevelScale', 'touchTarget', 'cautions', 'layout', 'allocation'] as const) {
+  for (const key of [
+    'keepBall',
+    'areaLevelScale',
+    'touchTarget',
+    'cautions',
+    'layout',
+    'allocation',
+  ] as const) {
     const v = changed([key]);
     if (v !== undefined) params[key] = v;
   }
@@ -97,7 +104,14 @@ export function upgradeRuleSet(doc: RuleSetDocument | Loose): RuleSetDocument {
   // A kind the club had taken away from an age stays away.
   const oldAges = (oldParams['ageGroups'] as Record<string, { allowedKinds: string[] }>) ?? {};
   const ages = params['ageGroups'] as RuleParameters['ageGroups'];
-  const firstKinds = ['ball-mastery', 'passing-finishing', 'keep-ball', 'pairs', 'small-sided-game', 'movement-prep'];
+  const firstKinds = [
+    'ball-mastery',
+    'passing-finishing',
+    'keep-ball',
+    'pairs',
+    'small-sided-game',
+    'movement-prep',
+  ];
   for (const [age, group] of Object.entries(ages) as [AgeGroup, RuleParameters['ageGroups'][AgeGroup]][]) {
     const had = oldAges[age]?.allowedKinds;
     if (!had) continue;
@@ -125,21 +139,30 @@ export function upgradeRuleSet(doc: RuleSetDocument | Loose): RuleSetDocument {
   };
   if (validateRuleSet(upgraded).ok) return upgraded;
   // Something the club wrote has no place now: keep their numbers, drop their extra rules.
-  const safer = { ...upgraded, rules: base.rules.filter((r) => defaultRuleSet.rules.some((d) => d.id === r.id)) };
-  return validateRuleSet(safer).ok ? safer : { ...structuredClone(defaultRuleSet), id: upgraded.id, version: upgraded.version, name: upgraded.name };
+  const safer = {
+    ...upgraded,
+    rules: base.rules.filter((r) => defaultRuleSet.rules.some((d) => d.id === r.id)),
+  };
+  return validateRuleSet(safer).ok
+    ? safer
+    : { ...structuredClone(defaultRuleSet), id: upgraded.id, version: upgraded.version, name: upgraded.name };
 }
 
 function clubActivity(a: Loose, kind: StationKind, params: RuleParameters): ActivityDefinition {
   const description = String(a['description'] ?? a['title'] ?? '');
   const sizes = params.groupSizes[kind].intermediate;
-  const focus = ((a['focus'] as string[]) ?? []).filter((f) => ['passing', 'pressing', 'finishing', 'dribbling'].includes(f));
+  const focus = ((a['focus'] as string[]) ?? []).filter((f) =>
+    ['passing', 'pressing', 'finishing', 'dribbling'].includes(f),
+  );
   return {
     id: String(a['id']),
     kind,
     title: String(a['title'] ?? a['id']),
     summary: description.split(/(?<=\.)\s/)[0].slice(0, 140),
     description,
-    coachingPoints: ((a['coachingPoints'] as string[]) ?? []).length ? (a['coachingPoints'] as string[]) : [description.slice(0, 160)],
+    coachingPoints: ((a['coachingPoints'] as string[]) ?? []).length
+      ? (a['coachingPoints'] as string[])
+      : [description.slice(0, 160)],
     easier: [],
     harder: [],
     ages: kind === 'movement-prep' ? { from: 'U13', to: 'adult' } : { from: 'U6', to: 'adult' },
@@ -153,7 +176,9 @@ function clubActivity(a: Loose, kind: StationKind, params: RuleParameters): Acti
 }
 
 function renameKinds(rule: ClubRule): ClubRule {
-  const text = JSON.stringify(rule).replace(/"pairs"/g, '"passing-pattern"').replace(/feedback:pairs/g, 'feedback:passing-pattern');
+  const text = JSON.stringify(rule)
+    .replace(/"pairs"/g, '"passing-pattern"')
+    .replace(/feedback:pairs/g, 'feedback:passing-pattern');
   return JSON.parse(text) as ClubRule;
 }
 

@@ -13,7 +13,11 @@ import { applyProgression } from './apply-progression';
 import { editContext, lastPlayedBefore, specOf } from './plan-context';
 import { activityOfStation, refreshPlan } from './rebuild';
 
-export async function applyEdit(plan: Plan, edit: PlanEdit, ruleSet: RuleSetDocument = defaultRuleSet): Promise<Plan> {
+export async function applyEdit(
+  plan: Plan,
+  edit: PlanEdit,
+  ruleSet: RuleSetDocument = defaultRuleSet,
+): Promise<Plan> {
   switch (edit.type) {
     case 'regenerate':
       return generatePlan({ ...plan.request, seed: edit.seed ?? generateSeed() }, ruleSet);
@@ -49,7 +53,11 @@ function withChecks(plan: Plan, ruleSet: RuleSetDocument): Plan {
   return { ...plan, warnings: [...plan.warnings, ...checks.map((c) => ({ ...c, code: `check:${c.code}` }))] };
 }
 
-function movePlayer(plan: Plan, edit: Extract<PlanEdit, { type: 'move-player' }>, ruleSet: RuleSetDocument): Plan {
+function movePlayer(
+  plan: Plan,
+  edit: Extract<PlanEdit, { type: 'move-player' }>,
+  ruleSet: RuleSetDocument,
+): Plan {
   const params = effectiveParameters(compileRuleSet(ruleSet).document.parameters, plan.request);
   const phase = plan.phases[edit.phaseIndex];
   if (!phase) throw new RangeError(`No phase ${edit.phaseIndex}`);
@@ -61,7 +69,8 @@ function movePlayer(plan: Plan, edit: Extract<PlanEdit, { type: 'move-player' }>
   const band = params.ageGroups[plan.request.ageGroup].band;
   const stations = phase.stations.map((s) => {
     if (s.id !== from.id && s.id !== target.id) return s;
-    const ids = s.id === from.id ? s.playerIds.filter((id) => id !== edit.playerId) : [...s.playerIds, edit.playerId];
+    const ids =
+      s.id === from.id ? s.playerIds.filter((id) => id !== edit.playerId) : [...s.playerIds, edit.playerId];
     return reRole(s, ids, byId, params, plan, band);
   });
   // A station left empty disappears rather than stand unused.
@@ -74,7 +83,11 @@ function movePlayer(plan: Plan, edit: Extract<PlanEdit, { type: 'move-player' }>
       ...refreshed,
       trace: [
         ...plan.trace,
-        { ruleId: 'edit.move-player', fired: true, effect: `${who}: ${from.title} → ${target.title} in ${phase.name}` },
+        {
+          ruleId: 'edit.move-player',
+          fired: true,
+          effect: `${who}: ${from.title} → ${target.title} in ${phase.name}`,
+        },
       ],
     },
     ruleSet,
@@ -91,7 +104,9 @@ export function reRole(
   byId: Map<string, Plan['request']['players'][number]>,
   params: ReturnType<typeof effectiveParameters>,
   plan: Plan,
-  band: ReturnType<typeof effectiveParameters>['ageGroups'][keyof ReturnType<typeof effectiveParameters>['ageGroups']]['band'],
+  band: ReturnType<typeof effectiveParameters>['ageGroups'][keyof ReturnType<
+    typeof effectiveParameters
+  >['ageGroups']]['band'],
 ): Station {
   const activity = activityOfStation(params, s);
   const layout = layoutOf(activity);
@@ -118,7 +133,11 @@ export function reRole(
   };
 }
 
-async function swapActivity(plan: Plan, edit: Extract<PlanEdit, { type: 'swap-activity' }>, ruleSet: RuleSetDocument): Promise<Plan> {
+async function swapActivity(
+  plan: Plan,
+  edit: Extract<PlanEdit, { type: 'swap-activity' }>,
+  ruleSet: RuleSetDocument,
+): Promise<Plan> {
   const params = effectiveParameters(compileRuleSet(ruleSet).document.parameters, plan.request);
   const phase = plan.phases[edit.phaseIndex];
   if (!phase) throw new RangeError(`No phase ${edit.phaseIndex}`);
@@ -127,13 +146,29 @@ async function swapActivity(plan: Plan, edit: Extract<PlanEdit, { type: 'swap-ac
   const request = plan.request;
   const refuse = (reason: string): Plan => ({
     ...plan,
-    warnings: [...plan.warnings, { code: 'swap-refused', message: `${activity.title} is not used here: ${reason}.` }],
-    trace: [...plan.trace, { ruleId: 'edit.swap-activity', fired: false, effect: `${activity.title} refused: ${reason}` }],
+    warnings: [
+      ...plan.warnings,
+      { code: 'swap-refused', message: `${activity.title} is not used here: ${reason}.` },
+    ],
+    trace: [
+      ...plan.trace,
+      { ruleId: 'edit.swap-activity', fired: false, effect: `${activity.title} refused: ${reason}` },
+    ],
   });
   if (phase.activityKind === 'break') return refuse('a drinks break has no stations');
-  const blocked = activityBlocked(params, request.ageGroup, request.level, plan.forbiddenActivities ?? [], activity);
+  const blocked = activityBlocked(
+    params,
+    request.ageGroup,
+    request.level,
+    plan.forbiddenActivities ?? [],
+    activity,
+  );
   if (blocked) return refuse(blocked);
-  const { ctx, rules } = await editContext(request, ruleSet, `${plan.seed}:swap:${edit.phaseIndex}:${edit.activityId}`);
+  const { ctx, rules } = await editContext(
+    request,
+    ruleSet,
+    `${plan.seed}:swap:${edit.phaseIndex}:${edit.activityId}`,
+  );
   const spec = specOf(plan, edit.phaseIndex, [activity]);
   const rebuilt = buildPhase(ctx, rules, spec, edit.phaseIndex, {}, lastPlayedBefore(plan, edit.phaseIndex));
   if (rebuilt.activityId !== activity.id) {
@@ -144,7 +179,14 @@ async function swapActivity(plan: Plan, edit: Extract<PlanEdit, { type: 'swap-ac
   return withChecks(
     {
       ...refreshed,
-      trace: [...plan.trace, { ruleId: 'edit.swap-activity', fired: true, effect: `${phase.name}: ${phase.activityId} → ${activity.id}` }],
+      trace: [
+        ...plan.trace,
+        {
+          ruleId: 'edit.swap-activity',
+          fired: true,
+          effect: `${phase.name}: ${phase.activityId} → ${activity.id}`,
+        },
+      ],
     },
     ruleSet,
   );

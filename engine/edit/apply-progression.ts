@@ -25,19 +25,34 @@ export function applyProgression(
   if (!phase || !station) throw new RangeError(`No station ${stationId} in phase ${phaseIndex}`);
   const band = params.ageGroups[plan.request.ageGroup].band;
   const ruleId = `progression.${station.activityKind}`;
-  const unchanged = (effect: string): Plan => ({ ...plan, trace: [...plan.trace, { ruleId, fired: false, effect }] });
-  if (verdict === 'right') return unchanged(`${station.title}: about right, area stays ${describeArea(station.area)}`);
+  const unchanged = (effect: string): Plan => ({
+    ...plan,
+    trace: [...plan.trace, { ruleId, fired: false, effect }],
+  });
+  if (verdict === 'right')
+    return unchanged(`${station.title}: about right, area stays ${describeArea(station.area)}`);
   const direction = verdict === 'too-easy' ? 'harder' : 'easier';
   const total = station.playerIds.length + station.coachJoins;
-  const next = steppedArea(params, station.activityKind, band, station.area, direction, plan.request.space, total);
+  const next = steppedArea(
+    params,
+    station.activityKind,
+    band,
+    station.area,
+    direction,
+    plan.request.space,
+    total,
+  );
   if (!next) {
-    return unchanged(`${station.title}: ${words(verdict)}, but the area is already at the club's limit (${describeArea(station.area)})`);
+    return unchanged(
+      `${station.title}: ${words(verdict)}, but the area is already at the club's limit (${describeArea(station.area)})`,
+    );
   }
   let stations = phase.stations.map((s) => (s.id === stationId ? { ...s, area: next } : s));
   const rects = stations.map((s) => rectOf(s.position, s.area));
   const index = stations.findIndex((s) => s.id === stationId);
   const clash =
-    !insideSpace(rects[index], plan.request.space) || rects.some((r, j) => j !== index && overlaps(r, rects[index]));
+    !insideSpace(rects[index], plan.request.space) ||
+    rects.some((r, j) => j !== index && overlaps(r, rects[index]));
   if (clash) {
     const placed = packStations(
       stations.map((s) => s.area),
@@ -46,7 +61,9 @@ export function applyProgression(
       stations.map((s) => params.kinds[s.activityKind].rotatable),
     );
     if (!placed) {
-      return unchanged(`${station.title}: ${words(verdict)}, but a ${describeArea(next)} area does not fit beside the other stations`);
+      return unchanged(
+        `${station.title}: ${words(verdict)}, but a ${describeArea(next)} area does not fit beside the other stations`,
+      );
     }
     stations = stations.map((s, i) => ({ ...s, area: placed[i].area, position: placed[i].position }));
   }
@@ -65,7 +82,10 @@ export function applyProgression(
   };
   return {
     ...result,
-    warnings: [...result.warnings, ...checkPlan(result, ruleSet).map((c) => ({ ...c, code: `check:${c.code}` }))],
+    warnings: [
+      ...result.warnings,
+      ...checkPlan(result, ruleSet).map((c) => ({ ...c, code: `check:${c.code}` })),
+    ],
   };
 }
 

@@ -17,7 +17,11 @@ export interface EditContext {
 }
 
 /** The build context for `request` under the rule set, its randomness seeded by `seed`. */
-export async function editContext(request: PlanRequest, ruleSet: RuleSetDocument, seed: string): Promise<EditContext> {
+export async function editContext(
+  request: PlanRequest,
+  ruleSet: RuleSetDocument,
+  seed: string,
+): Promise<EditContext> {
   const compiled = compileRuleSet(ruleSet);
   const outcome = await evaluateRules(compiled, buildFacts(request, compiled.document.parameters));
   const ctx = planContext(request, outcome, seed);
@@ -41,7 +45,8 @@ export function specOf(plan: Plan, phaseIndex: number, candidates: ActivityDefin
 
 /** The last phase played before `phaseIndex` (its grids are the ones standing). */
 export function lastPlayedBefore(plan: Plan, phaseIndex: number): Phase | undefined {
-  for (let i = phaseIndex - 1; i >= 0; i--) if (plan.phases[i].activityKind !== 'break') return plan.phases[i];
+  for (let i = phaseIndex - 1; i >= 0; i--)
+    if (plan.phases[i].activityKind !== 'break') return plan.phases[i];
   return undefined;
 }
 

@@ -53,10 +53,17 @@ function isCold(plan: Plan, params: RuleParameters): boolean {
   return t !== undefined && t <= params.cautions.coldC;
 }
 
-export function refreshPlan(plan: Plan, phases: Phase[], ruleParams: RuleParameters, checks: Notice[] = []): Plan {
+export function refreshPlan(
+  plan: Plan,
+  phases: Phase[],
+  ruleParams: RuleParameters,
+  checks: Notice[] = [],
+): Plan {
   const params = effectiveParameters(ruleParams, plan.request);
   const band = params.ageGroups[plan.request.ageGroup].band;
-  const warnings: Notice[] = plan.warnings.filter((w) => !DERIVED_CODES.has(w.code) && !w.code.startsWith('check:'));
+  const warnings: Notice[] = plan.warnings.filter(
+    (w) => !DERIVED_CODES.has(w.code) && !w.code.startsWith('check:'),
+  );
   const fresh = phases.map((p) => ({ ...p, stations: p.stations.map((s) => ({ ...s })) }));
   let lastPlayed: Phase | undefined;
   let breakSince = false;
@@ -69,12 +76,34 @@ export function refreshPlan(plan: Plan, phases: Phase[], ruleParams: RuleParamet
     const previousGoals = lastPlayed
       ? lastPlayed.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
       : [];
-    markPhase(phase.stations, activities, plan.request.space, params, plan.request.equipment, warnings, phase.name, previousGoals);
-    equipPhase(phase.stations, activities, plan.request.equipment, warnings, phase.name, isCold(plan, params));
+    markPhase(
+      phase.stations,
+      activities,
+      plan.request.space,
+      params,
+      plan.request.equipment,
+      warnings,
+      phase.name,
+      previousGoals,
+    );
+    equipPhase(
+      phase.stations,
+      activities,
+      plan.request.equipment,
+      warnings,
+      phase.name,
+      isCold(plan, params),
+    );
     phase.stations.forEach((s, i) => {
       s.progressions = progressionsFor(s, activities[i], params, band, plan.request.space);
     });
-    phase.changeover = changeoverBetween(lastPlayed, phase, params, plan.request.kind === 'training', breakSince || !lastPlayed);
+    phase.changeover = changeoverBetween(
+      lastPlayed,
+      phase,
+      params,
+      plan.request.kind === 'training',
+      breakSince || !lastPlayed,
+    );
     lastPlayed = phase;
     breakSince = false;
   }

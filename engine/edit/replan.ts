@@ -4,14 +4,24 @@
  * with the leaver out or the arrival in where there is room, or the phase rebuilt for the new
  * squad with its stations matched to the old ones.
  */
-import type { ActivityDefinition, AgeBand, Phase, Plan, PlayerMove, PresentPlayer, RosterChange, RuleSetDocument, Station } from '../../shared/types';
+import type {
+  ActivityDefinition,
+  AgeBand,
+  Phase,
+  Plan,
+  PlayerMove,
+  PresentPlayer,
+  RosterChange,
+  RuleSetDocument,
+  Station,
+} from '../../shared/types';
 import { checkPlan } from '../check-plan';
 import { generatePlan, PlanRequestError } from '../generate-plan';
 import { insideSpace, overlaps, gapBetween, rectOf } from '../geometry';
 import { kindModule, layoutOf } from '../kinds/registry';
 import { activityBlocked, activityById } from '../planning/activities';
 import { sizeRuleOf } from '../planning/allocation';
-import { areaForWidth, baseWidth, boundedTable } from '../planning/areas';
+import { areaForWidth, baseWidth, boundedTable, meetsMinimum } from '../planning/areas';
 import { buildPhase } from '../planning/build-phase';
 import type { BuildContext } from '../planning/context';
 import { equipPhase } from '../planning/kit';
@@ -25,7 +35,11 @@ export interface ReplanResult {
   moves: PlayerMove[];
 }
 
-export async function replan(plan: Plan, change: RosterChange, ruleSet?: RuleSetDocument): Promise<ReplanResult> {
+export async function replan(
+  plan: Plan,
+  change: RosterChange,
+  ruleSet?: RuleSetDocument,
+): Promise<ReplanResult> {
   const rules = ruleSet ?? (await import('../rule-sets')).defaultRuleSet;
   const removed = new Set(change.remove ?? []);
   const known = new Set(plan.request.players.map((p) => p.id));
@@ -34,7 +48,11 @@ export async function replan(plan: Plan, change: RosterChange, ruleSet?: RuleSet
   const request = { ...plan.request, players };
   const validation = validatePlanRequest(request);
   if (!validation.ok) throw new PlanRequestError(validation.errors);
-  const { ctx, rules: allocation } = await editContext(request, rules, `${plan.seed}:replan:${change.fromMinute}:${players.length}`);
+  const { ctx, rules: allocation } = await editContext(
+    request,
+    rules,
+    `${plan.seed}:replan:${change.fromMinute}:${players.length}`,
+  );
   const fresh = await generatePlan({ ...request, seed: plan.seed }, rules);
   const byId = new Map(players.map((p) => [p.id, p]));
   const moves: PlayerMove[] = [];
@@ -58,16 +76,25 @@ export async function replan(plan: Plan, change: RosterChange, ruleSet?: RuleSet
     ].filter(allowed);
     if (candidates.length) {
       const spec = specOf({ ...plan, request }, phaseIndex, candidates);
-      options.push(matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex));
+      options.push(
+        matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex),
+      );
     }
     const theirs = fresh.phases[phaseIndex];
-    if (theirs && theirs.startMinute === phase.startMinute && theirs.endMinute === phase.endMinute && theirs.activityKind !== 'break') {
+    if (
+      theirs &&
+      theirs.startMinute === phase.startMinute &&
+      theirs.endMinute === phase.endMinute &&
+      theirs.activityKind !== 'break'
+    ) {
       options.push(matchIds(phase, theirs, phaseIndex));
     }
     if (!options.length) {
       // Nothing that ran before still fits the new numbers: everyone together (see sharedGridPhase).
       const spec = specOf({ ...plan, request }, phaseIndex, []);
-      options.push(matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex));
+      options.push(
+        matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex),
+      );
     }
     let best: { phase: Phase; moves: PlayerMove[]; count: number } | null = null;
     for (const option of options) {
@@ -90,7 +117,11 @@ export async function replan(plan: Plan, change: RosterChange, ruleSet?: RuleSet
     supervision: ctx.supervision,
     rosterChanges: [
       ...(plan.rosterChanges ?? []),
-      { fromMinute: change.fromMinute, added: arrivals.map((p) => p.id), removed: [...removed].filter((id) => known.has(id)) },
+      {
+        fromMinute: change.fromMinute,
+        added: arrivals.map((p) => p.id),
+        removed: [...removed].filter((id) => known.has(id)),
+      },
     ],
   };
   const refreshed = refreshPlan(changed, phases, ctx.params);
@@ -109,7 +140,10 @@ export async function replan(plan: Plan, change: RosterChange, ruleSet?: RuleSet
   };
   const checks = checkPlan(result, rules);
   return {
-    plan: { ...result, warnings: [...result.warnings, ...checks.map((c) => ({ ...c, code: `check:${c.code}` }))] },
+    plan: {
+      ...result,
+      warnings: [...result.warnings, ...checks.map((c) => ({ ...c, code: `check:${c.code}` }))],
+    },
     moves,
   };
 }
@@ -126,17 +160,27 @@ function inPlace(
   ctx: BuildContext,
 ): Phase | null {
   const { params, request, band } = ctx;
-  if (phase.stations.some((s) => activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, activityOfStation(params, s)))) {
+  if (
+    phase.stations.some((s) =>
+      activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, activityOfStation(params, s)),
+    )
+  ) {
     return null;
   }
   let stations: Station[] = phase.stations
     .map((s) => ({ ...s, playerIds: s.playerIds.filter((id) => !removed.has(id)) }))
     .filter((s) => s.playerIds.length > 0);
-  const changed = new Set(phase.stations.filter((s) => s.playerIds.some((id) => removed.has(id))).map((s) => s.id));
+  const changed = new Set(
+    phase.stations.filter((s) => s.playerIds.some((id) => removed.has(id))).map((s) => s.id),
+  );
   for (const p of arrivals) {
     const room = stations
       .filter((s) => s.activityKind !== 'goalkeeping')
-      .filter((s) => sizeRuleOf(activityOfStation(params, s), { params, level: request.level, band })?.allows(outfieldAfter(s) + 1))
+      .filter((s) =>
+        sizeRuleOf(activityOfStation(params, s), { params, level: request.level, band })?.allows(
+          outfieldAfter(s) + 1,
+        ),
+      )
       .sort((a, b) => a.playerIds.length - b.playerIds.length)[0];
     if (!room) return null;
     stations = stations.map((s) => (s === room ? { ...s, playerIds: [...s.playerIds, p.id] } : s));
@@ -147,9 +191,17 @@ function inPlace(
     const next = reRole(s, s.playerIds, byId, params, { ...phaseOwner(request) } as Plan, band as AgeBand);
     const activity = activityOfStation(params, next);
     const size = sizeRuleOf(activity, { params, level: request.level, band });
-    if (activity.kind !== 'goalkeeping' && size && !size.allows(outfieldAfter(next))) return { ...next, id: '' };
+    if (activity.kind !== 'goalkeeping' && size && !size.allows(outfieldAfter(next)))
+      return { ...next, id: '' };
     const total = next.playerIds.length + next.coachJoins;
-    const area = areaForWidth(boundedTable(params, s.activityKind, band, total), baseWidth(params, s.activityKind, band, request.level, total), request.space);
+    const table = boundedTable(params, s.activityKind, band, total);
+    const area = areaForWidth(
+      table,
+      baseWidth(params, s.activityKind, band, request.level, total),
+      request.space,
+    );
+    // Never below the club's minimum (keep-ball's room per player): then the group cannot stay.
+    if (!meetsMinimum(table, area)) return { ...next, id: '' };
     const rotated = s.area.width > s.area.length !== area.width > area.length;
     return { ...next, area: rotated ? { width: area.length, length: area.width } : area };
   });
@@ -163,7 +215,13 @@ function inPlace(
   }
   // Balls and waiting as they would be, so an in-place answer never leaves a queue.
   const trial = stations.map((s) => ({ ...s }));
-  equipPhase(trial, trial.map((s) => activityOfStation(params, s)), request.equipment, [], phase.name);
+  equipPhase(
+    trial,
+    trial.map((s) => activityOfStation(params, s)),
+    request.equipment,
+    [],
+    phase.name,
+  );
   if (trial.some((s) => (s.waiting ?? 0) > (ctx.cold ? 0 : 1))) return null;
   void kindModule;
   void layoutOf;
@@ -185,7 +243,9 @@ function outfieldAfter(s: Station): number {
  */
 function matchIds(before: Phase, after: Phase, phaseIndex: number): Phase {
   const oldSets = before.stations.map((s) => new Set(s.playerIds));
-  const overlap = after.stations.map((s) => oldSets.map((set) => s.playerIds.filter((id) => set.has(id)).length));
+  const overlap = after.stations.map((s) =>
+    oldSets.map((set) => s.playerIds.filter((id) => set.has(id)).length),
+  );
   const assignment = bestAssignment(overlap, before.stations.length);
   const used = new Set(assignment.filter((j) => j >= 0).map((j) => before.stations[j].id));
   let next = 1;
@@ -195,7 +255,10 @@ function matchIds(before: Phase, after: Phase, phaseIndex: number): Phase {
     used.add(id);
     return id;
   };
-  const stations = after.stations.map((s, i) => ({ ...s, id: assignment[i] >= 0 ? before.stations[assignment[i]].id : freshId() }));
+  const stations = after.stations.map((s, i) => ({
+    ...s,
+    id: assignment[i] >= 0 ? before.stations[assignment[i]].id : freshId(),
+  }));
   return { ...after, stations };
 }
 
@@ -246,6 +309,7 @@ function movesBetween(before: Phase, after: Phase, phaseIndex: number): PlayerMo
     const to = now.get(id) ?? null;
     if (to !== from) moves.push({ playerId: id, fromStationId: from, toStationId: to, phaseIndex });
   }
-  for (const [id, to] of now) if (!was.has(id)) moves.push({ playerId: id, fromStationId: null, toStationId: to, phaseIndex });
+  for (const [id, to] of now)
+    if (!was.has(id)) moves.push({ playerId: id, fromStationId: null, toStationId: to, phaseIndex });
   return moves;
 }

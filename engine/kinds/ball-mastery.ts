@@ -1,6 +1,16 @@
 /** Ball-mastery: every player on the ball, touch challenges while travelling. */
 import type { KindModule } from './kind-module';
-import { ballNeed, corners, gateAcross, groupCount, place, row, spread, tableSizes, waitingFor } from './common';
+import {
+  ballNeed,
+  corners,
+  gateAcross,
+  groupCount,
+  place,
+  row,
+  spread,
+  tableSizes,
+  waitingFor,
+} from './common';
 
 export const ballMastery: KindModule = {
   kind: 'ball-mastery',
@@ -13,7 +23,12 @@ export const ballMastery: KindModule = {
   sizes: (params, level, _band, activity) => tableSizes(params, 'ball-mastery', level, activity),
   roles: ({ players, activity }) => ({
     roles: { rotation: players.map((p) => p.id) },
-    format: activity.balls === 'pair' ? 'in pairs (threes when balls are short)' : activity.balls === 'each' ? 'a ball each' : '',
+    format:
+      activity.balls === 'pair'
+        ? 'in pairs (threes when balls are short)'
+        : activity.balls === 'each'
+          ? 'a ball each'
+          : '',
   }),
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1),
   bibs: () => 0,
@@ -35,7 +50,6 @@ export const ballMastery: KindModule = {
           }),
           'player',
         ),
-        markerAdvice: 'mark the start and end of each lane with bibs, bags or bottles',
       };
     }
     const gates = Math.max(2, Math.min(4, Math.floor(n / 2)));
@@ -47,7 +61,6 @@ export const ballMastery: KindModule = {
       outline: corners(across, along),
       extra: gatePoints,
       positions: place(station.playerIds, spread(n, across, along, 1.2), 'player'),
-      markerAdvice: 'mark the corners with bibs, bags or bottles',
     };
   },
 };

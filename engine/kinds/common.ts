@@ -1,5 +1,12 @@
 /** Helpers the kind modules share: default sizes, balls and waiting by ball use, and point layouts. */
-import type { ActivityDefinition, BallUse, Level, RuleParameters, Station, StationKind } from '../../shared/types';
+import type {
+  ActivityDefinition,
+  BallUse,
+  Level,
+  RuleParameters,
+  Station,
+  StationKind,
+} from '../../shared/types';
 import { intersectRange, type SizeRule } from '../planning/size-rule';
 import type { BallNeed, LocalPoint, LocalPosition } from './kind-module';
 
@@ -54,7 +61,12 @@ export function outfieldIds(station: Pick<Station, 'playerIds' | 'roles'>): stri
 }
 
 export function waitingFor(station: Station, activity: ActivityDefinition, placesWaiting = 0): number {
-  return waitingByBalls(activity.balls, outfieldIds(station).length + station.coachJoins, station.equipment.balls, placesWaiting);
+  return waitingByBalls(
+    activity.balls,
+    outfieldIds(station).length + station.coachJoins,
+    station.equipment.balls,
+    placesWaiting,
+  );
 }
 
 /** n points evenly along a line across the frame at `v`, inset from the sides. */

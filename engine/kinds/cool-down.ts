@@ -9,7 +9,8 @@ export const coolDown: KindModule = {
   targets: () => ({ ends: 0, keepers: false }),
   sizes: (params, level, _band, activity) => tableSizes(params, 'cool-down', level, activity),
   roles: ({ players }) => ({ roles: { rotation: players.map((p) => p.id) }, format: 'everyone together' }),
-  balls: (activity, station) => ballNeed(activity.balls, groupCount(station), Math.ceil(groupCount(station) / 4)),
+  balls: (activity, station) =>
+    ballNeed(activity.balls, groupCount(station), Math.ceil(groupCount(station) / 4)),
   bibs: () => 0,
   waiting: (station, activity) => waitingFor(station, activity),
   draw: ({ across, along }, station) => {
@@ -22,7 +23,6 @@ export const coolDown: KindModule = {
         ...place(station.playerIds, circle(station.playerIds.length, across / 2, along / 2, r), 'player'),
         ...coachAt(station, { u: across / 2, v: along / 2 }),
       ],
-      markerAdvice: 'no markers needed',
     };
   },
 };

@@ -47,7 +47,6 @@ export const directionalPossession: KindModule = {
           { u: across * 0.75, v: along, edge: 'far' },
         ],
         positions,
-        markerAdvice: 'mark the corners and gates with bibs, bags or bottles',
       };
     }
     return {
@@ -64,7 +63,6 @@ export const directionalPossession: KindModule = {
         { u: 0, v: along - depth, across, along: depth, label: 'end zone' },
       ],
       positions,
-      markerAdvice: 'mark the end-zone lines with bibs, bags or bottles',
     };
   },
 };

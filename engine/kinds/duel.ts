@@ -40,7 +40,13 @@ export const duel: KindModule = {
       points: ['Swap attacker and defender after every duel; rest while your partner carries the ball back'],
     };
   },
-  balls: (activity, station) => ballNeed(activity.balls, groupCount(station), station.roles.neutrals ? 1 : Math.max(1, Math.floor(station.playerIds.length / 2)), 2),
+  balls: (activity, station) =>
+    ballNeed(
+      activity.balls,
+      groupCount(station),
+      station.roles.neutrals ? 1 : Math.max(1, Math.floor(station.playerIds.length / 2)),
+      2,
+    ),
   bibs: (station) => station.roles.teams?.[0].length ?? 0,
   waiting: (station, activity) => waitingFor(station, activity),
   draw: ({ across, along }, station, layout) => {
@@ -57,7 +63,6 @@ export const duel: KindModule = {
           ...place(d, sideRow(d.length, along * 0.7, across), 'team-b'),
           ...place(n, [{ u: across / 2, v: along / 2 }], 'neutral'),
         ],
-        markerAdvice: 'mark the corners with bibs, bags or bottles',
       };
     }
     const lanes = Math.max(1, d.length);
@@ -74,7 +79,6 @@ export const duel: KindModule = {
       outline: [],
       extra: [],
       positions: [...place(a, attack, 'team-a'), ...place(d, defend, 'team-b')],
-      markerAdvice: 'mark the lane ends with bibs, bags or bottles',
     };
   },
 };

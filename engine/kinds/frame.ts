@@ -22,7 +22,12 @@ export interface Frame extends FrameSize {
 
 export function frameOf(rect: Rect, far: Direction): Frame {
   const lengthways = far === 'N' || far === 'S';
-  return { rect, far, across: lengthways ? rect.width : rect.length, along: lengthways ? rect.length : rect.width };
+  return {
+    rect,
+    far,
+    across: lengthways ? rect.width : rect.length,
+    along: lengthways ? rect.length : rect.width,
+  };
 }
 
 /** Local metres to the space, clamped inside the station and rounded to 0.1 m. */

@@ -10,7 +10,13 @@ export const goalkeeping: KindModule = {
   sizes: (params, level, _band, activity) => tableSizes(params, 'goalkeeping', level, activity),
   roles: ({ players, keepers, coachJoins }) => {
     const servers = players.map((p) => p.id).filter((id) => !keepers.includes(id));
-    const who = coachJoins ? 'a coach serving' : servers.length ? `${servers.length} serving` : 'serving each other';
+    const who = coachJoins
+      ? 'a coach serving'
+      : servers.length
+        ? `${servers.length} serving`
+        : keepers.length > 1
+          ? 'serving each other'
+          : 'with a ball of their own';
     return {
       roles: { goalkeeper: keepers, servers, rotation: keepers },
       format: `${keepers.length} keeper${keepers.length === 1 ? '' : 's'}, ${who}`,
@@ -36,11 +42,17 @@ export const goalkeeping: KindModule = {
       extra: ladder,
       positions: [
         ...place(keepers.slice(0, 1), [{ u: across / 2, v: along - 0.6 }], 'goalkeeper'),
-        ...place(keepers.slice(1), [{ u: across / 2 + 1.2, v: serve.v }, { u: across * 0.12, v: along * 0.2 }], 'goalkeeper'),
+        ...place(
+          keepers.slice(1),
+          [
+            { u: across / 2 + 1.2, v: serve.v },
+            { u: across * 0.12, v: along * 0.2 },
+          ],
+          'goalkeeper',
+        ),
         ...place(servers, [serve, { u: serve.u - 1.5, v: serve.v }], 'server'),
         ...coachAt(station, { u: serve.u - 1, v: serve.v - 0.5 }),
       ],
-      markerAdvice: 'mark the serving spot with a bib or a bag',
     };
   },
 };

@@ -15,7 +15,11 @@ export function keepBallFormat(params: RuleParameters, level: Level, total: numb
 }
 
 /** Keep-ball groups are the level's formats, within the activity's player range. */
-export function keepBallSizes(params: RuleParameters, level: Level, range: { min: number; max: number }): SizeRule | null {
+export function keepBallSizes(
+  params: RuleParameters,
+  level: Level,
+  range: { min: number; max: number },
+): SizeRule | null {
   const totals = params.keepBall[level].formats
     .map((f) => f.attackers + f.defenders)
     .filter((t) => t >= range.min && t <= range.max);
@@ -37,7 +41,9 @@ export const keepBall: KindModule = {
   roles: ({ players, coachJoins, params, level }) => {
     const format = keepBallFormat(params, level, players.length + coachJoins);
     // Defenders come from the outfield players: never two goalkeepers pressing in one square.
-    const ordered = [...players.filter((p) => p.goalkeeper), ...players.filter((p) => !p.goalkeeper)].map((p) => p.id);
+    const ordered = [...players.filter((p) => p.goalkeeper), ...players.filter((p) => !p.goalkeeper)].map(
+      (p) => p.id,
+    );
     const defenders = ordered.slice(ordered.length - Math.min(format.defenders, ordered.length));
     const attackers = ordered.filter((id) => !defenders.includes(id));
     const a = attackers.length + coachJoins;
@@ -57,7 +63,12 @@ export const keepBall: KindModule = {
     const attackers = station.roles.attackers ?? [];
     const defenders = station.roles.defenders ?? [];
     const ring = perimeter(attackers.length + station.coachJoins, across, along, 0.8);
-    const middle = circle(defenders.length, across / 2, along / 2, defenders.length > 1 ? Math.min(across, along) * 0.12 : 0);
+    const middle = circle(
+      defenders.length,
+      across / 2,
+      along / 2,
+      defenders.length > 1 ? Math.min(across, along) * 0.12 : 0,
+    );
     return {
       essential: [],
       outline: corners(across, along),
@@ -67,7 +78,6 @@ export const keepBall: KindModule = {
         ...(station.coachJoins ? [{ id: 'coach', role: 'coach' as const, ...ring[ring.length - 1] }] : []),
         ...place(defenders, middle, 'defender'),
       ],
-      markerAdvice: 'mark the corners with bibs, bags or bottles',
     };
   },
 };

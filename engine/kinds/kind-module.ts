@@ -93,7 +93,6 @@ export interface Drawing {
   lines?: { from: LocalPoint; to: LocalPoint; label?: string }[];
   positions: LocalPosition[];
   /** What to mark the area with when the bag runs out of cones. */
-  markerAdvice: string;
 }
 
 /** The frame a station is drawn in: its size across and along. */

@@ -31,7 +31,6 @@ export const movementPrep: KindModule = {
       outline: [],
       extra: [],
       positions: place(station.playerIds, stand, 'player'),
-      markerAdvice: 'use a touchline and mark the far end with bibs or bags',
     };
   },
 };

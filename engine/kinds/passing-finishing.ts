@@ -20,7 +20,9 @@ export const passingFinishing: KindModule = {
     return {
       roles: { goalkeeper: keepers, rotation: outfield },
       format: `${n} + ${keepers.length ? 'keeper' : 'an empty goal'}`,
-      points: keepers.length ? ['Shooters: hit the target first; the keeper sets the pace between shots'] : undefined,
+      points: keepers.length
+        ? ['Shooters: hit the target first; the keeper sets the pace between shots']
+        : undefined,
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 2),
@@ -54,7 +56,6 @@ export const passingFinishing: KindModule = {
         ...coachAt(station, stand[outfield.length] ?? spots[0]),
         ...place(keepers, [{ u: across / 2, v: along - 0.6 }], 'goalkeeper'),
       ],
-      markerAdvice: 'mark the passing spots with bibs, bags or bottles',
     };
   },
 };

@@ -1,6 +1,16 @@
 /** Passing patterns: pairs through gates, triangles and squares, pass and follow. */
 import type { KindModule, LocalPoint } from './kind-module';
-import { ballNeed, coachAt, corners, gateAcross, groupCount, place, row, tableSizes, waitingFor } from './common';
+import {
+  ballNeed,
+  coachAt,
+  corners,
+  gateAcross,
+  groupCount,
+  place,
+  row,
+  tableSizes,
+  waitingFor,
+} from './common';
 
 export const passingPattern: KindModule = {
   kind: 'passing-pattern',
@@ -57,7 +67,6 @@ export const passingPattern: KindModule = {
         outline: [],
         extra: [],
         positions: [...place(ids, stand, 'player'), ...coachAt(station, stand[ids.length] ?? spots[0])],
-        markerAdvice: 'mark each spot with a bib, bag or bottle',
       };
     }
     const pairs = Math.max(1, Math.floor(total / 2));
@@ -73,7 +82,6 @@ export const passingPattern: KindModule = {
       outline: corners(across, along),
       extra: [],
       positions: [...place(ids, stand, 'player'), ...coachAt(station, stand[ids.length] ?? lanes[0])],
-      markerAdvice: 'mark the gates with bibs, bags or bottles',
     };
   },
 };

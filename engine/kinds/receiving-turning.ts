@@ -45,14 +45,16 @@ export const receivingTurning: KindModule = {
           ...coachAt(station, spots[servers.length % 4]),
           ...place(receivers, [mid], 'attacker'),
         ],
-        markerAdvice: 'mark the corners with bibs, bags or bottles',
       };
     }
     const ends: LocalPoint[] = [
       { u: across / 2, v: 0.8 },
       { u: across / 2, v: along - 0.8 },
     ];
-    const middle = receivers.map((_, i) => ({ u: across / 2, v: along * (receivers.length > 1 ? 0.38 + 0.24 * i : 0.5) }));
+    const middle = receivers.map((_, i) => ({
+      u: across / 2,
+      v: along * (receivers.length > 1 ? 0.38 + 0.24 * i : 0.5),
+    }));
     return {
       essential: [...gateAcross(across / 2, along / 2, Math.min(across - 1, 3)), ...ends],
       outline: corners(across, along),
@@ -62,7 +64,6 @@ export const receivingTurning: KindModule = {
         ...coachAt(station, ends[Math.min(1, servers.length)]),
         ...place(receivers, middle, 'attacker'),
       ],
-      markerAdvice: 'mark the ends and the middle with bibs, bags or bottles',
     };
   },
 };

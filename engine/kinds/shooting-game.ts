@@ -1,11 +1,23 @@
 /** Shooting games: finishing against defenders and a goalkeeper, under pressure. */
 import type { KindModule, LocalPoint } from './kind-module';
-import { ballNeed, corners, groupCount, outfieldIds, place, tableSizes, twoSides, waitingFor } from './common';
+import {
+  ballNeed,
+  corners,
+  groupCount,
+  outfieldIds,
+  place,
+  tableSizes,
+  twoSides,
+  waitingFor,
+} from './common';
 
 export const shootingGame: KindModule = {
   kind: 'shooting-game',
   layouts: [
-    { id: 'one-goal', label: 'Attackers against defenders at one goal; a defender who wins it counters to a gate' },
+    {
+      id: 'one-goal',
+      label: 'Attackers against defenders at one goal; a defender who wins it counters to a gate',
+    },
     { id: 'two-goals', label: 'A small box between two goals, shoot on sight' },
   ],
   facesShots: true,
@@ -52,7 +64,6 @@ export const shootingGame: KindModule = {
           ...place(outA, spreadAcross(outA.length, along * 0.4, across), 'team-a'),
           ...place(outB, spreadAcross(outB.length, along * 0.6, across), 'team-b'),
         ],
-        markerAdvice: 'mark the corners with bibs, bags or bottles',
       };
     }
     const attackers = station.roles.attackers ?? outfieldIds(station);
@@ -70,7 +81,6 @@ export const shootingGame: KindModule = {
         ...place(defenders, spreadAcross(defenders.length, along * 0.62, across), 'defender'),
         ...place(keepers, [{ u: across / 2, v: along - 0.6 }], 'goalkeeper'),
       ],
-      markerAdvice: 'mark the corners and the counter gates with bibs, bags or bottles',
     };
   },
 };

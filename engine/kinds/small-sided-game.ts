@@ -11,7 +11,8 @@ export const smallSidedGame: KindModule = {
     { id: 'four-gates', label: 'Two gates at each end to attack' },
   ],
   facesShots: true,
-  targets: (layout) => (layout === 'goals' || !layout ? { ends: 2, keepers: true } : { ends: 0, keepers: false }),
+  targets: (layout) =>
+    layout === 'goals' || !layout ? { ends: 2, keepers: true } : { ends: 0, keepers: false },
   sizes: (params, level, band, activity) => {
     const table = tableSizes(params, 'small-sided-game', level, activity);
     if (!table) return null;
@@ -30,7 +31,9 @@ export const smallSidedGame: KindModule = {
     return {
       roles: { teams, attackers: teams[0], defenders: teams[1], goalkeeper: keepers },
       format: `${teams[0].length}v${teams[1].length}${keepers.length ? ' with keepers' : ''}`,
-      points: keepers.length ? ['Keepers start every attack with a throw or a pass along the ground'] : undefined,
+      points: keepers.length
+        ? ['Keepers start every attack with a throw or a pass along the ground']
+        : undefined,
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 3),
@@ -44,7 +47,10 @@ export const smallSidedGame: KindModule = {
     return {
       essential: [],
       outline: corners(across, along),
-      extra: [{ u: 0, v: along / 2 }, { u: across, v: along / 2 }],
+      extra: [
+        { u: 0, v: along / 2 },
+        { u: across, v: along / 2 },
+      ],
       gates:
         layout === 'four-gates'
           ? [
@@ -56,12 +62,19 @@ export const smallSidedGame: KindModule = {
           : [],
       lines: [{ from: { u: 0, v: along / 2 }, to: { u: across, v: along / 2 }, label: 'halfway' }],
       positions: [
-        ...place(a.filter((id) => keepers.includes(id)), [{ u: across / 2, v: 0.6 }], 'goalkeeper'),
-        ...place(b.filter((id) => keepers.includes(id)), [{ u: across / 2, v: along - 0.6 }], 'goalkeeper'),
+        ...place(
+          a.filter((id) => keepers.includes(id)),
+          [{ u: across / 2, v: 0.6 }],
+          'goalkeeper',
+        ),
+        ...place(
+          b.filter((id) => keepers.includes(id)),
+          [{ u: across / 2, v: along - 0.6 }],
+          'goalkeeper',
+        ),
         ...place(outA, spread(outA.length, across, along / 2 - 1, 1.5, 0.5), 'team-a'),
         ...place(outB, spread(outB.length, across, along / 2 - 1, 1.5, along / 2 + 0.5), 'team-b'),
       ],
-      markerAdvice: 'mark the corners and halfway with bibs, bags or bottles',
     };
   },
 };

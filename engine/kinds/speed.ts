@@ -20,7 +20,8 @@ export const speed: KindModule = {
       points: ['Full rest between races: walk back, then go again'],
     };
   },
-  balls: (activity, station) => ballNeed(activity.balls, groupCount(station), Math.max(1, Math.floor(groupCount(station) / 2))),
+  balls: (activity, station) =>
+    ballNeed(activity.balls, groupCount(station), Math.max(1, Math.floor(groupCount(station) / 2))),
   bibs: () => 0,
   waiting: (station, activity) => waitingFor(station, activity),
   draw: ({ across, along }, station, layout) => {
@@ -41,8 +42,10 @@ export const speed: KindModule = {
       essential,
       outline: [],
       extra,
-      positions: [...place(station.playerIds, stand, 'player'), ...coachAt(station, stand[station.playerIds.length] ?? centres[0])],
-      markerAdvice: 'mark the start and finish lines with bibs, bags or bottles',
+      positions: [
+        ...place(station.playerIds, stand, 'player'),
+        ...coachAt(station, stand[station.playerIds.length] ?? centres[0]),
+      ],
     };
   },
 };

@@ -58,10 +58,13 @@ export const tagGame: KindModule = {
       extra,
       zones,
       positions: [
-        ...place(taggers, circle(taggers.length, across / 2, along / 2, taggers.length > 1 ? r : 0), 'defender'),
+        ...place(
+          taggers,
+          circle(taggers.length, across / 2, along / 2, taggers.length > 1 ? r : 0),
+          'defender',
+        ),
         ...place(runners, spread(runners.length, across, along, 1.5), 'player'),
       ],
-      markerAdvice: 'mark the corners with bibs, bags or bottles',
     };
   },
 };

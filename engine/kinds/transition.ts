@@ -7,7 +7,10 @@ export const transition: KindModule = {
   kind: 'transition',
   layouts: [
     { id: 'waves', label: 'Attackers go at a goal; defenders who win it counter through the gates' },
-    { id: 'two-goals', label: 'Two sides, two goals; switch from attack to defence the moment the ball is lost' },
+    {
+      id: 'two-goals',
+      label: 'Two sides, two goals; switch from attack to defence the moment the ball is lost',
+    },
   ],
   facesShots: true,
   targets: (layout) => (layout === 'two-goals' ? { ends: 2, keepers: true } : { ends: 1, keepers: false }),
@@ -32,8 +35,16 @@ export const transition: KindModule = {
     const positions = [
       ...place(outA, spreadAcross(outA.length, along * 0.3, across), 'team-a'),
       ...place(outB, spreadAcross(outB.length, along * 0.7, across), 'team-b'),
-      ...place(a.filter((id) => keepers.includes(id)), [{ u: across / 2, v: 0.6 }], 'goalkeeper'),
-      ...place(b.filter((id) => keepers.includes(id)), [{ u: across / 2, v: along - 0.6 }], 'goalkeeper'),
+      ...place(
+        a.filter((id) => keepers.includes(id)),
+        [{ u: across / 2, v: 0.6 }],
+        'goalkeeper',
+      ),
+      ...place(
+        b.filter((id) => keepers.includes(id)),
+        [{ u: across / 2, v: along - 0.6 }],
+        'goalkeeper',
+      ),
     ];
     return {
       essential: [],
@@ -47,7 +58,6 @@ export const transition: KindModule = {
               { u: across * 0.75, v: 0, edge: 'near' },
             ],
       positions,
-      markerAdvice: 'mark the corners and the counter gates with bibs, bags or bottles',
     };
   },
 };

@@ -80,7 +80,9 @@ export function rankedActivities(ctx: ChoiceContext, kind: StationKind, kindRank
     out.push({ activity: a, score: activityScore(ctx, a) - kindRank + ctx.rng() * JITTER });
   }
   // Above the day's intensity limit (the heat) only when the kind has nothing calmer; a pin stays.
-  const calm = out.filter((r) => r.activity.intensity <= params.intensity.max || ctx.pinned.has(r.activity.id));
+  const calm = out.filter(
+    (r) => r.activity.intensity <= params.intensity.max || ctx.pinned.has(r.activity.id),
+  );
   return (calm.length ? calm : out).sort((x, y) => y.score - x.score);
 }
 
@@ -110,7 +112,11 @@ export function activityScore(ctx: ChoiceContext, a: ActivityDefinition): number
   const balls = request.equipment.balls;
   const young = params.ageGroups[request.ageGroup].index <= 12;
   const short =
-    a.balls === 'each' ? Math.max(0, n - balls) / n : a.balls === 'pair' ? Math.max(0, Math.ceil(n / 2) - balls) / n : 0;
+    a.balls === 'each'
+      ? Math.max(0, n - balls) / n
+      : a.balls === 'pair'
+        ? Math.max(0, Math.ceil(n / 2) - balls) / n
+        : 0;
   // Shared balls leave players waiting: the more so, the worse, and never in the cold.
   score -= short * (ctx.cold ? 40 : 12);
   // Ball-less games only when balls are really short (players of 12 and under want a ball).
@@ -118,8 +124,9 @@ export function activityScore(ctx: ChoiceContext, a: ActivityDefinition): number
   else if (balls === 0) score -= 60;
   // Every player with a ball from the first minute when the bag allows it.
   if (a.balls === 'each' && balls >= n && young) score += 2;
-  // Keepers who are here want a goal to stand in.
+  // Keepers who are here want a goal to stand in: a game with a keeper each end beats one
+  // without (more than a focus match), a finishing practice with a goal a little.
   const hosts = hostsKeepers(a);
-  if (ctx.keepers.length >= hosts && hosts > 0) score += 2;
+  if (hosts > 0 && ctx.keepers.length >= hosts) score += hosts === 2 ? 6 : 3;
   return score;
 }

@@ -3,7 +3,14 @@
  * the preferred size, coach fill-ins and leftover stations, within the kit's and the adults'
  * station limits.
  */
-import type { ActivityDefinition, AgeBand, Equipment, Level, RuleParameters, StationKind } from '../../shared/types';
+import type {
+  ActivityDefinition,
+  AgeBand,
+  Equipment,
+  Level,
+  RuleParameters,
+  StationKind,
+} from '../../shared/types';
 import { kindModule, layoutOf } from '../kinds/registry';
 import type { SizeRule } from './size-rule';
 
@@ -36,6 +43,8 @@ export interface AllocationRules {
   maxStations?: number;
   /** The last phase's station count: the same count lets its grids stand (a small saving). */
   sameStationsAs?: number;
+  /** Keepers are in goal: one game with a keeper each end, not one with keepers and one without. */
+  keepersInGame?: boolean;
 }
 
 /** The same rules with a cap on stations. */
@@ -48,10 +57,14 @@ export function withStationCap(rules: AllocationRules, maxStations: number): All
     substitutes: rules.substitutes,
     maxStations,
     sameStationsAs: rules.sameStationsAs,
+    keepersInGame: rules.keepersInGame,
   };
 }
 
-export function sizeRuleOf(activity: ActivityDefinition, rules: Pick<AllocationRules, 'params' | 'level' | 'band'>): SizeRule | null {
+export function sizeRuleOf(
+  activity: ActivityDefinition,
+  rules: Pick<AllocationRules, 'params' | 'level' | 'band'>,
+): SizeRule | null {
   return kindModule(activity.kind).sizes(rules.params, rules.level, rules.band, activity);
 }
 
@@ -96,7 +109,11 @@ export function groupsOfOneKind(
         r * Math.abs(q + 1 - size.preferred) +
         (k - r) * Math.abs(q - size.preferred) +
         j * coachPenalty +
-        (game ? (k - 1) * EXTRA_GAME_COST : k === rules.sameStationsAs ? -SAME_LAYOUT_BONUS : 0);
+        (game
+          ? (k - 1) * (rules.keepersInGame ? 10 * EXTRA_GAME_COST : EXTRA_GAME_COST)
+          : k === rules.sameStationsAs
+            ? -SAME_LAYOUT_BONUS
+            : 0);
       if (!best || cost < best.cost - 1e-9) {
         const groups: GroupPlan[] = [];
         for (let g = 0; g < k; g++) {
@@ -135,7 +152,10 @@ export function allocatePhase(
     if (capLeft < 1) continue;
     // The main groups have taken their balls: the leftover groups share what is left.
     const ballsLeft = activity.balls === 'none' ? rules.kit.balls : rules.kit.balls - main.groups.length;
-    const restRules = { ...withStationCap(rules, capLeft), kit: { ...rules.kit, balls: Math.max(0, ballsLeft) } };
+    const restRules = {
+      ...withStationCap(rules, capLeft),
+      kit: { ...rules.kit, balls: Math.max(0, ballsLeft) },
+    };
     for (const sub of substitutes) {
       const rest = groupsOfOneKind(leftover, coachesLeft, sub, restRules);
       if (!rest) continue;
@@ -162,5 +182,7 @@ export function activityFeasible(
   const limit = stationLimit(activity, rules.kit);
   if (!size || limit < 1) return false;
   const stations = Math.min(limit, rules.params.supervision.stationsPerAdult * Math.max(1, coaches));
-  return n >= 1 && n + Math.min(coaches, 1) >= size.min && n <= stations * size.max + Math.min(coaches, stations);
+  return (
+    n >= 1 && n + Math.min(coaches, 1) >= size.min && n <= stations * size.max + Math.min(coaches, stations)
+  );
 }

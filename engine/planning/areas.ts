@@ -6,7 +6,13 @@ export function areaTable(params: RuleParameters, kind: StationKind, band: AgeBa
 }
 
 /** Width from the table for a group of `total` (players and any coach), before steps. */
-export function baseWidth(params: RuleParameters, kind: StationKind, band: AgeBand, level: Level, total: number) {
+export function baseWidth(
+  params: RuleParameters,
+  kind: StationKind,
+  band: AgeBand,
+  level: Level,
+  total: number,
+) {
   const t = areaTable(params, kind, band);
   return t.width * Math.sqrt(Math.max(1, total) / t.forPlayers) * params.areaLevelScale[level];
 }
@@ -15,7 +21,12 @@ export function baseWidth(params: RuleParameters, kind: StationKind, band: AgeBa
  * The table with the kind's own floor: keep-ball needs its square metres per player and its
  * shortest side (the club's `keepBallLimits`), whatever the table's minimum says.
  */
-export function boundedTable(params: RuleParameters, kind: StationKind, band: AgeBand, total: number): AreaSize {
+export function boundedTable(
+  params: RuleParameters,
+  kind: StationKind,
+  band: AgeBand,
+  total: number,
+): AreaSize {
   const t = areaTable(params, kind, band);
   if (kind !== 'keep-ball') return t;
   const limits = params.keepBallLimits;

@@ -18,7 +18,13 @@ import { breakPhase } from '../kinds/break';
 import { kindModule, layoutOf } from '../kinds/registry';
 import { shuffle } from '../random';
 import { rankedActivities } from './activities';
-import { allocatePhase, sizeRuleOf, withStationCap, type AllocationRules, type GroupPlan } from './allocation';
+import {
+  allocatePhase,
+  sizeRuleOf,
+  withStationCap,
+  type AllocationRules,
+  type GroupPlan,
+} from './allocation';
 import {
   areaForWidth,
   baseWidth,
@@ -38,7 +44,18 @@ import type { PhaseSpec } from './timing';
 /** What building needs besides the request: the rules, warnings and trace to add to. */
 export type PhaseContext = Pick<
   BuildContext,
-  'request' | 'params' | 'band' | 'forbidden' | 'rng' | 'supervision' | 'keepers' | 'cold' | 'focus' | 'recent' | 'pinned' | 'hot'
+  | 'request'
+  | 'params'
+  | 'band'
+  | 'forbidden'
+  | 'rng'
+  | 'supervision'
+  | 'keepers'
+  | 'cold'
+  | 'focus'
+  | 'recent'
+  | 'pinned'
+  | 'hot'
 > & { warnings: Notice[]; trace: TraceEntry[] };
 
 interface Attempt {
@@ -119,10 +136,14 @@ function tryActivity(
   const module = kindModule(activity.kind);
   const targets = module.targets(layoutOf(activity));
   const keeperIds = new Set(ctx.keepers.map((k) => k.id));
-  const pool = spec.keepersInGoal && module.facesShots && targets.keepers ? rest.filter((p) => keeperIds.has(p.id)) : [];
+  const pool =
+    spec.keepersInGoal && module.facesShots && targets.keepers ? rest.filter((p) => keeperIds.has(p.id)) : [];
   const per = targets.ends === 2 ? 2 : 1;
   const goalsLeft = request.equipment.goals - keeperGroups.length;
-  let wantIn = per === 2 ? 2 * Math.min(Math.floor(pool.length / 2), Math.floor(goalsLeft / 2)) : Math.min(pool.length, goalsLeft);
+  let wantIn =
+    per === 2
+      ? 2 * Math.min(Math.floor(pool.length / 2), Math.floor(goalsLeft / 2))
+      : Math.min(pool.length, goalsLeft);
 
   const cap0 = Math.max(1, ctx.supervision.maxStations - keeperGroups.length);
   let cap = cap0;
@@ -131,8 +152,13 @@ function tryActivity(
   const kit = request.equipment;
   rules = {
     ...rules,
-    kit: { ...kit, balls: Math.max(0, kit.balls - keeperGroups.length), goals: Math.max(0, kit.goals - keeperGroups.length) },
+    kit: {
+      ...kit,
+      balls: Math.max(0, kit.balls - keeperGroups.length),
+      goals: Math.max(0, kit.goals - keeperGroups.length),
+    },
     ...(previousMain ? { sameStationsAs: previousMain } : {}),
+    ...(per === 2 && wantIn >= 2 ? { keepersInGame: true } : {}),
   };
   for (;;) {
     let inGoal = wantIn;
@@ -156,7 +182,15 @@ function tryActivity(
     const keepersIn = pool.slice(0, inGoal);
     const groups = fillGroups(allocation.groups, rest, keepersIn, per, activity);
     const stations: Station[] = groups.map((g, k) =>
-      makeStation(ctx, `p${phaseIndex + 1}-s${k + 1}`, g.plan.activity, g.plan, g.players, g.keepers, startWidths),
+      makeStation(
+        ctx,
+        `p${phaseIndex + 1}-s${k + 1}`,
+        g.plan.activity,
+        g.plan,
+        g.players,
+        g.keepers,
+        startWidths,
+      ),
     );
     const activities = groups.map((g) => g.plan.activity);
     keeperGroups.forEach((g, k) => {
@@ -200,7 +234,8 @@ function finishAttempt(
   trace: TraceEntry[],
 ): Attempt {
   const { request, params, band } = ctx;
-  const name = !spec.kinds || spec.kinds.includes(activities[0].kind) ? spec.name : nameFor(activities[0].kind);
+  const name =
+    !spec.kinds || spec.kinds.includes(activities[0].kind) ? spec.name : nameFor(activities[0].kind);
   const previousGoals = previous
     ? previous.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
     : [];
@@ -283,7 +318,8 @@ function keeperWarmUpGroups(ctx: PhaseContext, players: PresentPlayer[], coaches
       }
     }
     const total = members.length + coachJoins;
-    const fit = ranked.find((r) => r.activity.players.min <= total && r.activity.players.max >= total) ?? ranked[0];
+    const fit =
+      ranked.find((r) => r.activity.players.min <= total && r.activity.players.max >= total) ?? ranked[0];
     groups.push({ activity: fit.activity, players: members, keepers: mine.map((k) => k.id), coachJoins });
   }
   return groups;
@@ -300,7 +336,12 @@ function fillGroups(
   per: number,
   main: ActivityDefinition,
 ) {
-  const groups = plans.map((plan) => ({ plan, players: [] as PresentPlayer[], keepers: [] as string[], outfield: 0 }));
+  const groups = plans.map((plan) => ({
+    plan,
+    players: [] as PresentPlayer[],
+    keepers: [] as string[],
+    outfield: 0,
+  }));
   const hosts = groups.filter((g) => g.plan.activity === main);
   keepersIn.forEach((k, i) => {
     const host = hosts[Math.floor(i / per)];
@@ -393,25 +434,37 @@ export function placeStations(
   previous: Phase | undefined,
 ): Station[] | null {
   const { params, request, band } = ctx;
-  const tables = stations.map((s) => boundedTable(params, s.activityKind, band, s.playerIds.length + s.coachJoins));
+  const tables = stations.map((s) =>
+    boundedTable(params, s.activityKind, band, s.playerIds.length + s.coachJoins),
+  );
   if (stations.some((s, i) => !meetsMinimum(tables[i], s.area))) return null;
   const buffer = params.layout.bufferM;
   const rotatable = stations.map((s) => params.kinds[s.activityKind].rotatable);
   if (previous?.stations.length) {
     const reused = reuseLayout(
       previous.stations,
-      stations.map((s, i) => ({ area: s.area, minWidth: tables[i].minWidth, maxWidth: tables[i].maxWidth, kind: s.activityKind })),
+      stations.map((s, i) => ({
+        area: s.area,
+        minWidth: tables[i].minWidth,
+        maxWidth: tables[i].maxWidth,
+        kind: s.activityKind,
+      })),
       request.space,
       buffer,
       rotatable,
     );
-    if (reused) return stations.map((s, i) => Object.assign({}, s, { area: reused[i].area, position: reused[i].position }));
+    if (reused)
+      return stations.map((s, i) =>
+        Object.assign({}, s, { area: reused[i].area, position: reused[i].position }),
+      );
   }
   let areas = stations.map((s) => s.area);
   for (let attempt = 0; attempt < 12; attempt++) {
     const placed = packStations(areas, request.space, buffer, rotatable);
     if (placed) {
-      return stations.map((s, i) => Object.assign({}, s, { area: placed[i].area, position: placed[i].position }));
+      return stations.map((s, i) =>
+        Object.assign({}, s, { area: placed[i].area, position: placed[i].position }),
+      );
     }
     const next = stations.map((s, i) => {
       const side = Math.min(areas[i].width, areas[i].length);
@@ -424,52 +477,132 @@ export function placeStations(
   return null;
 }
 
-/** Everyone in one grid as large as the space and the rule allow, with the best ball or tag game. */
-function sharedGridPhase(ctx: PhaseContext, spec: PhaseSpec, phaseIndex: number, previous: Phase | undefined): Phase {
+/**
+ * Everyone in one area as large as the space and the rule allow, playing what the whole squad can
+ * play together (the keepers in their own warm-up beside it when it is their time and it fits).
+ */
+function sharedGridPhase(
+  ctx: PhaseContext,
+  spec: PhaseSpec,
+  phaseIndex: number,
+  previous: Phase | undefined,
+): Phase {
   const { params, request } = ctx;
-  const n = request.players.length;
-  // Something the whole squad can play together, true to the part where possible: its own
-  // kinds first, then a game, a tag game, possession to a target, ball mastery.
-  // Keep-ball needs its room per player, which a too-small space cannot give.
-  const kinds = [...new Set<StationKind>([...(spec.kinds ?? []), ...WHOLE_GROUP_KINDS])].filter((k) => k !== 'keep-ball');
+  const keeperGroups = spec.keeperWarmUp
+    ? keeperWarmUpGroups(ctx, shuffle(request.players, ctx.rng), request.coaches)
+    : [];
+  const away = new Set(keeperGroups.flatMap((g) => g.players.map((p) => p.id)));
+  const withKeepers = sharedArea(
+    ctx,
+    spec,
+    request.players.filter((p) => !away.has(p.id)),
+    previous,
+    keeperGroups,
+    phaseIndex,
+  );
+  return withKeepers ?? sharedArea(ctx, spec, request.players, previous, [], phaseIndex)!;
+}
+
+function sharedArea(
+  ctx: PhaseContext,
+  spec: PhaseSpec,
+  players: PresentPlayer[],
+  previous: Phase | undefined,
+  keeperGroups: KeeperGroup[],
+  phaseIndex: number,
+): Phase | null {
+  const { params, request } = ctx;
+  const n = players.length;
+  if (!n) return null;
+  // Something the group can play together, true to the part where possible: its own kinds first,
+  // then a game, a tag game, possession to a target, ball mastery. Keep-ball needs its room per
+  // player, which a space too small for stations cannot give.
+  const kinds = [...new Set<StationKind>([...(spec.kinds ?? []), ...WHOLE_GROUP_KINDS])].filter(
+    (k) => k !== 'keep-ball',
+  );
   const options: ActivityDefinition[] = [];
   for (const kind of kinds) {
     for (const r of rankedActivities(ctx, kind)) {
       const size = sizeRuleOf(r.activity, { params, level: request.level, band: ctx.band });
-      if (size?.allows(n) && (r.activity.balls === 'none' || request.equipment.balls > 0)) options.push(r.activity);
+      if (size?.allows(n) && (r.activity.balls === 'none' || request.equipment.balls > keeperGroups.length))
+        options.push(r.activity);
     }
   }
+  // Within the day's intensity limit (the heat) when anything is.
+  const calm = options.filter((a) => a.intensity <= params.intensity.max);
+  const pool = calm.length ? calm : options;
   const activity =
-    options.find((a) => a.id !== previous?.activityId) ??
-    options[0] ??
+    pool.find((a) => a.id !== previous?.activityId) ??
+    pool[0] ??
     rankedActivities(ctx, 'ball-mastery')[0]?.activity ??
     params.activities.find((a) => a.kind === 'ball-mastery' && !a.retired) ??
     params.activities[0];
   const name = !spec.kinds || spec.kinds.includes(activity.kind) ? spec.name : nameFor(activity.kind);
   const table = params.areas[activity.kind][ctx.band];
-  const area = {
-    width: Math.max(1, Math.floor(Math.min(request.space.width, table.maxWidth))),
-    length: Math.max(1, Math.floor(Math.min(request.space.length, table.maxWidth * (table.length / table.width)))),
-  };
-  ctx.warnings.push({
-    code: 'space-too-small',
-    message: `${name}: the stations do not fit in ${request.space.width} × ${request.space.length} m even at the club's minimum sizes, so everyone plays together in one area.`,
-  });
-  ctx.trace.push({ ruleId: 'engine.layout-fallback', fired: true, effect: `${name}: everyone in one area (${activity.title})` });
   const station = makeStation(
     ctx,
     `p${phaseIndex + 1}-s1`,
     activity,
-    { activity, players: request.players.length, coachJoins: 0 },
-    request.players,
+    { activity, players: n, coachJoins: 0 },
+    players,
     [],
     {},
   );
-  station.area = area;
+  const whole = {
+    width: Math.max(1, Math.floor(Math.min(request.space.width, table.maxWidth))),
+    length: Math.max(
+      1,
+      Math.floor(Math.min(request.space.length, table.maxWidth * (table.length / table.width))),
+    ),
+  };
   const stations = [station];
-  markPhase(stations, [activity], request.space, params, request.equipment, ctx.warnings, name);
-  equipPhase(stations, [activity], request.equipment, ctx.warnings, name, ctx.cold);
-  station.progressions = progressionsFor(station, activity, params, ctx.band, request.space);
+  const activities = [activity];
+  if (keeperGroups.length) {
+    keeperGroups.forEach((g, k) => {
+      stations.push(
+        makeStation(
+          ctx,
+          `p${phaseIndex + 1}-s${k + 2}`,
+          g.activity,
+          { activity: g.activity, players: g.players.length, coachJoins: g.coachJoins },
+          g.players,
+          g.keepers,
+          {},
+        ),
+      );
+      activities.push(g.activity);
+    });
+    // The shared area gives up what the keepers' goals need, if what is left still holds the group.
+    let placed = null;
+    for (let shrink = 1; shrink >= 0.5 && !placed; shrink -= 0.1) {
+      const area = {
+        width: Math.max(1, Math.floor(whole.width * shrink)),
+        length: Math.max(1, Math.floor(whole.length * shrink)),
+      };
+      placed = packStations(
+        [area, ...stations.slice(1).map((s) => s.area)],
+        request.space,
+        params.layout.bufferM,
+        stations.map(() => true),
+      );
+    }
+    if (!placed) return null;
+    stations.forEach((s, i) => Object.assign(s, { area: placed![i].area, position: placed![i].position }));
+  } else station.area = whole;
+  ctx.warnings.push({
+    code: 'space-too-small',
+    message: `${name}: nothing in this part fits ${n} players in ${request.space.width} × ${request.space.length} m with this kit, so they play together in one area.`,
+  });
+  ctx.trace.push({
+    ruleId: 'engine.layout-fallback',
+    fired: true,
+    effect: `${name}: everyone in one area (${activity.title})`,
+  });
+  markPhase(stations, activities, request.space, params, request.equipment, ctx.warnings, name);
+  equipPhase(stations, activities, request.equipment, ctx.warnings, name, ctx.cold);
+  stations.forEach(
+    (s, i) => (s.progressions = progressionsFor(s, activities[i], params, ctx.band, request.space)),
+  );
   return {
     name,
     activityId: activity.id,
@@ -483,4 +616,9 @@ function sharedGridPhase(ctx: PhaseContext, spec: PhaseSpec, phaseIndex: number,
 }
 
 /** Kinds a whole squad can play in one area when the stations do not fit. */
-const WHOLE_GROUP_KINDS: StationKind[] = ['small-sided-game', 'tag-game', 'directional-possession', 'ball-mastery'];
+const WHOLE_GROUP_KINDS: StationKind[] = [
+  'small-sided-game',
+  'tag-game',
+  'directional-possession',
+  'ball-mastery',
+];

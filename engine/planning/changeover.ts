@@ -25,7 +25,11 @@ export function changeoverBetween(
   if (training && before && !coveredByBreak) {
     const t = params.timing;
     const work = (conesPlaced + conesLifted) / t.conesPerMinute + goalsMoved / t.goalMovesPerMinute;
-    minutes = Math.min(Math.ceil(work - 1e-9), Math.max(0, after.endMinute - after.startMinute - params.timing.minPhaseMinutes), 3);
+    minutes = Math.min(
+      Math.ceil(work - 1e-9),
+      Math.max(0, after.endMinute - after.startMinute - params.timing.minPhaseMinutes),
+      3,
+    );
   }
   return { conesPlaced, conesLifted, goalsMoved, minutes };
 }

@@ -35,7 +35,12 @@ export interface BuildContext {
   pinned: ReadonlySet<string>;
 }
 
-export function addWarning(ctx: { warnings: Notice[] }, code: string, message: string, source?: string): void {
+export function addWarning(
+  ctx: { warnings: Notice[] },
+  code: string,
+  message: string,
+  source?: string,
+): void {
   if (!ctx.warnings.some((w) => w.code === code && w.message === message))
     ctx.warnings.push(source ? { code, message, source } : { code, message });
 }

@@ -33,7 +33,8 @@ export function eligibleKeepers(
       warnings: [
         {
           code: 'keepers-no-goal',
-          message: 'No goals in the bag: goalkeepers play as outfield players today — a keeper only goes in goal where a real goal stands.',
+          message:
+            'No goals in the bag: goalkeepers play as outfield players today — a keeper only goes in goal where a real goal stands.',
         },
       ],
     };

@@ -49,7 +49,10 @@ export function equipPhase(
     });
   }
   if (stations.some((s, i) => s.equipment.balls === 0 && needs[i].needed > 0)) {
-    warnings.push({ code: 'station-without-ball', message: `${phaseName}: some stations have no ball at all.` });
+    warnings.push({
+      code: 'station-without-ball',
+      message: `${phaseName}: some stations have no ball at all.`,
+    });
   }
   if (bibs.short > 0) {
     warnings.push({

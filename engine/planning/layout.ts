@@ -125,7 +125,9 @@ export function reuseLayout(
   if (!previous.length) return null;
   const taken = new Set<number>();
   const out: (Placement | undefined)[] = new Array(wanted.length);
-  const order = wanted.map((_, i) => i).sort((a, b) => areaOf(wanted[b].area) - areaOf(wanted[a].area) || a - b);
+  const order = wanted
+    .map((_, i) => i)
+    .sort((a, b) => areaOf(wanted[b].area) - areaOf(wanted[a].area) || a - b);
   for (const sameKind of [true, false]) {
     for (const i of order) {
       if (out[i]) continue;
@@ -150,7 +152,9 @@ export function reuseLayout(
   if (!taken.size) return null;
   const rest = wanted.map((_, i) => i).filter((i) => !out[i]);
   if (rest.length) {
-    const fixed = out.filter((p): p is Placement => !!p).map((p) => ({ ...p.position, width: p.area.width, length: p.area.length }));
+    const fixed = out
+      .filter((p): p is Placement => !!p)
+      .map((p) => ({ ...p.position, width: p.area.width, length: p.area.length }));
     const placed = packAround(
       rest.map((i) => wanted[i].area),
       fixed,
@@ -186,13 +190,22 @@ interface FreeRect {
  * free rectangles (the maximal-rectangles method), each area into the free rectangle that
  * leaves the shortest side over. Null when one does not fit.
  */
-export function packAround(areas: Area[], fixed: FreeRect[], space: Space, buffer: number, rotatable: boolean[]): Placement[] | null {
+export function packAround(
+  areas: Area[],
+  fixed: FreeRect[],
+  space: Space,
+  buffer: number,
+  rotatable: boolean[],
+): Placement[] | null {
   let free: FreeRect[] = [{ x: 0, y: 0, width: space.width, length: space.length }];
   for (const f of fixed) free = subtract(free, inflate(f, buffer));
   const out: Placement[] = new Array(areas.length);
   for (const index of largestFirst(areas)) {
     const given = areas[index];
-    const options = rotatable[index] && given.width !== given.length ? [given, { width: given.length, length: given.width }] : [given];
+    const options =
+      rotatable[index] && given.width !== given.length
+        ? [given, { width: given.length, length: given.width }]
+        : [given];
     let best: { rect: FreeRect; area: Area; score: number } | null = null;
     for (const r of free) {
       for (const a of options) {
@@ -202,7 +215,12 @@ export function packAround(areas: Area[], fixed: FreeRect[], space: Space, buffe
       }
     }
     if (!best) return null;
-    const placed = { x: floor1(best.rect.x), y: floor1(best.rect.y), width: best.area.width, length: best.area.length };
+    const placed = {
+      x: floor1(best.rect.x),
+      y: floor1(best.rect.y),
+      width: best.area.width,
+      length: best.area.length,
+    };
     out[index] = { position: { x: placed.x, y: placed.y }, area: best.area };
     free = subtract(free, inflate(placed, buffer));
   }
@@ -217,15 +235,26 @@ function inflate(r: FreeRect, by: number): FreeRect {
 function subtract(free: FreeRect[], cut: FreeRect): FreeRect[] {
   const out: FreeRect[] = [];
   for (const r of free) {
-    const apart = cut.x >= r.x + r.width || cut.x + cut.width <= r.x || cut.y >= r.y + r.length || cut.y + cut.length <= r.y;
+    const apart =
+      cut.x >= r.x + r.width ||
+      cut.x + cut.width <= r.x ||
+      cut.y >= r.y + r.length ||
+      cut.y + cut.length <= r.y;
     if (apart) {
       out.push(r);
       continue;
     }
     if (cut.x > r.x) out.push({ x: r.x, y: r.y, width: cut.x - r.x, length: r.length });
-    if (cut.x + cut.width < r.x + r.width) out.push({ x: cut.x + cut.width, y: r.y, width: r.x + r.width - cut.x - cut.width, length: r.length });
+    if (cut.x + cut.width < r.x + r.width)
+      out.push({ x: cut.x + cut.width, y: r.y, width: r.x + r.width - cut.x - cut.width, length: r.length });
     if (cut.y > r.y) out.push({ x: r.x, y: r.y, width: r.width, length: cut.y - r.y });
-    if (cut.y + cut.length < r.y + r.length) out.push({ x: r.x, y: cut.y + cut.length, width: r.width, length: r.y + r.length - cut.y - cut.length });
+    if (cut.y + cut.length < r.y + r.length)
+      out.push({
+        x: r.x,
+        y: cut.y + cut.length,
+        width: r.width,
+        length: r.y + r.length - cut.y - cut.length,
+      });
   }
   // Drop rectangles inside another: they add nothing.
   return out.filter(

@@ -17,7 +17,15 @@ import type {
   StationKind,
 } from '../../shared/types';
 import { round1, type Rect } from '../geometry';
-import { FACING, OPPOSITE, edgeDirection, frameOf, toSpace, type Direction, type Frame } from '../kinds/frame';
+import {
+  FACING,
+  OPPOSITE,
+  edgeDirection,
+  frameOf,
+  toSpace,
+  type Direction,
+  type Frame,
+} from '../kinds/frame';
 import type { Drawing, LocalPoint } from '../kinds/kind-module';
 import { kindModule, layoutOf } from '../kinds/registry';
 
@@ -69,11 +77,17 @@ export function markPhase(
     let far: Direction = long[0];
     let clearance = Number.POSITIVE_INFINITY;
     if (spec.ends === 2) {
-      const a = Math.min(clear(r, long[0], rects, i, corridorHalf), clear(r, long[1], rects, i, corridorHalf));
+      const a = Math.min(
+        clear(r, long[0], rects, i, corridorHalf),
+        clear(r, long[1], rects, i, corridorHalf),
+      );
       far = long[0];
       clearance = a;
       // Two ends along the long side, as a pitch is, unless that shoots straight at a neighbour.
-      const b = Math.min(clear(r, short[0], rects, i, corridorHalf), clear(r, short[1], rects, i, corridorHalf));
+      const b = Math.min(
+        clear(r, short[0], rects, i, corridorHalf),
+        clear(r, short[1], rects, i, corridorHalf),
+      );
       if (b > a && a < params.layout.shotClearanceM) {
         far = short[0];
         clearance = b;
@@ -90,12 +104,18 @@ export function markPhase(
       }
       clearance = best;
     }
-    if (module.facesShots && spec.ends > 0 && clearance < params.layout.shotClearanceM && Number.isFinite(clearance)) {
+    if (
+      module.facesShots &&
+      spec.ends > 0 &&
+      clearance < params.layout.shotClearanceM &&
+      Number.isFinite(clearance)
+    ) {
       shotsBlocked = true;
     }
     frames.push(frameOf(r, far));
     if (spec.ends >= 1) ends[i].push({ index: i, direction: far, kind: 'none', optional: !!spec.optional });
-    if (spec.ends === 2) ends[i].push({ index: i, direction: OPPOSITE[far], kind: 'none', optional: !!spec.optional });
+    if (spec.ends === 2)
+      ends[i].push({ index: i, direction: OPPOSITE[far], kind: 'none', optional: !!spec.optional });
   });
 
   // Goals: keepers' stations first (they were promised one per keeper), then by kind.
@@ -116,9 +136,12 @@ export function markPhase(
     const keepers = station.roles.goalkeeper ?? [];
     const goals = ends[i].filter((t) => t.kind === 'goal').length;
     // Never a keeper without a real goal: they play out instead (keepers warming up take turns in one).
-    if (keepers.length && goals < keepersAtOnce(station)) station.roles = { ...station.roles, goalkeeper: [] };
+    if (keepers.length && goals < keepersAtOnce(station))
+      station.roles = { ...station.roles, goalkeeper: [] };
   });
-  const drawings: Drawing[] = stations.map((s, i) => kindModule(s.activityKind).draw(frames[i], s, layoutOf(activities[i])));
+  const drawings: Drawing[] = stations.map((s, i) =>
+    kindModule(s.activityKind).draw(frames[i], s, layoutOf(activities[i])),
+  );
   let conesLeft = kit.cones;
   const cones: Point[][] = stations.map(() => []);
   const gates: GoalPlacement[][] = stations.map(() => []);
@@ -140,7 +163,7 @@ export function markPhase(
       const points = pick(drawings[i]);
       if (!points.length) return;
       if (points.length > conesLeft) {
-        if (what) notes[i].push(`No cones left for ${what}: ${drawings[i].markerAdvice}.`);
+        if (what) notes[i].push(`No cones left for ${what}: use bibs, bags or bottles instead.`);
         return;
       }
       cones[i].push(...points.map((p) => toSpace(frames[i], p.u, p.v)));
@@ -148,11 +171,11 @@ export function markPhase(
     });
   };
   endGates(false);
-  tier((d) => d.essential, 'its markers');
+  tier((d) => d.essential, 'its spots and lines');
   stations.forEach((_, i) => {
     for (const g of drawings[i].gates ?? []) {
       if (conesLeft < 2) {
-        notes[i].push(`No cones left for its gates: ${drawings[i].markerAdvice}.`);
+        notes[i].push('No cones left for its gates: two bibs or bottles make each gate.');
         break;
       }
       const dir = edgeDirection(frames[i], g.edge === 'near' ? 'near' : 'far');
@@ -197,7 +220,8 @@ export function markPhase(
       }));
     } else delete station.lines;
     if (targetless) notes[i].push(targetlessAdvice(station.activityKind));
-    if (notes[i].length) station.notes = [...(station.notes ?? []).filter((n) => !isMarkingNote(n)), ...notes[i]];
+    if (notes[i].length)
+      station.notes = [...(station.notes ?? []).filter((n) => !isMarkingNote(n)), ...notes[i]];
     else if (station.notes) {
       station.notes = station.notes.filter((n) => !isMarkingNote(n));
       if (!station.notes.length) delete station.notes;
@@ -205,7 +229,11 @@ export function markPhase(
   });
   const anyGate = ends.some((l) => l.some((t) => t.kind === 'gate' && !t.optional));
   if (anyGate) {
-    pushOnce(warnings, 'gates-for-goals', `${phaseName}: gates of two cones stand in where there are not enough goals.`);
+    pushOnce(
+      warnings,
+      'gates-for-goals',
+      `${phaseName}: gates of two cones stand in where there are not enough goals.`,
+    );
   }
   if (shotsBlocked) {
     warnings.push({

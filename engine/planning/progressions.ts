@@ -1,5 +1,13 @@
 /** Easier and harder steps for a station: the next area within the club's bounds, then the activity's own steps. */
-import type { ActivityDefinition, AgeBand, Area, RuleParameters, Space, Station, StationKind } from '../../shared/types';
+import type {
+  ActivityDefinition,
+  AgeBand,
+  Area,
+  RuleParameters,
+  Space,
+  Station,
+  StationKind,
+} from '../../shared/types';
 import { areaForWidth, boundedTable, describeArea, steppedWidth } from './areas';
 
 /** The table's width side of an area (tables are given across × along with width ≤ length). */
@@ -43,7 +51,11 @@ export function progressionsFor(
   const harderArea = steppedArea(params, kind, band, station.area, 'harder', space, total);
   const from = describeArea(station.area);
   return {
-    easier: easierArea ? [`Area ${from} → ${describeArea(easierArea)}`, ...activity.easier] : [...activity.easier],
-    harder: harderArea ? [`Area ${from} → ${describeArea(harderArea)}`, ...activity.harder] : [...activity.harder],
+    easier: easierArea
+      ? [`Area ${from} → ${describeArea(easierArea)}`, ...activity.easier]
+      : [...activity.easier],
+    harder: harderArea
+      ? [`Area ${from} → ${describeArea(harderArea)}`, ...activity.harder]
+      : [...activity.harder],
   };
 }

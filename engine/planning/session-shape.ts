@@ -3,13 +3,7 @@
  * re-fills the technical and opposed parts, each part gets its activities ranked, the coach's
  * pins and the club's required kinds find a place, and short slots lose their least important parts.
  */
-import type {
-  ActivityDefinition,
-  Focus,
-  SessionSlot,
-  SlotRole,
-  StationKind,
-} from '../../shared/types';
+import type { ActivityDefinition, Focus, SessionSlot, SlotRole, StationKind } from '../../shared/types';
 import { FOCUSES } from '../../shared/types';
 import { activityBlocked, activityById, kindBlocked, rankedActivities, type Ranked } from './activities';
 import { activityFeasible, type AllocationRules } from './allocation';
@@ -56,7 +50,8 @@ export function chooseTheme(ctx: BuildContext): Focus | undefined {
   if (request.focus?.length) return request.focus[0];
   const allowed = params.ageGroups[request.ageGroup].allowedKinds;
   const used = new Map<Focus, number>();
-  for (const id of ctx.recent) for (const f of activityById(params, id)?.focus ?? []) used.set(f, (used.get(f) ?? 0) + 1);
+  for (const id of ctx.recent)
+    for (const f of activityById(params, id)?.focus ?? []) used.set(f, (used.get(f) ?? 0) + 1);
   const options = FOCUSES.filter(
     (f) =>
       (f !== 'goalkeeping' || ctx.keepers.length > 0) &&
@@ -69,7 +64,11 @@ export function chooseTheme(ctx: BuildContext): Focus | undefined {
   return best[Math.floor(ctx.rng() * best.length)];
 }
 
-export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: Focus | undefined): SlotPlan[] {
+export function sessionSlots(
+  ctx: BuildContext,
+  rules: AllocationRules,
+  theme: Focus | undefined,
+): SlotPlan[] {
   const { request, params } = ctx;
   const n = request.players.length;
   const fits = (a: ActivityDefinition) => activityFeasible(n, request.coaches, a, rules);
@@ -83,7 +82,9 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
   const order = shape.map((_, i) => i).sort((a, b) => shape[a].priority - shape[b].priority || a - b);
   for (const index of order) {
     const slot = shape[index];
-    const neighbours = [decided[index - 1], decided[index + 1]].flatMap((d) => (d?.candidates[0] ? [d.candidates[0].kind] : []));
+    const neighbours = [decided[index - 1], decided[index + 1]].flatMap((d) =>
+      d?.candidates[0] ? [d.candidates[0].kind] : [],
+    );
     let kinds = slot.kinds;
     let themed: StationKind[] = [];
     if (theme && (slot.role === 'technical' || slot.role === 'opposed')) {
@@ -116,14 +117,21 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
       }
     }
     if (!ranked.length) {
-      addWarning(ctx, 'phase-dropped', `No activity could fill “${slot.name}” for this group, so that part is left out.`);
+      addWarning(
+        ctx,
+        'phase-dropped',
+        `No activity could fill “${slot.name}” for this group, so that part is left out.`,
+      );
       decided[index] = null;
       continue;
     }
     const plan: SlotPlan = {
       role: slot.role,
       kinds,
-      name: kinds.includes(ranked[0].activity.kind) || slot.kinds.includes(ranked[0].activity.kind) ? slot.name : nameFor(ranked[0].activity.kind),
+      name:
+        kinds.includes(ranked[0].activity.kind) || slot.kinds.includes(ranked[0].activity.kind)
+          ? slot.name
+          : nameFor(ranked[0].activity.kind),
       share: slot.share,
       priority: slot.priority,
       maxMinutes: slot.maxMinutes,
@@ -139,7 +147,14 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
   if (request.equipment.balls < n) addShortBallOptions(ctx, slots, fits);
   if (!slots.length) {
     // Nothing in the shape can be played: everyone together in one grid (see sharedGridPhase).
-    slots.push({ role: 'arrival', name: 'Everyone together', kinds: [], share: 1, priority: 0, candidates: [] });
+    slots.push({
+      role: 'arrival',
+      name: 'Everyone together',
+      kinds: [],
+      share: 1,
+      priority: 0,
+      candidates: [],
+    });
   }
   // Distinct activities: a later part does not repeat an earlier part's first choice.
   for (const s of slots) {
@@ -154,11 +169,17 @@ export function sessionSlots(ctx: BuildContext, rules: AllocationRules, theme: F
  * Activities of the kinds, best first: a kind lower in the list, or a kind a neighbouring part
  * plays, counts a little against; a kind the training theme names counts for.
  */
-function rankKinds(ctx: BuildContext, kinds: StationKind[], themed: StationKind[] = [], neighbours: StationKind[] = []): Ranked[] {
+function rankKinds(
+  ctx: BuildContext,
+  kinds: StationKind[],
+  themed: StationKind[] = [],
+  neighbours: StationKind[] = [],
+): Ranked[] {
   const out: Ranked[] = [];
   kinds.forEach((kind, i) => {
     if (kindBlocked(ctx.params, ctx.request.ageGroup, ctx.forbidden, kind)) return;
-    const rank = i - (themed.includes(kind) ? THEME_BONUS : 0) + (neighbours.includes(kind) ? REPEAT_COST : 0);
+    const rank =
+      i - (themed.includes(kind) ? THEME_BONUS : 0) + (neighbours.includes(kind) ? REPEAT_COST : 0);
     out.push(...rankedActivities(ctx, kind, rank));
   });
   return out.sort((a, b) => b.score - a.score);
@@ -198,7 +219,8 @@ function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefin
   for (const id of request.pinnedActivityIds ?? []) {
     const a = activityById(params, id);
     const blocked = a
-      ? activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, a) ?? (fits(a) ? null : 'too few players or not enough kit for it')
+      ? (activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, a) ??
+        (fits(a) ? null : 'too few players or not enough kit for it'))
       : 'not in the club’s activities';
     if (!a || blocked) {
       addWarning(ctx, 'pin-not-used', `${a?.title ?? id} was pinned but cannot be used today: ${blocked}.`);
@@ -207,7 +229,15 @@ function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefin
     let slot = slots.find((s) => !taken.has(s) && s.candidates.some((c) => c.kind === a.kind));
     if (!slot) {
       const average = slots.length ? slots.reduce((s, x) => s + x.share, 0) / slots.length : 1;
-      slot = { role: 'technical', name: nameFor(a.kind), kinds: [a.kind], share: average, priority: 0, maxMinutes: 12, candidates: [] };
+      slot = {
+        role: 'technical',
+        name: nameFor(a.kind),
+        kinds: [a.kind],
+        share: average,
+        priority: 0,
+        maxMinutes: 12,
+        candidates: [],
+      };
       // Before the session's closing parts (game, sharp finish, cool-down), so those still close it.
       let at = slots.length;
       while (at > 0 && CLOSING.has(slots[at - 1].role)) at--;
@@ -216,7 +246,11 @@ function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefin
     slot.candidates = [a, ...slot.candidates.filter((c) => c.id !== a.id)];
     slot.priority = Math.min(slot.priority, 0);
     taken.add(slot);
-    ctx.trace.push({ ruleId: 'engine.pinned', fired: true, effect: `${a.title} pinned by the coach: in “${slot.name}”` });
+    ctx.trace.push({
+      ruleId: 'engine.pinned',
+      fired: true,
+      effect: `${a.title} pinned by the coach: in “${slot.name}”`,
+    });
   }
 }
 
@@ -232,7 +266,8 @@ function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityD
     if (!ranked.length) continue;
     const average = slots.length ? slots.reduce((s, x) => s + x.share, 0) / slots.length : 1;
     const slot: SlotPlan = {
-      role: req.kind === 'small-sided-game' ? 'game' : req.kind === 'movement-prep' ? 'movement' : 'technical',
+      role:
+        req.kind === 'small-sided-game' ? 'game' : req.kind === 'movement-prep' ? 'movement' : 'technical',
       name: nameFor(req.kind),
       kinds: [req.kind],
       share: average,
@@ -241,7 +276,11 @@ function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityD
     };
     if (req.kind === 'movement-prep') slots.unshift(slot);
     else slots.push(slot);
-    ctx.trace.push({ ruleId: 'engine.required-phase', fired: true, effect: `added ${req.kind}: ${req.reason}` });
+    ctx.trace.push({
+      ruleId: 'engine.required-phase',
+      fired: true,
+      effect: `added ${req.kind}: ${req.reason}`,
+    });
   }
 }
 
@@ -249,7 +288,11 @@ function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityD
  * With fewer balls than players, every part may fall back on activities that share a ball in a
  * group (tried only when its own cannot keep everyone busy with the balls there are).
  */
-function addShortBallOptions(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefinition) => boolean): void {
+function addShortBallOptions(
+  ctx: BuildContext,
+  slots: SlotPlan[],
+  fits: (a: ActivityDefinition) => boolean,
+): void {
   const shared: ActivityDefinition[] = [];
   for (const kind of SHARED_BALL_KINDS) {
     if (kindBlocked(ctx.params, ctx.request.ageGroup, ctx.forbidden, kind)) continue;
@@ -260,7 +303,13 @@ function addShortBallOptions(ctx: BuildContext, slots: SlotPlan[], fits: (a: Act
 }
 
 /** Kinds whose activities keep a whole group busy with one or two balls. */
-const SHARED_BALL_KINDS: StationKind[] = ['passing-pattern', 'keep-ball', 'directional-possession', 'small-sided-game', 'tag-game'];
+const SHARED_BALL_KINDS: StationKind[] = [
+  'passing-pattern',
+  'keep-ball',
+  'directional-possession',
+  'small-sided-game',
+  'tag-game',
+];
 
 const CLOSING = new Set<SlotRole>(['game', 'finish', 'cool-down']);
 

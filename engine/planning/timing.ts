@@ -29,7 +29,8 @@ export function planTimeline(ctx: BuildContext, slots: SlotPlan[]): PhaseSpec[] 
   const t = params.timing;
   const stretch = ctx.hot ? t.heatDrinksEveryMinutes : t.drinksEveryMinutes;
   let breaks = request.minutes > stretch ? Math.ceil(request.minutes / stretch) - 1 : 0;
-  if (breaks * t.drinksMinutes >= request.minutes / 3) breaks = Math.floor(request.minutes / 3 / t.drinksMinutes);
+  if (breaks * t.drinksMinutes >= request.minutes / 3)
+    breaks = Math.floor(request.minutes / 3 / t.drinksMinutes);
   let kept = slots;
   let timeline: PhaseSpec[] = [];
   for (let attempt = 0; attempt < 4; attempt++) {
@@ -66,7 +67,11 @@ function fitToMinutes(timeline: PhaseSpec[], minutes: number): void {
   let longest = -1;
   timeline.forEach((p, i) => {
     if (p.slot === 'break') return;
-    if (longest < 0 || p.endMinute - p.startMinute > timeline[longest].endMinute - timeline[longest].startMinute) longest = i;
+    if (
+      longest < 0 ||
+      p.endMinute - p.startMinute > timeline[longest].endMinute - timeline[longest].startMinute
+    )
+      longest = i;
   });
   if (longest < 0 || timeline[longest].endMinute - timeline[longest].startMinute + diff < 1) {
     // Nothing can absorb it: drop the breaks' time into the first part instead.
@@ -97,7 +102,9 @@ function dropForTime(ctx: BuildContext, slots: SlotPlan[], minutes: number): Slo
 
 /** Minutes by share (the focus stretching its kinds), each part within its cap where the total allows. */
 function splitWithCaps(total: number, slots: SlotPlan[], minEach: number, ctx: BuildContext): number[] {
-  const shares = slots.map((s) => s.share * (s.candidates[0] ? (ctx.params.focusBoost[s.candidates[0].kind] ?? 1) : 1));
+  const shares = slots.map(
+    (s) => s.share * (s.candidates[0] ? (ctx.params.focusBoost[s.candidates[0].kind] ?? 1) : 1),
+  );
   const caps = slots.map((s) => s.maxMinutes ?? Number.POSITIVE_INFINITY);
   // Water-filling: parts at their cap keep it, the rest share what is left by their shares.
   const exact = new Array<number>(slots.length).fill(0);
@@ -128,7 +135,9 @@ export function wholeMinutes(total: number, exact: number[], minEach: number): n
   const scaled = exact.map((x) => (x / sum) * total);
   const out = scaled.map((x) => Math.floor(x));
   let left = total - out.reduce((s, x) => s + x, 0);
-  const order = scaled.map((x, i) => ({ i, frac: x - Math.floor(x) })).sort((a, b) => b.frac - a.frac || a.i - b.i);
+  const order = scaled
+    .map((x, i) => ({ i, frac: x - Math.floor(x) }))
+    .sort((a, b) => b.frac - a.frac || a.i - b.i);
   for (let k = 0; left > 0 && order.length; k = (k + 1) % order.length, left--) out[order[k].i]++;
   const floor = Math.min(minEach, Math.floor(total / Math.max(1, exact.length)));
   for (let i = 0; i < out.length; i++) {
@@ -170,7 +179,13 @@ function withBreaks(
     played += length;
   };
   const drink = () => {
-    out.push({ name: hot ? 'Drinks break (heat)' : 'Drinks break', slot: 'break', candidates: [], startMinute: clock, endMinute: clock + drinks });
+    out.push({
+      name: hot ? 'Drinks break (heat)' : 'Drinks break',
+      slot: 'break',
+      candidates: [],
+      startMinute: clock,
+      endMinute: clock + drinks,
+    });
     clock += drinks;
     run = 0;
   };

@@ -37,7 +37,10 @@ export function playedMinutes(phase: Phase): number {
   return phase.endMinute - phase.startMinute - (phase.changeover?.minutes ?? 0);
 }
 
-export function estimateTouches(phases: Phase[], params: RuleParameters): Pick<Plan, 'touches' | 'activeShare'> {
+export function estimateTouches(
+  phases: Phase[],
+  params: RuleParameters,
+): Pick<Plan, 'touches' | 'activeShare'> {
   const touches = new Map<string, number>();
   let active = 0;
   let total = 0;

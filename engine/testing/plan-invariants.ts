@@ -17,8 +17,13 @@ export interface InvariantOptions {
   strictWaiting?: boolean;
 }
 
-export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, options: InvariantOptions | number = {}): string[] {
-  const { fromMinute = 0, strictWaiting = false } = typeof options === 'number' ? { fromMinute: options } : options;
+export function brokenInvariants(
+  plan: Plan,
+  ruleSet: RuleSetDocument,
+  options: InvariantOptions | number = {},
+): string[] {
+  const { fromMinute = 0, strictWaiting = false } =
+    typeof options === 'number' ? { fromMinute: options } : options;
   const out: string[] = [];
   const req = plan.request;
   const params = ruleSet.parameters;
@@ -30,10 +35,14 @@ export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, options: 
   let warmedUp = false;
   let sinceBreak = 0;
   const stretch =
-    t !== undefined && t >= params.cautions.heatC ? params.timing.heatDrinksEveryMinutes : params.timing.drinksEveryMinutes;
+    t !== undefined && t >= params.cautions.heatC
+      ? params.timing.heatDrinksEveryMinutes
+      : params.timing.drinksEveryMinutes;
   for (const [pi, phase] of plan.phases.entries()) {
-    if (phase.startMinute !== clock) out.push(`phase ${pi} starts at ${phase.startMinute}, expected ${clock}`);
-    if (!Number.isInteger(phase.startMinute) || !Number.isInteger(phase.endMinute)) out.push(`phase ${pi} not whole minutes`);
+    if (phase.startMinute !== clock)
+      out.push(`phase ${pi} starts at ${phase.startMinute}, expected ${clock}`);
+    if (!Number.isInteger(phase.startMinute) || !Number.isInteger(phase.endMinute))
+      out.push(`phase ${pi} not whole minutes`);
     if (phase.endMinute <= phase.startMinute) out.push(`phase ${pi} is empty`);
     clock = phase.endMinute;
     if (phase.activityKind === 'break') {
@@ -42,7 +51,8 @@ export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, options: 
       continue;
     }
     sinceBreak += phase.endMinute - phase.startMinute;
-    if (sinceBreak > stretch + params.timing.minPhaseMinutes) out.push(`phase ${pi}: ${sinceBreak} min without a drinks break`);
+    if (sinceBreak > stretch + params.timing.minPhaseMinutes)
+      out.push(`phase ${pi}: ${sinceBreak} min without a drinks break`);
     if (phase.stations.some((s) => s.activityKind === 'goalkeeping')) warmedUp = true;
     if (phase.endMinute <= fromMinute) continue;
 
@@ -62,7 +72,12 @@ export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, options: 
     for (const [i, a] of phase.stations.entries()) {
       const ax2 = a.position.x + a.area.width;
       const ay2 = a.position.y + a.area.length;
-      if (a.position.x < 0 || a.position.y < 0 || ax2 > req.space.width + 1e-9 || ay2 > req.space.length + 1e-9) {
+      if (
+        a.position.x < 0 ||
+        a.position.y < 0 ||
+        ax2 > req.space.width + 1e-9 ||
+        ay2 > req.space.length + 1e-9
+      ) {
         out.push(`phase ${pi}: ${a.id} outside the space`);
       }
       for (const b of phase.stations.slice(i + 1)) {
@@ -75,8 +90,10 @@ export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, options: 
       }
       const inside = (p: { x: number; y: number }) =>
         p.x >= a.position.x - 0.05 && p.x <= ax2 + 0.05 && p.y >= a.position.y - 0.05 && p.y <= ay2 + 0.05;
-      for (const c of a.conePositions) if (!inside(c)) out.push(`phase ${pi}: ${a.id} has a cone outside its area`);
-      for (const p of a.positions) if (!inside(p)) out.push(`phase ${pi}: ${a.id} has someone starting outside its area`);
+      for (const c of a.conePositions)
+        if (!inside(c)) out.push(`phase ${pi}: ${a.id} has a cone outside its area`);
+      for (const p of a.positions)
+        if (!inside(p)) out.push(`phase ${pi}: ${a.id} has someone starting outside its area`);
       const drawn = a.positions.filter((p) => p.id !== 'coach').map((p) => p.id);
       if (drawn.length !== a.playerIds.length || a.playerIds.some((id) => !drawn.includes(id))) {
         out.push(`phase ${pi}: ${a.id} does not draw every player once`);
@@ -89,7 +106,8 @@ export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, options: 
           Math.abs(g.y - ay2) < 0.05;
         if (!onEdge) out.push(`phase ${pi}: ${a.id} has a goal or gate off its edge`);
       }
-      if (!age.allowedKinds.includes(a.activityKind)) out.push(`phase ${pi}: ${a.activityKind} not for ${req.ageGroup}`);
+      if (!age.allowedKinds.includes(a.activityKind))
+        out.push(`phase ${pi}: ${a.activityKind} not for ${req.ageGroup}`);
       out.push(...stationInvariants(plan, ruleSet, a, pi, keepers, warmedUp));
       const limit = cold ? 0 : 1;
       if ((a.waiting ?? 0) > limit) {
@@ -99,7 +117,8 @@ export function brokenInvariants(plan: Plan, ruleSet: RuleSetDocument, options: 
             (w.message.startsWith(`${phase.name}:`) ||
               w.message.startsWith(`${phase.name.replace(/ \(continued\)$/, '')}:`)),
         );
-        if (strictWaiting || !told) out.push(`phase ${pi}: ${a.id} has ${a.waiting} waiting${told ? '' : ' and no warning says so'}`);
+        if (strictWaiting || !told)
+          out.push(`phase ${pi}: ${a.id} has ${a.waiting} waiting${told ? '' : ' and no warning says so'}`);
       }
     }
   }
@@ -124,9 +143,13 @@ function stationInvariants(
   const atOnce = a.activityKind === 'goalkeeping' ? Math.min(1, inGoal.length) : inGoal.length;
   if (atOnce > goals) out.push(`phase ${pi}: ${a.id} has a keeper without a real goal`);
   if (inGoal.some((id) => !keepers.has(id))) out.push(`phase ${pi}: ${a.id} puts a non-keeper in goal`);
-  if (inGoal.length && SHOTS.includes(a.activityKind) && !warmedUp) out.push(`phase ${pi}: ${a.id} keeper faces shots before warming up`);
-  const needsBall = a.activityKind !== 'movement-prep' && params.activities.find((x) => x.id === a.activityId)?.balls !== 'none';
-  if (needsBall && req.equipment.balls > 0 && a.equipment.balls === 0) out.push(`phase ${pi}: ${a.id} has no ball`);
+  if (inGoal.length && SHOTS.includes(a.activityKind) && !warmedUp)
+    out.push(`phase ${pi}: ${a.id} keeper faces shots before warming up`);
+  const needsBall =
+    a.activityKind !== 'movement-prep' &&
+    params.activities.find((x) => x.id === a.activityId)?.balls !== 'none';
+  if (needsBall && req.equipment.balls > 0 && a.equipment.balls === 0)
+    out.push(`phase ${pi}: ${a.id} has no ball`);
   if (GAME_LIKE.includes(a.activityKind)) {
     const teams = a.roles.teams;
     if (!teams) out.push(`phase ${pi}: ${a.id} has no sides`);
@@ -140,7 +163,9 @@ function stationInvariants(
       if (a.activityKind === 'small-sided-game') {
         const format = params.gameFormats[params.ageGroups[req.ageGroup].band];
         if (Math.max(teams[0].length, teams[1].length) > format.maxPerSide) {
-          out.push(`phase ${pi}: ${a.id} ${teams[0].length}v${teams[1].length} over ${format.maxPerSide} a side`);
+          out.push(
+            `phase ${pi}: ${a.id} ${teams[0].length}v${teams[1].length} over ${format.maxPerSide} a side`,
+          );
         }
       }
     }
@@ -149,10 +174,14 @@ function stationInvariants(
     const d = a.roles.defenders?.length ?? 0;
     const att = (a.roles.attackers?.length ?? 0) + a.coachJoins;
     if (d < 1 || att / d > 4 || att / d < 2) out.push(`phase ${pi}: keep-ball ${att}v${d}`);
-    if (d > 1 && a.roles.defenders!.every((id) => keepers.has(id))) out.push(`phase ${pi}: keepers defending keep-ball`);
+    if (d > 1 && a.roles.defenders!.every((id) => keepers.has(id)))
+      out.push(`phase ${pi}: keepers defending keep-ball`);
     const n = a.playerIds.length + a.coachJoins;
     const lim = params.keepBallLimits;
-    if (Math.min(a.area.width, a.area.length) < lim.minSideM || a.area.width * a.area.length < lim.minM2PerPlayer * n - 1e-9) {
+    if (
+      Math.min(a.area.width, a.area.length) < lim.minSideM ||
+      a.area.width * a.area.length < lim.minM2PerPlayer * n - 1e-9
+    ) {
       out.push(`phase ${pi}: keep-ball ${a.area.width}×${a.area.length} for ${n}`);
     }
   }
