@@ -23,11 +23,13 @@ const ruleSet = (over: Partial<RuleSetDto>): RuleSetDto => ({
 });
 
 describe('ClubRulesPage', () => {
-  function setUp(versions: RuleSetDto[]) {
+  async function setUp(versions: RuleSetDto[]) {
     TestBed.configureTestingModule({
       imports: [ClubRulesPage],
       providers: [provideHttpClient(), provideHttpClientTesting(), provideNoopAnimations()],
     });
+    // The activities tab is loaded on demand (@defer): its parts are resolved first.
+    await TestBed.compileComponents();
     const fixture = TestBed.createComponent(ClubRulesPage);
     const http = TestBed.inject(HttpTestingController);
     http.expectOne('/api/rule-sets').flush(versions);
@@ -42,7 +44,7 @@ describe('ClubRulesPage', () => {
   }
 
   it('shows the published version read-only until the lead starts a draft', async () => {
-    const { fixture, http, el, button, input } = setUp([ruleSet({})]);
+    const { fixture, http, el, button, input } = await setUp([ruleSet({})]);
     await fixture.whenStable();
     expect(el.textContent).toContain('version 1');
     expect(input('/parameters/keepBall/beginner/maxAttackersPerDefender').readOnly).toBe(true);
@@ -57,7 +59,7 @@ describe('ClubRulesPage', () => {
   });
 
   it('with nothing published, shows the starting rules read-only and lets the lead try them', async () => {
-    const { fixture, http, el, input } = setUp([]);
+    const { fixture, http, el, input } = await setUp([]);
     http
       .expectOne('/api/rule-sets/default')
       .flush(ruleSet({ id: 'default', authorName: 'Conewise', revision: 0 }));
@@ -79,7 +81,7 @@ describe('ClubRulesPage', () => {
   });
 
   it('on a 409 keeps the edit, then reloads the other save and re-applies it on top', async () => {
-    const { fixture, http, el, button, input } = setUp([
+    const { fixture, http, el, button, input } = await setUp([
       ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 3 }),
       ruleSet({}),
     ]);
@@ -134,7 +136,9 @@ describe('ClubRulesPage', () => {
   });
 
   it('pins a rule problem found by the engine in the browser', async () => {
-    const { fixture, el, input } = setUp([ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 })]);
+    const { fixture, el, input } = await setUp([
+      ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 }),
+    ]);
     await fixture.whenStable();
     const formats = input('/parameters/keepBall/beginner/formats');
     formats.value = '5v1';
@@ -145,5 +149,37 @@ describe('ClubRulesPage', () => {
         return el.querySelector('[data-testid=problem-count]')?.textContent ?? '';
       })
       .toContain('1 problem');
+  });
+
+  it('saves a retired activity into the draft at once, with If-Match, and says so beside it', async () => {
+    const { fixture, http, el } = await setUp([
+      ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 5 }),
+    ]);
+    await fixture.whenStable();
+    Array.from(el.querySelectorAll<HTMLElement>('[role=tab]'))
+      .find((t) => t.textContent?.trim() === 'Our activities')!
+      .click();
+    await expect
+      .poll(async () => {
+        await fixture.whenStable();
+        return el.querySelectorAll('cw-club-activities [data-activity]').length;
+      })
+      .toBeGreaterThan(0);
+    const activities = (defaultRules as unknown as { parameters: { activities: { id: string }[] } })
+      .parameters.activities;
+    const row = el.querySelector<HTMLElement>(`cw-club-activities [data-activity="${activities[0].id}"]`)!;
+    Array.from(row.querySelectorAll('button'))
+      .find((b) => b.textContent?.includes('Retire'))!
+      .click();
+    const put = http.expectOne('/api/rule-sets/d2');
+    expect(put.request.method).toBe('PUT');
+    expect(put.request.headers.get('If-Match')).toBe('"5"');
+    const sent = put.request.body as { body: { parameters: { activities: { retired?: boolean }[] } } };
+    expect(sent.body.parameters.activities[0].retired).toBe(true);
+    expect(sent.body.parameters.activities.filter((a) => a.retired)).toHaveLength(1);
+    put.flush(ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 6, body: sent.body }));
+    await fixture.whenStable();
+    expect(row.textContent).toContain('Retired in the draft');
+    expect(el.querySelector('[data-testid=draft-state]')?.getAttribute('data-unsaved')).toBe('0');
   });
 });
