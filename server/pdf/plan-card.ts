@@ -532,13 +532,26 @@ export function groupList(station: Station, names: (id: string) => string): stri
     return `${station.playerIds.indexOf(id) + 1} ${names(id)}${tag ? ` (${tag})` : ''}`;
   };
   const sides = station.roles.teams;
-  // Two sides: each listed under its name once rather than a tag on every player.
-  const group = sides
-    ? sides.map(
+  // Two sides: each listed under its name once rather than a tag on every player; anyone on
+  // neither side (a neutral, a server) after them under their role.
+  let group: string[];
+  if (sides) {
+    const onSide = new Set(sides.flat());
+    const others = new Map<string, string[]>();
+    for (const id of station.playerIds.filter((p) => !onSide.has(p))) {
+      const label = POSITION_STYLE[roleOf.get(id) ?? 'player'].label;
+      others.set(label, [...(others.get(label) ?? []), entry(id, {})]);
+    }
+    group = [
+      ...sides.map(
         (side, i) =>
           `${POSITION_STYLE[i === 0 ? 'team-a' : 'team-b'].label}: ${side.map((id) => entry(id, { goalkeeper: 'GK' })).join(', ')}`,
-      )
-    : station.playerIds.map((id) => entry(id, ROLE_TAGS));
+      ),
+      ...[...others].map(([label, entries]) => `${label}: ${entries.join(', ')}`),
+    ];
+  } else {
+    group = station.playerIds.map((id) => entry(id, ROLE_TAGS));
+  }
   if (station.coachJoins) group.push('C: a coach joins');
   return group;
 }

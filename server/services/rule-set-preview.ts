@@ -22,7 +22,7 @@ interface Case {
   request: PlanRequest;
 }
 
-/** Squads that stress the rules: few, odd, many, a tiny patch, no goals. */
+/** Squads that stress the rules: few, odd, many, a tiny patch, no goals, an hour's training with keepers. */
 export function sampleRequests(ageGroup: AgeGroup, level: Level): Case[] {
   const squad = (n: number) =>
     Array.from({ length: n }, (_, i) => ({ id: `sample-${i + 1}`, name: `Player ${i + 1}` }));
@@ -50,6 +50,18 @@ export function sampleRequests(ageGroup: AgeGroup, level: Level): Case[] {
       label: 'sample: no goals (12)',
       source: 'sample',
       request: { ...base(12), equipment: { ...base(12).equipment, goals: 0 } },
+    },
+    {
+      // Long enough for drinks breaks, a theme and the keepers' own warm-up.
+      label: 'sample: an hour’s training with 2 keepers (16)',
+      source: 'sample',
+      request: {
+        ...base(16),
+        players: base(16).players.map((p, i) => ({ ...p, goalkeeper: i < 2 })),
+        space: { width: 50, length: 60 },
+        minutes: 60,
+        kind: 'training',
+      },
     },
   ];
 }

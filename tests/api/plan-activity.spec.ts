@@ -4,9 +4,16 @@ import type { PlanChangeDto, TeamInsightDto } from '../../shared/types/plan-api'
 import { clubWithStaff, startTestApp, type ClubCast, type TestApp } from '../support/api-test-app';
 import { createPlan, createSquad, type Squad } from './fixtures/plan-helpers';
 
+/** The first keep-ball station (a goalkeepers' station may come first in its phase). */
 const keepBallOf = (plan: SessionPlanDto) => {
-  const phaseIndex = plan.plan.phases.findIndex((p) => p.stations[0]?.activityKind === 'keep-ball');
-  return { phaseIndex, station: plan.plan.phases[phaseIndex]?.stations[0] };
+  const phaseIndex = plan.plan.phases.findIndex((p) =>
+    p.stations.some((s) => s.activityKind === 'keep-ball'),
+  );
+  if (phaseIndex < 0) throw new Error('the plan has no keep-ball station');
+  return {
+    phaseIndex,
+    station: plan.plan.phases[phaseIndex]!.stations.find((s) => s.activityKind === 'keep-ball')!,
+  };
 };
 
 describe('attendance, feedback, pitch-side changes and team insight', () => {

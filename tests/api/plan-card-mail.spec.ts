@@ -14,11 +14,14 @@ import { createPlan, createSquad, SQUAD_NAMES, type Squad } from './fixtures/pla
 
 const scratch = mkdtempSync(join(tmpdir(), 'conewise-card-'));
 
-/** The text of a PDF as poppler's pdftotext extracts it. */
+/**
+ * The text of a PDF as poppler's pdftotext extracts it, in reading order and on one line, so a
+ * title or a name that wraps in a narrow station cell still reads as written.
+ */
 function pdfText(pdf: Buffer, name = 'card.pdf'): string {
   const file = join(scratch, name);
   writeFileSync(file, pdf);
-  return execFileSync('pdftotext', ['-layout', file, '-'], { encoding: 'utf8' });
+  return execFileSync('pdftotext', ['-raw', file, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
 }
 
 function pdfPageSize(pdf: Buffer): string {
@@ -79,8 +82,13 @@ describe('the printed card and e-mail through the outbox', () => {
       expect(text).toContain(
         `${formatClock(630 - total + phase.startMinute)}–${formatClock(630 - total + phase.endMinute)}`,
       );
-      for (const station of phase.stations) expect(text).toContain(station.title);
+      for (const station of phase.stations) {
+        expect(text).toContain(station.title);
+        if (station.format) expect(text).toContain(station.format);
+      }
     }
+    // The card's key names the roles its diagrams draw.
+    expect(text).toMatch(/Key .*Cone/);
     expect(text).toContain('Kit checklist');
     expect(text).toMatch(/first-aid/);
     expect(pdfPageSize(pdf)).toBe('595.28 x 841.89');

@@ -128,12 +128,17 @@ describe('/api/rule-sets', () => {
     const preview = response.body as RuleSetPreviewDto;
     expect(preview.against.id).toBe('default');
     const labels = preview.cases.map((c) => c.label);
-    for (const word of ['small', 'odd', 'large', 'tiny space', 'no goals', 'recent plan']) {
+    for (const word of ['small', 'odd', 'large', 'tiny space', 'no goals', 'training', 'recent plan']) {
       expect(
         labels.some((l) => l.includes(word)),
         word,
       ).toBe(true);
     }
+    // An hour's training has drinks breaks: phases of their own with no groups.
+    const training = preview.cases.find((c) => c.label.includes('training'))!;
+    const drinks = training.draft.phases.filter((p) => p.name === 'Drinks break');
+    expect(drinks.length).toBeGreaterThan(0);
+    expect(drinks.every((p) => p.groups.length === 0 && p.minutes > 0)).toBe(true);
     const recent = preview.cases.find((c) => c.source === 'recent-plan')!;
     expect(recent.differences.some((d) => /Keep-ball.*groups/i.test(d))).toBe(true);
     expect(
@@ -211,7 +216,12 @@ describe('/api/rule-sets', () => {
     );
     expect(rollback.status, rollback.text).toBe(201);
     expect(rollback.body.status).toBe('published');
-    const after = await createPlan(app, club.coach.token, squad, { date: '2026-12-26' });
+    // Without the team's history (which steers the next plan to other activities), the same
+    // request under the rolled-back rules sets keep-ball up as the first plan did.
+    const after = await createPlan(app, club.coach.token, squad, {
+      date: '2026-12-26',
+      request: { recentActivityIds: [] },
+    });
     expect(after.ruleSetId).toBe(rollback.body.id);
     expect(keepBallShapes(after)).toEqual(keepBallShapes(oldPlan));
     const versions = (await app.api.get('/api/rule-sets', { token: club.lead.token })).body as RuleSetDto[];
