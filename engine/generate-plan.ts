@@ -155,6 +155,13 @@ function buildPhases(
     } else breakSince = true;
     phases.push(phase);
   });
+  if (ctx.keepers.length && !warmed && ctx.request.kind === 'match-warm-up') {
+    ctx.warnings.push({
+      code: 'keepers-not-warmed',
+      message:
+        'No room for the keepers’ own warm-up in this plan, so they play out: warm them up as keepers before kick-off (handling, footwork, then shots), away from the others.',
+    });
+  }
   return phases;
 }
 

@@ -80,14 +80,21 @@ export async function replan(
         matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex),
       );
     }
+    // The fresh plan's groups for this phase, on this phase's clock, unless its keepers would
+    // stand in goal before any warm-up this plan has run.
     const theirs = fresh.phases[phaseIndex];
-    if (
-      theirs &&
-      theirs.startMinute === phase.startMinute &&
-      theirs.endMinute === phase.endMinute &&
-      theirs.activityKind !== 'break'
-    ) {
-      options.push(matchIds(phase, theirs, phaseIndex));
+    const warmed = phases.some((p) => p.stations.some((s) => s.activityKind === 'goalkeeping'));
+    const keepersInGoal = theirs?.stations.some(
+      (s) => s.activityKind !== 'goalkeeping' && s.roles.goalkeeper?.length,
+    );
+    if (theirs && theirs.activityKind !== 'break' && (warmed || !keepersInGoal)) {
+      options.push(
+        matchIds(
+          phase,
+          { ...theirs, startMinute: phase.startMinute, endMinute: phase.endMinute },
+          phaseIndex,
+        ),
+      );
     }
     if (!options.length) {
       // Nothing that ran before still fits the new numbers: everyone together (see sharedGridPhase).
