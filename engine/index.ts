@@ -10,6 +10,7 @@ export { applyEdit } from './edit/apply-edit';
 export { replan, type ReplanResult } from './edit/replan';
 export { applyProgression } from './edit/apply-progression';
 export { listActivities, type ActivityOption } from './list-activities';
+export { suitsAge } from './planning/activities';
 export { previewActivity, type ActivityPreview } from './preview-activity';
 export { kindLayouts } from './kinds/registry';
 export type { KindLayout } from './kinds/kind-module';

@@ -37,16 +37,19 @@ export const FOCUS_LABELS: Record<Focus, string> = {
   speed: 'Speed',
 };
 
-/** How each start position is drawn: its fill, the number's colour and its legend words. */
+/**
+ * How each start position is drawn: its fill, the number's colour (4.5:1 or better against the
+ * fill, WCAG 2.1 AA) and its legend words.
+ */
 export const POSITION_STYLE: Record<PositionRole, { fill: string; text: string; label: string }> = {
   player: { fill: '#0b4f56', text: '#ffffff', label: 'Player' },
   attacker: { fill: '#21508f', text: '#ffffff', label: 'Attacker' },
   defender: { fill: '#b8342a', text: '#ffffff', label: 'Defender (bib)' },
   goalkeeper: { fill: '#f2c230', text: '#1b1b1b', label: 'Goalkeeper' },
-  'team-a': { fill: '#e2672d', text: '#ffffff', label: 'Side A (bibs)' },
+  'team-a': { fill: '#b84d17', text: '#ffffff', label: 'Side A (bibs)' },
   'team-b': { fill: '#21508f', text: '#ffffff', label: 'Side B' },
   server: { fill: '#6b3d98', text: '#ffffff', label: 'Server' },
-  neutral: { fill: '#7d8a85', text: '#ffffff', label: 'Neutral' },
+  neutral: { fill: '#5f6b66', text: '#ffffff', label: 'Neutral' },
   coach: { fill: '#ffffff', text: '#1b1b1b', label: 'Coach' },
 };
 

@@ -15,6 +15,7 @@ const TEAM: TeamDto = {
   usualSpace: { width: 30, length: 40 },
   coachIds: ['coach-1'],
   playerCount: 2,
+  pinnedActivityIds: [],
 };
 const PLAYERS: PlayerDto[] = [
   { id: 'p1', teamId: 't1', displayName: 'Ola K.', goalkeeper: true, active: true },

@@ -2,13 +2,13 @@ import { generatePlan } from '../../../../../engine/index';
 import type { PlanRequest } from '../../../../../shared/types';
 import { outlinePlan } from './plan-outline';
 
-/** 8 players and 2 coaches: the engine's own allocation puts a coach into one passing group. */
+/** 5 players and 2 coaches: passing and finishing in threes needs a coach to make a second three. */
 const REQUEST: PlanRequest = {
   ageGroup: 'U10',
   level: 'intermediate',
-  players: Array.from({ length: 8 }, (_, i) => ({ id: `p${i + 1}` })),
+  players: Array.from({ length: 5 }, (_, i) => ({ id: `p${i + 1}` })),
   coaches: 2,
-  equipment: { balls: 8, cones: 40, bibs: 10, goals: 2 },
+  equipment: { balls: 5, cones: 40, bibs: 10, goals: 2 },
   space: { width: 40, length: 30 },
   minutes: 20,
   kind: 'match-warm-up',

@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, input, output, signal } f
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
-import { suitsAge } from '../../../../../engine/planning/activities';
+import { suitsAge } from '../../../../../engine';
 import { previewActivity, type ActivityPreview, type RuleSetDocument } from '../../../../../engine/index';
 import type { AgeGroup, Level } from '../../../../../shared/types';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, LEVEL_LABELS } from '../../../core/labels/plan-labels';
