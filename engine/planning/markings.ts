@@ -208,7 +208,11 @@ export function markPhase(
     station.goalPositions = placed;
     station.conePositions = cones[i];
     station.equipment = { ...station.equipment, cones: cones[i].length, goals };
-    station.positions = d.positions.map((p) => ({ id: p.id, role: p.role, ...toSpace(f, p.u, p.v) }));
+    station.positions = d.positions.map((p) => ({
+      id: p.id,
+      role: p.role,
+      ...standBeside(f, p.u, p.v, cones[i]),
+    }));
     if (d.zones?.length) {
       station.zones = d.zones.map((z) => zoneToSpace(f, z.u, z.v, z.across, z.along, z.label));
     } else delete station.zones;
@@ -241,6 +245,20 @@ export function markPhase(
       message: `${phaseName}: the space leaves less than ${params.layout.shotClearanceM} m behind some goals before the next station — shoot low and check the line before each shot.`,
     });
   }
+}
+
+/**
+ * Where a player starts: at their spot, or a step towards the middle of the station when a cone
+ * marks that spot, so the picture shows both the cone and the player.
+ */
+function standBeside(f: Frame, u: number, v: number, cones: Point[]): Point {
+  const at = toSpace(f, u, v);
+  if (!cones.some((c) => Math.abs(c.x - at.x) < 0.4 && Math.abs(c.y - at.y) < 0.4)) return at;
+  const du = f.across / 2 - u;
+  const dv = f.along / 2 - v;
+  const len = Math.hypot(du, dv) || 1;
+  const step = Math.min(1, len);
+  return toSpace(f, u + (du / len) * step, v + (dv / len) * step);
 }
 
 /** Keepers standing in goals at the same time: keepers warming up take turns in one goal. */
