@@ -56,6 +56,10 @@ export class SessionPlan {
   @Column({ type: 'json' })
   plan!: Plan;
 
+  /** The activities its stations use, each once, in plan order (see planActivityIds). */
+  @Column({ type: 'varchar', length: 64, array: true, default: () => "'{}'" })
+  activityIds!: string[];
+
   /** Id of the rule set used: a rule_set row's id, or the built-in default's id. */
   @Column({ type: 'varchar', length: 64 })
   ruleSetId!: string;

@@ -4,6 +4,7 @@ import { DocumentsAsJson1764629000000 } from './1764629000000-documents-as-json'
 import { FeedbackGroupSize1764630000000 } from './1764630000000-feedback-group-size';
 import { SixteenActivityKinds1764631000000 } from './1764631000000-sixteen-activity-kinds';
 import { TeamPinnedActivities1764632000000 } from './1764632000000-team-pinned-activities';
+import { PlanActivityIds1764633000000 } from './1764633000000-plan-activity-ids';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -13,4 +14,5 @@ export const MIGRATIONS = [
   FeedbackGroupSize1764630000000,
   SixteenActivityKinds1764631000000,
   TeamPinnedActivities1764632000000,
+  PlanActivityIds1764633000000,
 ];

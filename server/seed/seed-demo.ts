@@ -10,6 +10,7 @@ import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
 import { User } from '../entities/user';
 import { hashPassword } from '../services/auth-service';
+import { planActivityIds } from '../services/plan-activity-ids';
 import { DEMO_CLUB, DEMO_PASSWORD, DEMO_PEOPLE, DEMO_TEAMS, type DemoTeam } from './demo-data';
 
 type PlanGenerator = (request: PlanRequest) => Promise<Plan>;
@@ -76,6 +77,7 @@ async function seedPastPlans(
       ruleSetId: plan.ruleSet?.id ?? 'default',
       ruleSetVersion: plan.ruleSet?.version ?? 1,
       seed: plan.seed ?? seed,
+      activityIds: planActivityIds(plan),
       status: 'final',
       authorId,
     });

@@ -52,8 +52,8 @@ const MAX_RECENT_ACTIVITY_IDS = 60;
 
 // One round trip instead of six: every part is limited to the caller's club (the feedback and
 // plans by a team that must be the club's), and nothing is returned until the access check has
-// passed. The recent activities are read out of the team's last plans in plan, phase and station
-// order, each kept at its first (newest) place.
+// passed. The recent activities come from the team's last plans' activityIds, newest plan first,
+// each kept at its first place.
 const PLAN_INPUTS_SQL = `
 SELECT
   (SELECT json_build_object('id', t.id, 'clubId', t."clubId", 'name', t.name,
@@ -71,15 +71,13 @@ SELECT
             WHERE "teamId" = $1 AND "clubId" = $2
             ORDER BY "createdAt" DESC LIMIT $4) f) AS feedback,
   (SELECT coalesce(json_agg(a.id ORDER BY a.at), '[]'::json)
-     FROM (SELECT st.station->>'activityId' AS id, min(ARRAY[p.n, ph.i, st.i]) AS at
-             FROM (SELECT sp.plan, row_number() OVER (ORDER BY sp."createdAt" DESC, sp.id) AS n
+     FROM (SELECT u.id, min(ARRAY[p.n, u.i]) AS at
+             FROM (SELECT sp."activityIds", row_number() OVER (ORDER BY sp."createdAt" DESC, sp.id) AS n
                      FROM session_plan sp
                     WHERE sp."teamId" = $1 AND sp."clubId" = $2
                     ORDER BY sp."createdAt" DESC, sp.id LIMIT $5) p
-            CROSS JOIN LATERAL json_array_elements(p.plan->'phases') WITH ORDINALITY AS ph(phase, i)
-            CROSS JOIN LATERAL json_array_elements(ph.phase->'stations') WITH ORDINALITY AS st(station, i)
-            WHERE st.station->>'activityId' IS NOT NULL AND st.station->>'activityId' <> 'drinks-break'
-            GROUP BY 1) a) AS "recentActivityIds",
+            CROSS JOIN LATERAL unnest(p."activityIds") WITH ORDINALITY AS u(id, i)
+            GROUP BY u.id) a) AS "recentActivityIds",
   (SELECT json_build_object('id', r.id, 'version', r.version, 'revision', r.revision)
      FROM rule_set r WHERE r."clubId" = $2 AND r.status = 'published'
      ORDER BY r.version DESC LIMIT 1) AS rules`;

@@ -15,6 +15,7 @@ import { ClubScope } from './club-scope';
 import * as engine from './engine-port';
 import { planSummaryDto, sessionPlanDto, sessionPlanJson, type PlanTexts } from './plan-dto';
 import { checkPlanShape } from './plan-shape';
+import { planActivityIds } from './plan-activity-ids';
 import { loadPlanInputs } from './plan-inputs';
 import { rulesOfPlan } from './rules-resolver';
 
@@ -184,15 +185,16 @@ export async function lockPlan(manager: EntityManager, scope: ClubScope, id: str
 
 const INSERT_PLAN_SQL = `
 INSERT INTO session_plan ("clubId", "teamId", "date", "kickOff", "status", "authorId", "kind", "minutes",
-                          "playerCount", "request", "plan", "ruleSetId", "ruleSetVersion", "seed", "version")
-VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10::json, $11::json, $12, $13, $14, 1)
+                          "playerCount", "request", "plan", "ruleSetId", "ruleSetVersion", "seed", "activityIds",
+                          "version")
+VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10::json, $11::json, $12, $13, $14, $15::varchar[], 1)
 RETURNING id, "createdAt", "updatedAt", version`;
 // One statement, so one transaction: the plan is stored and the team's pins it took are cleared,
 // or neither. Pins changed since they were read stay for the next plan.
 const INSERT_PLAN_CLEAR_PINS_SQL = `
 WITH unpinned AS (
   UPDATE team SET "pinnedActivityIds" = '{}'
-   WHERE id = $2 AND "clubId" = $1 AND "pinnedActivityIds" = $15::varchar[]
+   WHERE id = $2 AND "clubId" = $1 AND "pinnedActivityIds" = $16::varchar[]
 )${INSERT_PLAN_SQL}`;
 
 /**
@@ -226,6 +228,7 @@ export async function insertPlanRow(
       row.ruleSetId,
       row.ruleSetVersion,
       row.seed,
+      row.activityIds,
       ...(clearPins ? [clearPins] : []),
     ],
   );
@@ -243,6 +246,7 @@ export function planColumns(plan: Plan): Partial<SessionPlan> {
     ruleSetId: String(plan.ruleSet.id).slice(0, 64),
     ruleSetVersion: plan.ruleSet.version,
     seed: String(plan.seed).slice(0, 64),
+    activityIds: planActivityIds(plan),
   };
 }
 

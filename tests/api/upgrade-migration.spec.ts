@@ -256,7 +256,7 @@ describe('upgrade of stored data to the sixteen activity kinds', () => {
     for (const player of SAMPLE_NAMES) expect(text).toContain(player);
   });
 
-  it('plans for the team with the upgraded rules, hearing the renamed feedback', async () => {
+  it('plans for the team with the upgraded rules, hearing the renamed feedback and the old plan’s activities', async () => {
     const login = await app!.api.post('/api/auth/login', { email, password: TEST_PASSWORD });
     const created = await app!.api.post(
       '/api/plans',
@@ -279,6 +279,13 @@ describe('upgrade of stored data to the sixteen activity kinds', () => {
     expect(created.status, created.text).toBe(201);
     expect(created.body.ruleSetId).toBe(ids.rules);
     expect(created.body.request.recentFeedback[0]).toMatchObject({ activityKind: 'passing-pattern' });
+    // The old plan's activities were filled in for variety, in plan order.
+    expect(created.body.request.recentActivityIds).toEqual([
+      'travel-touches',
+      'pass-pairs',
+      'rondo-4v1',
+      'ssg-7v7',
+    ]);
   });
 
   it('says it cannot be undone rather than pretend to restore the first format', async () => {
