@@ -30,7 +30,6 @@ const band = (r: PlanRequest) => params.ageGroups[r.ageGroup].band;
 const playing = (plan: Plan) => plan.phases.filter((p) => p.activityKind !== 'break');
 const activityOf = (id: string) => params.activities.find((a) => a.id === id);
 const isHot = (r: PlanRequest) => (r.conditions?.temperatureC ?? 20) >= params.cautions.heatC;
-const isCold = (r: PlanRequest) => (r.conditions?.temperatureC ?? 20) <= params.cautions.coldC;
 
 describe('generatePlan properties', () => {
   it('keeps every invariant for any request: players, minutes, kit, space, adults, keepers, sides, keep-ball, honest waiting', async () => {

@@ -68,9 +68,10 @@ describe('the starting library', () => {
       const text = [a.title, a.summary, a.description, ...a.coachingPoints, ...a.easier, ...a.harder].join(
         ' ',
       );
-      expect(/\bhead(er|ing|s)?\b/i.test(text.replace(/head up|heads up|head over|ahead|no heading/gi, '')), a.id).toBe(
-        false,
-      );
+      expect(
+        /\bhead(er|ing|s)?\b/i.test(text.replace(/head up|heads up|head over|ahead|no heading/gi, '')),
+        a.id,
+      ).toBe(false);
     }
   });
 

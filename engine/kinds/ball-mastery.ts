@@ -21,8 +21,8 @@ export const ballMastery: KindModule = {
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
   sizes: (params, level, _band, activity) => tableSizes(params, 'ball-mastery', level, activity),
-  roles: ({ players, activity }) => ({
-    roles: { rotation: players.map((p) => p.id) },
+  roles: ({ activity }) => ({
+    roles: {},
     format:
       activity.balls === 'pair'
         ? 'in pairs (threes when balls are short)'

@@ -8,7 +8,7 @@ export const coolDown: KindModule = {
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
   sizes: (params, level, _band, activity) => tableSizes(params, 'cool-down', level, activity),
-  roles: ({ players }) => ({ roles: { rotation: players.map((p) => p.id) }, format: 'everyone together' }),
+  roles: () => ({ roles: {}, format: 'everyone together' }),
   balls: (activity, station) =>
     ballNeed(activity.balls, groupCount(station), Math.ceil(groupCount(station) / 4)),
   bibs: () => 0,

@@ -18,7 +18,7 @@ export const directionalPossession: KindModule = {
     const a = rest.filter((_, i) => i % 2 === 0);
     const b = rest.filter((_, i) => i % 2 === 1);
     return {
-      roles: { teams: [a, b], attackers: a, defenders: b, neutrals: neutral },
+      roles: { teams: [a, b], neutrals: neutral },
       format: `${a.length}v${b.length}${neutral.length ? ' + 1 neutral' : ''}`,
       points: neutral.length ? ['The neutral plays for whichever side has the ball'] : undefined,
     };

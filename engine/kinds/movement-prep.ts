@@ -11,7 +11,7 @@ export const movementPrep: KindModule = {
   roles: ({ players }) => {
     const lanes = laneCount(players.length);
     return {
-      roles: { rotation: players.map((p) => p.id) },
+      roles: {},
       format: `${lanes} lane${lanes === 1 ? '' : 's'}, going in waves`,
     };
   },

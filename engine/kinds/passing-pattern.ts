@@ -35,7 +35,7 @@ export const passingPattern: KindModule = {
             : 'a three'
           : `${pairs} pair${pairs === 1 ? '' : 's'}`
         : `${layout === 'triangle' ? 'triangle' : 'square'} of ${total}`;
-    return { roles: { rotation: ids }, format };
+    return { roles: {}, format };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 1),
   bibs: () => 0,

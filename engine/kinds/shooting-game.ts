@@ -30,7 +30,7 @@ export const shootingGame: KindModule = {
       const teams = twoSides(ids, keepers);
       const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
       return {
-        roles: { goalkeeper: keepers, teams, attackers: teams[0], defenders: teams[1] },
+        roles: { goalkeeper: keepers, teams },
         format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + keepers' : ''}`,
       };
     }

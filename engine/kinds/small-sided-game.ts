@@ -29,7 +29,7 @@ export const smallSidedGame: KindModule = {
       keepers,
     );
     return {
-      roles: { teams, attackers: teams[0], defenders: teams[1], goalkeeper: keepers },
+      roles: { teams, goalkeeper: keepers },
       format: `${teams[0].length}v${teams[1].length}${keepers.length ? ' with keepers' : ''}`,
       points: keepers.length
         ? ['Keepers start every attack with a throw or a pass along the ground']

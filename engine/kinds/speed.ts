@@ -15,7 +15,7 @@ export const speed: KindModule = {
     const total = players.length + coachJoins;
     const lanes = Math.max(1, Math.floor(total / 2));
     return {
-      roles: { rotation: players.map((p) => p.id) },
+      roles: {},
       format: `${lanes} lane${lanes === 1 ? '' : 's'} of ${total % 2 ? '2–3' : '2'}`,
       points: ['Full rest between races: walk back, then go again'],
     };

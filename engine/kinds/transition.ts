@@ -20,7 +20,7 @@ export const transition: KindModule = {
     const teams = twoSides(ids, keepers);
     const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
     return {
-      roles: { teams, attackers: teams[0], defenders: teams[1], goalkeeper: keepers },
+      roles: { teams, goalkeeper: keepers },
       format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + keepers' : ''}`,
     };
   },

@@ -121,7 +121,7 @@ function tryActivity(
   startWidths: StartWidths,
   previous: Phase | undefined,
 ): Attempt | null {
-  const { request, params } = ctx;
+  const { request } = ctx;
   const warnings: Notice[] = [];
   const trace: TraceEntry[] = [];
   const players = shuffle(request.players, ctx.rng);
@@ -140,7 +140,7 @@ function tryActivity(
     spec.keepersInGoal && module.facesShots && targets.keepers ? rest.filter((p) => keeperIds.has(p.id)) : [];
   const per = targets.ends === 2 ? 2 : 1;
   const goalsLeft = request.equipment.goals - keeperGroups.length;
-  let wantIn =
+  const wantIn =
     per === 2
       ? 2 * Math.min(Math.floor(pool.length / 2), Math.floor(goalsLeft / 2))
       : Math.min(pool.length, goalsLeft);
@@ -487,7 +487,7 @@ function sharedGridPhase(
   phaseIndex: number,
   previous: Phase | undefined,
 ): Phase {
-  const { params, request } = ctx;
+  const { request } = ctx;
   const keeperGroups = spec.keeperWarmUp
     ? keeperWarmUpGroups(ctx, shuffle(request.players, ctx.rng), request.coaches)
     : [];
