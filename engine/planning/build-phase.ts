@@ -255,8 +255,19 @@ function finishAttempt(
   const allowedWait = ctx.cold ? 0 : 1;
   const main = activities[0];
   // Leftover groups in another activity are a last resort: another activity may fit everyone.
+  // Keepers in goal and the squad within one game's format: one game, not one with keepers and
+  // one without (another game activity may take the whole squad).
+  const keeperGames = stations.filter(
+    (s) => s.activityKind === 'small-sided-game' && s.roles.goalkeeper?.length,
+  );
+  const format = params.gameFormats[band];
+  const splitGame =
+    keeperGames.length > 0 &&
+    stations.filter((s) => s.activityKind === 'small-sided-game').length > 1 &&
+    request.players.length <= 2 * format.maxPerSide;
   const clean =
     Number.isFinite(cost) &&
+    !splitGame &&
     activities.every((a) => a === main || a.kind === 'goalkeeping') &&
     stations.every(
       (s, i) =>
