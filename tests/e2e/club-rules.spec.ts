@@ -4,7 +4,7 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AuthResponse, MemberDto, Plan, RuleSetDto } from '../../shared/types';
-import { ClubSession, LEAD, U12_COACH, U8_COACH } from './support/club-session';
+import { ClubSession, LEAD, U12_COACH } from './support/club-session';
 import {
   DESKTOP,
   launchBrowser,
@@ -44,9 +44,12 @@ describe('club rules', () => {
   });
 
   it('a lead changes the keep-ball ratio in the tables, publishes, and the next plan follows it', async () => {
-    const coach = await club.login(U8_COACH);
-    const { team, players } = await club.team(coach, 'U8 Foxes');
-    const before = await club.plan(coach, team, players);
+    const coach = await club.login(U12_COACH);
+    const { team, players } = await club.team(coach, 'U12 Otters');
+    // The intermediate U12s, with a keep-ball activity pinned so the plan has keep-ball to measure
+    // whatever else the week's variety picks.
+    const withKeepBall = { pinnedActivityIds: ['kb-ten-or-break-out'] };
+    const before = await club.plan(coach, team, players, withKeepBall);
     expect(keepBallRatio(before.plan)).toBe(4);
 
     const page = await browser.newPage(DESKTOP);
@@ -57,7 +60,7 @@ describe('club rules', () => {
     await start.click();
     await page.getByTestId('draft-state').waitFor();
 
-    const formats = page.locator('input[data-pointer="/parameters/keepBall/beginner/formats"]');
+    const formats = page.locator('input[data-pointer="/parameters/keepBall/intermediate/formats"]');
     await formats.fill('3v1');
     await formats.press('Tab');
     await expect.poll(() => page.getByTestId('draft-state').textContent()).toContain('1 unsaved');
@@ -68,18 +71,22 @@ describe('club rules', () => {
     await page.getByRole('tab', { name: 'JSON' }).click();
     const editor = page.locator('#rule-json');
     const document = JSON.parse(await editor.inputValue());
-    document.parameters.keepBall.beginner.formats = [{ attackers: 5, defenders: 1 }];
+    document.parameters.keepBall.intermediate.formats = [{ attackers: 5, defenders: 1 }];
     const text = JSON.stringify(document, null, 2);
-    await editor.fill(text);
+    // The whole document at once, as a paste would put it (typing 160 kB key by key is not the point here).
+    await editor.evaluate((area: HTMLTextAreaElement, value: string) => {
+      area.value = value;
+      area.dispatchEvent(new Event('input', { bubbles: true }));
+    }, text);
     const problem = page.getByTestId('json-problems').locator('button').first();
     await problem.waitFor();
-    // The array item's opening brace: the line after "formats": [ under keepBall → beginner.
+    // The array item's opening brace: the line after "formats": [ under keepBall → intermediate.
     const lines = text.split('\n');
     const keepBall = lines.findIndex((l) => l.includes('"keepBall"'));
-    const beginner = lines.findIndex((l, i) => i > keepBall && l.includes('"beginner"'));
-    const formatsLine = lines.findIndex((l, i) => i > beginner && l.includes('"formats"'));
+    const intermediate = lines.findIndex((l, i) => i > keepBall && l.includes('"intermediate"'));
+    const formatsLine = lines.findIndex((l, i) => i > intermediate && l.includes('"formats"'));
     const line = formatsLine + 2;
-    expect(await problem.textContent()).toContain('/parameters/keepBall/beginner/formats/0');
+    expect(await problem.textContent()).toContain('/parameters/keepBall/intermediate/formats/0');
     expect(await problem.textContent()).toMatch(new RegExp(`Line ${line}\\b`));
     await problem.click();
     await screenshot(page, 'club-rules-json');
@@ -99,18 +106,18 @@ describe('club rules', () => {
     await expect.poll(() => page.locator('.cw-rules__sub').textContent()).toContain('version');
     const published = await club.api.get<RuleSetDto>('/api/rule-sets/published', { token: lead.token });
     expect(
-      (published.body.body as { parameters: { keepBall: { beginner: { formats: unknown } } } }).parameters
-        .keepBall.beginner.formats,
+      (published.body.body as { parameters: { keepBall: { intermediate: { formats: unknown } } } }).parameters
+        .keepBall.intermediate.formats,
     ).toEqual([{ attackers: 3, defenders: 1 }]);
 
-    const after = await club.plan(coach, team, players);
+    const after = await club.plan(coach, team, players, withKeepBall);
     expect(after.ruleSetVersion).toBe(published.body.version);
     expect(keepBallRatio(after.plan)).toBeLessThanOrEqual(3);
 
     await page.getByRole('tab', { name: 'History' }).click();
     await page.getByTestId('rule-diff').waitFor();
     expect(await page.getByTestId('rule-diff').textContent()).toContain(
-      '/parameters/keepBall/beginner/formats',
+      '/parameters/keepBall/intermediate/formats',
     );
     expect(await page.getByTestId('rule-change-log').textContent()).toContain('Morag Ellison');
     await screenshot(page, 'club-rules-history');

@@ -215,10 +215,13 @@ describe('activity library', () => {
     expect(added.id).toMatch(/^club-/);
 
     await page.getByRole('button', { name: 'Publish' }).click();
-    await expect.poll(() => page.locator('.cw-rules__sub').textContent()).toContain('version');
-    const published = (await club.api.get<RuleSetDto>('/api/rule-sets/published', { token: lead.token }))
-      .body;
-    expect((published.body as RuleSetDocument).parameters.activities.map((a) => a.id)).toContain(added.id);
+    // Published once the club's published rules hold it (the page's heading may say "version" before).
+    await expect
+      .poll(async () => {
+        const published = await club.api.get<RuleSetDto>('/api/rule-sets/published', { token: lead.token });
+        return (published.body.body as RuleSetDocument).parameters.activities.map((a) => a.id);
+      })
+      .toContain(added.id);
 
     // Every member now finds it in the library, marked as the club's own.
     const library = await browser.newPage(PHONE);

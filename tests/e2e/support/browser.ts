@@ -87,6 +87,10 @@ const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/
 
 /** Runs axe-core in the page and returns the serious and critical violations, described for a failure message. */
 export async function seriousAccessibilityViolations(page: Page): Promise<string[]> {
+  // Colours are measured once nothing is mid-transition (a message fading in reads as low contrast).
+  await page.waitForFunction(() => document.getAnimations().every((a) => a.playState !== 'running'), null, {
+    timeout: 10_000,
+  });
   // Evaluated through the DevTools protocol, so the app's Content-Security-Policy does not block it.
   await page.evaluate(axeSource);
   const violations = await page.evaluate(async () => {
