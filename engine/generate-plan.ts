@@ -133,6 +133,7 @@ function buildPhases(
   const startWidths = feedbackWidths(ctx);
   const phases: Phase[] = [];
   let lastPlayed: Phase | undefined;
+  const played = new Set<string>();
   let breakSince = false;
   let warmed = false;
   specs.forEach((planned, i) => {
@@ -140,7 +141,8 @@ function buildPhases(
     // fell back to one shared grid), they warm up as keepers in this phase instead.
     const spec =
       planned.keepersInGoal && !warmed ? { ...planned, keepersInGoal: false, keeperWarmUp: true } : planned;
-    const phase = buildPhase(ctx, rules, spec, i, startWidths, lastPlayed);
+    const phase = buildPhase(ctx, rules, spec, i, startWidths, lastPlayed, played);
+    if (phase.activityId) played.add(phase.activityId);
     if (phase.stations.some((s) => s.activityKind === 'goalkeeping')) warmed = true;
     if (phase.activityKind !== 'break') {
       phase.changeover = changeoverBetween(

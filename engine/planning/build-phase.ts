@@ -61,6 +61,8 @@ export type PhaseContext = Pick<
 interface Attempt {
   phase: Phase;
   clean: boolean;
+  /** Clean but for splitting the squad into a game with keepers and one without. */
+  split: boolean;
   warnings: Notice[];
   trace: TraceEntry[];
 }
@@ -72,20 +74,30 @@ export function buildPhase(
   phaseIndex: number,
   startWidths: StartWidths,
   previous: Phase | undefined,
+  played: ReadonlySet<string> = new Set(),
 ): Phase {
   if (spec.slot === 'break') return breakPhase(spec.startMinute, spec.endMinute - spec.startMinute, ctx.hot);
   if (spec.continues && previous) return continued(spec, phaseIndex, previous);
-  // The first that runs cleanly; else the one that leaves the fewest players waiting.
+  // The first that runs cleanly and is new today; then a game split in two (rather than leaving
+  // the game for another kind); then one the session already played; else the one that leaves
+  // the fewest players waiting.
+  let split: Attempt | null = null;
+  let repeat: Attempt | null = null;
   let fallback: { attempt: Attempt; waiting: number } | null = null;
   for (const activity of spec.candidates) {
+    if (split && activity.kind !== split.phase.activityKind) break;
     const attempt = tryActivity(ctx, rules, spec, activity, phaseIndex, startWidths, previous);
     if (!attempt) continue;
     // A coach's pin is honoured whenever it can be laid out; its notices say what it costs.
-    if (attempt.clean || ctx.pinned.has(activity.id)) return commit(ctx, attempt);
+    if (ctx.pinned.has(activity.id)) return commit(ctx, attempt);
+    if (attempt.clean && !played.has(activity.id)) return commit(ctx, attempt);
+    if (attempt.clean) repeat ??= attempt;
+    else if (attempt.split) split ??= attempt;
     const waiting = attempt.phase.stations.reduce((s, st) => s + (st.waiting ?? 0), 0);
     if (!fallback || waiting < fallback.waiting) fallback = { attempt, waiting };
   }
-  if (fallback) return commit(ctx, fallback.attempt);
+  const best = split ?? repeat ?? fallback?.attempt;
+  if (best) return commit(ctx, best);
   return sharedGridPhase(ctx, spec, phaseIndex, previous);
 }
 
@@ -265,9 +277,8 @@ function finishAttempt(
     keeperGames.length > 0 &&
     stations.filter((s) => s.activityKind === 'small-sided-game').length > 1 &&
     request.players.length <= 2 * format.maxPerSide;
-  const clean =
+  const runs =
     Number.isFinite(cost) &&
-    !splitGame &&
     activities.every((a) => a === main || a.kind === 'goalkeeping') &&
     stations.every(
       (s, i) =>
@@ -286,7 +297,8 @@ function finishAttempt(
       slot: spec.slot,
       stations,
     },
-    clean,
+    clean: runs && !splitGame,
+    split: runs && splitGame,
     warnings,
     trace,
   };
