@@ -9,39 +9,13 @@ import { ACTIVITY_KIND_LABELS, POSITION_STYLE } from '../../shared/types/activit
 import { changeoverText, groupList, legendKeys } from './plan-card';
 import { renderPlanPdf } from './render-pdf';
 import { diagramMarks, positionLabel } from './station-diagram';
-
-const NAMES = [
-  'Ada B.',
-  'Ben C.',
-  'Cleo D.',
-  'Dev E.',
-  'Esme F.',
-  'Finn G.',
-  'Gia H.',
-  'Hal I.',
-  'Isla J.',
-  'Jem K.',
-  'Kit L.',
-  'Luca M.',
-  'Mae N.',
-  'Noor O.',
-  'Otto P.',
-  'Pia Q.',
-  'Rio S.',
-  'Sol T.',
-  'Tam U.',
-  'Uma V.',
-  'Vik W.',
-  'Wren X.',
-  'Yara Y.',
-  'Zed Z.',
-];
+import { SQUAD_NAMES } from '../../tests/support/squad-names';
 
 function request(players: number, over: Partial<PlanRequest> = {}): PlanRequest {
   return {
     ageGroup: 'U12',
     level: 'intermediate',
-    players: NAMES.slice(0, players).map((name, i) => ({ id: `p${i + 1}`, name, goalkeeper: i < 2 })),
+    players: SQUAD_NAMES.slice(0, players).map((name, i) => ({ id: `p${i + 1}`, name, goalkeeper: i < 2 })),
     coaches: 3,
     equipment: { balls: 24, cones: 60, bibs: 14, goals: 4 },
     space: { width: 50, length: 70 },
@@ -119,7 +93,7 @@ describe('the printed card of a full squad’s hour with drinks breaks', () => {
         expect(list).toContain(`${positionLabel(station, position)} ${name}`);
       }
     }
-    for (const name of NAMES) expect(a4.text).toContain(name);
+    for (const name of SQUAD_NAMES) expect(a4.text).toContain(name);
   });
 });
 
