@@ -1,4 +1,12 @@
-import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  forwardRef,
+  input,
+  output,
+  signal,
+} from '@angular/core';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatExpansionModule } from '@angular/material/expansion';
 import {
@@ -9,6 +17,7 @@ import {
   PLAN_KINDS,
   STATION_KINDS,
 } from '../../../../shared/types';
+import { RULE_DOCUMENT, RuleNumber, type RuleDocument } from './rule-number';
 import { getAt, toPointer } from './services/json-pointer';
 
 /** An edit from the tables: the value to put at a pointer of the rule-set document. */
@@ -37,12 +46,13 @@ export function textToFormats(text: string): { attackers: number; defenders: num
 /** The rule set's main tables as forms, so a lead tunes numbers without touching JSON. */
 @Component({
   selector: 'cw-rule-tables',
-  imports: [MatExpansionModule, MatButtonToggleModule],
+  imports: [MatExpansionModule, MatButtonToggleModule, RuleNumber],
+  providers: [{ provide: RULE_DOCUMENT, useExisting: forwardRef(() => RuleTables) }],
   templateUrl: './rule-tables.html',
   styleUrl: './rule-tables.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class RuleTables {
+export class RuleTables implements RuleDocument {
   /** The rule-set document being edited. */
   readonly body = input.required<unknown>();
   /** Shows the tables without inputs that change anything. */
@@ -101,15 +111,9 @@ export class RuleTables {
     return getAt(this.body(), pointer);
   }
 
-  protected numberAt(pointer: string): number | null {
-    const v = this.value(pointer);
-    return typeof v === 'number' ? v : null;
-  }
-
-  protected setNumber(pointer: string, event: Event): void {
-    const input = event.target as HTMLInputElement;
-    if (input.value.trim() === '' || Number.isNaN(input.valueAsNumber)) return;
-    this.edited.emit({ pointer, value: input.valueAsNumber });
+  /** An edit from a number field (see RuleNumber). */
+  edit(pointer: string, value: unknown): void {
+    this.edited.emit({ pointer, value });
   }
 
   protected setBoolean(pointer: string, event: Event): void {

@@ -1,4 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { NgTemplateOutlet } from '@angular/common';
 import { MatIconModule } from '@angular/material/icon';
 import type { Notice, Supervision } from '../../../../../shared/types';
 
@@ -11,8 +12,20 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
  */
 @Component({
   selector: 'cw-plan-notices',
-  imports: [MatIconModule],
+  imports: [MatIconModule, NgTemplateOutlet],
   template: `
+    <ng-template #list let-notices>
+      <ul>
+        @for (notice of notices; track notice.code + $index) {
+          <li>
+            {{ notice.message }}
+            @if (notice.source) {
+              <span class="cw-source">Source: {{ notice.source }}</span>
+            }
+          </li>
+        }
+      </ul>
+    </ng-template>
     @if (adultWarnings().length) {
       <section
         class="cw-notices cw-adults"
@@ -29,46 +42,19 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
             </p>
           }
         }
-        <ul>
-          @for (warning of adultWarnings(); track warning.code + $index) {
-            <li>
-              {{ warning.message }}
-              @if (warning.source) {
-                <span class="cw-source">Source: {{ warning.source }}</span>
-              }
-            </li>
-          }
-        </ul>
+        <ng-container *ngTemplateOutlet="list; context: { $implicit: adultWarnings() }" />
       </section>
     }
     @if (cautions().length) {
       <section class="cw-notices cw-cautions" aria-labelledby="cautions-heading" data-testid="cautions">
         <h2 id="cautions-heading"><mat-icon aria-hidden="true">health_and_safety</mat-icon> Safety</h2>
-        <ul>
-          @for (caution of cautions(); track caution.code + $index) {
-            <li>
-              {{ caution.message }}
-              @if (caution.source) {
-                <span class="cw-source">Source: {{ caution.source }}</span>
-              }
-            </li>
-          }
-        </ul>
+        <ng-container *ngTemplateOutlet="list; context: { $implicit: cautions() }" />
       </section>
     }
     @if (otherWarnings().length) {
       <section class="cw-notices cw-warnings" aria-labelledby="warnings-heading" data-testid="warnings">
         <h2 id="warnings-heading"><mat-icon aria-hidden="true">warning</mat-icon> Check before you start</h2>
-        <ul>
-          @for (warning of otherWarnings(); track warning.code + $index) {
-            <li>
-              {{ warning.message }}
-              @if (warning.source) {
-                <span class="cw-source">Source: {{ warning.source }}</span>
-              }
-            </li>
-          }
-        </ul>
+        <ng-container *ngTemplateOutlet="list; context: { $implicit: otherWarnings() }" />
       </section>
     }
   `,
