@@ -47,7 +47,7 @@ export function listActivities(
       };
       if (!request || !band) return option;
       const reason =
-        activityBlocked(params, request.ageGroup, request.level, forbidden, a) ??
+        activityBlocked(params, request.ageGroup, forbidden, a) ??
         (activityFeasible(request.players.length, request.coaches, a, {
           params,
           level: request.level,

@@ -90,7 +90,7 @@ export function previewActivity(
   const margin = 2;
   station.position = { x: margin, y: margin };
   const space = { width: station.area.width + 2 * margin, length: station.area.length + 2 * margin };
-  markPhase([station], [activity], space, params, request.equipment, [], activity.title);
+  markPhase([station], [activity], params, request.equipment, [], activity.title);
   equipPhase([station], [activity], request.equipment, [], activity.title);
   station.progressions = progressionsFor(station, activity, params, band, space);
   return { station, space, ageGroup, level };

@@ -156,13 +156,7 @@ async function swapActivity(
     ],
   });
   if (phase.activityKind === 'break') return refuse('a drinks break has no stations');
-  const blocked = activityBlocked(
-    params,
-    request.ageGroup,
-    request.level,
-    plan.forbiddenActivities ?? [],
-    activity,
-  );
+  const blocked = activityBlocked(params, request.ageGroup, plan.forbiddenActivities ?? [], activity);
   if (blocked) return refuse(blocked);
   const { ctx, rules } = await editContext(
     request,

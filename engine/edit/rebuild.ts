@@ -79,7 +79,6 @@ export function refreshPlan(
     markPhase(
       phase.stations,
       activities,
-      plan.request.space,
       params,
       plan.request.equipment,
       warnings,

@@ -69,7 +69,7 @@ export async function replan(
     if (kept) options.push(kept);
     // The new numbers may rule an activity out (too few for a game): only allowed ones are tried.
     const allowed = (a: ActivityDefinition | undefined): a is ActivityDefinition =>
-      !!a && !activityBlocked(ctx.params, request.ageGroup, request.level, ctx.forbidden, a);
+      !!a && !activityBlocked(ctx.params, request.ageGroup, ctx.forbidden, a);
     const candidates = [
       activityById(ctx.params, phase.activityId),
       activityById(ctx.params, fresh.phases[phaseIndex]?.activityId ?? ''),
@@ -169,7 +169,7 @@ function inPlace(
   const { params, request, band } = ctx;
   if (
     phase.stations.some((s) =>
-      activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, activityOfStation(params, s)),
+      activityBlocked(params, request.ageGroup, ctx.forbidden, activityOfStation(params, s)),
     )
   ) {
     return null;

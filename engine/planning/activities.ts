@@ -7,7 +7,6 @@ import type {
   ActivityKind,
   AgeGroup,
   ForbiddenActivity,
-  Level,
   RuleParameters,
   StationKind,
 } from '../../shared/types';
@@ -41,7 +40,6 @@ export function kindBlocked(
 export function activityBlocked(
   params: RuleParameters,
   age: AgeGroup,
-  level: Level,
   forbidden: ForbiddenActivity[],
   activity: ActivityDefinition,
 ): string | null {
@@ -51,7 +49,6 @@ export function activityBlocked(
   const rule = forbidden.find((f) => f.activityId === activity.id);
   if (rule) return rule.reason;
   if (!suitsAge(activity, age)) return `made for ${activity.ages.from}–${activity.ages.to}`;
-  void level;
   return null;
 }
 
@@ -76,7 +73,7 @@ export function rankedActivities(ctx: ChoiceContext, kind: StationKind, kindRank
   const out: Ranked[] = [];
   for (const a of params.activities) {
     if (a.kind !== kind) continue;
-    if (activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, a)) continue;
+    if (activityBlocked(params, request.ageGroup, ctx.forbidden, a)) continue;
     out.push({ activity: a, score: activityScore(ctx, a) - kindRank + ctx.rng() * JITTER });
   }
   // Above the day's intensity limit (the heat) only when the kind has nothing calmer; a pin stays.

@@ -251,7 +251,7 @@ function finishAttempt(
   const previousGoals = previous
     ? previous.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
     : [];
-  markPhase(stations, activities, request.space, params, request.equipment, warnings, name, previousGoals);
+  markPhase(stations, activities, params, request.equipment, warnings, name, previousGoals);
   equipPhase(stations, activities, request.equipment, warnings, name, ctx.cold);
   stations.forEach((s, i) => {
     s.progressions = progressionsFor(s, activities[i], params, band, request.space);
@@ -621,7 +621,7 @@ function sharedArea(
     fired: true,
     effect: `${name}: everyone in one area (${activity.title})`,
   });
-  markPhase(stations, activities, request.space, params, request.equipment, ctx.warnings, name);
+  markPhase(stations, activities, params, request.equipment, ctx.warnings, name);
   equipPhase(stations, activities, request.equipment, ctx.warnings, name, ctx.cold);
   stations.forEach(
     (s, i) => (s.progressions = progressionsFor(s, activities[i], params, ctx.band, request.space)),

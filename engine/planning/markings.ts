@@ -12,7 +12,6 @@ import type {
   Notice,
   Point,
   RuleParameters,
-  Space,
   Station,
   StationKind,
 } from '../../shared/types';
@@ -53,14 +52,12 @@ const EW: readonly Direction[] = ['E', 'W'];
 export function markPhase(
   stations: Station[],
   activities: ActivityDefinition[],
-  space: Space,
   params: RuleParameters,
   kit: { cones: number; goals: number },
   warnings: Notice[],
   phaseName: string,
   previousGoals: Point[] = [],
 ): void {
-  void space;
   const rects = stations.map(rectOfStation);
   const corridorHalf = params.layout.gateWidthM / 2 + 2;
   const frames: Frame[] = [];

@@ -112,7 +112,7 @@ export function sessionSlots(
         ctx.trace.push({
           ruleId: 'engine.phase-substitute',
           fired: true,
-          effect: `${slot.name}: ${kinds.join(' / ')} → ${ranked[0].activity.kind} (${whyNot(ctx, kinds[0], rules)})`,
+          effect: `${slot.name}: ${kinds.join(' / ')} → ${ranked[0].activity.kind} (${whyNot(ctx, kinds[0])})`,
         });
       }
     }
@@ -205,10 +205,9 @@ function substituteKinds(ctx: BuildContext, kinds: StationKind[]): StationKind[]
   return out;
 }
 
-function whyNot(ctx: BuildContext, kind: StationKind, rules: AllocationRules): string {
+function whyNot(ctx: BuildContext, kind: StationKind): string {
   const blocked = kindBlocked(ctx.params, ctx.request.ageGroup, ctx.forbidden, kind);
   if (blocked) return blocked;
-  void rules;
   return 'too few players or not enough kit for it';
 }
 
@@ -219,7 +218,7 @@ function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefin
   for (const id of request.pinnedActivityIds ?? []) {
     const a = activityById(params, id);
     const blocked = a
-      ? (activityBlocked(params, request.ageGroup, request.level, ctx.forbidden, a) ??
+      ? (activityBlocked(params, request.ageGroup, ctx.forbidden, a) ??
         (fits(a) ? null : 'too few players or not enough kit for it'))
       : 'not in the club’s activities';
     if (!a || blocked) {
