@@ -7,6 +7,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { DatePipe } from '@angular/common';
 import { forkJoin } from 'rxjs';
 import { ROLES, type InvitationDto, type MemberDto, type Role, type TeamDto } from '../../../../shared/types';
@@ -53,6 +54,7 @@ export class MembersPage {
   private readonly api = inject(MembersApi);
   private readonly teamsApi = inject(TeamsApi);
   private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
 
   protected readonly roles = ROLES;
   protected readonly roleDescriptions = ROLE_DESCRIPTIONS;
@@ -131,7 +133,7 @@ export class MembersPage {
       .subscribe((updated) => {
         if (!updated) return;
         this.members.update((list) => list.map((m) => (m.userId === updated.userId ? updated : m)));
-        this.inviteNotice.set(`${updated.name} is now ${updated.role}.`);
+        this.say(`${updated.name} is now ${updated.role}.`);
       });
   }
 
@@ -165,8 +167,13 @@ export class MembersPage {
         this.teams.update((list) =>
           list.map((t) => ({ ...t, coachIds: t.coachIds.filter((id) => id !== gone) })),
         );
-        this.inviteNotice.set(`${row.member.name} was removed from the club.`);
+        this.say(`${row.member.name} was removed from the club.`);
       });
+  }
+
+  /** Says what a row's action did at the bottom of the screen, near the thumb that tapped it. */
+  private say(text: string): void {
+    this.snackBar.open(text, undefined, { duration: 4000, politeness: 'polite' });
   }
 
   protected revoke(invitation: InvitationDto): void {

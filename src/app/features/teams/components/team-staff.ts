@@ -4,7 +4,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatSelectModule } from '@angular/material/select';
-import type { MemberDto, TeamDto } from '../../../../../shared/types';
+import { ROLES, type MemberDto, type TeamDto } from '../../../../../shared/types';
 import { TeamsApi } from '../../../core/api/teams-api';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { problemMessage } from '../../../core/http/problem-message';
@@ -150,7 +150,7 @@ export class TeamStaff {
     this.team()
       .coachIds.map((id) => this.byId().get(id))
       .filter((member): member is MemberDto => member !== undefined)
-      .sort((a, b) => a.role.localeCompare(b.role) || a.name.localeCompare(b.name))
+      .sort((a, b) => ROLES.indexOf(a.role) - ROLES.indexOf(b.role) || a.name.localeCompare(b.name))
       .map((member) => ({
         member,
         removable: staffChangeAllowed(this.user(), this.team(), member, 'remove'),
