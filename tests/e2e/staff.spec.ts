@@ -194,6 +194,20 @@ describe('staff', () => {
     await row.waitFor();
     expect(await row.textContent()).toContain(TEAM);
 
+    // Their teams, from the members page: tick one more, and it is saved at once.
+    const second = await teamNamed(SECOND_TEAM);
+    await page.getByRole('button', { name: `Choose ${name}’s teams` }).click();
+    await page.getByRole('heading', { name: `${name}’s teams` }).waitFor();
+    const ticked = page.waitForResponse((r) =>
+      r.url().endsWith(`/api/teams/${second.id}/staff/${invitee.userId}`),
+    );
+    await page.getByRole('checkbox', { name: new RegExp(SECOND_TEAM) }).check();
+    expect((await ticked).status()).toBe(200);
+    await settled(page);
+    await screenshot(page, 'staff-member-teams');
+    await page.getByRole('button', { name: 'Done' }).click();
+    await expect.poll(async () => await row.textContent()).toContain(SECOND_TEAM);
+
     await page.getByRole('button', { name: `Change ${name}’s role` }).click();
     await page.getByRole('heading', { name: `${name}’s role` }).waitFor();
     await page.locator('mat-radio-button[data-role=coach] input').check();

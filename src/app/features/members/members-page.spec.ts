@@ -217,4 +217,26 @@ describe('MembersPage', () => {
     const request = http.expectOne('/api/invitations');
     expect(request.request.body).toEqual({ email: 'ash@club.test', role: 'assistant', teamId: 't1' });
   });
+
+  it('ticks and unticks a member’s teams, saving each at once', async () => {
+    const { fixture, http, el } = setUp();
+    http.expectOne('/api/members').flush(members);
+    http.expectOne('/api/invitations').flush([]);
+    http.expectOne('/api/teams').flush(teams);
+    await settle(fixture);
+    button(el, 'Choose Rhona Lead’s teams').click();
+    await settle(fixture);
+    const box = document.querySelector('mat-dialog-container input[type=checkbox]') as HTMLInputElement;
+    expect(box.checked).toBe(false);
+    box.click();
+    const request = http.expectOne('/api/teams/t1/staff/u1');
+    expect(request.request.method).toBe('PUT');
+    request.flush({ ...teams[0], coachIds: ['u2', 'u1'] });
+    await settle(fixture);
+    button(document.querySelector('mat-dialog-container')!, 'Done').click();
+    await settle(fixture);
+    const row = el.querySelector('[data-member="Rhona Lead"]')?.textContent ?? '';
+    expect(row).toContain('U10 Larks');
+    expect(row).not.toContain('Not on a team');
+  });
 });
