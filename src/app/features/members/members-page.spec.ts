@@ -2,6 +2,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import { provideRouter } from '@angular/router';
 import type { InvitationDto, MemberDto, TeamDto } from '../../../../shared/types';
 import { AuthStore } from '../../core/auth/auth-store';
 import { MembersPage } from './members-page';
@@ -65,7 +66,12 @@ describe('MembersPage', () => {
   function setUp() {
     TestBed.configureTestingModule({
       imports: [MembersPage],
-      providers: [provideHttpClient(), provideHttpClientTesting(), provideNoopAnimations()],
+      providers: [
+        provideHttpClient(),
+        provideHttpClientTesting(),
+        provideNoopAnimations(),
+        provideRouter([]),
+      ],
     });
     TestBed.inject(AuthStore).signIn({
       token: 't',

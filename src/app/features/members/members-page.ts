@@ -9,6 +9,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { DatePipe } from '@angular/common';
+import { Router } from '@angular/router';
 import { forkJoin } from 'rxjs';
 import { ROLES, type InvitationDto, type MemberDto, type Role, type TeamDto } from '../../../../shared/types';
 import { MembersApi } from '../../core/api/members-api';
@@ -67,8 +68,10 @@ export class MembersPage {
   protected readonly inviteError = signal<string | null>(null);
   protected readonly inviteNotice = signal<string | null>(null);
   protected readonly rowError = signal<string | null>(null);
+  private readonly auth = inject(AuthStore);
+  private readonly router = inject(Router);
   /** The signed-in lead, who cannot remove themselves here. */
-  protected readonly me = inject(AuthStore).user;
+  protected readonly me = this.auth.user;
 
   /** Invitations not yet accepted, soonest to expire first. */
   protected readonly pending = computed(() =>
@@ -134,6 +137,12 @@ export class MembersPage {
         if (!updated) return;
         this.members.update((list) => list.map((m) => (m.userId === updated.userId ? updated : m)));
         this.say(`${updated.name} is now ${updated.role}.`);
+        const me = this.me();
+        if (row.self && me && updated.role !== 'lead') {
+          // No longer a lead: this page is not theirs any more.
+          this.auth.updateUser({ ...me, role: updated.role });
+          void this.router.navigateByUrl('/');
+        }
       });
   }
 
