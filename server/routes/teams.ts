@@ -22,6 +22,14 @@ export function teamsRouter({ dataSource, requireAuth }: ApiDeps): Router {
   router.patch('/teams/:id', requireAuth, id, validate({ body: 'team-update' }), async (req, res) => {
     res.json(await service(req).update(req.params['id'] as string, req.body));
   });
+  // Staff: one member on or off the team at a time; the answer is the team with its staff.
+  const staff = validate({ params: 'team-staff-param' });
+  router.put('/teams/:id/staff/:userId', requireAuth, staff, async (req, res) => {
+    res.json(await service(req).addStaff(req.params['id'] as string, req.params['userId'] as string));
+  });
+  router.delete('/teams/:id/staff/:userId', requireAuth, staff, async (req, res) => {
+    res.json(await service(req).removeStaff(req.params['id'] as string, req.params['userId'] as string));
+  });
   router.delete('/teams/:id', requireAuth, id, async (req, res) => {
     await service(req).remove(req.params['id'] as string);
     res.status(204).end();

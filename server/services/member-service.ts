@@ -1,10 +1,11 @@
 import { createHash, randomBytes } from 'node:crypto';
-import { IsNull, MoreThan, type DataSource } from 'typeorm';
+import { In, IsNull, MoreThan, type DataSource, type EntityManager } from 'typeorm';
 import type { AuthResponse, InvitationDto, MemberDto, Role } from '../../shared/types/api';
 import type { AppConfig } from '../config';
 import { Club } from '../entities/club';
 import { Invitation } from '../entities/invitation';
 import { Membership } from '../entities/membership';
+import { Team } from '../entities/team';
 import { User } from '../entities/user';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { AuthService, emailTaken, hashPassword, normaliseEmail } from './auth-service';
@@ -17,14 +18,24 @@ export function hashInvitationToken(token: string): string {
   return createHash('sha256').update(token).digest('hex');
 }
 
-function invitationDto(invitation: Invitation): InvitationDto {
+function invitationDto(invitation: Invitation, teamName: string | null): InvitationDto {
   return {
     id: invitation.id,
     email: invitation.email,
     role: invitation.role,
     expiresAt: invitation.expiresAt.toISOString(),
     acceptedAt: invitation.acceptedAt ? invitation.acceptedAt.toISOString() : null,
+    teamId: invitation.teamId,
+    teamName: invitation.teamId ? teamName : null,
   };
+}
+
+/** Names of the club's teams that invitations point at (a deleted team has none). */
+async function teamNames(manager: EntityManager, clubId: string, ids: (string | null)[]) {
+  const wanted = [...new Set(ids.filter((id): id is string => id !== null))];
+  if (!wanted.length) return new Map<string, string>();
+  const teams = await manager.getRepository(Team).findBy({ clubId, id: In(wanted) });
+  return new Map(teams.map((team) => [team.id, team.name]));
 }
 
 /** The invitation e-mail: a link to the client's join page with the single-use token. */
@@ -34,12 +45,14 @@ export function invitationMail(
   inviter: string,
   role: Role,
   token: string,
+  teamName: string | null = null,
 ) {
   const link = `${config.publicUrl.replace(/\/$/, '')}/invitations/${encodeURIComponent(token)}`;
   return {
     subject: `${inviter} invited you to ${clubName} on Conewise`,
     text: [
-      `${inviter} invited you to join ${clubName} on Conewise as ${role === 'assistant' ? 'an' : 'a'} ${role}.`,
+      `${inviter} invited you to join ${clubName} on Conewise as ${role === 'assistant' ? 'an' : 'a'} ${role}` +
+        (teamName ? ` with ${teamName}.` : '.'),
       '',
       `Choose your name and password here: ${link}`,
       '',
@@ -50,7 +63,10 @@ export function invitationMail(
   };
 }
 
-/** Members of the caller's club and invitations to it (lead only, enforced in the router). */
+/**
+ * Members of the caller's club and invitations to it. Everyone reads the member list (names and
+ * roles); e-mail addresses go to the lead only. Changes are the lead's (enforced in the router).
+ */
 export class MemberService {
   constructor(
     private readonly scope: ClubScope,
@@ -65,7 +81,11 @@ export class MemberService {
     });
     return memberships
       .filter((m) => m.user)
-      .map((m) => ({ userId: m.userId, name: m.user!.name, email: m.user!.email, role: m.role }))
+      .map((m) =>
+        this.scope.auth.role === 'lead'
+          ? { userId: m.userId, name: m.user!.name, email: m.user!.email, role: m.role }
+          : { userId: m.userId, name: m.user!.name, role: m.role },
+      )
       .sort((a, b) => a.name.localeCompare(b.name));
   }
 
@@ -85,7 +105,9 @@ export class MemberService {
   async changeRole(userId: string, role: Role): Promise<MemberDto> {
     const membership = await this.membership(userId);
     if (membership.role === 'lead' && role !== 'lead' && (await this.leadCount()) <= 1) {
-      throw conflict('The club needs at least one lead. Make someone else lead first.');
+      throw conflict(
+        `${this.scope.auth.clubName} needs at least one lead. Make someone else lead first, then change this role.`,
+      );
     }
     membership.role = role;
     await this.scope.manager.getRepository(Membership).save(membership);
@@ -97,7 +119,9 @@ export class MemberService {
     const membership = await this.membership(userId);
     if (membership.userId === this.scope.auth.userId) throw conflict('You cannot remove yourself.');
     if (membership.role === 'lead' && (await this.leadCount()) <= 1)
-      throw conflict('The club needs at least one lead.');
+      throw conflict(
+        `${this.scope.auth.clubName} needs at least one lead. Make someone else lead first, then remove this member.`,
+      );
     // A user belongs to one club, so leaving it removes the account; their plans stay.
     await this.scope.manager.getRepository(User).delete({ id: membership.userId });
   }
@@ -106,12 +130,17 @@ export class MemberService {
     const rows = await this.scope.manager
       .getRepository(Invitation)
       .find({ where: this.scope.where<Invitation>(), order: { createdAt: 'DESC' } });
-    return rows.map(invitationDto);
+    const names = await teamNames(
+      this.scope.manager,
+      this.scope.clubId,
+      rows.map((row) => row.teamId),
+    );
+    return rows.map((row) => invitationDto(row, row.teamId ? (names.get(row.teamId) ?? null) : null));
   }
 
   async invite(input: { email: string; role: Role; teamId?: string }): Promise<InvitationDto> {
     const email = normaliseEmail(input.email);
-    if (input.teamId) await this.scope.team(input.teamId);
+    const team = input.teamId ? await this.scope.team(input.teamId) : null;
     return this.scope.manager.transaction(async (manager) => {
       if (await manager.getRepository(User).existsBy({ email })) throw emailTaken();
       const token = randomBytes(32).toString('base64url');
@@ -131,6 +160,7 @@ export class MemberService {
         this.scope.auth.name,
         input.role,
         token,
+        team?.name ?? null,
       );
       await this.mail.enqueue(manager, {
         clubId: this.scope.clubId,
@@ -139,7 +169,7 @@ export class MemberService {
         subject: message.subject,
         text: message.text,
       });
-      return invitationDto(invitation);
+      return invitationDto(invitation, team?.name ?? null);
     });
   }
 
@@ -161,17 +191,21 @@ export class InvitationAcceptService {
     private readonly config: AppConfig,
   ) {}
 
-  async lookup(token: string): Promise<{ email: string; role: Role; clubName: string; expiresAt: string }> {
+  async lookup(
+    token: string,
+  ): Promise<{ email: string; role: Role; clubName: string; expiresAt: string; teamName: string | null }> {
     const invitation = await this.dataSource.getRepository(Invitation).findOne({
       where: { tokenHash: hashInvitationToken(token), acceptedAt: IsNull(), expiresAt: MoreThan(new Date()) },
       relations: { club: true },
     });
     if (!invitation?.club) throw invalidToken();
+    const names = await teamNames(this.dataSource.manager, invitation.clubId, [invitation.teamId]);
     return {
       email: invitation.email,
       role: invitation.role,
       clubName: invitation.club.name,
       expiresAt: invitation.expiresAt.toISOString(),
+      teamName: invitation.teamId ? (names.get(invitation.teamId) ?? null) : null,
     };
   }
 

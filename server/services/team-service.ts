@@ -1,11 +1,12 @@
-import { In } from 'typeorm';
-import type { TeamDto } from '../../shared/types/api';
+import { In, type EntityManager } from 'typeorm';
+import type { Role, TeamDto } from '../../shared/types/api';
+import { staffChangeRefusal } from '../../shared/types/team-staff';
 import type { AgeGroup, Level, Space } from '../../shared/types/plan-request';
 import { KitBag } from '../entities/kit-bag';
 import { Membership } from '../entities/membership';
 import { Team } from '../entities/team';
 import { preparedQuery } from '../db/prepared-query';
-import { badRequest, forbidden } from '../http/problem';
+import { badRequest, forbidden, notFound } from '../http/problem';
 import type { ClubScope } from './club-scope';
 
 export interface TeamInput {
@@ -34,6 +35,25 @@ SELECT t.id, t.name, t."ageGroup", t.level, t."spaceWidth", t."spaceLength", t."
         OR EXISTS (SELECT 1 FROM team_coach tc WHERE tc."teamId" = t.id AND tc."userId" = $2::uuid))
  ORDER BY t.name`;
 
+/** The members on a team's staff (coaches and assistants). */
+async function staffOf(manager: EntityManager, teamId: string): Promise<string[]> {
+  const rows: { userId: string }[] = await manager.query(
+    'SELECT "userId"::text AS "userId" FROM team_coach WHERE "teamId" = $1',
+    [teamId],
+  );
+  return rows.map((row) => row.userId);
+}
+
+/** Makes the team's staff exactly these members, in the caller's transaction. */
+async function replaceStaff(manager: EntityManager, teamId: string, userIds: string[]): Promise<void> {
+  await manager.query('DELETE FROM team_coach WHERE "teamId" = $1', [teamId]);
+  if (!userIds.length) return;
+  await manager.query(
+    'INSERT INTO team_coach ("teamId", "userId") SELECT $1, unnest($2::uuid[]) ON CONFLICT DO NOTHING',
+    [teamId, userIds],
+  );
+}
+
 /** Squads of the caller's club. */
 export class TeamService {
   constructor(private readonly scope: ClubScope) {}
@@ -60,27 +80,34 @@ export class TeamService {
     return dto!;
   }
 
+  /** The team, its staff and its empty kit bag in one transaction: all of it or nothing. */
   async create(input: TeamInput): Promise<TeamDto> {
     const auth = this.scope.auth;
     if (auth.role === 'assistant') throw forbidden('Assistants cannot create teams.');
-    const coachIds = new Set(input.coachIds ?? []);
-    if (auth.role === 'coach') coachIds.add(auth.userId);
-    await this.checkStaff([...coachIds]);
-    const team = await this.manager.getRepository(Team).save({
-      clubId: this.scope.clubId,
-      name: input.name.trim(),
-      ageGroup: input.ageGroup,
-      level: input.level,
-      spaceWidth: input.usualSpace.width,
-      spaceLength: input.usualSpace.length,
+    const staffIds = [...new Set(input.coachIds ?? [])];
+    if (auth.role === 'coach' && !staffIds.includes(auth.userId)) staffIds.unshift(auth.userId);
+    const roles = await this.staffRoles(staffIds, 'coachIds');
+    // A coach creating a team is its first staff member; who else they may attach follows the rule.
+    this.assertStaffChanges(auth.role === 'coach' ? [auth.userId] : [], roles, staffIds, []);
+    const id = await this.manager.transaction(async (manager) => {
+      const team = await manager.getRepository(Team).save({
+        clubId: this.scope.clubId,
+        name: input.name.trim(),
+        ageGroup: input.ageGroup,
+        level: input.level,
+        spaceWidth: input.usualSpace.width,
+        spaceLength: input.usualSpace.length,
+      });
+      await replaceStaff(manager, team.id, staffIds);
+      await manager
+        .getRepository(KitBag)
+        .save({ teamId: team.id, clubId: this.scope.clubId, balls: 0, cones: 0, bibs: 0, goals: 0 });
+      return team.id;
     });
-    await this.setStaff(team.id, [...coachIds]);
-    await this.manager
-      .getRepository(KitBag)
-      .save({ teamId: team.id, clubId: this.scope.clubId, balls: 0, cones: 0, bibs: 0, goals: 0 });
-    return this.get(team.id);
+    return this.get(id);
   }
 
+  /** The team's details and, when `coachIds` is given, its whole staff, in one transaction. */
   async update(id: string, input: Partial<TeamInput>): Promise<TeamDto> {
     const team = await this.scope.teamToManage(id);
     if (input.name !== undefined) team.name = input.name.trim();
@@ -90,16 +117,45 @@ export class TeamService {
       team.spaceWidth = input.usualSpace.width;
       team.spaceLength = input.usualSpace.length;
     }
-    await this.manager.getRepository(Team).save(team);
+    let staffIds: string[] | null = null;
     if (input.coachIds !== undefined) {
-      const coachIds = [...new Set(input.coachIds)];
-      // A coach cannot take themselves off their own team; the lead can.
-      if (this.scope.auth.role === 'coach' && !coachIds.includes(this.scope.auth.userId)) {
-        coachIds.push(this.scope.auth.userId);
-      }
-      await this.checkStaff(coachIds);
-      await this.setStaff(team.id, coachIds);
+      staffIds = [...new Set(input.coachIds)];
+      const current = await staffOf(this.manager, team.id);
+      const added = staffIds.filter((userId) => !current.includes(userId));
+      const removed = current.filter((userId) => !staffIds!.includes(userId));
+      const roles = await this.staffRoles([...added, ...removed], 'coachIds');
+      this.assertStaffChanges(current, roles, added, removed);
     }
+    await this.manager.transaction(async (manager) => {
+      await manager.getRepository(Team).save(team);
+      if (staffIds) await replaceStaff(manager, team.id, staffIds);
+    });
+    return this.get(team.id);
+  }
+
+  /** Puts a member of the club on the team's staff; already there is no change. */
+  async addStaff(teamId: string, userId: string): Promise<TeamDto> {
+    const team = await this.scope.team(teamId);
+    const current = await staffOf(this.manager, team.id);
+    const roles = await this.staffRoles([userId], null);
+    this.assertStaffChanges(current, roles, [userId], []);
+    await this.manager.query(
+      'INSERT INTO team_coach ("teamId", "userId") VALUES ($1, $2) ON CONFLICT DO NOTHING',
+      [team.id, userId],
+    );
+    return this.get(team.id);
+  }
+
+  /** Takes a member off the team's staff; not on it is no change. */
+  async removeStaff(teamId: string, userId: string): Promise<TeamDto> {
+    const team = await this.scope.team(teamId);
+    const current = await staffOf(this.manager, team.id);
+    const roles = await this.staffRoles([userId], null);
+    this.assertStaffChanges(current, roles, [], [userId]);
+    await this.manager.query('DELETE FROM team_coach WHERE "teamId" = $1 AND "userId" = $2', [
+      team.id,
+      userId,
+    ]);
     return this.get(team.id);
   }
 
@@ -108,28 +164,41 @@ export class TeamService {
     await this.manager.getRepository(Team).delete({ id: team.id, clubId: this.scope.clubId });
   }
 
-  /** Staff must be members of this club (coaches or assistants; the lead may attach too). */
-  private async checkStaff(userIds: string[]): Promise<void> {
-    if (!userIds.length) return;
+  /**
+   * The club roles of the given members. Someone who is not a member of this club is refused: as a
+   * bad `field` of a body, or as an unknown member (404) when named in the path (`field` null).
+   */
+  private async staffRoles(userIds: string[], field: string | null): Promise<Map<string, Role>> {
+    if (!userIds.length) return new Map();
     const members = await this.manager
       .getRepository(Membership)
       .findBy({ clubId: this.scope.clubId, userId: In(userIds) });
-    const known = new Set(members.map((m) => m.userId));
-    const unknown = userIds.filter((id) => !known.has(id));
-    if (unknown.length) {
-      throw badRequest('Some coaches are not members of this club.', [
-        { field: 'coachIds', message: `not members of this club: ${unknown.join(', ')}` },
+    const roles = new Map(members.map((m) => [m.userId, m.role]));
+    if (userIds.some((userId) => !roles.has(userId))) {
+      if (!field) throw notFound('member');
+      throw badRequest('Someone picked for this team is not a member of the club.', [
+        { field, message: 'Pick coaches and assistants from the club’s members.' },
       ]);
     }
+    return roles;
   }
 
-  private async setStaff(teamId: string, userIds: string[]): Promise<void> {
-    await this.manager.query('DELETE FROM team_coach WHERE "teamId" = $1', [teamId]);
-    for (const userId of userIds) {
-      await this.manager.query('INSERT INTO team_coach ("teamId", "userId") VALUES ($1, $2)', [
-        teamId,
-        userId,
-      ]);
+  /** 403 with the reason when the caller may not make one of these staff changes. */
+  private assertStaffChanges(
+    current: readonly string[],
+    roles: Map<string, Role>,
+    added: readonly string[],
+    removed: readonly string[],
+  ): void {
+    const caller = { id: this.scope.auth.userId, role: this.scope.auth.role };
+    const changes = [
+      ...added.map((userId) => ({ userId, change: 'add' as const })),
+      ...removed.map((userId) => ({ userId, change: 'remove' as const })),
+    ];
+    for (const { userId, change } of changes) {
+      const member = { userId, role: roles.get(userId) ?? 'assistant' };
+      const refusal = staffChangeRefusal(caller, current, member, change);
+      if (refusal) throw forbidden(refusal);
     }
   }
 

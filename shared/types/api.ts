@@ -131,7 +131,8 @@ export interface AttendanceDto {
 export interface MemberDto {
   userId: string;
   name: string;
-  email: string;
+  /** Only the lead sees members' e-mail addresses; absent for everyone else. */
+  email?: string;
   role: Role;
 }
 
@@ -141,6 +142,9 @@ export interface InvitationDto {
   role: Role;
   expiresAt: string;
   acceptedAt: string | null;
+  /** The team the invitee joins on acceptance, when the invitation names one. */
+  teamId: string | null;
+  teamName: string | null;
 }
 
 export interface HealthDto {

@@ -10,6 +10,7 @@ import {
   type ClubCast,
   type TestApp,
 } from '../support/api-test-app';
+import { createPlan, createSquad } from './fixtures/plan-helpers';
 
 describe('members and invitations', () => {
   let app: TestApp;
@@ -82,8 +83,58 @@ describe('members and invitations', () => {
     expect(again.body.errors[0].field).toBe('token');
     const list = await app.api.get('/api/invitations', { token: club.lead.token });
     expect(list.body.find((i: { email: string }) => i.email === email).acceptedAt).not.toBeNull();
-    const members = await app.api.get('/api/members', { token: club.coach.token });
+    const members = await app.api.get('/api/members', { token: club.lead.token });
     expect(members.body.map((m: { email: string }) => m.email)).toContain(email);
+    // The invitation row says which team; the e-mail named it too.
+    const row = list.body.find((i: { email: string }) => i.email === email);
+    expect(row).toMatchObject({ teamId: team.id, teamName: 'U11 Kites' });
+    expect(outbox.textBody).toContain('with U11 Kites');
+  });
+
+  it('an invited assistant lands on the invitation’s team and sees its plans at once', async () => {
+    const squad = await createSquad(app, club.lead.token, 8, 'U9 Plovers');
+    const team = { id: squad.teamId };
+    const plan = await createPlan(app, club.lead.token, squad);
+    const email = uniqueEmail('helper');
+    await app.api.post(
+      '/api/invitations',
+      { email, role: 'assistant', teamId: team.id },
+      { token: club.lead.token },
+    );
+    const token = await tokenFromOutbox(email);
+    const lookup = await app.api.get(`/api/invitations/lookup?token=${encodeURIComponent(token)}`);
+    expect(lookup.body).toMatchObject({ role: 'assistant', teamName: 'U9 Plovers' });
+    const accepted = await app.api.post('/api/invitations/accept', {
+      token,
+      name: 'Hana Helper',
+      password: TEST_PASSWORD,
+    });
+    expect(accepted.status).toBe(201);
+    const teams = await app.api.get('/api/teams', { token: accepted.body.token });
+    expect(teams.body.map((t: { id: string }) => t.id)).toEqual([team.id]);
+    const plans = await app.api.get('/api/plans', { token: accepted.body.token });
+    expect(plans.status).toBe(200);
+    expect(plans.body.items.map((p: { id: string }) => p.id)).toEqual([plan.id]);
+  });
+
+  it('e-mail addresses go to the lead only: coaches and assistants get names and roles', async () => {
+    const lead = await app.api.get('/api/members', { token: club.lead.token });
+    expect(lead.status).toBe(200);
+    for (const member of lead.body) expect(member.email).toMatch(/@/);
+    for (const signedIn of [club.coach, club.assistant]) {
+      const response = await app.api.get('/api/members', { token: signedIn.token });
+      expect(response.status).toBe(200);
+      expect(response.body.length).toBe(lead.body.length);
+      for (const member of response.body) {
+        expect(Object.keys(member).sort()).toEqual(['name', 'role', 'userId']);
+      }
+      expect(JSON.stringify(response.body)).not.toContain('@');
+    }
+    // Another club's lead sees none of this club's members.
+    const rival = await app.api.get('/api/members', { token: other.lead.token });
+    const ids = rival.body.map((m: { userId: string }) => m.userId);
+    expect(ids).not.toContain(club.coach.user.id);
+    expect(ids).not.toContain(club.assistant.user.id);
   });
 
   it('only the lead invites and manages members (403 for coach and assistant)', async () => {
@@ -146,6 +197,7 @@ describe('members and invitations', () => {
       { token: local.lead.token },
     );
     expect(lastLead.status).toBe(409);
+    expect(lastLead.body.detail).toContain('needs at least one lead');
     expect(
       (await app.api.delete(`/api/members/${local.lead.user.id}`, { token: local.lead.token })).status,
     ).toBe(409);

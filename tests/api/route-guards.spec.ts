@@ -23,6 +23,8 @@ const ROUTES: [method: string, path: string][] = [
   ['DELETE', `/api/players/${SOME_ID}`],
   ['GET', `/api/teams/${SOME_ID}/kit`],
   ['PUT', `/api/teams/${SOME_ID}/kit`],
+  ['PUT', `/api/teams/${SOME_ID}/staff/${SOME_ID}`],
+  ['DELETE', `/api/teams/${SOME_ID}/staff/${SOME_ID}`],
   ['GET', '/api/members'],
   ['PATCH', `/api/members/${SOME_ID}`],
   ['DELETE', `/api/members/${SOME_ID}`],

@@ -26,6 +26,8 @@ export interface InvitationLookup {
   role: Role;
   clubName: string;
   expiresAt: string;
+  /** The team the invitee will help with, when the invitation names one. */
+  teamName: string | null;
 }
 
 /** Sign-in, club creation and invitations: the calls that hand out a session. */

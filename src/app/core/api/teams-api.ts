@@ -42,6 +42,16 @@ export class TeamsApi {
     return this.http.delete<void>(`/api/teams/${id}`);
   }
 
+  /** PUT /api/teams/:id/staff/:userId: puts a club member on the team; answers the team. */
+  addStaff(id: string, userId: string): Observable<TeamDto> {
+    return this.http.put<TeamDto>(`/api/teams/${id}/staff/${encodeURIComponent(userId)}`, null);
+  }
+
+  /** DELETE /api/teams/:id/staff/:userId: takes a member off the team; answers the team. */
+  removeStaff(id: string, userId: string): Observable<TeamDto> {
+    return this.http.delete<TeamDto>(`/api/teams/${id}/staff/${encodeURIComponent(userId)}`);
+  }
+
   kit(id: string): Observable<KitBagDto> {
     return this.http.get<KitBagDto>(`/api/teams/${id}/kit`);
   }

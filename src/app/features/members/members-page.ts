@@ -2,25 +2,38 @@ import { ChangeDetectionStrategy, Component, computed, inject, signal, viewChild
 import { FormBuilder, FormGroupDirective, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
+import { MatDialog } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { DatePipe } from '@angular/common';
+import { Router } from '@angular/router';
 import { forkJoin } from 'rxjs';
-import { ROLES, type InvitationDto, type MemberDto, type Role } from '../../../../shared/types';
-import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { ROLES, type InvitationDto, type MemberDto, type Role, type TeamDto } from '../../../../shared/types';
+import { MembersApi } from '../../core/api/members-api';
+import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
-import { MembersApi } from './services/members-api';
+import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { RoleChip } from '../../shared/components/role-chip';
+import { MemberRoleDialog, type MemberRoleData } from './components/member-role-dialog';
+import { MemberTeamsDialog, type MemberTeamsData } from './components/member-teams-dialog';
+import { RemoveMemberDialog, type RemoveMemberData } from './components/remove-member-dialog';
+import { ROLE_DESCRIPTIONS } from './role-descriptions';
 
-/** What each role may do, in the words the invite form shows. */
-export const ROLE_DESCRIPTIONS: Record<Role, string> = {
-  lead: 'Head of coaching: club rules, members and every team',
-  coach: 'Runs their teams: players, kit bag and plans',
-  assistant: 'Helps at sessions: sees plans, records attendance and how stations went',
-};
+export { ROLE_DESCRIPTIONS };
 
-/** The club's people: who is in, with which role, and who has been invited. */
+/** One member with the names of the teams they are on. */
+interface MemberRow {
+  member: MemberDto;
+  teams: string[];
+  self: boolean;
+}
+
+const DIALOG_SIZE = { width: '480px', maxWidth: 'calc(100vw - 32px)' };
+
+/** The club's people: who is in, with which role and teams, and who has been invited. */
 @Component({
   selector: 'cw-members-page',
   imports: [
@@ -32,6 +45,7 @@ export const ROLE_DESCRIPTIONS: Record<Role, string> = {
     MatIconModule,
     MatInputModule,
     MatSelectModule,
+    RoleChip,
   ],
   templateUrl: './members-page.html',
   styleUrl: './members-page.scss',
@@ -39,19 +53,25 @@ export const ROLE_DESCRIPTIONS: Record<Role, string> = {
 })
 export class MembersPage {
   private readonly api = inject(MembersApi);
+  private readonly teamsApi = inject(TeamsApi);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
 
   protected readonly roles = ROLES;
   protected readonly roleDescriptions = ROLE_DESCRIPTIONS;
   protected readonly members = signal<MemberDto[]>([]);
   protected readonly invitations = signal<InvitationDto[]>([]);
+  protected readonly teams = signal<TeamDto[]>([]);
   protected readonly loaded = signal(false);
   protected readonly loadError = signal<string | null>(null);
   protected readonly sending = signal(false);
   protected readonly inviteError = signal<string | null>(null);
   protected readonly inviteNotice = signal<string | null>(null);
   protected readonly rowError = signal<string | null>(null);
-  /** The signed-in lead, who cannot demote or remove themselves here. */
-  protected readonly me = inject(AuthStore).user;
+  private readonly auth = inject(AuthStore);
+  private readonly router = inject(Router);
+  /** The signed-in lead, who cannot remove themselves here. */
+  protected readonly me = this.auth.user;
 
   /** Invitations not yet accepted, soonest to expire first. */
   protected readonly pending = computed(() =>
@@ -59,15 +79,22 @@ export class MembersPage {
       .filter((invitation) => !invitation.acceptedAt)
       .sort((a, b) => a.expiresAt.localeCompare(b.expiresAt)),
   );
-  protected readonly sortedMembers = computed(() =>
-    [...this.members()].sort(
-      (a, b) => ROLES.indexOf(a.role) - ROLES.indexOf(b.role) || a.name.localeCompare(b.name),
-    ),
+  protected readonly rows = computed<MemberRow[]>(() =>
+    [...this.members()]
+      .sort((a, b) => ROLES.indexOf(a.role) - ROLES.indexOf(b.role) || a.name.localeCompare(b.name))
+      .map((member) => ({
+        member,
+        teams: this.teams()
+          .filter((team) => team.coachIds.includes(member.userId))
+          .map((team) => team.name),
+        self: member.userId === this.me()?.id,
+      })),
   );
 
   protected readonly form = inject(FormBuilder).nonNullable.group({
     email: ['', [Validators.required, Validators.email, Validators.maxLength(254)]],
     role: ['coach' as Role, Validators.required],
+    teamId: [''],
   });
 
   /** The form's directive: resetting through it also clears "submitted", so no error shows after a send. */
@@ -79,10 +106,15 @@ export class MembersPage {
 
   protected reload(): void {
     this.loadError.set(null);
-    forkJoin({ members: this.api.listMembers(), invitations: this.api.listInvitations() }).subscribe({
-      next: ({ members, invitations }) => {
+    forkJoin({
+      members: this.api.listMembers(),
+      invitations: this.api.listInvitations(),
+      teams: this.teamsApi.list(),
+    }).subscribe({
+      next: ({ members, invitations, teams }) => {
         this.members.set(members);
         this.invitations.set(invitations);
+        this.teams.set(teams);
         this.loaded.set(true);
       },
       error: (error: unknown) => this.loadError.set(problemMessage(error)),
@@ -93,32 +125,64 @@ export class MembersPage {
     return new Date(invitation.expiresAt).getTime() < Date.now();
   }
 
-  protected changeRole(member: MemberDto, role: Role): void {
-    if (role === member.role) return;
+  protected changeRole(row: MemberRow): void {
     this.rowError.set(null);
-    this.api.changeRole(member.userId, role).subscribe({
-      next: (updated) => {
+    this.dialog
+      .open<MemberRoleDialog, MemberRoleData, MemberDto>(MemberRoleDialog, {
+        ...DIALOG_SIZE,
+        data: { member: row.member, self: row.self },
+      })
+      .afterClosed()
+      .subscribe((updated) => {
+        if (!updated) return;
         this.members.update((list) => list.map((m) => (m.userId === updated.userId ? updated : m)));
-        this.inviteNotice.set(`${updated.name} is now ${updated.role}.`);
-      },
-      error: (error: unknown) => {
-        // Put the select back to what the server still holds.
-        this.members.update((list) => [...list]);
-        this.rowError.set(problemMessage(error));
-      },
-    });
+        this.say(`${updated.name} is now ${updated.role}.`);
+        const me = this.me();
+        if (row.self && me && updated.role !== 'lead') {
+          // No longer a lead: this page is not theirs any more.
+          this.auth.updateUser({ ...me, role: updated.role });
+          void this.router.navigateByUrl('/');
+        }
+      });
   }
 
-  protected removeMember(member: MemberDto): void {
-    if (!confirm(`Remove ${member.name} from the club? They lose access at once.`)) return;
+  protected chooseTeams(row: MemberRow): void {
     this.rowError.set(null);
-    this.api.removeMember(member.userId).subscribe({
-      next: () => {
-        this.members.update((list) => list.filter((m) => m.userId !== member.userId));
-        this.inviteNotice.set(`${member.name} was removed from the club.`);
-      },
-      error: (error: unknown) => this.rowError.set(problemMessage(error)),
-    });
+    this.dialog
+      .open<MemberTeamsDialog, MemberTeamsData, TeamDto[]>(MemberTeamsDialog, {
+        ...DIALOG_SIZE,
+        data: { member: row.member, teams: this.teams() },
+      })
+      .afterClosed()
+      .subscribe((teams) => {
+        // Closed by a tap outside: read the teams again, since ticks were saved as they were made.
+        if (teams) this.teams.set(teams);
+        else this.teamsApi.list().subscribe({ next: (list) => this.teams.set(list) });
+      });
+  }
+
+  protected removeMember(row: MemberRow): void {
+    this.rowError.set(null);
+    this.dialog
+      .open<RemoveMemberDialog, RemoveMemberData, boolean>(RemoveMemberDialog, {
+        ...DIALOG_SIZE,
+        data: { member: row.member, clubName: this.me()?.clubName ?? 'the club' },
+      })
+      .afterClosed()
+      .subscribe((removed) => {
+        if (!removed) return;
+        const gone = row.member.userId;
+        this.members.update((list) => list.filter((m) => m.userId !== gone));
+        this.teams.update((list) =>
+          list.map((t) => ({ ...t, coachIds: t.coachIds.filter((id) => id !== gone) })),
+        );
+        this.say(`${row.member.name} was removed from the club.`);
+      });
+  }
+
+  /** Says what a row's action did at the bottom of the screen, near the thumb that tapped it. */
+  private say(text: string): void {
+    this.snackBar.open(text, undefined, { duration: 4000, politeness: 'polite' });
   }
 
   protected revoke(invitation: InvitationDto): void {
@@ -136,17 +200,18 @@ export class MembersPage {
       this.form.markAllAsTouched();
       return;
     }
-    const { email, role } = this.form.getRawValue();
+    const { email, role, teamId } = this.form.getRawValue();
     const address = email.trim().toLowerCase();
     this.sending.set(true);
     this.inviteError.set(null);
     this.inviteNotice.set(null);
-    this.api.invite(address, role).subscribe({
+    this.api.invite(address, role, teamId || null).subscribe({
       next: (invitation) => {
         this.sending.set(false);
         this.invitations.update((list) => [invitation, ...list.filter((i) => i.id !== invitation.id)]);
-        this.inviteNotice.set(`Invitation sent to ${invitation.email} as ${invitation.role}.`);
-        this.formDirective().resetForm({ email: '', role });
+        const team = invitation.teamName ? ` for ${invitation.teamName}` : '';
+        this.inviteNotice.set(`Invitation sent to ${invitation.email} as ${invitation.role}${team}.`);
+        this.formDirective().resetForm({ email: '', role, teamId });
       },
       error: (error: unknown) => {
         this.sending.set(false);

@@ -8,12 +8,13 @@ import { TeamsApi, type TeamBody } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { LEVEL_LABELS } from '../../core/labels/plan-labels';
+import { NoTeamYet } from '../../shared/components/no-team-yet';
 import { TeamDefaultsForm } from './components/team-defaults-form';
 
 /** The club's teams, and a short form to add one. */
 @Component({
   selector: 'cw-team-list-page',
-  imports: [RouterLink, MatCardModule, MatButtonModule, MatIconModule, TeamDefaultsForm],
+  imports: [RouterLink, MatCardModule, MatButtonModule, MatIconModule, TeamDefaultsForm, NoTeamYet],
   templateUrl: './team-list-page.html',
   styleUrl: './team-list-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -3,7 +3,7 @@ import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@a
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter, Router } from '@angular/router';
-import type { PlayerDto, Role, TeamDto } from '../../../../shared/types';
+import type { MemberDto, PlayerDto, Role, TeamDto } from '../../../../shared/types';
 import { AuthStore } from '../../core/auth/auth-store';
 import { TeamPage } from './team-page';
 
@@ -21,6 +21,13 @@ const PLAYERS: PlayerDto[] = [
   { id: 'p1', teamId: 't1', displayName: 'Ola K.', goalkeeper: true, active: true },
   { id: 'p2', teamId: 't1', displayName: 'Rui M.', goalkeeper: false, active: true },
   { id: 'p3', teamId: 't1', displayName: 'Tam J.', goalkeeper: false, active: false },
+];
+
+const MEMBERS: MemberDto[] = [
+  { userId: 'lead-1', name: 'Lia Lead', role: 'lead' },
+  { userId: 'coach-1', name: 'Cas Coach', role: 'coach' },
+  { userId: 'coach-2', name: 'Dov Coach', role: 'coach' },
+  { userId: 'helper-1', name: 'Hew Helper', role: 'assistant' },
 ];
 
 const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges(): void }) => {
@@ -64,6 +71,7 @@ describe('TeamPage', () => {
     fixture.detectChanges();
     http.expectOne('/api/teams/t1').flush(team);
     http.expectOne((r) => r.url === '/api/teams/t1/players').flush(PLAYERS);
+    http.expectOne('/api/members').flush(MEMBERS);
     http.expectOne('/api/teams/t1/kit').flush({ balls: 10, cones: 20, bibs: 8, goals: 2 });
     await settle(fixture);
     return { fixture, http, navigate, root: fixture.nativeElement as HTMLElement };
@@ -281,5 +289,49 @@ describe('TeamPage', () => {
     request.flush(null, { status: 204, statusText: 'No Content' });
     await new Promise((resolve) => setTimeout(resolve, 50));
     expect(navigate).toHaveBeenCalledWith(['/teams']);
+  });
+
+  it('a coach of the team adds an assistant to the staff, and only assistants are offered', async () => {
+    const { fixture, http, root } = await setUp('coach');
+    const staff = root.querySelector('[data-testid=team-staff]')?.textContent ?? '';
+    expect(staff).toContain('Cas Coach');
+    // Cas may not take themselves off: no remove button on their own row.
+    expect(root.querySelector('[aria-label="Take Cas Coach off this team"]')).toBeNull();
+    (root.querySelector('[data-testid=staff-pick] .mat-mdc-select-trigger') as HTMLElement).click();
+    await settle(fixture);
+    const options = Array.from(document.querySelectorAll('mat-option')).map((o) => o.textContent?.trim());
+    expect(options).toEqual(['Hew Helper (assistant)']);
+    (document.querySelector('mat-option') as HTMLElement).click();
+    await settle(fixture);
+    button(root, 'person_add Add to staff').click();
+    const request = http.expectOne('/api/teams/t1/staff/helper-1');
+    expect(request.request.method).toBe('PUT');
+    request.flush({ ...TEAM, coachIds: ['coach-1', 'helper-1'] });
+    await settle(fixture);
+    expect(root.querySelector('[data-testid=team-staff]')?.textContent).toContain('Hew Helper');
+  });
+
+  it('the lead takes someone off the staff after saying so once more in the row', async () => {
+    const { fixture, http, root } = await setUp('lead', 'lead-1', {
+      ...TEAM,
+      coachIds: ['coach-1', 'helper-1'],
+    });
+    button(root, 'Take Hew Helper off this team').click();
+    await settle(fixture);
+    http.expectNone('/api/teams/t1/staff/helper-1');
+    expect(root.textContent).toContain('Take Hew Helper off U9 Herons?');
+    button(root, 'Take off').click();
+    const request = http.expectOne('/api/teams/t1/staff/helper-1');
+    expect(request.request.method).toBe('DELETE');
+    request.flush({ ...TEAM, coachIds: ['coach-1'] });
+    await settle(fixture);
+    expect(root.querySelector('[data-testid=team-staff]')?.textContent).not.toContain('Hew Helper');
+  });
+
+  it('an assistant sees the staff but cannot change it', async () => {
+    const { root } = await setUp('assistant', 'helper-1', { ...TEAM, coachIds: ['coach-1', 'helper-1'] });
+    expect(root.querySelector('[data-testid=team-staff]')?.textContent).toContain('Hew Helper');
+    expect(root.querySelector('[data-testid=staff-pick]')).toBeNull();
+    expect(root.querySelector('[aria-label^="Take "]')).toBeNull();
   });
 });

@@ -16,7 +16,8 @@ import { MatExpansionModule } from '@angular/material/expansion';
 import { MatIconModule } from '@angular/material/icon';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import type { KitBagDto, PlayerDto, TeamDto } from '../../../../shared/types';
+import type { KitBagDto, MemberDto, PlayerDto, TeamDto } from '../../../../shared/types';
+import { MembersApi } from '../../core/api/members-api';
 import { PlayerBody, PlayersApi } from '../../core/api/players-api';
 import { TeamBody, TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
@@ -29,6 +30,7 @@ import { PlayerDialog } from './components/player-dialog';
 import { PlayersTable } from './components/players-table';
 import { RemovePlayerDialog } from './components/remove-player-dialog';
 import { TeamDefaultsForm } from './components/team-defaults-form';
+import { TeamStaff } from './components/team-staff';
 import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
 
 /** One team: its players, CSV import, kit bag and defaults, with the way into planning and out. */
@@ -44,6 +46,7 @@ import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
     CsvImport,
     KitBagForm,
     TeamDefaultsForm,
+    TeamStaff,
   ],
   templateUrl: './team-page.html',
   styleUrl: './team-page.scss',
@@ -52,6 +55,7 @@ import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
 export class TeamPage {
   private readonly teamsApi = inject(TeamsApi);
   private readonly playersApi = inject(PlayersApi);
+  private readonly membersApi = inject(MembersApi);
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly auth = inject(AuthStore);
@@ -63,6 +67,8 @@ export class TeamPage {
   protected readonly team = signal<TeamDto | null>(null);
   protected readonly players = signal<PlayerDto[]>([]);
   protected readonly kit = signal<KitBagDto | null>(null);
+  /** The club's members, for the staff section (names and roles). */
+  protected readonly members = signal<MemberDto[]>([]);
   protected readonly error = signal<string | null>(null);
   protected readonly levelLabels = LEVEL_LABELS;
   protected readonly activeCount = computed(() => this.players().filter((p) => p.active).length);
@@ -80,6 +86,10 @@ export class TeamPage {
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
     this.loadPlayers(id);
+    this.membersApi.listMembers().subscribe({
+      next: (members) => this.members.set(members),
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
     this.teamsApi.kit(id).subscribe({
       next: (kit) => this.kit.set(kit),
       error: () => this.kit.set({ balls: 0, cones: 0, bibs: 0, goals: 0 }),
@@ -176,6 +186,16 @@ export class TeamPage {
       },
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
+  }
+
+  protected staffChanged(team: TeamDto): void {
+    const before = new Set(this.team()?.coachIds ?? []);
+    this.team.set(team);
+    const names = new Map(this.members().map((m) => [m.userId, m.name]));
+    const added = team.coachIds.find((id) => !before.has(id));
+    const removed = [...before].find((id) => !team.coachIds.includes(id));
+    if (added) this.say(`${names.get(added) ?? 'They'} can now see ${team.name} and its plans.`);
+    else if (removed) this.say(`${names.get(removed) ?? 'They'} is no longer on ${team.name}.`);
   }
 
   private say(text: string): void {

@@ -1,5 +1,5 @@
 import type { Role } from '../../../../shared/types';
-import { teamPermissions } from './team-permissions';
+import { staffChangeAllowed, teamPermissions } from './team-permissions';
 
 // The team's staff list holds coaches and assistants alike.
 const TEAM = { coachIds: ['coach-1', 'helper-1'] };
@@ -14,11 +14,48 @@ describe('teamPermissions', () => {
     ['an assistant on the team', false, member('assistant', 'helper-1')],
     ['an assistant not on the team', false, member('assistant', 'helper-2')],
   ])('%s may change and delete it: %s', (_who, allowed, user) => {
-    expect(teamPermissions(user, TEAM)).toEqual({ change: allowed, delete: allowed });
+    expect(teamPermissions(user, TEAM)).toEqual({ change: allowed, delete: allowed, staff: allowed });
   });
 
   it('allows nothing while the member or the team is unknown', () => {
-    expect(teamPermissions(null, TEAM)).toEqual({ change: false, delete: false });
-    expect(teamPermissions(member('lead', 'lead-1'), null)).toEqual({ change: false, delete: false });
+    const none = { change: false, delete: false, staff: false };
+    expect(teamPermissions(null, TEAM)).toEqual(none);
+    expect(teamPermissions(member('lead', 'lead-1'), null)).toEqual(none);
+    expect(staffChangeAllowed(null, TEAM, { userId: 'helper-2', role: 'assistant' }, 'add')).toBe(false);
+  });
+});
+
+describe('staffChangeAllowed', () => {
+  const helper = { userId: 'helper-2', role: 'assistant' as const };
+  const coach = { userId: 'coach-2', role: 'coach' as const };
+  it.each([
+    ['the lead adds a coach', true, member('lead', 'lead-1'), coach, 'add'],
+    [
+      'the lead takes a coach off',
+      true,
+      member('lead', 'lead-1'),
+      { userId: 'coach-1', role: 'coach' },
+      'remove',
+    ],
+    ['a coach on the team adds an assistant', true, member('coach', 'coach-1'), helper, 'add'],
+    [
+      'a coach on the team takes an assistant off',
+      true,
+      member('coach', 'coach-1'),
+      { userId: 'helper-1', role: 'assistant' },
+      'remove',
+    ],
+    ['a coach on the team adds another coach', false, member('coach', 'coach-1'), coach, 'add'],
+    [
+      'a coach on the team takes themselves off',
+      false,
+      member('coach', 'coach-1'),
+      { userId: 'coach-1', role: 'coach' },
+      'remove',
+    ],
+    ['a coach of another team adds an assistant', false, member('coach', 'coach-2'), helper, 'add'],
+    ['an assistant on the team adds an assistant', false, member('assistant', 'helper-1'), helper, 'add'],
+  ] as const)('%s: %s', (_what, allowed, user, target, change) => {
+    expect(staffChangeAllowed(user, TEAM, target, change)).toBe(allowed);
   });
 });

@@ -1,9 +1,9 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { InvitationDto, MemberDto, Role } from '../../../../../shared/types';
+import type { InvitationDto, MemberDto, Role } from '../../../../shared/types';
 
-/** The club's members and the invitations still open. Lead only. */
+/** The club's members (everyone reads names and roles; the lead also e-mails) and invitations (lead). */
 @Injectable({ providedIn: 'root' })
 export class MembersApi {
   private readonly http = inject(HttpClient);
@@ -33,8 +33,14 @@ export class MembersApi {
     return this.http.delete<void>(`/api/invitations/${encodeURIComponent(invitationId)}`);
   }
 
-  /** POST /api/invitations: e-mails a single-use link that joins the club with the role. */
-  invite(email: string, role: Role): Observable<InvitationDto> {
-    return this.http.post<InvitationDto>('/api/invitations', { email, role });
+  /**
+   * POST /api/invitations: e-mails a single-use link that joins the club with the role and, when a
+   * team is given, puts the invitee on that team's staff.
+   */
+  invite(email: string, role: Role, teamId: string | null = null): Observable<InvitationDto> {
+    return this.http.post<InvitationDto>(
+      '/api/invitations',
+      teamId ? { email, role, teamId } : { email, role },
+    );
   }
 }

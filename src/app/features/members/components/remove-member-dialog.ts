@@ -1,0 +1,80 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import type { MemberDto } from '../../../../../shared/types';
+import { MembersApi } from '../../../core/api/members-api';
+import { problemMessage } from '../../../core/http/problem-message';
+
+/** What the lead is asked about: the member and the club's name. */
+export interface RemoveMemberData {
+  member: MemberDto;
+  clubName: string;
+}
+
+/**
+ * Asks before someone leaves the club for good, and does it. Closes with `true` once the server
+ * has removed them; a refusal (the club's last lead) stays in the dialog in plain words.
+ */
+@Component({
+  selector: 'cw-remove-member-dialog',
+  imports: [MatButtonModule, MatDialogModule],
+  template: `
+    <h2 mat-dialog-title>Remove {{ data.member.name }} from {{ data.clubName }}?</h2>
+    <mat-dialog-content>
+      <ul class="cw-consequences">
+        <li>{{ data.member.name }} can no longer sign in, from their next tap.</li>
+        <li>They come off every team they helped with.</li>
+        <li>Plans they made stay with their teams.</li>
+      </ul>
+      <p>To bring them back, invite them again.</p>
+      <div aria-live="polite">
+        @if (error(); as text) {
+          <p class="cw-form-error" role="alert">{{ text }}</p>
+        }
+      </div>
+    </mat-dialog-content>
+    <mat-dialog-actions align="end">
+      <button mat-button type="button" mat-dialog-close cdkFocusInitial>Keep {{ data.member.name }}</button>
+      <button
+        mat-flat-button
+        type="button"
+        class="cw-danger"
+        data-testid="confirm-remove-member"
+        [disabled]="busy()"
+        (click)="removeMember()"
+      >
+        Remove from club
+      </button>
+    </mat-dialog-actions>
+  `,
+  styles: `
+    .cw-consequences {
+      margin: 0 0 12px;
+      padding-left: 20px;
+    }
+    .cw-danger {
+      --mat-button-filled-container-color: var(--mat-sys-error);
+      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class RemoveMemberDialog {
+  private readonly api = inject(MembersApi);
+  private readonly ref = inject<MatDialogRef<RemoveMemberDialog, boolean>>(MatDialogRef);
+  protected readonly data = inject<RemoveMemberData>(MAT_DIALOG_DATA);
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+
+  protected removeMember(): void {
+    this.busy.set(true);
+    this.error.set(null);
+    this.api.removeMember(this.data.member.userId).subscribe({
+      next: () => this.ref.close(true),
+      error: (error: unknown) => {
+        this.busy.set(false);
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+}
