@@ -159,7 +159,7 @@ export function planCardDefinition(
   return {
     pageSize: paper === 'a4' ? 'A4' : 'LETTER',
     pageMargins: [MARGIN, MARGIN, MARGIN, MARGIN + 6],
-    info: { title: printable(`${input.teamName} — ${kindLabel(plan)}`), creator: 'Conewise' },
+    info: { title: `${input.teamName} — ${kindLabel(plan)}`, creator: 'Conewise' },
     defaultStyle: {
       font: CARD_FONT,
       fontSize: density.baseFont,
