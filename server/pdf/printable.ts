@@ -23,7 +23,7 @@ const LOOKALIKES: Record<string, string> = { ł: 'l', Ł: 'L', đ: 'd', Đ: 'D' 
 const graphemes = new Intl.Segmenter('en', { granularity: 'grapheme' });
 const [latin] = CARD_FACES;
 // Latin-1 and general punctuation are in the card's own face: most text needs no look-up at all.
-const PLAIN = /^[\u0000-\u00ff\u2000-\u206f]*$/;
+const PLAIN = /^[ -\u00ff\u2000-\u206f\t\n\r]*$/;
 
 export interface TextRun {
   text: string;
