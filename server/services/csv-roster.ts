@@ -171,7 +171,12 @@ function findColumns(header: string[]): Columns {
 
 function fullName(cells: string[], columns: Columns): string {
   const cell = (i: number) => (i >= 0 ? (cells[i] ?? '') : '');
-  if (columns.name >= 0) return cleanName(cell(columns.name));
+  if (columns.name >= 0) {
+    // Club lists often write "Family, First": turned round, so the first name comes first.
+    const name = cleanName(cell(columns.name));
+    const reversed = /^([^,]+),\s*([^,]+)$/.exec(name);
+    return reversed ? cleanName(`${reversed[2]} ${reversed[1]}`) : name;
+  }
   return cleanName(`${cell(columns.first)} ${cell(columns.family)}`);
 }
 

@@ -104,14 +104,14 @@ describe('CSV roster import', () => {
     expect((await commit({ importId: response.body.importId, rows: keeper })).status).toBe(400);
   });
 
-  it('reads a semicolon file with a BOM, a “sep=;” line and a Goalkeeper heading with a hint', async () => {
-    const text = '\uFEFFsep=;\r\nName;Goalkeeper (yes/no)\r\nKai W.;yes\r\nLuz Mendes, Jr;\r\n';
+  it('reads a semicolon file with a BOM, a “sep=;” line, a Goalkeeper heading with a hint and “Family, First” names', async () => {
+    const text = '\uFEFFsep=;\r\nName;Goalkeeper (yes/no)\r\nKai W.;yes\r\nMendes, Luz;\r\n';
     const response = await preview(upload(text));
     expect(response.status).toBe(200);
     expect(response.body.errors).toEqual([]);
     expect(response.body.rows).toEqual([
       { row: 3, displayName: 'Kai W.', goalkeeper: true },
-      { row: 4, displayName: 'Luz J.', goalkeeper: false },
+      { row: 4, displayName: 'Luz M.', goalkeeper: false },
     ]);
     // A semicolon header is never a player, with or without the mark; the old heading still works.
     const plain = await preview(upload('\uFEFFdisplayName;goalkeeper\nOla N.;no\n'));

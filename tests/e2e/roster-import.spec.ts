@@ -42,6 +42,7 @@ describe('roster import', () => {
         { token: coach.token },
       )
     ).body;
+    await club.api.post(`/api/teams/${team.id}/players`, { displayName: 'Ben T.' }, { token: coach.token });
     const page = await browser.newPage(PHONE);
     await page.goto(baseUrl + '/');
     await page.evaluate(() => localStorage.removeItem('conewise.session'));
@@ -92,8 +93,17 @@ describe('roster import', () => {
     await panel.getByText('Line 5: “Sam 2014”').waitFor({ state: 'detached' });
     await expect.poll(names).toEqual(['Kai M. 🦊', 'Kai Ma.', 'Kai M.', 'Sam O.']);
 
-    // Line 4 clashes: the coach types the name the team uses for that child.
+    // Line 4 clashes. A name already on the team is refused beside its line, once, on adding…
     const line4 = panel.getByLabel('Name on plans').nth(2);
+    await line4.fill('Ben T.');
+    await expect.poll(() => add.isDisabled()).toBe(false);
+    await add.click();
+    await panel.getByRole('alert').getByText('A name is taken. Change it below and add again.').waitFor();
+    await panel.getByText('Line 4: there is already a Ben T. on the team').waitFor();
+    expect(await panel.getByText('there is already a Ben T.').count()).toBe(1);
+    expect(await add.isDisabled()).toBe(true);
+    await screenshot(page, 'roster-import-refused');
+    // …and the coach types the name the team uses for that child.
     await line4.fill('Kai Mas.');
     await expect.poll(() => add.isDisabled()).toBe(false);
     await panel.getByText('Line 3 has the same name').waitFor({ state: 'detached' });
@@ -103,6 +113,7 @@ describe('roster import', () => {
     await panel.getByText('4 players added.').waitFor();
     const players = await club.api.get<PlayerDto[]>(`/api/teams/${team.id}/players`, { token: coach.token });
     expect(players.body.map((p) => [p.displayName, p.goalkeeper])).toEqual([
+      ['Ben T.', false],
       ['Kai M. 🦊', true],
       ['Kai Ma.', false],
       ['Kai Mas.', false],

@@ -143,7 +143,12 @@ export class CsvImport {
         lines.map((l) => ({ ...l, refused: byLine.find((e) => e.row === l.row)?.message ?? l.refused })),
       );
     }
-    if (error instanceof HttpErrorResponse && error.status === 413) {
+    if (byLine.length) {
+      const one = byLine.length === 1;
+      this.error.set(
+        `${one ? 'A name is' : 'Some names are'} taken. Change ${one ? 'it' : 'them'} below and add again.`,
+      );
+    } else if (error instanceof HttpErrorResponse && error.status === 413) {
       this.error.set('That file is larger than 1 MB. A squad list is usually a few kilobytes.');
     } else this.error.set(problem?.detail ?? problemMessage(error));
   }
