@@ -1,6 +1,7 @@
 import type { ProblemDto } from '../../shared/types/api';
 
-export type FieldError = { field: string; message: string };
+/** `row`: the line of an uploaded file the error is about. */
+export type FieldError = { field: string; message: string; row?: number };
 
 /** An error that becomes an RFC 9457 problem response. Services throw these. */
 export class HttpError extends Error {

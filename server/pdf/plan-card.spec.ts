@@ -7,6 +7,7 @@ import { generatePlan } from '../../engine';
 import type { Phase, Plan, PlanRequest } from '../../shared/types';
 import { ACTIVITY_KIND_LABELS, POSITION_STYLE } from '../../shared/types/activity-words';
 import { changeoverText, groupList, legendKeys } from './plan-card';
+import { MISSING_MARK, cardRuns, printableContent } from './printable';
 import { renderPlanPdf } from './render-pdf';
 import { diagramMarks, positionLabel } from './station-diagram';
 import { SQUAD_NAMES } from '../../tests/support/squad-names';
@@ -94,6 +95,55 @@ describe('the printed card of a full squad’s hour with drinks breaks', () => {
       }
     }
     for (const name of SQUAD_NAMES) expect(a4.text).toContain(name);
+  });
+});
+
+describe('names on the printed card', () => {
+  // Invented names in several scripts, with emoji as coaches type them.
+  const names = [
+    'Kai M. 🦊',
+    'Łucja Ś.',
+    'Zoë K.',
+    'Ζωή Π.',
+    'Аня И.',
+    'Nguyễn T.',
+    'Ines ⚽ R.',
+    'Noa 👍🏽 B.',
+  ];
+  let text: string;
+
+  beforeAll(async () => {
+    const players = names.map((name, i) => ({ id: `n${i + 1}`, name, goalkeeper: i === 0 }));
+    const plan = await generatePlan(request(8, { players, seed: 'card-names' }));
+    text = read(
+      await renderPlanPdf({ plan, teamName: 'U10 Füchse 🦊', date: '2026-12-05', kickOff: '17:30' }),
+    ).text;
+  });
+
+  it('prints every name whole, emoji and letters of other scripts included, never as “?”', () => {
+    expect(text).toContain('U10 Füchse 🦊');
+    for (const name of names.slice(0, -1)) expect(text).toContain(name);
+    // A black-and-white face draws a skin tone as the plain sign: the tone is the only thing left out.
+    expect(text).toContain('Noa 👍 B.');
+    expect(text).not.toContain('?');
+  });
+
+  it('cuts text into runs of one face each, and marks a character no face has', () => {
+    expect(cardRuns('Maya O.')).toEqual([{ text: 'Maya O.' }]);
+    expect(cardRuns('Kai M. 🦊')).toEqual([{ text: 'Kai M. ' }, { text: '🦊', font: 'NotoEmoji' }]);
+    expect(cardRuns('Łucja')).toEqual([{ text: 'Ł', font: 'RobotoCondensed-latin-ext' }, { text: 'ucja' }]);
+    expect(cardRuns('Area 14 m → 16 m')).toEqual([{ text: 'Area 14 m to 16 m' }]);
+    expect(cardRuns('雪 A.')).toEqual([{ text: MISSING_MARK, font: 'NotoEmoji' }, { text: ' A.' }]);
+  });
+
+  it('keeps the style of a styled piece on each of its runs', () => {
+    expect(printableContent({ stack: [{ text: ['1 ', { text: 'Kai 🦊', bold: true }] }] })).toEqual({
+      stack: [
+        {
+          text: [{ text: '1 ' }, { text: 'Kai ', bold: true }, { text: '🦊', bold: true, font: 'NotoEmoji' }],
+        },
+      ],
+    });
   });
 });
 

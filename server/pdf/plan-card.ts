@@ -3,7 +3,7 @@ import type { Changeover, Equipment, Phase, Plan, PositionRole, Station } from '
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, POSITION_STYLE } from '../../shared/types/activity-words';
 import { minuteLabel, planMinutes, sessionStart } from './clock';
 import { CARD_FONT } from './fonts';
-import { printable, printableContent } from './printable';
+import { printableContent } from './printable';
 import { diagramMarks, legendSymbolSvg, stationDiagramSvg, type LegendKey } from './station-diagram';
 
 export type Paper = 'a4' | 'letter';
@@ -159,7 +159,7 @@ export function planCardDefinition(
   return {
     pageSize: paper === 'a4' ? 'A4' : 'LETTER',
     pageMargins: [MARGIN, MARGIN, MARGIN, MARGIN + 6],
-    info: { title: printable(`${input.teamName} — ${kindLabel(plan)}`), creator: 'Conewise' },
+    info: { title: `${input.teamName} — ${kindLabel(plan)}`, creator: 'Conewise' },
     defaultStyle: {
       font: CARD_FONT,
       fontSize: density.baseFont,

@@ -6,17 +6,17 @@ describe('printable', () => {
     expect(printable('Zoë K. – 10:05–10:12 · 14 × 12 m “go”')).toBe('Zoë K. – 10:05–10:12 · 14 × 12 m “go”');
   });
 
-  it('maps arrows and letters outside the embedded subset onto ones it has', () => {
+  it('in the one-font SVG labels, maps arrows and letters outside the Latin face onto ones it has', () => {
     expect(printable('Area 14 m → 16 m')).toBe('Area 14 m to 16 m');
     expect(printable('Łucja Ś.')).toBe('Lucja S.');
-    expect(printable('雪')).toBe('?');
+    expect(printable('雪')).toBe('·');
   });
 
-  it('rewrites text nodes of a content tree but never SVG markup', () => {
-    const svg = '<svg><text>→</text></svg>';
-    expect(printableContent({ stack: [{ text: ['a → b'] }, { svg }], ul: ['x → y'] })).toEqual({
-      stack: [{ text: ['a to b'] }, { svg }],
-      ul: ['x to y'],
+  it('gives text nodes of a content tree the faces they need but never touches SVG markup', () => {
+    const svg = '<svg><text>→ 🦊</text></svg>';
+    expect(printableContent({ stack: [{ text: ['a → b'] }, { svg }], ul: ['x 🦊'] })).toEqual({
+      stack: [{ text: [{ text: 'a to b' }] }, { svg }],
+      ul: [{ text: [{ text: 'x ' }, { text: '🦊', font: 'NotoEmoji' }] }],
     });
   });
 });

@@ -1,23 +1,13 @@
+import { CARD_FACES, CARD_FONT, EMOJI_FONT, faceCovers } from './fonts';
+
 /**
- * The embedded font is the Latin subset of Roboto Condensed (its unicode-range as shipped by
- * @fontsource). Characters outside it would print as empty boxes, so text is mapped onto it.
+ * pdfmake draws each piece of text in one font, and Roboto Condensed has no emoji and only some
+ * scripts. So text is cut into runs, each drawn by the first face that has its characters (see
+ * CARD_FACES in fonts.ts): names print whole, with accents, Greek, Cyrillic and emoji.
  */
-const RANGES: [number, number][] = [
-  [0x0000, 0x00ff],
-  [0x0131, 0x0131],
-  [0x0152, 0x0153],
-  [0x02bb, 0x02bc],
-  [0x02c6, 0x02c6],
-  [0x02da, 0x02da],
-  [0x02dc, 0x02dc],
-  [0x2000, 0x206f],
-  [0x20ac, 0x20ac],
-  [0x2122, 0x2122],
-  [0x2191, 0x2191],
-  [0x2193, 0x2193],
-  [0x2212, 0x2212],
-  [0x2215, 0x2215],
-];
+
+/** Printed for a character no face has: an empty square from the emoji face, never "?". */
+export const MISSING_MARK = '◻';
 
 const REPLACEMENTS: Record<string, string> = {
   '→': 'to',
@@ -25,42 +15,103 @@ const REPLACEMENTS: Record<string, string> = {
   '≤': '<=',
   '≥': '>=',
   '✓': 'OK',
-  ł: 'l',
-  Ł: 'L',
-  đ: 'd',
-  Đ: 'D',
 };
 
-function printableChar(c: string): boolean {
-  const code = c.codePointAt(0)!;
-  return RANGES.some(([lo, hi]) => code >= lo && code <= hi);
+/** Letters with no accent to drop, for the one-font SVG labels. */
+const LOOKALIKES: Record<string, string> = { ł: 'l', Ł: 'L', đ: 'd', Đ: 'D' };
+
+const graphemes = new Intl.Segmenter('en', { granularity: 'grapheme' });
+const [latin] = CARD_FACES;
+// Latin-1 and general punctuation are in the card's own face: most text needs no look-up at all.
+const PLAIN = /^[ -\u00ff\u2000-\u206f\t\n\r]*$/;
+
+export interface TextRun {
+  text: string;
+  /** The face's family; absent for the card's own font. */
+  font?: string;
 }
 
-/** The text with every character the card font can draw: known look-alikes, else the letter without its accent. */
-export function printable(text: string): string {
-  if ([...text].every(printableChar)) return text;
-  let out = '';
-  for (const c of text) {
-    if (printableChar(c)) out += c;
-    else if (REPLACEMENTS[c]) out += REPLACEMENTS[c];
-    else {
-      const base = [...c.normalize('NFKD')].filter(printableChar).join('');
-      out += base || '?';
-    }
+function faceFor(codePoints: number[]): string | undefined {
+  return CARD_FACES.find((face) => codePoints.every((cp) => faceCovers(face, cp)))?.family;
+}
+
+/** One character as the user sees it (a grapheme), as a run in a face that has it. */
+function runFor(grapheme: string): TextRun {
+  const codePoints = [...grapheme].map((c) => c.codePointAt(0)!);
+  const whole = faceFor(codePoints);
+  if (whole) return { text: grapheme, font: whole };
+  // An emoji sequence or a letter with a mark no single face has: its first character alone.
+  const first = faceFor(codePoints.slice(0, 1));
+  if (first && first !== CARD_FONT) return { text: String.fromCodePoint(codePoints[0]!), font: first };
+  if (REPLACEMENTS[grapheme]) return { text: REPLACEMENTS[grapheme], font: CARD_FONT };
+  const base = [...grapheme.normalize('NFKD')].filter((c) => faceCovers(latin!, c.codePointAt(0)!)).join('');
+  if (base) return { text: base, font: CARD_FONT };
+  return { text: MISSING_MARK, font: EMOJI_FONT };
+}
+
+/** The text cut into runs of one face each (one run without a font when the card's own has it all). */
+export function cardRuns(text: string): TextRun[] {
+  if (PLAIN.test(text)) return [{ text }];
+  const runs: TextRun[] = [];
+  for (const { segment } of graphemes.segment(text)) {
+    const run = runFor(segment);
+    const last = runs.at(-1);
+    if (last && last.font === run.font) last.text += run.text;
+    else runs.push(run);
   }
-  return out;
+  return runs.map((run) => (run.font === CARD_FONT ? { text: run.text } : run));
 }
 
-const TEXT_KEYS = new Set(['text', 'ul', 'ol', 'stack', 'columns', 'table', 'body', 'content']);
+/** For SVG labels, drawn in the card's own font only: look-alikes, else the letter without its accent. */
+export function printable(text: string): string {
+  return cardRuns(text)
+    .map((run) => {
+      if (!run.font) return run.text;
+      return [...graphemes.segment(run.text)]
+        .map(({ segment }) => {
+          const base = [...segment.normalize('NFKD')].filter((c) => faceCovers(latin!, c.codePointAt(0)!));
+          return LOOKALIKES[segment] ?? (base.join('') || '·');
+        })
+        .join('');
+    })
+    .join('');
+}
 
-/** Applies `printable` to every text node of a pdfmake content tree (never to SVG markup). */
+const CONTAINER_KEYS = new Set(['ul', 'ol', 'stack', 'columns', 'table', 'body', 'content']);
+type Node = Record<string, unknown>;
+const isNode = (value: unknown): value is Node =>
+  !!value && typeof value === 'object' && !Array.isArray(value);
+
+/** Inline text (a `text` value): a string becomes runs; styled pieces keep their style on each run. */
+function inlineText(value: unknown): unknown {
+  if (typeof value === 'string') {
+    const runs = cardRuns(value);
+    return runs.length === 1 && !runs[0]!.font ? value : runs;
+  }
+  if (!Array.isArray(value)) return value;
+  return value.flatMap((piece: unknown) => {
+    if (typeof piece === 'string') return cardRuns(piece);
+    if (isNode(piece) && typeof piece['text'] === 'string') {
+      return cardRuns(piece['text']).map((run) => ({ ...piece, ...run }));
+    }
+    if (isNode(piece) && Array.isArray(piece['text'])) return [{ ...piece, text: inlineText(piece['text']) }];
+    return [piece];
+  });
+}
+
+/** Gives every text node of a pdfmake content tree the faces its characters need (never SVG markup). */
 export function printableContent<T>(node: T): T {
-  if (typeof node === 'string') return printable(node) as T;
+  if (typeof node === 'string') {
+    const runs = cardRuns(node);
+    return (runs.length === 1 && !runs[0]!.font ? node : { text: runs }) as T;
+  }
   if (Array.isArray(node)) return node.map((n) => printableContent(n)) as T;
-  if (node && typeof node === 'object') {
-    const out: Record<string, unknown> = {};
-    for (const [key, value] of Object.entries(node))
-      out[key] = TEXT_KEYS.has(key) ? printableContent(value) : value;
+  if (isNode(node)) {
+    const out: Node = {};
+    for (const [key, value] of Object.entries(node)) {
+      if (key === 'text') out[key] = inlineText(value);
+      else out[key] = CONTAINER_KEYS.has(key) ? printableContent(value) : value;
+    }
     return out as T;
   }
   return node;

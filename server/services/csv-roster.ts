@@ -1,19 +1,28 @@
 import { createHmac } from 'node:crypto';
-import { parse } from 'csv-parse/sync';
-import type { CsvPreview, CsvRowError } from '../../shared/types/api';
+import { CsvError, parse } from 'csv-parse/sync';
+import type { CsvPreview, CsvPreviewRow, CsvRowError } from '../../shared/types/api';
 import { badRequest } from '../http/problem';
+import { cleanName, nameKey, pickName, shortName, TakenNames } from './player-names';
 
 /** Most players a single import may add. */
 export const MAX_IMPORT_ROWS = 60;
 
-const NAME_HEADERS = ['displayname', 'display name', 'name', 'player', 'first name', 'firstname'];
-const KEEPER_HEADERS = ['goalkeeper', 'gk', 'keeper', 'goalie'];
+/** Longest stored name, counted in characters as the request schema counts them. */
+const MAX_NAME_LENGTH = 40;
+
+// Column headings are compared in lower case with anything but letters removed.
+const NAME_HEADERS = ['name', 'displayname', 'player', 'playername', 'fullname', 'child'];
+const FIRST_HEADERS = ['firstname', 'givenname', 'forename'];
+const FAMILY_HEADERS = ['lastname', 'familyname', 'surname'];
+const KEEPER_HEADERS = ['goalkeeper', 'gk', 'keeper', 'goalie', 'playsingoal'];
 const YES = ['yes', 'y', 'true', '1', 'gk', 'x'];
 const NO = ['no', 'n', 'false', '0', ''];
+const DELIMITERS = [',', ';', '\t'];
 
-/** Reads the upload as UTF-8 text, or answers 400 saying which encoding to use. */
+const fileError = (message: string) => badRequest(message, [{ field: 'file', message }]);
+
+/** Reads the upload as UTF-8 text (a byte-order mark is dropped), or answers 400 saying which encoding to use. */
 export function decodeUtf8(buffer: Buffer): string {
-  const fileError = (message: string) => badRequest(message, [{ field: 'file', message }]);
   if (buffer.length === 0) throw fileError('The file is empty.');
   if ((buffer[0] === 0xff && buffer[1] === 0xfe) || (buffer[0] === 0xfe && buffer[1] === 0xff)) {
     throw fileError('The file is UTF-16 text. Save it as “CSV UTF-8” and upload it again.');
@@ -30,101 +39,239 @@ export function decodeUtf8(buffer: Buffer): string {
   return text.replace(/^\uFEFF/, '');
 }
 
+function headingKey(cell: string): string {
+  return cell.toLowerCase().replace(/[^\p{L}]/gu, '');
+}
+
+/** A heading matches a list when it starts with one of its words ("Goalkeeper (yes/no)" is a goalkeeper column). */
+const matches = (list: string[], cell: string) => list.some((word) => headingKey(cell).startsWith(word));
+
+const isHeading = (cell: string) =>
+  [NAME_HEADERS, FIRST_HEADERS, FAMILY_HEADERS, KEEPER_HEADERS].some((list) => matches(list, cell));
+
+/** Splits one line on a delimiter, ignoring delimiters inside double quotes. */
+function splitLine(line: string, delimiter: string): string[] {
+  const cells: string[] = [];
+  let cell = '';
+  let quoted = false;
+  for (const c of line) {
+    if (c === '"') quoted = !quoted;
+    else if (c === delimiter && !quoted) {
+      cells.push(cell);
+      cell = '';
+    } else cell += c;
+  }
+  return [...cells, cell];
+}
+
 /**
- * Keeps what a squad list needs: a first name and the initial of the family name
- * ("Maya Okafor" → "Maya O."). Children's full names are not stored.
+ * The delimiter of the header line: the one that splits it into known column headings, else the
+ * one it holds most often (a comma when it holds none).
  */
-export function toDisplayName(raw: string): string {
-  const words = raw.trim().split(/\s+/).filter(Boolean);
-  if (words.length <= 1) return words[0] ?? '';
-  const last = words[words.length - 1]!;
-  const initial = last.replace(/\.$/, '').charAt(0).toUpperCase();
-  return `${words[0]} ${initial}.`;
+function detectDelimiter(header: string): string {
+  const score = (d: string) => {
+    const cells = splitLine(header, d);
+    return [cells.filter(isHeading).length, cells.length - 1] as const;
+  };
+  const ranked = DELIMITERS.map((d) => ({ d, s: score(d) })).sort(
+    (a, b) => b.s[0] - a.s[0] || b.s[1] - a.s[1],
+  );
+  return ranked[0]!.s[1] > 0 ? ranked[0]!.d : ',';
 }
 
-function detectDelimiter(text: string): string {
-  const firstLine = text.split(/\r?\n/, 1)[0] ?? '';
-  const counts = [',', ';', '\t'].map((d) => [d, firstLine.split(d).length - 1] as const);
-  return counts.sort((a, b) => b[1] - a[1])[0]![1] > 0 ? counts[0]![0] : ',';
-}
-
-/** Signs the checked rows, so a commit can prove it sends what the preview checked. */
-export function importSignature(secret: string, teamId: string, rows: CsvPreview['rows']): string {
-  const canonical = JSON.stringify(rows.map((r) => [r.row, r.displayName, r.goalkeeper]));
+/** Signs the checked lines, so a commit can prove it sends the lines the preview read. */
+export function importSignature(
+  secret: string,
+  teamId: string,
+  rows: Pick<CsvPreviewRow, 'row' | 'goalkeeper'>[],
+): string {
+  const canonical = JSON.stringify(rows.map((r) => [r.row, r.goalkeeper]));
   return createHmac('sha256', secret).update(`${teamId}\n${canonical}`).digest('base64url');
 }
 
-/** Parses a roster CSV into rows to add and per-row errors. Stateless: nothing is stored yet. */
+/** A csv-parse error in a coach's words: `line` where the parser stopped, `start` where the record began. */
+function parseProblem(code: string, line: number, start: number): never {
+  let message: string;
+  if (code === 'CSV_QUOTE_NOT_CLOSED') {
+    message = `Line ${start} opens a quotation mark (") that is never closed. Remove it or add the closing one.`;
+  } else if (code === 'CSV_INVALID_CLOSING_QUOTE' || code === 'CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE') {
+    message = `Line ${line} has text straight after a closing quotation mark ("). Remove the quotation marks around that name.`;
+  } else {
+    message = `Line ${line} could not be read. Save the list again as “CSV UTF-8” from your spreadsheet.`;
+  }
+  throw fileError(message);
+}
+
+interface FileLine {
+  line: number;
+  cells: string[];
+}
+
+/** The file's records with the line each starts on (the file's own numbering: the first line is 1). */
+function readLines(text: string): { lines: FileLine[]; delimiter: string } {
+  const sourceLines = text.split(/\r\n|\n|\r/);
+  let offset = 0;
+  // Some spreadsheets write "sep=;" above the header to name the delimiter.
+  const sep = /^sep=(.)$/i.exec(sourceLines[0]?.trim() ?? '');
+  if (sep) offset = 1;
+  const body = sourceLines.slice(offset).join('\n');
+  const headerLine = sourceLines.slice(offset).find((l) => l.trim() !== '') ?? '';
+  const delimiter = sep?.[1] ?? detectDelimiter(headerLine);
+
+  // Where the next record starts: after the previous one's last line, past blank lines.
+  let previousEnd = 0;
+  const nextStart = () => {
+    let line = previousEnd + 1;
+    while (line <= sourceLines.length - offset && (sourceLines[line - 1 + offset] ?? '').trim() === '')
+      line++;
+    return line;
+  };
+  const lines: FileLine[] = [];
+  try {
+    parse(body, {
+      delimiter,
+      relax_column_count: true,
+      relax_quotes: true,
+      skip_empty_lines: true,
+      trim: true,
+      on_record: (record: string[], context: { lines: number }) => {
+        lines.push({ line: nextStart() + offset, cells: record });
+        previousEnd = context.lines;
+        return record;
+      },
+    });
+  } catch (error) {
+    const csvError = error instanceof CsvError ? error : null;
+    const errorLine = (csvError as { lines?: number } | null)?.lines;
+    parseProblem(
+      csvError?.code ?? '',
+      errorLine ? errorLine + offset : nextStart() + offset,
+      nextStart() + offset,
+    );
+  }
+  return { lines, delimiter };
+}
+
+interface Columns {
+  name: number;
+  first: number;
+  family: number;
+  keeper: number;
+}
+
+function findColumns(header: string[]): Columns {
+  const find = (list: string[]) => header.findIndex((cell) => matches(list, cell));
+  return {
+    name: find(NAME_HEADERS),
+    first: find(FIRST_HEADERS),
+    family: find(FAMILY_HEADERS),
+    keeper: find(KEEPER_HEADERS),
+  };
+}
+
+function fullName(cells: string[], columns: Columns): string {
+  const cell = (i: number) => (i >= 0 ? (cells[i] ?? '') : '');
+  if (columns.name >= 0) {
+    // Club lists often write "Family, First": turned round, so the first name comes first.
+    const name = cleanName(cell(columns.name));
+    const reversed = /^([^,]+),\s*([^,]+)$/.exec(name);
+    return reversed ? cleanName(`${reversed[2]} ${reversed[1]}`) : name;
+  }
+  return cleanName(`${cell(columns.first)} ${cell(columns.family)}`);
+}
+
+/**
+ * Reads a roster file into the players it would add and the lines it cannot use, each said in a
+ * sentence with the file's line number. Stateless: nothing is stored yet.
+ */
 export function previewRoster(
   text: string,
   existingNames: string[],
-  sign: (rows: CsvPreview['rows']) => string,
+  sign: (rows: CsvPreviewRow[]) => string,
 ): CsvPreview {
-  let records: string[][];
-  try {
-    records = parse(text, {
-      delimiter: detectDelimiter(text),
-      relax_column_count: true,
-      skip_empty_lines: true,
-      trim: true,
-      bom: true,
-    }) as string[][];
-  } catch (error) {
-    const message = `The CSV could not be read: ${(error as Error).message}`;
-    throw badRequest(message, [{ field: 'file', message }]);
-  }
-  if (!records.length) throw badRequest('The file has no rows.', [{ field: 'file', message: 'has no rows' }]);
-
-  const header = records[0]!.map((cell) => cell.toLowerCase());
-  let nameColumn = header.findIndex((cell) => NAME_HEADERS.includes(cell));
-  let keeperColumn = header.findIndex((cell) => KEEPER_HEADERS.includes(cell));
-  let firstDataRow = 1;
-  if (nameColumn < 0) {
-    // No header: the first column holds names, an optional second the goalkeeper flag.
-    nameColumn = 0;
-    keeperColumn = records[0]!.length > 1 ? 1 : -1;
-    firstDataRow = 0;
+  const { lines } = readLines(text);
+  if (!lines.length) throw fileError('The file has no lines with names.');
+  const [header, ...records] = lines;
+  const columns = findColumns(header!.cells);
+  if (columns.name < 0 && columns.first < 0) {
+    throw fileError(
+      `The first line must name the columns: “Name”, and “Goalkeeper” if you have one. ` +
+        `This file's first line says “${header!.cells.join(', ').slice(0, 80)}”.`,
+    );
   }
 
-  const rows: CsvPreview['rows'] = [];
+  const rows: CsvPreviewRow[] = [];
   const errors: CsvRowError[] = [];
-  const seen = new Set(existingNames.map((n) => n.toLowerCase()));
-  for (let index = firstDataRow; index < records.length; index++) {
-    const record = records[index]!;
-    const row = index + 1; // 1-based line number as a spreadsheet shows it
-    const rawName = record[nameColumn] ?? '';
-    const rawKeeper = (keeperColumn >= 0 ? (record[keeperColumn] ?? '') : '').toLowerCase();
-    const rowErrors: CsvRowError[] = [];
-    if (!rawName) rowErrors.push({ row, field: 'displayName', message: 'is empty' });
-    else if (/[@0-9<>]/.test(rawName)) {
-      rowErrors.push({
-        row,
-        field: 'displayName',
-        message: 'must be a name only: no digits, e-mail addresses or markup',
-      });
-    }
-    const displayName = toDisplayName(rawName);
-    if (displayName.length > 40)
-      rowErrors.push({ row, field: 'displayName', message: 'is longer than 40 characters' });
-    if (!YES.includes(rawKeeper) && !NO.includes(rawKeeper)) {
-      rowErrors.push({ row, field: 'goalkeeper', message: `“${rawKeeper}” is not yes or no` });
-    }
-    if (displayName && seen.has(displayName.toLowerCase())) {
-      rowErrors.push({
-        row,
-        field: 'displayName',
-        message: `${displayName} is already on the team or in the file`,
-      });
-    }
-    if (rows.length >= MAX_IMPORT_ROWS && rowErrors.length === 0) {
-      rowErrors.push({ row, field: 'row', message: `at most ${MAX_IMPORT_ROWS} players per import` });
-    }
-    if (rowErrors.length) {
-      errors.push(...rowErrors);
+  const onTeam = new TakenNames(existingNames);
+  const taken = new TakenNames(existingNames);
+  const firstLineOf = new Map<string, number>();
+  const fullNameLines = new Map<string, number>();
+  const leftOut: number[] = [];
+  for (const { line, cells } of records) {
+    if (cells.every((c) => c === '')) continue; // a spreadsheet's empty row
+    const raw = fullName(cells, columns);
+    const rawKeeper = (columns.keeper >= 0 ? (cells[columns.keeper] ?? '') : '').toLowerCase();
+    const problem = (field: string, message: string) => errors.push({ row: line, field, message });
+    if (!raw) {
+      problem('name', `Line ${line} has no name.`);
       continue;
     }
-    seen.add(displayName.toLowerCase());
-    rows.push({ row, displayName, goalkeeper: YES.includes(rawKeeper) });
+    if (/[@0-9<>]/.test(raw)) {
+      problem(
+        'name',
+        `Line ${line}: “${raw}” is not just a name. Leave out numbers, e-mail addresses and < >.`,
+      );
+      continue;
+    }
+    if (!YES.includes(rawKeeper) && !NO.includes(rawKeeper)) {
+      problem(
+        'goalkeeper',
+        `Line ${line}: Goalkeeper says “${rawKeeper}”. Write yes or no, or leave it empty.`,
+      );
+      continue;
+    }
+    // The same full name twice in one file: letters of the family name cannot tell them apart.
+    const twin = fullNameLines.get(nameKey(raw));
+    const picked = twin ? { name: shortName(raw), clash: true as const } : pickName(raw, taken);
+    if (!twin) fullNameLines.set(nameKey(raw), line);
+    if ([...picked.name].length > MAX_NAME_LENGTH) {
+      problem(
+        'name',
+        `Line ${line}: the name is longer than ${MAX_NAME_LENGTH} letters even when shortened.`,
+      );
+      continue;
+    }
+    if (rows.length >= MAX_IMPORT_ROWS) {
+      leftOut.push(line);
+      continue;
+    }
+    const row: CsvPreviewRow = { row: line, displayName: picked.name, goalkeeper: YES.includes(rawKeeper) };
+    const where = (name: string) =>
+      onTeam.has(name) ? 'on the team' : `in this file (line ${firstLineOf.get(nameKey(name))})`;
+    if (picked.clash) {
+      row.clash = true;
+      row.note = twin
+        ? `Line ${twin} has the same name. Type a name the team can tell apart, or leave the line out.`
+        : `${picked.name} is already ${where(picked.name)}. Type a name the team can tell apart, or leave the line out.`;
+    } else {
+      if (picked.lengthenedFrom) {
+        row.note =
+          `${picked.lengthenedFrom} is already ${where(picked.lengthenedFrom)}, so this player is “${picked.name}”. ` +
+          'Leave the line out if it is the same child.';
+      }
+      taken.add(picked.name);
+      firstLineOf.set(nameKey(picked.name), line);
+    }
+    rows.push(row);
+  }
+  if (leftOut.length) {
+    const span =
+      leftOut.length === 1 ? `Line ${leftOut[0]} was` : `Lines ${leftOut[0]} to ${leftOut.at(-1)} were`;
+    errors.push({
+      row: leftOut[0]!,
+      field: 'file',
+      message: `${span} left out: one file adds at most ${MAX_IMPORT_ROWS} players.`,
+    });
   }
   return { importId: sign(rows), rows, errors };
 }

@@ -1,6 +1,8 @@
+import { Not, type EntityManager } from 'typeorm';
 import type { PlayerDto } from '../../shared/types/api';
 import { Player } from '../entities/player';
 import type { ClubScope } from './club-scope';
+import { assertNameFree, cleanName, TakenNames } from './player-names';
 
 export function playerDto(player: Player): PlayerDto {
   return {
@@ -10,6 +12,20 @@ export function playerDto(player: Player): PlayerDto {
     goalkeeper: player.goalkeeper,
     active: player.active,
   };
+}
+
+/** The names of a team's active players (all but `except`), for the duplicate rule in player-names.ts. */
+export async function teamPlayerNames(
+  manager: EntityManager,
+  scope: ClubScope,
+  teamId: string,
+  except?: string,
+): Promise<string[]> {
+  const players = await manager.getRepository(Player).find({
+    where: scope.where<Player>({ teamId, active: true, ...(except ? { id: Not(except) } : {}) }),
+    select: { displayName: true },
+  });
+  return players.map((p) => p.displayName);
 }
 
 /** Players on the caller's club's teams. */
@@ -31,10 +47,15 @@ export class PlayerService {
 
   async create(teamId: string, input: { displayName: string; goalkeeper?: boolean }): Promise<PlayerDto> {
     const team = await this.scope.teamToManage(teamId);
+    const displayName = cleanName(input.displayName);
+    assertNameFree(
+      displayName,
+      new TakenNames(await teamPlayerNames(this.scope.manager, this.scope, team.id)),
+    );
     const player = await this.repo.save({
       clubId: this.scope.clubId,
       teamId: team.id,
-      displayName: input.displayName.trim(),
+      displayName,
       goalkeeper: input.goalkeeper ?? false,
       active: true,
     });
@@ -47,9 +68,13 @@ export class PlayerService {
   ): Promise<PlayerDto> {
     const player = await this.scope.player(id);
     await this.scope.teamToManage(player.teamId);
-    if (input.displayName !== undefined) player.displayName = input.displayName.trim();
+    if (input.displayName !== undefined) player.displayName = cleanName(input.displayName);
     if (input.goalkeeper !== undefined) player.goalkeeper = input.goalkeeper;
     if (input.active !== undefined) player.active = input.active;
+    if (player.active && (input.displayName !== undefined || input.active === true)) {
+      const others = await teamPlayerNames(this.scope.manager, this.scope, player.teamId, player.id);
+      assertNameFree(player.displayName, new TakenNames(others));
+    }
     return playerDto(await this.repo.save(player));
   }
 

@@ -1,50 +1,70 @@
-import type { CsvPreview, PlayerDto } from '../../shared/types/api';
+import type { CsvPreview, CsvPreviewRow, PlayerDto } from '../../shared/types/api';
 import { Player } from '../entities/player';
-import { badRequest } from '../http/problem';
+import { badRequest, type FieldError } from '../http/problem';
 import type { ClubScope } from './club-scope';
 import { decodeUtf8, importSignature, previewRoster } from './csv-roster';
-import { playerDto } from './player-service';
+import { cleanName, TakenNames } from './player-names';
+import { playerDto, teamPlayerNames } from './player-service';
 
-/** CSV roster upload: a preview with per-row errors, then a commit of the checked rows. */
+type CommitRow = Pick<CsvPreviewRow, 'row' | 'displayName' | 'goalkeeper'> & { skip?: boolean };
+
+/** CSV roster upload: a preview with per-line errors, then a commit of the checked lines. */
 export class RosterImportService {
   constructor(
     private readonly scope: ClubScope,
     private readonly secret: string,
   ) {}
 
-  private async existingNames(teamId: string): Promise<string[]> {
-    const players = await this.scope.manager
-      .getRepository(Player)
-      .find({ where: this.scope.where<Player>({ teamId, active: true }), select: { displayName: true } });
-    return players.map((p) => p.displayName);
-  }
-
   async preview(teamId: string, file: Buffer | undefined): Promise<CsvPreview> {
     const team = await this.scope.teamToManage(teamId);
     if (!file)
-      throw badRequest('Attach the CSV file as the form field “file”.', [
-        { field: 'file', message: 'is required' },
+      throw badRequest('Choose a CSV file to upload.', [
+        { field: 'file', message: 'Choose a CSV file to upload.' },
       ]);
     const text = decodeUtf8(file);
-    const names = await this.existingNames(team.id);
+    const names = await teamPlayerNames(this.scope.manager, this.scope, team.id);
     return previewRoster(text, names, (rows) => importSignature(this.secret, team.id, rows));
   }
 
-  async commit(teamId: string, input: { importId: string; rows: CsvPreview['rows'] }): Promise<PlayerDto[]> {
+  /**
+   * Adds the previewed lines with the names the coach kept or typed. The lines and goalkeeper
+   * answers must be the ones the preview read; the names are checked again by the same rule as
+   * "Add a player", so nothing is added when one of them is taken.
+   */
+  async commit(teamId: string, input: { importId: string; rows: CommitRow[] }): Promise<PlayerDto[]> {
     const team = await this.scope.teamToManage(teamId);
     if (importSignature(this.secret, team.id, input.rows) !== input.importId) {
-      throw badRequest('These rows are not the ones the preview checked. Upload the file again.', [
-        { field: 'importId', message: 'does not match the rows' },
+      throw badRequest('These are not the lines the preview read. Choose the file again.', [
+        { field: 'file', message: 'These are not the lines the preview read. Choose the file again.' },
       ]);
     }
     return this.scope.manager.transaction(async (manager) => {
-      const existing = new Set((await this.existingNames(team.id)).map((n) => n.toLowerCase()));
-      const fresh = input.rows.filter((r) => !existing.has(r.displayName.toLowerCase()));
+      const taken = new TakenNames(await teamPlayerNames(manager, this.scope, team.id));
+      const clashes: FieldError[] = [];
+      const kept = input.rows.filter((row) => !row.skip);
+      for (const row of kept) {
+        const name = cleanName(row.displayName);
+        if (taken.has(name)) {
+          clashes.push({
+            row: row.row,
+            field: 'name',
+            message: `Line ${row.row}: there is already a ${name} on the team or above in this list. Type a name the team can tell apart.`,
+          });
+        } else taken.add(name);
+      }
+      if (clashes.length) {
+        throw badRequest(
+          clashes.length === 1
+            ? clashes[0]!.message
+            : `${clashes.length} names are taken. Change them and add again.`,
+          clashes,
+        );
+      }
       const saved = await manager.getRepository(Player).save(
-        fresh.map((r) => ({
+        kept.map((r) => ({
           clubId: this.scope.clubId,
           teamId: team.id,
-          displayName: r.displayName,
+          displayName: cleanName(r.displayName),
           goalkeeper: r.goalkeeper,
           active: true,
         })),

@@ -47,15 +47,28 @@ export interface PinnedActivitiesDto {
   activityIds: string[];
 }
 
+/** A line of a roster file that will not be added; `row` is the file's line (the header is 1). */
 export interface CsvRowError {
   row: number;
   field: string;
+  /** A whole sentence in a coach's words. */
   message: string;
+}
+
+export interface CsvPreviewRow {
+  /** The file's line (the header is line 1). */
+  row: number;
+  displayName: string;
+  goalkeeper: boolean;
+  /** How a name clash was resolved, in a sentence. */
+  note?: string;
+  /** The name is taken even with the whole family name: the coach chooses another. */
+  clash?: boolean;
 }
 
 export interface CsvPreview {
   importId: string;
-  rows: { row: number; displayName: string; goalkeeper: boolean }[];
+  rows: CsvPreviewRow[];
   errors: CsvRowError[];
 }
 
@@ -160,5 +173,6 @@ export interface ProblemDto {
   status: number;
   detail?: string;
   instance?: string;
-  errors?: { field: string; message: string }[];
+  /** `row`: the line of an uploaded file the error is about. */
+  errors?: { field: string; message: string; row?: number }[];
 }

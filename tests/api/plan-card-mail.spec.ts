@@ -1,5 +1,5 @@
 import { execFileSync } from 'node:child_process';
-import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -235,6 +235,58 @@ describe('two app instances on one database', () => {
       expect(rows).toEqual([{ status: 'sent', n: 12 }]);
     } finally {
       await Promise.all(senders.map((s) => s.stop()));
+      await fake.stop();
+    }
+  });
+});
+
+describe('names on the card and in the e-mail', () => {
+  let app: TestApp;
+  let club: ClubCast;
+  beforeAll(async () => {
+    app = await startTestApp();
+    club = await clubWithStaff(app, 'Heathfield Names');
+    mkdirSync(scratch, { recursive: true }); // the suite above removes it when it ends
+  });
+  afterAll(async () => {
+    await app.close();
+    rmSync(scratch, { recursive: true, force: true });
+  });
+
+  it('keeps every character of the team’s and the players’ names, emoji included', async () => {
+    const squad = await createSquad(app, club.coach.token, 8, 'U10 Füchse 🦊');
+    for (const displayName of ['Kai M. 🦊', 'Łucja Ś.', 'Аня И.', 'Ζωή Π.']) {
+      const player = await app.api.post(
+        `/api/teams/${squad.teamId}/players`,
+        { displayName },
+        { token: club.coach.token },
+      );
+      expect(player.status, player.text).toBe(201);
+      squad.playerIds.push(player.body.id);
+    }
+    const plan = await createPlan(app, club.coach.token, squad);
+    const card = await fetchPdf(app, plan.id, club.coach.token);
+    const text = pdfText(card.pdf, 'names.pdf');
+    for (const name of ['U10 Füchse 🦊', 'Kai M. 🦊', 'Łucja Ś.', 'Аня И.', 'Ζωή Π.'])
+      expect(text).toContain(name);
+    expect(text).not.toContain('?');
+
+    const fake = await startFakeSmtp();
+    const sender = worker(app, fake.port);
+    try {
+      const shared = await app.api.post(
+        `/api/plans/${plan.id}/share`,
+        { recipients: ['parent.helper@example.org'] },
+        { token: club.coach.token },
+      );
+      expect(shared.status, shared.text).toBe(202);
+      await sender.drainOnce();
+      const mail = await fake.waitFor((m) => m.to.includes('parent.helper@example.org'));
+      expect(mail.subject).toContain('U10 Füchse 🦊');
+      expect(mail.text).toContain('U10 Füchse 🦊');
+      expect(pdfText(mail.attachments[0].content, 'names-attached.pdf')).toContain('Kai M. 🦊');
+    } finally {
+      await sender.stop();
       await fake.stop();
     }
   });

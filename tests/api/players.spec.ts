@@ -98,6 +98,45 @@ describe('players and kit bags', () => {
     expect(extra.body.errors[0].field).toBe('birthDate');
   });
 
+  it('refuses a second player of the same name, by the rule the CSV import uses (409 in words)', async () => {
+    const team = (await createTeam(app, club.coach.token)).id;
+    const add = (displayName: string) =>
+      app.api.post(`/api/teams/${team}/players`, { displayName }, { token: club.coach.token });
+    expect((await add('Kai M. 🦊')).status).toBe(201);
+    for (const twin of ['Kai M.', 'kai m', ' Kai  M. ']) {
+      const response = await add(twin);
+      expect(response.status, twin).toBe(409);
+      expect(response.body.detail).toMatch(
+        /^There is already a player called .+ on this team\. Add another letter/,
+      );
+    }
+    const other = await add('Kai Mü.');
+    expect(other.status).toBe(201);
+    // Renaming onto a taken name is refused too; keeping one's own name is not a clash.
+    expect(
+      (
+        await app.api.patch(
+          `/api/players/${other.body.id}`,
+          { displayName: 'KAI M.' },
+          { token: club.coach.token },
+        )
+      ).status,
+    ).toBe(409);
+    expect(
+      (
+        await app.api.patch(
+          `/api/players/${other.body.id}`,
+          { displayName: 'Kai Mü.', goalkeeper: true },
+          {
+            token: club.coach.token,
+          },
+        )
+      ).status,
+    ).toBe(200);
+    const list = await app.api.get(`/api/teams/${team}/players`, { token: club.coach.token });
+    expect(list.body.map((p: { displayName: string }) => p.displayName)).toEqual(['Kai M. 🦊', 'Kai Mü.']);
+  });
+
   it('assistants read players but cannot change them (403)', async () => {
     const player = (
       await app.api.post(

@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { CsvPreview, PlayerDto } from '../../../../shared/types';
+import type { CsvPreview, CsvPreviewRow, PlayerDto } from '../../../../shared/types';
 
 export interface PlayerBody {
   displayName: string;
@@ -39,11 +39,17 @@ export class PlayersApi {
     return this.http.post<CsvPreview>(`/api/teams/${teamId}/players/import`, form);
   }
 
-  /** Adds the previewed rows that had no errors; the server checks they are the rows it previewed. */
-  commitImport(teamId: string, preview: Pick<CsvPreview, 'importId' | 'rows'>): Observable<PlayerDto[]> {
-    return this.http.post<PlayerDto[]>(`/api/teams/${teamId}/players/import/commit`, {
-      importId: preview.importId,
-      rows: preview.rows,
-    });
+  /**
+   * Adds the previewed lines with the names the coach kept or typed (`skip` leaves a line out);
+   * the server checks the lines are the ones it previewed and that no name is taken.
+   */
+  commitImport(
+    teamId: string,
+    body: {
+      importId: string;
+      rows: (Pick<CsvPreviewRow, 'row' | 'displayName' | 'goalkeeper'> & { skip?: boolean })[];
+    },
+  ): Observable<PlayerDto[]> {
+    return this.http.post<PlayerDto[]>(`/api/teams/${teamId}/players/import/commit`, body);
   }
 }
