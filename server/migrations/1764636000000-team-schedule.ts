@@ -38,9 +38,7 @@ export class TeamSchedule1764636000000 implements MigrationInterface {
 
   async down(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(`DROP TABLE "team_calendar"`);
-    await queryRunner.query(
-      `ALTER TABLE "session_plan" DROP CONSTRAINT "FK_2c425be862372a44b16d9bbc983"`,
-    );
+    await queryRunner.query(`ALTER TABLE "session_plan" DROP CONSTRAINT "FK_2c425be862372a44b16d9bbc983"`);
     await queryRunner.query(`DROP INDEX "public"."IDX_2c425be862372a44b16d9bbc98"`);
     await queryRunner.query(`ALTER TABLE "session_plan" DROP COLUMN "scheduledSessionId"`);
     await queryRunner.query(`DROP TABLE "scheduled_session"`);

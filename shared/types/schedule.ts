@@ -54,3 +54,21 @@ export interface TeamCalendarDto {
   /** Path of the feed on this server (/api/calendar/<secret>.ics), or null when none is on. */
   path: string | null;
 }
+
+/** The day `days` after a YYYY-MM-DD day (negative for before), as YYYY-MM-DD. */
+export function addDays(date: string, days: number): string {
+  const [y, m, d] = date.split('-').map(Number) as [number, number, number];
+  return new Date(Date.UTC(y, m - 1, d + days)).toISOString().slice(0, 10);
+}
+
+/**
+ * The same weekday every week from `first` to `until` (both YYYY-MM-DD, inclusive). Stops one
+ * past MAX_WEEKLY_SESSIONS, so a caller can tell "too many" without building a long list.
+ */
+export function weeklyDates(first: string, until: string): string[] {
+  const dates: string[] = [];
+  for (let date = first; date <= until && dates.length <= MAX_WEEKLY_SESSIONS; date = addDays(date, 7)) {
+    dates.push(date);
+  }
+  return dates;
+}
