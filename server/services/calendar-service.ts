@@ -59,7 +59,7 @@ export function calendarDocument(
       end: match ? start : start.add(session.minutes, 'minute'),
       timezone: timeZone,
       stamp: session.updatedAt,
-      summary: match ? `${label}: match, kick-off ${session.startTime}` : `${label}: training`,
+      summary: match ? `${label}: match (kick-off ${session.startTime})` : `${label}: training`,
       description: match
         ? `Warm-up ${session.minutes} minutes before kick-off at ${session.startTime}.`
         : `Training, ${session.minutes} minutes.`,
