@@ -11,6 +11,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay, weekRange } from '../../core/time/dates';
 import { problemMessage } from '../../core/http/problem-message';
+import { WeekSessions } from './components/week-sessions';
 
 interface TeamWeek {
   team: TeamDto;
@@ -20,7 +21,7 @@ interface TeamWeek {
 /** This week's sessions by team, and the one thing a coach comes for: plan a warm-up. */
 @Component({
   selector: 'cw-home-page',
-  imports: [RouterLink, MatButtonModule, MatCardModule, MatIconModule],
+  imports: [RouterLink, MatButtonModule, MatCardModule, MatIconModule, WeekSessions],
   templateUrl: './home-page.html',
   styleUrl: './home-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -29,6 +29,8 @@ import { PlayerDialog } from './components/player-dialog';
 import { PlayersTable } from './components/players-table';
 import { RemovePlayerDialog } from './components/remove-player-dialog';
 import { TeamDefaultsForm } from './components/team-defaults-form';
+import { TeamSchedule } from './components/team-schedule';
+import { canEditSchedule } from './schedule-permissions';
 import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
 
 /** One team: its players, CSV import, kit bag and defaults, with the way into planning and out. */
@@ -44,6 +46,7 @@ import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
     CsvImport,
     KitBagForm,
     TeamDefaultsForm,
+    TeamSchedule,
   ],
   templateUrl: './team-page.html',
   styleUrl: './team-page.scss',
@@ -69,6 +72,8 @@ export class TeamPage {
   /** What the signed-in member may do here; the API refuses everything else with 403. */
   protected readonly can = computed(() => teamPermissions(this.auth.user(), this.team()));
   protected readonly readOnlyNote = READ_ONLY_NOTE;
+  /** The lead and the team's own staff keep its schedule. */
+  protected readonly canSchedule = computed(() => canEditSchedule(this.auth.user(), this.team()));
 
   constructor() {
     effect(() => this.load(this.teamId()));
