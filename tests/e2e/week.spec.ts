@@ -119,6 +119,9 @@ describe('a week of sessions', () => {
     await weekItem().getByTestId('plan-it').click();
     await page.waitForURL(/\/plan\/new\?session=[0-9a-f-]{36}$/);
     await expect.poll(() => page.getByTestId('team-select').textContent()).toContain(teamName);
+    expect(await page.getByTestId('from-session').textContent()).toContain(
+      `${teamName}: training · Tomorrow · 18:30 · Meadow Lane, pitch 2`,
+    );
     await expect.poll(() => page.locator('input[formcontrolname="kickOff"]').inputValue()).toBe('18:30');
     expect(await page.locator('input[formcontrolname="date"]').inputValue()).toBe(tomorrow);
     expect(await page.locator('input[formcontrolname="minutes"]').inputValue()).toBe('60');

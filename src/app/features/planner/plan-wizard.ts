@@ -32,6 +32,7 @@ import { loadApiSchema } from '../../core/forms/api-schemas';
 import { schemaCheck } from '../../core/forms/schema-validator';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
+import { SCHEDULE_KIND_LABELS, sessionDay } from '../../core/labels/schedule-labels';
 import { isoDate } from '../../core/time/dates';
 import { buildPlanRequest, wizardFieldOf, type WizardValue } from './services/plan-request-builder';
 import { SpacePreset, SpacePresets } from './services/space-presets';
@@ -77,7 +78,8 @@ export class PlanWizard {
   readonly from = input<string>();
   /** Plans a scheduled session (?session=id): its team, day, kick-off, kind and minutes. */
   readonly session = input<string>();
-  /** The scheduled session this plan is for, once read. */
+  /** The scheduled session this plan is for, in words, once read. */
+  protected readonly fromSession = signal<string | null>(null);
   private scheduledSessionId: string | undefined;
 
   protected readonly teams = signal<TeamDto[]>([]);
@@ -214,7 +216,16 @@ export class PlanWizard {
           kind: PLAN_KIND_OF[s.kind],
           minutes: s.minutes,
         });
-        this.status.set(`Planning ${s.teamName}'s ${s.kind} on ${s.date} at ${s.startTime}.`);
+        const words = [
+          `${s.teamName}: ${SCHEDULE_KIND_LABELS[s.kind].toLowerCase()}`,
+          sessionDay(s.date),
+          s.startTime,
+          s.place,
+        ]
+          .filter(Boolean)
+          .join(' · ');
+        this.fromSession.set(words);
+        this.status.set(`Planning from the schedule: ${words}.`);
       },
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
