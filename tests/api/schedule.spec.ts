@@ -400,3 +400,20 @@ describe('the request log', () => {
     }
   });
 });
+
+describe('the public calendar route', () => {
+  it('answers too many requests from one address with a 429 problem in plain words', async () => {
+    const limited = await startTestApp({ authRateLimit: { windowMs: 60_000, max: 2 } });
+    try {
+      const path = `/api/calendar/${'B'.repeat(43)}.ics`;
+      expect((await limited.api.get(path)).status).toBe(404);
+      expect((await limited.api.get(path)).status).toBe(404);
+      const third = await limited.api.get(path);
+      expect(third.status).toBe(429);
+      expect(third.headers.get('content-type')).toContain('application/problem+json');
+      expect(third.body.detail).toBe('Too many calendar requests from here. Wait a few minutes.');
+    } finally {
+      await limited.close();
+    }
+  });
+});

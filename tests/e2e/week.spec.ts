@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AuthResponse, ScheduledSessionDto, SessionPlanDto, TeamDto } from '../../shared/types';
 import { addDays } from '../../shared/types';
 import {
+  DESKTOP,
   launchBrowser,
   PHONE,
   screenshot,
@@ -155,6 +156,9 @@ describe('a week of sessions', () => {
     expect(await open.getAttribute('href')).toBe(`/plans/${planId}`);
     expect(await weekItem().getByTestId('plan-it').count()).toBe(0);
     await screenshot(page, 'week-home-planned');
+    await page.setViewportSize(DESKTOP);
+    await screenshot(page, 'week-home-planned');
+    await page.setViewportSize(PHONE);
     await open.click();
     await page.waitForURL(new RegExp(`/plans/${planId}$`));
   });
