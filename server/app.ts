@@ -19,6 +19,11 @@ export interface AppDeps {
   mail?: MailQueue;
 }
 
+/** A calendar feed's address is its secret: the log keeps the path without it. */
+export function withoutSecrets(url: string): string {
+  return url.replace(/\/calendar\/[^/?#]+/, '/calendar/[secret]');
+}
+
 /** JSON bodies above this answer 413. */
 export const JSON_BODY_LIMIT = '256kb';
 
@@ -67,7 +72,7 @@ export function createApp(deps: AppDeps): Express {
         req: (req: { id: unknown; method: string; url: string }) => ({
           id: req.id,
           method: req.method,
-          url: req.url,
+          url: withoutSecrets(req.url),
         }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },

@@ -77,6 +77,8 @@ const CLIENT_API_SCHEMAS = [
   'kit-bag',
   'plan-create',
   'plan-share',
+  'scheduled-session',
+  'weekly-sessions',
 ];
 
 /**

@@ -9,6 +9,10 @@ export class Club {
   @Column({ type: 'varchar', length: 120 })
   name!: string;
 
+  /** IANA time zone of the club's sessions: their days and times are local to it. */
+  @Column({ type: 'varchar', length: 64, default: 'Europe/London' })
+  timeZone!: string;
+
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;
 }

@@ -8,8 +8,10 @@ import { OutboxMessage } from './outbox-message';
 import { Player } from './player';
 import { RuleSet } from './rule-set';
 import { RuleSetChange } from './rule-set-change';
+import { ScheduledSession } from './scheduled-session';
 import { SessionPlan } from './session-plan';
 import { Team } from './team';
+import { TeamCalendar } from './team-calendar';
 import { User } from './user';
 
 export {
@@ -23,8 +25,10 @@ export {
   Player,
   RuleSet,
   RuleSetChange,
+  ScheduledSession,
   SessionPlan,
   Team,
+  TeamCalendar,
   User,
 };
 
@@ -43,4 +47,6 @@ export const ENTITIES = [
   Invitation,
   OutboxMessage,
   RuleSetChange,
+  ScheduledSession,
+  TeamCalendar,
 ];

@@ -12,6 +12,7 @@ import {
 import type { PlanStatus } from '../../shared/types/api';
 import type { Plan } from '../../shared/types/plan';
 import type { PlanKind, PlanRequest } from '../../shared/types/plan-request';
+import { ScheduledSession } from './scheduled-session';
 import { Team } from './team';
 import { User } from './user';
 
@@ -42,6 +43,15 @@ export class SessionPlan {
 
   @Column({ type: 'varchar', length: 20 })
   kind!: PlanKind;
+
+  /** The scheduled session this plan was made for, if any (kept null when that session is deleted). */
+  @Index()
+  @Column({ type: 'uuid', nullable: true })
+  scheduledSessionId!: string | null;
+
+  @ManyToOne(() => ScheduledSession, { onDelete: 'SET NULL', nullable: true })
+  @JoinColumn({ name: 'scheduledSessionId' })
+  scheduledSession?: ScheduledSession | null;
 
   @Column({ type: 'integer' })
   minutes!: number;

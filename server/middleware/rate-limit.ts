@@ -20,3 +20,17 @@ export function authRateLimit(config: AppConfig): RequestHandler {
       ),
   });
 }
+
+/**
+ * Limits requests per IP on a public route that needs no sign-in (the calendar feeds), with the
+ * same window and count as the sign-in routes.
+ */
+export function publicRateLimit(config: AppConfig, message: string): RequestHandler {
+  return rateLimit({
+    windowMs: config.authRateLimit.windowMs,
+    limit: config.authRateLimit.max,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    handler: (_req, _res, next) => next(new HttpError(429, 'Too many requests', message)),
+  });
+}

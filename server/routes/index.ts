@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { ApiDeps } from './api-deps';
 import { authRouter } from './auth';
+import { calendarRouter } from './calendar';
 import { healthRouter } from './health';
 import { invitationsRouter } from './invitations';
 import { kitRouter } from './kit';
@@ -10,6 +11,7 @@ import { planActivityRouter } from './plan-activity';
 import { plansRouter } from './plans';
 import { playersRouter } from './players';
 import { ruleSetsRouter } from './rule-sets';
+import { scheduleRouter } from './schedule';
 import { teamInsightRouter } from './team-insight';
 import { teamsRouter } from './teams';
 
@@ -30,5 +32,7 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(planActivityRouter(deps));
   api.use(ruleSetsRouter(deps));
   api.use(teamInsightRouter(deps));
+  api.use(scheduleRouter(deps));
+  api.use(calendarRouter(deps));
   return api;
 }

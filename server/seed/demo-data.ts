@@ -1,5 +1,6 @@
 import type { Role } from '../../shared/types/api';
 import type { AgeGroup, Equipment, Level, PlanKind, Space } from '../../shared/types/plan-request';
+import type { ScheduleKind } from '../../shared/types/schedule';
 
 /**
  * The demo scenario: an invented club with invented people, for local use only. Players are a
@@ -33,7 +34,12 @@ export interface DemoTeam {
   players: { displayName: string; goalkeeper?: boolean }[];
   /** Past sessions: days before today, kind, minutes, kick-off, how many of the squad came. */
   pastPlans: { daysAgo: number; kind: PlanKind; minutes: number; kickOff: string; present: number }[];
+  /** The team's week: each on the schedule for the next DEMO_SCHEDULE_WEEKS (weekday 0 = Sunday). */
+  week: { weekday: number; startTime: string; kind: ScheduleKind; minutes: number; place: string }[];
 }
+
+/** How many weeks of the demo teams' schedules are seeded, from the day of seeding. */
+export const DEMO_SCHEDULE_WEEKS = 6;
 
 export const DEMO_TEAMS: DemoTeam[] = [
   {
@@ -59,6 +65,10 @@ export const DEMO_TEAMS: DemoTeam[] = [
     pastPlans: [
       { daysAgo: 10, kind: 'training', minutes: 45, kickOff: '17:30', present: 10 },
       { daysAgo: 4, kind: 'match-warm-up', minutes: 15, kickOff: '09:45', present: 9 },
+    ],
+    week: [
+      { weekday: 3, startTime: '17:30', kind: 'training', minutes: 45, place: 'Fernmoor Rec, small pitch' },
+      { weekday: 6, startTime: '09:45', kind: 'match', minutes: 15, place: 'Fernmoor Rec, small pitch' },
     ],
   },
   {
@@ -87,6 +97,11 @@ export const DEMO_TEAMS: DemoTeam[] = [
     pastPlans: [
       { daysAgo: 8, kind: 'training', minutes: 60, kickOff: '18:00', present: 13 },
       { daysAgo: 3, kind: 'match-warm-up', minutes: 20, kickOff: '10:30', present: 14 },
+    ],
+    week: [
+      { weekday: 2, startTime: '18:00', kind: 'training', minutes: 60, place: 'Fernmoor Rec, pitch 2' },
+      { weekday: 4, startTime: '18:00', kind: 'training', minutes: 60, place: 'Fernmoor Rec, pitch 2' },
+      { weekday: 0, startTime: '10:30', kind: 'match', minutes: 20, place: 'Fernmoor Rec, pitch 1' },
     ],
   },
 ];

@@ -6,14 +6,41 @@ import { Club } from '../entities/club';
 import { KitBag } from '../entities/kit-bag';
 import { Membership } from '../entities/membership';
 import { Player } from '../entities/player';
+import { ScheduledSession } from '../entities/scheduled-session';
 import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
 import { User } from '../entities/user';
 import { hashPassword } from '../services/auth-service';
+import { todayIn } from '../services/local-time';
 import { planActivityIds } from '../services/plan-activity-ids';
-import { DEMO_CLUB, DEMO_PASSWORD, DEMO_PEOPLE, DEMO_TEAMS, type DemoTeam } from './demo-data';
+import { addDays } from '../../shared/types/schedule';
+import {
+  DEMO_CLUB,
+  DEMO_PASSWORD,
+  DEMO_PEOPLE,
+  DEMO_SCHEDULE_WEEKS,
+  DEMO_TEAMS,
+  type DemoTeam,
+} from './demo-data';
 
 type PlanGenerator = (request: PlanRequest) => Promise<Plan>;
+
+/** The team's week from today on, in the club's zone, for DEMO_SCHEDULE_WEEKS weeks. */
+function demoSchedule(team: Team, spec: DemoTeam, timeZone: string): Partial<ScheduledSession>[] {
+  const today = todayIn(timeZone);
+  const weekday = new Date(`${today}T12:00:00Z`).getUTCDay();
+  return spec.week.flatMap((entry) =>
+    Array.from({ length: DEMO_SCHEDULE_WEEKS }, (_, week) => ({
+      clubId: team.clubId,
+      teamId: team.id,
+      date: addDays(today, ((entry.weekday - weekday + 7) % 7) + 7 * week),
+      startTime: entry.startTime,
+      kind: entry.kind,
+      minutes: entry.minutes,
+      place: entry.place,
+    })),
+  );
+}
 
 /** The engine through the server's doorway, or null while engine/ does not generate yet. */
 async function loadGenerator(log: (m: string) => void): Promise<PlanGenerator | null> {
@@ -137,6 +164,9 @@ export async function seedDemo(
         ]);
       }
       await manager.getRepository(KitBag).save({ teamId: team.id, clubId: club.id, ...spec.kit });
+      await manager
+        .getRepository(ScheduledSession)
+        .save(demoSchedule(team, spec, club.timeZone ?? 'Europe/London'));
       const players = await manager.getRepository(Player).save(
         spec.players.map((p) => ({
           clubId: club.id,

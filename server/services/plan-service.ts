@@ -23,6 +23,8 @@ export interface CreatePlanInput {
   teamId: string;
   date?: string;
   kickOff?: string;
+  /** The scheduled session the plan is for: one of the team's. */
+  scheduledSessionId?: string;
   request: PlanRequest;
 }
 
@@ -66,6 +68,8 @@ export class PlanService {
     // Team, access, roster, feedback, recent activities, pins and rules in one round trip.
     const inputs = await loadPlanInputs(manager, scope, input.teamId, RECENT_FEEDBACK_LIMIT);
     const { team, roster, rules } = inputs;
+    if (input.scheduledSessionId)
+      await assertSessionOfTeam(manager, auth.clubId, team.id, input.scheduledSessionId);
     const request = requestWithRoster(input.request, roster, inputs);
     const plan = await engine.generatePlan(request, rules);
     // A plain entity: the repository's create() would walk the 22 kB plan for nothing.
@@ -74,6 +78,7 @@ export class PlanService {
       teamId: team.id,
       date: input.date ?? null,
       kickOff: input.kickOff ?? null,
+      scheduledSessionId: input.scheduledSessionId ?? null,
       status: 'draft',
       authorId: auth.userId,
       ...planColumns(plan),
@@ -175,6 +180,24 @@ export class PlanService {
   }
 }
 
+/** 400 unless the scheduled session is one of the team's (a plan is tied to its own team's week only). */
+async function assertSessionOfTeam(
+  manager: EntityManager,
+  clubId: string,
+  teamId: string,
+  sessionId: string,
+): Promise<void> {
+  const rows: unknown[] = await manager.query(
+    'SELECT 1 FROM scheduled_session WHERE id = $1 AND "teamId" = $2 AND "clubId" = $3',
+    [sessionId, teamId, clubId],
+  );
+  if (!rows.length) {
+    throw badRequest('The scheduled session is not one of this team’s.', [
+      { field: 'scheduledSessionId', message: 'is not a session on this team’s schedule' },
+    ]);
+  }
+}
+
 /** The stored plan, locked for the rest of the transaction (404 outside the caller's club). */
 export async function lockPlan(manager: EntityManager, scope: ClubScope, id: string): Promise<SessionPlan> {
   await scope.plan(id);
@@ -186,15 +209,15 @@ export async function lockPlan(manager: EntityManager, scope: ClubScope, id: str
 const INSERT_PLAN_SQL = `
 INSERT INTO session_plan ("clubId", "teamId", "date", "kickOff", "status", "authorId", "kind", "minutes",
                           "playerCount", "request", "plan", "ruleSetId", "ruleSetVersion", "seed", "activityIds",
-                          "version")
-VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10::json, $11::json, $12, $13, $14, $15::varchar[], 1)
+                          "version", "scheduledSessionId")
+VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10::json, $11::json, $12, $13, $14, $15::varchar[], 1, $16)
 RETURNING id, "createdAt", "updatedAt", version`;
 // One statement, so one transaction: the plan is stored and the team's pins it took are cleared,
 // or neither. Pins changed since they were read stay for the next plan.
 const INSERT_PLAN_CLEAR_PINS_SQL = `
 WITH unpinned AS (
   UPDATE team SET "pinnedActivityIds" = '{}'
-   WHERE id = $2 AND "clubId" = $1 AND "pinnedActivityIds" = $16::varchar[]
+   WHERE id = $2 AND "clubId" = $1 AND "pinnedActivityIds" = $17::varchar[]
 )${INSERT_PLAN_SQL}`;
 
 /**
@@ -229,6 +252,7 @@ export async function insertPlanRow(
       row.ruleSetVersion,
       row.seed,
       row.activityIds,
+      row.scheduledSessionId ?? null,
       ...(clearPins ? [clearPins] : []),
     ],
   );

@@ -8,3 +8,4 @@ export * from './plan-api';
 export * from './rule-set-api';
 export * from './activity-words';
 export * from './team-staff';
+export * from './schedule';

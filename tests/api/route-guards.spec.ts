@@ -31,6 +31,16 @@ const ROUTES: [method: string, path: string][] = [
   ['GET', '/api/invitations'],
   ['POST', '/api/invitations'],
   ['DELETE', `/api/invitations/${SOME_ID}`],
+  ['GET', `/api/teams/${SOME_ID}/schedule`],
+  ['POST', `/api/teams/${SOME_ID}/schedule`],
+  ['POST', `/api/teams/${SOME_ID}/schedule/weekly`],
+  ['PATCH', `/api/teams/${SOME_ID}/schedule/${SOME_ID}`],
+  ['DELETE', `/api/teams/${SOME_ID}/schedule/${SOME_ID}`],
+  ['GET', '/api/scheduled-sessions'],
+  ['GET', `/api/scheduled-sessions/${SOME_ID}`],
+  ['GET', `/api/teams/${SOME_ID}/calendar`],
+  ['POST', `/api/teams/${SOME_ID}/calendar`],
+  ['DELETE', `/api/teams/${SOME_ID}/calendar`],
 ];
 
 describe('signed-in routes refuse callers without a valid token', () => {

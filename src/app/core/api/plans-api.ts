@@ -11,6 +11,8 @@ export interface CreatePlanBody {
   date?: string;
   /** HH:MM. */
   kickOff?: string;
+  /** The scheduled session the plan is for. */
+  scheduledSessionId?: string;
   request: PlanRequest;
 }
 

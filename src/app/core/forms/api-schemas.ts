@@ -13,7 +13,9 @@ export type SchemaName =
   | 'kit-bag'
   | 'plan-request'
   | 'plan-create'
-  | 'plan-share';
+  | 'plan-share'
+  | 'scheduled-session'
+  | 'weekly-sessions';
 
 type Json = { default: object };
 
@@ -29,6 +31,8 @@ const loaders: Partial<Record<SchemaName, () => Promise<Json>>> = {
   'plan-create': () => import('../../../../shared/schemas/api/plan-create.schema.json'),
   'plan-share': () => import('../../../../shared/schemas/api/plan-share.schema.json'),
   'plan-request': () => import('../../../../shared/schemas/plan-request.schema.json'),
+  'scheduled-session': () => import('../../../../shared/schemas/api/scheduled-session.schema.json'),
+  'weekly-sessions': () => import('../../../../shared/schemas/api/weekly-sessions.schema.json'),
 };
 
 /** The schema for a request body, or null when the API has none for it yet. */

@@ -14,6 +14,8 @@ const EVERY_SCHEMA: Record<SchemaName, true> = {
   'plan-request': true,
   'plan-create': true,
   'plan-share': true,
+  'scheduled-session': true,
+  'weekly-sessions': true,
 };
 
 describe('schemaCheck', () => {

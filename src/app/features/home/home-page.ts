@@ -12,6 +12,7 @@ import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay, weekRange } from '../../core/time/dates';
 import { problemMessage } from '../../core/http/problem-message';
 import { NoTeamYet } from '../../shared/components/no-team-yet';
+import { WeekSessions } from './components/week-sessions';
 
 interface TeamWeek {
   team: TeamDto;
@@ -21,7 +22,7 @@ interface TeamWeek {
 /** This week's sessions by team, and the one thing a coach comes for: plan a warm-up. */
 @Component({
   selector: 'cw-home-page',
-  imports: [RouterLink, MatButtonModule, MatCardModule, MatIconModule, NoTeamYet],
+  imports: [RouterLink, MatButtonModule, MatCardModule, MatIconModule, NoTeamYet, WeekSessions],
   templateUrl: './home-page.html',
   styleUrl: './home-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -15,6 +15,7 @@ import { Router, RouterLink } from '@angular/router';
 import { firstValueFrom, forkJoin } from 'rxjs';
 import {
   FOCUSES,
+  PLAN_KIND_OF,
   PLAN_KINDS,
   type Focus,
   type PlanKind,
@@ -22,6 +23,7 @@ import {
   type TeamDto,
 } from '../../../../shared/types';
 import { PlansApi } from '../../core/api/plans-api';
+import { ScheduleApi } from '../../core/api/schedule-api';
 import { mediaMatches } from '../../core/layout/media-query';
 import { PlayersApi } from '../../core/api/players-api';
 import { TeamsApi } from '../../core/api/teams-api';
@@ -30,6 +32,7 @@ import { loadApiSchema } from '../../core/forms/api-schemas';
 import { schemaCheck } from '../../core/forms/schema-validator';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
+import { SCHEDULE_KIND_LABELS, sessionDay } from '../../core/labels/schedule-labels';
 import { isoDate } from '../../core/time/dates';
 import { buildPlanRequest, wizardFieldOf, type WizardValue } from './services/plan-request-builder';
 import { SpacePreset, SpacePresets } from './services/space-presets';
@@ -63,6 +66,7 @@ export class PlanWizard {
   private readonly teamsApi = inject(TeamsApi);
   private readonly playersApi = inject(PlayersApi);
   private readonly plansApi = inject(PlansApi);
+  private readonly scheduleApi = inject(ScheduleApi);
   private readonly presetsService = inject(SpacePresets);
   private readonly router = inject(Router);
   private readonly handover = inject(PlanHandover);
@@ -72,6 +76,11 @@ export class PlanWizard {
   readonly teamId = input<string>();
   /** Starts from a past plan's kit, space and timing (?from=planId). */
   readonly from = input<string>();
+  /** Plans a scheduled session (?session=id): its team, day, kick-off, kind and minutes. */
+  readonly session = input<string>();
+  /** The scheduled session this plan is for, in words, once read. */
+  protected readonly fromSession = signal<string | null>(null);
+  private scheduledSessionId: string | undefined;
 
   protected readonly teams = signal<TeamDto[]>([]);
   protected readonly roster = signal<PlayerDto[]>([]);
@@ -124,6 +133,8 @@ export class PlanWizard {
     this.teamsApi.list().subscribe({
       next: (teams) => {
         this.teams.set(teams);
+        const session = this.session();
+        if (session) return this.startFromSession(session);
         const wanted = this.teamId() ?? (teams.length === 1 ? teams[0].id : '');
         if (wanted) this.form.controls.who.controls.teamId.setValue(wanted);
       },
@@ -193,6 +204,33 @@ export class PlanWizard {
     });
   }
 
+  /** Fills in the team and the time step from a session on the team's schedule. */
+  private startFromSession(id: string): void {
+    this.scheduleApi.get(id).subscribe({
+      next: (s) => {
+        this.scheduledSessionId = s.id;
+        this.form.controls.who.controls.teamId.setValue(s.teamId);
+        this.form.controls.time.patchValue({
+          date: s.date,
+          kickOff: s.startTime,
+          kind: PLAN_KIND_OF[s.kind],
+          minutes: s.minutes,
+        });
+        const words = [
+          `${s.teamName}: ${SCHEDULE_KIND_LABELS[s.kind].toLowerCase()}`,
+          sessionDay(s.date),
+          s.startTime,
+          s.place,
+        ]
+          .filter(Boolean)
+          .join(' · ');
+        this.fromSession.set(words);
+        this.status.set(`Planning from the schedule: ${words}.`);
+      },
+      error: (error: unknown) => this.error.set(problemMessage(error)),
+    });
+  }
+
   protected tickAll(present: boolean): void {
     this.form.controls.who.controls.present.setValue(present ? this.activeRoster().map((p) => p.id) : []);
   }
@@ -250,6 +288,7 @@ export class PlanWizard {
         request: buildPlanRequest(team, this.roster(), value, guestIds),
         date: raw.time.date || undefined,
         kickOff: raw.time.kickOff || undefined,
+        scheduledSessionId: this.scheduledSessionId,
       })
       .subscribe({
         next: (saved) => {

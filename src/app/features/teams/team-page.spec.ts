@@ -74,6 +74,10 @@ describe('TeamPage', () => {
     http.expectOne('/api/members').flush(MEMBERS);
     http.expectOne('/api/teams/t1/kit').flush({ balls: 10, cones: 20, bibs: 8, goals: 2 });
     await settle(fixture);
+    // The schedule section loads its own sessions and calendar link once the team is known.
+    http.expectOne((r) => r.url === '/api/teams/t1/schedule').flush([]);
+    http.expectOne('/api/teams/t1/calendar').flush({ path: null });
+    await settle(fixture);
     return { fixture, http, navigate, root: fixture.nativeElement as HTMLElement };
   }
 

@@ -31,6 +31,8 @@ import { PlayersTable } from './components/players-table';
 import { RemovePlayerDialog } from './components/remove-player-dialog';
 import { TeamDefaultsForm } from './components/team-defaults-form';
 import { TeamStaff } from './components/team-staff';
+import { TeamSchedule } from './components/team-schedule';
+import { canEditSchedule } from './schedule-permissions';
 import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
 
 /** One team: its players, CSV import, kit bag and defaults, with the way into planning and out. */
@@ -47,6 +49,7 @@ import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
     KitBagForm,
     TeamDefaultsForm,
     TeamStaff,
+    TeamSchedule,
   ],
   templateUrl: './team-page.html',
   styleUrl: './team-page.scss',
@@ -75,6 +78,8 @@ export class TeamPage {
   /** What the signed-in member may do here; the API refuses everything else with 403. */
   protected readonly can = computed(() => teamPermissions(this.auth.user(), this.team()));
   protected readonly readOnlyNote = READ_ONLY_NOTE;
+  /** The lead and the team's own staff keep its schedule. */
+  protected readonly canSchedule = computed(() => canEditSchedule(this.auth.user(), this.team()));
 
   constructor() {
     effect(() => this.load(this.teamId()));

@@ -1,0 +1,16 @@
+import type { ScheduleKind } from '../../../../shared/types';
+import { addDays } from '../../../../shared/types';
+import { isoDate, shortDay } from '../time/dates';
+
+/** Words for a scheduled session's kind. */
+export const SCHEDULE_KIND_LABELS: Record<ScheduleKind, string> = {
+  training: 'Training',
+  match: 'Match',
+};
+
+/** "Today", "Tomorrow" or "Thu 3 Dec" for a YYYY-MM-DD day. */
+export function sessionDay(date: string, today = isoDate(new Date())): string {
+  if (date === today) return 'Today';
+  if (date === addDays(today, 1)) return 'Tomorrow';
+  return shortDay(date);
+}

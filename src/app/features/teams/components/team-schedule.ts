@@ -1,0 +1,165 @@
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
+import { MatIconModule } from '@angular/material/icon';
+import { MatSnackBar } from '@angular/material/snack-bar';
+import { RouterLink } from '@angular/router';
+import type { ScheduledSessionDto } from '../../../../../shared/types';
+import { ScheduleApi } from '../../../core/api/schedule-api';
+import { problemMessage } from '../../../core/http/problem-message';
+import { SCHEDULE_KIND_LABELS, sessionDay } from '../../../core/labels/schedule-labels';
+import { ScheduleDialog, type ScheduleDialogData } from './schedule-dialog';
+
+/**
+ * A team's coming training nights and matches (add one, add weekly, change, delete) and the
+ * address of its calendar feed for assistants' and parents' calendar apps.
+ */
+@Component({
+  selector: 'cw-team-schedule',
+  imports: [RouterLink, MatButtonModule, MatIconModule],
+  templateUrl: './team-schedule.html',
+  styleUrl: './team-schedule.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class TeamSchedule {
+  private readonly api = inject(ScheduleApi);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
+
+  readonly teamId = input.required<string>();
+  /** The lead or one of the team's staff: may change the schedule and its calendar link. */
+  readonly editable = input(false);
+  /** May make plans for this team. */
+  readonly canPlan = input(false);
+
+  protected readonly sessions = signal<ScheduledSessionDto[]>([]);
+  protected readonly loaded = signal(false);
+  protected readonly error = signal<string | null>(null);
+  /** The session whose delete waits for a second tap. */
+  protected readonly confirming = signal<string | null>(null);
+  protected readonly feedPath = signal<string | null>(null);
+  protected readonly renewing = signal(false);
+  protected readonly busy = signal(false);
+  protected readonly kindLabels = SCHEDULE_KIND_LABELS;
+  protected readonly day = sessionDay;
+
+  protected readonly feedUrl = computed(() => {
+    const path = this.feedPath();
+    return path ? `${location.origin}${path}` : null;
+  });
+  /** The same address for calendar apps that subscribe from a link. */
+  protected readonly webcalUrl = computed(() => {
+    const path = this.feedPath();
+    return path ? `webcal://${location.host}${path}` : null;
+  });
+
+  constructor() {
+    effect(() => {
+      const id = this.teamId();
+      this.load(id);
+      this.api.calendar(id).subscribe({
+        next: (calendar) => this.feedPath.set(calendar.path),
+        error: () => this.feedPath.set(null),
+      });
+    });
+  }
+
+  private load(id = this.teamId()): void {
+    this.api.list(id).subscribe({
+      next: (sessions) => {
+        this.sessions.set(sessions);
+        this.loaded.set(true);
+      },
+      error: (error: unknown) => {
+        this.error.set(problemMessage(error));
+        this.loaded.set(true);
+      },
+    });
+  }
+
+  protected open(session?: ScheduledSessionDto, weekly = false): void {
+    this.dialog
+      .open<ScheduleDialog, ScheduleDialogData, number>(ScheduleDialog, {
+        data: { teamId: this.teamId(), session, weekly },
+        width: '440px',
+        maxWidth: 'calc(100vw - 24px)',
+        autoFocus: 'first-tabbable',
+      })
+      .afterClosed()
+      .subscribe((count) => {
+        if (!count) return;
+        this.say(session ? 'Session saved.' : count === 1 ? 'Session added.' : `${count} sessions added.`);
+        this.load();
+      });
+  }
+
+  protected remove(session: ScheduledSessionDto): void {
+    if (this.busy()) return;
+    this.busy.set(true);
+    this.api.remove(this.teamId(), session.id).subscribe({
+      next: () => {
+        this.busy.set(false);
+        this.confirming.set(null);
+        this.sessions.update((list) => list.filter((s) => s.id !== session.id));
+        this.say('Session deleted.');
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+
+  protected async copyLink(): Promise<void> {
+    const url = this.feedUrl();
+    if (!url) return;
+    try {
+      await navigator.clipboard.writeText(url);
+      this.say('Calendar link copied.');
+    } catch {
+      this.say('Copying is blocked here: press and hold the link to copy it.');
+    }
+  }
+
+  /** Turns the link on, or replaces it (the old one stops working). */
+  protected renewLink(): void {
+    if (this.busy()) return;
+    this.busy.set(true);
+    const replacing = !!this.feedPath();
+    this.api.renewCalendar(this.teamId()).subscribe({
+      next: (calendar) => {
+        this.busy.set(false);
+        this.renewing.set(false);
+        this.feedPath.set(calendar.path);
+        this.say(
+          replacing ? 'New calendar link made; the old one no longer works.' : 'Calendar link turned on.',
+        );
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+
+  protected stopLink(): void {
+    if (this.busy()) return;
+    this.busy.set(true);
+    this.api.stopCalendar(this.teamId()).subscribe({
+      next: () => {
+        this.busy.set(false);
+        this.renewing.set(false);
+        this.feedPath.set(null);
+        this.say('Calendar link turned off.');
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+
+  private say(text: string): void {
+    this.snackBar.open(text, undefined, { duration: 3000, politeness: 'polite' });
+  }
+}
