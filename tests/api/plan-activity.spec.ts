@@ -44,7 +44,12 @@ describe('attendance, feedback, pitch-side changes and team insight', () => {
     );
     expect(put.status, put.text).toBe(200);
     const get = await app.api.get(`/api/plans/${plan.id}/attendance`, { token: club.coach.token });
-    expect(get.body).toEqual({ planId: plan.id, playerIds: came });
+    expect(get.body).toEqual({
+      planId: plan.id,
+      playerIds: came,
+      players: came.map((playerId) => ({ playerId })),
+      recorded: true,
+    });
     const bad = await app.api.put(
       `/api/plans/${plan.id}/attendance`,
       { playerIds: [came[0], '00000000-0000-4000-8000-000000000000'] },
