@@ -24,7 +24,12 @@ function entryOf(row: Attendance): AttendanceEntryDto {
 }
 
 function dtoOf(planId: string, entries: AttendanceEntryDto[]): AttendanceDto {
-  return { planId, playerIds: entries.map((e) => e.playerId), players: entries, recorded: entries.length > 0 };
+  return {
+    planId,
+    playerIds: entries.map((e) => e.playerId),
+    players: entries,
+    recorded: entries.length > 0,
+  };
 }
 
 /**

@@ -84,7 +84,10 @@ describe('the register', () => {
     const before = (await app.api.get(`/api/plans/${plan.id}/attendance`, { token: club.coach.token })).body;
     const [a, b] = squad.playerIds;
     const badMinutes = await register(club.coach.token, {
-      players: [{ playerId: a, lateMinutes: 0 }, { playerId: b, leftEarlyMinutes: 'ten' }],
+      players: [
+        { playerId: a, lateMinutes: 0 },
+        { playerId: b, leftEarlyMinutes: 'ten' },
+      ],
     });
     expect(badMinutes.status).toBe(400);
     expect(badMinutes.body.errors).toEqual([
