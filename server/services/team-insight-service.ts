@@ -46,8 +46,10 @@ export class TeamInsightService {
     const roster = await manager
       .getRepository(Player)
       .find({ where: { teamId: team.id, clubId: auth.clubId } });
-    const totals = new Map<string, { sessions: number; touches: number }>(
-      roster.map((p) => [p.id, { sessions: 0, touches: 0 }]),
+    // `estimated`: sessions whose plan has a touch estimate for the player (one marked present
+    // who was not in the plan has none, and a zero there would read as "less of the ball").
+    const totals = new Map<string, { sessions: number; estimated: number; touches: number }>(
+      roster.map((p) => [p.id, { sessions: 0, estimated: 0, touches: 0 }]),
     );
 
     const sessions: InsightSessionDto[] = plans.map((row) => {
@@ -57,11 +59,14 @@ export class TeamInsightService {
       const present = new Set(register.map((e) => e.playerId));
       const touches: Record<string, number> = {};
       for (const id of present) {
-        const estimate = Math.round(row.plan.touches?.[id] ?? 0);
-        touches[id] = estimate;
         const t = totals.get(id);
+        if (t) t.sessions++;
+        const known = row.plan.touches?.[id];
+        if (known === undefined) continue;
+        const estimate = Math.round(known);
+        touches[id] = estimate;
         if (t) {
-          t.sessions++;
+          t.estimated++;
           t.touches += estimate;
         }
       }
@@ -86,7 +91,7 @@ export class TeamInsightService {
           active: p.active,
           sessionsAttended: t.sessions,
           totalTouches: t.touches,
-          averageTouches: t.sessions ? Math.round(t.touches / t.sessions) : 0,
+          averageTouches: t.estimated ? Math.round(t.touches / t.estimated) : 0,
         };
       })
       .sort((a, b) => a.displayName.localeCompare(b.displayName));

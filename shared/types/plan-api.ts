@@ -41,7 +41,7 @@ export interface InsightPlayerDto {
   active: boolean;
   sessionsAttended: number;
   totalTouches: number;
-  /** Mean estimated touches per session attended (0 when none). */
+  /** Mean estimated touches per session attended that has an estimate for the player (0 when none). */
   averageTouches: number;
 }
 

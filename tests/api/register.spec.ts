@@ -149,5 +149,22 @@ describe('the register', () => {
     const session = insight.sessions.find((s) => s.planId === second.id)!;
     expect(session).toMatchObject({ recorded: false, present: 9, cameLate: 1, leftEarly: 1 });
     expect(insight.players.find((p) => p.playerId === leaver)!.sessionsAttended).toBe(2);
+
+    // Marked present without being in the plan: came, but no touch estimate, so no made-up zero.
+    const extra = squad.playerIds[8];
+    const put = await app.api.put(
+      `/api/plans/${second.id}/attendance`,
+      { players: [...squad.playerIds.slice(0, 8), extra].map((playerId) => ({ playerId })) },
+      { token: club.coach.token },
+    );
+    expect(put.status, put.text).toBe(200);
+    const after = (await app.api.get(`/api/teams/${squad.teamId}/insight`, { token: club.lead.token }))
+      .body as TeamInsightDto;
+    const recorded = after.sessions.find((s) => s.planId === second.id)!;
+    expect(recorded.touches[extra]).toBeUndefined();
+    const first = after.sessions.find((s) => s.planId === plan.id)!;
+    const row = after.players.find((p) => p.playerId === extra)!;
+    expect(row.sessionsAttended).toBe(1 + (first.touches[extra] !== undefined ? 1 : 0));
+    expect(row.averageTouches).toBe(first.touches[extra] ?? 0);
   });
 });

@@ -89,6 +89,9 @@ describe('the register', () => {
       .toContain(`Register saved: ${players.length} of ${players.length} came · 1 late · 1 left early`);
     await register.getByTestId('register-save').scrollIntoViewIfNeeded();
     await screenshot(page, 'register-plan-page');
+    // What the thumb sees: the register itself, and the screen with Save in view.
+    await register.screenshot({ path: 'test-results/screenshots/register-panel-390.png' });
+    await page.screenshot({ path: 'test-results/screenshots/register-save-in-view-390.png' });
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
     const stored = (

@@ -37,7 +37,7 @@ export function summariseInsight(insight: TeamInsightDto): InsightSummary {
       ? 'No sessions yet.'
       : `On average ${averagePresent} of ${insight.squadSize} players came to each of ${sessions} session${sessions === 1 ? '' : 's'}.`;
 
-  const attended = insight.players.filter((p) => p.sessionsAttended > 0);
+  const attended = insight.players.filter((p) => p.sessionsAttended > 0 && p.totalTouches > 0);
   const typical = median(attended.map((p) => p.averageTouches));
   const fewestTouches = attended
     .filter((p) => p.averageTouches < typical * LOW_TOUCH_SHARE)
