@@ -10,6 +10,7 @@ import {
   type SignedIn,
   type TestApp,
 } from '../support/api-test-app';
+import { BACKFILL_FEEDBACK_ACTIVITY } from '../../server/migrations/1764635000000-register-and-station-feedback';
 import { createPlan, createSquad, type Squad } from './fixtures/plan-helpers';
 
 describe('the register', () => {
@@ -166,5 +167,27 @@ describe('the register', () => {
     const row = after.players.find((p) => p.playerId === extra)!;
     expect(row.sessionsAttended).toBe(1 + (first.touches[extra] !== undefined ? 1 : 0));
     expect(row.averageTouches).toBe(first.touches[extra] ?? 0);
+  });
+
+  it('gives feedback from before activities were kept the activity of its station (the migration)', async () => {
+    const phaseIndex = plan.plan.phases.findIndex((p) => p.stations.length > 0);
+    const station = plan.plan.phases[phaseIndex]!.stations.at(-1)!;
+    const given = await app.api.post(
+      `/api/plans/${plan.id}/feedback`,
+      { stationId: station.id, phaseIndex, verdict: 'too-hard' },
+      { token: club.assistant.token },
+    );
+    expect(given.status, given.text).toBe(201);
+    const id = given.body.id as string;
+    const activityOf = async () =>
+      (
+        (await app.dataSource.query('SELECT "activityId" FROM feedback WHERE id = $1', [id])) as {
+          activityId: string | null;
+        }[]
+      )[0]!.activityId;
+    expect(await activityOf()).toBe(station.activityId);
+    await app.dataSource.query('UPDATE feedback SET "activityId" = NULL WHERE id = $1', [id]);
+    await app.dataSource.query(BACKFILL_FEEDBACK_ACTIVITY);
+    expect(await activityOf()).toBe(station.activityId);
   });
 });

@@ -103,7 +103,7 @@ describe('pitch-side', () => {
     await page.close();
   });
 
-  it('"too easy" steps the station\'s area down and the next plan of the team starts that kind smaller', async () => {
+  it('"too easy" steps the station\'s area down and the next plan of the team starts that activity smaller', async () => {
     const request = { seed: 'feedback-seed' };
     const session = await club.plan(coach, team, roster, request);
     // The first phase with stations (a U8 warm-up opens with ball mastery; a drinks break has none).
