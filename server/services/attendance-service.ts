@@ -67,11 +67,18 @@ export class AttendanceService {
       );
       const seen = new Set<string>();
       const errors: FieldError[] = [];
-      entries.forEach(({ playerId }, i) => {
+      const minutes = plan.plan.request.minutes;
+      entries.forEach(({ playerId, lateMinutes = 0, leftEarlyMinutes = 0 }, i) => {
         const at = field === 'players' ? `players/${i}/playerId` : `playerIds/${i}`;
         if (!known.has(playerId)) errors.push({ field: at, message: 'is not a player of this team' });
         else if (seen.has(playerId)) errors.push({ field: at, message: 'is on the register twice' });
         seen.add(playerId);
+        if (lateMinutes + leftEarlyMinutes >= minutes) {
+          errors.push({
+            field: `players/${i}/${leftEarlyMinutes ? 'leftEarlyMinutes' : 'lateMinutes'}`,
+            message: `leaves no time in the ${minutes}-minute session`,
+          });
+        }
       });
       if (errors.length) throw badRequest('Some players on the register are not right.', errors);
       await manager.getRepository(Attendance).delete({ planId: plan.id, clubId: auth.clubId });

@@ -62,7 +62,8 @@ describe('the register', () => {
     expect(put.status, put.text).toBe(200);
     const get = (await app.api.get(`/api/plans/${plan.id}/attendance`, { token: club.lead.token }))
       .body as AttendanceDto;
-    expect(get.players).toEqual(ids.map((playerId) => ({ playerId })));
+    const byId = (a: { playerId: string }, b: { playerId: string }) => a.playerId.localeCompare(b.playerId);
+    expect([...get.players].sort(byId)).toEqual(ids.map((playerId) => ({ playerId })).sort(byId));
   });
 
   it('refuses a coach of another team (403), an assistant of none (403) and another club (404)', async () => {
@@ -94,6 +95,13 @@ describe('the register', () => {
     expect(badMinutes.body.errors).toEqual([
       { field: 'players/0/lateMinutes', message: 'minutes late must be at least 1' },
       { field: 'players/1/leftEarlyMinutes', message: 'minutes left early must be a whole number' },
+    ]);
+    const tooLong = await register(club.coach.token, {
+      players: [{ playerId: a, lateMinutes: 15, leftEarlyMinutes: 15 }],
+    });
+    expect(tooLong.status).toBe(400);
+    expect(tooLong.body.errors).toEqual([
+      { field: 'players/0/leftEarlyMinutes', message: 'leaves no time in the 25-minute session' },
     ]);
     const twice = await register(club.coach.token, { players: [{ playerId: a }, { playerId: a }] });
     expect(twice.status).toBe(400);

@@ -5,7 +5,7 @@ import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import type { Plan } from '../../../../../shared/types';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { RegisterPanel } from './register-panel';
-import { canTakeRegister, entriesOf, minutesProblem } from '../services/register-marks';
+import { canTakeRegister, entriesOf, lengthProblem, minutesProblem } from '../services/register-marks';
 
 const squad = ['Ada K.', 'Bo L.', 'Cy M.', 'Di N.'].map((displayName, i) => ({
   id: `p${i + 1}`,
@@ -107,6 +107,10 @@ describe('register marks', () => {
         'a',
       ]),
     ).toEqual([{ playerId: 'a', lateMinutes: 5 }]);
+    expect(lengthProblem({ came: true, late: '200', early: null }, 30)).toBe(
+      'Late and early together leave no time in the 30-minute session.',
+    );
+    expect(lengthProblem({ came: true, late: '10', early: '15' }, 30)).toBeNull();
     expect(canTakeRegister({ id: 'x', role: 'assistant' }, { coachIds: ['x'] })).toBe(true);
     expect(canTakeRegister({ id: 'x', role: 'coach' }, { coachIds: ['y'] })).toBe(false);
   });

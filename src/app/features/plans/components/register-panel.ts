@@ -22,6 +22,7 @@ import { RegisterApi } from '../services/register-api';
 import {
   canTakeRegister,
   entriesOf,
+  lengthProblem,
   marksFrom,
   minutesProblem,
   registerLine,
@@ -97,7 +98,8 @@ export class RegisterPanel {
           mark,
           status: statusOf(mark),
           lateProblem: minutesProblem(mark.late, 'late'),
-          earlyProblem: minutesProblem(mark.early, 'left early'),
+          earlyProblem:
+            minutesProblem(mark.early, 'left early') ?? lengthProblem(mark, this.plan().request.minutes),
         };
       })
       .sort((a, b) => a.name.localeCompare(b.name));

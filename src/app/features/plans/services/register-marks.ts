@@ -36,6 +36,15 @@ export function minutesProblem(text: string | null, what: 'late' | 'left early')
   return null;
 }
 
+/** Late and early together must leave some of the session; null when they do. */
+export function lengthProblem(mark: RegisterMark, sessionMinutes: number): string | null {
+  const late = mark.late !== null && !minutesProblem(mark.late, 'late') ? Number(mark.late) : 0;
+  const early = mark.early !== null && !minutesProblem(mark.early, 'left early') ? Number(mark.early) : 0;
+  return late + early >= sessionMinutes && late + early > 0
+    ? `Late and early together leave no time in the ${sessionMinutes}-minute session.`
+    : null;
+}
+
 /** The register to send: players who came, in the squad's order, with their minutes. */
 export function entriesOf(marks: RegisterMarks, order: string[]): AttendanceEntryDto[] {
   return order
