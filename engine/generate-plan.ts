@@ -6,14 +6,16 @@
 import type { Phase, Plan, PlanRequest, RuleSetDocument, StationKind } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
 import { evaluateRules } from './club-rules/evaluate-rules';
+import { stepsByVerdict } from './club-rules/feedback-steps';
 import { buildFacts } from './club-rules/facts';
 import { rankedActivities } from './planning/activities';
 import type { AllocationRules } from './planning/allocation';
-import { areaTable, baseWidth, describeArea, steppedWidth, type StartWidths } from './planning/areas';
+import type { StartWidths } from './planning/areas';
 import { buildPhase } from './planning/build-phase';
 import { changeoverBetween } from './planning/changeover';
 import type { BuildContext } from './planning/context';
 import { effectiveParameters } from './planning/effective-parameters';
+import { feedbackStarts, feedbackTrace } from './planning/feedback-start';
 import { eligibleKeepers, planKeepers } from './planning/goalkeepers';
 import { chooseTheme, sessionSlots } from './planning/session-shape';
 import { summarize } from './planning/summary';
@@ -40,7 +42,9 @@ export async function generatePlan(
   const compiled = compileRuleSet(ruleSet);
   const seed = request.seed ?? generateSeed();
   const req: PlanRequest = Object.assign({}, request, { seed });
-  const outcome = await evaluateRules(compiled, buildFacts(req, compiled.document.parameters));
+  const facts = buildFacts(req, compiled.document.parameters);
+  const outcome = await evaluateRules(compiled, facts);
+  const verdictSteps = await stepsByVerdict(compiled, facts, req.recentFeedback, outcome.steps);
   const ctx = planContext(req, outcome, seed);
   const rules = allocationRules(ctx);
   const theme = chooseTheme(ctx);
@@ -57,7 +61,9 @@ export async function generatePlan(
   const slots = sessionSlots(ctx, rules, theme);
   const specs = planTimeline(ctx, slots);
   planKeepers(ctx, specs);
-  const phases = buildPhases(ctx, rules, specs);
+  const { widths, starts } = feedbackStarts(ctx, verdictSteps);
+  const phases = buildPhases(ctx, rules, specs, widths);
+  feedbackTrace(ctx, starts, phases);
   const totals = summarize(phases, ctx.params, req.minutes, ctx.warnings);
   ctx.trace.push({
     ruleId: 'engine.estimates',
@@ -129,8 +135,8 @@ function buildPhases(
   ctx: BuildContext,
   rules: AllocationRules,
   specs: ReturnType<typeof planTimeline>,
+  startWidths: StartWidths,
 ): Phase[] {
-  const startWidths = feedbackWidths(ctx);
   const phases: Phase[] = [];
   let lastPlayed: Phase | undefined;
   const played = new Set<string>();
@@ -165,40 +171,6 @@ function buildPhases(
     });
   }
   return phases;
-}
-
-/**
- * Where last time's feedback says to start: from the area that ran (or the table's), one step
- * harder or easier as the club's feedback rules decide, for the group that gave the verdict;
- * each new group scales it to its own size (`widthForGroup`).
- */
-function feedbackWidths(ctx: BuildContext): StartWidths {
-  const out: StartWidths = {};
-  for (const [kind, step] of Object.entries(ctx.outcome.steps) as [
-    StationKind,
-    NonNullable<BuildContext['outcome']['steps'][StationKind]>,
-  ][]) {
-    if (!ctx.params.areas[kind]) continue;
-    const fb = ctx.request.recentFeedback?.find((f) => f.activityKind === kind);
-    const table = areaTable(ctx.params, kind, ctx.band);
-    const typical = ctx.params.groupSizes[kind][ctx.request.level].preferred;
-    const reported =
-      fb?.areaWidth !== undefined ? Math.min(fb.areaWidth, fb.areaLength ?? fb.areaWidth) : undefined;
-    const from = reported ?? Math.round(baseWidth(ctx.params, kind, ctx.band, ctx.request.level, typical));
-    const forGroup = reported !== undefined ? fb?.groupSize : typical;
-    const harderSign = ctx.params.kinds[kind].harderWhenArea === 'smaller' ? -1 : 1;
-    const steps = step.direction === 'keep' ? 0 : step.direction === 'harder' ? harderSign : -harderSign;
-    const width = steppedWidth(table, from, steps);
-    out[kind] = forGroup ? { width, forGroup } : { width };
-    const group = forGroup ? ` for a group of ${forGroup}, scaled to each group's size` : '';
-    ctx.trace.push({
-      ruleId: 'engine.feedback-start',
-      description: `Start ${kind} from recent feedback (${step.ruleId})`,
-      fired: true,
-      effect: `${kind} area starts at ${describeArea({ width, length: width })} wide${group} (last ${from} m): ${step.reason}`,
-    });
-  }
-  return out;
 }
 
 function range(values: number[]): string {

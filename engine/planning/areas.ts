@@ -72,8 +72,19 @@ export interface StartWidth {
   forGroup?: number;
 }
 
-/** Start widths by activity kind, from the team's recent feedback. */
-export type StartWidths = Partial<Record<StationKind, StartWidth>>;
+/**
+ * Start widths from the team's recent feedback: by activity (`activity:<id>`), and by kind
+ * (`kind:<kind>`) only for a verdict that named no activity or a club rule's step without one.
+ */
+export type StartWidths = Record<string, StartWidth>;
+
+/** Where an activity's area starts: its own verdict, else a kind-wide one, else none. */
+export function startWidthFor(
+  widths: StartWidths,
+  activity: { id: string; kind: StationKind },
+): StartWidth | undefined {
+  return widths[`activity:${activity.id}`] ?? widths[`kind:${activity.kind}`];
+}
 
 /**
  * The start width for a group of `total`: area in proportion to players, the same square-root

@@ -30,6 +30,7 @@ import {
   baseWidth,
   boundedTable,
   meetsMinimum,
+  startWidthFor,
   widthForGroup,
   type StartWidths,
 } from './areas';
@@ -423,7 +424,7 @@ export function makeStation(
     band,
   });
   const total = players.length + plan.coachJoins;
-  const start = startWidths[kind];
+  const start = startWidthFor(startWidths, activity);
   const width = start ? widthForGroup(start, total) : baseWidth(params, kind, band, request.level, total);
   const area = areaForWidth(boundedTable(params, kind, band, total), width, request.space);
   return {

@@ -41,6 +41,10 @@ export class Feedback {
   @Column({ type: 'varchar', length: 40, nullable: true })
   activityKind!: string | null;
 
+  /** The station's activity, so a verdict steers only that activity next time; null on old rows. */
+  @Column({ type: 'varchar', length: 64, nullable: true })
+  activityId!: string | null;
+
   @Column({ type: 'real', nullable: true })
   areaWidth!: number | null;
 

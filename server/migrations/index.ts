@@ -5,6 +5,7 @@ import { FeedbackGroupSize1764630000000 } from './1764630000000-feedback-group-s
 import { SixteenActivityKinds1764631000000 } from './1764631000000-sixteen-activity-kinds';
 import { TeamPinnedActivities1764632000000 } from './1764632000000-team-pinned-activities';
 import { PlanActivityIds1764633000000 } from './1764633000000-plan-activity-ids';
+import { RegisterAndStationFeedback1764635000000 } from './1764635000000-register-and-station-feedback';
 import { TeamSchedule1764636000000 } from './1764636000000-team-schedule';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
@@ -16,5 +17,6 @@ export const MIGRATIONS = [
   SixteenActivityKinds1764631000000,
   TeamPinnedActivities1764632000000,
   PlanActivityIds1764633000000,
+  RegisterAndStationFeedback1764635000000,
   TeamSchedule1764636000000,
 ];

@@ -24,7 +24,7 @@ export function planActivityRouter({ dataSource, requireAuth }: ApiDeps): Router
     id,
     validate({ body: 'attendance-update' }),
     async (req, res) => {
-      res.json(await attendance.put(authOf(req), planId(req), req.body.playerIds));
+      res.json(await attendance.put(authOf(req), planId(req), req.body));
     },
   );
   router.get('/plans/:id/feedback', requireAuth, id, async (req, res) => {

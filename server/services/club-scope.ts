@@ -93,6 +93,18 @@ export class ClubScope {
     return this.assertManageable(team, this.auth.role === 'coach' && (await this.isAttached(team.id)));
   }
 
+  /**
+   * A team whose sessions the caller runs (register, pitch-side records): the lead, or a coach or
+   * assistant attached to it; else 404 / 403.
+   */
+  async teamToRun(id: string): Promise<Team> {
+    const team = await this.team(id);
+    if (this.auth.role !== 'lead' && !(await this.isAttached(team.id))) {
+      throw forbidden('Only the club lead and the team’s own coaches and assistants can take its register.');
+    }
+    return team;
+  }
+
   /** Lead and coaches: any team of the club; assistants: the teams they are attached to. */
   async teamToRead(id: string): Promise<Team> {
     const team = await this.team(id);

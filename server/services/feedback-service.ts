@@ -59,6 +59,7 @@ export async function storeFeedback(
       stationId: input.stationId,
       phaseIndex: input.phaseIndex,
       activityKind: station.activityKind,
+      activityId: station.activityId.slice(0, 64),
       areaWidth: station.area.width,
       areaLength: station.area.length,
       groupSize: station.playerIds.length + station.coachJoins,

@@ -36,6 +36,7 @@ interface InputsRow {
   roster: RosterEntry[];
   feedback: {
     activityKind: string | null;
+    activityId: string | null;
     verdict: FeedbackFact['verdict'];
     areaWidth: number | null;
     areaLength: number | null;
@@ -63,7 +64,8 @@ SELECT
   (SELECT coalesce(json_agg(json_build_object('id', p.id, 'displayName', p."displayName",
                                               'goalkeeper', p.goalkeeper)), '[]'::json)
      FROM player p WHERE p."teamId" = $1 AND p."clubId" = $2) AS roster,
-  (SELECT coalesce(json_agg(json_build_object('activityKind', f."activityKind", 'verdict', f.verdict,
+  (SELECT coalesce(json_agg(json_build_object('activityKind', f."activityKind", 'activityId', f."activityId",
+                                              'verdict', f.verdict,
                                               'areaWidth', f."areaWidth", 'areaLength', f."areaLength",
                                               'groupSize', f."groupSize")
                             ORDER BY f."createdAt" DESC), '[]'::json)
@@ -111,6 +113,7 @@ export async function loadPlanInputs(
     .filter((f) => f.activityKind)
     .map((f) => ({
       activityKind: f.activityKind as string,
+      ...(f.activityId && /^[a-z0-9][a-z0-9-]*$/.test(f.activityId) ? { activityId: f.activityId } : {}),
       verdict: f.verdict,
       ...(f.areaWidth !== null ? { areaWidth: f.areaWidth } : {}),
       ...(f.areaLength !== null ? { areaLength: f.areaLength } : {}),

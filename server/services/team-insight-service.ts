@@ -1,4 +1,6 @@
 import { In, type DataSource } from 'typeorm';
+import { attendanceFromPlan } from '../../engine';
+import type { AttendanceEntryDto } from '../../shared/types/attendance';
 import type { InsightPlayerDto, InsightSessionDto, TeamInsightDto } from '../../shared/types/plan-api';
 import { Attendance } from '../entities/attendance';
 import { Player } from '../entities/player';
@@ -10,8 +12,9 @@ import { ClubScope } from './club-scope';
 export const INSIGHT_SESSIONS = 30;
 
 const ESTIMATE_NOTE =
-  'Touches are estimates from each activity’s typical rate per minute, not counts. Sessions without recorded ' +
-  'attendance count the players the plan was made for.';
+  'Touches are estimates from each activity’s typical rate per minute, not counts. Players who came late or ' +
+  'left early count as present. Sessions without a register count the players the plan was made for, ' +
+  'with pitch-side arrivals and leavers.';
 
 /** Attendance over time and estimated touches per player, from stored plans and attendance. */
 export class TeamInsightService {
@@ -31,28 +34,39 @@ export class TeamInsightService {
           .getRepository(Attendance)
           .find({ where: { planId: In(plans.map((p) => p.id)), clubId: auth.clubId } })
       : [];
-    const cameTo = new Map<string, Set<string>>();
+    const cameTo = new Map<string, AttendanceEntryDto[]>();
     for (const a of attendance) {
-      if (!cameTo.has(a.planId)) cameTo.set(a.planId, new Set());
-      cameTo.get(a.planId)!.add(a.playerId);
+      if (!cameTo.has(a.planId)) cameTo.set(a.planId, []);
+      cameTo.get(a.planId)!.push({
+        playerId: a.playerId,
+        ...(a.lateMinutes !== null ? { lateMinutes: a.lateMinutes } : {}),
+        ...(a.leftEarlyMinutes !== null ? { leftEarlyMinutes: a.leftEarlyMinutes } : {}),
+      });
     }
     const roster = await manager
       .getRepository(Player)
       .find({ where: { teamId: team.id, clubId: auth.clubId } });
-    const totals = new Map<string, { sessions: number; touches: number }>(
-      roster.map((p) => [p.id, { sessions: 0, touches: 0 }]),
+    // `estimated`: sessions whose plan has a touch estimate for the player (one marked present
+    // who was not in the plan has none, and a zero there would read as "less of the ball").
+    const totals = new Map<string, { sessions: number; estimated: number; touches: number }>(
+      roster.map((p) => [p.id, { sessions: 0, estimated: 0, touches: 0 }]),
     );
 
     const sessions: InsightSessionDto[] = plans.map((row) => {
       const recorded = cameTo.get(row.id);
-      const present = recorded ?? new Set(row.plan.request.players.map((p) => p.id));
+      // Without a register, pitch-side's record: late arrivals and early leavers came too.
+      const register = recorded ?? attendanceFromPlan(row.plan);
+      const present = new Set(register.map((e) => e.playerId));
       const touches: Record<string, number> = {};
       for (const id of present) {
-        const estimate = Math.round(row.plan.touches?.[id] ?? 0);
-        touches[id] = estimate;
         const t = totals.get(id);
+        if (t) t.sessions++;
+        const known = row.plan.touches?.[id];
+        if (known === undefined) continue;
+        const estimate = Math.round(known);
+        touches[id] = estimate;
         if (t) {
-          t.sessions++;
+          t.estimated++;
           t.touches += estimate;
         }
       }
@@ -63,6 +77,8 @@ export class TeamInsightService {
         kind: row.kind,
         present: present.size,
         recorded: !!recorded,
+        cameLate: register.filter((e) => e.lateMinutes).length,
+        leftEarly: register.filter((e) => e.leftEarlyMinutes).length,
         touches,
       };
     });
@@ -75,7 +91,7 @@ export class TeamInsightService {
           active: p.active,
           sessionsAttended: t.sessions,
           totalTouches: t.touches,
-          averageTouches: t.sessions ? Math.round(t.touches / t.sessions) : 0,
+          averageTouches: t.estimated ? Math.round(t.touches / t.estimated) : 0,
         };
       })
       .sort((a, b) => a.displayName.localeCompare(b.displayName));

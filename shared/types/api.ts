@@ -1,6 +1,7 @@
 /** Shapes the API sends and receives. server/ produces them, src/ consumes them. */
 import type { AgeGroup, Equipment, Level, PlanKind, PlanRequest, Space } from './plan-request';
 import type { Plan } from './plan';
+import type { AttendanceEntryDto } from './attendance';
 
 export const ROLES = ['lead', 'coach', 'assistant'] as const;
 export type Role = (typeof ROLES)[number];
@@ -138,7 +139,12 @@ export interface FeedbackDto {
 
 export interface AttendanceDto {
   planId: string;
+  /** Everyone who came, late and early leavers included. */
   playerIds: string[];
+  /** The same players with the minutes they came late or left early. */
+  players: AttendanceEntryDto[];
+  /** Whether anyone has taken the register for this session yet. */
+  recorded: boolean;
 }
 
 export interface MemberDto {

@@ -9,3 +9,4 @@ export * from './rule-set-api';
 export * from './activity-words';
 export * from './team-staff';
 export * from './schedule';
+export * from './attendance';

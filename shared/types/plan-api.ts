@@ -28,6 +28,9 @@ export interface InsightSessionDto {
   present: number;
   /** Whether `present` comes from recorded attendance. */
   recorded: boolean;
+  /** Of those present, how many came late and how many left early (both count as present). */
+  cameLate: number;
+  leftEarly: number;
   /** Estimated touches per player id in this session (attending players only). */
   touches: Record<string, number>;
 }
@@ -38,7 +41,7 @@ export interface InsightPlayerDto {
   active: boolean;
   sessionsAttended: number;
   totalTouches: number;
-  /** Mean estimated touches per session attended (0 when none). */
+  /** Mean estimated touches per session attended that has an estimate for the player (0 when none). */
   averageTouches: number;
 }
 

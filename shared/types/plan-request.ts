@@ -62,6 +62,8 @@ export interface Space {
 /** How a station went last time, fed back into the next plan of the same team. */
 export interface FeedbackFact {
   activityKind: string;
+  /** The activity the verdict was given on: it steers that activity only (absent: the whole kind). */
+  activityId?: string;
   verdict: 'too-easy' | 'right' | 'too-hard';
   /** Area side the station ran with, in metres, when known. */
   areaWidth?: number;

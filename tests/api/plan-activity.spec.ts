@@ -44,7 +44,12 @@ describe('attendance, feedback, pitch-side changes and team insight', () => {
     );
     expect(put.status, put.text).toBe(200);
     const get = await app.api.get(`/api/plans/${plan.id}/attendance`, { token: club.coach.token });
-    expect(get.body).toEqual({ planId: plan.id, playerIds: came });
+    expect(get.body).toEqual({
+      planId: plan.id,
+      playerIds: came,
+      players: came.map((playerId) => ({ playerId })),
+      recorded: true,
+    });
     const bad = await app.api.put(
       `/api/plans/${plan.id}/attendance`,
       { playerIds: [came[0], '00000000-0000-4000-8000-000000000000'] },
@@ -89,10 +94,12 @@ describe('attendance, feedback, pitch-side changes and team insight', () => {
       app,
       club.coach.token,
       { ...squad, playerIds: squad.playerIds.slice(0, 13) },
-      { date: '2026-12-12' },
+      // The verdict steers the activity it was given on: pin it so the next plan plays it again.
+      { date: '2026-12-12', request: { pinnedActivityIds: [station.activityId] } },
     );
     expect(next.request.recentFeedback?.[0]).toEqual({
       activityKind: 'keep-ball',
+      activityId: station.activityId,
       verdict: 'too-easy',
       areaWidth: station.area.width,
       areaLength: station.area.length,
@@ -107,7 +114,9 @@ describe('attendance, feedback, pitch-side changes and team insight', () => {
     // Too easy in keep-ball means less room per player next time (or the same at the club's
     // minimum); the side scales with the square root of the group, so compare side / √group,
     // allowing half a metre for rounding to whole metres.
-    const after = keepBallOf(next).station;
+    const after = next.plan.phases
+      .flatMap((p: SessionPlanDto['plan']['phases'][number]) => p.stations)
+      .find((s: { activityId: string }) => s.activityId === station.activityId);
     const afterGroup = after.playerIds.length + after.coachJoins;
     expect(after.area.width / Math.sqrt(afterGroup)).toBeLessThanOrEqual(
       (station.area.width + 0.5) / Math.sqrt(group),

@@ -1,6 +1,7 @@
 /**
- * Pitch-side end to end: a late arrival re-plans the rest of the session; "too easy" steps the
- * station and the team's next plan starts that kind smaller; a hot training session's drinks break
+ * Pitch-side end to end: a late arrival re-plans the rest of the session, and when they leave
+ * early they count as came (never "not here yet"); "too easy" steps the station and the team's
+ * next plan starts that activity smaller, the why panel saying so; a hot training session's drinks break
  * counts down as a phase of its own; offline, a verdict waits in the queue and is
  * stored exactly once when the connection returns.
  */
@@ -26,12 +27,12 @@ function eachPlayerOncePerPhase(plan: Plan): boolean {
   });
 }
 
-/** The widest area any station of this kind has in the plan. */
-const kindWidth = (plan: Plan, kind: string) =>
+/** The widest area any station of this activity has in the plan. */
+const activityWidth = (plan: Plan, activityId: string) =>
   Math.max(
     ...plan.phases
       .flatMap((p) => p.stations)
-      .filter((s) => s.activityKind === kind)
+      .filter((s) => s.activityId === activityId)
       .map((s) => s.area.width),
   );
 
@@ -86,10 +87,23 @@ describe('pitch-side', () => {
     expect(moved).toBeLessThanOrEqual(3);
     expect(await page.getByRole('button', { name: `${late.displayName} leaves early` }).count()).toBe(1);
     await screenshot(page, 'pitch-side-moves');
+
+    // Into the next phase, the arrival goes home early: they came, so nobody waits for them.
+    await page.getByRole('button', { name: 'Next phase' }).click();
+    await page.getByRole('button', { name: `${late.displayName} leaves early` }).click();
+    await expect.poll(() => page.getByTestId('left-early').textContent()).toContain(late.displayName);
+    expect(await page.getByRole('button', { name: `${late.displayName} arrives` }).count()).toBe(0);
+    // The register is filled in from pitch-side's record.
+    const register = page.getByTestId('register');
+    await register.locator('mat-expansion-panel-header').click();
+    const row = register.getByTestId('register-row').filter({ hasText: late.displayName });
+    await expect.poll(() => row.textContent()).toMatch(/left \d+ min early/);
+    await screenshot(page, 'pitch-side-left-early');
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.close();
   });
 
-  it('"too easy" steps the station\'s area down and the next plan of the team starts that kind smaller', async () => {
+  it('"too easy" steps the station\'s area down and the next plan of the team starts that activity smaller', async () => {
     const request = { seed: 'feedback-seed' };
     const session = await club.plan(coach, team, roster, request);
     // The first phase with stations (a U8 warm-up opens with ball mastery; a drinks break has none).
@@ -122,10 +136,20 @@ describe('pitch-side', () => {
     await screenshot(page, 'pitch-side');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
-    const next = await club.plan(coach, team, roster, request);
-    expect(kindWidth(next.plan, firstStation.activityKind)).toBeLessThan(
-      kindWidth(session.plan, firstStation.activityKind),
+    // The verdict follows its activity: pinned so the next plan plays it again, it starts smaller.
+    const next = await club.plan(coach, team, roster, {
+      ...request,
+      pinnedActivityIds: [firstStation.activityId],
+    });
+    expect(activityWidth(next.plan, firstStation.activityId)).toBeLessThan(
+      activityWidth(session.plan, firstStation.activityId),
     );
+    const why = next.plan.trace.map((t) => t.description ?? '');
+    expect(
+      why.some((line) =>
+        line.startsWith(`Last time ‘${firstStation.title}’ was marked too easy for groups of `),
+      ),
+    ).toBe(true);
     await page.close();
   });
 

@@ -16,6 +16,8 @@ const data: TeamInsightDto = {
       kind: 'training',
       present: 3,
       recorded: true,
+      cameLate: 1,
+      leftEarly: 0,
       touches: {},
     },
     {
@@ -25,6 +27,8 @@ const data: TeamInsightDto = {
       kind: 'training',
       present: 2,
       recorded: false,
+      cameLate: 0,
+      leftEarly: 0,
       touches: {},
     },
   ],
@@ -72,7 +76,10 @@ describe('TeamInsightPage', () => {
     await fixture.whenStable();
     const el = fixture.nativeElement as HTMLElement;
     const summary = el.querySelector('[data-testid=insight-summary]')?.textContent ?? '';
-    expect(summary).toContain('2 sessions; on average 2.5 of 3 players came.');
+    expect(summary).toContain('On average 2.5 of 3 players came to each of 2 sessions.');
+    expect(summary).toContain('Every player came to at least half of them.');
+    expect(summary).toContain('Counted as came: 1 late arrival.');
+    expect(summary).not.toContain('Came least');
     expect(summary).toContain('Getting less of the ball: Cy M. (about 40)');
     expect(el.querySelectorAll('canvas[role=img]').length).toBe(2);
     const rows = Array.from(el.querySelectorAll('[data-testid=touches-table] tbody tr'));

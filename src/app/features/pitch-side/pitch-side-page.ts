@@ -43,12 +43,14 @@ import { PitchSideApi } from './services/pitch-side-api';
 import { readSnapshot, saveSnapshot } from './services/plan-snapshot';
 import { ScreenAwake } from './services/screen-awake';
 import { StationCard } from './station-card';
+import { leftEarlyIds } from '../../../../engine/attendance-from-plan';
+import { RegisterPanel } from '../plans/components/register-panel';
 import { changeoverWords, isBreak } from '../plans/services/plan-words';
 
 /** The running plan at the pitch: countdown, stations, late arrivals and how each station goes. */
 @Component({
   selector: 'cw-pitch-side-page',
-  imports: [RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, StationCard],
+  imports: [RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, RegisterPanel, StationCard],
   templateUrl: './pitch-side-page.html',
   styleUrl: './pitch-side-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -127,10 +129,19 @@ export class PitchSidePage {
       .map((player) => ({ id: player.id, name: this.names()[player.id] ?? player.id }))
       .sort((a, b) => a.name.localeCompare(b.name)),
   );
+  /** Players who came and went home early: they came, so they are not waited for. */
+  private readonly leftEarlyIds = computed(() => {
+    const plan = this.plan();
+    return plan ? leftEarlyIds(plan) : new Set<string>();
+  });
+  protected readonly leftEarly = computed(() =>
+    [...this.leftEarlyIds()].map((id) => this.names()[id] ?? 'A player').sort((a, b) => a.localeCompare(b)),
+  );
   protected readonly absent = computed(() => {
     const here = new Set((this.plan()?.request.players ?? []).map((player) => player.id));
+    const gone = this.leftEarlyIds();
     return this.roster()
-      .filter((player) => player.active && !here.has(player.id))
+      .filter((player) => player.active && !here.has(player.id) && !gone.has(player.id))
       .sort((a, b) => a.displayName.localeCompare(b.displayName));
   });
 

@@ -200,6 +200,8 @@ describe('PlanPage', () => {
     expect(paperButton(root, 'US Letter').getAttribute('aria-checked')).toBe('true');
     expect(await printCard(fixture, http)).toBe('letter');
     expect(download).toHaveBeenCalledTimes(2);
+    // The register panel reads its own data; this test is about the card.
+    http.match((r) => r.url.endsWith('/attendance') || r.url.startsWith('/api/teams/'));
     http.verify();
   });
 

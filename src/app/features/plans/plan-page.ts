@@ -19,6 +19,7 @@ import { PhaseTimeline } from './components/phase-timeline';
 import { PlanNotices } from './components/plan-notices';
 import { ShareDialog, ShareDialogData } from './components/share-dialog';
 import { PlayerMoveRequest, StationCard } from './components/station-card';
+import { RegisterPanel } from './components/register-panel';
 import { WhyPanel } from './components/why-panel';
 import { PAPER_LABELS, PaperPreference } from './services/paper-preference';
 import { PlanHandover } from './services/plan-handover';
@@ -44,6 +45,7 @@ interface SwapGroup {
     MatMenuModule,
     PhaseTimeline,
     PlanNotices,
+    RegisterPanel,
     StationCard,
     WhyPanel,
   ],

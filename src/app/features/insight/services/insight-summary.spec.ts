@@ -20,6 +20,8 @@ const insight = (players: TeamInsightDto['players'], present: number[]): TeamIns
     kind: 'training',
     present: count,
     recorded: true,
+    cameLate: i === 0 ? 1 : 0,
+    leftEarly: i === 1 ? 2 : 0,
     touches: {},
   })),
   players,
@@ -36,8 +38,21 @@ describe('summariseInsight', () => {
     );
     expect(summary.fewestTouches.map((p) => p.playerId)).toEqual(['d', 'c']);
     expect(summary.touchesLine).toContain('D (about 30), C (about 50)');
-    expect(summary.attendanceLine).toBe('3 sessions; on average 4.7 of 5 players came.');
-    expect(summary.leastAttending.map((p) => p.playerId)).toEqual(['d']);
+    expect(summary.attendanceLine).toBe('On average 4.7 of 5 players came to each of 3 sessions.');
+    expect(summary.regularityLine).toBe('Every player came to at least half of them.');
+    expect(summary.partLine).toBe('Counted as came: 1 late arrival and 2 early leavers.');
+  });
+
+  it('words attendance for the squad and never names a child', () => {
+    const summary = summariseInsight(
+      insight(
+        [player('ana', 4, 60), player('ben', 1, 60), player('cai', 0, 0), player('dev', 2, 60)],
+        [3, 2, 2, 1],
+      ),
+    );
+    expect(summary.regularityLine).toBe('2 players came to fewer than half of them.');
+    for (const line of [summary.attendanceLine, summary.regularityLine, summary.partLine])
+      expect(line).not.toMatch(/ANA|BEN|CAI|DEV/);
   });
 
   it('calls out nobody when touches are even, and copes with no sessions', () => {
@@ -46,6 +61,6 @@ describe('summariseInsight', () => {
     );
     const empty = summariseInsight(insight([player('a', 0, 0)], []));
     expect(empty.attendanceLine).toBe('No sessions yet.');
-    expect(empty.leastAttending).toEqual([]);
+    expect(empty.regularityLine).toBe('');
   });
 });

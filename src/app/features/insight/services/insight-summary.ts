@@ -8,8 +8,13 @@ export interface InsightSummary {
   /** Players well below the squad's typical touches per session. */
   fewestTouches: InsightPlayerDto[];
   touchesLine: string;
-  /** Active players who came to the fewest sessions. */
-  leastAttending: InsightPlayerDto[];
+  /**
+   * The squad's attendance in one sentence that names no child: a register is for planning
+   * groups, not for ranking players in front of whoever reads the insight.
+   */
+  regularityLine: string;
+  /** Late arrivals and early leavers over these sessions (all counted as came). */
+  partLine: string;
 }
 
 const median = (values: number[]) => {
@@ -30,9 +35,9 @@ export function summariseInsight(insight: TeamInsightDto): InsightSummary {
   const attendanceLine =
     averagePresent === null
       ? 'No sessions yet.'
-      : `${sessions} session${sessions === 1 ? '' : 's'}; on average ${averagePresent} of ${insight.squadSize} players came.`;
+      : `On average ${averagePresent} of ${insight.squadSize} players came to each of ${sessions} session${sessions === 1 ? '' : 's'}.`;
 
-  const attended = insight.players.filter((p) => p.sessionsAttended > 0);
+  const attended = insight.players.filter((p) => p.sessionsAttended > 0 && p.totalTouches > 0);
   const typical = median(attended.map((p) => p.averageTouches));
   const fewestTouches = attended
     .filter((p) => p.averageTouches < typical * LOW_TOUCH_SHARE)
@@ -46,10 +51,18 @@ export function summariseInsight(insight: TeamInsightDto): InsightSummary {
       : `Typical player: about ${Math.round(typical)} touches a session; nobody is far below that.`;
 
   const active = insight.players.filter((p) => p.active);
-  const fewestSessions = Math.min(...active.map((p) => p.sessionsAttended));
-  const leastAttending =
-    sessions && active.length && fewestSessions < sessions
-      ? active.filter((p) => p.sessionsAttended === fewestSessions)
-      : [];
-  return { sessions, averagePresent, attendanceLine, fewestTouches, touchesLine, leastAttending };
+  const fewerThanHalf = active.filter((p) => p.sessionsAttended * 2 < sessions).length;
+  const regularityLine = !sessions
+    ? ''
+    : fewerThanHalf === 0
+      ? 'Every player came to at least half of them.'
+      : `${fewerThanHalf} player${fewerThanHalf === 1 ? '' : 's'} came to fewer than half of them.`;
+  const late = insight.sessions.reduce((n, s) => n + (s.cameLate ?? 0), 0);
+  const early = insight.sessions.reduce((n, s) => n + (s.leftEarly ?? 0), 0);
+  const parts = [
+    late ? `${late} late arrival${late === 1 ? '' : 's'}` : '',
+    early ? `${early} early leaver${early === 1 ? '' : 's'}` : '',
+  ].filter(Boolean);
+  const partLine = parts.length ? `Counted as came: ${parts.join(' and ')}.` : '';
+  return { sessions, averagePresent, attendanceLine, fewestTouches, touchesLine, regularityLine, partLine };
 }

@@ -48,5 +48,16 @@ export function adjustRosterLocally(
     ...plan.request.players.filter((player) => !removed.has(player.id)),
     ...(change.add ?? []).filter((player) => !plan.request.players.some((p) => p.id === player.id)),
   ];
-  return { plan: { ...plan, phases, request: { ...plan.request, players } }, moves };
+  // Recorded as the engine records it, so the leaver is not "not here yet" and the register knows.
+  const rosterChanges = [
+    ...(plan.rosterChanges ?? []),
+    {
+      fromMinute: change.fromMinute,
+      added: (change.add ?? [])
+        .filter((a) => !plan.request.players.some((p) => p.id === a.id))
+        .map((a) => a.id),
+      removed: [...removed].filter((id) => plan.request.players.some((p) => p.id === id)),
+    },
+  ];
+  return { plan: { ...plan, phases, rosterChanges, request: { ...plan.request, players } }, moves };
 }

@@ -1,0 +1,126 @@
+/**
+ * Where last time's feedback says an area should start. A verdict belongs to the activity it
+ * was given on: it moves that activity's area one step (as the club's feedback rules decide)
+ * from the area that ran, for the group that gave it, and leaves other activities of the same
+ * kind alone. Each new group scales the start to its own size (`widthForGroup`).
+ */
+import { ACTIVITY_KIND_LABELS, type FeedbackFact, type Phase, type StationKind } from '../../shared/types';
+import type { ProgressionStep } from '../club-rules/evaluate-rules';
+import { verdictKey, type VerdictSteps } from '../club-rules/feedback-steps';
+import { activityById } from './activities';
+import { areaTable, baseWidth, describeArea, steppedWidth, type StartWidths } from './areas';
+import type { BuildContext } from './context';
+
+/** One start: what it came from, for the why panel. */
+export interface FeedbackStart {
+  /** `activity:<id>` or `kind:<kind>` (see `startWidthFor`). */
+  key: string;
+  kind: StationKind;
+  activityId?: string;
+  verdict?: FeedbackFact['verdict'];
+  /** The side that ran (or the table's for the typical group) and the side to start from. */
+  from: number;
+  width: number;
+  forGroup?: number;
+  step: ProgressionStep;
+}
+
+export function feedbackStarts(
+  ctx: BuildContext,
+  steps: VerdictSteps,
+): { widths: StartWidths; starts: FeedbackStart[] } {
+  const starts: FeedbackStart[] = [];
+  const seen = new Set<string>();
+  const judgedKinds = new Set<string>();
+  // Newest first: each activity (or kind, for a verdict that names none) takes its latest verdict.
+  for (const fb of ctx.request.recentFeedback ?? []) {
+    judgedKinds.add(fb.activityKind);
+    const kind = fb.activityKind as StationKind;
+    const key = fb.activityId ? `activity:${fb.activityId}` : `kind:${kind}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    const step = steps.get(verdictKey(kind, fb.verdict));
+    if (!step || !ctx.params.areas[kind]) continue;
+    starts.push(startOf(ctx, kind, step, fb, key));
+  }
+  // A club rule's step for a kind nobody judged applies kind-wide, from the table's typical group.
+  for (const [kind, step] of Object.entries(ctx.outcome.steps) as [StationKind, ProgressionStep][]) {
+    if (judgedKinds.has(kind) || !ctx.params.areas[kind]) continue;
+    starts.push(startOf(ctx, kind, step, undefined, `kind:${kind}`));
+  }
+  const widths: StartWidths = {};
+  for (const s of starts)
+    widths[s.key] = s.forGroup ? { width: s.width, forGroup: s.forGroup } : { width: s.width };
+  return { widths, starts };
+}
+
+function startOf(
+  ctx: BuildContext,
+  kind: StationKind,
+  step: ProgressionStep,
+  fb: FeedbackFact | undefined,
+  key: string,
+): FeedbackStart {
+  const table = areaTable(ctx.params, kind, ctx.band);
+  const typical = ctx.params.groupSizes[kind][ctx.request.level].preferred;
+  const reported =
+    fb?.areaWidth !== undefined ? Math.min(fb.areaWidth, fb.areaLength ?? fb.areaWidth) : undefined;
+  const from = reported ?? Math.round(baseWidth(ctx.params, kind, ctx.band, ctx.request.level, typical));
+  const forGroup = reported !== undefined ? fb?.groupSize : typical;
+  const harderSign = ctx.params.kinds[kind].harderWhenArea === 'smaller' ? -1 : 1;
+  const stepBy = step.direction === 'keep' ? 0 : step.direction === 'harder' ? harderSign : -harderSign;
+  return {
+    key,
+    kind,
+    ...(fb?.activityId ? { activityId: fb.activityId } : {}),
+    ...(fb ? { verdict: fb.verdict } : {}),
+    from,
+    width: steppedWidth(table, from, stepBy),
+    ...(forGroup ? { forGroup } : {}),
+    step,
+  };
+}
+
+const VERDICT_WORDS: Record<FeedbackFact['verdict'], string> = {
+  'too-easy': 'too easy',
+  'too-hard': 'too hard',
+  right: 'about right',
+};
+
+/**
+ * One trace entry per start that a station of the plan really uses, its description a sentence
+ * for the why panel: "Last time ‘Rondo 4v1’ was marked too easy for groups of 5, so its area is
+ * 17% smaller today."
+ */
+export function feedbackTrace(ctx: BuildContext, starts: FeedbackStart[], phases: Phase[]): void {
+  const stations = phases.flatMap((p) => p.stations);
+  const own = new Set(starts.filter((s) => s.activityId).map((s) => s.activityId));
+  for (const start of starts) {
+    const used = stations.find((st) =>
+      start.activityId
+        ? st.activityId === start.activityId
+        : st.activityKind === start.kind && !own.has(st.activityId),
+    );
+    if (!used) continue;
+    const title = start.activityId
+      ? `‘${activityById(ctx.params, start.activityId)?.title ?? used.title}’`
+      : `a ${ACTIVITY_KIND_LABELS[start.kind].toLowerCase()} station`;
+    const change = Math.round((start.width / start.from - 1) * 100);
+    const size = change < 0 ? `${-change}% smaller` : change > 0 ? `${change}% larger` : 'the same size';
+    const stuck = start.step.direction !== 'keep' && change === 0;
+    const groups = start.forGroup ? ` for groups of ${start.forGroup}` : '';
+    const scaled = start.forGroup ? ', scaled to each group’s size' : '';
+    const description = !start.verdict
+      ? `A club rule starts ${title} ${size} than usual today${scaled}.`
+      : stuck
+        ? `Last time ${title} was marked ${VERDICT_WORDS[start.verdict]}${groups}, but its area is already at the club’s limit, so it is the same size today.`
+        : `Last time ${title} was marked ${VERDICT_WORDS[start.verdict]}${groups}, so its area is ${size} today${scaled}.`;
+    const group = start.forGroup ? ` for a group of ${start.forGroup}, scaled to each group's size` : '';
+    ctx.trace.push({
+      ruleId: 'engine.feedback-start',
+      description,
+      fired: true,
+      effect: `${start.kind} area starts at ${describeArea({ width: start.width, length: start.width })} wide${group} (last ${start.from} m): ${start.step.reason}`,
+    });
+  }
+}
