@@ -9,13 +9,7 @@ import { join } from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AuthResponse, SessionPlanDto } from '../../shared/types';
-import {
-  launchBrowser,
-  PHONE,
-  screenshot,
-  seriousAccessibilityViolations,
-  type TestBrowser,
-} from './support/browser';
+import { launchBrowser, PHONE, seriousAccessibilityViolations, type TestBrowser } from './support/browser';
 import { ClubSession, U12_COACH } from './support/club-session';
 
 const SHOTS = new URL('../../test-results/screenshots/', import.meta.url).pathname;

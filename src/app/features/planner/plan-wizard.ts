@@ -260,18 +260,21 @@ export class PlanWizard {
     this.stepper().next();
   }
 
-  /** The request schema's messages for this step's fields, on fields that are otherwise fine. */
+  /**
+   * The request schema's last word on a step the form's own rules pass (those rules already carry
+   * the schema's number limits): anything else it refuses is pinned to its field.
+   */
   private async pinSchemaErrors(step: Step): Promise<void> {
     const team = this.team();
     const schema = await loadApiSchema('plan-request');
-    if (!team || !schema) return;
+    if (!team || !schema || this.form.controls[step].invalid) return;
     const raw = this.form.getRawValue();
     const request = buildPlanRequest(team, this.roster(), { ...raw.who, ...raw.kit, ...raw.time });
     const errors = (await schemaCheck(schema))(request);
     const mine: Record<string, string> = {};
     for (const [path, text] of Object.entries(errors)) {
       const field = wizardFieldOf(path);
-      if (field.startsWith(`${step}.`) && this.form.get(field)?.valid) mine[field] = text;
+      if (field.startsWith(`${step}.`)) mine[field] = text;
     }
     applyFieldErrors(this.form, mine);
   }
@@ -290,7 +293,7 @@ export class PlanWizard {
         '.mat-mdc-step-content input.ng-invalid, .mat-horizontal-stepper-content-current input.ng-invalid, [data-testid="no-players"]',
       );
       field?.focus();
-      field?.scrollIntoView({ block: 'center' });
+      field?.scrollIntoView?.({ block: 'center' });
     });
   }
 

@@ -512,10 +512,8 @@ describe('PlanPage', () => {
     const { fixture, root } = await setUp({ shown: tight });
     await settle(fixture);
     const [phaseIndex, stationId] = key.split(':');
-    const card = root
-      .querySelectorAll('[data-testid="phase"]')
-      [Number(phaseIndex)].querySelector(`[data-station="${stationId}"]`)!
-      .closest('cw-station-card')!;
+    const phaseEl = root.querySelectorAll('[data-testid="phase"]')[Number(phaseIndex)];
+    const card = phaseEl.querySelector(`[data-station="${stationId}"]`)!.closest('cw-station-card')!;
     for (const size of ['larger', 'smaller'] as const) {
       const button = card.querySelector<HTMLButtonElement>(`[data-testid="area-${size}"]`)!;
       expect(button.disabled).toBe(!!limit[size]);
