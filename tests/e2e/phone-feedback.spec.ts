@@ -9,7 +9,13 @@ import { join } from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AuthResponse, SessionPlanDto } from '../../shared/types';
-import { launchBrowser, PHONE, seriousAccessibilityViolations, type TestBrowser } from './support/browser';
+import {
+  launchBrowser,
+  PHONE,
+  screenshot,
+  seriousAccessibilityViolations,
+  type TestBrowser,
+} from './support/browser';
 import { ClubSession, U12_COACH } from './support/club-session';
 
 const SHOTS = new URL('../../test-results/screenshots/', import.meta.url).pathname;
@@ -28,6 +34,14 @@ async function onScreen(page: Page, locator: Locator): Promise<boolean> {
   return (
     !!box && box.y >= 0 && box.y + box.height <= view.height && box.x >= 0 && box.x + box.width <= view.width
   );
+}
+
+/** Waits until the open menu has finished appearing, so its picture is not half faded. */
+async function settledMenu(page: Page): Promise<void> {
+  await page.waitForFunction(() => {
+    const panel = document.querySelector('.mat-mdc-menu-panel');
+    return !!panel && getComputedStyle(panel).opacity === '1' && !panel.getAnimations().length;
+  });
 }
 
 describe('answers beside the control on a phone', () => {
@@ -63,12 +77,13 @@ describe('answers beside the control on a phone', () => {
     const folded = page.getByTestId('notices-folded');
     await folded.waitFor();
     expect(await folded.evaluate((el) => (el as HTMLDetailsElement).open)).toBe(false);
+    await screenShot(page, 'phone-feedback-first-screen');
+    await screenshot(page, 'phone-feedback-plan');
     const safety = page.getByTestId('safety-line');
     expect(await onScreen(page, safety)).toBe(true);
     expect(await safety.textContent()).toContain('Safety:');
     const firstStation = page.locator('cw-station-card h4').first();
     expect(await onScreen(page, firstStation)).toBe(true);
-    await screenShot(page, 'phone-feedback-first-screen');
     // A tap opens every notice, each once.
     await folded.locator('summary').click();
     const items = await folded.locator('li').allTextContents();
@@ -91,27 +106,22 @@ describe('answers beside the control on a phone', () => {
     expect(card, 'a station whose area can still grow').not.toBeNull();
     await card!.locator('summary').click();
     const larger = card!.getByTestId('area-larger');
-    const areaText = () => card!.getByTestId('station-kind').textContent();
+    // While an edit is saved every edit control waits; "New groups" says when the page is idle.
+    const idle = () => page.getByTestId('regenerate').isEnabled();
     let taps = 0;
-    while (!(await larger.isDisabled()) && taps < 20) {
-      const before = await areaText();
+    while (taps < 20) {
+      await expect.poll(idle, { timeout: 15_000 }).toBe(true);
+      if (await larger.isDisabled()) break;
       await larger.scrollIntoViewIfNeeded();
       await larger.click();
       taps++;
-      // Each tap either grows the area or reaches the limit; wait for one of the two.
-      await expect
-        .poll(
-          async () =>
-            (await areaText()) !== before ||
-            (await larger.isDisabled()) ||
-            (await card!.getByTestId('edit-feedback').count()) > 0,
-          { timeout: 15_000 },
-        )
-        .toBe(true);
     }
     expect(taps).toBeGreaterThan(0);
     await expect.poll(() => larger.isDisabled(), { timeout: 15_000 }).toBe(true);
     const note = card!.locator('.cw-area-note');
+    await expect
+      .poll(async () => (await note.textContent()) ?? '', { timeout: 15_000 })
+      .toMatch(/Largest area|No room/);
     const words = (await note.textContent()) ?? '';
     expect(words).toMatch(/Largest area|No room/);
     expect(words).not.toMatch(/p\d+-s\d+|beginner|intermediate|advanced|progression\./);
@@ -135,6 +145,7 @@ describe('answers beside the control on a phone', () => {
       await card.locator('summary').click();
     }
     await card.locator('button.cw-move').first().click();
+    await settledMenu(page);
     const labels = (await page.locator('.cw-move-to').allTextContents()).map((t) => t.trim());
     expect(labels.length).toBeGreaterThan(0);
     expect(new Set(labels).size).toBe(labels.length);
@@ -148,6 +159,7 @@ describe('answers beside the control on a phone', () => {
     await page.getByRole('button', { name: /Swap/ }).first().click();
     const option = page.locator('.cw-swap-option').first();
     await option.waitFor();
+    await settledMenu(page);
     expect(((await option.locator('.cw-swap-summary').textContent()) ?? '').trim().length).toBeGreaterThan(
       10,
     );
@@ -170,9 +182,12 @@ describe('the wizard checks each step on a phone', () => {
     page.on('pageerror', (error) => console.log(`[page error] ${error.message}`));
     await club.open(page, coach, `/plan/new?teamId=${team.id}`);
     await page.getByRole('heading', { name: 'Plan a session' }).waitFor();
-    await expect
-      .poll(() => page.getByTestId('present-count').textContent(), { timeout: 15_000 })
-      .not.toContain(' 0 here');
+    await page.waitForFunction(
+      () =>
+        !/^0 here/.test(
+          document.querySelector('[data-testid="present-count"]')?.textContent?.trim() ?? '0 here',
+        ),
+    );
   });
   afterAll(async () => {
     await browser?.close();
@@ -180,7 +195,9 @@ describe('the wizard checks each step on a phone', () => {
 
   it('refuses nobody ticked at the first step, and says so by the button', async () => {
     await page.getByRole('button', { name: 'Clear' }).click();
-    await expect.poll(() => page.getByTestId('present-count').textContent()).toContain('0 here');
+    await expect
+      .poll(async () => ((await page.getByTestId('present-count').textContent()) ?? '').trim())
+      .toMatch(/^0 here/);
     const next = page.getByTestId('next-who');
     await next.click();
     const problem = page.getByTestId('step-problem');
