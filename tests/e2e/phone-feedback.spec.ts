@@ -23,6 +23,12 @@ const SHOTS = new URL('../../test-results/screenshots/', import.meta.url).pathna
 /** What the phone's screen shows right now (not the whole page). */
 async function screenShot(page: Page, name: string): Promise<void> {
   mkdirSync(SHOTS, { recursive: true });
+  // Messages fade in: wait until they have, so the picture shows what the coach reads.
+  await page.waitForFunction(() =>
+    document
+      .getAnimations()
+      .every((a) => a.playState !== 'running' || a.effect?.getTiming().iterations === Infinity),
+  );
   await page.evaluate(() => document.fonts.ready.then(() => undefined));
   await page.screenshot({ path: join(SHOTS, `${name}-${PHONE.width}.png`) });
 }

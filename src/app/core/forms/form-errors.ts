@@ -34,7 +34,7 @@ export function controlMessage(control: AbstractControl | null, label: string): 
   if (!control || !control.errors) return null;
   const errors = control.errors;
   if (typeof errors['message'] === 'string') return errors['message'];
-  if (errors['notNumber']) return `${label} must be a number, like 12.`;
+  if (errors['notNumber']) return `${label} must be a number, written in digits.`;
   if (errors['required']) return `${label} is needed.`;
   if (errors['email']) return `${label} must be an e-mail address like name@example.org.`;
   if (errors['min']) return `${label} must be at least ${errors['min'].min}.`;

@@ -267,7 +267,7 @@ describe('PlanWizard', () => {
     expect(stepper().selectedIndex).toBe(0);
     // The text stays as typed, with the reason under it.
     expect(input('coaches').value).toBe('two');
-    expect(fieldText('coaches')).toContain('Adults must be a number, like 12.');
+    expect(fieldText('coaches')).toContain('Adults must be a number, written in digits.');
     await type('coaches', '0');
     await next('who');
     expect(stepper().selectedIndex).toBe(0);
@@ -278,7 +278,7 @@ describe('PlanWizard', () => {
   });
 
   it("holds kit and space to the request schema's limits: no negative width, no 5000 cones", async () => {
-    const { stepper, next, type, fieldText } = await setUp();
+    const { stepper, next, type, fieldText, problem } = await setUp();
     await next('who');
     expect(stepper().selectedIndex).toBe(1);
     await type('width', '-10');
@@ -289,6 +289,8 @@ describe('PlanWizard', () => {
     expect(fieldText('width')).toContain('Width must be more than 0.');
     expect(fieldText('cones')).toContain('Cones must be at most 1000.');
     expect(fieldText('balls')).toContain('Balls must be a number');
+    // Said by the button too, naming the field: the first problem and how many more.
+    expect(problem()).toContain('Balls must be a number, written in digits. (and 2 more on this step)');
     await type('width', '30');
     await type('cones', '40');
     await type('balls', '12');

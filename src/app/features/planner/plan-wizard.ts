@@ -73,6 +73,20 @@ const LIMITS: Record<string, string> = {
   'time.temperatureC': '/properties/conditions/properties/temperatureC',
 };
 
+/** The names the fields go by in messages, as on their labels. */
+const FIELD_LABELS: Record<string, string> = {
+  teamId: 'Team',
+  coaches: 'Adults',
+  balls: 'Balls',
+  cones: 'Cones',
+  bibs: 'Bibs',
+  goals: 'Goals',
+  width: 'Width',
+  length: 'Length',
+  minutes: 'Minutes',
+  temperatureC: 'Temperature',
+};
+
 /** Someone must be there to plan for: a ticked player or a guest. */
 const somebodyHere: ValidatorFn = (group: AbstractControl): ValidationErrors | null => {
   const value = (group as FormGroup).getRawValue() as { present: string[]; guests: unknown[] };
@@ -279,11 +293,27 @@ export class PlanWizard {
     applyFieldErrors(this.form, mine);
   }
 
+  /** What stops this step, said by its "Next" button: the first field's message and how many more. */
   private problemWords(step: Step): string {
     if (step === 'who' && this.form.controls.who.hasError('nobodyHere')) {
       return 'Tick at least one player who is here, or add a guest.';
     }
-    return 'Something on this step needs a look: see the message under the field.';
+    const group = this.form.controls[step] as FormGroup;
+    const messages: string[] = [];
+    for (const [name, control] of Object.entries(group.controls)) {
+      if (control instanceof FormArray) {
+        control.controls.forEach((guest, i) => {
+          const text = this.message(guest.get('name'), `Guest ${i + 1} name`);
+          if (text) messages.push(text);
+        });
+      } else {
+        const text = this.message(control, FIELD_LABELS[name] ?? name);
+        if (text) messages.push(text);
+      }
+    }
+    if (!messages.length) return 'Something on this step needs a look.';
+    const more = messages.length - 1;
+    return more ? `${messages[0]} (and ${more} more on this step)` : messages[0];
   }
 
   /** Puts the cursor in the first field with a problem, so a phone scrolls to it. */
