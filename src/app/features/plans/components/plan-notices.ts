@@ -56,7 +56,10 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
             }
             <span class="cw-more">
               <mat-icon aria-hidden="true" class="cw-more-icon">expand_more</mat-icon>
-              {{ total() === 1 ? 'Read it in full' : 'Read all ' + total() }}
+              <span class="cw-when-closed">{{
+                total() === 1 ? 'Read it in full' : 'Read all ' + total()
+              }}</span>
+              <span class="cw-when-open">Fold away</span>
             </span>
           </summary>
           @if (adultWarnings().length) {
@@ -201,6 +204,10 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
     }
     .cw-folded[open] .cw-more-icon {
       transform: rotate(180deg);
+    }
+    .cw-folded[open] .cw-when-closed,
+    .cw-folded:not([open]) .cw-when-open {
+      display: none;
     }
     .cw-folded h2 {
       margin-top: 10px;
