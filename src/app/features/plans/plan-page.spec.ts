@@ -18,6 +18,7 @@ import {
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 import { AuthStore } from '../../core/auth/auth-store';
 import { PlanPage } from './plan-page';
+import { PlanSession } from './services/plan-session';
 
 const NAMES = ['Ada P.', 'Ben O.', 'Cleo R.', 'Dev S.', 'Edie T.', 'Finn U.', 'Gia V.', 'Hal W.', 'Ines X.'];
 const ALL = [...NAMES, 'Jon Y.', 'Kit Z.', 'Lou A.', 'Max B.'];
@@ -523,6 +524,30 @@ describe('PlanPage', () => {
       }
     }
     expect(card.querySelector('.cw-area-note')!.textContent).not.toMatch(/p\d+-s\d+|beginner/);
+  });
+
+  it('does not send an edit the engine refuses, and says why in the card that asked', async () => {
+    const tight = await generatePlan({ ...REQUEST, space: { width: 24, length: 30 } });
+    const [key, limit] = Object.entries(areaLimits(tight, defaultRuleSet)).find(([, l]) => l.larger)!;
+    const [phaseIndex, stationId] = key.split(':');
+    const { fixture, http, root } = await setUp({ shown: tight });
+    // The button is greyed; a keyboard shortcut or a stale screen could still ask, so the session checks too.
+    const session = fixture.debugElement.injector.get(PlanSession);
+    await session.edit(
+      { type: 'resize-area', phaseIndex: Number(phaseIndex), stationId, step: 'larger' },
+      'Area made larger',
+      `area:${phaseIndex}:${stationId}`,
+    );
+    await settle(fixture);
+    http.expectNone({ method: 'PATCH', url: '/api/plans/plan-1' });
+    const phaseEl = root.querySelectorAll('[data-testid="phase"]')[Number(phaseIndex)];
+    const card = phaseEl.querySelector(`[data-station="${stationId}"]`)!.closest('cw-station-card')!;
+    expect(card.querySelector('[data-testid="edit-feedback"]')!.textContent).toContain(limit.larger!);
+    expect(root.querySelector('[data-testid="plan-announcement"]')!.textContent).toContain(
+      `Not changed. ${limit.larger}`,
+    );
+    // Said once, not again as the standing limit under the buttons.
+    expect(card.querySelectorAll('[data-testid="area-limit"]').length).toBe(limit.smaller ? 1 : 0);
   });
 
   it('names each move destination by station number and title, no two alike', async () => {
