@@ -9,7 +9,9 @@ import { buildPhase } from '../planning/build-phase';
 import { effectiveParameters } from '../planning/effective-parameters';
 import { generateSeed } from '../random';
 import { defaultRuleSet } from '../rule-sets';
-import { applyProgression } from './apply-progression';
+import { progressionOutcome } from './apply-progression';
+import type { EditOutcome } from './edit-outcome';
+import { editWords } from './edit-words';
 import { editContext, lastPlayedBefore, specOf } from './plan-context';
 import { activityOfStation, refreshPlan } from './rebuild';
 
@@ -18,20 +20,38 @@ export async function applyEdit(
   edit: PlanEdit,
   ruleSet: RuleSetDocument = defaultRuleSet,
 ): Promise<Plan> {
+  return (await tryEdit(plan, edit, ruleSet)).plan;
+}
+
+/**
+ * An edit and, when it cannot be made (an area at its limit, a swap the rules rule out), why in a
+ * coach's words, so a screen can say so beside the control that asked for it.
+ */
+export async function tryEdit(
+  plan: Plan,
+  edit: PlanEdit,
+  ruleSet: RuleSetDocument = defaultRuleSet,
+): Promise<EditOutcome> {
   switch (edit.type) {
     case 'regenerate':
-      return generatePlan({ ...plan.request, seed: edit.seed ?? generateSeed() }, ruleSet);
+      return {
+        plan: await generatePlan({ ...plan.request, seed: edit.seed ?? generateSeed() }, ruleSet),
+        refused: null,
+      };
     case 'resize-area': {
       // Larger/smaller is the coach's call; map it onto the activity's harder/easier direction.
       const station = stationAt(plan, edit.phaseIndex, edit.stationId);
       const params = compileRuleSet(ruleSet).document.parameters;
       const smallerIsHarder = params.kinds[station.activityKind].harderWhenArea === 'smaller';
       const verdict = (edit.step === 'smaller') === smallerIsHarder ? 'too-easy' : 'too-hard';
-      const out = applyProgression(plan, edit.phaseIndex, edit.stationId, verdict, ruleSet);
-      return relabel(out, plan, 'edit.resize-area', `${station.title}: area ${edit.step}`);
+      const out = progressionOutcome(plan, edit.phaseIndex, edit.stationId, verdict, ruleSet);
+      return {
+        plan: relabel(out.plan, plan, 'edit.resize-area', `${station.title}: area ${edit.step}`),
+        refused: out.refused,
+      };
     }
     case 'move-player':
-      return movePlayer(plan, edit, ruleSet);
+      return { plan: movePlayer(plan, edit, ruleSet), refused: null };
     case 'swap-activity':
       return swapActivity(plan, edit, ruleSet);
   }
@@ -137,25 +157,28 @@ async function swapActivity(
   plan: Plan,
   edit: Extract<PlanEdit, { type: 'swap-activity' }>,
   ruleSet: RuleSetDocument,
-): Promise<Plan> {
+): Promise<EditOutcome> {
   const params = effectiveParameters(compileRuleSet(ruleSet).document.parameters, plan.request);
   const phase = plan.phases[edit.phaseIndex];
   if (!phase) throw new RangeError(`No phase ${edit.phaseIndex}`);
   const activity = activityById(params, edit.activityId);
   if (!activity) throw new RangeError(`No activity ${edit.activityId} in rule set ${ruleSet.id}`);
   const request = plan.request;
-  const refuse = (reason: string): Plan => ({
-    ...plan,
-    warnings: [
-      ...plan.warnings,
-      { code: 'swap-refused', message: `${activity.title} is not used here: ${reason}.` },
-    ],
-    trace: [
-      ...plan.trace,
-      { ruleId: 'edit.swap-activity', fired: false, effect: `${activity.title} refused: ${reason}` },
-    ],
-  });
-  if (phase.activityKind === 'break') return refuse('a drinks break has no stations');
+  const refuse = (reason: string): EditOutcome => {
+    const message = editWords.swapRefused(activity.title, reason);
+    return {
+      plan: {
+        ...plan,
+        warnings: [...plan.warnings, { code: 'swap-refused', message }],
+        trace: [
+          ...plan.trace,
+          { ruleId: 'edit.swap-activity', fired: false, effect: `${activity.title} refused: ${reason}` },
+        ],
+      },
+      refused: message,
+    };
+  };
+  if (phase.activityKind === 'break') return refuse(editWords.swapBreak);
   const blocked = activityBlocked(params, request.ageGroup, plan.forbiddenActivities ?? [], activity);
   if (blocked) return refuse(blocked);
   const { ctx, rules } = await editContext(
@@ -166,11 +189,11 @@ async function swapActivity(
   const spec = specOf(plan, edit.phaseIndex, [activity]);
   const rebuilt = buildPhase(ctx, rules, spec, edit.phaseIndex, {}, lastPlayedBefore(plan, edit.phaseIndex));
   if (rebuilt.activityId !== activity.id) {
-    return refuse(`it does not fit the space or the kit for ${request.players.length} players`);
+    return refuse(editWords.swapNoFit(request.players.length));
   }
   const phases = plan.phases.map((p, i) => (i === edit.phaseIndex ? { ...rebuilt, name: p.name } : p));
   const refreshed = refreshPlan({ ...plan, warnings: plan.warnings }, phases, params);
-  return withChecks(
+  const swapped = withChecks(
     {
       ...refreshed,
       trace: [
@@ -184,4 +207,5 @@ async function swapActivity(
     },
     ruleSet,
   );
+  return { plan: swapped, refused: null };
 }

@@ -5,11 +5,10 @@
 import type { Plan, RuleSetDocument, StationVerdict } from '../../shared/types';
 import { checkPlan } from '../check-plan';
 import { compileRuleSet } from '../club-rules/compile-rule-set';
-import { insideSpace, overlaps, rectOf } from '../geometry';
 import { describeArea } from '../planning/areas';
-import { packStations } from '../planning/layout';
-import { steppedArea } from '../planning/progressions';
 import { defaultRuleSet } from '../rule-sets';
+import { stepArea } from './area-step';
+import type { EditOutcome } from './edit-outcome';
 import { refreshPlan } from './rebuild';
 
 export function applyProgression(
@@ -19,55 +18,33 @@ export function applyProgression(
   verdict: StationVerdict,
   ruleSet: RuleSetDocument = defaultRuleSet,
 ): Plan {
+  return progressionOutcome(plan, phaseIndex, stationId, verdict, ruleSet).plan;
+}
+
+/** The stepped plan, or the same plan and why its area stays (in a coach's words). */
+export function progressionOutcome(
+  plan: Plan,
+  phaseIndex: number,
+  stationId: string,
+  verdict: StationVerdict,
+  ruleSet: RuleSetDocument = defaultRuleSet,
+): EditOutcome {
   const params = compileRuleSet(ruleSet).document.parameters;
   const phase = plan.phases[phaseIndex];
   const station = phase?.stations.find((s) => s.id === stationId);
   if (!phase || !station) throw new RangeError(`No station ${stationId} in phase ${phaseIndex}`);
-  const band = params.ageGroups[plan.request.ageGroup].band;
   const ruleId = `progression.${station.activityKind}`;
-  const unchanged = (effect: string): Plan => ({
-    ...plan,
-    trace: [...plan.trace, { ruleId, fired: false, effect }],
+  const unchanged = (effect: string, refused: string | null): EditOutcome => ({
+    plan: { ...plan, trace: [...plan.trace, { ruleId, fired: false, effect }] },
+    refused,
   });
   if (verdict === 'right')
-    return unchanged(`${station.title}: about right, area stays ${describeArea(station.area)}`);
-  const direction = verdict === 'too-easy' ? 'harder' : 'easier';
-  const total = station.playerIds.length + station.coachJoins;
-  const next = steppedArea(
-    params,
-    station.activityKind,
-    band,
-    station.area,
-    direction,
-    plan.request.space,
-    total,
-  );
-  if (!next) {
-    return unchanged(
-      `${station.title}: ${words(verdict)}, but the area is already at the club's limit (${describeArea(station.area)})`,
-    );
-  }
-  let stations = phase.stations.map((s) => (s.id === stationId ? { ...s, area: next } : s));
-  const rects = stations.map((s) => rectOf(s.position, s.area));
-  const index = stations.findIndex((s) => s.id === stationId);
-  const clash =
-    !insideSpace(rects[index], plan.request.space) ||
-    rects.some((r, j) => j !== index && overlaps(r, rects[index]));
-  if (clash) {
-    const placed = packStations(
-      stations.map((s) => s.area),
-      plan.request.space,
-      params.layout.bufferM,
-      stations.map((s) => params.kinds[s.activityKind].rotatable),
-    );
-    if (!placed) {
-      return unchanged(
-        `${station.title}: ${words(verdict)}, but a ${describeArea(next)} area does not fit beside the other stations`,
-      );
-    }
-    stations = stations.map((s, i) => ({ ...s, area: placed[i].area, position: placed[i].position }));
-  }
-  const phases = plan.phases.map((p, i) => (i === phaseIndex ? { ...p, stations } : p));
+    return unchanged(`${station.title}: about right, area stays ${describeArea(station.area)}`, null);
+  const smallerIsHarder = params.kinds[station.activityKind].harderWhenArea === 'smaller';
+  const size = (verdict === 'too-easy') === smallerIsHarder ? 'smaller' : 'larger';
+  const step = stepArea(plan, phaseIndex, stationId, size, ruleSet);
+  if (!step.ok) return unchanged(`${station.title}: ${words(verdict)}. ${step.reason}`, step.reason);
+  const phases = plan.phases.map((p, i) => (i === phaseIndex ? { ...p, stations: step.stations } : p));
   const refreshed = refreshPlan(plan, phases, params);
   const result = {
     ...refreshed,
@@ -76,16 +53,19 @@ export function applyProgression(
       {
         ruleId,
         fired: true,
-        effect: `${station.title} ${words(verdict)}: area ${describeArea(station.area)} → ${describeArea(next)}`,
+        effect: `${station.title} ${words(verdict)}: area ${describeArea(step.from)} → ${describeArea(step.to)}`,
       },
     ],
   };
   return {
-    ...result,
-    warnings: [
-      ...result.warnings,
-      ...checkPlan(result, ruleSet).map((c) => ({ ...c, code: `check:${c.code}` })),
-    ],
+    plan: {
+      ...result,
+      warnings: [
+        ...result.warnings,
+        ...checkPlan(result, ruleSet).map((c) => ({ ...c, code: `check:${c.code}` })),
+      ],
+    },
+    refused: null,
   };
 }
 

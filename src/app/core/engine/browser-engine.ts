@@ -18,8 +18,18 @@ export interface ActivityOption {
  * What the plan page needs from the engine, running in the browser. `rules` is the rule set the
  * plan was made with (the club's); null means the engine's own, used until the club's arrive.
  */
+/** Why each station's area cannot step larger or smaller (null where it can), by "phase:station". */
+export type AreaLimits = Partial<Record<string, Record<'larger' | 'smaller', string | null>>>;
+
 export interface BrowserEngineApi {
-  applyEdit(plan: Plan, edit: PlanEdit, rules: RuleSetDocument | null): Promise<Plan>;
+  /** The edited plan, or the same plan and why the edit cannot be made, in a coach's words. */
+  tryEdit(
+    plan: Plan,
+    edit: PlanEdit,
+    rules: RuleSetDocument | null,
+  ): Promise<{ plan: Plan; refused: string | null }>;
+  /** The limits of each station's area buttons, from the same step the edit takes. */
+  areaLimits(plan: Plan, rules: RuleSetDocument | null): AreaLimits;
   /** Problems the edited plan has (empty when it holds every rule). */
   checkPlan(plan: Plan, rules: RuleSetDocument | null): Notice[];
   /** The rules' activities for this plan's players, age, kit and space: allowed or not, and why. */

@@ -1,10 +1,11 @@
 /** Binds the engine (loaded lazily by BrowserEngine) to what the plan page needs. */
-import { applyEdit, checkPlan, listActivities } from '../../../../engine/index';
+import { areaLimits, checkPlan, listActivities, tryEdit } from '../../../../engine/index';
 import type { BrowserEngineApi } from './browser-engine';
 
 export function createEngineAdapter(): BrowserEngineApi {
   return {
-    applyEdit: async (plan, edit, rules) => await applyEdit(plan, edit, rules ?? undefined),
+    tryEdit: async (plan, edit, rules) => await tryEdit(plan, edit, rules ?? undefined),
+    areaLimits: (plan, rules) => areaLimits(plan, rules ?? undefined),
     checkPlan: (plan, rules) => checkPlan(plan, rules ?? undefined),
     activities: (plan, rules) =>
       listActivities(rules ?? undefined, plan).map((a) => ({

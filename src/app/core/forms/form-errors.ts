@@ -34,10 +34,14 @@ export function controlMessage(control: AbstractControl | null, label: string): 
   if (!control || !control.errors) return null;
   const errors = control.errors;
   if (typeof errors['message'] === 'string') return errors['message'];
+  if (errors['notNumber']) return `${label} must be a number, written in digits.`;
   if (errors['required']) return `${label} is needed.`;
   if (errors['email']) return `${label} must be an e-mail address like name@example.org.`;
   if (errors['min']) return `${label} must be at least ${errors['min'].min}.`;
   if (errors['max']) return `${label} must be at most ${errors['max'].max}.`;
+  if (errors['above']) return `${label} must be more than ${errors['above'].above}.`;
+  if (errors['below']) return `${label} must be less than ${errors['below'].below}.`;
+  if (errors['wholeNumber']) return `${label} must be a whole number.`;
   if (errors['minlength']) return `${label} needs at least ${errors['minlength'].requiredLength} characters.`;
   return `${label} is not valid.`;
 }

@@ -2,7 +2,8 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import type { Plan, SessionPlanDto, Station } from '../../../../shared/types';
+import { applyProgression, generatePlan, progressionOutcome } from '../../../../engine/index';
+import type { Plan, SessionPlanDto, Station, StationVerdict } from '../../../../shared/types';
 import { PitchSidePage } from './pitch-side-page';
 
 const station = (id: string, title: string, playerIds: string[], width = 10): Station => ({
@@ -140,6 +141,49 @@ describe('PitchSidePage', () => {
     expect(el.querySelector('[data-testid=offline-badge]')).toBeNull();
     expect(JSON.parse(localStorage.getItem('conewise.pitch-side.queue')!)).toEqual([]);
     expect(el.querySelector('cw-station-card')?.textContent).toContain('8 × 8 m');
+  });
+
+  it('says under the verdict buttons why a station cannot step further, in plain words', async () => {
+    // A real plan whose first station has been made harder until the engine refuses another step.
+    let real = await generatePlan({
+      ...plan.request,
+      players: ['a', 'b', 'c', 'd', 'e', 'f', 'g', 'h'].map((id) => ({ id, name: id.toUpperCase() })),
+      seed: 'pitch-limit',
+    });
+    const first = real.phases[0].stations[0];
+    const verdict: StationVerdict = 'too-easy';
+    for (let i = 0; i < 20 && !progressionOutcome(real, 0, first.id, verdict).refused; i++) {
+      real = applyProgression(real, 0, first.id, verdict);
+    }
+    const refused = progressionOutcome(real, 0, first.id, verdict).refused!;
+    expect(refused).toBeTruthy();
+    const { http, el, settle } = await opened({ ...session, plan: real });
+    const card = el.querySelector('cw-station-card')!;
+    card.querySelector<HTMLButtonElement>(`[data-verdict=${verdict}]`)!.click();
+    for (let i = 0; i < 100 && !card.querySelector('[data-testid=verdict-refusal]'); i++) {
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      await settle();
+    }
+    expect(card.querySelector('[data-testid=verdict-refusal]')!.textContent).toContain(
+      `The area stays: ${refused}`,
+    );
+    expect(card.querySelector('[data-testid=verdict-refusal]')!.textContent).not.toMatch(/s\d|beginner/);
+    http.expectOne('/api/plans/p1/progression');
+  });
+
+  it('puts who moves right under the names that were tapped', async () => {
+    const { http, el, button, settle } = await opened();
+    button('button[aria-label="Fen Q. arrives"]').click();
+    const replanned = structuredClone(plan);
+    replanned.request.players.push({ id: 'f', name: 'Fen Q.' });
+    http.expectOne('/api/plans/p1/replan').flush({
+      plan: { ...session, plan: replanned },
+      moves: [{ playerId: 'f', fromStationId: null, toStationId: 's1', phaseIndex: 0 }],
+    });
+    await settle();
+    const moves = el.querySelector('[data-testid=moves]')!;
+    expect(moves.closest('.cw-pitch__roster')).not.toBeNull();
+    expect(moves.getAttribute('aria-live')).toBe('polite');
   });
 
   it('adds a late arrival in one tap, shows who moves and asks the server to re-plan from now', async () => {

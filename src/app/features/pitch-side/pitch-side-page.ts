@@ -72,6 +72,8 @@ export class PitchSidePage {
   protected readonly clock = signal<ClockState>(STOPPED_CLOCK);
   protected readonly verdicts = signal<Record<string, string>>({});
   protected readonly moves = signal<PlayerMove[]>([]);
+  /** Why a verdict could not step its station (by "phase:station"), shown under its buttons. */
+  protected readonly refusals = signal<Record<string, string>>({});
   protected readonly loadError = signal<string | null>(null);
   protected readonly fromDevice = signal(false);
   protected readonly announcement = signal('');
@@ -260,6 +262,10 @@ export class PitchSidePage {
     return this.verdicts()[`${this.reading().phaseIndex}:${stationId}`] ?? null;
   }
 
+  protected refusalFor(stationId: string): string | null {
+    return this.refusals()[`${this.reading().phaseIndex}:${stationId}`] ?? null;
+  }
+
   protected verdictQueued(stationId: string): boolean {
     const phaseIndex = this.reading().phaseIndex;
     return this.queue
@@ -277,13 +283,19 @@ export class PitchSidePage {
   protected judgeStation(stationId: string, verdict: StationVerdict): void {
     const phaseIndex = this.reading().phaseIndex;
     this.verdicts.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: verdict }));
+    this.refusals.update(({ [`${phaseIndex}:${stationId}`]: _, ...rest }) => rest);
     const body = { phaseIndex, stationId, verdict };
     const plan = this.plan();
     if (plan && verdict !== 'right') {
       // Step the station on screen at once; the server's answer replaces it when it arrives.
       progressLocally(plan, phaseIndex, stationId, verdict, this.rules())
-        .then((stepped) => {
-          if (this.plan() === plan) this.plan.set(stepped);
+        .then(({ plan: stepped, refused }) => {
+          if (this.plan() !== plan) return;
+          this.plan.set(stepped);
+          if (refused) {
+            this.refusals.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: refused }));
+            this.announcement.set(`The area stays: ${refused}`);
+          }
         })
         .catch(() => undefined);
     }

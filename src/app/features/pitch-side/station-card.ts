@@ -39,6 +39,8 @@ export class StationCard {
   readonly verdictQueued = input(false);
   /** Players who just moved into this station. */
   readonly arrivals = input<string[]>([]);
+  /** Why the last verdict could not step the station (an area at its limit), in plain words. */
+  readonly refusal = input<string | null>(null);
   /** Emits the coach's verdict. */
   readonly judged = output<StationVerdict>();
 

@@ -2,6 +2,8 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import { By } from '@angular/platform-browser';
+import { MatStepper } from '@angular/material/stepper';
 import { provideRouter, Router } from '@angular/router';
 import {
   FOCUSES,
@@ -75,7 +77,24 @@ describe('PlanWizard', () => {
       }
       await fixture.whenStable();
     };
-    return { fixture, http, root, input, type, submit };
+    const stepper = () =>
+      fixture.debugElement.query(By.directive(MatStepper)).componentInstance as MatStepper;
+    /** Taps a step's "Next" and waits until it has moved on or said what to fix. */
+    const next = async (step: 'who' | 'kit' | 'time') => {
+      const before = stepper().selectedIndex;
+      root.querySelector<HTMLButtonElement>(`[data-testid="next-${step}"]`)!.click();
+      for (let i = 0; i < 150; i++) {
+        await new Promise((resolve) => setTimeout(resolve, 20));
+        fixture.detectChanges();
+        if (stepper().selectedIndex !== before || root.querySelector('[data-testid="step-problem"]')) break;
+      }
+      await fixture.whenStable();
+      fixture.detectChanges();
+    };
+    /** The text under a field (its mat-form-field). */
+    const fieldText = (name: string) => input(name).closest('mat-form-field')!.textContent ?? '';
+    const problem = () => root.querySelector('[data-testid="step-problem"]')?.textContent ?? '';
+    return { fixture, http, root, input, type, submit, stepper, next, fieldText, problem };
   }
 
   it('ticks the active roster and fills kit and space from the bag and the usual space', async () => {
@@ -221,5 +240,107 @@ describe('PlanWizard', () => {
     expect(root.querySelector('[data-testid="wizard-error"]')?.textContent).toContain(
       'The request has bad fields.',
     );
+  });
+
+  it('keeps "Next" on who is here until someone is ticked, and says so under the list', async () => {
+    const { fixture, root, stepper, next, problem } = await setUp();
+    Array.from(root.querySelectorAll<HTMLButtonElement>('button'))
+      .find((b) => b.textContent?.trim() === 'Clear')!
+      .click();
+    await fixture.whenStable();
+    await next('who');
+    expect(stepper().selectedIndex).toBe(0);
+    expect(problem()).toContain('Tick at least one player who is here, or add a guest.');
+    expect(root.querySelector('[data-testid="no-players"]')).not.toBeNull();
+    Array.from(root.querySelectorAll<HTMLButtonElement>('button'))
+      .find((b) => b.textContent?.trim() === 'Tick all')!
+      .click();
+    await fixture.whenStable();
+    await next('who');
+    expect(stepper().selectedIndex).toBe(1);
+  });
+
+  it('refuses text in a number field visibly, and no adults, on the first step', async () => {
+    const { stepper, next, type, input, fieldText } = await setUp();
+    await type('coaches', 'two');
+    await next('who');
+    expect(stepper().selectedIndex).toBe(0);
+    // The text stays as typed, with the reason under it.
+    expect(input('coaches').value).toBe('two');
+    expect(fieldText('coaches')).toContain('Adults must be a number, written in digits.');
+    await type('coaches', '0');
+    await next('who');
+    expect(stepper().selectedIndex).toBe(0);
+    expect(fieldText('coaches')).toContain('Count at least one adult');
+    await type('coaches', '2');
+    await next('who');
+    expect(stepper().selectedIndex).toBe(1);
+  });
+
+  it("holds kit and space to the request schema's limits: no negative width, no 5000 cones", async () => {
+    const { stepper, next, type, fieldText, problem } = await setUp();
+    await next('who');
+    expect(stepper().selectedIndex).toBe(1);
+    await type('width', '-10');
+    await type('cones', '5000');
+    await type('balls', '12a');
+    await next('kit');
+    expect(stepper().selectedIndex).toBe(1);
+    expect(fieldText('width')).toContain('Width must be more than 0.');
+    expect(fieldText('cones')).toContain('Cones must be at most 1000.');
+    expect(fieldText('balls')).toContain('Balls must be a number');
+    // Said by the button too, naming the field: the first problem and how many more.
+    expect(problem()).toContain('Balls must be a number, written in digits. (and 2 more on this step)');
+    await type('width', '30');
+    await type('cones', '40');
+    await type('balls', '12');
+    await next('kit');
+    expect(stepper().selectedIndex).toBe(2);
+  });
+
+  it('refuses an implausible temperature and adds a safety line for the weather', async () => {
+    const { root, stepper, next, type, fieldText } = await setUp();
+    await next('who');
+    await next('kit');
+    await type('temperatureC', '55');
+    await next('time');
+    expect(stepper().selectedIndex).toBe(2);
+    expect(fieldText('temperatureC')).toContain('Temperature must be at most 50.');
+    await type('temperatureC', '31');
+    await next('time');
+    expect(stepper().selectedIndex).toBe(3);
+    expect(root.querySelector('[data-testid="weather-note"]')!.textContent).toContain('Safety:');
+  });
+
+  it('names a guest by the rules for a player name: not empty, no digits', async () => {
+    const { fixture, root, stepper, next } = await setUp();
+    Array.from(root.querySelectorAll('button'))
+      .find((b) => b.textContent?.includes('Add a guest'))!
+      .click();
+    await fixture.whenStable();
+    const guestName = () => root.querySelector<HTMLInputElement>('.cw-guest input[formcontrolname="name"]')!;
+    const guestText = () => guestName().closest('mat-form-field')!.textContent ?? '';
+    await next('who');
+    expect(stepper().selectedIndex).toBe(0);
+    expect(guestText()).toContain('Guest name is needed.');
+    guestName().value = 'Pip 2';
+    guestName().dispatchEvent(new Event('input'));
+    await next('who');
+    expect(stepper().selectedIndex).toBe(0);
+    expect(guestText()).toContain('Guest name: A first name and initial; no digits');
+    guestName().value = 'Pip Q.';
+    guestName().dispatchEvent(new Event('input'));
+    await next('who');
+    expect(stepper().selectedIndex).toBe(1);
+  });
+
+  it('opens the step that needs a look when the plan is asked for with a bad answer', async () => {
+    const { stepper, type, submit, http, root } = await setUp();
+    await type('width', '-10');
+    stepper().selectedIndex = 0;
+    await submit();
+    http.expectNone('/api/plans');
+    expect(stepper().selectedIndex).toBe(1);
+    expect(root.querySelector('[data-testid="step-problem"]')).not.toBeNull();
   });
 });

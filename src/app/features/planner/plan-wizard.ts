@@ -1,6 +1,25 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  ElementRef,
+  inject,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
-import { FormArray, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import {
+  AbstractControl,
+  FormArray,
+  FormGroup,
+  NonNullableFormBuilder,
+  ReactiveFormsModule,
+  ValidationErrors,
+  ValidatorFn,
+  Validators,
+} from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -10,7 +29,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatListModule } from '@angular/material/list';
 import { MatSelectModule } from '@angular/material/select';
-import { MatStepperModule } from '@angular/material/stepper';
+import { MatStepper, MatStepperModule } from '@angular/material/stepper';
 import { Router, RouterLink } from '@angular/router';
 import { firstValueFrom, forkJoin } from 'rxjs';
 import {
@@ -29,7 +48,9 @@ import { PlayersApi } from '../../core/api/players-api';
 import { TeamsApi } from '../../core/api/teams-api';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { loadApiSchema } from '../../core/forms/api-schemas';
-import { schemaCheck } from '../../core/forms/schema-validator';
+import { NumberField } from '../../core/forms/number-field';
+import { schemaNumberValidators } from '../../core/forms/schema-limits';
+import { schemaCheck, type SchemaCheck } from '../../core/forms/schema-validator';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { SCHEDULE_KIND_LABELS, sessionDay } from '../../core/labels/schedule-labels';
@@ -38,8 +59,48 @@ import { buildPlanRequest, wizardFieldOf, type WizardValue } from './services/pl
 import { SpacePreset, SpacePresets } from './services/space-presets';
 import { PlanHandover } from '../plans/services/plan-handover';
 
-const count = [Validators.required, Validators.min(0), Validators.max(500)];
-const metres = [Validators.required, Validators.min(5), Validators.max(130)];
+/** The wizard's steps, in order, as named in its form. */
+type Step = 'who' | 'kit' | 'time';
+const STEPS: Step[] = ['who', 'kit', 'time'];
+
+/** Where each number field's limits live in the plan request's schema (the API's own limits). */
+const LIMITS: Record<string, string> = {
+  'who.coaches': '/properties/coaches',
+  'kit.balls': '/properties/equipment/properties/balls',
+  'kit.cones': '/properties/equipment/properties/cones',
+  'kit.bibs': '/properties/equipment/properties/bibs',
+  'kit.goals': '/properties/equipment/properties/goals',
+  'kit.width': '/properties/space/properties/width',
+  'kit.length': '/properties/space/properties/length',
+  'time.minutes': '/properties/minutes',
+  'time.temperatureC': '/properties/conditions/properties/temperatureC',
+};
+
+/** The names the fields go by in messages, as on their labels. */
+const FIELD_LABELS: Record<string, string> = {
+  teamId: 'Team',
+  coaches: 'Adults',
+  balls: 'Balls',
+  cones: 'Cones',
+  bibs: 'Bibs',
+  goals: 'Goals',
+  width: 'Width',
+  length: 'Length',
+  minutes: 'Minutes',
+  temperatureC: 'Temperature',
+};
+
+/** Someone must be there to plan for: a ticked player or a guest. */
+const somebodyHere: ValidatorFn = (group: AbstractControl): ValidationErrors | null => {
+  const value = (group as FormGroup).getRawValue() as { present: string[]; guests: unknown[] };
+  return value.present.length + value.guests.length > 0 ? null : { nobodyHere: true };
+};
+
+/** An adult runs the session; the coach counts. */
+const someAdult: ValidatorFn = (control) =>
+  typeof control.value === 'number' && control.value < 1
+    ? { message: 'Count at least one adult: you, the coach, count.' }
+    : null;
 
 /** Who is here → kit and space → time and aim → the plan. */
 @Component({
@@ -57,6 +118,7 @@ const metres = [Validators.required, Validators.min(5), Validators.max(130)];
     MatInputModule,
     MatListModule,
     MatSelectModule,
+    NumberField,
   ],
   templateUrl: './plan-wizard.html',
   styleUrl: './plan-wizard.scss',
@@ -94,24 +156,35 @@ export class PlanWizard {
   protected readonly focusLabels = FOCUS_LABELS;
   protected readonly message = controlMessage;
   protected readonly narrow = mediaMatches('(max-width: 720px)');
+  private readonly stepper = viewChild.required(MatStepper);
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef).nativeElement;
+  /** The step whose "Next" found something to fix, and what (shown by its buttons). */
+  protected readonly stepProblem = signal<{ step: Step; text: string } | null>(null);
+  /** Checks a guest's name with the rules for a player's name (null until loaded). */
+  private guestName: SchemaCheck | null = null;
+  /** The request schema's limits on every number field, and the player-name rule, once loaded. */
+  private readonly rulesReady: Promise<void> = this.loadRules();
 
   protected readonly form = this.fb.group({
-    who: this.fb.group({
-      teamId: ['', Validators.required],
-      present: [[] as string[]],
-      guests: this.fb.array<ReturnType<PlanWizard['guestGroup']>>([]),
-      coaches: [1, [Validators.required, Validators.min(0), Validators.max(20)]],
-    }),
+    who: this.fb.group(
+      {
+        teamId: ['', Validators.required],
+        present: [[] as string[]],
+        guests: this.fb.array<ReturnType<PlanWizard['guestGroup']>>([]),
+        coaches: [1, [Validators.required, someAdult]],
+      },
+      { validators: somebodyHere },
+    ),
     kit: this.fb.group({
-      balls: [0, count],
-      cones: [0, count],
-      bibs: [0, count],
-      goals: [0, count],
-      width: [30, metres],
-      length: [40, metres],
+      balls: [0, Validators.required],
+      cones: [0, Validators.required],
+      bibs: [0, Validators.required],
+      goals: [0, Validators.required],
+      width: [30, Validators.required],
+      length: [40, Validators.required],
     }),
     time: this.fb.group({
-      minutes: [20, [Validators.required, Validators.min(5), Validators.max(120)]],
+      minutes: [20, Validators.required],
       date: [isoDate(new Date())],
       kickOff: [''],
       kind: ['match-warm-up' as PlanKind, Validators.required],
@@ -128,6 +201,14 @@ export class PlanWizard {
   protected readonly presentCount = computed(
     () => (this.whoValue().present?.length ?? 0) + (this.whoValue().guests?.length ?? 0),
   );
+  private readonly temperature = toSignal(this.form.controls.time.controls.temperatureC.valueChanges, {
+    initialValue: null,
+  });
+  /** A safety line for a hot or cold day, whatever the figure: the coach judges the weather. */
+  protected readonly weatherNote = computed(() => {
+    const t = this.temperature();
+    return typeof t === 'number' && !Number.isNaN(t);
+  });
 
   constructor() {
     this.teamsApi.list().subscribe({
@@ -153,8 +234,107 @@ export class PlanWizard {
 
   private guestGroup(name = '') {
     return this.fb.group({
-      name: [name, [Validators.required, Validators.maxLength(40)]],
+      name: [name, [Validators.required, (c: AbstractControl) => this.checkGuestName(c)]],
       goalkeeper: [false],
+    });
+  }
+
+  /** A guest's name follows the rules for a player's name (the API's own, from its schema). */
+  private checkGuestName(control: AbstractControl): ValidationErrors | null {
+    const text = String(control.value ?? '').trim();
+    const problem = this.guestName?.({ displayName: text })['displayName'];
+    return problem ? { message: problem } : null;
+  }
+
+  /** Puts the request schema's limits on the number fields and loads the player-name rule. */
+  private async loadRules(): Promise<void> {
+    const [request, player] = await Promise.all([
+      loadApiSchema('plan-request'),
+      loadApiSchema('player-create'),
+    ]);
+    if (request) {
+      for (const [path, pointer] of Object.entries(LIMITS)) {
+        const control = this.form.get(path)!;
+        control.addValidators(schemaNumberValidators(request, pointer));
+        control.updateValueAndValidity({ emitEvent: false });
+      }
+    }
+    if (player) {
+      this.guestName = await schemaCheck(player, { displayName: 'Guest name' });
+      for (const guest of this.guests.controls)
+        guest.get('name')!.updateValueAndValidity({ emitEvent: false });
+    }
+  }
+
+  /**
+   * "Next": checks this step's answers (the form's rules and the request schema) and moves on
+   * only when they hold; otherwise says what to fix under each field and by the button.
+   */
+  protected async next(step: Step): Promise<void> {
+    await this.rulesReady;
+    const group = this.form.controls[step];
+    group.markAllAsTouched();
+    group.updateValueAndValidity();
+    await this.pinSchemaErrors(step);
+    if (group.invalid) {
+      this.stepProblem.set({ step, text: this.problemWords(step) });
+      this.focusFirstProblem();
+      return;
+    }
+    this.stepProblem.set(null);
+    this.stepper().next();
+  }
+
+  /**
+   * The request schema's last word on a step the form's own rules pass (those rules already carry
+   * the schema's number limits): anything else it refuses is pinned to its field.
+   */
+  private async pinSchemaErrors(step: Step): Promise<void> {
+    const team = this.team();
+    const schema = await loadApiSchema('plan-request');
+    if (!team || !schema || this.form.controls[step].invalid) return;
+    const raw = this.form.getRawValue();
+    const request = buildPlanRequest(team, this.roster(), { ...raw.who, ...raw.kit, ...raw.time });
+    const errors = (await schemaCheck(schema))(request);
+    const mine: Record<string, string> = {};
+    for (const [path, text] of Object.entries(errors)) {
+      const field = wizardFieldOf(path);
+      if (field.startsWith(`${step}.`)) mine[field] = text;
+    }
+    applyFieldErrors(this.form, mine);
+  }
+
+  /** What stops this step, said by its "Next" button: the first field's message and how many more. */
+  private problemWords(step: Step): string {
+    if (step === 'who' && this.form.controls.who.hasError('nobodyHere')) {
+      return 'Tick at least one player who is here, or add a guest.';
+    }
+    const group = this.form.controls[step] as FormGroup;
+    const messages: string[] = [];
+    for (const [name, control] of Object.entries(group.controls)) {
+      if (control instanceof FormArray) {
+        control.controls.forEach((guest, i) => {
+          const text = this.message(guest.get('name'), `Guest ${i + 1} name`);
+          if (text) messages.push(text);
+        });
+      } else {
+        const text = this.message(control, FIELD_LABELS[name] ?? name);
+        if (text) messages.push(text);
+      }
+    }
+    if (!messages.length) return 'Something on this step needs a look.';
+    const more = messages.length - 1;
+    return more ? `${messages[0]} (and ${more} more on this step)` : messages[0];
+  }
+
+  /** Puts the cursor in the first field with a problem, so a phone scrolls to it. */
+  private focusFirstProblem(): void {
+    setTimeout(() => {
+      const field = this.host.querySelector<HTMLElement>(
+        '.mat-mdc-step-content input.ng-invalid, .mat-horizontal-stepper-content-current input.ng-invalid, [data-testid="no-players"]',
+      );
+      field?.focus();
+      field?.scrollIntoView?.({ block: 'center' });
     });
   }
 
@@ -251,8 +431,15 @@ export class PlanWizard {
     this.error.set(null);
     this.form.markAllAsTouched();
     const team = this.team();
-    if (!team || this.form.invalid) {
-      this.error.set(team ? 'Some answers need a look: see the marked fields.' : 'Choose a team first.');
+    await this.rulesReady;
+    const firstBad = STEPS.findIndex((step) => this.form.controls[step].invalid);
+    if (!team || firstBad >= 0) {
+      // Open the step that needs a look, rather than leave every step folded.
+      const step = team ? STEPS[firstBad] : 'who';
+      this.stepper().selectedIndex = STEPS.indexOf(step);
+      this.stepProblem.set({ step, text: team ? this.problemWords(step) : 'Choose a team first.' });
+      this.error.set(team ? 'Some answers need a look: see the step that is open.' : 'Choose a team first.');
+      this.focusFirstProblem();
       return;
     }
     const raw = this.form.getRawValue();
@@ -335,5 +522,7 @@ export class PlanWizard {
     }
     const unmatched = applyFieldErrors(this.form, mapped);
     this.error.set(['Some answers need a look.', ...unmatched].join(' '));
+    const firstBad = STEPS.findIndex((step) => this.form.controls[step].invalid);
+    if (firstBad >= 0) this.stepper().selectedIndex = firstBad;
   }
 }

@@ -5,7 +5,7 @@ import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
 import { of } from 'rxjs';
-import { defaultRuleSet, generatePlan, listActivities } from '../../../../engine/index';
+import { areaLimits, defaultRuleSet, generatePlan, listActivities } from '../../../../engine/index';
 import {
   ACTIVITY_KIND_LABELS,
   POSITION_STYLE,
@@ -18,6 +18,7 @@ import {
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 import { AuthStore } from '../../core/auth/auth-store';
 import { PlanPage } from './plan-page';
+import { PlanSession } from './services/plan-session';
 
 const NAMES = ['Ada P.', 'Ben O.', 'Cleo R.', 'Dev S.', 'Edie T.', 'Finn U.', 'Gia V.', 'Hal W.', 'Ines X.'];
 const ALL = [...NAMES, 'Jon Y.', 'Kit Z.', 'Lou A.', 'Max B.'];
@@ -496,8 +497,97 @@ describe('PlanPage', () => {
         { status: 409, statusText: 'Conflict' },
       );
     await settle(fixture);
-    expect(root.querySelector('[role="alert"]')!.textContent).toContain('The plan changed since version 1.');
+    // Said in the card whose button was tapped, not at the top of the page.
+    const card = smaller.closest('cw-station-card')!;
+    expect(card.querySelector('[data-testid="edit-feedback"]')!.textContent).toContain(
+      'That change was not saved: The plan changed since version 1.',
+    );
+    expect(root.querySelector('[data-testid="plan-announcement"]')!.textContent).toContain('not saved');
     const label = root.querySelector('cw-station-diagram svg')!.getAttribute('aria-label')!;
     expect(label).toContain(`${station.area.width} × ${station.area.length} m`);
+  });
+
+  it('greys out an area button at its limit and says the limit under it, from the engine', async () => {
+    // A small space: some station is at its largest (or smallest) area from the start.
+    const tight = await generatePlan({ ...REQUEST, space: { width: 24, length: 30 } });
+    const limits = areaLimits(tight, defaultRuleSet);
+    const [key, limit] = Object.entries(limits).find(([, l]) => l.larger || l.smaller)!;
+    const { fixture, root } = await setUp({ shown: tight });
+    await settle(fixture);
+    const [phaseIndex, stationId] = key.split(':');
+    const phaseEl = root.querySelectorAll('[data-testid="phase"]')[Number(phaseIndex)];
+    const card = phaseEl.querySelector(`[data-station="${stationId}"]`)!.closest('cw-station-card')!;
+    for (const size of ['larger', 'smaller'] as const) {
+      const button = card.querySelector<HTMLButtonElement>(`[data-testid="area-${size}"]`)!;
+      expect(button.disabled).toBe(!!limit[size]);
+      if (limit[size]) {
+        expect(card.querySelector('.cw-area-note')!.textContent).toContain(limit[size]);
+        expect(button.getAttribute('aria-describedby')).toBe(`area-note-${stationId}`);
+      }
+    }
+    expect(card.querySelector('.cw-area-note')!.textContent).not.toMatch(/p\d+-s\d+|beginner/);
+  });
+
+  it('does not send an edit the engine refuses, and says why in the card that asked', async () => {
+    const tight = await generatePlan({ ...REQUEST, space: { width: 24, length: 30 } });
+    const [key, limit] = Object.entries(areaLimits(tight, defaultRuleSet)).find(([, l]) => l.larger)!;
+    const [phaseIndex, stationId] = key.split(':');
+    const { fixture, http, root } = await setUp({ shown: tight });
+    // The button is greyed; a keyboard shortcut or a stale screen could still ask, so the session checks too.
+    const session = fixture.debugElement.injector.get(PlanSession);
+    await session.edit(
+      { type: 'resize-area', phaseIndex: Number(phaseIndex), stationId, step: 'larger' },
+      'Area made larger',
+      `area:${phaseIndex}:${stationId}`,
+    );
+    await settle(fixture);
+    http.expectNone({ method: 'PATCH', url: '/api/plans/plan-1' });
+    const phaseEl = root.querySelectorAll('[data-testid="phase"]')[Number(phaseIndex)];
+    const card = phaseEl.querySelector(`[data-station="${stationId}"]`)!.closest('cw-station-card')!;
+    expect(card.querySelector('[data-testid="edit-feedback"]')!.textContent).toContain(limit.larger!);
+    expect(root.querySelector('[data-testid="plan-announcement"]')!.textContent).toContain(
+      `Not changed. ${limit.larger}`,
+    );
+    // Said once, not again as the standing limit under the buttons.
+    expect(card.querySelectorAll('[data-testid="area-limit"]').length).toBe(limit.smaller ? 1 : 0);
+  });
+
+  it('names each move destination by station number and title, no two alike', async () => {
+    const { fixture, root } = await setUp();
+    const phaseIndex =
+      plan.phases.findIndex((p) => p.stations.length > 2) >= 0
+        ? plan.phases.findIndex((p) => p.stations.length > 2)
+        : plan.phases.findIndex((p) => p.stations.length > 1);
+    const phase = plan.phases[phaseIndex];
+    const first = phase.stations[0];
+    const phaseEl = root.querySelectorAll('[data-testid="phase"]')[phaseIndex];
+    phaseEl
+      .querySelector(`[data-player="${first.playerIds[0]}"] button.cw-move`)!
+      .dispatchEvent(new MouseEvent('click'));
+    await settle(fixture);
+    const labels = Array.from(document.querySelectorAll('.cw-move-to')).map((b) => b.textContent!.trim());
+    expect(labels).toHaveLength(phase.stations.length - 1);
+    expect(new Set(labels).size).toBe(labels.length);
+    phase.stations.slice(1).forEach((s, i) => {
+      expect(labels[i]).toBe(`To Station ${i + 2} · ${s.title}${s.format ? ` ${s.format}` : ''}`);
+    });
+  });
+
+  it('folds the notices on a phone to the first safety line and a count, the rest a tap away', async () => {
+    const { root } = await setUp({ phone: true, shown: training });
+    const box = root.querySelector<HTMLDetailsElement>('[data-testid="notices-folded"]')!;
+    expect(box.open).toBe(false);
+    const summary = box.querySelector('summary')!;
+    expect(summary.querySelector('[data-testid="safety-line"]')!.textContent).toContain(
+      `Safety: ${training.cautions[0].message}`,
+    );
+    const distinct = new Set([...training.warnings, ...training.cautions].map((n) => n.message));
+    expect(summary.textContent).toContain(`Read all ${distinct.size}`);
+    // Everything is in the box, each message once.
+    const items = Array.from(box.querySelectorAll('li')).map((li) => li.firstChild!.textContent!.trim());
+    expect(new Set(items).size).toBe(items.length);
+    expect(items).toHaveLength(distinct.size);
+    // No separate boxes push the first activity down.
+    expect(root.querySelector('section[data-testid="cautions"]')).toBeNull();
   });
 });

@@ -1,4 +1,13 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  signal,
+  untracked,
+} from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
@@ -6,6 +15,7 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
+import { NgTemplateOutlet } from '@angular/common';
 import { RouterLink } from '@angular/router';
 import { ACTIVITY_KINDS, type ActivityKind, type Phase } from '../../../../shared/types';
 import { CardPaper, PlansApi } from '../../core/api/plans-api';
@@ -18,12 +28,12 @@ import { shortDay } from '../../core/time/dates';
 import { PhaseTimeline } from './components/phase-timeline';
 import { PlanNotices } from './components/plan-notices';
 import { ShareDialog, ShareDialogData } from './components/share-dialog';
-import { PlayerMoveRequest, StationCard } from './components/station-card';
+import { CardFeedback, PlayerMoveRequest, StationCard } from './components/station-card';
 import { RegisterPanel } from './components/register-panel';
 import { WhyPanel } from './components/why-panel';
 import { PAPER_LABELS, PaperPreference } from './services/paper-preference';
 import { PlanHandover } from './services/plan-handover';
-import { PlanSession } from './services/plan-session';
+import { EditFeedback, PlanSession } from './services/plan-session';
 import { breakWords, changeoverWords, isBreak } from './services/plan-words';
 
 /** One kind's activities in the swap menu. */
@@ -43,6 +53,7 @@ interface SwapGroup {
     MatButtonToggleModule,
     MatIconModule,
     MatMenuModule,
+    NgTemplateOutlet,
     PhaseTimeline,
     PlanNotices,
     RegisterPanel,
@@ -92,14 +103,37 @@ export class PlanPage {
       const id = this.planId();
       this.session.open(id, handover.take(id));
     });
+    // The area buttons grey out at their limits: worked out again for every plan on screen.
+    effect(() => {
+      if (this.canEdit() && this.session.plan()) void untracked(() => this.session.refreshLimits());
+    });
   }
 
-  protected movePlayer(phaseIndex: number, move: PlayerMoveRequest, phase: Phase): void {
+  /** The last edit's answer when it belongs at `at` (the page, or a phase's swap button). */
+  protected feedbackAt(at: string): EditFeedback | null {
+    const answer = this.session.feedback();
+    return answer?.at === at ? answer : null;
+  }
+
+  /** The last edit's answer for one station card: under its area buttons or under its group. */
+  protected cardFeedback(phaseIndex: number, stationId: string): CardFeedback | null {
+    const answer = this.session.feedback();
+    if (!answer) return null;
+    const [control, ...place] = answer.at.split(':');
+    if ((control !== 'area' && control !== 'move') || place.join(':') !== `${phaseIndex}:${stationId}`) {
+      return null;
+    }
+    return { control, kind: answer.kind, lines: answer.lines };
+  }
+
+  protected movePlayer(phaseIndex: number, move: PlayerMoveRequest, phase: Phase, fromCard: string): void {
     const name = this.session.names().get(move.playerId) ?? 'Player';
-    const to = phase.stations.find((s) => s.id === move.toStationId)?.title ?? 'another station';
+    const index = phase.stations.findIndex((s) => s.id === move.toStationId);
+    const to = index >= 0 ? `station ${index + 1}, ${phase.stations[index].title}` : 'another station';
     void this.session.edit(
       { type: 'move-player', playerId: move.playerId, toStationId: move.toStationId, phaseIndex },
       `${name} moved to ${to} in ${phase.name}`,
+      `move:${phaseIndex}:${fromCard}`,
     );
   }
 
@@ -107,6 +141,7 @@ export class PlanPage {
     void this.session.edit(
       { type: 'resize-area', stationId, phaseIndex, step },
       `${title}: area made ${step}`,
+      `area:${phaseIndex}:${stationId}`,
     );
   }
 
@@ -136,6 +171,7 @@ export class PlanPage {
     void this.session.edit(
       { type: 'swap-activity', phaseIndex, activityId: activity.id },
       `Phase ${phaseIndex + 1} swapped to ${activity.title}`,
+      `swap:${phaseIndex}`,
     );
   }
 

@@ -24,16 +24,16 @@ export async function replanLocally(
   return replan(plan, change, (rules as typeof defaultRuleSet | null) ?? defaultRuleSet);
 }
 
-/** Steps a station easier or harder in the browser. */
+/** Steps a station easier or harder in the browser; `refused` says why it could not, in plain words. */
 export async function progressLocally(
   plan: Plan,
   phaseIndex: number,
   stationId: string,
   verdict: StationVerdict,
   rules: unknown,
-): Promise<Plan> {
-  const { applyProgression, defaultRuleSet } = await load();
-  return applyProgression(
+): Promise<{ plan: Plan; refused: string | null }> {
+  const { progressionOutcome, defaultRuleSet } = await load();
+  return progressionOutcome(
     plan,
     phaseIndex,
     stationId,

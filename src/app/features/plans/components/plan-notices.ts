@@ -26,36 +26,88 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
         }
       </ul>
     </ng-template>
-    @if (adultWarnings().length) {
-      <section
-        class="cw-notices cw-adults"
-        role="alert"
-        aria-labelledby="adults-heading"
-        data-testid="supervision"
-      >
-        <h2 id="adults-heading"><mat-icon aria-hidden="true">groups</mat-icon> Adults on the pitch</h2>
-        @if (supervision(); as s) {
-          @if (s.recommendedAdults) {
-            <p class="cw-ratio">
-              {{ s.children }} players · {{ s.adults }} adult{{ s.adults === 1 ? '' : 's' }} here · usual
-              guidance {{ s.ratio }}, so {{ s.recommendedAdults }} adults
-            </p>
-          }
+    <ng-template #ratio>
+      @if (supervision(); as s) {
+        @if (s.recommendedAdults) {
+          <p class="cw-ratio">
+            {{ s.children }} players · {{ s.adults }} adult{{ s.adults === 1 ? '' : 's' }} here · usual
+            guidance {{ s.ratio }}, so {{ s.recommendedAdults }} adults
+          </p>
         }
-        <ng-container *ngTemplateOutlet="list; context: { $implicit: adultWarnings() }" />
-      </section>
-    }
-    @if (cautions().length) {
-      <section class="cw-notices cw-cautions" aria-labelledby="cautions-heading" data-testid="cautions">
-        <h2 id="cautions-heading"><mat-icon aria-hidden="true">health_and_safety</mat-icon> Safety</h2>
-        <ng-container *ngTemplateOutlet="list; context: { $implicit: cautions() }" />
-      </section>
-    }
-    @if (otherWarnings().length) {
-      <section class="cw-notices cw-warnings" aria-labelledby="warnings-heading" data-testid="warnings">
-        <h2 id="warnings-heading"><mat-icon aria-hidden="true">warning</mat-icon> Check before you start</h2>
-        <ng-container *ngTemplateOutlet="list; context: { $implicit: otherWarnings() }" />
-      </section>
+      }
+    </ng-template>
+    @if (folded()) {
+      @if (safety().length || adultWarnings().length || otherWarnings().length) {
+        <details class="cw-notices cw-folded" data-testid="notices-folded">
+          <summary>
+            @if (safety()[0]; as first) {
+              <span class="cw-line cw-safety-line" data-testid="safety-line">
+                <mat-icon aria-hidden="true">health_and_safety</mat-icon>
+                <span class="cw-clip"><strong>Safety:</strong> {{ first.message }}</span>
+              </span>
+            }
+            @if (toCheck().length) {
+              <span class="cw-line">
+                <mat-icon aria-hidden="true">warning</mat-icon>
+                <span class="cw-clip"
+                  ><strong>{{ toCheck().length }} to check:</strong> {{ toCheck()[0].message }}</span
+                >
+              </span>
+            }
+            <span class="cw-more">
+              <mat-icon aria-hidden="true" class="cw-more-icon">expand_more</mat-icon>
+              <span class="cw-when-closed">{{
+                total() === 1 ? 'Read it in full' : 'Read all ' + total()
+              }}</span>
+              <span class="cw-when-open">Fold away</span>
+            </span>
+          </summary>
+          @if (adultWarnings().length) {
+            <h2 data-testid="supervision">
+              <mat-icon aria-hidden="true">groups</mat-icon> Adults on the pitch
+            </h2>
+            <ng-container *ngTemplateOutlet="ratio" />
+            <ng-container *ngTemplateOutlet="list; context: { $implicit: adultWarnings() }" />
+          }
+          @if (safety().length) {
+            <h2 data-testid="cautions"><mat-icon aria-hidden="true">health_and_safety</mat-icon> Safety</h2>
+            <ng-container *ngTemplateOutlet="list; context: { $implicit: safety() }" />
+          }
+          @if (otherWarnings().length) {
+            <h2 data-testid="warnings">
+              <mat-icon aria-hidden="true">warning</mat-icon> Check before you start
+            </h2>
+            <ng-container *ngTemplateOutlet="list; context: { $implicit: otherWarnings() }" />
+          }
+        </details>
+      }
+    } @else {
+      @if (adultWarnings().length) {
+        <section
+          class="cw-notices cw-adults"
+          role="alert"
+          aria-labelledby="adults-heading"
+          data-testid="supervision"
+        >
+          <h2 id="adults-heading"><mat-icon aria-hidden="true">groups</mat-icon> Adults on the pitch</h2>
+          <ng-container *ngTemplateOutlet="ratio" />
+          <ng-container *ngTemplateOutlet="list; context: { $implicit: adultWarnings() }" />
+        </section>
+      }
+      @if (safety().length) {
+        <section class="cw-notices cw-cautions" aria-labelledby="cautions-heading" data-testid="cautions">
+          <h2 id="cautions-heading"><mat-icon aria-hidden="true">health_and_safety</mat-icon> Safety</h2>
+          <ng-container *ngTemplateOutlet="list; context: { $implicit: safety() }" />
+        </section>
+      }
+      @if (otherWarnings().length) {
+        <section class="cw-notices cw-warnings" aria-labelledby="warnings-heading" data-testid="warnings">
+          <h2 id="warnings-heading">
+            <mat-icon aria-hidden="true">warning</mat-icon> Check before you start
+          </h2>
+          <ng-container *ngTemplateOutlet="list; context: { $implicit: otherWarnings() }" />
+        </section>
+      }
     }
   `,
   styles: `
@@ -108,6 +160,59 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
       font-size: 0.85rem;
       opacity: 0.85;
     }
+    /* Phones: one folded box; its summary keeps the first safety line and the count in view. */
+    .cw-folded {
+      background: var(--cw-warning-bg);
+      color: var(--cw-warning-fg);
+      border-color: #c2410c;
+      padding: 8px 12px;
+    }
+    .cw-folded summary {
+      display: grid;
+      gap: 4px;
+      cursor: pointer;
+      list-style: none;
+    }
+    .cw-folded summary::-webkit-details-marker {
+      display: none;
+    }
+    .cw-line {
+      display: flex;
+      align-items: center;
+      gap: 6px;
+      min-width: 0;
+    }
+    .cw-line mat-icon {
+      flex: none;
+    }
+    .cw-safety-line {
+      color: var(--cw-caution-fg);
+    }
+    .cw-clip {
+      overflow: hidden;
+      white-space: nowrap;
+      text-overflow: ellipsis;
+      min-width: 0;
+    }
+    .cw-more {
+      display: flex;
+      align-items: center;
+      gap: 4px;
+      min-height: 32px;
+      font-weight: 600;
+      text-decoration: underline;
+    }
+    .cw-folded[open] .cw-more-icon {
+      transform: rotate(180deg);
+    }
+    .cw-folded[open] .cw-when-closed,
+    .cw-folded:not([open]) .cw-when-open {
+      display: none;
+    }
+    .cw-folded h2 {
+      margin-top: 10px;
+      font-size: 1rem;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -118,11 +223,28 @@ export class PlanNotices {
   readonly cautions = input<Notice[]>([]);
   /** Children and adults against the usual ratio, shown beside the supervision warnings. */
   readonly supervision = input<Supervision | null>(null);
+  /** Phones: one box folded to the first safety line and a count, the rest behind a tap. */
+  readonly folded = input(false);
 
+  /** Each message once: a caution repeated as a warning, or a warning given twice, shows once. */
+  private readonly distinctWarnings = computed(() => {
+    const seen = new Set(this.cautions().map((c) => c.message));
+    return this.warnings().filter((w) => !seen.has(w.message) && seen.add(w.message));
+  });
   protected readonly adultWarnings = computed(() =>
-    this.warnings().filter((w) => SUPERVISION_CODES.has(w.code)),
+    this.distinctWarnings().filter((w) => SUPERVISION_CODES.has(w.code)),
   );
   protected readonly otherWarnings = computed(() =>
-    this.warnings().filter((w) => !SUPERVISION_CODES.has(w.code)),
+    this.distinctWarnings().filter((w) => !SUPERVISION_CODES.has(w.code)),
   );
+  /** The cautions, each message once. */
+  protected readonly safety = computed(() => distinct(this.cautions()));
+  /** What the folded box counts "to check": adults first, then the rest. */
+  protected readonly toCheck = computed(() => [...this.adultWarnings(), ...this.otherWarnings()]);
+  protected readonly total = computed(() => this.safety().length + this.toCheck().length);
+}
+
+function distinct(notices: Notice[]): Notice[] {
+  const seen = new Set<string>();
+  return notices.filter((n) => !seen.has(n.message) && seen.add(n.message));
 }

@@ -3,10 +3,21 @@ import { ChangeDetectionStrategy, Component, computed, input, output, signal } f
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
+import { NgTemplateOutlet } from '@angular/common';
 import { POSITION_STYLE, type Station } from '../../../../../shared/types';
 import { ACTIVITY_KIND_LABELS } from '../../../core/labels/plan-labels';
 import { readableOn, ROLE_TAGS, roleLines, startRoles } from '../services/plan-words';
 import { StationDiagram } from '../../../shared/components/station-diagram';
+
+/** Why the area cannot step larger or smaller (null where it can). */
+export type AreaStepLimits = Record<'larger' | 'smaller', string | null>;
+
+/** The last edit's answer for this card: under the area buttons or under the group. */
+export interface CardFeedback {
+  control: 'area' | 'move';
+  kind: 'refused' | 'problems' | 'not-saved';
+  lines: string[];
+}
 
 export interface PlayerMoveRequest {
   playerId: string;
@@ -21,7 +32,15 @@ export interface PlayerMoveRequest {
  */
 @Component({
   selector: 'cw-station-card',
-  imports: [CdkDropList, CdkDrag, MatButtonModule, MatIconModule, MatMenuModule, StationDiagram],
+  imports: [
+    CdkDropList,
+    CdkDrag,
+    MatButtonModule,
+    MatIconModule,
+    MatMenuModule,
+    NgTemplateOutlet,
+    StationDiagram,
+  ],
   templateUrl: './station-card.html',
   styleUrl: './station-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -42,13 +61,30 @@ export class StationCard {
   /** Whether the group, coaching points, steps and kit fold away until the coach opens them. */
   readonly collapsible = input(false);
 
+  /** Why the area buttons are at a limit, from the engine (null while not known). */
+  readonly areaLimits = input<AreaStepLimits | null>(null);
+  /** The answer to the coach's last edit on this card, shown beside the control they used. */
+  readonly feedback = input<CardFeedback | null>(null);
+
   /** Emits a player moved to another station of the phase. */
   readonly move = output<PlayerMoveRequest>();
   /** Emits a request to step the area larger or smaller. */
   readonly stepArea = output<'larger' | 'smaller'>();
 
   protected readonly kindLabels = ACTIVITY_KIND_LABELS;
-  protected readonly others = computed(() => this.siblings().filter((s) => s.id !== this.station().id));
+  /** The move menu's destinations, named by number and title so no two read alike. */
+  protected readonly others = computed(() =>
+    this.siblings()
+      .map((s, i) => ({ id: s.id, label: `Station ${i + 1} · ${s.title}${s.format ? ` ${s.format}` : ''}` }))
+      .filter((s) => s.id !== this.station().id),
+  );
+  /** The limit to say under the area buttons: the one the coach just ran into first. */
+  protected readonly limitLines = computed(() => {
+    const limits = this.areaLimits();
+    if (!limits) return [];
+    const shown = this.feedback()?.control === 'area' ? new Set(this.feedback()!.lines) : new Set<string>();
+    return [limits.smaller, limits.larger].filter((l): l is string => !!l && !shown.has(l));
+  });
 
   /** Sides and who is in goal for a game; attackers, defenders, servers and neutrals otherwise. */
   protected readonly roleLines = computed(() => roleLines(this.station(), (id) => this.name(id)));

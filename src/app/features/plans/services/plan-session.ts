@@ -4,8 +4,18 @@ import type { Notice, Plan, RuleSetDocument, SessionPlanDto } from '../../../../
 import type { PlanEdit } from '../../../../../shared/types/plan-edit';
 import { PlansApi } from '../../../core/api/plans-api';
 import { PlanRulesApi } from '../../../core/api/plan-rules-api';
-import { ActivityOption, BrowserEngine } from '../../../core/engine/browser-engine';
+import { ActivityOption, AreaLimits, BrowserEngine } from '../../../core/engine/browser-engine';
 import { problemMessage } from '../../../core/http/problem-message';
+
+/**
+ * What the last edit came to, shown beside the control that asked for it: `at` names the place
+ * (`area:phase:station`, `move:phase:station`, `swap:phase`), `lines` are in a coach's words.
+ */
+export interface EditFeedback {
+  at: string;
+  kind: 'refused' | 'problems' | 'not-saved';
+  lines: string[];
+}
 
 /**
  * One plan being looked at and edited: each edit is applied and re-checked by the engine in the
@@ -26,6 +36,10 @@ export class PlanSession {
   readonly error = signal<string | null>(null);
   /** Read out by screen readers after every change. */
   readonly announcement = signal('');
+  /** The last edit's refusal, problems or failed save, for the control that asked for it. */
+  readonly feedback = signal<EditFeedback | null>(null);
+  /** Why each station's area cannot step (by "phase:station"), for the area buttons. */
+  readonly limits = signal<AreaLimits>({});
 
   readonly names = computed(
     () => new Map((this.plan()?.request.players ?? []).map((p) => [p.id, p.name ?? p.id] as const)),
@@ -74,19 +88,39 @@ export class PlanSession {
     return engine.activities(plan, rules);
   }
 
-  /** Applies an edit in the browser, shows it, then saves it; a refused save puts the plan back. */
-  async edit(edit: PlanEdit, describe: string): Promise<void> {
+  /** Recomputes the area buttons' limits for the plan on screen (with the plan's own rules). */
+  async refreshLimits(): Promise<void> {
+    const saved = this.saved();
+    const plan = this.plan();
+    if (!saved || !plan) return;
+    const [engine, rules] = await Promise.all([this.engine.load(), this.rulesOf(saved)]);
+    if (this.plan() === plan) this.limits.set(engine.areaLimits(plan, rules));
+  }
+
+  /**
+   * Applies an edit in the browser, shows it, then saves it. An edit the engine cannot make is
+   * not sent; its reason goes beside the control (`at`). A refused save puts the plan back.
+   */
+  async edit(edit: PlanEdit, describe: string, at = 'page'): Promise<void> {
     const saved = this.saved();
     const before = this.plan();
     if (!saved || !before || this.busy()) return;
     this.busy.set(true);
     this.error.set(null);
+    this.feedback.set(null);
     try {
       const [engine, rules] = await Promise.all([this.engine.load(), this.rulesOf(saved)]);
-      const next = await engine.applyEdit(before, edit, rules);
+      const outcome = await engine.tryEdit(before, edit, rules);
+      if (outcome.refused) {
+        this.feedback.set({ at, kind: 'refused', lines: [outcome.refused] });
+        this.announcement.set(`Not changed. ${outcome.refused}`);
+        return;
+      }
+      const next = outcome.plan;
       const problems = engine.checkPlan(next, rules);
       this.plan.set(next);
       this.problems.set(problems);
+      if (problems.length) this.feedback.set({ at, kind: 'problems', lines: uniqueMessages(problems) });
       this.announcement.set(
         problems.length
           ? `${describe}. Re-checked: ${problems.length} problem${problems.length === 1 ? '' : 's'} to look at.`
@@ -99,10 +133,15 @@ export class PlanSession {
       this.plan.set(before);
       this.problems.set([]);
       const text = error instanceof Error && !('status' in error) ? error.message : problemMessage(error);
-      this.error.set(`That change was not saved: ${text}`);
+      this.feedback.set({ at, kind: 'not-saved', lines: [`That change was not saved: ${text}`] });
       this.announcement.set(`That change was not saved: ${text}`);
     } finally {
       this.busy.set(false);
     }
   }
+}
+
+/** Each message once, in order. */
+function uniqueMessages(notices: Notice[]): string[] {
+  return [...new Set(notices.map((n) => n.message))];
 }
