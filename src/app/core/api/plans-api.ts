@@ -58,6 +58,11 @@ export class PlansApi {
     return this.http.patch<SessionPlanDto>(`/api/plans/${id}`, body, { headers });
   }
 
+  /** Deletes a plan with its attendance and station feedback (the lead or a coach of its team). */
+  remove(id: string): Observable<void> {
+    return this.http.delete<void>(`/api/plans/${id}`);
+  }
+
   /** The printable card as a PDF file. */
   pdf(id: string, paper: CardPaper = 'a4'): Observable<Blob> {
     return this.http.get(`/api/plans/${id}/pdf`, { params: { paper }, responseType: 'blob' });

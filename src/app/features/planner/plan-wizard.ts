@@ -1,6 +1,12 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
-import { FormArray, NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import {
+  AbstractControl,
+  FormArray,
+  NonNullableFormBuilder,
+  ReactiveFormsModule,
+  Validators,
+} from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -78,6 +84,8 @@ export class PlanWizard {
   protected readonly presets = signal<SpacePreset[]>([]);
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
+  /** Guests already added to the team by an earlier try, by their row in the form. */
+  private readonly addedGuests = new WeakMap<AbstractControl, { teamId: string; name: string; id: string }>();
   protected readonly status = signal('');
   protected readonly kinds = PLAN_KINDS;
   protected readonly kindLabels = KIND_LABELS;
@@ -210,6 +218,8 @@ export class PlanWizard {
 
   /** Checks the request against the engine's schema, then asks the server for the plan. */
   protected async makePlan(): Promise<void> {
+    // A second tap while the first is under way (the schema check below waits) makes nothing.
+    if (this.sending()) return;
     this.error.set(null);
     this.form.markAllAsTouched();
     const team = this.team();
@@ -225,15 +235,16 @@ export class PlanWizard {
       this.error.set('Tick at least one player who is here.');
       return;
     }
+    this.sending.set(true);
     const schema = await loadApiSchema('plan-request');
     if (schema) {
       const errors = (await schemaCheck(schema))(request);
       if (Object.keys(errors).length) {
+        this.sending.set(false);
         this.showFieldErrors(errors);
         return;
       }
     }
-    this.sending.set(true);
     this.status.set('Making the plan…');
     let guestIds: string[];
     try {
@@ -272,11 +283,18 @@ export class PlanWizard {
    */
   private async registerGuests(teamId: string, guests: WizardValue['guests']): Promise<string[]> {
     const ids: string[] = [];
-    for (const guest of guests) {
-      const created = await firstValueFrom(
-        this.playersApi.create(teamId, { displayName: guest.name.trim(), goalkeeper: guest.goalkeeper }),
-      );
+    for (const [i, guest] of guests.entries()) {
+      const body = { displayName: guest.name.trim(), goalkeeper: guest.goalkeeper };
+      // A guest added before a plan that then failed is used again, not added a second time.
+      const row = this.guests.at(i);
+      const earlier = this.addedGuests.get(row);
+      if (earlier && earlier.teamId === teamId && earlier.name === body.displayName) {
+        ids.push(earlier.id);
+        continue;
+      }
+      const created = await firstValueFrom(this.playersApi.create(teamId, body));
       await firstValueFrom(this.playersApi.update(created.id, { active: false }));
+      this.addedGuests.set(row, { teamId, name: body.displayName, id: created.id });
       ids.push(created.id);
     }
     return ids;

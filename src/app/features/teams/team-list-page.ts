@@ -27,6 +27,8 @@ export class TeamListPage {
   protected readonly loaded = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly adding = signal(false);
+  /** True while a new team is being created. */
+  protected readonly saving = signal(false);
   protected readonly canAdd = computed(() => this.auth.hasRole('lead', 'coach'));
   protected readonly levelLabels = LEVEL_LABELS;
   protected readonly serverErrors = signal<Record<string, string>>({});
@@ -42,10 +44,13 @@ export class TeamListPage {
   }
 
   protected addTeam(value: TeamBody): void {
+    if (this.saving()) return;
+    this.saving.set(true);
     this.error.set(null);
     this.teamsApi.create(value).subscribe({
       next: (team) => void this.router.navigate(['/teams', team.id]),
       error: (error: unknown) => {
+        this.saving.set(false);
         this.serverErrors.set(problemFieldErrors(error));
         this.error.set(problemMessage(error));
       },

@@ -21,6 +21,8 @@ export class CsvImport {
   protected readonly preview = signal<CsvPreview | null>(null);
   protected readonly error = signal<string | null>(null);
   protected readonly done = signal<string | null>(null);
+  /** True while the previewed players are being added. */
+  protected readonly adding = signal(false);
 
   protected upload(files: FileList | null): void {
     const file = files?.[0];
@@ -46,15 +48,20 @@ export class CsvImport {
 
   protected confirm(): void {
     const preview = this.preview();
-    if (!preview) return;
+    if (!preview || this.adding()) return;
+    this.adding.set(true);
     this.playersApi.commitImport(this.teamId(), preview).subscribe({
       next: (players) => {
+        this.adding.set(false);
         const created = players.length;
         this.preview.set(null);
         this.done.set(`${created} player${created === 1 ? '' : 's'} added.`);
         this.imported.emit(created);
       },
-      error: (error: unknown) => this.error.set(problemMessage(error)),
+      error: (error: unknown) => {
+        this.adding.set(false);
+        this.error.set(problemMessage(error));
+      },
     });
   }
 }
