@@ -110,7 +110,9 @@ export function idempotency(dataSource: DataSource): RequestHandler {
       .then((rows) => {
         const row = rows[0];
         if (row?.claimed) {
+          let answered = false;
           keepFirstAnswer(res, async (status, headers, body) => {
+            answered = true;
             if (status >= 200 && status < 300)
               await preparedQuery(manager, 'idempotency-store', STORE_SQL, [
                 ...id,
@@ -119,6 +121,14 @@ export function idempotency(dataSource: DataSource): RequestHandler {
                 body,
               ]);
             else await preparedQuery(manager, 'idempotency-release', RELEASE_SQL, id);
+          });
+          // An answer that went out without res.send (a bare res.end()) keeps nothing either. A
+          // client that leaves early does not free the key: the answer is still kept when made.
+          res.once('finish', () => {
+            if (!answered)
+              preparedQuery(manager, 'idempotency-release', RELEASE_SQL, id).catch((error: unknown) =>
+                req.log?.error({ err: error }, 'could not free an Idempotency-Key'),
+              );
           });
           return next();
         }

@@ -242,6 +242,57 @@ describe('Idempotency-Key on creates', () => {
     expect(await teamsNamed('U13 Owls')).toBe(1);
   });
 
+  it('a client that gave up before the answer gets the first answer when it sends the plan again', async () => {
+    const key = randomUUID();
+    const body = {
+      teamId: squad.teamId,
+      date: '2026-12-19',
+      request: planRequest(squad.playerIds, { seed: 'gave-up' }),
+    };
+    const recordOf = async () =>
+      (
+        (await app.dataSource.query('SELECT status FROM idempotency_record WHERE key = $1', [key])) as {
+          status: number | null;
+        }[]
+      )[0];
+    // The team row locked, so the plan's INSERT waits: the client leaves while the plan is being made.
+    const lock = app.dataSource.createQueryRunner();
+    await lock.connect();
+    await lock.startTransaction();
+    try {
+      await lock.query('SELECT 1 FROM team WHERE id = $1 FOR UPDATE', [squad.teamId]);
+      const leaving = new AbortController();
+      const first = fetch(`${app.http.url}/api/plans`, {
+        method: 'POST',
+        headers: {
+          'content-type': 'application/json',
+          authorization: `Bearer ${club.coach.token}`,
+          'idempotency-key': key,
+        },
+        body: JSON.stringify(body),
+        signal: leaving.signal,
+      }).catch(() => null);
+      await expect.poll(recordOf, { timeout: 10_000, interval: 20 }).toEqual({ status: null });
+      leaving.abort();
+      await first;
+      // Long enough for the server to see the client go; the key must stay taken meanwhile.
+      await new Promise((resolve) => setTimeout(resolve, 300));
+      expect(await recordOf()).toEqual({ status: null });
+    } finally {
+      await lock.commitTransaction();
+      await lock.release();
+    }
+    await expect.poll(recordOf, { timeout: 10_000, interval: 20 }).toEqual({ status: 201 });
+    const again = await post('/api/plans', body, key);
+    expect(again.status).toBe(201);
+    expect(again.headers.get('idempotent-replayed')).toBe('true');
+    const stored = await count(
+      'SELECT count(*)::int AS n FROM session_plan WHERE "teamId" = $1 AND date = $2',
+      [squad.teamId, '2026-12-19'],
+    );
+    expect(stored).toBe(1);
+  });
+
   it('records expire after a day: an expired key makes a new row, and expired records are purged', async () => {
     const key = randomUUID();
     expect((await post('/api/teams', teamBody('U14 Elk'), key)).status).toBe(201);
