@@ -1,4 +1,4 @@
-import { HttpClient, HttpParams } from '@angular/common/http';
+import { HttpClient, HttpContext, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
 import type { Page, PlanSummaryDto, PlanRequest, SessionPlanDto } from '../../../../shared/types';
@@ -36,8 +36,9 @@ export interface UpdatePlanBody {
 export class PlansApi {
   private readonly http = inject(HttpClient);
 
-  create(body: CreatePlanBody): Observable<SessionPlanDto> {
-    return this.http.post<SessionPlanDto>('/api/plans', body);
+  /** A new plan; `context` may carry the form's Idempotency-Key (see RetryKey). */
+  create(body: CreatePlanBody, context?: HttpContext): Observable<SessionPlanDto> {
+    return this.http.post<SessionPlanDto>('/api/plans', body, { context });
   }
 
   list(query: PlanQuery = {}): Observable<Page<PlanSummaryDto>> {

@@ -3,6 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { TestBed } from '@angular/core/testing';
 import { firstValueFrom, retry } from 'rxjs';
 import { IDEMPOTENCY_KEY, idempotencyInterceptor } from './idempotency-interceptor';
+import { RetryKey } from './retry-key';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/;
 
@@ -121,5 +122,22 @@ describe('idempotencyInterceptor', () => {
     const { request, key } = keyOf('/api/plans');
     expect(key).toBe('wizard-key-0001');
     request.flush({});
+  });
+
+  it('a form sent again unchanged reuses its key; a changed form gets a new one', () => {
+    const form = new RetryKey();
+    const send = (body: object) => {
+      http.post('/api/teams', body, { context: form.for(body) }).subscribe({ error: () => undefined });
+      const { request, key } = keyOf('/api/teams');
+      request.flush(null, { status: 0, statusText: 'Unknown Error' });
+      return key;
+    };
+    const first = send({ name: 'U9 Moths', ageGroup: 'U9' });
+    expect(first).toMatch(UUID);
+    expect(send({ name: 'U9 Moths', ageGroup: 'U9' })).toBe(first);
+    const changed = send({ name: 'U9 Mayflies', ageGroup: 'U9' });
+    expect(changed).toMatch(UUID);
+    expect(changed).not.toBe(first);
+    expect(new RetryKey().for({ name: 'U9 Moths', ageGroup: 'U9' }).get(IDEMPOTENCY_KEY)).not.toBe(first);
   });
 });

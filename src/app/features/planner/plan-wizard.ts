@@ -35,6 +35,7 @@ import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { loadApiSchema } from '../../core/forms/api-schemas';
 import { schemaCheck } from '../../core/forms/schema-validator';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { RetryKey } from '../../core/http/retry-key';
 import { FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { isoDate } from '../../core/time/dates';
 import { buildPlanRequest, wizardFieldOf, type WizardValue } from './services/plan-request-builder';
@@ -84,6 +85,8 @@ export class PlanWizard {
   protected readonly presets = signal<SpacePreset[]>([]);
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
+  /** The plan's Idempotency-Key, kept while the answers stay the same. */
+  private readonly planKey = new RetryKey();
   /** Guests already added to the team by an earlier try, by their row in the form. */
   private readonly addedGuests = new WeakMap<AbstractControl, { teamId: string; name: string; id: string }>();
   protected readonly status = signal('');
@@ -255,26 +258,25 @@ export class PlanWizard {
       this.error.set(problemMessage(error));
       return;
     }
-    this.plansApi
-      .create({
-        teamId: team.id,
-        request: buildPlanRequest(team, this.roster(), value, guestIds),
-        date: raw.time.date || undefined,
-        kickOff: raw.time.kickOff || undefined,
-      })
-      .subscribe({
-        next: (saved) => {
-          this.handover.give(saved);
-          void this.router.navigate(['/plans', saved.id]);
-        },
-        error: (error: unknown) => {
-          this.sending.set(false);
-          this.status.set('');
-          const fields = problemFieldErrors(error);
-          this.showFieldErrors(fields);
-          this.error.set(problemMessage(error));
-        },
-      });
+    const body = {
+      teamId: team.id,
+      request: buildPlanRequest(team, this.roster(), value, guestIds),
+      date: raw.time.date || undefined,
+      kickOff: raw.time.kickOff || undefined,
+    };
+    this.plansApi.create(body, this.planKey.for(body)).subscribe({
+      next: (saved) => {
+        this.handover.give(saved);
+        void this.router.navigate(['/plans', saved.id]);
+      },
+      error: (error: unknown) => {
+        this.sending.set(false);
+        this.status.set('');
+        const fields = problemFieldErrors(error);
+        this.showFieldErrors(fields);
+        this.error.set(problemMessage(error));
+      },
+    });
   }
 
   /**

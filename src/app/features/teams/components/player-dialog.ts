@@ -10,6 +10,7 @@ import { PlayersApi } from '../../../core/api/players-api';
 import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
+import { RetryKey } from '../../../core/http/retry-key';
 
 /** The team a new player joins, or the player being edited. */
 export interface PlayerDialogData {
@@ -67,6 +68,7 @@ export class PlayerDialog {
   protected readonly message = controlMessage;
   /** True from the tap on Add or Save until the server has answered. */
   protected readonly saving = signal(false);
+  private readonly addKey = new RetryKey();
   protected readonly error = signal<string | null>(null);
   protected readonly form = inject(NonNullableFormBuilder).group({
     displayName: [this.player?.displayName ?? '', [Validators.required, Validators.maxLength(40)]],
@@ -88,7 +90,7 @@ export class PlayerDialog {
     }
     const call = this.player
       ? this.playersApi.update(this.player.id, body)
-      : this.playersApi.create(this.data.teamId, body);
+      : this.playersApi.create(this.data.teamId, body, this.addKey.for(body));
     call.subscribe({
       next: (saved) => this.ref.close(saved),
       error: (error: unknown) => {
