@@ -1,6 +1,7 @@
 import { Attendance } from './attendance';
 import { Club } from './club';
 import { Feedback } from './feedback';
+import { IdempotencyRecord } from './idempotency-record';
 import { Invitation } from './invitation';
 import { KitBag } from './kit-bag';
 import { Membership } from './membership';
@@ -18,6 +19,7 @@ export {
   Attendance,
   Club,
   Feedback,
+  IdempotencyRecord,
   Invitation,
   KitBag,
   Membership,
@@ -49,4 +51,5 @@ export const ENTITIES = [
   RuleSetChange,
   ScheduledSession,
   TeamCalendar,
+  IdempotencyRecord,
 ];

@@ -5,6 +5,7 @@ import { FeedbackGroupSize1764630000000 } from './1764630000000-feedback-group-s
 import { SixteenActivityKinds1764631000000 } from './1764631000000-sixteen-activity-kinds';
 import { TeamPinnedActivities1764632000000 } from './1764632000000-team-pinned-activities';
 import { PlanActivityIds1764633000000 } from './1764633000000-plan-activity-ids';
+import { IdempotencyRecords1764634000000 } from './1764634000000-idempotency-records';
 import { RegisterAndStationFeedback1764635000000 } from './1764635000000-register-and-station-feedback';
 import { TeamSchedule1764636000000 } from './1764636000000-team-schedule';
 
@@ -17,6 +18,7 @@ export const MIGRATIONS = [
   SixteenActivityKinds1764631000000,
   TeamPinnedActivities1764632000000,
   PlanActivityIds1764633000000,
+  IdempotencyRecords1764634000000,
   RegisterAndStationFeedback1764635000000,
   TeamSchedule1764636000000,
 ];

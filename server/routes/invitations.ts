@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { authRateLimit } from '../middleware/rate-limit';
+import { idempotency } from '../middleware/idempotency';
 import { requireRole } from '../middleware/require-role';
 import { validate } from '../middleware/validate';
 import { InvitationAcceptService, MemberService } from '../services/member-service';
@@ -13,6 +14,7 @@ export function invitationsRouter({ dataSource, config, mail, requireAuth }: Api
     new MemberService(scopeOf(req, dataSource), config, mail);
   const accepting = new InvitationAcceptService(dataSource, config);
   const limiter = authRateLimit(config);
+  const once = idempotency(dataSource);
 
   router.get(
     '/invitations/lookup',
@@ -33,6 +35,7 @@ export function invitationsRouter({ dataSource, config, mail, requireAuth }: Api
     requireAuth,
     requireRole('lead'),
     validate({ body: 'invitation-create' }),
+    once,
     async (req, res) => {
       res.status(201).json(await members(req).invite(req.body));
     },

@@ -2,6 +2,7 @@ import { Router, type Request } from 'express';
 import { authOf } from '../http/auth-context';
 import { ifMatchNumber } from '../http/detailed-problem';
 import { badRequest } from '../http/problem';
+import { idempotency } from '../middleware/idempotency';
 import { requireRole } from '../middleware/require-role';
 import { validate } from '../middleware/validate';
 import type { Paper } from '../pdf';
@@ -26,8 +27,9 @@ export function plansRouter({ dataSource, requireAuth, mail }: ApiDeps): Router 
   const cards = new PlanCardService(dataSource, mail);
   const id = validate({ params: 'id-param' });
   const planners = requireRole('lead', 'coach');
+  const once = idempotency(dataSource);
 
-  router.post('/plans', requireAuth, planners, validate({ body: 'plan-create' }), async (req, res) => {
+  router.post('/plans', requireAuth, planners, validate({ body: 'plan-create' }), once, async (req, res) => {
     const created = await plans.create(authOf(req), req.body);
     // The version as ETag, as GET /plans/:id answers, and no hash of the 22 kB body.
     res
@@ -55,6 +57,10 @@ export function plansRouter({ dataSource, requireAuth, mail }: ApiDeps): Router 
       res.setHeader('ETag', `"${dto.version}"`).json(dto);
     },
   );
+  router.delete('/plans/:id', requireAuth, planners, id, async (req, res) => {
+    await plans.remove(authOf(req), req.params['id'] as string);
+    res.status(204).end();
+  });
   router.get('/plans/:id/pdf', requireAuth, id, validate({ query: 'plan-pdf-query' }), async (req, res) => {
     const paper = (req.query as { paper: Paper }).paper;
     const { pdf, filename } = await cards.pdf(authOf(req), req.params['id'] as string, paper);
@@ -70,6 +76,7 @@ export function plansRouter({ dataSource, requireAuth, mail }: ApiDeps): Router 
     planners,
     id,
     validate({ body: 'plan-share' }),
+    once,
     async (req, res) => {
       res.status(202).json(await cards.share(authOf(req), req.params['id'] as string, req.body));
     },

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import multer from 'multer';
+import { idempotency } from '../middleware/idempotency';
 import { validate } from '../middleware/validate';
 import { PlayerService } from '../services/player-service';
 import { RosterImportService } from '../services/roster-import-service';
@@ -13,6 +14,7 @@ export const CSV_UPLOAD_LIMIT_BYTES = 1024 * 1024;
 export function playersRouter({ dataSource, config, requireAuth }: ApiDeps): Router {
   const router = Router();
   const id = validate({ params: 'id-param' });
+  const once = idempotency(dataSource);
   const players = (req: Parameters<typeof scopeOf>[0]) => new PlayerService(scopeOf(req, dataSource));
   const imports = (req: Parameters<typeof scopeOf>[0]) =>
     new RosterImportService(scopeOf(req, dataSource), config.jwtSecret);
@@ -36,6 +38,7 @@ export function playersRouter({ dataSource, config, requireAuth }: ApiDeps): Rou
     requireAuth,
     id,
     validate({ body: 'player-create' }),
+    once,
     async (req, res) => {
       res.status(201).json(await players(req).create(req.params['id'] as string, req.body));
     },
@@ -48,6 +51,7 @@ export function playersRouter({ dataSource, config, requireAuth }: ApiDeps): Rou
     requireAuth,
     id,
     validate({ body: 'player-import-commit' }),
+    once,
     async (req, res) => {
       res.status(201).json(await imports(req).commit(req.params['id'] as string, req.body));
     },

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { idempotency } from '../middleware/idempotency';
 import { validate } from '../middleware/validate';
 import { TeamService } from '../services/team-service';
 import type { ApiDeps } from './api-deps';
@@ -9,11 +10,12 @@ export function teamsRouter({ dataSource, requireAuth }: ApiDeps): Router {
   const router = Router();
   const service = (req: Parameters<typeof scopeOf>[0]) => new TeamService(scopeOf(req, dataSource));
   const id = validate({ params: 'id-param' });
+  const once = idempotency(dataSource);
 
   router.get('/teams', requireAuth, async (req, res) => {
     res.json(await service(req).list());
   });
-  router.post('/teams', requireAuth, validate({ body: 'team-create' }), async (req, res) => {
+  router.post('/teams', requireAuth, validate({ body: 'team-create' }), once, async (req, res) => {
     res.status(201).json(await service(req).create(req.body));
   });
   router.get('/teams/:id', requireAuth, id, async (req, res) => {

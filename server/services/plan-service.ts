@@ -169,6 +169,17 @@ export class PlanService {
     });
   }
 
+  /**
+   * Deletes a plan for the lead or a coach of its team (404 outside the club, 403 otherwise). Its
+   * attendance and station feedback go with it (ON DELETE CASCADE on both tables).
+   */
+  async remove(auth: AuthContext, id: string): Promise<void> {
+    const scope = new ClubScope(this.dataSource.manager, auth);
+    const row = await scope.plan(id);
+    await scope.teamToManage(row.teamId);
+    await this.dataSource.manager.getRepository(SessionPlan).delete({ id: row.id, clubId: auth.clubId });
+  }
+
   /** A whole plan from the client: it keeps the stored request, rules and seed, and must pass the engine's check. */
   private async replaceWhole(row: SessionPlan, sent: Plan, rules: RuleSetDocument): Promise<Plan> {
     const plan: Plan = { ...sent, request: row.plan.request, ruleSet: row.plan.ruleSet, seed: row.plan.seed };

@@ -12,6 +12,7 @@ import { provideRouter, withComponentInputBinding, withInMemoryScrolling } from 
 import { provideServiceWorker } from '@angular/service-worker';
 import { routes } from './app.routes';
 import { authInterceptor } from './core/auth/auth-interceptor';
+import { idempotencyInterceptor } from './core/http/idempotency-interceptor';
 import { loadingInterceptor } from './core/http/loading-interceptor';
 
 export const appConfig: ApplicationConfig = {
@@ -23,7 +24,10 @@ export const appConfig: ApplicationConfig = {
       withComponentInputBinding(),
       withInMemoryScrolling({ scrollPositionRestoration: 'top' }),
     ),
-    provideHttpClient(withFetch(), withInterceptors([loadingInterceptor, authInterceptor])),
+    provideHttpClient(
+      withFetch(),
+      withInterceptors([loadingInterceptor, idempotencyInterceptor, authInterceptor]),
+    ),
     // The icon font ships inside the app (material-symbols); no request leaves the closed network.
     provideAppInitializer(() => {
       inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');

@@ -8,6 +8,14 @@ declare module 'autocannon' {
       body?: string;
       connections?: number;
       duration?: number;
+      /** Changes each request before it is sent (here: a fresh Idempotency-Key on each). */
+      requests?: { setupRequest?: (request: RequestParams) => RequestParams }[];
+    }
+    interface RequestParams {
+      method?: string;
+      path?: string;
+      headers?: Record<string, string>;
+      body?: string;
     }
     interface Stats {
       average: number;

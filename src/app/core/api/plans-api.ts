@@ -1,4 +1,4 @@
-import { HttpClient, HttpParams } from '@angular/common/http';
+import { HttpClient, HttpContext, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
 import type { Page, PlanSummaryDto, PlanRequest, SessionPlanDto } from '../../../../shared/types';
@@ -38,8 +38,9 @@ export interface UpdatePlanBody {
 export class PlansApi {
   private readonly http = inject(HttpClient);
 
-  create(body: CreatePlanBody): Observable<SessionPlanDto> {
-    return this.http.post<SessionPlanDto>('/api/plans', body);
+  /** A new plan; `context` may carry the form's Idempotency-Key (see RetryKey). */
+  create(body: CreatePlanBody, context?: HttpContext): Observable<SessionPlanDto> {
+    return this.http.post<SessionPlanDto>('/api/plans', body, { context });
   }
 
   list(query: PlanQuery = {}): Observable<Page<PlanSummaryDto>> {
@@ -58,6 +59,11 @@ export class PlansApi {
   update(id: string, body: UpdatePlanBody, version?: number): Observable<SessionPlanDto> {
     const headers: Record<string, string> = version === undefined ? {} : { 'If-Match': String(version) };
     return this.http.patch<SessionPlanDto>(`/api/plans/${id}`, body, { headers });
+  }
+
+  /** Deletes a plan with its attendance and station feedback (the lead or a coach of its team). */
+  remove(id: string): Observable<void> {
+    return this.http.delete<void>(`/api/plans/${id}`);
   }
 
   /** The printable card as a PDF file. */

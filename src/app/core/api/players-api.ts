@@ -1,4 +1,4 @@
-import { HttpClient } from '@angular/common/http';
+import { HttpClient, HttpContext } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
 import type { CsvPreview, CsvPreviewRow, PlayerDto } from '../../../../shared/types';
@@ -20,8 +20,9 @@ export class PlayersApi {
     return this.http.get<PlayerDto[]>(`/api/teams/${teamId}/players`, { params });
   }
 
-  create(teamId: string, body: PlayerBody): Observable<PlayerDto> {
-    return this.http.post<PlayerDto>(`/api/teams/${teamId}/players`, body);
+  /** A new player; `context` may carry the form's Idempotency-Key (see RetryKey). */
+  create(teamId: string, body: PlayerBody, context?: HttpContext): Observable<PlayerDto> {
+    return this.http.post<PlayerDto>(`/api/teams/${teamId}/players`, body, { context });
   }
 
   update(id: string, body: Partial<PlayerBody>): Observable<PlayerDto> {

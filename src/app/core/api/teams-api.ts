@@ -1,4 +1,4 @@
-import { HttpClient } from '@angular/common/http';
+import { HttpClient, HttpContext } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { map, Observable } from 'rxjs';
 import type {
@@ -30,8 +30,9 @@ export class TeamsApi {
     return this.http.get<TeamDto>(`/api/teams/${id}`);
   }
 
-  create(body: TeamBody): Observable<TeamDto> {
-    return this.http.post<TeamDto>('/api/teams', body);
+  /** A new team; `context` may carry the form's Idempotency-Key (see RetryKey). */
+  create(body: TeamBody, context?: HttpContext): Observable<TeamDto> {
+    return this.http.post<TeamDto>('/api/teams', body, { context });
   }
 
   update(id: string, body: Partial<TeamBody>): Observable<TeamDto> {

@@ -52,6 +52,9 @@ export class AcceptInvitationPage {
   }
 
   protected async submit(): Promise<void> {
+    // Off from the tap, before the check below waits: a second tap sends nothing.
+    if (this.sending()) return;
+    this.sending.set(true);
     this.error.set(null);
     const value = this.form.getRawValue();
     const check = await checkAgainstSchema(
@@ -61,10 +64,10 @@ export class AcceptInvitationPage {
       LABELS,
     );
     if (!check.ok) {
+      this.sending.set(false);
       this.error.set(check.unmatched.join(' ') || null);
       return;
     }
-    this.sending.set(true);
     this.authApi.acceptInvitation(this.token(), value).subscribe({
       next: (response) => {
         this.auth.signIn(response);

@@ -45,14 +45,17 @@ export class CreateClubPage {
   protected readonly message = controlMessage;
 
   protected async submit(): Promise<void> {
+    // Off from the tap, before the check below waits: a second tap sends nothing.
+    if (this.sending()) return;
+    this.sending.set(true);
     this.error.set(null);
     const value = this.form.getRawValue();
     const check = await checkAgainstSchema(this.form, 'auth-register', value, LABELS);
     if (!check.ok) {
+      this.sending.set(false);
       this.error.set(check.unmatched.join(' ') || null);
       return;
     }
-    this.sending.set(true);
     this.authApi.createClub(value).subscribe({
       next: (response) => {
         this.auth.signIn(response);

@@ -43,6 +43,9 @@ export class SignInPage {
   protected readonly message = controlMessage;
 
   protected async submit(): Promise<void> {
+    // Off from the tap, before the check below waits: a second tap sends nothing.
+    if (this.sending()) return;
+    this.sending.set(true);
     this.error.set(null);
     const value = this.form.getRawValue();
     const check = await checkAgainstSchema(this.form, 'auth-login', value, {
@@ -50,10 +53,10 @@ export class SignInPage {
       password: 'Password',
     });
     if (!check.ok) {
+      this.sending.set(false);
       this.error.set(check.unmatched.join(' ') || null);
       return;
     }
-    this.sending.set(true);
     this.authApi.signIn(value).subscribe({
       next: (response) => {
         this.auth.signIn(response);

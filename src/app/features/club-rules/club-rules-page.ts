@@ -216,6 +216,7 @@ export class ClubRulesPage {
   }
 
   protected rollbackTo(version: RuleSetDto): void {
+    if (this.busy()) return;
     if (!confirm(`Publish version ${version.version} again? New plans will use it.`)) return;
     this.run(this.api.rollback(version.id), (published) => {
       this.notice.set(
@@ -250,6 +251,8 @@ export class ClubRulesPage {
   }
 
   private run<T>(call: import('rxjs').Observable<T>, next: (value: T) => void): void {
+    // One call at a time: a second tap on Start editing, Publish or Roll back sends nothing.
+    if (this.busy()) return;
     this.busy.set(true);
     this.error.set(null);
     call.subscribe({

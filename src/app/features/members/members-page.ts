@@ -196,6 +196,7 @@ export class MembersPage {
   }
 
   protected sendInvitation(): void {
+    if (this.sending()) return;
     if (this.form.invalid) {
       this.form.markAllAsTouched();
       return;

@@ -52,6 +52,7 @@ import { NumberField } from '../../core/forms/number-field';
 import { schemaNumberValidators } from '../../core/forms/schema-limits';
 import { schemaCheck, type SchemaCheck } from '../../core/forms/schema-validator';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { RetryKey } from '../../core/http/retry-key';
 import { FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { SCHEDULE_KIND_LABELS, sessionDay } from '../../core/labels/schedule-labels';
 import { isoDate } from '../../core/time/dates';
@@ -149,6 +150,10 @@ export class PlanWizard {
   protected readonly presets = signal<SpacePreset[]>([]);
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
+  /** The plan's Idempotency-Key, kept while the answers stay the same. */
+  private readonly planKey = new RetryKey();
+  /** Guests already added to the team by an earlier try, by their row in the form. */
+  private readonly addedGuests = new WeakMap<AbstractControl, { teamId: string; name: string; id: string }>();
   protected readonly status = signal('');
   protected readonly kinds = PLAN_KINDS;
   protected readonly kindLabels = KIND_LABELS;
@@ -428,6 +433,8 @@ export class PlanWizard {
 
   /** Checks the request against the engine's schema, then asks the server for the plan. */
   protected async makePlan(): Promise<void> {
+    // A second tap while the first is under way (the schema check below waits) makes nothing.
+    if (this.sending()) return;
     this.error.set(null);
     this.form.markAllAsTouched();
     const team = this.team();
@@ -450,15 +457,16 @@ export class PlanWizard {
       this.error.set('Tick at least one player who is here.');
       return;
     }
+    this.sending.set(true);
     const schema = await loadApiSchema('plan-request');
     if (schema) {
       const errors = (await schemaCheck(schema))(request);
       if (Object.keys(errors).length) {
+        this.sending.set(false);
         this.showFieldErrors(errors);
         return;
       }
     }
-    this.sending.set(true);
     this.status.set('Making the plan…');
     let guestIds: string[];
     try {
@@ -469,27 +477,26 @@ export class PlanWizard {
       this.error.set(problemMessage(error));
       return;
     }
-    this.plansApi
-      .create({
-        teamId: team.id,
-        request: buildPlanRequest(team, this.roster(), value, guestIds),
-        date: raw.time.date || undefined,
-        kickOff: raw.time.kickOff || undefined,
-        scheduledSessionId: this.scheduledSessionId,
-      })
-      .subscribe({
-        next: (saved) => {
-          this.handover.give(saved);
-          void this.router.navigate(['/plans', saved.id]);
-        },
-        error: (error: unknown) => {
-          this.sending.set(false);
-          this.status.set('');
-          const fields = problemFieldErrors(error);
-          this.showFieldErrors(fields);
-          this.error.set(problemMessage(error));
-        },
-      });
+    const body = {
+      teamId: team.id,
+      request: buildPlanRequest(team, this.roster(), value, guestIds),
+      date: raw.time.date || undefined,
+      kickOff: raw.time.kickOff || undefined,
+      scheduledSessionId: this.scheduledSessionId,
+    };
+    this.plansApi.create(body, this.planKey.for(body)).subscribe({
+      next: (saved) => {
+        this.handover.give(saved);
+        void this.router.navigate(['/plans', saved.id]);
+      },
+      error: (error: unknown) => {
+        this.sending.set(false);
+        this.status.set('');
+        const fields = problemFieldErrors(error);
+        this.showFieldErrors(fields);
+        this.error.set(problemMessage(error));
+      },
+    });
   }
 
   /**
@@ -498,11 +505,18 @@ export class PlanWizard {
    */
   private async registerGuests(teamId: string, guests: WizardValue['guests']): Promise<string[]> {
     const ids: string[] = [];
-    for (const guest of guests) {
-      const created = await firstValueFrom(
-        this.playersApi.create(teamId, { displayName: guest.name.trim(), goalkeeper: guest.goalkeeper }),
-      );
+    for (const [i, guest] of guests.entries()) {
+      const body = { displayName: guest.name.trim(), goalkeeper: guest.goalkeeper };
+      // A guest added before a plan that then failed is used again, not added a second time.
+      const row = this.guests.at(i);
+      const earlier = this.addedGuests.get(row);
+      if (earlier && earlier.teamId === teamId && earlier.name === body.displayName) {
+        ids.push(earlier.id);
+        continue;
+      }
+      const created = await firstValueFrom(this.playersApi.create(teamId, body));
       await firstValueFrom(this.playersApi.update(created.id, { active: false }));
+      this.addedGuests.set(row, { teamId, name: body.displayName, id: created.id });
       ids.push(created.id);
     }
     return ids;

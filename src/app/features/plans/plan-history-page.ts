@@ -1,7 +1,9 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatPaginatorModule, PageEvent } from '@angular/material/paginator';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatTableModule } from '@angular/material/table';
 import { RouterLink } from '@angular/router';
 import type { PlanSummaryDto, TeamDto } from '../../../../shared/types';
@@ -11,6 +13,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { problemMessage } from '../../core/http/problem-message';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay } from '../../core/time/dates';
+import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
 
 /** A team's past plans, newest first, each reusable for today with today's players. */
 @Component({
@@ -24,6 +27,8 @@ export class PlanHistoryPage {
   private readonly plansApi = inject(PlansApi);
   private readonly teamsApi = inject(TeamsApi);
   private readonly auth = inject(AuthStore);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
 
   readonly teamId = input.required<string>();
 
@@ -63,5 +68,23 @@ export class PlanHistoryPage {
 
   protected changePage(event: PageEvent): void {
     this.pageIndex.set(event.pageIndex);
+  }
+
+  /** Asks, deletes, then shows the page again without the plan and says what went. */
+  protected deletePlan(plan: PlanSummaryDto): void {
+    this.dialog
+      .open<DeletePlanDialog, PlanSummaryDto, boolean>(DeletePlanDialog, {
+        data: plan,
+        width: '460px',
+        maxWidth: 'calc(100vw - 32px)',
+      })
+      .afterClosed()
+      .subscribe((deleted) => {
+        if (!deleted) return;
+        this.snackBar.open(`${planName(plan)} deleted.`, undefined, { duration: 5000, politeness: 'polite' });
+        // The last plan of a page gone: show the page before it.
+        if (this.plans().length === 1 && this.pageIndex() > 0) this.pageIndex.update((i) => i - 1);
+        else this.load(this.teamId(), this.pageIndex());
+      });
   }
 }

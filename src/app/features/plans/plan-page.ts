@@ -16,7 +16,7 @@ import { MatMenuModule } from '@angular/material/menu';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
 import { NgTemplateOutlet } from '@angular/common';
-import { RouterLink } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import { ACTIVITY_KINDS, type ActivityKind, type Phase } from '../../../../shared/types';
 import { CardPaper, PlansApi } from '../../core/api/plans-api';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
@@ -25,6 +25,7 @@ import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay } from '../../core/time/dates';
+import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
 import { PhaseTimeline } from './components/phase-timeline';
 import { PlanNotices } from './components/plan-notices';
 import { ShareDialog, ShareDialogData } from './components/share-dialog';
@@ -72,6 +73,7 @@ export class PlanPage {
   private readonly snackBar = inject(MatSnackBar);
   private readonly auth = inject(AuthStore);
   private readonly paperPreference = inject(PaperPreference);
+  private readonly router = inject(Router);
 
   readonly planId = input.required<string>();
 
@@ -221,6 +223,27 @@ export class PlanPage {
             politeness: 'polite',
           });
         }
+      });
+  }
+
+  /** Asks, deletes, then goes to the team's past plans and says what went. */
+  protected deletePlan(): void {
+    const saved = this.session.saved();
+    if (!saved) return;
+    this.dialog
+      .open<DeletePlanDialog, typeof saved, boolean>(DeletePlanDialog, {
+        data: saved,
+        width: '460px',
+        maxWidth: 'calc(100vw - 32px)',
+      })
+      .afterClosed()
+      .subscribe((deleted) => {
+        if (!deleted) return;
+        this.snackBar.open(`${planName(saved)} deleted.`, undefined, {
+          duration: 5000,
+          politeness: 'polite',
+        });
+        void this.router.navigate(['/teams', saved.teamId, 'plans']);
       });
   }
 }

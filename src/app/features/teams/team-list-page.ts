@@ -7,6 +7,7 @@ import type { TeamDto } from '../../../../shared/types';
 import { TeamsApi, type TeamBody } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { RetryKey } from '../../core/http/retry-key';
 import { LEVEL_LABELS } from '../../core/labels/plan-labels';
 import { NoTeamYet } from '../../shared/components/no-team-yet';
 import { TeamDefaultsForm } from './components/team-defaults-form';
@@ -28,6 +29,9 @@ export class TeamListPage {
   protected readonly loaded = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly adding = signal(false);
+  /** True while a new team is being created. */
+  protected readonly saving = signal(false);
+  private readonly teamKey = new RetryKey();
   protected readonly canAdd = computed(() => this.auth.hasRole('lead', 'coach'));
   protected readonly levelLabels = LEVEL_LABELS;
   protected readonly serverErrors = signal<Record<string, string>>({});
@@ -43,10 +47,13 @@ export class TeamListPage {
   }
 
   protected addTeam(value: TeamBody): void {
+    if (this.saving()) return;
+    this.saving.set(true);
     this.error.set(null);
-    this.teamsApi.create(value).subscribe({
+    this.teamsApi.create(value, this.teamKey.for(value)).subscribe({
       next: (team) => void this.router.navigate(['/teams', team.id]),
       error: (error: unknown) => {
+        this.saving.set(false);
         this.serverErrors.set(problemFieldErrors(error));
         this.error.set(problemMessage(error));
       },

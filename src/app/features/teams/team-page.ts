@@ -18,7 +18,7 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 import type { KitBagDto, MemberDto, PlayerDto, TeamDto } from '../../../../shared/types';
 import { MembersApi } from '../../core/api/members-api';
-import { PlayerBody, PlayersApi } from '../../core/api/players-api';
+import { PlayersApi } from '../../core/api/players-api';
 import { TeamBody, TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemMessage } from '../../core/http/problem-message';
@@ -26,7 +26,7 @@ import { LEVEL_LABELS } from '../../core/labels/plan-labels';
 import { CsvImport } from './components/csv-import';
 import { DeleteTeamData, DeleteTeamDialog } from './components/delete-team-dialog';
 import { KitBagForm } from './components/kit-bag-form';
-import { PlayerDialog } from './components/player-dialog';
+import { PlayerDialog, PlayerDialogData } from './components/player-dialog';
 import { PlayersTable } from './components/players-table';
 import { RemovePlayerDialog } from './components/remove-player-dialog';
 import { TeamDefaultsForm } from './components/team-defaults-form';
@@ -110,20 +110,15 @@ export class TeamPage {
 
   protected openPlayer(player: PlayerDto | null): void {
     this.dialog
-      .open<PlayerDialog, PlayerDto | null, PlayerBody>(PlayerDialog, { data: player, width: '420px' })
+      .open<PlayerDialog, PlayerDialogData, PlayerDto>(PlayerDialog, {
+        data: { teamId: this.teamId(), player },
+        width: '420px',
+      })
       .afterClosed()
-      .subscribe((body) => {
-        if (!body) return;
-        const call = player
-          ? this.playersApi.update(player.id, body)
-          : this.playersApi.create(this.teamId(), body);
-        call.subscribe({
-          next: () => {
-            this.say(player ? `${body.displayName} saved.` : `${body.displayName} added.`);
-            this.loadPlayers();
-          },
-          error: (error: unknown) => this.error.set(problemMessage(error)),
-        });
+      .subscribe((saved) => {
+        if (!saved) return;
+        this.say(player ? `${saved.displayName} saved.` : `${saved.displayName} added.`);
+        this.loadPlayers();
       });
   }
 

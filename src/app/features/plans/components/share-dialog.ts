@@ -75,7 +75,9 @@ export interface ShareDialogData {
       </mat-dialog-content>
       <mat-dialog-actions align="end">
         <button mat-button type="button" mat-dialog-close>Cancel</button>
-        <button mat-flat-button type="submit" [disabled]="sending()" data-testid="share-send">Send</button>
+        <button mat-flat-button type="submit" [disabled]="sending()" data-testid="share-send">
+          {{ sending() ? 'Sending…' : 'Send' }}
+        </button>
       </mat-dialog-actions>
     </form>
   `,
@@ -96,6 +98,9 @@ export class ShareDialog {
   });
 
   protected async send(): Promise<void> {
+    // Set before the schema check, which waits: a second tap meanwhile sends nothing.
+    if (this.sending()) return;
+    this.sending.set(true);
     const recipients = [...new Set(parseRecipients(this.form.controls.recipients.value))];
     const message = this.form.controls.message.value.trim();
     const body = { recipients, ...(message ? { message } : {}) };
@@ -103,8 +108,10 @@ export class ShareDialog {
       recipients: 'Recipients',
       message: 'Note',
     });
-    if (!check.ok) return;
-    this.sending.set(true);
+    if (!check.ok) {
+      this.sending.set(false);
+      return;
+    }
     this.plansApi.share(this.data.planId, recipients, message, this.data.paper).subscribe({
       next: () => this.ref.close(recipients.length),
       error: (error: unknown) => {

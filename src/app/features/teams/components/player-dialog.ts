@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -6,11 +6,23 @@ import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/materia
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import type { PlayerDto } from '../../../../../shared/types';
-import type { PlayerBody } from '../../../core/api/players-api';
-import { controlMessage } from '../../../core/forms/form-errors';
+import { PlayersApi } from '../../../core/api/players-api';
+import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
+import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
+import { RetryKey } from '../../../core/http/retry-key';
 
-/** Adds or edits one player: a first name and initial is enough, no contact details. */
+/** The team a new player joins, or the player being edited. */
+export interface PlayerDialogData {
+  teamId: string;
+  player: PlayerDto | null;
+}
+
+/**
+ * Adds or edits one player: a first name and initial is enough, no contact details. Saves itself
+ * and closes with the saved player; while saving the button is off, and a refusal stays here with
+ * the name as typed.
+ */
 @Component({
   selector: 'cw-player-dialog',
   imports: [
@@ -22,9 +34,12 @@ import { checkAgainstSchema } from '../../../core/forms/schema-form';
     MatButtonModule,
   ],
   template: `
-    <h2 mat-dialog-title>{{ data ? 'Edit player' : 'Add a player' }}</h2>
+    <h2 mat-dialog-title>{{ player ? 'Edit player' : 'Add a player' }}</h2>
     <form [formGroup]="form" (ngSubmit)="save()" novalidate>
       <mat-dialog-content>
+        @if (error(); as text) {
+          <p class="cw-form-error" role="alert">{{ text }}</p>
+        }
         <mat-form-field appearance="outline" class="cw-wide">
           <mat-label>Name shown on plans</mat-label>
           <input matInput formControlName="displayName" required cdkFocusInitial />
@@ -35,7 +50,9 @@ import { checkAgainstSchema } from '../../../core/forms/schema-form';
       </mat-dialog-content>
       <mat-dialog-actions align="end">
         <button mat-button type="button" mat-dialog-close>Cancel</button>
-        <button mat-flat-button type="submit">{{ data ? 'Save' : 'Add' }}</button>
+        <button mat-flat-button type="submit" [disabled]="saving()" data-testid="save-player">
+          {{ saving() ? 'Saving…' : player ? 'Save' : 'Add' }}
+        </button>
       </mat-dialog-actions>
     </form>
   `,
@@ -43,20 +60,44 @@ import { checkAgainstSchema } from '../../../core/forms/schema-form';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class PlayerDialog {
-  protected readonly data = inject<PlayerDto | null>(MAT_DIALOG_DATA);
-  private readonly ref = inject<MatDialogRef<PlayerDialog, PlayerBody>>(MatDialogRef);
+  private readonly data = inject<PlayerDialogData>(MAT_DIALOG_DATA);
+  private readonly playersApi = inject(PlayersApi);
+  private readonly ref = inject<MatDialogRef<PlayerDialog, PlayerDto>>(MatDialogRef);
+  /** The player being edited; null when adding one. */
+  protected readonly player = this.data.player;
   protected readonly message = controlMessage;
+  /** True from the tap on Add or Save until the server has answered. */
+  protected readonly saving = signal(false);
+  private readonly addKey = new RetryKey();
+  protected readonly error = signal<string | null>(null);
   protected readonly form = inject(NonNullableFormBuilder).group({
-    displayName: [this.data?.displayName ?? '', [Validators.required, Validators.maxLength(40)]],
-    goalkeeper: [this.data?.goalkeeper ?? false],
+    displayName: [this.player?.displayName ?? '', [Validators.required, Validators.maxLength(40)]],
+    goalkeeper: [this.player?.goalkeeper ?? false],
   });
 
   protected async save(): Promise<void> {
+    if (this.saving()) return;
+    this.saving.set(true);
+    this.error.set(null);
     const value = this.form.getRawValue();
     const body = { ...value, displayName: value.displayName.trim() };
-    const check = await checkAgainstSchema(this.form, this.data ? 'player-update' : 'player-create', body, {
+    const check = await checkAgainstSchema(this.form, this.player ? 'player-update' : 'player-create', body, {
       displayName: 'Name',
     });
-    if (check.ok) this.ref.close(body);
+    if (!check.ok) {
+      this.saving.set(false);
+      return;
+    }
+    const call = this.player
+      ? this.playersApi.update(this.player.id, body)
+      : this.playersApi.create(this.data.teamId, body, this.addKey.for(body));
+    call.subscribe({
+      next: (saved) => this.ref.close(saved),
+      error: (error: unknown) => {
+        this.saving.set(false);
+        const unmatched = applyFieldErrors(this.form, problemFieldErrors(error));
+        this.error.set([problemMessage(error), ...unmatched].join(' '));
+      },
+    });
   }
 }

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, effect, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, effect, inject, input, output, signal } from '@angular/core';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -48,6 +48,8 @@ export class TeamDefaultsForm {
   readonly cancelable = input(false);
   /** Field messages from a refused save, pinned to their inputs. */
   readonly serverErrors = input<Record<string, string>>({});
+  /** True while the parent's save is under way: the button is off and says so. */
+  readonly pending = input(false);
   readonly save = output<TeamBody>();
   readonly dismiss = output<void>();
 
@@ -55,6 +57,8 @@ export class TeamDefaultsForm {
   protected readonly levels = LEVELS;
   protected readonly levelLabels = LEVEL_LABELS;
   protected readonly message = controlMessage;
+  /** True while the value is checked against the schema, before `save` is emitted. */
+  protected readonly checking = signal(false);
   private readonly metres = [Validators.required, Validators.min(5), Validators.max(130)];
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', Validators.required],
@@ -72,8 +76,14 @@ export class TeamDefaultsForm {
   }
 
   protected async submit(): Promise<void> {
-    const value = this.form.getRawValue();
-    const check = await checkAgainstSchema(this.form, this.schemaName(), value, LABELS);
-    if (check.ok) this.save.emit(value);
+    if (this.pending() || this.checking()) return;
+    this.checking.set(true);
+    try {
+      const value = this.form.getRawValue();
+      const check = await checkAgainstSchema(this.form, this.schemaName(), value, LABELS);
+      if (check.ok) this.save.emit(value);
+    } finally {
+      this.checking.set(false);
+    }
   }
 }

@@ -1,0 +1,88 @@
+import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
+import type { PlanSummaryDto } from '../../../../../shared/types';
+import { PlansApi } from '../../../core/api/plans-api';
+import { problemMessage } from '../../../core/http/problem-message';
+import { KIND_LABELS } from '../../../core/labels/plan-labels';
+import { shortDay } from '../../../core/time/dates';
+
+/** "Training session of Tue 1 Dec for U10 Kestrels": how a plan is named when it is deleted. */
+export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'>): string {
+  const day = plan.date ? ` of ${shortDay(plan.date)}` : '';
+  return `${KIND_LABELS[plan.kind]}${day} for ${plan.teamName}`;
+}
+
+/**
+ * Asks before a plan is deleted, saying what goes with it, and deletes it. Closes with `true` once
+ * the server has deleted it; a refusal stays in the dialog so the coach can read it.
+ */
+@Component({
+  selector: 'cw-delete-plan-dialog',
+  imports: [MatDialogModule, MatButtonModule],
+  template: `
+    <h2 mat-dialog-title>Delete this plan?</h2>
+    <mat-dialog-content>
+      <p>
+        <strong>{{ name }}</strong>
+      </p>
+      <ul class="cw-consequences">
+        <li>The plan goes for everyone in the club, with its stations and groups.</li>
+        <li>Who came and how each station went in this session are deleted with it.</li>
+        <li>The players stay on the team.</li>
+      </ul>
+      <p>You can't undo this.</p>
+      @if (error(); as text) {
+        <p class="cw-form-error" role="alert">{{ text }}</p>
+      }
+    </mat-dialog-content>
+    <mat-dialog-actions align="end">
+      <button mat-button type="button" mat-dialog-close cdkFocusInitial>Keep plan</button>
+      <button
+        mat-flat-button
+        type="button"
+        class="cw-danger"
+        [disabled]="busy()"
+        data-testid="confirm-delete-plan"
+        (click)="deletePlan()"
+      >
+        {{ busy() ? 'Deleting…' : 'Delete plan' }}
+      </button>
+    </mat-dialog-actions>
+  `,
+  styles: `
+    .cw-consequences {
+      margin: 0 0 12px;
+      padding-left: 20px;
+      li + li {
+        margin-top: 4px;
+      }
+    }
+    .cw-danger {
+      --mat-button-filled-container-color: var(--mat-sys-error);
+      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
+    }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class DeletePlanDialog {
+  private readonly plansApi = inject(PlansApi);
+  private readonly ref = inject<MatDialogRef<DeletePlanDialog, boolean>>(MatDialogRef);
+  private readonly plan = inject<PlanSummaryDto>(MAT_DIALOG_DATA);
+  protected readonly name = planName(this.plan);
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+
+  protected deletePlan(): void {
+    if (this.busy()) return;
+    this.busy.set(true);
+    this.error.set(null);
+    this.plansApi.remove(this.plan.id).subscribe({
+      next: () => this.ref.close(true),
+      error: (error: unknown) => {
+        this.busy.set(false);
+        this.error.set(problemMessage(error));
+      },
+    });
+  }
+}
