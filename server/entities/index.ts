@@ -1,6 +1,7 @@
 import { Attendance } from './attendance';
 import { Club } from './club';
 import { Feedback } from './feedback';
+import { HelperLink } from './helper-link';
 import { Invitation } from './invitation';
 import { KitBag } from './kit-bag';
 import { Membership } from './membership';
@@ -16,6 +17,7 @@ export {
   Attendance,
   Club,
   Feedback,
+  HelperLink,
   Invitation,
   KitBag,
   Membership,
@@ -43,4 +45,5 @@ export const ENTITIES = [
   Invitation,
   OutboxMessage,
   RuleSetChange,
+  HelperLink,
 ];

@@ -5,6 +5,7 @@ import { FeedbackGroupSize1764630000000 } from './1764630000000-feedback-group-s
 import { SixteenActivityKinds1764631000000 } from './1764631000000-sixteen-activity-kinds';
 import { TeamPinnedActivities1764632000000 } from './1764632000000-team-pinned-activities';
 import { PlanActivityIds1764633000000 } from './1764633000000-plan-activity-ids';
+import { HelperLinks1764637000000 } from './1764637000000-helper-links';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -15,4 +16,5 @@ export const MIGRATIONS = [
   SixteenActivityKinds1764631000000,
   TeamPinnedActivities1764632000000,
   PlanActivityIds1764633000000,
+  HelperLinks1764637000000,
 ];
