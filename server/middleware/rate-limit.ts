@@ -9,6 +9,11 @@ import { HttpError } from '../http/problem';
  * which still bounds guessing to instances × limit.
  */
 export function authRateLimit(config: AppConfig): RequestHandler {
+  return publicRateLimit(config, 'Too many sign-in attempts from here. Wait a few minutes.');
+}
+
+/** The same per-IP limit for any public route (no sign-in), with its own counter and message. */
+export function publicRateLimit(config: AppConfig, message: string): RequestHandler {
   return rateLimit({
     windowMs: config.authRateLimit.windowMs,
     limit: config.authRateLimit.max,
@@ -16,7 +21,7 @@ export function authRateLimit(config: AppConfig): RequestHandler {
     legacyHeaders: false,
     handler: (_req, _res, next) =>
       next(
-        new HttpError(429, 'Too many requests', 'Too many sign-in attempts from here. Wait a few minutes.'),
+        new HttpError(429, 'Too many requests', message),
       ),
   });
 }

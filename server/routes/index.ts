@@ -2,6 +2,7 @@ import { Router } from 'express';
 import type { ApiDeps } from './api-deps';
 import { authRouter } from './auth';
 import { healthRouter } from './health';
+import { helperLinksRouter } from './helper-links';
 import { invitationsRouter } from './invitations';
 import { kitRouter } from './kit';
 import { membersRouter } from './members';
@@ -28,6 +29,7 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(pinnedActivitiesRouter(deps));
   api.use(plansRouter(deps));
   api.use(planActivityRouter(deps));
+  api.use(helperLinksRouter(deps));
   api.use(ruleSetsRouter(deps));
   api.use(teamInsightRouter(deps));
   return api;

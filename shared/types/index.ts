@@ -7,3 +7,4 @@ export * from './api';
 export * from './plan-api';
 export * from './rule-set-api';
 export * from './activity-words';
+export * from './helper-view';
