@@ -19,9 +19,6 @@ export function publicRateLimit(config: AppConfig, message: string): RequestHand
     limit: config.authRateLimit.max,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req, _res, next) =>
-      next(
-        new HttpError(429, 'Too many requests', message),
-      ),
+    handler: (_req, _res, next) => next(new HttpError(429, 'Too many requests', message)),
   });
 }

@@ -16,7 +16,10 @@ export function helperLinksRouter({ dataSource, config, requireAuth }: ApiDeps):
   const router = Router();
   const links = new HelperLinkService(dataSource, config);
   const id = validate({ params: 'id-param' });
-  const limiter = publicRateLimit(config, 'Too many tries from here. Wait a few minutes and open the link again.');
+  const limiter = publicRateLimit(
+    config,
+    'Too many tries from here. Wait a few minutes and open the link again.',
+  );
 
   router.get('/helper-view', limiter, async (req, res) => {
     const view = await links.view(req.get(HELPER_TOKEN_HEADER));
@@ -33,7 +36,9 @@ export function helperLinksRouter({ dataSource, config, requireAuth }: ApiDeps):
       .json(await links.create(authOf(req), req.params['id'] as string));
   });
   router.get('/plans/:id/helper-links', requireAuth, id, async (req, res) => {
-    res.setHeader('Cache-Control', 'no-store').json(await links.list(authOf(req), req.params['id'] as string));
+    res
+      .setHeader('Cache-Control', 'no-store')
+      .json(await links.list(authOf(req), req.params['id'] as string));
   });
   router.delete('/plans/:id/helper-links/:linkId', requireAuth, id, async (req, res) => {
     await links.revoke(authOf(req), req.params['id'] as string, req.params['linkId'] as string);

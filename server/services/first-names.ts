@@ -16,6 +16,9 @@ export function firstNames(names: readonly (string | undefined)[]): string[] {
 
 /** The first word of a name, without a trailing full stop or comma; null when there is none. */
 function firstWord(name: string | undefined): string | null {
-  const word = (name ?? '').trim().split(/\s+/u)[0]?.replace(/[.,]+$/u, '');
+  const word = (name ?? '')
+    .trim()
+    .split(/\s+/u)[0]
+    ?.replace(/[.,]+$/u, '');
   return word ? word : null;
 }

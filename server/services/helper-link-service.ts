@@ -1,6 +1,6 @@
 import { createHash, randomBytes } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { IsNull, MoreThan } from 'typeorm';
+import { IsNull } from 'typeorm';
 import type { Phase, Station, StationRoles } from '../../shared/types/plan';
 import type { CreatedHelperLinkDto, HelperLinkDto, HelperViewDto } from '../../shared/types/helper-view';
 import type { AppConfig } from '../config';
