@@ -1,12 +1,11 @@
 import { Router } from 'express';
+import { HELPER_TOKEN_HEADER } from '../../shared/types/helper-view';
 import { authOf } from '../http/auth-context';
 import { publicRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
 import { HelperLinkService } from '../services/helper-link-service';
 import type { ApiDeps } from './api-deps';
 
-/** The request header that carries a helper link's token (never the address, so no log holds it). */
-export const HELPER_TOKEN_HEADER = 'Helper-Token';
 
 /**
  * /plans/:id/helper-links: the team's staff make, list and stop read-only links for parent helpers.

@@ -41,3 +41,6 @@ export interface HelperViewDto {
   names: Record<string, string>;
   expiresAt: string;
 }
+
+/** The request header that carries a helper link's token to GET /api/helper-view. */
+export const HELPER_TOKEN_HEADER = 'Helper-Token';

@@ -15,6 +15,7 @@ import { applyFieldErrors, controlMessage } from '../../../core/forms/form-error
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
 import { PAPER_LABELS } from '../services/paper-preference';
+import { HelperLinks } from './helper-links';
 
 const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
@@ -44,14 +45,21 @@ export interface ShareDialogData {
 /** Sends the printed card by e-mail to the people the coach names. */
 @Component({
   selector: 'cw-share-dialog',
-  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatButtonModule],
+  imports: [
+    ReactiveFormsModule,
+    MatDialogModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatButtonModule,
+    HelperLinks,
+  ],
   template: `
     <h2 mat-dialog-title>Share the plan</h2>
     <form [formGroup]="form" (ngSubmit)="send()" novalidate>
       <mat-dialog-content>
         <p>
           Each person gets an e-mail with the one-page card attached as a PDF on
-          {{ paperLabels[data.paper] }} paper.
+          {{ paperLabels[data.paper] }} paper, and a link to see the plan on their phone.
         </p>
         @if (error(); as text) {
           <p class="cw-form-error" role="alert">{{ text }}</p>
@@ -72,6 +80,7 @@ export interface ShareDialogData {
           <mat-label>Note (optional)</mat-label>
           <input matInput formControlName="message" maxlength="500" />
         </mat-form-field>
+        <cw-helper-links [planId]="data.planId" />
       </mat-dialog-content>
       <mat-dialog-actions align="end">
         <button mat-button type="button" mat-dialog-close>Cancel</button>
@@ -106,7 +115,8 @@ export class ShareDialog {
     if (!check.ok) return;
     this.sending.set(true);
     this.plansApi.share(this.data.planId, recipients, message, this.data.paper).subscribe({
-      next: () => this.ref.close(recipients.length),
+      // The server's count of e-mails queued, which the plan page reports.
+      next: (result) => this.ref.close(result.queued),
       error: (error: unknown) => {
         this.sending.set(false);
         const fields = problemFieldErrors(error);
