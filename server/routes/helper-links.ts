@@ -6,7 +6,6 @@ import { validate } from '../middleware/validate';
 import { HelperLinkService } from '../services/helper-link-service';
 import type { ApiDeps } from './api-deps';
 
-
 /**
  * /plans/:id/helper-links: the team's staff make, list and stop read-only links for parent helpers.
  * /helper-view: the public read of a plan through such a link.

@@ -18,8 +18,8 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
     <section class="cw-helper-links" aria-labelledby="helper-links-heading" data-testid="helper-links">
       <h3 id="helper-links-heading">A link for a parent helper</h3>
       <p class="cw-muted">
-        Opens the plan on a phone without an account: stations, groups with first names only, areas,
-        diagrams and timings. It works until the end of the day after the session.
+        Opens the plan on a phone without an account: stations, groups with first names only, areas, diagrams
+        and timings. It works until the end of the day after the session.
       </p>
       <button
         mat-stroked-button
@@ -44,8 +44,8 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
           </button>
         </div>
         <p class="cw-muted" role="status">
-          {{ copied() ? 'Copied. ' : '' }}Works until {{ until(link.expiresAt) }}. Send it only to the
-          helper: anyone with the link sees the plan.
+          {{ copied() ? 'Copied. ' : '' }}Works until {{ until(link.expiresAt) }}. Send it only to the helper:
+          anyone with the link sees the plan.
         </p>
       }
       @if (error(); as text) {
@@ -58,7 +58,11 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
             <li data-testid="helper-link-item">
               <span>
                 Made {{ madeAt(link.createdAt) }}{{ link.createdByName ? ' by ' + link.createdByName : '' }}
-                {{ link.emailedTo ? '· e-mailed to ' + link.emailedTo + (link.emailedTo === 1 ? ' person' : ' people') : '' }}
+                {{
+                  link.emailedTo
+                    ? '· e-mailed to ' + link.emailedTo + (link.emailedTo === 1 ? ' person' : ' people')
+                    : ''
+                }}
                 · until {{ until(link.expiresAt) }}
               </span>
               <button

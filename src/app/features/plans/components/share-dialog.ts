@@ -7,6 +7,7 @@ import {
   Validators,
 } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
+import { ErrorStateMatcher, ShowOnDirtyErrorStateMatcher } from '@angular/material/core';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
@@ -89,6 +90,8 @@ export interface ShareDialogData {
     </form>
   `,
   styles: '.cw-wide { width: 100%; min-width: 260px; }',
+  // A coach who only makes a helper link leaves the address field empty: no red until typed in or sent.
+  providers: [{ provide: ErrorStateMatcher, useClass: ShowOnDirtyErrorStateMatcher }],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ShareDialog {
