@@ -124,6 +124,10 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
       padding: 4px 0;
       border-bottom: 1px solid var(--mat-sys-outline-variant);
     }
+    .cw-link-list button {
+      flex: none;
+      white-space: nowrap;
+    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
