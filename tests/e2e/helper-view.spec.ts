@@ -59,7 +59,7 @@ describe('a helper link on a phone', () => {
     expect(link).toMatch(/\/helper#[A-Za-z0-9_-]{43}$/);
     await coachPage.getByTestId('helper-link-copy').click();
     await coachPage.getByText('Copied.').waitFor();
-    expect(await coachPage.getByTestId('helper-link-item').count()).toBeGreaterThanOrEqual(1);
+    await coachPage.getByTestId('helper-link-item').first().waitFor();
     // An empty address field stays calm when the coach only wants a link.
     expect(await coachPage.getByText('Add at least one e-mail address').count()).toBe(0);
     await coachPage.getByTestId('helper-link-item').first().scrollIntoViewIfNeeded();
@@ -68,7 +68,9 @@ describe('a helper link on a phone', () => {
 
   it('a fresh browser with no account opens it and sees the plan with first names only, read-only', async () => {
     const token = new URL(link).hash.slice(1);
-    await helperPage.goto(`${baseUrl}/helper#${token}`);
+    const response = await helperPage.goto(`${baseUrl}/helper#${token}`);
+    expect(response!.headers()['x-robots-tag']).toMatch(/noindex/);
+    expect(response!.headers()['referrer-policy']).toBe('no-referrer');
     await helperPage.getByTestId('phase').first().waitFor();
     await helperPage.getByTestId('cautions').waitFor();
 

@@ -151,11 +151,19 @@ export class HelperLinks {
     effect(() => this.load(this.planId()));
   }
 
+  /** Counts list requests, so an answer overtaken by a newer request (after a make) is dropped. */
+  private listRequests = 0;
+
   private load(planId: string): void {
+    const request = ++this.listRequests;
     this.api.list(planId).subscribe({
-      next: (links) => this.links.set(links),
+      next: (links) => {
+        if (request === this.listRequests) this.links.set(links);
+      },
       // Members who may not make links simply see none.
-      error: () => this.links.set([]),
+      error: () => {
+        if (request === this.listRequests) this.links.set([]);
+      },
     });
   }
 
@@ -167,7 +175,8 @@ export class HelperLinks {
       next: (link) => {
         this.making.set(false);
         this.made.set(link);
-        this.links.update((links) => [link, ...links]);
+        this.links.update((links) => [link, ...links.filter((l) => l.id !== link.id)]);
+        this.load(this.planId());
       },
       error: (error: unknown) => {
         this.making.set(false);
@@ -192,6 +201,7 @@ export class HelperLinks {
         this.stopping.set(null);
         this.links.update((links) => links.filter((l) => l.id !== link.id));
         if (this.made()?.id === link.id) this.made.set(null);
+        this.load(this.planId());
       },
       error: (error: unknown) => {
         this.stopping.set(null);
