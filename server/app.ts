@@ -100,6 +100,8 @@ export function createApp(deps: AppDeps): Express {
     app.get(/^(?!\/api(\/|$)).*/, (req, res, next) => {
       if (!req.accepts('html')) return next();
       res.setHeader('Cache-Control', 'no-cache');
+      // The helper's view of a plan is for one family's evening, not for search engines.
+      if (req.path === '/helper') res.setHeader('X-Robots-Tag', 'noindex, nofollow');
       res.sendFile(join(staticDir, 'index.html'));
     });
   }

@@ -2,6 +2,7 @@ import { Attendance } from './attendance';
 import { Club } from './club';
 import { Feedback } from './feedback';
 import { IdempotencyRecord } from './idempotency-record';
+import { HelperLink } from './helper-link';
 import { Invitation } from './invitation';
 import { KitBag } from './kit-bag';
 import { Membership } from './membership';
@@ -20,6 +21,7 @@ export {
   Club,
   Feedback,
   IdempotencyRecord,
+  HelperLink,
   Invitation,
   KitBag,
   Membership,
@@ -52,4 +54,5 @@ export const ENTITIES = [
   ScheduledSession,
   TeamCalendar,
   IdempotencyRecord,
+  HelperLink,
 ];

@@ -9,6 +9,12 @@ export interface OutboxAttachment {
   contentBase64: string;
 }
 
+/** Where answers go when it is not the sending address (a name and an address). */
+export interface OutboxReplyTo {
+  name: string;
+  address: string;
+}
+
 /**
  * An e-mail waiting to be sent. Every send goes through this table so a mail server that is
  * down loses nothing; senders claim rows with FOR UPDATE SKIP LOCKED.
@@ -31,6 +37,10 @@ export class OutboxMessage {
 
   @Column({ type: 'varchar', length: 200 })
   subject!: string;
+
+  /** Reply-To: answers go to this person; From stays the club's sending address. */
+  @Column({ type: 'jsonb', nullable: true })
+  replyTo!: OutboxReplyTo | null;
 
   @Column({ type: 'text' })
   textBody!: string;

@@ -11,6 +11,8 @@ export interface CaughtMail {
   from: string;
   to: string[];
   subject: string;
+  /** The Reply-To header as written ("Name <address>"), or null. */
+  replyTo: string | null;
   text: string;
   html: string | null;
   attachments: { filename: string; contentType: string; size: number; content: Buffer }[];
@@ -74,6 +76,7 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
               from: session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
               to: session.envelope.rcptTo.map((r) => r.address),
               subject: parsed.subject ?? '',
+              replyTo: parsed.replyTo?.text ?? null,
               text: parsed.text ?? '',
               html: typeof parsed.html === 'string' ? parsed.html : null,
               attachments: parsed.attachments.map((a) => ({

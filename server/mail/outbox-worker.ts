@@ -122,6 +122,8 @@ export class OutboxWorker {
       await this.transport.sendMail({
         from: this.options.mail.from,
         to: message.recipients,
+        // nodemailer encodes the name itself, so no header can be injected through it.
+        replyTo: message.replyTo ?? undefined,
         subject: message.subject,
         text: message.textBody,
         html: message.htmlBody ?? undefined,

@@ -9,21 +9,12 @@ import { HttpError } from '../http/problem';
  * which still bounds guessing to instances × limit.
  */
 export function authRateLimit(config: AppConfig): RequestHandler {
-  return rateLimit({
-    windowMs: config.authRateLimit.windowMs,
-    limit: config.authRateLimit.max,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) =>
-      next(
-        new HttpError(429, 'Too many requests', 'Too many sign-in attempts from here. Wait a few minutes.'),
-      ),
-  });
+  return publicRateLimit(config, 'Too many sign-in attempts from here. Wait a few minutes.');
 }
 
 /**
- * Limits requests per IP on a public route that needs no sign-in (the calendar feeds), with the
- * same window and count as the sign-in routes.
+ * The same per-IP limit for any public route that needs no sign-in (calendar feeds, helper links),
+ * with its own counter and message.
  */
 export function publicRateLimit(config: AppConfig, message: string): RequestHandler {
   return rateLimit({

@@ -8,6 +8,7 @@ import { PlanActivityIds1764633000000 } from './1764633000000-plan-activity-ids'
 import { IdempotencyRecords1764634000000 } from './1764634000000-idempotency-records';
 import { RegisterAndStationFeedback1764635000000 } from './1764635000000-register-and-station-feedback';
 import { TeamSchedule1764636000000 } from './1764636000000-team-schedule';
+import { HelperLinks1764637000000 } from './1764637000000-helper-links';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -21,4 +22,5 @@ export const MIGRATIONS = [
   IdempotencyRecords1764634000000,
   RegisterAndStationFeedback1764635000000,
   TeamSchedule1764636000000,
+  HelperLinks1764637000000,
 ];

@@ -3,6 +3,7 @@ import type { ApiDeps } from './api-deps';
 import { authRouter } from './auth';
 import { calendarRouter } from './calendar';
 import { healthRouter } from './health';
+import { helperLinksRouter } from './helper-links';
 import { invitationsRouter } from './invitations';
 import { kitRouter } from './kit';
 import { membersRouter } from './members';
@@ -30,6 +31,7 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(pinnedActivitiesRouter(deps));
   api.use(plansRouter(deps));
   api.use(planActivityRouter(deps));
+  api.use(helperLinksRouter(deps));
   api.use(ruleSetsRouter(deps));
   api.use(teamInsightRouter(deps));
   api.use(scheduleRouter(deps));

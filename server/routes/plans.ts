@@ -21,10 +21,10 @@ export function ifMatchOf(req: Request): number | null {
 }
 
 /** /plans: generate, list, read, edit, print and share session plans. */
-export function plansRouter({ dataSource, requireAuth, mail }: ApiDeps): Router {
+export function plansRouter({ dataSource, config, requireAuth, mail }: ApiDeps): Router {
   const router = Router();
   const plans = new PlanService(dataSource);
-  const cards = new PlanCardService(dataSource, mail);
+  const cards = new PlanCardService(dataSource, mail, config);
   const id = validate({ params: 'id-param' });
   const planners = requireRole('lead', 'coach');
   const once = idempotency(dataSource);

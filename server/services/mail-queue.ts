@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { OutboxMessage, type OutboxAttachment } from '../entities/outbox-message';
+import { OutboxMessage, type OutboxAttachment, type OutboxReplyTo } from '../entities/outbox-message';
 
 /** A message to send later through the outbox. */
 export interface QueuedMail {
@@ -7,6 +7,8 @@ export interface QueuedMail {
   kind: string;
   recipients: string[];
   subject: string;
+  /** Where answers go (the sender stays the club's address). */
+  replyTo?: OutboxReplyTo;
   text: string;
   html?: string;
   attachments?: OutboxAttachment[];
@@ -28,6 +30,7 @@ export const outboxMailQueue: MailQueue = {
       kind: mail.kind,
       recipients: mail.recipients,
       subject: mail.subject,
+      replyTo: mail.replyTo ?? null,
       textBody: mail.text,
       htmlBody: mail.html ?? null,
       attachments: mail.attachments ?? [],

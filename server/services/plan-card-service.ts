@@ -1,12 +1,15 @@
 import type { DataSource } from 'typeorm';
 import type { ShareResultDto } from '../../shared/types/plan-api';
+import type { AppConfig } from '../config';
 import type { AuthContext } from '../http/auth-context';
 import { minuteLabel, planMinutes, sessionStart } from '../pdf/clock';
 import type { Paper } from '../pdf';
 import type { SessionPlan } from '../entities/session-plan';
 import type { Team } from '../entities/team';
 import { ClubScope } from './club-scope';
+import { HelperLinkService } from './helper-link-service';
 import type { MailQueue } from './mail-queue';
+import { sessionInWords } from './session-day';
 
 export interface SharePlanInput {
   recipients: string[];
@@ -16,10 +19,15 @@ export interface SharePlanInput {
 
 /** The printed card of a stored plan: download it, or e-mail it through the outbox. */
 export class PlanCardService {
+  private readonly helperLinks: HelperLinkService;
+
   constructor(
     private readonly dataSource: DataSource,
     private readonly mail: MailQueue,
-  ) {}
+    private readonly config: AppConfig,
+  ) {
+    this.helperLinks = new HelperLinkService(dataSource, config);
+  }
 
   async pdf(auth: AuthContext, planId: string, paper: Paper): Promise<{ pdf: Buffer; filename: string }> {
     const scope = new ClubScope(this.dataSource.manager, auth);
@@ -28,20 +36,33 @@ export class PlanCardService {
     return { pdf: await render(row, team, paper), filename: cardFilename(row, team) };
   }
 
-  /** Queues one message per recipient (so parents do not see each other's addresses) with the card attached. */
+  /**
+   * Queues one message per recipient (so parents do not see each other's addresses) with the card
+   * attached and one helper link for them all, unless the session is too long ago for one. From
+   * stays the club's sending address (mail from the coach's own domain sent by this server would
+   * fail that domain's SPF/DKIM checks and be junked or refused); Reply-To is the coach.
+   */
   async share(auth: AuthContext, planId: string, input: SharePlanInput): Promise<ShareResultDto> {
     const scope = new ClubScope(this.dataSource.manager, auth);
     const row = await scope.plan(planId);
     const team = await scope.teamToManage(row.teamId);
     const pdf = await render(row, team, input.paper ?? 'a4');
-    const subject = `${team.name}: ${kindLabel(row)}${row.date ? ` on ${row.date}` : ''}${row.kickOff ? ` (${row.kickOff})` : ''}`;
-    const text = shareText(row, team, auth.name, input.message);
+    const when = sessionInWords(row.date, row.kickOff, this.config.locale);
+    const subject = `${team.name}: ${kindLabel(row)}${when ? ` on ${when}` : ''}`;
     const attachment = {
       filename: cardFilename(row, team),
       contentType: 'application/pdf',
       contentBase64: pdf.toString('base64'),
     };
+    const expiresAt = this.helperLinks.expiryFor(row);
     const messageIds = await this.dataSource.transaction(async (manager) => {
+      const helper = expiresAt
+        ? {
+            url: (await this.helperLinks.issue(manager, row, auth.userId, input.recipients.length)).url,
+            until: this.helperLinks.expiryWords(expiresAt),
+          }
+        : null;
+      const text = shareText(row, team, auth.name, when, helper, input.message);
       const ids: string[] = [];
       for (const recipient of input.recipients) {
         ids.push(
@@ -49,7 +70,8 @@ export class PlanCardService {
             clubId: auth.clubId,
             kind: 'plan-share',
             recipients: [recipient],
-            subject,
+            replyTo: { name: auth.name, address: auth.email },
+            subject: subject.slice(0, 200),
             text,
             attachments: [attachment],
           }),
@@ -80,20 +102,36 @@ function cardFilename(row: SessionPlan, team: Team): string {
   return `${slug}-${row.date ?? 'plan'}-card.pdf`;
 }
 
-function shareText(row: SessionPlan, team: Team, sender: string, message?: string): string {
+function shareText(
+  row: SessionPlan,
+  team: Team,
+  sender: string,
+  when: string | null,
+  helper: { url: string; until: string } | null,
+  message?: string,
+): string {
   const start = sessionStart(row.plan, row.kickOff);
   const lines = row.plan.phases.map(
     (p) => `${minuteLabel(start, p.startMinute)}–${minuteLabel(start, p.endMinute)}  ${p.name}`,
   );
   return [
-    `${sender} shared the ${kindLabel(row)} for ${team.name} with you.`,
+    `${sender} shared the ${kindLabel(row)} for ${team.name}${when ? ` on ${when}` : ''} with you.`,
     message ? `\n${message}\n` : '',
+    ...(helper
+      ? [
+          'See the plan on your phone, no account needed:',
+          helper.url,
+          `The link shows the stations, the groups (first names only), the areas, diagrams, coaching points and timings. It stops working at ${helper.until}, or sooner if the coach stops it. Please keep it to yourself.`,
+          '',
+        ]
+      : []),
     `${planMinutes(row.plan)} minutes, ${row.playerCount} players:`,
     ...lines,
     '',
     'The printable card is attached (PDF).',
+    `To answer ${sender}, reply to this e-mail.`,
     'Anchor or weight movable goals and never let anyone climb them; follow your local rules and the club safeguarding policy.',
   ]
-    .filter((l) => l !== '')
+    .filter((l, i, all) => l !== '' || (i > 0 && all[i - 1] !== ''))
     .join('\n');
 }

@@ -10,3 +10,4 @@ export * from './activity-words';
 export * from './team-staff';
 export * from './schedule';
 export * from './attendance';
+export * from './helper-view';

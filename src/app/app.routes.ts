@@ -21,6 +21,12 @@ export const routes: Routes = [
     loadComponent: () => import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
   },
   {
+    // Public and read-only: a parent helper opens one plan through a link, with no account.
+    path: 'helper',
+    title: 'Helper’s view · Conewise',
+    loadComponent: () => import('./features/helper-view/helper-view-page').then((m) => m.HelperViewPage),
+  },
+  {
     path: 'status',
     title: 'System status · Conewise',
     loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),

@@ -50,7 +50,7 @@ export class App {
     ),
     { initialValue: this.router.url },
   );
-  protected readonly fullScreen = computed(() => /\/pitch-side(\?|$)/.test(this.url()));
+  protected readonly fullScreen = computed(() => /\/pitch-side(\?|$)|^\/helper([?#]|$)/.test(this.url()));
 
   protected readonly navItems = computed(() =>
     NAV_ITEMS.filter((item) => !item.roles || this.auth.hasRole(...item.roles)),

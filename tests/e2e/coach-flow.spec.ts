@@ -205,7 +205,7 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     const shared = page.waitForResponse((r) => r.url().endsWith(`/api/plans/${saved.id}/share`));
     await page.getByTestId('share-send').click();
     expect((await shared).status()).toBe(202);
-    await page.getByText('Plan sent to 1 recipient').waitFor();
+    await page.getByText('1 e-mail queued for sending').waitFor();
     let mail: CaughtMailSummary | undefined;
     await expect
       .poll(

@@ -240,6 +240,13 @@ describe('PlanPage', () => {
     expect(sent).toHaveLength(1);
     const [send] = sent;
     expect(send.request.body).toEqual({ recipients: ['helper@example.org'], paper: 'letter' });
+    // The confirmation states the server's count of queued e-mails, not the number typed.
+    send.flush({ queued: 3, messageIds: ['m1', 'm2', 'm3'] });
+    await settle(fixture);
+    await settle(fixture);
+    expect(document.querySelector('mat-snack-bar-container')?.textContent).toContain(
+      '3 e-mails queued for sending.',
+    );
   });
 
   it("folds each station's details on a phone and keeps title, area and diagram in view", async () => {

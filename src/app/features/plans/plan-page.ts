@@ -216,9 +216,9 @@ export class PlanPage {
         width: '480px',
       })
       .afterClosed()
-      .subscribe((sent) => {
-        if (sent) {
-          this.snackBar.open(`Plan sent to ${sent} recipient${sent === 1 ? '' : 's'}.`, undefined, {
+      .subscribe((queued) => {
+        if (queued) {
+          this.snackBar.open(`${queued} e-mail${queued === 1 ? '' : 's'} queued for sending.`, undefined, {
             duration: 4000,
             politeness: 'polite',
           });

@@ -7,6 +7,7 @@ import {
   Validators,
 } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
+import { ErrorStateMatcher, ShowOnDirtyErrorStateMatcher } from '@angular/material/core';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
@@ -15,6 +16,7 @@ import { applyFieldErrors, controlMessage } from '../../../core/forms/form-error
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
 import { PAPER_LABELS } from '../services/paper-preference';
+import { HelperLinks } from './helper-links';
 
 const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
@@ -44,14 +46,21 @@ export interface ShareDialogData {
 /** Sends the printed card by e-mail to the people the coach names. */
 @Component({
   selector: 'cw-share-dialog',
-  imports: [ReactiveFormsModule, MatDialogModule, MatFormFieldModule, MatInputModule, MatButtonModule],
+  imports: [
+    ReactiveFormsModule,
+    MatDialogModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatButtonModule,
+    HelperLinks,
+  ],
   template: `
     <h2 mat-dialog-title>Share the plan</h2>
     <form [formGroup]="form" (ngSubmit)="send()" novalidate>
       <mat-dialog-content>
         <p>
           Each person gets an e-mail with the one-page card attached as a PDF on
-          {{ paperLabels[data.paper] }} paper.
+          {{ paperLabels[data.paper] }} paper, and a link to see the plan on their phone.
         </p>
         @if (error(); as text) {
           <p class="cw-form-error" role="alert">{{ text }}</p>
@@ -72,6 +81,7 @@ export interface ShareDialogData {
           <mat-label>Note (optional)</mat-label>
           <input matInput formControlName="message" maxlength="500" />
         </mat-form-field>
+        <cw-helper-links [planId]="data.planId" />
       </mat-dialog-content>
       <mat-dialog-actions align="end">
         <button mat-button type="button" mat-dialog-close>Cancel</button>
@@ -82,6 +92,8 @@ export interface ShareDialogData {
     </form>
   `,
   styles: '.cw-wide { width: 100%; min-width: 260px; }',
+  // A coach who only makes a helper link leaves the address field empty: no red until typed in or sent.
+  providers: [{ provide: ErrorStateMatcher, useClass: ShowOnDirtyErrorStateMatcher }],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ShareDialog {
@@ -113,7 +125,8 @@ export class ShareDialog {
       return;
     }
     this.plansApi.share(this.data.planId, recipients, message, this.data.paper).subscribe({
-      next: () => this.ref.close(recipients.length),
+      // The server's count of e-mails queued, which the plan page reports.
+      next: (result) => this.ref.close(result.queued),
       error: (error: unknown) => {
         this.sending.set(false);
         const fields = problemFieldErrors(error);

@@ -1,0 +1,46 @@
+import { Router } from 'express';
+import { HELPER_TOKEN_HEADER } from '../../shared/types/helper-view';
+import { authOf } from '../http/auth-context';
+import { publicRateLimit } from '../middleware/rate-limit';
+import { validate } from '../middleware/validate';
+import { HelperLinkService } from '../services/helper-link-service';
+import type { ApiDeps } from './api-deps';
+
+/**
+ * /plans/:id/helper-links: the team's staff make, list and stop read-only links for parent helpers.
+ * /helper-view: the public read of a plan through such a link.
+ */
+export function helperLinksRouter({ dataSource, config, requireAuth }: ApiDeps): Router {
+  const router = Router();
+  const links = new HelperLinkService(dataSource, config);
+  const id = validate({ params: 'id-param' });
+  const limiter = publicRateLimit(
+    config,
+    'Too many tries from here. Wait a few minutes and open the link again.',
+  );
+
+  router.get('/helper-view', limiter, async (req, res) => {
+    const view = await links.view(req.get(HELPER_TOKEN_HEADER));
+    res
+      .setHeader('Cache-Control', 'no-store')
+      .setHeader('Referrer-Policy', 'no-referrer')
+      .setHeader('X-Robots-Tag', 'noindex, nofollow')
+      .json(view);
+  });
+  router.post('/plans/:id/helper-links', requireAuth, id, async (req, res) => {
+    res
+      .status(201)
+      .setHeader('Cache-Control', 'no-store')
+      .json(await links.create(authOf(req), req.params['id'] as string));
+  });
+  router.get('/plans/:id/helper-links', requireAuth, id, async (req, res) => {
+    res
+      .setHeader('Cache-Control', 'no-store')
+      .json(await links.list(authOf(req), req.params['id'] as string));
+  });
+  router.delete('/plans/:id/helper-links/:linkId', requireAuth, id, async (req, res) => {
+    await links.revoke(authOf(req), req.params['id'] as string, req.params['linkId'] as string);
+    res.status(204).end();
+  });
+  return router;
+}

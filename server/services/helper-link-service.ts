@@ -1,0 +1,234 @@
+import { createHash, randomBytes } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import { IsNull } from 'typeorm';
+import type { Phase, Station, StationRoles } from '../../shared/types/plan';
+import type { CreatedHelperLinkDto, HelperLinkDto, HelperViewDto } from '../../shared/types/helper-view';
+import type { AppConfig } from '../config';
+import { HelperLink } from '../entities/helper-link';
+import { SessionPlan } from '../entities/session-plan';
+import { Team } from '../entities/team';
+import type { AuthContext } from '../http/auth-context';
+import { conflict, forbidden, HttpError, notFound } from '../http/problem';
+import { ClubScope } from './club-scope';
+import { firstNames } from './first-names';
+import { expiryInWords, helperLinkExpiry } from './session-day';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+/** 32 random bytes in base64url: 43 characters. */
+const TOKEN = /^[A-Za-z0-9_-]{43}$/;
+
+export function hashHelperToken(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}
+
+/** The address a helper opens: the token rides in the fragment, which browsers never send to a server. */
+export function helperLinkUrl(config: AppConfig, token: string): string {
+  return `${config.publicUrl.replace(/\/$/, '')}/helper#${token}`;
+}
+
+const linkNotKnown = () =>
+  new HttpError(
+    404,
+    'Helper link not known',
+    'This link is not known. Check that the whole link was copied, or ask the coach for a new one.',
+    undefined,
+    '/problems/helper-link-unknown',
+  );
+
+const linkEnded = (detail: string) =>
+  new HttpError(410, 'Helper link ended', detail, undefined, '/problems/helper-link-ended');
+
+/**
+ * Helper links: the team's staff (its coaches and assistants) or the lead make one for a plan,
+ * list the live ones and stop them; anyone holding a live link reads the plan as a helper needs it.
+ */
+export class HelperLinkService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly config: AppConfig,
+  ) {}
+
+  /** A plan of the caller's club whose team the caller staffs (or any, for the lead); else 404 / 403. */
+  private async planForStaff(auth: AuthContext, planId: string): Promise<SessionPlan> {
+    const scope = new ClubScope(this.dataSource.manager, auth);
+    const plan = await scope.plan(planId);
+    if (auth.role !== 'lead' && !(await scope.isAttached(plan.teamId))) {
+      throw forbidden('Only the team’s coaches and assistants and the club lead can share helper links.');
+    }
+    return plan;
+  }
+
+  async create(auth: AuthContext, planId: string): Promise<CreatedHelperLinkDto> {
+    const plan = await this.planForStaff(auth, planId);
+    const { link, url } = await this.issue(this.dataSource.manager, plan, auth.userId, 0);
+    return { ...toDto(link, auth.name), url };
+  }
+
+  /** When a link made now for the plan would stop working; null when that is already past. */
+  expiryFor(plan: SessionPlan, now = new Date()): Date | null {
+    const expiresAt = helperLinkExpiry(plan.date, now, this.config.timeZone);
+    return expiresAt > now ? expiresAt : null;
+  }
+
+  /** "the end of Wednesday 9 December", in the club's words and time zone. */
+  expiryWords(expiresAt: Date): string {
+    return expiryInWords(expiresAt, this.config.locale, this.config.timeZone);
+  }
+
+  /**
+   * Stores a new link for a plan whose permission the caller has checked, inside the caller's
+   * transaction. 409 when the session was more than a day ago (the link would be dead at once).
+   */
+  async issue(
+    manager: EntityManager,
+    plan: SessionPlan,
+    userId: string,
+    emailedTo: number,
+  ): Promise<{ link: HelperLink; url: string }> {
+    const expiresAt = this.expiryFor(plan);
+    if (!expiresAt) {
+      throw conflict(
+        'This session is more than a day ago, and a helper link only works until the end of the day after the session.',
+      );
+    }
+    const token = randomBytes(32).toString('base64url');
+    const link = await manager.getRepository(HelperLink).save(
+      manager.getRepository(HelperLink).create({
+        planId: plan.id,
+        clubId: plan.clubId,
+        tokenHash: hashHelperToken(token),
+        createdBy: userId,
+        emailedTo,
+        expiresAt,
+        revokedAt: null,
+      }),
+    );
+    return { link, url: helperLinkUrl(this.config, token) };
+  }
+
+  /** The plan's links that still work, newest first. */
+  async list(auth: AuthContext, planId: string): Promise<HelperLinkDto[]> {
+    const plan = await this.planForStaff(auth, planId);
+    const rows: (HelperLink & { createdByName: string | null })[] = await this.dataSource.query(
+      `SELECT link.*, maker.name AS "createdByName"
+         FROM helper_link link LEFT JOIN app_user maker ON maker.id = link."createdBy"
+        WHERE link."planId" = $1 AND link."clubId" = $2 AND link."revokedAt" IS NULL AND link."expiresAt" > now()
+        ORDER BY link."createdAt" DESC`,
+      [plan.id, plan.clubId],
+    );
+    return rows.map((row) => toDto(row, row.createdByName));
+  }
+
+  /** Stops a link at once; stopping it twice is harmless. */
+  async revoke(auth: AuthContext, planId: string, linkId: string): Promise<void> {
+    const plan = await this.planForStaff(auth, planId);
+    if (!UUID.test(linkId)) throw notFound('helper link');
+    const result = await this.dataSource
+      .getRepository(HelperLink)
+      .update(
+        { id: linkId, planId: plan.id, clubId: plan.clubId, revokedAt: IsNull() },
+        { revokedAt: new Date() },
+      );
+    if (!result.affected) {
+      const exists = await this.dataSource
+        .getRepository(HelperLink)
+        .exists({ where: { id: linkId, planId: plan.id, clubId: plan.clubId } });
+      if (!exists) throw notFound('helper link');
+    }
+  }
+
+  /** The plan behind a live link, reduced to what a helper needs; 404 unknown, 410 ended. */
+  async view(token: string | undefined): Promise<HelperViewDto> {
+    if (!token || !TOKEN.test(token)) throw linkNotKnown();
+    const link = await this.dataSource
+      .getRepository(HelperLink)
+      .findOne({ where: { tokenHash: hashHelperToken(token) } });
+    if (!link) throw linkNotKnown();
+    if (link.revokedAt) {
+      throw linkEnded('The coach has stopped this link. Ask them for a new one if you are still helping.');
+    }
+    if (link.expiresAt <= new Date()) {
+      const when = expiryInWords(link.expiresAt, this.config.locale, this.config.timeZone);
+      throw linkEnded(`This link stopped working at ${when}. Ask the coach for a new one if you need it.`);
+    }
+    const plan = await this.dataSource
+      .getRepository(SessionPlan)
+      .findOne({ where: { id: link.planId, clubId: link.clubId } });
+    const team = plan
+      ? await this.dataSource.getRepository(Team).findOne({ where: { id: plan.teamId, clubId: link.clubId } })
+      : null;
+    if (!plan || !team) throw linkNotKnown();
+    return helperView(plan, team.name, link.expiresAt);
+  }
+}
+
+function toDto(link: HelperLink, createdByName: string | null): HelperLinkDto {
+  return {
+    id: link.id,
+    planId: link.planId,
+    createdAt: link.createdAt.toISOString(),
+    expiresAt: link.expiresAt.toISOString(),
+    createdByName,
+    emailedTo: link.emailedTo,
+  };
+}
+
+/**
+ * The plan with each player id replaced by a stand-in (h1, h2 …) and each name cut to the first
+ * name; the request, rules, trace, touches and warnings stay behind.
+ */
+export function helperView(row: SessionPlan, teamName: string, expiresAt: Date): HelperViewDto {
+  const players = row.plan.request.players;
+  const first = firstNames(players.map((p) => p.name));
+  const aliases = new Map<string, string>();
+  const names: Record<string, string> = {};
+  players.forEach((player, i) => {
+    const alias = `h${i + 1}`;
+    aliases.set(player.id, alias);
+    names[alias] = first[i]!;
+  });
+  const alias = (id: string): string => {
+    if (id === 'coach') return id;
+    let known = aliases.get(id);
+    if (!known) {
+      known = `h${aliases.size + 1}`;
+      aliases.set(id, known);
+      names[known] = `Player ${aliases.size}`;
+    }
+    return known;
+  };
+  const phases: Phase[] = row.plan.phases.map((phase) => ({
+    ...phase,
+    stations: phase.stations.map((station) => helperStation(station, alias)),
+  }));
+  return {
+    teamName,
+    kind: row.kind,
+    date: row.date,
+    kickOff: row.kickOff,
+    minutes: row.minutes,
+    playerCount: row.playerCount,
+    phases,
+    cautions: row.plan.cautions,
+    names,
+    expiresAt: expiresAt.toISOString(),
+  };
+}
+
+function helperStation(station: Station, alias: (id: string) => string): Station {
+  const roles: StationRoles = {};
+  for (const [key, ids] of Object.entries(station.roles) as [keyof StationRoles, unknown][]) {
+    if (key === 'teams') {
+      const [a, b] = ids as [string[], string[]];
+      roles.teams = [a.map(alias), b.map(alias)];
+    } else {
+      roles[key] = (ids as string[]).map(alias);
+    }
+  }
+  return {
+    ...station,
+    playerIds: station.playerIds.map(alias),
+    roles,
+    positions: station.positions.map((p) => ({ ...p, id: alias(p.id) })),
+  };
+}
