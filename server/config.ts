@@ -34,8 +34,6 @@ export interface AppConfig {
    * another machine, its address or subnet (TRUST_PROXY=10.0.0.0/8) or a hop count (TRUST_PROXY=1).
    */
   trustProxy: string | number;
-  /** IANA time zone of the club's sessions (CLUB_TIME_ZONE): when a helper link ends. */
-  timeZone: string;
   /** Locale of dates in e-mails (CLUB_LOCALE), e.g. en-GB: "Tuesday 8 December". */
   locale: string;
 }
@@ -89,7 +87,6 @@ export function loadConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     invitationTtlHours: intFromEnv('INVITATION_TTL_HOURS', 72),
     logLevel: process.env['LOG_LEVEL'] ?? 'info',
     trustProxy: trustProxyFromEnv(process.env['TRUST_PROXY']),
-    timeZone: validTimeZone(process.env['CLUB_TIME_ZONE']),
     locale: process.env['CLUB_LOCALE'] || 'en-GB',
     ...overrides,
   };
@@ -100,16 +97,4 @@ export function trustProxyFromEnv(raw: string | undefined): string | number {
   const value = raw?.trim();
   if (!value) return 'loopback';
   return /^\d+$/.test(value) ? Number(value) : value;
-}
-
-/** CLUB_TIME_ZONE when Intl knows it, else the machine's own zone. */
-export function validTimeZone(raw: string | undefined): string {
-  const machine = Intl.DateTimeFormat().resolvedOptions().timeZone;
-  if (!raw) return machine;
-  try {
-    new Intl.DateTimeFormat('en', { timeZone: raw });
-    return raw;
-  } catch {
-    return machine;
-  }
 }

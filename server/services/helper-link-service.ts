@@ -11,6 +11,7 @@ import type { AuthContext } from '../http/auth-context';
 import { conflict, forbidden, HttpError, notFound } from '../http/problem';
 import { ClubScope } from './club-scope';
 import { firstNames } from './first-names';
+import { clubTimeZone } from './schedule-service';
 import { expiryInWords, helperLinkExpiry } from './session-day';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -65,14 +66,15 @@ export class HelperLinkService {
   }
 
   /** When a link made now for the plan would stop working; null when that is already past. */
-  expiryFor(plan: SessionPlan, now = new Date()): Date | null {
-    const expiresAt = helperLinkExpiry(plan.date, now, this.config.timeZone);
+  async expiryFor(plan: SessionPlan, now = new Date()): Promise<Date | null> {
+    const zone = await clubTimeZone(this.dataSource.manager, plan.clubId);
+    const expiresAt = helperLinkExpiry(plan.date, now, zone);
     return expiresAt > now ? expiresAt : null;
   }
 
   /** "the end of Wednesday 9 December", in the club's words and time zone. */
-  expiryWords(expiresAt: Date): string {
-    return expiryInWords(expiresAt, this.config.locale, this.config.timeZone);
+  async expiryWords(expiresAt: Date, clubId: string): Promise<string> {
+    return expiryInWords(expiresAt, this.config.locale, await clubTimeZone(this.dataSource.manager, clubId));
   }
 
   /**
@@ -85,7 +87,7 @@ export class HelperLinkService {
     userId: string,
     emailedTo: number,
   ): Promise<{ link: HelperLink; url: string }> {
-    const expiresAt = this.expiryFor(plan);
+    const expiresAt = await this.expiryFor(plan);
     if (!expiresAt) {
       throw conflict(
         'This session is more than a day ago, and a helper link only works until the end of the day after the session.',
@@ -148,7 +150,7 @@ export class HelperLinkService {
       throw linkEnded('The coach has stopped this link. Ask them for a new one if you are still helping.');
     }
     if (link.expiresAt <= new Date()) {
-      const when = expiryInWords(link.expiresAt, this.config.locale, this.config.timeZone);
+      const when = await this.expiryWords(link.expiresAt, link.clubId);
       throw linkEnded(`This link stopped working at ${when}. Ask the coach for a new one if you need it.`);
     }
     const plan = await this.dataSource

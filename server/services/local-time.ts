@@ -5,6 +5,8 @@ import utc from 'dayjs/plugin/utc.js';
 dayjs.extend(utc);
 dayjs.extend(timezone);
 
+export { dayjs };
+
 /** Today's date (YYYY-MM-DD) in a time zone. */
 export function todayIn(zone: string, now: Date = new Date()): string {
   return dayjs(now).tz(zone).format('YYYY-MM-DD');

@@ -54,12 +54,12 @@ export class PlanCardService {
       contentType: 'application/pdf',
       contentBase64: pdf.toString('base64'),
     };
-    const expiresAt = this.helperLinks.expiryFor(row);
+    const expiresAt = await this.helperLinks.expiryFor(row);
     const messageIds = await this.dataSource.transaction(async (manager) => {
       const helper = expiresAt
         ? {
             url: (await this.helperLinks.issue(manager, row, auth.userId, input.recipients.length)).url,
-            until: this.helperLinks.expiryWords(expiresAt),
+            until: await this.helperLinks.expiryWords(expiresAt, row.clubId),
           }
         : null;
       const text = shareText(row, team, auth.name, when, helper, input.message);

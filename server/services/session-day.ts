@@ -1,7 +1,9 @@
 /**
  * A session's day in words and the end of a helper link's life, in the club's locale and time
- * zone (AppConfig.locale, AppConfig.timeZone). Dates travel as YYYY-MM-DD, times as HH:MM.
+ * zone (AppConfig.locale; the club's `timeZone` column). Dates travel as YYYY-MM-DD, times as
+ * HH:MM; zone arithmetic is dayjs's (local-time.ts), shared with the schedule and calendar feed.
  */
+import { dayjs, zonedMoment } from './local-time';
 
 const HOUR_MS = 3_600_000;
 
@@ -30,56 +32,21 @@ export function sessionInWords(date: string | null, kickOff: string | null, loca
   return kickOff ? `${dayInWords(date, locale)}, ${kickOff}` : dayInWords(date, locale);
 }
 
-/** Milliseconds the zone is ahead of UTC at `instant`. */
-function zoneOffsetMs(instant: number, timeZone: string): number {
-  const parts = new Intl.DateTimeFormat('en-US', {
-    timeZone,
-    hourCycle: 'h23',
-    year: 'numeric',
-    month: 'numeric',
-    day: 'numeric',
-    hour: 'numeric',
-    minute: 'numeric',
-    second: 'numeric',
-  }).formatToParts(new Date(instant));
-  const get = (type: string) => Number(parts.find((p) => p.type === type)?.value ?? 0);
-  const asUtc = Date.UTC(
-    get('year'),
-    get('month') - 1,
-    get('day'),
-    get('hour'),
-    get('minute'),
-    get('second'),
-  );
-  return asUtc - Math.floor(instant / 1000) * 1000;
-}
-
-/** The instant a calendar day starts in a time zone (checked twice, so a change of clocks that day is honoured). */
-export function startOfDay(y: number, m: number, d: number, timeZone: string): Date {
-  const guess = Date.UTC(y, m - 1, d);
-  let instant = guess - zoneOffsetMs(guess, timeZone);
-  instant = guess - zoneOffsetMs(instant, timeZone);
-  return new Date(instant);
-}
-
 /**
  * When a helper link stops working: at the end of the day after the session in the club's time
  * zone (midnight two days on), or UNDATED_HELPER_LINK_HOURS after it is made for a plan with no date.
  */
 export function helperLinkExpiry(date: string | null, now: Date, timeZone: string): Date {
   if (!date) return new Date(now.getTime() + UNDATED_HELPER_LINK_HOURS * HOUR_MS);
-  const [y, m, d] = dayParts(date);
-  return startOfDay(y, m, d + 2, timeZone);
+  const twoDaysOn = dayjs.utc(date).add(2, 'day').format('YYYY-MM-DD');
+  return zonedMoment(twoDaysOn, '00:00', timeZone).toDate();
 }
 
 /** "the end of Wednesday 9 December" for a link that ends at midnight, else "Thursday 10 December, 18:05". */
 export function expiryInWords(expiresAt: Date, locale: string, timeZone: string): string {
-  const local = new Date(expiresAt.getTime() + zoneOffsetMs(expiresAt.getTime(), timeZone));
-  const atMidnight = local.getUTCHours() === 0 && local.getUTCMinutes() === 0;
-  if (atMidnight) {
-    const dayBefore = new Date(local.getTime() - 24 * HOUR_MS).toISOString().slice(0, 10);
-    return `the end of ${dayInWords(dayBefore, locale)}`;
+  const local = dayjs(expiresAt).tz(timeZone);
+  if (local.hour() === 0 && local.minute() === 0) {
+    return `the end of ${dayInWords(local.subtract(1, 'day').format('YYYY-MM-DD'), locale)}`;
   }
-  const time = local.toISOString().slice(11, 16);
-  return `${dayInWords(local.toISOString().slice(0, 10), locale)}, ${time}`;
+  return `${dayInWords(local.format('YYYY-MM-DD'), locale)}, ${local.format('HH:mm')}`;
 }

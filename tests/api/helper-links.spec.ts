@@ -52,8 +52,12 @@ describe('helper links', () => {
 
   beforeAll(async () => {
     // The club plays in Berlin: a link ends at local midnight, 23:00 UTC in winter, 22:00 in summer.
-    app = await startTestApp({ timeZone: 'Europe/Berlin', locale: 'en-GB' });
+    app = await startTestApp({ locale: 'en-GB' });
     club = await clubWithStaff(app, 'Lindenhof Larks');
+    await app.dataSource.query('UPDATE club SET "timeZone" = $1 WHERE id = $2', [
+      'Europe/Berlin',
+      club.lead.user.clubId,
+    ]);
     squad = await createSquad(app, club.coach.token, 12, 'U10 Larks');
     plan = await createPlan(app, club.coach.token, squad, { date: '2027-01-12', kickOff: '18:00' });
   });
