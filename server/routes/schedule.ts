@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { idempotency } from '../middleware/idempotency';
 import { validate } from '../middleware/validate';
 import { ScheduleService, type ScheduleQuery } from '../services/schedule-service';
 import type { ApiDeps } from './api-deps';
@@ -14,6 +15,7 @@ export function scheduleRouter({ dataSource, requireAuth }: ApiDeps): Router {
   const session = validate({ params: 'schedule-param' });
   const query = validate({ query: 'schedule-query' });
   const service = (req: Parameters<typeof scopeOf>[0]) => new ScheduleService(scopeOf(req, dataSource));
+  const once = idempotency(dataSource);
 
   router.get('/teams/:id/schedule', requireAuth, id, query, async (req, res) => {
     res.json(await service(req).list(req.params['id'] as string, req.query as unknown as ScheduleQuery));
@@ -23,6 +25,7 @@ export function scheduleRouter({ dataSource, requireAuth }: ApiDeps): Router {
     requireAuth,
     id,
     validate({ body: 'scheduled-session' }),
+    once,
     async (req, res) => {
       res.status(201).json(await service(req).create(req.params['id'] as string, req.body));
     },
@@ -32,6 +35,7 @@ export function scheduleRouter({ dataSource, requireAuth }: ApiDeps): Router {
     requireAuth,
     id,
     validate({ body: 'weekly-sessions' }),
+    once,
     async (req, res) => {
       res.status(201).json(await service(req).createWeekly(req.params['id'] as string, req.body));
     },

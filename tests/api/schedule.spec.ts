@@ -366,6 +366,25 @@ describe('a team’s schedule and its calendar feed', () => {
     for (const s of [...weekly, match])
       await app.api.delete(`${schedule()}/${s.id}`, { token: home.coach.token });
   });
+
+  it('a double tap on "Add weekly" (one Idempotency-Key) adds the term once', async () => {
+    const own = await createSquad(app, home.coach.token, 8, 'U11 Kestrels');
+    const first = addDays(today, 1);
+    const body = session({ date: first, until: addDays(first, 3 * 7), place: 'Top pitch' });
+    const headers = { 'Idempotency-Key': `weekly-${first}` };
+    const weekly = `${schedule(own.teamId)}/weekly`;
+    const once = await app.api.post(weekly, body, { token: home.coach.token, headers });
+    const again = await app.api.post(weekly, body, { token: home.coach.token, headers });
+    expect(once.status, once.text).toBe(201);
+    expect(again.status).toBe(201);
+    expect(again.headers.get('idempotent-replayed')).toBe('true');
+    expect(again.text).toBe(once.text);
+    const rows = (await app.dataSource.query(
+      'SELECT count(*)::int AS n FROM scheduled_session WHERE "teamId" = $1',
+      [own.teamId],
+    )) as { n: number }[];
+    expect(rows[0]!.n).toBe(4);
+  });
 });
 
 describe('the request log', () => {
