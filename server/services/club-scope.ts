@@ -97,10 +97,10 @@ export class ClubScope {
    * A team whose sessions the caller runs (register, pitch-side records): the lead, or a coach or
    * assistant attached to it; else 404 / 403.
    */
-  async teamToRun(id: string): Promise<Team> {
+  async teamToRun(id: string, doing = 'take its register'): Promise<Team> {
     const team = await this.team(id);
     if (this.auth.role !== 'lead' && !(await this.isAttached(team.id))) {
-      throw forbidden('Only the club lead and the team’s own coaches and assistants can take its register.');
+      throw forbidden(`Only the club lead and the team’s own coaches and assistants can ${doing}.`);
     }
     return team;
   }

@@ -92,7 +92,8 @@ export class FeedbackService {
     return this.dataSource.transaction(async (manager) => {
       const scope = new ClubScope(manager, auth);
       const row = await scope.plan(planId);
-      await scope.teamToRead(row.teamId);
+      // A verdict steers the team's next plan: only its own staff (or the lead) give one.
+      await scope.teamToRun(row.teamId, 'judge its stations');
       const station = stationOf(row.plan, input.phaseIndex, input.stationId);
       const { feedback, created } = await storeFeedback(manager, auth, row, station, input);
       return { dto: feedbackDto(feedback), created };

@@ -39,7 +39,7 @@ export class PitchSideService {
     return this.dataSource.transaction(async (manager) => {
       const scope = new ClubScope(manager, auth);
       const row = await lockPlan(manager, scope, planId);
-      const team = await scope.teamToRead(row.teamId);
+      const team = await scope.teamToRun(row.teamId, 'change who is at its session');
       const present = new Set(row.plan.request.players.map((p) => p.id));
       const addIds = (input.add ?? []).map((a) => (typeof a === 'string' ? a : a.id));
       const roster = addIds.length
@@ -76,7 +76,7 @@ export class PitchSideService {
     return this.dataSource.transaction(async (manager) => {
       const scope = new ClubScope(manager, auth);
       const row = await lockPlan(manager, scope, planId);
-      const team = await scope.teamToRead(row.teamId);
+      const team = await scope.teamToRun(row.teamId, 'judge its stations');
       const station = stationOf(row.plan, input.phaseIndex, input.stationId);
       const { feedback, created } = await storeFeedback(manager, auth, row, station, input);
       if (!created || input.verdict === 'right') {

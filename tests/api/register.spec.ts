@@ -82,6 +82,33 @@ describe('the register', () => {
     expect(after).toEqual(before);
   });
 
+  it('lets only the team’s own staff change a session: another team’s coach may not judge a station or re-plan', async () => {
+    const station = plan.plan.phases.find((p) => p.stations.length > 0)!;
+    const phaseIndex = plan.plan.phases.indexOf(station);
+    const stationId = station.stations[0]!.id;
+    const verdict = { stationId, phaseIndex, verdict: 'too-easy' };
+    const leaver = { fromMinute: 5, remove: [plan.request.players[0]!.id] };
+    for (const [path, body] of [
+      ['feedback', verdict],
+      ['progression', verdict],
+      ['replan', leaver],
+    ] as const) {
+      const refused = await app.api.post(`/api/plans/${plan.id}/${path}`, body, { token: otherCoach.token });
+      expect(refused.status, `${path}: ${refused.text}`).toBe(403);
+      expect(refused.body.detail).toMatch(/team’s own coaches and assistants/);
+    }
+    const feedbackRows = (await app.dataSource.query(
+      'SELECT count(*)::int AS n FROM feedback WHERE "planId" = $1',
+      [plan.id],
+    )) as { n: number }[];
+    expect(feedbackRows[0]!.n).toBe(0);
+    // The team's assistant may.
+    const byAssistant = await app.api.post(`/api/plans/${plan.id}/feedback`, verdict, {
+      token: club.assistant.token,
+    });
+    expect(byAssistant.status, byAssistant.text).toBeLessThan(300);
+  });
+
   it('names a bad minute, a player twice or two forms at once, and keeps the saved register', async () => {
     const before = (await app.api.get(`/api/plans/${plan.id}/attendance`, { token: club.coach.token })).body;
     const [a, b] = squad.playerIds;
