@@ -43,7 +43,12 @@ function button(root: HTMLElement, name: string): HTMLElement {
 }
 
 describe('TeamSchedule', () => {
-  async function setUp(editable: boolean, canPlan: boolean, path: string | null = null) {
+  async function setUp(
+    editable: boolean,
+    canPlan: boolean,
+    path: string | null = null,
+    sessions: ScheduledSessionDto[] = [SESSION, { ...SESSION, id: 's2', planId: 'p9' }],
+  ) {
     TestBed.configureTestingModule({
       imports: [TeamSchedule],
       providers: [
@@ -59,9 +64,7 @@ describe('TeamSchedule', () => {
     fixture.componentRef.setInput('canPlan', canPlan);
     const http = TestBed.inject(HttpTestingController);
     fixture.detectChanges();
-    http
-      .expectOne((r) => r.url === '/api/teams/t1/schedule')
-      .flush([SESSION, { ...SESSION, id: 's2', planId: 'p9' }]);
+    http.expectOne((r) => r.url === '/api/teams/t1/schedule').flush(sessions);
     http.expectOne('/api/teams/t1/calendar').flush({ path });
     await settle(fixture);
     return { fixture, http, root: fixture.nativeElement as HTMLElement };
@@ -91,6 +94,20 @@ describe('TeamSchedule', () => {
     expect(names).toContain('Copy link');
     const link = root.querySelector<HTMLInputElement>('[data-testid="calendar-link"]')!;
     expect(link.value).toBe(`${location.origin}/api/calendar/abcdefghijklmnopqrstuvwxyz.ics`);
+  });
+
+  it('lists the next five of a long term and the rest behind "Show all"', async () => {
+    const term = Array.from({ length: 12 }, (_, i) => ({
+      ...SESSION,
+      id: `w${i}`,
+      date: `2031-05-${String(6 + i).padStart(2, '0')}`,
+    }));
+    const { fixture, root } = await setUp(true, true, null, term);
+    expect(root.querySelectorAll('[data-testid="team-schedule"] li')).toHaveLength(5);
+    button(root, 'Show all 12 sessions').click();
+    await settle(fixture);
+    expect(root.querySelectorAll('[data-testid="team-schedule"] li')).toHaveLength(12);
+    expect(buttons(root)).not.toContain('Show all 12 sessions');
   });
 
   it('deletes a session only on the second tap', async () => {

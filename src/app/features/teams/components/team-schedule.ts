@@ -14,6 +14,9 @@ import { ScheduleDialog, type ScheduleDialogData } from './schedule-dialog';
  * A team's coming training nights and matches (add one, add weekly, change, delete) and the
  * address of its calendar feed for assistants' and parents' calendar apps.
  */
+/** Sessions listed before "Show all". */
+export const SESSIONS_SHOWN = 5;
+
 @Component({
   selector: 'cw-team-schedule',
   imports: [RouterLink, MatButtonModule, MatIconModule],
@@ -33,6 +36,11 @@ export class TeamSchedule {
   readonly canPlan = input(false);
 
   protected readonly sessions = signal<ScheduledSessionDto[]>([]);
+  /** A term of weekly nights is long: the next few show, the rest behind one tap. */
+  protected readonly showAll = signal(false);
+  protected readonly shown = computed(() =>
+    this.showAll() ? this.sessions() : this.sessions().slice(0, SESSIONS_SHOWN),
+  );
   protected readonly loaded = signal(false);
   protected readonly error = signal<string | null>(null);
   /** The session whose delete waits for a second tap. */
