@@ -15,7 +15,6 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
-import { NgTemplateOutlet } from '@angular/common';
 import { Router, RouterLink } from '@angular/router';
 import { ACTIVITY_KINDS, type ActivityKind, type Phase } from '../../../../shared/types';
 import { CardPaper, PlansApi } from '../../core/api/plans-api';
@@ -26,6 +25,7 @@ import { problemMessage } from '../../core/http/problem-message';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay } from '../../core/time/dates';
 import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
+import { EditAnswer } from './components/edit-answer';
 import { PhaseTimeline } from './components/phase-timeline';
 import { PlanNotices } from './components/plan-notices';
 import { ShareDialog, ShareDialogData } from './components/share-dialog';
@@ -54,7 +54,7 @@ interface SwapGroup {
     MatButtonToggleModule,
     MatIconModule,
     MatMenuModule,
-    NgTemplateOutlet,
+    EditAnswer,
     PhaseTimeline,
     PlanNotices,
     RegisterPanel,

@@ -3,20 +3,18 @@ import { ChangeDetectionStrategy, Component, computed, input, output, signal } f
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
-import { NgTemplateOutlet } from '@angular/common';
 import { POSITION_STYLE, type Station } from '../../../../../shared/types';
 import { ACTIVITY_KIND_LABELS } from '../../../core/labels/plan-labels';
 import { readableOn, ROLE_TAGS, roleLines, startRoles } from '../services/plan-words';
 import { StationDiagram } from '../../../shared/components/station-diagram';
+import { EditAnswer, type EditAnswerLines } from './edit-answer';
 
 /** Why the area cannot step larger or smaller (null where it can). */
 export type AreaStepLimits = Record<'larger' | 'smaller', string | null>;
 
 /** The last edit's answer for this card: under the area buttons or under the group. */
-export interface CardFeedback {
+export interface CardFeedback extends EditAnswerLines {
   control: 'area' | 'move';
-  kind: 'refused' | 'problems' | 'not-saved';
-  lines: string[];
 }
 
 export interface PlayerMoveRequest {
@@ -32,15 +30,7 @@ export interface PlayerMoveRequest {
  */
 @Component({
   selector: 'cw-station-card',
-  imports: [
-    CdkDropList,
-    CdkDrag,
-    MatButtonModule,
-    MatIconModule,
-    MatMenuModule,
-    NgTemplateOutlet,
-    StationDiagram,
-  ],
+  imports: [CdkDropList, CdkDrag, MatButtonModule, MatIconModule, MatMenuModule, EditAnswer, StationDiagram],
   templateUrl: './station-card.html',
   styleUrl: './station-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,0 +1,33 @@
+import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { MatIconModule } from '@angular/material/icon';
+
+/** What a refused or failed edit says, shown beside the control that was tapped. */
+export interface EditAnswerLines {
+  kind: 'refused' | 'problems' | 'not-saved';
+  lines: string[];
+}
+
+/** The answer to an edit in plain words, announced to screen readers, never printed. */
+@Component({
+  selector: 'cw-edit-answer',
+  imports: [MatIconModule],
+  template: `
+    <div
+      class="cw-edit-answer cw-no-print"
+      [class.cw-edit-answer--problem]="answer().kind !== 'refused'"
+      role="status"
+      data-testid="edit-feedback"
+    >
+      <mat-icon aria-hidden="true">{{ answer().kind === 'refused' ? 'block' : 'error' }}</mat-icon>
+      <ul>
+        @for (line of answer().lines; track line) {
+          <li>{{ line }}</li>
+        }
+      </ul>
+    </div>
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class EditAnswer {
+  readonly answer = input.required<EditAnswerLines>();
+}
