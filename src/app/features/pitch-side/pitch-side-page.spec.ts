@@ -1,3 +1,4 @@
+import { vi } from 'vitest';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
@@ -141,6 +142,27 @@ describe('PitchSidePage', () => {
     expect(el.querySelector('[data-testid=offline-badge]')).toBeNull();
     expect(JSON.parse(localStorage.getItem('conewise.pitch-side.queue')!)).toEqual([]);
     expect(el.querySelector('cw-station-card')?.textContent).toContain('8 × 8 m');
+  });
+
+  it('takes a double tap on a verdict as one; the same verdict a moment later steps again', async () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    try {
+      vi.setSystemTime(new Date('2031-05-06T18:00:00Z'));
+      const { http, button, settle } = await opened();
+      button('[data-verdict=too-easy]').click();
+      button('[data-verdict=too-easy]').click();
+      await settle();
+      const sent = http.match('/api/plans/p1/progression');
+      expect(sent).toHaveLength(1);
+      sent[0]!.flush({ plan: session, moves: [] });
+      await settle();
+      vi.setSystemTime(new Date('2031-05-06T18:00:05Z'));
+      button('[data-verdict=too-easy]').click();
+      await settle();
+      expect(http.match('/api/plans/p1/progression')).toHaveLength(1);
+    } finally {
+      vi.useRealTimers();
+    }
   });
 
   it('says under the verdict buttons why a station cannot step further, in plain words', async () => {

@@ -48,6 +48,9 @@ import { RegisterPanel } from '../plans/components/register-panel';
 import { changeoverWords, isBreak } from '../plans/services/plan-words';
 
 /** The running plan at the pitch: countdown, stations, late arrivals and how each station goes. */
+/** Two taps of the same verdict closer than this are one tap (a second step needs a moment's look). */
+const DOUBLE_TAP_MS = 1500;
+
 @Component({
   selector: 'cw-pitch-side-page',
   imports: [RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, RegisterPanel, StationCard],
@@ -71,6 +74,8 @@ export class PitchSidePage {
   private readonly rules = signal<unknown>(null);
   protected readonly clock = signal<ClockState>(STOPPED_CLOCK);
   protected readonly verdicts = signal<Record<string, string>>({});
+  /** The last verdict given per "phase:station" and when, to tell a double tap from a second step. */
+  private readonly lastVerdict = new Map<string, { verdict: StationVerdict; at: number }>();
   protected readonly moves = signal<PlayerMove[]>([]);
   /** Why a verdict could not step its station (by "phase:station"), shown under its buttons. */
   protected readonly refusals = signal<Record<string, string>>({});
@@ -282,6 +287,12 @@ export class PitchSidePage {
   /** Records how a station is going; too easy or too hard also steps the station. */
   protected judgeStation(stationId: string, verdict: StationVerdict): void {
     const phaseIndex = this.reading().phaseIndex;
+    // A double tap is one verdict: the same answer for the same station within a moment is dropped.
+    const key = `${phaseIndex}:${stationId}`;
+    const now = Date.now();
+    const last = this.lastVerdict.get(key);
+    if (last && last.verdict === verdict && now - last.at < DOUBLE_TAP_MS) return;
+    this.lastVerdict.set(key, { verdict, at: now });
     this.verdicts.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: verdict }));
     this.refusals.update(({ [`${phaseIndex}:${stationId}`]: _, ...rest }) => rest);
     const body = { phaseIndex, stationId, verdict };
