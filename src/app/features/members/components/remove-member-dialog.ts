@@ -47,16 +47,7 @@ export interface RemoveMemberData {
       </button>
     </mat-dialog-actions>
   `,
-  styles: `
-    .cw-consequences {
-      margin: 0 0 12px;
-      padding-left: 20px;
-    }
-    .cw-danger {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
-    }
-  `,
+  styleUrl: '../../../shared/components/confirm-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class RemoveMemberDialog {

@@ -50,19 +50,7 @@ export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'
       </button>
     </mat-dialog-actions>
   `,
-  styles: `
-    .cw-consequences {
-      margin: 0 0 12px;
-      padding-left: 20px;
-      li + li {
-        margin-top: 4px;
-      }
-    }
-    .cw-danger {
-      --mat-button-filled-container-color: var(--mat-sys-error);
-      --mat-button-filled-label-text-color: var(--mat-sys-on-error);
-    }
-  `,
+  styleUrl: '../../../shared/components/confirm-dialog.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class DeletePlanDialog {

@@ -80,7 +80,7 @@ function sameName(typed: string, name: string): boolean {
       </mat-dialog-actions>
     </form>
   `,
-  styleUrl: './confirm-dialog.scss',
+  styleUrl: '../../../shared/components/confirm-dialog.scss',
   styles: `
     .cw-wide {
       width: 100%;

@@ -45,7 +45,7 @@ import { problemMessage } from '../../../core/http/problem-message';
       </button>
     </mat-dialog-actions>
   `,
-  styleUrl: './confirm-dialog.scss',
+  styleUrl: '../../../shared/components/confirm-dialog.scss',
   styles: `
     .cw-tip {
       padding: 10px 12px;
