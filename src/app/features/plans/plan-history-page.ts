@@ -14,6 +14,7 @@ import { problemMessage } from '../../core/http/problem-message';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay } from '../../core/time/dates';
 import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
+import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 
 /** A team's past plans, newest first, each reusable for today with today's players. */
 @Component({
@@ -42,9 +43,12 @@ export class PlanHistoryPage {
   protected readonly kindLabels: Record<string, string> = KIND_LABELS;
   protected readonly day = shortDay;
   protected readonly canPlan = computed(() => this.auth.hasRole('lead', 'coach'));
-  protected readonly columns = computed(() =>
-    this.canPlan() ? ['date', 'kind', 'players', 'status', 'reuse'] : ['date', 'kind', 'players', 'status'],
-  );
+  /** On a phone the session, players and status fold under the date, so the row fits 390 px. */
+  protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);
+  protected readonly columns = computed(() => {
+    const facts = this.compact() ? ['date'] : ['date', 'kind', 'players', 'status'];
+    return this.canPlan() ? [...facts, 'reuse'] : facts;
+  });
 
   constructor() {
     effect(() => {
