@@ -117,6 +117,7 @@ describe('PlanPage', () => {
     phone = false,
     rules = defaultRuleSet as RuleSetDocument,
     shown = undefined as Plan | undefined,
+    role = 'coach' as 'coach' | 'assistant',
   } = {}) {
     const served = shown ?? plan;
     TestBed.configureTestingModule({
@@ -144,7 +145,7 @@ describe('PlanPage', () => {
         email: 'rhea@example.org',
         clubId: 'c1',
         clubName: 'Harbour',
-        role: 'coach',
+        role,
       },
     });
     const fixture = TestBed.createComponent(PlanPage);
@@ -247,6 +248,18 @@ describe('PlanPage', () => {
     expect(document.querySelector('mat-snack-bar-container')?.textContent).toContain(
       '3 e-mails queued for sending.',
     );
+  });
+
+  it('offers an assistant helper links only, saying e-mailing the card is for coaches and the lead', async () => {
+    const { fixture, http, root } = await setUp({ role: 'assistant' });
+    root.querySelector<HTMLButtonElement>('[data-testid="share"]')!.click();
+    await settle(fixture);
+    const dialog = document.querySelector('cw-share-dialog')!;
+    expect(dialog.textContent).toContain('E-mailing the card is for the team');
+    expect(dialog.querySelector('[data-testid="share-recipients"]')).toBeNull();
+    expect(dialog.querySelector('[data-testid="share-send"]')).toBeNull();
+    expect(dialog.querySelector('cw-helper-links')).not.toBeNull();
+    http.match('/api/plans/plan-1/helper-links').forEach((r) => r.flush([]));
   });
 
   it("folds each station's details on a phone and keeps title, area and diagram in view", async () => {

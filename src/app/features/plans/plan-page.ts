@@ -212,7 +212,7 @@ export class PlanPage {
     if (!saved) return;
     this.dialog
       .open<ShareDialog, ShareDialogData, number>(ShareDialog, {
-        data: { planId: saved.id, paper: this.paper() },
+        data: { planId: saved.id, paper: this.paper(), canEmail: this.canEdit() },
         width: '480px',
       })
       .afterClosed()

@@ -41,6 +41,8 @@ function recipientsValidator(control: AbstractControl): ValidationErrors | null 
 export interface ShareDialogData {
   planId: string;
   paper: CardPaper;
+  /** E-mailing the card is for the lead and coaches; assistants share helper links only. */
+  canEmail: boolean;
 }
 
 /** Sends the printed card by e-mail to the people the coach names. */
@@ -58,36 +60,45 @@ export interface ShareDialogData {
     <h2 mat-dialog-title>Share the plan</h2>
     <form [formGroup]="form" (ngSubmit)="send()" novalidate>
       <mat-dialog-content>
-        <p>
-          Each person gets an e-mail with the one-page card attached as a PDF on
-          {{ paperLabels[data.paper] }} paper, and a link to see the plan on their phone.
-        </p>
-        @if (error(); as text) {
-          <p class="cw-form-error" role="alert">{{ text }}</p>
+        @if (data.canEmail) {
+          <p>
+            Each person gets an e-mail with the one-page card attached as a PDF on
+            {{ paperLabels[data.paper] }} paper, and a link to see the plan on their phone.
+          </p>
+          @if (error(); as text) {
+            <p class="cw-form-error" role="alert">{{ text }}</p>
+          }
+          <mat-form-field appearance="outline" class="cw-wide">
+            <mat-label>E-mail addresses</mat-label>
+            <textarea
+              matInput
+              formControlName="recipients"
+              rows="3"
+              cdkFocusInitial
+              data-testid="share-recipients"
+            ></textarea>
+            <mat-hint>Separate with commas or put one a line.</mat-hint>
+            <mat-error>{{ message(form.controls.recipients, 'Recipients') }}</mat-error>
+          </mat-form-field>
+          <mat-form-field appearance="outline" class="cw-wide">
+            <mat-label>Note (optional)</mat-label>
+            <input matInput formControlName="message" maxlength="500" />
+          </mat-form-field>
+        } @else {
+          <p>
+            E-mailing the card is for the team's coaches and the club lead. You can make a helper link below
+            and send it yourself: it shows the plan on a phone, with first names only.
+          </p>
         }
-        <mat-form-field appearance="outline" class="cw-wide">
-          <mat-label>E-mail addresses</mat-label>
-          <textarea
-            matInput
-            formControlName="recipients"
-            rows="3"
-            cdkFocusInitial
-            data-testid="share-recipients"
-          ></textarea>
-          <mat-hint>Separate with commas or put one a line.</mat-hint>
-          <mat-error>{{ message(form.controls.recipients, 'Recipients') }}</mat-error>
-        </mat-form-field>
-        <mat-form-field appearance="outline" class="cw-wide">
-          <mat-label>Note (optional)</mat-label>
-          <input matInput formControlName="message" maxlength="500" />
-        </mat-form-field>
         <cw-helper-links [planId]="data.planId" />
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-button type="button" mat-dialog-close>Cancel</button>
-        <button mat-flat-button type="submit" [disabled]="sending()" data-testid="share-send">
-          {{ sending() ? 'Sending…' : 'Send' }}
-        </button>
+        <button mat-button type="button" mat-dialog-close>{{ data.canEmail ? 'Cancel' : 'Close' }}</button>
+        @if (data.canEmail) {
+          <button mat-flat-button type="submit" [disabled]="sending()" data-testid="share-send">
+            {{ sending() ? 'Sending…' : 'Send' }}
+          </button>
+        }
       </mat-dialog-actions>
     </form>
   `,
