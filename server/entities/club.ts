@@ -1,5 +1,8 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
+/** A club's time zone until it says otherwise (the column's default, and the fallback for unknown zones). */
+export const DEFAULT_TIME_ZONE = 'Europe/London';
+
 /** A football club: the boundary of every piece of data. */
 @Entity({ name: 'club' })
 export class Club {
@@ -10,7 +13,7 @@ export class Club {
   name!: string;
 
   /** IANA time zone of the club's sessions: their days and times are local to it. */
-  @Column({ type: 'varchar', length: 64, default: 'Europe/London' })
+  @Column({ type: 'varchar', length: 64, default: DEFAULT_TIME_ZONE })
   timeZone!: string;
 
   @CreateDateColumn({ type: 'timestamptz' })

@@ -2,7 +2,7 @@ import bcrypt from 'bcryptjs';
 import type { DataSource } from 'typeorm';
 import type { AuthResponse, UserDto } from '../../shared/types/api';
 import type { AppConfig } from '../config';
-import { Club } from '../entities/club';
+import { Club, DEFAULT_TIME_ZONE } from '../entities/club';
 import { Membership } from '../entities/membership';
 import { User } from '../entities/user';
 import type { AuthContext } from '../http/auth-context';
@@ -52,12 +52,15 @@ export class AuthService {
     name: string;
     email: string;
     password: string;
+    timeZone?: string;
   }): Promise<AuthResponse> {
     const email = normaliseEmail(input.email);
     const passwordHash = await hashPassword(input.password);
     const auth = await this.dataSource.transaction(async (manager) => {
       if (await manager.getRepository(User).existsBy({ email })) throw emailTaken();
-      const club = await manager.getRepository(Club).save({ name: input.clubName.trim() });
+      const club = await manager
+        .getRepository(Club)
+        .save({ name: input.clubName.trim(), timeZone: knownTimeZone(input.timeZone) });
       const user = await manager.getRepository(User).save({ email, name: input.name.trim(), passwordHash });
       await manager.getRepository(Membership).save({ clubId: club.id, userId: user.id, role: 'lead' });
       const context: AuthContext = {
@@ -94,5 +97,15 @@ export class AuthService {
 
   respond(auth: AuthContext): AuthResponse {
     return { token: signToken(this.config, auth.userId, auth.clubId), user: userDto(auth) };
+  }
+}
+
+/** The club's sessions happen in this zone: the one its creator's browser gave, if Intl knows it. */
+function knownTimeZone(zone: string | undefined): string {
+  if (!zone) return DEFAULT_TIME_ZONE;
+  try {
+    return new Intl.DateTimeFormat('en', { timeZone: zone }).resolvedOptions().timeZone;
+  } catch {
+    return DEFAULT_TIME_ZONE;
   }
 }

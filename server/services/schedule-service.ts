@@ -7,7 +7,7 @@ import {
   type ScheduledSessionDto,
   type WeeklySessionsBody,
 } from '../../shared/types/schedule';
-import { Club } from '../entities/club';
+import { Club, DEFAULT_TIME_ZONE } from '../entities/club';
 import { ScheduledSession } from '../entities/scheduled-session';
 import type { Team } from '../entities/team';
 import { badRequest, forbidden, notFound } from '../http/problem';
@@ -28,7 +28,7 @@ export async function clubTimeZone(manager: EntityManager, clubId: string): Prom
   const club = await manager
     .getRepository(Club)
     .findOne({ where: { id: clubId }, select: ['id', 'timeZone'] });
-  return club?.timeZone ?? 'Europe/London';
+  return club?.timeZone ?? DEFAULT_TIME_ZONE;
 }
 
 /** The latest plan made for each of these sessions. */

@@ -40,6 +40,35 @@ describe('auth: register, login, me', () => {
     expect((claims.payload as jwt.JwtPayload).exp).toBeGreaterThan(Date.now() / 1000);
   });
 
+  it('register keeps the time zone the browser gave for the club, and London for none or an unknown one', async () => {
+    const zoneOf = async (timeZone?: string) => {
+      const response = await app.api.post('/api/auth/register', {
+        clubName: 'Lakeside Juniors',
+        name: 'Zone Lead',
+        email: uniqueEmail('zone'),
+        password: TEST_PASSWORD,
+        ...(timeZone === undefined ? {} : { timeZone }),
+      });
+      expect(response.status, response.text).toBe(201);
+      const rows = (await app.dataSource.query('SELECT "timeZone" FROM club WHERE id = $1', [
+        response.body.user.clubId,
+      ])) as { timeZone: string }[];
+      return rows[0]!.timeZone;
+    };
+    expect(await zoneOf('America/New_York')).toBe('America/New_York');
+    expect(await zoneOf('Mars/Olympus_Mons')).toBe('Europe/London');
+    expect(await zoneOf()).toBe('Europe/London');
+    const bad = await app.api.post('/api/auth/register', {
+      clubName: 'Lakeside Juniors',
+      name: 'Zone Lead',
+      email: uniqueEmail('zone'),
+      password: TEST_PASSWORD,
+      timeZone: '<script>',
+    });
+    expect(bad.status).toBe(400);
+    expect(JSON.stringify(bad.body.errors)).toContain('timeZone');
+  });
+
   it('register refuses an e-mail that is already taken (any case) with 409', async () => {
     const response = await app.api.post('/api/auth/register', {
       clubName: 'Another',

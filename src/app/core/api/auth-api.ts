@@ -13,6 +13,8 @@ export interface CreateClubBody {
   name: string;
   email: string;
   password: string;
+  /** The club's IANA time zone: its schedule and calendar feed are local to it. */
+  timeZone?: string;
 }
 
 export interface AcceptInvitationBody {
@@ -42,7 +44,9 @@ export class AuthApi {
 
   /** POST /api/auth/register: a new club and its lead. */
   createClub(body: CreateClubBody): Observable<AuthResponse> {
-    return this.http.post<AuthResponse>('/api/auth/register', body);
+    // The club's sessions are local to where it is made: the browser's own zone.
+    const timeZone = Intl.DateTimeFormat().resolvedOptions().timeZone;
+    return this.http.post<AuthResponse>('/api/auth/register', timeZone ? { timeZone, ...body } : body);
   }
 
   /** POST /api/invitations/accept: the invitee sets their name and password. */
