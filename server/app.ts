@@ -6,6 +6,7 @@ import { pino, type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from './config';
+import { clientFiles, compressAnswers, noStore } from './middleware/client-files';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { createRequireAuth } from './middleware/require-auth';
 import { createApiRouter } from './routes';
@@ -78,6 +79,8 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   );
+  app.use(compressAnswers());
+  app.use('/api', noStore);
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT, type: ['application/json', 'application/*+json'] }));
 
   const requireAuth = createRequireAuth(deps.dataSource, deps.config);
@@ -94,17 +97,7 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', apiNotFound);
 
   const staticDir = deps.config.staticDir;
-  if (staticDir && existsSync(join(staticDir, 'index.html'))) {
-    app.use(express.static(staticDir, { index: false, maxAge: '1h' }));
-    // History fallback: client routes such as /teams/42 load the app shell.
-    app.get(/^(?!\/api(\/|$)).*/, (req, res, next) => {
-      if (!req.accepts('html')) return next();
-      res.setHeader('Cache-Control', 'no-cache');
-      // The helper's view of a plan is for one family's evening, not for search engines.
-      if (req.path === '/helper') res.setHeader('X-Robots-Tag', 'noindex, nofollow');
-      res.sendFile(join(staticDir, 'index.html'));
-    });
-  }
+  if (staticDir && existsSync(join(staticDir, 'index.html'))) app.use(clientFiles(staticDir));
 
   app.use(apiNotFound);
   app.use(errorHandler);

@@ -52,7 +52,7 @@ const steps: Step[] = [
   },
   vitestStep('engine'),
   { name: 'client', report: join(results, 'client.json'), command: ['npx', 'ng', 'test', '--watch=false'] },
-  { name: 'build client', command: ['npx', 'ng', 'build'] },
+  { name: 'build client', command: ['npm', 'run', '-s', 'build'] },
   vitestStep('api'),
   vitestStep('e2e'),
 ];

@@ -32,6 +32,7 @@ export function calendarRouter({ dataSource, config, requireAuth }: ApiDeps): Ro
     const text = await calendarFeed(dataSource.manager, token, config.publicUrl);
     res
       .type('text/calendar; charset=utf-8')
+      // Not the API's no-store: calendar apps poll the feed, and it names no player.
       .setHeader('Cache-Control', 'private, max-age=300')
       .setHeader('X-Robots-Tag', 'noindex')
       .send(text);

@@ -16,10 +16,7 @@ export function healthRouter({ dataSource, config }: ApiDeps): Router {
       db = 'down';
     }
     const body: HealthDto = { status: db === 'up' ? 'ok' : 'degraded', db, version: config.version };
-    res
-      .status(db === 'up' ? 200 : 503)
-      .setHeader('Cache-Control', 'no-store')
-      .json(body);
+    res.status(db === 'up' ? 200 : 503).json(body);
   });
   return router;
 }

@@ -21,22 +21,13 @@ export function helperLinksRouter({ dataSource, config, requireAuth }: ApiDeps):
 
   router.get('/helper-view', limiter, async (req, res) => {
     const view = await links.view(req.get(HELPER_TOKEN_HEADER));
-    res
-      .setHeader('Cache-Control', 'no-store')
-      .setHeader('Referrer-Policy', 'no-referrer')
-      .setHeader('X-Robots-Tag', 'noindex, nofollow')
-      .json(view);
+    res.setHeader('Referrer-Policy', 'no-referrer').setHeader('X-Robots-Tag', 'noindex, nofollow').json(view);
   });
   router.post('/plans/:id/helper-links', requireAuth, id, async (req, res) => {
-    res
-      .status(201)
-      .setHeader('Cache-Control', 'no-store')
-      .json(await links.create(authOf(req), req.params['id'] as string));
+    res.status(201).json(await links.create(authOf(req), req.params['id'] as string));
   });
   router.get('/plans/:id/helper-links', requireAuth, id, async (req, res) => {
-    res
-      .setHeader('Cache-Control', 'no-store')
-      .json(await links.list(authOf(req), req.params['id'] as string));
+    res.json(await links.list(authOf(req), req.params['id'] as string));
   });
   router.delete('/plans/:id/helper-links/:linkId', requireAuth, id, async (req, res) => {
     await links.revoke(authOf(req), req.params['id'] as string, req.params['linkId'] as string);

@@ -64,11 +64,7 @@ export function plansRouter({ dataSource, config, requireAuth, mail }: ApiDeps):
   router.get('/plans/:id/pdf', requireAuth, id, validate({ query: 'plan-pdf-query' }), async (req, res) => {
     const paper = (req.query as { paper: Paper }).paper;
     const { pdf, filename } = await cards.pdf(authOf(req), req.params['id'] as string, paper);
-    res
-      .type('application/pdf')
-      .setHeader('Content-Disposition', `inline; filename="${filename}"`)
-      .setHeader('Cache-Control', 'private, no-store')
-      .send(pdf);
+    res.type('application/pdf').setHeader('Content-Disposition', `inline; filename="${filename}"`).send(pdf);
   });
   router.post(
     '/plans/:id/share',
