@@ -1,7 +1,12 @@
 import { spawnSync } from 'node:child_process';
-import { existsSync, readdirSync, readFileSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
-import { extname, join } from 'node:path';
-import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
+import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import {
+  type BuildMetafile,
+  prefetchOfflineScreens,
+  type ServiceWorkerManifest,
+} from './build/offline-groups';
+import { precompressClient } from './build/precompress';
 import { CLIENT_DIST, PROJECT_ROOT } from './config';
 
 /** Folders whose files end up in the client bundle. */
@@ -13,12 +18,6 @@ const CONFIG_FILES = [
   'package-lock.json',
   'ngsw-config.json',
 ];
-
-/** Built files worth compressing: text. Fonts (woff2) and images are compressed already. */
-const TEXT_EXTENSIONS = new Set(['.js', '.mjs', '.css', '.html', '.json', '.webmanifest', '.svg', '.txt']);
-/** Below this, the headers cost more than compression saves (the `compression` package's own default). */
-const MIN_BYTES = 1024;
-const COMPRESSED = ['.br', '.gz'];
 
 function newestMtime(path: string): number {
   if (!existsSync(path)) return 0;
@@ -38,54 +37,24 @@ export function clientIsStale(): boolean {
   return Math.max(...sources) > built;
 }
 
-function filesUnder(dir: string): string[] {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((entry) =>
-    entry.isDirectory() ? filesUnder(join(dir, entry.name)) : [join(dir, entry.name)],
-  );
-}
-
 /**
- * Writes a brotli (.br, quality 11) and a gzip (.gz, level 9) copy beside every text file of the
- * build, so the server sends them without compressing on each request (express-static-gzip picks
- * the copy the browser accepts). Copies left from an earlier build are removed. Returns the
- * number of files compressed and their bytes before and after brotli.
+ * `ng build` (production, with esbuild's metafile), then the service worker's prefetch list (the
+ * shell and the screens needed offline), then the compressed copies. False when the build failed.
  */
-export function precompressClient(dir = CLIENT_DIST): { files: number; bytes: number; brotliBytes: number } {
-  let files = 0;
-  let bytes = 0;
-  let brotliBytes = 0;
-  for (const file of filesUnder(dir)) {
-    if (COMPRESSED.includes(extname(file))) {
-      if (!existsSync(file.slice(0, -3))) unlinkSync(file);
-      continue;
-    }
-    if (!TEXT_EXTENSIONS.has(extname(file))) continue;
-    const content = readFileSync(file);
-    if (content.length < MIN_BYTES) continue;
-    const brotli = brotliCompressSync(content, {
-      params: {
-        [zlib.BROTLI_PARAM_QUALITY]: zlib.BROTLI_MAX_QUALITY,
-        [zlib.BROTLI_PARAM_MODE]: zlib.BROTLI_MODE_TEXT,
-        [zlib.BROTLI_PARAM_SIZE_HINT]: content.length,
-      },
-    });
-    writeFileSync(`${file}.br`, brotli);
-    writeFileSync(`${file}.gz`, gzipSync(content, { level: 9 }));
-    files += 1;
-    bytes += content.length;
-    brotliBytes += brotli.length;
-  }
-  return { files, bytes, brotliBytes };
-}
-
-/** `ng build` (production) then the compressed copies. Returns false when the build failed. */
 export function buildClient(log: (m: string) => void = console.log): boolean {
-  const result = spawnSync('npx', ['ng', 'build'], {
+  const result = spawnSync('npx', ['ng', 'build', '--stats-json'], {
     cwd: PROJECT_ROOT,
     stdio: 'inherit',
     env: { ...process.env, NG_CLI_ANALYTICS: 'false' },
   });
   if (result.status !== 0) return false;
+  const manifestPath = join(CLIENT_DIST, 'ngsw.json');
+  const { manifest, moved } = prefetchOfflineScreens(
+    JSON.parse(readFileSync(manifestPath, 'utf8')) as ServiceWorkerManifest,
+    JSON.parse(readFileSync(join(CLIENT_DIST, '..', 'stats.json'), 'utf8')) as BuildMetafile,
+  );
+  writeFileSync(manifestPath, JSON.stringify(manifest, null, 2));
+  log(`[conewise] the service worker prefetches ${moved} chunks for the shell, the plan page and pitch-side`);
   const { files, bytes, brotliBytes } = precompressClient();
   log(
     `[conewise] compressed ${files} built files: ${Math.round(bytes / 1024)} kB → ${Math.round(brotliBytes / 1024)} kB brotli`,

@@ -9,7 +9,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { brotliDecompressSync, gunzipSync } from 'node:zlib';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { precompressClient } from '../../server/client-build';
+import { precompressClient } from '../../server/build/precompress';
 import { registerClub, startTestApp, type TestApp } from '../support/api-test-app';
 import { createPlan, createSquad } from './fixtures/plan-helpers';
 

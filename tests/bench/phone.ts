@@ -19,15 +19,16 @@
  * {"signInVisibleMs":…,"signInKb":…,"homeVisibleMs":…,"homeKb":…,"planVisibleMs":…,"planKb":…,
  *  "totalKb":…,"repeatOnlineMs":…,"repeatOfflineMs":…}
  */
-import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type CDPSession, type Page } from 'playwright-core';
-import { PROJECT_ROOT } from '../../server/config';
+import { precompressClient } from '../../server/build/precompress';
+import { buildClient } from '../../server/client-build';
 import { DEMO_PASSWORD } from '../../server/seed';
 import { CHROMIUM_ARGS } from '../e2e/support/browser';
 import { setup, teardown } from '../support/e2e-global-setup';
+import { byType, kilobytes, WireMeter, type WireRecord } from './support/wire';
 
 const COACH = 'coach.u12@fernmoor.example.org';
 
@@ -45,41 +46,6 @@ const PHONE_CONTEXT = {
   isMobile: true,
   hasTouch: true,
 } as const;
-
-const QUIET_MS = 1000;
-
-/** Counts the bytes each request moved (Network.loadingFinished's encodedDataLength). */
-class WireMeter {
-  private bytes = 0;
-  private inFlight = new Set<string>();
-  private lastActivity = Date.now();
-
-  constructor(cdp: CDPSession) {
-    cdp.on('Network.requestWillBeSent', (event) => {
-      this.inFlight.add(event.requestId);
-      this.lastActivity = Date.now();
-    });
-    cdp.on('Network.loadingFinished', (event) => {
-      this.bytes += event.encodedDataLength;
-      this.inFlight.delete(event.requestId);
-      this.lastActivity = Date.now();
-    });
-    cdp.on('Network.loadingFailed', (event) => {
-      this.inFlight.delete(event.requestId);
-      this.lastActivity = Date.now();
-    });
-  }
-
-  /** Bytes since the last call, once nothing has moved for QUIET_MS. */
-  async takeWhenQuiet(): Promise<number> {
-    while (this.inFlight.size > 0 || Date.now() - this.lastActivity < QUIET_MS) {
-      await new Promise((resolve) => setTimeout(resolve, 100));
-    }
-    const taken = this.bytes;
-    this.bytes = 0;
-    return taken;
-  }
-}
 
 async function throttle(page: Page): Promise<CDPSession> {
   const cdp = await page.context().newCDPSession(page);
@@ -176,14 +142,18 @@ interface ColdVisit {
   planKb: number;
 }
 
-async function coldVisit(context: BrowserContext, baseUrl: string, planId: string): Promise<ColdVisit> {
+async function coldVisit(
+  context: BrowserContext,
+  baseUrl: string,
+  planId: string,
+): Promise<{ figures: ColdVisit; records: Record<'signIn' | 'home' | 'plan', WireRecord[]> }> {
   const page = await context.newPage();
   const cdp = await throttle(page);
   const meter = new WireMeter(cdp);
 
   await page.goto(`${baseUrl}/sign-in`, { waitUntil: 'commit' });
   const signInVisibleMs = await visibleAt(page, 'button[type="submit"]');
-  const signInBytes = await meter.takeWhenQuiet();
+  const signIn = await meter.takeWhenQuiet();
 
   await page.getByLabel('E-mail').fill(COACH);
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
@@ -192,23 +162,25 @@ async function coldVisit(context: BrowserContext, baseUrl: string, planId: strin
     () => page.getByRole('button', { name: 'Sign in' }).click(),
     `a[href="/plans/${planId}"]`,
   );
-  const homeBytes = await meter.takeWhenQuiet();
+  const home = await meter.takeWhenQuiet();
 
   const planVisibleMs = await tapUntilVisible(
     page,
     () => page.locator(`a[href="/plans/${planId}"]`).first().click(),
     '[data-testid="phase"]',
   );
-  const planBytes = await meter.takeWhenQuiet();
+  const plan = await meter.takeWhenQuiet();
   await page.close();
-  const kb = (bytes: number) => Math.round(bytes / 102.4) / 10;
   return {
-    signInVisibleMs: Math.round(signInVisibleMs),
-    signInKb: kb(signInBytes),
-    homeVisibleMs: Math.round(homeVisibleMs),
-    homeKb: kb(homeBytes),
-    planVisibleMs: Math.round(planVisibleMs),
-    planKb: kb(planBytes),
+    figures: {
+      signInVisibleMs: Math.round(signInVisibleMs),
+      signInKb: kilobytes(signIn),
+      homeVisibleMs: Math.round(homeVisibleMs),
+      homeKb: kilobytes(home),
+      planVisibleMs: Math.round(planVisibleMs),
+      planKb: kilobytes(plan),
+    },
+    records: { signIn, home, plan },
   };
 }
 
@@ -254,17 +226,10 @@ async function repeatVisit(
 }
 
 async function main(): Promise<void> {
-  if (process.env['SKIP_CLIENT_BUILD'] !== '1') {
-    console.log('Building the client for production…');
-    execFileSync(
-      join(PROJECT_ROOT, 'node_modules', '.bin', 'ng'),
-      ['build', '--configuration', 'production'],
-      {
-        cwd: PROJECT_ROOT,
-        stdio: ['ignore', 'ignore', 'inherit'],
-      },
-    );
-  }
+  // SKIP_CLIENT_BUILD=1 measures the build that is there, compressed as `npm run build` would.
+  if (process.env['SKIP_CLIENT_BUILD'] === '1') precompressClient();
+  else if (!buildClient(() => undefined))
+    throw new Error('The client build failed: run `npm run build` to see why.');
   process.env['SKIP_CLIENT_BUILD'] = '1';
   const provided = new Map<string, string>();
   await setup({ provide: (key: string, value: string) => provided.set(key, value) } as never);
@@ -285,7 +250,7 @@ async function main(): Promise<void> {
     const { session, planId } = await newestPlanForCoach(baseUrl);
 
     const cold = await launch('block');
-    const visit = await coldVisit(cold, baseUrl, planId);
+    const { figures: visit, records } = await coldVisit(cold, baseUrl, planId);
     await cold.close();
 
     const warm = await launch('allow');
@@ -306,6 +271,13 @@ async function main(): Promise<void> {
     console.log(
       `${'Moved for the three'.padEnd(34)} ${totalKb.toFixed(1).padStart(16)} kB ${totalKb <= 400 ? '' : '✗ '}(≤ 400)`,
     );
+    for (const [step, rs] of Object.entries(records)) {
+      console.log(
+        `  ${step}: ${byType(rs)
+          .map(([type, kb]) => `${type} ${kb} kB`)
+          .join(', ')}`,
+      );
+    }
     console.log(row('Plan again, worker installed', repeat.repeatOnlineMs, 1000));
     console.log(row('Plan again, offline', repeat.repeatOfflineMs, 1000));
     console.log(JSON.stringify({ ...visit, totalKb, ...repeat }));

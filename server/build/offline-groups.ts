@@ -1,0 +1,91 @@
+/**
+ * Which built files the service worker fetches on install, and which it keeps only once used.
+ *
+ * Angular's ngsw-config.json chooses by file-name pattern, but a build's chunks are named by hash,
+ * so the config alone cannot say "the plan page and pitch-side, and everything they import".
+ * After `ng build --stats-json`, this reads esbuild's metafile (dist/conewise/stats.json) and
+ * moves into the prefetched group every chunk the app shell, the plan page and pitch-side need,
+ * through static imports and the dynamic ones they make (the engine, for re-planning offline).
+ * Every other screen stays in the lazy group: cached the first time a coach opens it.
+ */
+
+/** Screens a coach needs at the pitch with no signal, by their source file. */
+export const OFFLINE_SCREENS = [
+  'src/app/features/plans/plan-page.ts',
+  'src/app/features/pitch-side/pitch-side-page.ts',
+] as const;
+
+/** The app's entry point: its static imports make the app shell. */
+const APP_ENTRY = 'src/main.ts';
+
+/** The parts of esbuild's metafile read here. */
+export interface BuildMetafile {
+  outputs: Record<
+    string,
+    { entryPoint?: string; imports?: { path: string; kind: string; external?: boolean }[] }
+  >;
+}
+
+/** The parts of ngsw.json read and written here. */
+export interface ServiceWorkerManifest {
+  assetGroups: { name: string; installMode: 'prefetch' | 'lazy'; urls: string[] }[];
+  [key: string]: unknown;
+}
+
+/** Built files (as URLs, e.g. "/chunk-AB12CD34.js") needed to run `entries`. */
+export function filesNeededBy(
+  meta: BuildMetafile,
+  entries: readonly string[],
+  follow: 'static' | 'static-and-dynamic',
+): Set<string> {
+  const byEntry = new Map<string, string>();
+  for (const [file, output] of Object.entries(meta.outputs)) {
+    if (output.entryPoint) byEntry.set(output.entryPoint, file);
+  }
+  const needed = new Set<string>();
+  const pending: string[] = [];
+  for (const entry of entries) {
+    const file = byEntry.get(entry);
+    if (!file) throw new Error(`the build has no chunk for ${entry}: is it still lazy-loaded?`);
+    pending.push(file);
+  }
+  while (pending.length) {
+    const file = pending.pop()!;
+    if (needed.has(file)) continue;
+    needed.add(file);
+    for (const imported of meta.outputs[file]?.imports ?? []) {
+      if (imported.external) continue;
+      if (
+        imported.kind === 'import-statement' ||
+        (follow === 'static-and-dynamic' && imported.kind === 'dynamic-import')
+      ) {
+        pending.push(imported.path);
+      }
+    }
+  }
+  return new Set([...needed].map((file) => `/${file}`));
+}
+
+/**
+ * Moves the shell's and the offline screens' files from the lazy group `lazyGroup` into the
+ * prefetched group `prefetchGroup`. Returns the manifest changed and the number of files moved.
+ */
+export function prefetchOfflineScreens(
+  manifest: ServiceWorkerManifest,
+  meta: BuildMetafile,
+  prefetchGroup = 'app',
+  lazyGroup = 'screens',
+): { manifest: ServiceWorkerManifest; moved: number } {
+  const prefetch = manifest.assetGroups.find((g) => g.name === prefetchGroup && g.installMode === 'prefetch');
+  const lazy = manifest.assetGroups.find((g) => g.name === lazyGroup && g.installMode === 'lazy');
+  if (!prefetch || !lazy)
+    throw new Error(`ngsw.json needs a prefetch group "${prefetchGroup}" and a lazy group "${lazyGroup}"`);
+  const wanted = new Set([
+    ...filesNeededBy(meta, [APP_ENTRY], 'static'),
+    ...filesNeededBy(meta, OFFLINE_SCREENS, 'static-and-dynamic'),
+  ]);
+  const moving = lazy.urls.filter((url) => wanted.has(url));
+  lazy.urls = lazy.urls.filter((url) => !wanted.has(url));
+  prefetch.urls = [...prefetch.urls, ...moving].sort();
+  return { manifest, moved: moving.length };
+}

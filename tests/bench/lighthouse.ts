@@ -1,0 +1,137 @@
+/**
+ * `npm run -s bench:lighthouse`: Lighthouse 12.2.3 (mobile: its default config, simulated slow 4G
+ * and 4× CPU) driving Debian's Chromium against a throwaway server with the demo club, on the
+ * sign-in page (cold, signed out) and on a coach's newest plan (signed in, cache emptied first).
+ * Prints the four category scores per page; the last line is JSON
+ * {"signIn":{"performance":…,"accessibility":…,"best-practices":…,"seo":…},"plan":{…}}.
+ * Goals (issue 12): performance ≥ 95 on sign-in and ≥ 90 on the plan, accessibility 100 and
+ * best practices 100 on both. The full reports go to test-results/lighthouse-<page>.json.
+ */
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import lighthouse from 'lighthouse';
+import { chromium } from 'playwright-core';
+import { precompressClient } from '../../server/build/precompress';
+import { buildClient } from '../../server/client-build';
+import { PROJECT_ROOT } from '../../server/config';
+import { DEMO_PASSWORD } from '../../server/seed';
+import type { Page, PlanSummaryDto } from '../../shared/types/api';
+import { CHROMIUM_ARGS } from '../e2e/support/browser';
+import { setup, teardown } from '../support/e2e-global-setup';
+
+const COACH = 'coach.u12@fernmoor.example.org';
+const REPORTS = join(PROJECT_ROOT, 'test-results');
+const CATEGORIES = ['performance', 'accessibility', 'best-practices', 'seo'] as const;
+type Scores = Record<(typeof CATEGORIES)[number], number>;
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address() as { port: number };
+      server.close(() => resolve(port));
+    });
+    server.on('error', reject);
+  });
+}
+
+async function newestPlan(baseUrl: string): Promise<{ session: string; planId: string }> {
+  const login = await fetch(`${baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: COACH, password: DEMO_PASSWORD }),
+  });
+  const session = (await login.json()) as { token: string };
+  const auth = { authorization: `Bearer ${session.token}` };
+  const page = (await (
+    await fetch(`${baseUrl}/api/plans`, { headers: auth })
+  ).json()) as Page<PlanSummaryDto>;
+  const list = page.items;
+  if (!list[0]) throw new Error('the demo coach has no plan to open');
+  return { session: JSON.stringify(session), planId: list[0].id };
+}
+
+async function main(): Promise<void> {
+  if (process.env['SKIP_CLIENT_BUILD'] === '1') precompressClient();
+  else if (!buildClient(() => undefined))
+    throw new Error('The client build failed: run `npm run build` to see why.');
+  process.env['SKIP_CLIENT_BUILD'] = '1';
+  const provided = new Map<string, string>();
+  await setup({ provide: (key: string, value: string) => provided.set(key, value) } as never);
+  const baseUrl = provided.get('baseUrl')!;
+  const profile = mkdtempSync(join(tmpdir(), 'conewise-lighthouse-'));
+  const port = await freePort();
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: '/usr/bin/chromium',
+    args: [...CHROMIUM_ARGS, `--remote-debugging-port=${port}`],
+    headless: true,
+  });
+  const results: Record<string, Scores> = {};
+  try {
+    const { session, planId } = await newestPlan(baseUrl);
+    const run = async (name: string, url: string, signedIn: boolean) => {
+      if (signedIn) {
+        // Signed in without loading the app first (a file of the same origin), so no service
+        // worker is installed; then an empty cache, as after the sign-in page's own run.
+        const page = await context.newPage();
+        await page.goto(`${baseUrl}/assets/favicon.svg`);
+        await page.evaluate((value) => localStorage.setItem('conewise.session', value), session);
+        const cdp = await context.newCDPSession(page);
+        await cdp.send('Network.clearBrowserCache');
+        await page.close();
+      }
+      const result = await lighthouse(url, {
+        port,
+        output: 'json',
+        logLevel: 'error',
+        onlyCategories: [...CATEGORIES],
+        // Signed in, the run must keep the session Lighthouse would otherwise clear.
+        disableStorageReset: signedIn,
+      });
+      if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
+      const { lhr } = result;
+      // The whole report, for reading what the scores are made of.
+      mkdirSync(REPORTS, { recursive: true });
+      writeFileSync(join(REPORTS, `lighthouse-${name}.json`), JSON.stringify(lhr, null, 1));
+      if (lhr.runtimeError) throw new Error(`Lighthouse: ${lhr.runtimeError.message}`);
+      const scores = Object.fromEntries(
+        CATEGORIES.map((c) => [c, Math.round((lhr.categories[c]?.score ?? 0) * 100)]),
+      ) as Scores;
+      results[name] = scores;
+      const metrics = [
+        'first-contentful-paint',
+        'largest-contentful-paint',
+        'total-blocking-time',
+        'cumulative-layout-shift',
+        'speed-index',
+      ]
+        .map((id) => `${id.replace(/-/g, ' ')} ${lhr.audits[id]?.displayValue ?? '?'}`)
+        .join(', ');
+      console.log(`${name.padEnd(8)} ${CATEGORIES.map((c) => `${c} ${scores[c]}`).join(' · ')}`);
+      console.log(`         ${metrics}`);
+      const failing = Object.values(lhr.audits).filter(
+        (a) =>
+          a.score !== null &&
+          a.score < 1 &&
+          a.scoreDisplayMode !== 'informative' &&
+          a.scoreDisplayMode !== 'manual',
+      );
+      for (const audit of failing.slice(0, 12))
+        console.log(`         – ${audit.id}: ${audit.title} (${audit.displayValue ?? audit.score})`);
+    };
+    await run('signIn', `${baseUrl}/sign-in`, false);
+    await run('plan', `${baseUrl}/plans/${planId}`, true);
+  } finally {
+    await context.close();
+    rmSync(profile, { recursive: true, force: true });
+    await teardown();
+  }
+  console.log(JSON.stringify(results));
+}
+
+main().catch((error: unknown) => {
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+});

@@ -1,0 +1,106 @@
+/** The service worker's prefetch list: the shell and the offline screens with all they import. */
+import { describe, expect, it } from 'vitest';
+import {
+  type BuildMetafile,
+  filesNeededBy,
+  prefetchOfflineScreens,
+  type ServiceWorkerManifest,
+} from '../../server/build/offline-groups';
+
+/** A build shaped like ng build's: main imports two shared chunks, screens are lazy. */
+function metafile(): BuildMetafile {
+  return {
+    outputs: {
+      'main-AAAA0001.js': {
+        entryPoint: 'src/main.ts',
+        imports: [
+          { path: 'chunk-CORE0001.js', kind: 'import-statement' },
+          { path: 'chunk-PLAN0001.js', kind: 'dynamic-import' },
+          { path: 'chunk-SIDE0001.js', kind: 'dynamic-import' },
+          { path: 'chunk-TEAM0001.js', kind: 'dynamic-import' },
+        ],
+      },
+      'chunk-CORE0001.js': { imports: [] },
+      'chunk-PLAN0001.js': {
+        entryPoint: 'src/app/features/plans/plan-page.ts',
+        imports: [
+          { path: 'chunk-CORE0001.js', kind: 'import-statement' },
+          { path: 'chunk-CARD0001.js', kind: 'import-statement' },
+          { path: 'chunk-ENGN0001.js', kind: 'dynamic-import' },
+        ],
+      },
+      'chunk-SIDE0001.js': {
+        entryPoint: 'src/app/features/pitch-side/pitch-side-page.ts',
+        imports: [{ path: 'chunk-CARD0001.js', kind: 'import-statement' }],
+      },
+      'chunk-CARD0001.js': { imports: [] },
+      'chunk-ENGN0001.js': {
+        entryPoint: 'engine/index.ts',
+        imports: [{ path: 'chunk-RULE0001.js', kind: 'dynamic-import' }],
+      },
+      'chunk-RULE0001.js': { entryPoint: 'engine/rule-sets.ts', imports: [] },
+      'chunk-TEAM0001.js': {
+        entryPoint: 'src/app/features/teams/team-page.ts',
+        imports: [{ path: 'chunk-CHRT0001.js', kind: 'import-statement' }],
+      },
+      'chunk-CHRT0001.js': { imports: [] },
+    },
+  };
+}
+
+function manifest(): ServiceWorkerManifest {
+  return {
+    configVersion: 1,
+    assetGroups: [
+      { name: 'app', installMode: 'prefetch', urls: ['/index.html', '/main-AAAA0001.js'] },
+      {
+        name: 'screens',
+        installMode: 'lazy',
+        urls: Object.keys(metafile().outputs)
+          .filter((f) => f.startsWith('chunk-'))
+          .map((f) => `/${f}`),
+      },
+    ],
+  };
+}
+
+describe('the service worker prefetch list', () => {
+  it('follows static imports only for the shell, dynamic ones too for the offline screens', () => {
+    expect([...filesNeededBy(metafile(), ['src/main.ts'], 'static')].sort()).toEqual([
+      '/chunk-CORE0001.js',
+      '/main-AAAA0001.js',
+    ]);
+    expect(
+      [...filesNeededBy(metafile(), ['src/app/features/plans/plan-page.ts'], 'static-and-dynamic')].sort(),
+    ).toEqual([
+      '/chunk-CARD0001.js',
+      '/chunk-CORE0001.js',
+      '/chunk-ENGN0001.js',
+      '/chunk-PLAN0001.js',
+      '/chunk-RULE0001.js',
+    ]);
+  });
+
+  it('moves the plan page, pitch-side and the engine into the prefetched group and leaves other screens lazy', () => {
+    const { manifest: tuned, moved } = prefetchOfflineScreens(manifest(), metafile());
+    const [app, screens] = tuned.assetGroups;
+    expect(app!.urls).toEqual([
+      '/chunk-CARD0001.js',
+      '/chunk-CORE0001.js',
+      '/chunk-ENGN0001.js',
+      '/chunk-PLAN0001.js',
+      '/chunk-RULE0001.js',
+      '/chunk-SIDE0001.js',
+      '/index.html',
+      '/main-AAAA0001.js',
+    ]);
+    expect(screens!.urls.sort()).toEqual(['/chunk-CHRT0001.js', '/chunk-TEAM0001.js']);
+    expect(moved).toBe(6);
+  });
+
+  it('refuses a build where an offline screen is no longer its own chunk', () => {
+    const meta = metafile();
+    delete meta.outputs['chunk-SIDE0001.js']!.entryPoint;
+    expect(() => prefetchOfflineScreens(manifest(), meta)).toThrow(/pitch-side-page\.ts/);
+  });
+});
