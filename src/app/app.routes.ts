@@ -1,25 +1,15 @@
 import { Routes } from '@angular/router';
 import { roleGuard, signedInGuard, signedOutGuard } from './core/auth/auth-guards';
+import { PublicFrame } from './core/layout/public-frame';
+import { SignInPage } from './features/auth/sign-in-page';
 
-/** Every screen is lazy-loaded so the first paint stays small. */
+/**
+ * Every screen is lazy-loaded so the first paint stays small, except sign-in: it is the first
+ * screen of every new phone, and drawing it in the same task as the app's start saves a round trip.
+ * Public pages sit in a light frame; signed-in ones in the shell (toolbar, drawer), which loads
+ * with them; pitch-side and the helper's view fill the screen on their own.
+ */
 export const routes: Routes = [
-  {
-    path: 'sign-in',
-    title: 'Sign in · Conewise',
-    canActivate: [signedOutGuard],
-    loadComponent: () => import('./features/auth/sign-in-page').then((m) => m.SignInPage),
-  },
-  {
-    path: 'create-club',
-    title: 'Create a club · Conewise',
-    canActivate: [signedOutGuard],
-    loadComponent: () => import('./features/auth/create-club-page').then((m) => m.CreateClubPage),
-  },
-  {
-    path: 'invitations/:token',
-    title: 'Join your club · Conewise',
-    loadComponent: () => import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
-  },
   {
     // Public and read-only: a parent helper opens one plan through a link, with no account.
     path: 'helper',
@@ -27,13 +17,15 @@ export const routes: Routes = [
     loadComponent: () => import('./features/helper-view/helper-view-page').then((m) => m.HelperViewPage),
   },
   {
-    path: 'status',
-    title: 'System status · Conewise',
-    loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),
+    path: 'plans/:planId/pitch-side',
+    title: 'Pitch-side · Conewise',
+    canActivate: [signedInGuard],
+    loadComponent: () => import('./features/pitch-side/pitch-side-page').then((m) => m.PitchSidePage),
   },
   {
     path: '',
     canActivate: [signedInGuard],
+    loadComponent: () => import('./core/layout/shell').then((m) => m.Shell),
     children: [
       {
         path: '',
@@ -78,11 +70,6 @@ export const routes: Routes = [
         loadComponent: () => import('./features/plans/plan-page').then((m) => m.PlanPage),
       },
       {
-        path: 'plans/:planId/pitch-side',
-        title: 'Pitch-side · Conewise',
-        loadComponent: () => import('./features/pitch-side/pitch-side-page').then((m) => m.PitchSidePage),
-      },
-      {
         path: 'club/rules',
         title: 'Club rules · Conewise',
         canActivate: [roleGuard('lead')],
@@ -93,6 +80,36 @@ export const routes: Routes = [
         title: 'Members · Conewise',
         canActivate: [roleGuard('lead')],
         loadComponent: () => import('./features/members/members-page').then((m) => m.MembersPage),
+      },
+    ],
+  },
+  // After the signed-in routes: an empty-path frame would otherwise match / with nothing in it.
+  {
+    path: '',
+    component: PublicFrame,
+    children: [
+      {
+        path: 'sign-in',
+        title: 'Sign in · Conewise',
+        canActivate: [signedOutGuard],
+        component: SignInPage,
+      },
+      {
+        path: 'create-club',
+        title: 'Create a club · Conewise',
+        canActivate: [signedOutGuard],
+        loadComponent: () => import('./features/auth/create-club-page').then((m) => m.CreateClubPage),
+      },
+      {
+        path: 'invitations/:token',
+        title: 'Join your club · Conewise',
+        loadComponent: () =>
+          import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
+      },
+      {
+        path: 'status',
+        title: 'System status · Conewise',
+        loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),
       },
     ],
   },

@@ -17,6 +17,7 @@ import {
 } from '../../../../shared/types';
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 import { AuthStore } from '../../core/auth/auth-store';
+import { BrowserEngine } from '../../core/engine/browser-engine';
 import { PlanPage } from './plan-page';
 import { PlanSession } from './services/plan-session';
 
@@ -546,6 +547,30 @@ describe('PlanPage', () => {
       }
     }
     expect(card.querySelector('.cw-area-note')!.textContent).not.toMatch(/p\d+-s\d+|beginner/);
+  });
+
+  it('on a phone leaves the engine unloaded until a coach opens a station card, then greys its area buttons', async () => {
+    const tight = await generatePlan({ ...REQUEST, space: { width: 24, length: 30 } });
+    const [key, limit] = Object.entries(areaLimits(tight, defaultRuleSet)).find(
+      ([, l]) => l.larger || l.smaller,
+    )!;
+    const load = vi.spyOn(BrowserEngine.prototype, 'load');
+    const { fixture, root } = await setUp({ phone: true, shown: tight });
+    await settle(fixture);
+    // The engine is a large download: reading a plan on a phone does not fetch it.
+    expect(load).not.toHaveBeenCalled();
+
+    const [phaseIndex, stationId] = key.split(':');
+    const phaseEl = root.querySelectorAll('[data-testid="phase"]')[Number(phaseIndex)];
+    const card = phaseEl.querySelector(`[data-station="${stationId}"]`)!.closest('cw-station-card')!;
+    const details = card.querySelector('details')!;
+    details.open = true;
+    details.dispatchEvent(new Event('toggle'));
+    await settle(fixture);
+    expect(load).toHaveBeenCalled();
+    const size = limit.larger ? 'larger' : 'smaller';
+    expect(card.querySelector<HTMLButtonElement>(`[data-testid="area-${size}"]`)!.disabled).toBe(true);
+    expect(card.querySelector('.cw-area-note')!.textContent).toContain(limit[size]);
   });
 
   it('does not send an edit the engine refuses, and says why in the card that asked', async () => {

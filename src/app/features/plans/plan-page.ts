@@ -97,6 +97,9 @@ export class PlanPage {
   /** Phones fold each station's details (the shell's own phone breakpoint); wider screens keep them open. */
   protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);
 
+  /** Whether a coach has unfolded a station card (and so can see its area buttons). */
+  protected readonly areaButtonsShown = signal(false);
+
   protected readonly totalPlayers = computed(() => this.session.plan()?.request.players.length ?? 0);
 
   constructor() {
@@ -105,9 +108,13 @@ export class PlanPage {
       const id = this.planId();
       this.session.open(id, handover.take(id));
     });
-    // The area buttons grey out at their limits: worked out again for every plan on screen.
+    // The area buttons grey out at their limits: worked out again for every plan on screen, once
+    // they can be seen. On a phone they sit in folded station cards, so the engine (a large
+    // download) waits until a coach opens one; the edit itself loads it too.
     effect(() => {
-      if (this.canEdit() && this.session.plan()) void untracked(() => this.session.refreshLimits());
+      if (this.canEdit() && this.session.plan() && (this.areaButtonsShown() || !this.compact())) {
+        void untracked(() => this.session.refreshLimits());
+      }
     });
   }
 

@@ -60,6 +60,8 @@ export class StationCard {
   readonly move = output<PlayerMoveRequest>();
   /** Emits a request to step the area larger or smaller. */
   readonly stepArea = output<'larger' | 'smaller'>();
+  /** The coach opened the card's details (on a phone, where they start folded). */
+  readonly opened = output<void>();
 
   protected readonly kindLabels = ACTIVITY_KIND_LABELS;
   /** The move menu's destinations, named by number and title so no two read alike. */
@@ -103,7 +105,10 @@ export class StationCard {
 
   /** Follows the native disclosure, which opens and closes itself on tap, Enter and Space. */
   protected toggled(event: Event): void {
-    if (this.collapsible()) this.expanded.set((event.target as HTMLDetailsElement).open);
+    if (!this.collapsible()) return;
+    const open = (event.target as HTMLDetailsElement).open;
+    this.expanded.set(open);
+    if (open) this.opened.emit();
   }
 
   protected name(id: string): string {

@@ -1,0 +1,55 @@
+import { ChangeDetectionStrategy, Component, computed, inject, viewChild } from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatIconModule } from '@angular/material/icon';
+import { MatListModule } from '@angular/material/list';
+import { MatMenuModule } from '@angular/material/menu';
+import { MatSidenav, MatSidenavModule } from '@angular/material/sidenav';
+import { MatToolbarModule } from '@angular/material/toolbar';
+import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { AuthStore } from '../auth/auth-store';
+import { mediaMatches, PHONE_WIDTH_QUERY } from './media-query';
+import { NAV_ITEMS } from './nav-items';
+
+/**
+ * The signed-in frame: toolbar with the account menu, the navigation drawer, and the routed page.
+ * Loaded with the first signed-in screen, so the sign-in page and pitch-side never fetch it.
+ */
+@Component({
+  selector: 'cw-shell',
+  imports: [
+    RouterOutlet,
+    RouterLink,
+    RouterLinkActive,
+    MatToolbarModule,
+    MatSidenavModule,
+    MatListModule,
+    MatIconModule,
+    MatButtonModule,
+    MatMenuModule,
+  ],
+  templateUrl: './shell.html',
+  styleUrl: './shell.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class Shell {
+  private readonly router = inject(Router);
+  protected readonly auth = inject(AuthStore);
+  private readonly drawer = viewChild(MatSidenav);
+
+  /** Phones get a drawer that slides over; wider screens keep the navigation open. */
+  protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);
+
+  protected readonly navItems = computed(() =>
+    NAV_ITEMS.filter((item) => !item.roles || this.auth.hasRole(...item.roles)),
+  );
+
+  /** Closes the drawer after navigating on a phone. */
+  protected closeDrawerOnPhone(): void {
+    if (this.compact()) void this.drawer()?.close();
+  }
+
+  protected signOut(): void {
+    this.auth.signOut();
+    void this.router.navigate(['/sign-in']);
+  }
+}
