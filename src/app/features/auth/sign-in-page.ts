@@ -1,29 +1,33 @@
-import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
-import { MatButtonModule } from '@angular/material/button';
-import { MatCardModule } from '@angular/material/card';
-import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatInputModule } from '@angular/material/input';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  ElementRef,
+  inject,
+  input,
+  signal,
+  viewChild,
+} from '@angular/core';
 import { Router, RouterLink } from '@angular/router';
 import { AuthApi } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
-import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
-import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 
-/** E-mail and password in, a session out. */
+type Field = 'email' | 'password';
+
+/** The same reading of an address as Angular's e-mail validator (WHATWG's "valid e-mail address"). */
+const EMAIL =
+  /^(?=.{1,254}$)(?=.{1,64}@)[a-zA-Z0-9!#$%&'*+/=?^_`{|}~-]+(?:\.[a-zA-Z0-9!#$%&'*+/=?^_`{|}~-]+)*@[a-zA-Z0-9](?:[a-zA-Z0-9-]{0,61}[a-zA-Z0-9])?(?:\.[a-zA-Z0-9](?:[a-zA-Z0-9-]{0,61}[a-zA-Z0-9])?)*$/;
+
+/**
+ * E-mail and password in, a session out. The first screen of every new phone, so it is plain
+ * markup and signals: no forms module or Material form fields to fetch and start before it shows.
+ * Its fields look and read like the app's others; the server checks everything again.
+ */
 @Component({
   selector: 'cw-sign-in-page',
-  imports: [
-    ReactiveFormsModule,
-    RouterLink,
-    MatCardModule,
-    MatFormFieldModule,
-    MatInputModule,
-    MatButtonModule,
-  ],
+  imports: [RouterLink],
   templateUrl: './sign-in-page.html',
-  styleUrl: './auth-page.scss',
+  styleUrl: './sign-in-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class SignInPage {
@@ -34,37 +38,51 @@ export class SignInPage {
   /** Where to go after signing in (set by the guard). */
   readonly returnTo = input<string>();
 
-  protected readonly form = inject(NonNullableFormBuilder).group({
-    email: ['', [Validators.required, Validators.email]],
-    password: ['', Validators.required],
-  });
+  protected readonly email = signal('');
+  protected readonly password = signal('');
+  /** A message under each field, from the check below or from the server. */
+  protected readonly fieldErrors = signal<Partial<Record<Field, string>>>({});
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
-  protected readonly message = controlMessage;
+  private readonly emailInput = viewChild.required<ElementRef<HTMLInputElement>>('emailInput');
+  private readonly passwordInput = viewChild.required<ElementRef<HTMLInputElement>>('passwordInput');
 
-  protected async submit(): Promise<void> {
-    // Off from the tap, before the check below waits: a second tap sends nothing.
+  protected typed(field: Field, event: Event): void {
+    (field === 'email' ? this.email : this.password).set((event.target as HTMLInputElement).value);
+    if (this.fieldErrors()[field]) this.fieldErrors.update((errors) => ({ ...errors, [field]: undefined }));
+  }
+
+  /** The same words as every other form of the app. */
+  private check(): Partial<Record<Field, string>> {
+    const errors: Partial<Record<Field, string>> = {};
+    const email = this.email().trim();
+    if (!email) errors.email = 'E-mail is needed.';
+    else if (!EMAIL.test(email)) errors.email = 'E-mail must be an e-mail address like name@example.org.';
+    if (!this.password()) errors.password = 'Password is needed.';
+    return errors;
+  }
+
+  protected submit(event: Event): void {
+    event.preventDefault();
+    // Off from the tap: a second tap sends nothing.
     if (this.sending()) return;
-    this.sending.set(true);
     this.error.set(null);
-    const value = this.form.getRawValue();
-    const check = await checkAgainstSchema(this.form, 'auth-login', value, {
-      email: 'E-mail',
-      password: 'Password',
-    });
-    if (!check.ok) {
-      this.sending.set(false);
-      this.error.set(check.unmatched.join(' ') || null);
+    const errors = this.check();
+    this.fieldErrors.set(errors);
+    if (Object.keys(errors).length) {
+      (errors.email ? this.emailInput() : this.passwordInput()).nativeElement.focus();
       return;
     }
-    this.authApi.signIn(value).subscribe({
+    this.sending.set(true);
+    this.authApi.signIn({ email: this.email().trim(), password: this.password() }).subscribe({
       next: (response) => {
         this.auth.signIn(response);
         void this.router.navigateByUrl(this.returnTo() || '/');
       },
       error: (error: unknown) => {
         this.sending.set(false);
-        applyFieldErrors(this.form, problemFieldErrors(error));
+        const fields = problemFieldErrors(error);
+        this.fieldErrors.set({ email: fields['email'], password: fields['password'] });
         this.error.set(problemMessage(error));
       },
     });
