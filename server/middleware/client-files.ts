@@ -1,7 +1,7 @@
 import type { ServerResponse } from 'node:http';
 import { join } from 'node:path';
 import compression from 'compression';
-import { Router, type RequestHandler } from 'express';
+import express, { Router, type RequestHandler } from 'express';
 import expressStaticGzip from 'express-static-gzip';
 
 /**
@@ -50,19 +50,27 @@ export function compressAnswers(): RequestHandler {
  */
 export function clientFiles(staticDir: string): Router {
   const router = Router();
+  const files = {
+    index: false,
+    cacheControl: false,
+    setHeaders: (res: ServerResponse, path: string) => res.setHeader('Cache-Control', cacheControlFor(path)),
+  };
   router.use(
     expressStaticGzip(staticDir, {
       enableBrotli: true,
       orderPreference: ['br', 'gz'],
       index: false,
-      serveStatic: {
-        index: false,
-        cacheControl: false,
-        setHeaders: (res: ServerResponse, path: string) =>
-          res.setHeader('Cache-Control', cacheControlFor(path)),
-      },
+      serveStatic: files,
     }),
   );
+  // express-static-gzip lists the compressed copies once, at start. A build made while the server
+  // runs replaces them: such files are then read as they are (and compressed per answer), the
+  // encoding announced for a copy that is gone taken back first.
+  router.use((_req, res, next) => {
+    if (!res.headersSent) res.removeHeader('Content-Encoding');
+    next();
+  });
+  router.use(express.static(staticDir, files));
   router.get(/^(?!\/api(\/|$)).*/, (req, res, next) => {
     if (!req.accepts('html')) return next();
     res.setHeader('Cache-Control', CACHE_CONTROL.revalidate);

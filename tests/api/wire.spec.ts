@@ -101,6 +101,21 @@ describe('the built client on the wire', () => {
     expect(plain.bytes.toString('utf8')).toBe(SCRIPT);
   });
 
+  it('still serves the right bytes when a build replaces the files while the server runs', async () => {
+    // ng build empties the folder: the copies listed at start are gone, new chunks have none yet.
+    rmSync(join(dir, 'ngsw.json.br'));
+    rmSync(join(dir, 'ngsw.json.gz'));
+    writeFileSync(join(dir, 'chunk-NEW00001.js'), SCRIPT);
+    const ngsw = await raw(app.http.url, '/ngsw.json', { 'accept-encoding': 'br' });
+    expect(ngsw.status).toBe(200);
+    expect(JSON.parse(decoded(ngsw)).hashTable).toBeTruthy();
+    const fresh = await raw(app.http.url, '/chunk-NEW00001.js', { 'accept-encoding': 'gzip, br' });
+    expect(fresh.status).toBe(200);
+    expect(fresh.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    expect(decoded(fresh)).toBe(SCRIPT);
+    precompressClient(dir);
+  });
+
   it('has the browser ask again for ngsw.json, the app shell on any client route, and fonts kept a year', async () => {
     const ngsw = await raw(app.http.url, '/ngsw.json', { 'accept-encoding': 'br' });
     expect(ngsw.headers['cache-control']).toBe('no-cache');
