@@ -1,7 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, inject, viewChild } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { MatListModule } from '@angular/material/list';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
@@ -11,6 +10,7 @@ import { NavigationEnd, Router, RouterLink, RouterLinkActive, RouterOutlet } fro
 import { filter, map } from 'rxjs';
 import { AuthStore } from './core/auth/auth-store';
 import { LoadingState } from './core/http/loading-state';
+import { ICONS } from './core/icons/shipped-icon';
 import { mediaMatches, PHONE_WIDTH_QUERY } from './core/layout/media-query';
 import { NAV_ITEMS } from './core/layout/nav-items';
 
@@ -24,7 +24,7 @@ import { NAV_ITEMS } from './core/layout/nav-items';
     MatToolbarModule,
     MatSidenavModule,
     MatListModule,
-    MatIconModule,
+    ...ICONS,
     MatButtonModule,
     MatMenuModule,
     MatProgressBarModule,

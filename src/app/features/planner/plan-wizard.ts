@@ -25,7 +25,6 @@ import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatChipsModule } from '@angular/material/chips';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatListModule } from '@angular/material/list';
 import { MatSelectModule } from '@angular/material/select';
@@ -43,6 +42,7 @@ import {
 } from '../../../../shared/types';
 import { PlansApi } from '../../core/api/plans-api';
 import { ScheduleApi } from '../../core/api/schedule-api';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { mediaMatches } from '../../core/layout/media-query';
 import { PlayersApi } from '../../core/api/players-api';
 import { TeamsApi } from '../../core/api/teams-api';
@@ -115,7 +115,7 @@ const someAdult: ValidatorFn = (control) =>
     MatCheckboxModule,
     MatChipsModule,
     MatFormFieldModule,
-    MatIconModule,
+    ...ICONS,
     MatInputModule,
     MatListModule,
     MatSelectModule,
