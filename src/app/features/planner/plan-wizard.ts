@@ -28,7 +28,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatListModule } from '@angular/material/list';
 import { MatSelectModule } from '@angular/material/select';
-import { MatStepper, MatStepperModule } from '@angular/material/stepper';
+import { MatStepper, MatStepperIntl, MatStepperModule } from '@angular/material/stepper';
 import { Router, RouterLink } from '@angular/router';
 import { firstValueFrom, forkJoin } from 'rxjs';
 import {
@@ -134,6 +134,8 @@ export class PlanWizard {
   private readonly router = inject(Router);
   private readonly handover = inject(PlanHandover);
   private readonly fb = inject(NonNullableFormBuilder);
+  /** The words the stepper says for a finished step, for the mark that replaces its own. */
+  protected readonly stepperWords = inject(MatStepperIntl);
 
   /** Pre-selects a team (?teamId=…). */
   readonly teamId = input<string>();
