@@ -14,6 +14,7 @@ export default tseslint.config(
       'test-results/**',
       'engine/schema/generated/**',
       'src/app/core/forms/generated/**',
+      'src/app/core/icons/generated/**',
     ],
   },
   {

@@ -13,6 +13,8 @@
 export const OFFLINE_SCREENS = [
   'src/app/features/plans/plan-page.ts',
   'src/app/features/pitch-side/pitch-side-page.ts',
+  // The icons, loaded on first use by the icon registry (src/app/core/icons/provide-icons.ts).
+  'src/app/core/icons/generated/icon-svgs.ts',
 ] as const;
 
 /** The app's entry point: its static imports make the app shell. */

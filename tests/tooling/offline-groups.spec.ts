@@ -18,8 +18,10 @@ function metafile(): BuildMetafile {
           { path: 'chunk-PLAN0001.js', kind: 'dynamic-import' },
           { path: 'chunk-SIDE0001.js', kind: 'dynamic-import' },
           { path: 'chunk-TEAM0001.js', kind: 'dynamic-import' },
+          { path: 'chunk-ICON0001.js', kind: 'dynamic-import' },
         ],
       },
+      'chunk-ICON0001.js': { entryPoint: 'src/app/core/icons/generated/icon-svgs.ts', imports: [] },
       'chunk-CORE0001.js': { imports: [] },
       'chunk-PLAN0001.js': {
         entryPoint: 'src/app/features/plans/plan-page.ts',
@@ -81,13 +83,14 @@ describe('the service worker prefetch list', () => {
     ]);
   });
 
-  it('moves the plan page, pitch-side and the engine into the prefetched group and leaves other screens lazy', () => {
+  it('moves the plan page, pitch-side, the engine and the icons into the prefetched group and leaves other screens lazy', () => {
     const { manifest: tuned, moved } = prefetchOfflineScreens(manifest(), metafile());
     const [app, screens] = tuned.assetGroups;
     expect(app!.urls).toEqual([
       '/chunk-CARD0001.js',
       '/chunk-CORE0001.js',
       '/chunk-ENGN0001.js',
+      '/chunk-ICON0001.js',
       '/chunk-PLAN0001.js',
       '/chunk-RULE0001.js',
       '/chunk-SIDE0001.js',
@@ -95,7 +98,7 @@ describe('the service worker prefetch list', () => {
       '/main-AAAA0001.js',
     ]);
     expect(screens!.urls.sort()).toEqual(['/chunk-CHRT0001.js', '/chunk-TEAM0001.js']);
-    expect(moved).toBe(6);
+    expect(moved).toBe(7);
   });
 
   it('refuses a build where an offline screen is no longer its own chunk', () => {

@@ -70,7 +70,7 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
   const width = page.viewportSize()?.width ?? 0;
   const path = join(SCREENSHOT_DIR, `${name}-${width}.png`);
-  // The icon font is large; wait for it so the picture shows icons, not their ligature names.
+  // Wait for the web fonts (Roboto Condensed) so the picture shows the text as a phone draws it.
   await page.evaluate(() => document.fonts.ready.then(() => undefined));
   await page.screenshot({ path, fullPage: true });
   return path;

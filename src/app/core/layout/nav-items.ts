@@ -1,9 +1,10 @@
 import type { Role } from '../../../../shared/types';
+import type { IconName } from '../icons/icon-names';
 
 /** One entry of the app's main navigation. */
 export interface NavItem {
   label: string;
-  icon: string;
+  icon: IconName;
   link: string;
   /** Roles that see the entry; absent means every signed-in member. */
   roles?: Role[];

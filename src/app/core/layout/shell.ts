@@ -1,11 +1,11 @@
 import { ChangeDetectionStrategy, Component, computed, inject, viewChild } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatSidenav, MatSidenavModule } from '@angular/material/sidenav';
 import { MatToolbarModule } from '@angular/material/toolbar';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 import { AuthStore } from '../auth/auth-store';
+import { ICONS } from '../icons/shipped-icon';
 import { mediaMatches, PHONE_WIDTH_QUERY } from './media-query';
 import { NAV_ITEMS } from './nav-items';
 
@@ -21,7 +21,7 @@ import { NAV_ITEMS } from './nav-items';
     RouterLinkActive,
     MatToolbarModule,
     MatSidenavModule,
-    MatIconModule,
+    ...ICONS,
     MatButtonModule,
     MatMenuModule,
   ],

@@ -18,7 +18,6 @@ import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatChipsModule } from '@angular/material/chips';
 import type { ErrorStateMatcher } from '@angular/material/core';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import {
@@ -41,6 +40,7 @@ import {
   type Level,
   type StationKind,
 } from '../../../../shared/types';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, LEVEL_LABELS } from '../../core/labels/plan-labels';
 import { StationDiagram } from '../../shared/components/station-diagram';
 import {
@@ -78,7 +78,7 @@ type ListKey = 'coachingPoints' | 'easier' | 'harder';
     MatCheckboxModule,
     MatChipsModule,
     MatFormFieldModule,
-    MatIconModule,
+    ...ICONS,
     MatInputModule,
     MatSelectModule,
     StationDiagram,

@@ -11,9 +11,9 @@ import {
 } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatExpansionModule } from '@angular/material/expansion';
-import { MatIconModule } from '@angular/material/icon';
 import { validateRuleSet } from '../../../../engine/index';
 import { STATION_KINDS, type ActivityDefinition } from '../../../../shared/types';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS } from '../../core/labels/plan-labels';
 import { ActivityForm } from './activity-form';
 import { ACTIVITY_LIMITS } from './services/activity-draft';
@@ -47,7 +47,7 @@ interface Opened {
  */
 @Component({
   selector: 'cw-club-activities',
-  imports: [MatButtonModule, MatExpansionModule, MatIconModule, ActivityForm],
+  imports: [MatButtonModule, MatExpansionModule, ...ICONS, ActivityForm],
   templateUrl: './club-activities.html',
   styleUrl: './club-activities.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

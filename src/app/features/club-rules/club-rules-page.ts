@@ -2,10 +2,10 @@ import { HttpErrorResponse } from '@angular/common/http';
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { MatTabsModule } from '@angular/material/tabs';
 import type { RuleSetDto } from '../../../../shared/types';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { ClubActivities, type ActivityEdit } from './club-activities';
 import { RuleHistory } from './rule-history';
 import { RuleJsonEditor } from './rule-json-editor';
@@ -29,7 +29,7 @@ interface Conflict {
   imports: [
     DatePipe,
     MatButtonModule,
-    MatIconModule,
+    ...ICONS,
     MatTabsModule,
     RuleTables,
     RuleJsonEditor,

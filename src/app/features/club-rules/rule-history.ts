@@ -10,10 +10,10 @@ import {
   signal,
 } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import type { RuleSetDto } from '../../../../shared/types';
 import type { RuleSetChangeDto } from '../../../../shared/types/rule-set-api';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { diffJson, showValue, type JsonChange } from './services/json-diff';
 import { RuleSetsApi } from './services/rule-sets-api';
 
@@ -34,7 +34,7 @@ const STARTING_RULES: RuleSetDto = {
 /** Every version with who saved it and when, a diff between any two, and roll back. */
 @Component({
   selector: 'cw-rule-history',
-  imports: [DatePipe, MatButtonModule, MatIconModule],
+  imports: [DatePipe, MatButtonModule, ...ICONS],
   templateUrl: './rule-history.html',
   styleUrl: './rule-history.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -11,7 +11,7 @@ import {
   viewChild,
 } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
+import { ICONS } from '../../core/icons/shipped-icon';
 import {
   locatePointer,
   locatePointers,
@@ -32,7 +32,7 @@ interface PinnedProblem {
 /** The rule set as JSON for leads who want everything; every problem pinned to its line. */
 @Component({
   selector: 'cw-rule-json-editor',
-  imports: [MatButtonModule, MatIconModule],
+  imports: [MatButtonModule, ...ICONS],
   templateUrl: './rule-json-editor.html',
   styleUrl: './rule-json-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -2,7 +2,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, signal } f
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { firstValueFrom } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import {
   AGE_GROUPS,
   LEVELS,
@@ -13,6 +12,7 @@ import {
 } from '../../../../shared/types';
 import { TeamsApi } from '../../core/api/teams-api';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { OUTLINE_ROWS, outlinePlan, type PlanOutline } from './services/plan-outline';
 import { runPlan } from './services/plan-runner';
 import { RuleSetsApi } from './services/rule-sets-api';
@@ -37,7 +37,7 @@ const isOutline = (value: PlanOutline | { error: string }): value is PlanOutline
  */
 @Component({
   selector: 'cw-rule-try-it',
-  imports: [MatButtonModule, MatIconModule],
+  imports: [MatButtonModule, ...ICONS],
   templateUrl: './rule-try-it.html',
   styleUrl: './rule-try-it.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,11 +1,11 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, DestroyRef, computed, inject, signal } from '@angular/core';
 import { DOCUMENT } from '@angular/common';
-import { MatIconModule } from '@angular/material/icon';
 import { Meta } from '@angular/platform-browser';
 import type { HelperViewDto } from '../../../../shared/types';
 import { HelperLinksApi } from '../../core/api/helper-links-api';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { untilWords } from '../../core/time/link-expiry';
 import { PhaseTimeline } from '../plans/components/phase-timeline';
@@ -31,7 +31,7 @@ type Loaded =
  */
 @Component({
   selector: 'cw-helper-view-page',
-  imports: [MatIconModule, PhaseTimeline, PlanNotices, StationCard],
+  imports: [...ICONS, PhaseTimeline, PlanNotices, StationCard],
   templateUrl: './helper-view-page.html',
   styleUrls: ['../plans/plan-page.scss', './helper-view-page.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,

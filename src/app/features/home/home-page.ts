@@ -1,13 +1,13 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
-import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { forkJoin } from 'rxjs';
 import type { PlanSummaryDto, TeamDto } from '../../../../shared/types';
 import { PlansApi } from '../../core/api/plans-api';
 import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay, weekRange } from '../../core/time/dates';
 import { problemMessage } from '../../core/http/problem-message';
@@ -22,7 +22,7 @@ interface TeamWeek {
 /** This week's sessions by team, and the one thing a coach comes for: plan a warm-up. */
 @Component({
   selector: 'cw-home-page',
-  imports: [RouterLink, MatButtonModule, MatCardModule, MatIconModule, NoTeamYet, WeekSessions],
+  imports: [RouterLink, MatButtonModule, MatCardModule, ...ICONS, NoTeamYet, WeekSessions],
   templateUrl: './home-page.html',
   styleUrl: './home-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -12,10 +12,10 @@ import {
 import { RouterLink } from '@angular/router';
 import type { ChartConfiguration } from 'chart.js';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import type { TeamDto } from '../../../../shared/types';
 import type { TeamInsightDto } from '../../../../shared/types/plan-api';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { InsightChart } from './insight-chart';
 import { InsightApi } from './services/insight-api';
 import { LOW_TOUCH_SHARE, summariseInsight } from './services/insight-summary';
@@ -26,7 +26,7 @@ const CONE = '#d9631c';
 /** Who comes and who gets the ball: a team's attendance and estimated touches over its sessions. */
 @Component({
   selector: 'cw-team-insight-page',
-  imports: [DatePipe, DecimalPipe, RouterLink, MatButtonModule, MatIconModule, InsightChart],
+  imports: [DatePipe, DecimalPipe, RouterLink, MatButtonModule, ...ICONS, InsightChart],
   templateUrl: './team-insight-page.html',
   styleUrl: './team-insight-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -2,7 +2,6 @@ import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@a
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import type { RuleSetDocument } from '../../../../engine/index';
@@ -20,6 +19,7 @@ import { PlanRulesApi } from '../../core/api/plan-rules-api';
 import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS } from '../../core/labels/plan-labels';
 import { teamPermissions } from '../teams/team-permissions';
 import { ActivityCard, type CardMessage, type PinChange, type PinTeam } from './components/activity-card';
@@ -40,14 +40,7 @@ function pinsOf(team: TeamDto): string[] {
  */
 @Component({
   selector: 'cw-library-page',
-  imports: [
-    MatButtonModule,
-    MatFormFieldModule,
-    MatIconModule,
-    MatInputModule,
-    MatSelectModule,
-    ActivityCard,
-  ],
+  imports: [MatButtonModule, MatFormFieldModule, ...ICONS, MatInputModule, MatSelectModule, ActivityCard],
   templateUrl: './library-page.html',
   styleUrl: './library-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -4,7 +4,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatDialog } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
@@ -16,6 +15,7 @@ import { MembersApi } from '../../core/api/members-api';
 import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { RoleChip } from '../../shared/components/role-chip';
 import { MemberRoleDialog, type MemberRoleData } from './components/member-role-dialog';
 import { MemberTeamsDialog, type MemberTeamsData } from './components/member-teams-dialog';
@@ -42,7 +42,7 @@ const DIALOG_SIZE = { width: '480px', maxWidth: 'calc(100vw - 32px)' };
     MatButtonModule,
     MatCardModule,
     MatFormFieldModule,
-    MatIconModule,
+    ...ICONS,
     MatInputModule,
     MatSelectModule,
     RoleChip,

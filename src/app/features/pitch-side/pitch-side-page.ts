@@ -11,7 +11,6 @@ import {
 } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
 import type {
@@ -25,6 +24,7 @@ import type {
 } from '../../../../shared/types';
 import { PlanRulesApi } from '../../core/api/plan-rules-api';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { ActionQueue } from './services/action-queue';
 import { newClientId } from './services/client-id';
 import { adjustRosterLocally } from './services/local-adjust';
@@ -53,7 +53,7 @@ const DOUBLE_TAP_MS = 1500;
 
 @Component({
   selector: 'cw-pitch-side-page',
-  imports: [RouterLink, MatButtonModule, MatIconModule, MatProgressBarModule, RegisterPanel, StationCard],
+  imports: [RouterLink, MatButtonModule, ...ICONS, MatProgressBarModule, RegisterPanel, StationCard],
   templateUrl: './pitch-side-page.html',
   styleUrl: './pitch-side-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,13 +1,14 @@
 import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { POSITION_STYLE, type Station, type StationVerdict } from '../../../../shared/types';
+import type { IconName } from '../../core/icons/icon-names';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS } from '../../core/labels/plan-labels';
 import { StationDiagram } from '../../shared/components/station-diagram';
 import { readableOn, ROLE_TAGS, startRoles } from '../plans/services/plan-words';
 
 /** The three verdicts a coach can give a station, with their labels and icons. */
-export const VERDICTS: { value: StationVerdict; label: string; icon: string }[] = [
+export const VERDICTS: { value: StationVerdict; label: string; icon: IconName }[] = [
   { value: 'too-easy', label: 'Too easy', icon: 'trending_up' },
   { value: 'right', label: 'About right', icon: 'thumb_up' },
   { value: 'too-hard', label: 'Too hard', icon: 'trending_down' },
@@ -19,7 +20,7 @@ export const VERDICTS: { value: StationVerdict; label: string; icon: string }[] 
  */
 @Component({
   selector: 'cw-station-card',
-  imports: [MatButtonModule, MatIconModule, StationDiagram],
+  imports: [MatButtonModule, ...ICONS, StationDiagram],
   templateUrl: './station-card.html',
   styleUrl: './station-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

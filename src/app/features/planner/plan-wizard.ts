@@ -25,11 +25,10 @@ import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatChipsModule } from '@angular/material/chips';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatListModule } from '@angular/material/list';
 import { MatSelectModule } from '@angular/material/select';
-import { MatStepper, MatStepperModule } from '@angular/material/stepper';
+import { MatStepper, MatStepperIntl, MatStepperModule } from '@angular/material/stepper';
 import { Router, RouterLink } from '@angular/router';
 import { firstValueFrom, forkJoin } from 'rxjs';
 import {
@@ -43,6 +42,7 @@ import {
 } from '../../../../shared/types';
 import { PlansApi } from '../../core/api/plans-api';
 import { ScheduleApi } from '../../core/api/schedule-api';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { mediaMatches } from '../../core/layout/media-query';
 import { PlayersApi } from '../../core/api/players-api';
 import { TeamsApi } from '../../core/api/teams-api';
@@ -115,7 +115,7 @@ const someAdult: ValidatorFn = (control) =>
     MatCheckboxModule,
     MatChipsModule,
     MatFormFieldModule,
-    MatIconModule,
+    ...ICONS,
     MatInputModule,
     MatListModule,
     MatSelectModule,
@@ -134,6 +134,8 @@ export class PlanWizard {
   private readonly router = inject(Router);
   private readonly handover = inject(PlanHandover);
   private readonly fb = inject(NonNullableFormBuilder);
+  /** The words the stepper says for a finished step, for the mark that replaces its own. */
+  protected readonly stepperWords = inject(MatStepperIntl);
 
   /** Pre-selects a team (?teamId=…). */
   readonly teamId = input<string>();

@@ -1,7 +1,6 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
-import { MatIconModule } from '@angular/material/icon';
 import { MatPaginatorModule, PageEvent } from '@angular/material/paginator';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { MatTableModule } from '@angular/material/table';
@@ -11,6 +10,7 @@ import { PlansApi } from '../../core/api/plans-api';
 import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { shortDay } from '../../core/time/dates';
 import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
@@ -19,7 +19,7 @@ import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 /** A team's past plans, newest first, each reusable for today with today's players. */
 @Component({
   selector: 'cw-plan-history-page',
-  imports: [RouterLink, MatTableModule, MatPaginatorModule, MatButtonModule, MatIconModule],
+  imports: [RouterLink, MatTableModule, MatPaginatorModule, MatButtonModule, ...ICONS],
   templateUrl: './plan-history-page.html',
   styleUrl: './plan-history-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -11,13 +11,13 @@ import {
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
-import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
 import { Router, RouterLink } from '@angular/router';
 import { ACTIVITY_KINDS, type ActivityKind, type Phase } from '../../../../shared/types';
 import { CardPaper, PlansApi } from '../../core/api/plans-api';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 import { AuthStore } from '../../core/auth/auth-store';
 import type { ActivityOption } from '../../core/engine/browser-engine';
@@ -52,7 +52,7 @@ interface SwapGroup {
     CdkDropListGroup,
     MatButtonModule,
     MatButtonToggleModule,
-    MatIconModule,
+    ...ICONS,
     MatMenuModule,
     EditAnswer,
     PhaseTimeline,

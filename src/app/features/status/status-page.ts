@@ -2,14 +2,14 @@ import { HttpErrorResponse } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
-import { MatIconModule } from '@angular/material/icon';
 import type { HealthDto } from '../../../../shared/types';
 import { HealthApi } from '../../core/api/health-api';
+import { ICONS } from '../../core/icons/shipped-icon';
 
 /** Shows whether the Conewise server and its database answer. */
 @Component({
   selector: 'cw-status-page',
-  imports: [MatCardModule, MatIconModule, MatButtonModule],
+  imports: [MatCardModule, ...ICONS, MatButtonModule],
   templateUrl: './status-page.html',
   styleUrl: './status-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

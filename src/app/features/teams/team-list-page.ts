@@ -1,13 +1,13 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
-import { MatIconModule } from '@angular/material/icon';
 import { Router, RouterLink } from '@angular/router';
 import type { TeamDto } from '../../../../shared/types';
 import { TeamsApi, type TeamBody } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { RetryKey } from '../../core/http/retry-key';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { LEVEL_LABELS } from '../../core/labels/plan-labels';
 import { NoTeamYet } from '../../shared/components/no-team-yet';
 import { TeamDefaultsForm } from './components/team-defaults-form';
@@ -15,7 +15,7 @@ import { TeamDefaultsForm } from './components/team-defaults-form';
 /** The club's teams, and a short form to add one. */
 @Component({
   selector: 'cw-team-list-page',
-  imports: [RouterLink, MatCardModule, MatButtonModule, MatIconModule, TeamDefaultsForm, NoTeamYet],
+  imports: [RouterLink, MatCardModule, MatButtonModule, ...ICONS, TeamDefaultsForm, NoTeamYet],
   templateUrl: './team-list-page.html',
   styleUrl: './team-list-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

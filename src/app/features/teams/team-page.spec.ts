@@ -307,7 +307,7 @@ describe('TeamPage', () => {
     expect(options).toEqual(['Hew Helper (assistant)']);
     (document.querySelector('mat-option') as HTMLElement).click();
     await settle(fixture);
-    button(root, 'person_add Add to staff').click();
+    button(root, 'Add to staff').click();
     const request = http.expectOne('/api/teams/t1/staff/helper-1');
     expect(request.request.method).toBe('PUT');
     request.flush({ ...TEAM, coachIds: ['coach-1', 'helper-1'] });

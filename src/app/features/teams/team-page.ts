@@ -13,7 +13,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatDialog } from '@angular/material/dialog';
 import { MatExpansionModule } from '@angular/material/expansion';
-import { MatIconModule } from '@angular/material/icon';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
 import type { KitBagDto, MemberDto, PlayerDto, TeamDto } from '../../../../shared/types';
@@ -22,6 +21,7 @@ import { PlayersApi } from '../../core/api/players-api';
 import { TeamBody, TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemMessage } from '../../core/http/problem-message';
+import { ICONS } from '../../core/icons/shipped-icon';
 import { LEVEL_LABELS } from '../../core/labels/plan-labels';
 import { CsvImport } from './components/csv-import';
 import { DeleteTeamData, DeleteTeamDialog } from './components/delete-team-dialog';
@@ -42,7 +42,7 @@ import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
     RouterLink,
     MatButtonModule,
     MatCardModule,
-    MatIconModule,
+    ...ICONS,
     MatExpansionModule,
     PlayersTable,
     CsvImport,

@@ -1,10 +1,10 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import type { TeamDto } from '../../../../shared/types';
 import { MembersApi } from '../../core/api/members-api';
 import { AuthStore } from '../../core/auth/auth-store';
+import { ICONS } from '../../core/icons/shipped-icon';
 
 /**
  * What a coach or an assistant sees while they are on no team's staff: who can put them on one,
@@ -13,11 +13,11 @@ import { AuthStore } from '../../core/auth/auth-store';
  */
 @Component({
   selector: 'cw-no-team-yet',
-  imports: [RouterLink, MatButtonModule, MatIconModule],
+  imports: [RouterLink, MatButtonModule, ...ICONS],
   template: `
     @if (shown()) {
       <div class="cw-no-team" role="status" data-testid="no-team-yet">
-        <mat-icon aria-hidden="true">group_add</mat-icon>
+        <mat-icon svgIcon="group_add" aria-hidden="true" />
         <div>
           <p class="cw-no-team__head">You’re not on a team yet.</p>
           <p>
@@ -26,7 +26,7 @@ import { AuthStore } from '../../core/auth/auth-store';
           </p>
           @if (isCoach()) {
             <a mat-stroked-button routerLink="/teams">
-              <mat-icon aria-hidden="true">add</mat-icon> Or start your own team
+              <mat-icon svgIcon="add" aria-hidden="true" /> Or start your own team
             </a>
           }
         </div>

@@ -1,16 +1,16 @@
 import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import type { ScheduledSessionDto } from '../../../../../shared/types';
 import { ScheduleApi } from '../../../core/api/schedule-api';
 import { problemMessage } from '../../../core/http/problem-message';
+import { ICONS } from '../../../core/icons/shipped-icon';
 import { SCHEDULE_KIND_LABELS, sessionDay } from '../../../core/labels/schedule-labels';
 
 /** The next seven days' training nights and matches of the member's teams, each with its plan or "Plan it". */
 @Component({
   selector: 'cw-week-sessions',
-  imports: [RouterLink, MatButtonModule, MatIconModule],
+  imports: [RouterLink, MatButtonModule, ...ICONS],
   template: `
     <section class="cw-week-sessions" aria-labelledby="next-days">
       <h2 id="next-days">Next 7 days</h2>
@@ -36,7 +36,7 @@ import { SCHEDULE_KIND_LABELS, sessionDay } from '../../../core/labels/schedule-
             </div>
             @if (s.planId) {
               <a mat-stroked-button class="cw-go" [routerLink]="['/plans', s.planId]" data-testid="open-plan">
-                <mat-icon aria-hidden="true">task_alt</mat-icon> See the plan
+                <mat-icon svgIcon="task_alt" aria-hidden="true" /> See the plan
               </a>
             } @else if (canPlan()) {
               <a

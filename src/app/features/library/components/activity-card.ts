@@ -1,10 +1,10 @@
 import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { suitsAge } from '../../../../../engine';
 import { previewActivity, type ActivityPreview, type RuleSetDocument } from '../../../../../engine/index';
 import type { AgeGroup, Level } from '../../../../../shared/types';
+import { ICONS } from '../../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, LEVEL_LABELS } from '../../../core/labels/plan-labels';
 import { StationDiagram } from '../../../shared/components/station-diagram';
 import type { LibraryEntry } from '../services/library-entries';
@@ -41,7 +41,7 @@ const BALL_WORDS = {
  */
 @Component({
   selector: 'cw-activity-card',
-  imports: [MatButtonModule, MatIconModule, MatMenuModule, StationDiagram],
+  imports: [MatButtonModule, ...ICONS, MatMenuModule, StationDiagram],
   templateUrl: './activity-card.html',
   styleUrl: './activity-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
-import { MatIconModule } from '@angular/material/icon';
+import { ICONS } from '../../../core/icons/shipped-icon';
 
 /** What a refused or failed edit says, shown beside the control that was tapped. */
 export interface EditAnswerLines {
@@ -10,7 +10,7 @@ export interface EditAnswerLines {
 /** The answer to an edit in plain words, announced to screen readers, never printed. */
 @Component({
   selector: 'cw-edit-answer',
-  imports: [MatIconModule],
+  imports: [...ICONS],
   template: `
     <div
       class="cw-edit-answer cw-no-print"
@@ -18,7 +18,7 @@ export interface EditAnswerLines {
       role="status"
       data-testid="edit-feedback"
     >
-      <mat-icon aria-hidden="true">{{ answer().kind === 'refused' ? 'block' : 'error' }}</mat-icon>
+      <mat-icon [svgIcon]="answer().kind === 'refused' ? 'block' : 'error'" aria-hidden="true" />
       <ul>
         @for (line of answer().lines; track line) {
           <li>{{ line }}</li>

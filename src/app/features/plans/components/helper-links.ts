@@ -1,10 +1,10 @@
 import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
 import { Clipboard } from '@angular/cdk/clipboard';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import type { CreatedHelperLinkDto, HelperLinkDto } from '../../../../../shared/types';
 import { HelperLinksApi } from '../../../core/api/helper-links-api';
 import { problemMessage } from '../../../core/http/problem-message';
+import { ICONS } from '../../../core/icons/shipped-icon';
 import { madeWords, untilWords } from '../../../core/time/link-expiry';
 
 /**
@@ -13,7 +13,7 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
  */
 @Component({
   selector: 'cw-helper-links',
-  imports: [MatButtonModule, MatIconModule],
+  imports: [MatButtonModule, ...ICONS],
   template: `
     <section class="cw-helper-links" aria-labelledby="helper-links-heading" data-testid="helper-links">
       <h3 id="helper-links-heading">A link for a parent helper</h3>
@@ -28,7 +28,7 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
         [disabled]="making()"
         data-testid="helper-link-make"
       >
-        <mat-icon aria-hidden="true">link</mat-icon> Make a helper link
+        <mat-icon svgIcon="link" aria-hidden="true" /> Make a helper link
       </button>
       @if (made(); as link) {
         <div class="cw-new-link">
@@ -40,7 +40,7 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
             data-testid="helper-link-url"
           />
           <button mat-flat-button type="button" (click)="copy(link.url)" data-testid="helper-link-copy">
-            <mat-icon aria-hidden="true">content_copy</mat-icon> Copy
+            <mat-icon svgIcon="content_copy" aria-hidden="true" /> Copy
           </button>
         </div>
         <p class="cw-muted" role="status">

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { NgTemplateOutlet } from '@angular/common';
-import { MatIconModule } from '@angular/material/icon';
 import type { Notice, Supervision } from '../../../../../shared/types';
+import { ICONS } from '../../../core/icons/shipped-icon';
 
 /** Warnings about the adults on the pitch: shown first, with the guidance they come from. */
 const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-per-adult']);
@@ -12,7 +12,7 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
  */
 @Component({
   selector: 'cw-plan-notices',
-  imports: [MatIconModule, NgTemplateOutlet],
+  imports: [...ICONS, NgTemplateOutlet],
   template: `
     <ng-template #list let-notices>
       <ul>
@@ -42,20 +42,20 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
           <summary>
             @if (safety()[0]; as first) {
               <span class="cw-line cw-safety-line" data-testid="safety-line">
-                <mat-icon aria-hidden="true">health_and_safety</mat-icon>
+                <mat-icon svgIcon="health_and_safety" aria-hidden="true" />
                 <span class="cw-clip"><strong>Safety:</strong> {{ first.message }}</span>
               </span>
             }
             @if (toCheck().length) {
               <span class="cw-line">
-                <mat-icon aria-hidden="true">warning</mat-icon>
+                <mat-icon svgIcon="warning" aria-hidden="true" />
                 <span class="cw-clip"
                   ><strong>{{ toCheck().length }} to check:</strong> {{ toCheck()[0].message }}</span
                 >
               </span>
             }
             <span class="cw-more">
-              <mat-icon aria-hidden="true" class="cw-more-icon">expand_more</mat-icon>
+              <mat-icon svgIcon="keyboard_arrow_down" aria-hidden="true" class="cw-more-icon" />
               <span class="cw-when-closed">{{
                 total() === 1 ? 'Read it in full' : 'Read all ' + total()
               }}</span>
@@ -64,18 +64,18 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
           </summary>
           @if (adultWarnings().length) {
             <h2 data-testid="supervision">
-              <mat-icon aria-hidden="true">groups</mat-icon> Adults on the pitch
+              <mat-icon svgIcon="groups" aria-hidden="true" /> Adults on the pitch
             </h2>
             <ng-container *ngTemplateOutlet="ratio" />
             <ng-container *ngTemplateOutlet="list; context: { $implicit: adultWarnings() }" />
           }
           @if (safety().length) {
-            <h2 data-testid="cautions"><mat-icon aria-hidden="true">health_and_safety</mat-icon> Safety</h2>
+            <h2 data-testid="cautions"><mat-icon svgIcon="health_and_safety" aria-hidden="true" /> Safety</h2>
             <ng-container *ngTemplateOutlet="list; context: { $implicit: safety() }" />
           }
           @if (otherWarnings().length) {
             <h2 data-testid="warnings">
-              <mat-icon aria-hidden="true">warning</mat-icon> Check before you start
+              <mat-icon svgIcon="warning" aria-hidden="true" /> Check before you start
             </h2>
             <ng-container *ngTemplateOutlet="list; context: { $implicit: otherWarnings() }" />
           }
@@ -89,21 +89,21 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
           aria-labelledby="adults-heading"
           data-testid="supervision"
         >
-          <h2 id="adults-heading"><mat-icon aria-hidden="true">groups</mat-icon> Adults on the pitch</h2>
+          <h2 id="adults-heading"><mat-icon svgIcon="groups" aria-hidden="true" /> Adults on the pitch</h2>
           <ng-container *ngTemplateOutlet="ratio" />
           <ng-container *ngTemplateOutlet="list; context: { $implicit: adultWarnings() }" />
         </section>
       }
       @if (safety().length) {
         <section class="cw-notices cw-cautions" aria-labelledby="cautions-heading" data-testid="cautions">
-          <h2 id="cautions-heading"><mat-icon aria-hidden="true">health_and_safety</mat-icon> Safety</h2>
+          <h2 id="cautions-heading"><mat-icon svgIcon="health_and_safety" aria-hidden="true" /> Safety</h2>
           <ng-container *ngTemplateOutlet="list; context: { $implicit: safety() }" />
         </section>
       }
       @if (otherWarnings().length) {
         <section class="cw-notices cw-warnings" aria-labelledby="warnings-heading" data-testid="warnings">
           <h2 id="warnings-heading">
-            <mat-icon aria-hidden="true">warning</mat-icon> Check before you start
+            <mat-icon svgIcon="warning" aria-hidden="true" /> Check before you start
           </h2>
           <ng-container *ngTemplateOutlet="list; context: { $implicit: otherWarnings() }" />
         </section>

@@ -10,7 +10,6 @@ import {
 } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatExpansionModule } from '@angular/material/expansion';
-import { MatIconModule } from '@angular/material/icon';
 import { forkJoin } from 'rxjs';
 import { attendanceFromPlan } from '../../../../../engine/attendance-from-plan';
 import type { AttendanceDto, Plan, PlayerDto, SessionPlanDto, TeamDto } from '../../../../../shared/types';
@@ -18,6 +17,7 @@ import { PlayersApi } from '../../../core/api/players-api';
 import { TeamsApi } from '../../../core/api/teams-api';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { problemMessage } from '../../../core/http/problem-message';
+import { ICONS } from '../../../core/icons/shipped-icon';
 import { RegisterApi } from '../services/register-api';
 import {
   canTakeRegister,
@@ -51,7 +51,7 @@ const AWAY: RegisterMark = { came: false, late: null, early: null };
  */
 @Component({
   selector: 'cw-register-panel',
-  imports: [MatButtonModule, MatExpansionModule, MatIconModule],
+  imports: [MatButtonModule, MatExpansionModule, ...ICONS],
   templateUrl: './register-panel.html',
   styleUrl: './register-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,9 +1,9 @@
 import { CdkDrag, CdkDragDrop, CdkDropList } from '@angular/cdk/drag-drop';
 import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
-import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { POSITION_STYLE, type Station } from '../../../../../shared/types';
+import { ICONS } from '../../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS } from '../../../core/labels/plan-labels';
 import { readableOn, ROLE_TAGS, roleLines, startRoles } from '../services/plan-words';
 import { StationDiagram } from '../../../shared/components/station-diagram';
@@ -30,7 +30,7 @@ export interface PlayerMoveRequest {
  */
 @Component({
   selector: 'cw-station-card',
-  imports: [CdkDropList, CdkDrag, MatButtonModule, MatIconModule, MatMenuModule, EditAnswer, StationDiagram],
+  imports: [CdkDropList, CdkDrag, MatButtonModule, ...ICONS, MatMenuModule, EditAnswer, StationDiagram],
   templateUrl: './station-card.html',
   styleUrl: './station-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

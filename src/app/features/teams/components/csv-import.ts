@@ -3,12 +3,12 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, output, si
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import type { CsvPreview, CsvPreviewRow, CsvRowError, ProblemDto } from '../../../../../shared/types';
 import { cleanName, nameKey } from '../../../../../shared/types/player-name';
 import { PlayersApi } from '../../../core/api/players-api';
 import { problemMessage } from '../../../core/http/problem-message';
+import { ICONS } from '../../../core/icons/shipped-icon';
 
 /** Most players one file adds and largest file, as the server enforces them. */
 const MAX_PLAYERS = 60;
@@ -29,7 +29,7 @@ interface ImportLine extends CsvPreviewRow {
  */
 @Component({
   selector: 'cw-csv-import',
-  imports: [MatButtonModule, MatCheckboxModule, MatFormFieldModule, MatIconModule, MatInputModule],
+  imports: [MatButtonModule, MatCheckboxModule, MatFormFieldModule, ...ICONS, MatInputModule],
   templateUrl: './csv-import.html',
   styleUrl: './csv-import.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -12,13 +12,13 @@ import {
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { MatSort, MatSortModule } from '@angular/material/sort';
 import { MatTableDataSource, MatTableModule } from '@angular/material/table';
 import { MatTooltipModule } from '@angular/material/tooltip';
 import type { PlayerDto } from '../../../../../shared/types';
+import { ICONS } from '../../../core/icons/shipped-icon';
 
 /** The squad as a sortable, filterable table with edit, goalkeeper and active switches, and removal. */
 @Component({
@@ -29,7 +29,7 @@ import type { PlayerDto } from '../../../../../shared/types';
     MatFormFieldModule,
     MatInputModule,
     MatButtonModule,
-    MatIconModule,
+    ...ICONS,
     MatCheckboxModule,
     MatSlideToggleModule,
     MatTooltipModule,

@@ -25,13 +25,11 @@ const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges()
   fixture.detectChanges();
 };
 
-/** A control's name as a screen reader says it: its label, else its text without icon ligatures. */
+/** A control's name as a screen reader says it: its label, else its text (icons are SVG and add none). */
 function nameOf(element: Element): string {
   const label = element.getAttribute('aria-label');
   if (label) return label.trim();
-  const copy = element.cloneNode(true) as Element;
-  copy.querySelectorAll('mat-icon').forEach((icon) => icon.remove());
-  return (copy.textContent ?? '').trim();
+  return (element.textContent ?? '').trim();
 }
 
 const buttons = (root: HTMLElement) => Array.from(root.querySelectorAll('button, a')).map(nameOf);

@@ -1,12 +1,12 @@
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
-import { MatIconModule } from '@angular/material/icon';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { RouterLink } from '@angular/router';
 import type { ScheduledSessionDto } from '../../../../../shared/types';
 import { ScheduleApi } from '../../../core/api/schedule-api';
 import { problemMessage } from '../../../core/http/problem-message';
+import { ICONS } from '../../../core/icons/shipped-icon';
 import { SCHEDULE_KIND_LABELS, sessionDay } from '../../../core/labels/schedule-labels';
 import { ScheduleDialog, type ScheduleDialogData } from './schedule-dialog';
 
@@ -19,7 +19,7 @@ export const SESSIONS_SHOWN = 5;
 
 @Component({
   selector: 'cw-team-schedule',
-  imports: [RouterLink, MatButtonModule, MatIconModule],
+  imports: [RouterLink, MatButtonModule, ...ICONS],
   templateUrl: './team-schedule.html',
   styleUrl: './team-schedule.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -2,12 +2,12 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, output, si
 import { FormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatIconModule } from '@angular/material/icon';
 import { MatSelectModule } from '@angular/material/select';
 import { ROLES, type MemberDto, type TeamDto } from '../../../../../shared/types';
 import { TeamsApi } from '../../../core/api/teams-api';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { problemMessage } from '../../../core/http/problem-message';
+import { ICONS } from '../../../core/icons/shipped-icon';
 import { RoleChip } from '../../../shared/components/role-chip';
 import { staffChangeAllowed } from '../team-permissions';
 
@@ -23,7 +23,7 @@ interface StaffRow {
  */
 @Component({
   selector: 'cw-team-staff',
-  imports: [FormsModule, MatButtonModule, MatFormFieldModule, MatIconModule, MatSelectModule, RoleChip],
+  imports: [FormsModule, MatButtonModule, MatFormFieldModule, ...ICONS, MatSelectModule, RoleChip],
   template: `
     @if (rows().length === 0) {
       <p class="cw-muted">Nobody is on this team’s staff yet.</p>
@@ -56,7 +56,7 @@ interface StaffRow {
                   [attr.aria-label]="'Take ' + row.member.name + ' off this team'"
                   (click)="confirming.set(row.member.userId)"
                 >
-                  <mat-icon aria-hidden="true">person_remove</mat-icon>
+                  <mat-icon svgIcon="person_remove" aria-hidden="true" />
                 </button>
               }
             }
@@ -75,7 +75,7 @@ interface StaffRow {
           </mat-select>
         </mat-form-field>
         <button mat-flat-button type="button" [disabled]="!picked() || busy()" (click)="addStaff()">
-          <mat-icon aria-hidden="true">person_add</mat-icon> Add to staff
+          <mat-icon svgIcon="person_add" aria-hidden="true" /> Add to staff
         </button>
       </div>
     } @else if (can()) {

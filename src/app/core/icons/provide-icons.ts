@@ -1,0 +1,54 @@
+import {
+  EnvironmentProviders,
+  inject,
+  Injectable,
+  makeEnvironmentProviders,
+  PendingTasks,
+} from '@angular/core';
+import { MatIconRegistry } from '@angular/material/icon';
+import { DomSanitizer } from '@angular/platform-browser';
+import { from, type Observable, switchMap } from 'rxjs';
+import { ICON_NAMES } from './icon-names';
+
+/**
+ * Angular Material's icon registry, filled with the shipped icons the first time any icon is asked
+ * for. The path data (generated/icon-svgs.ts) is its own small chunk: the sign-in page, which has
+ * no icons, never fetches it, and every later screen gets all icons in one request. Nothing comes
+ * from outside the app, so it works on a closed network; the service worker keeps the chunk offline.
+ */
+@Injectable()
+export class ShippedIconRegistry extends MatIconRegistry {
+  private readonly sanitizer = inject(DomSanitizer);
+  private readonly pendingTasks = inject(PendingTasks);
+  private loading: Promise<void> | null = null;
+  private loaded = false;
+
+  override getNamedSvgIcon(name: string, namespace = ''): Observable<SVGElement> {
+    if (this.loaded) return super.getNamedSvgIcon(name, namespace);
+    return from(this.registerShipped()).pipe(switchMap(() => super.getNamedSvgIcon(name, namespace)));
+  }
+
+  private registerShipped(): Promise<void> {
+    // A pending task: the app (and a test's whenStable) is not stable until the icons are drawn.
+    if (!this.loading) {
+      const done = this.pendingTasks.add();
+      this.loading = import('./generated/icon-svgs')
+        .then(({ ICON_PATHS }) => {
+          for (const name of ICON_NAMES) {
+            // Bypassing the sanitizer is safe here: the markup is built from constants generated at
+            // build time from our own list, never from user input or the network.
+            const svg = `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 -960 960 960"><path d="${ICON_PATHS[name]}"/></svg>`;
+            this.addSvgIconLiteral(name, this.sanitizer.bypassSecurityTrustHtml(svg));
+          }
+          this.loaded = true;
+        })
+        .finally(done);
+    }
+    return this.loading;
+  }
+}
+
+/** `<mat-icon svgIcon="menu" />` draws a shipped icon inline (see ShippedIconRegistry). */
+export function provideIcons(): EnvironmentProviders {
+  return makeEnvironmentProviders([{ provide: MatIconRegistry, useClass: ShippedIconRegistry }]);
+}
