@@ -1,6 +1,6 @@
 /**
  * The source of src/app/core/icons/generated/icon-svgs.ts: the path data of each icon named in
- * src/app/core/icons/icon-names.ts, taken from the Material Symbols SVGs (outlined, unfilled, weight 400).
+ * src/app/core/icons/icon-names.ts, taken from the Material Symbols SVGs (outlined, unfilled, weight 600: the closest to the look the app had).
  */
 import { existsSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';

@@ -1,6 +1,6 @@
 /**
  * The icons the app ships: Material Symbols, outlined and unfilled, by their file name in
- * @material-symbols/svg-400/outlined. The one list to edit (kept sorted): add a name here, then run
+ * @material-symbols/svg-600/outlined. The one list to edit (kept sorted): add a name here, then run
  * `npm run -s generate:icons` to write generated/icon-svgs.ts. Templates name icons with
  * `<mat-icon svgIcon="…" />`; `ng build` refuses a name that is not listed (see shipped-icon.ts), and
  * tests/tooling/icons.spec.ts refuses a listed name that nothing uses.
