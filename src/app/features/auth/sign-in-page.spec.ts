@@ -94,16 +94,14 @@ describe('SignInPage', () => {
     );
     expect(root.querySelector<HTMLButtonElement>('button[type="submit"]')!.disabled).toBe(false);
     await submit();
-    http
-      .expectOne('/api/auth/login')
-      .flush(
-        {
-          title: 'Invalid request',
-          status: 400,
-          errors: [{ field: 'password', message: 'Password is too long.' }],
-        },
-        { status: 400, statusText: 'Bad Request' },
-      );
+    http.expectOne('/api/auth/login').flush(
+      {
+        title: 'Invalid request',
+        status: 400,
+        errors: [{ field: 'password', message: 'Password is too long.' }],
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
     fixture.detectChanges();
     expect(root.querySelector('#sign-in-password-error')!.textContent).toBe('Password is too long.');
   });
