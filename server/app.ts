@@ -6,7 +6,7 @@ import { pino, type Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from './config';
-import { clientFiles, compressAnswers, noStore } from './middleware/client-files';
+import { clientAssets, clientShell, compressAnswers, noStore } from './middleware/client-files';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { createRequireAuth } from './middleware/require-auth';
 import { createApiRouter } from './routes';
@@ -34,6 +34,12 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', deps.config.trustProxy);
+  app.use(compressAnswers());
+  // The built client's scripts, styles, fonts and images: before helmet and the request log (their
+  // own few headers, see clientAssets). Pages and worker scripts come last, with helmet's headers.
+  const staticDir = deps.config.staticDir;
+  const client = staticDir && existsSync(join(staticDir, 'index.html')) ? staticDir : null;
+  if (client) app.use(clientAssets(client));
 
   app.use(
     helmet({
@@ -79,7 +85,6 @@ export function createApp(deps: AppDeps): Express {
       },
     }),
   );
-  app.use(compressAnswers());
   app.use('/api', noStore);
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT, type: ['application/json', 'application/*+json'] }));
 
@@ -96,8 +101,7 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use('/api', apiNotFound);
 
-  const staticDir = deps.config.staticDir;
-  if (staticDir && existsSync(join(staticDir, 'index.html'))) app.use(clientFiles(staticDir));
+  if (client) app.use(clientShell(client));
 
   app.use(apiNotFound);
   app.use(errorHandler);

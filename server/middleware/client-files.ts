@@ -44,18 +44,38 @@ export function compressAnswers(): RequestHandler {
 }
 
 /**
- * The built client: the brotli or gzip copy made at build time (server/client-build.ts) when the
- * browser accepts one, by `express-static-gzip`; hashed files cached for a year, the rest asked
- * again; client routes such as /teams/42 answered with index.html (history fallback).
+ * Scripts whose own response headers are their security policy: a service worker or web worker
+ * runs under the CSP it is served with, so these go through helmet like the app shell.
  */
-export function clientFiles(staticDir: string): Router {
+const WORKER_SCRIPTS = /^\/(?:ngsw-worker|safety-worker|worker-basic\.min)\.js$/;
+
+/**
+ * The headers a built file needs. Helmet's set (the CSP, frame and referrer policies…) governs
+ * documents and workers; on a script, stylesheet, font or image it does nothing but cost ~700
+ * bytes a request, dozens of times on a first visit over a weak link. Files keep these two.
+ */
+function fileHeaders(res: ServerResponse): void {
+  res.setHeader('X-Content-Type-Options', 'nosniff');
+  res.setHeader('Cross-Origin-Resource-Policy', 'same-origin');
+}
+
+/**
+ * The built client's files (mounted before helmet): the brotli or gzip copy made at build time
+ * (server/build/precompress.ts) when the browser accepts one, by `express-static-gzip`; hashed
+ * files cached for a year, the rest asked again. Worker scripts and pages pass on to clientShell.
+ */
+export function clientAssets(staticDir: string): Router {
   const router = Router();
   const files = {
     index: false,
     cacheControl: false,
-    setHeaders: (res: ServerResponse, path: string) => res.setHeader('Cache-Control', cacheControlFor(path)),
+    setHeaders: (res: ServerResponse, path: string) => {
+      fileHeaders(res);
+      res.setHeader('Cache-Control', cacheControlFor(path));
+    },
   };
-  router.use(
+  const assets = Router();
+  assets.use(
     expressStaticGzip(staticDir, {
       enableBrotli: true,
       orderPreference: ['br', 'gz'],
@@ -66,11 +86,30 @@ export function clientFiles(staticDir: string): Router {
   // express-static-gzip lists the compressed copies once, at start. A build made while the server
   // runs replaces them: such files are then read as they are (and compressed per answer), the
   // encoding announced for a copy that is gone taken back first.
-  router.use((_req, res, next) => {
+  assets.use((_req, res, next) => {
     if (!res.headersSent) res.removeHeader('Content-Encoding');
     next();
   });
-  router.use(express.static(staticDir, files));
+  assets.use(express.static(staticDir, files));
+  router.use((req, res, next) => {
+    if (/^\/api(\/|$)|^\/index\.html$/.test(req.path) || WORKER_SCRIPTS.test(req.path)) return next();
+    assets(req, res, next);
+  });
+  return router;
+}
+
+/**
+ * After helmet: the worker scripts, and the app shell (index.html) for any client route such as
+ * /teams/42 (history fallback), both with the full security headers.
+ */
+export function clientShell(staticDir: string): Router {
+  const router = Router();
+  const workers = express.static(staticDir, {
+    index: false,
+    cacheControl: false,
+    setHeaders: (res: ServerResponse) => res.setHeader('Cache-Control', CACHE_CONTROL.revalidate),
+  });
+  router.use((req, res, next) => (WORKER_SCRIPTS.test(req.path) ? workers(req, res, next) : next()));
   router.get(/^(?!\/api(\/|$)).*/, (req, res, next) => {
     if (!req.accepts('html')) return next();
     res.setHeader('Cache-Control', CACHE_CONTROL.revalidate);

@@ -59,6 +59,7 @@ describe('the built client on the wire', () => {
       join(dir, 'ngsw.json'),
       JSON.stringify({ hashTable: { '/chunk-AB12CD34.js': 'x'.repeat(40) }, pad: 'y'.repeat(2000) }),
     );
+    writeFileSync(join(dir, 'ngsw-worker.js'), 'self.addEventListener("fetch", () => undefined);');
     writeFileSync(join(dir, 'assets', 'favicon.svg'), '<svg xmlns="http://www.w3.org/2000/svg"/>');
     writeFileSync(join(dir, 'media', 'font-EF56GH78.woff2'), Buffer.alloc(4096, 7));
     // A copy left from an earlier build whose original is gone.
@@ -72,7 +73,7 @@ describe('the built client on the wire', () => {
   });
 
   it('compresses the text files at build time, leaves fonts and tiny files alone, and removes stale copies', () => {
-    expect(compressed.files).toBe(3); // index.html, the chunk, ngsw.json
+    expect(compressed.files).toBe(3); // index.html, the chunk, ngsw.json (the worker is under 1 kB)
     expect(compressed.brotliBytes).toBeLessThan(compressed.bytes / 5);
     expect(existsSync(join(dir, 'chunk-AB12CD34.js.br'))).toBe(true);
     expect(existsSync(join(dir, 'chunk-AB12CD34.js.gz'))).toBe(true);
@@ -90,6 +91,24 @@ describe('the built client on the wire', () => {
     expect(answer.headers['cache-control']).toBe('public, max-age=31536000, immutable');
     expect(answer.bytes.length).toBeLessThan(SCRIPT.length / 5);
     expect(decoded(answer)).toBe(SCRIPT);
+  });
+
+  it("gives built files two security headers, and pages and worker scripts helmet's whole set", async () => {
+    const chunk = await raw(app.http.url, '/chunk-AB12CD34.js', { 'accept-encoding': 'br' });
+    expect(chunk.headers['x-content-type-options']).toBe('nosniff');
+    expect(chunk.headers['cross-origin-resource-policy']).toBe('same-origin');
+    expect(chunk.headers['content-security-policy']).toBeUndefined();
+    // A worker runs under the policy it is served with.
+    const worker = await raw(app.http.url, '/ngsw-worker.js');
+    expect(worker.status).toBe(200);
+    expect(worker.headers['content-security-policy']).toContain("script-src 'self'");
+    expect(worker.headers['cache-control']).toBe('no-cache');
+    for (const path of ['/teams/42', '/index.html']) {
+      const page = await raw(app.http.url, path, { accept: 'text/html' });
+      expect(page.headers['content-security-policy'], path).toContain("default-src 'self'");
+      expect(page.headers['x-frame-options'], path).toBe('SAMEORIGIN');
+      expect(decoded(page), path).toBe(INDEX);
+    }
   });
 
   it('sends gzip to a browser without brotli, and the plain file to one that accepts neither', async () => {
