@@ -1,7 +1,7 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
-import { TestBed } from '@angular/core/testing';
+import { ComponentFixture, DeferBlockBehavior, DeferBlockState, TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
 import { of } from 'rxjs';
@@ -107,6 +107,16 @@ describe('PlanPage', () => {
   let training: Plan;
 
   beforeAll(async () => {
+    // The test DOM has no IntersectionObserver; the page's "near the screen" triggers need one to
+    // exist. This one never reports: the tests draw deferred parts themselves (drawDeferred).
+    globalThis.IntersectionObserver ??= class {
+      observe(): void {}
+      unobserve(): void {}
+      disconnect(): void {}
+      takeRecords(): [] {
+        return [];
+      }
+    } as unknown as typeof IntersectionObserver;
     plan = await generatePlan(REQUEST);
     training = await generatePlan(TRAINING);
   });
@@ -119,9 +129,12 @@ describe('PlanPage', () => {
     rules = defaultRuleSet as RuleSetDocument,
     shown = undefined as Plan | undefined,
     role = 'coach' as 'coach' | 'assistant',
+    drawAll = true,
   } = {}) {
     const served = shown ?? plan;
     TestBed.configureTestingModule({
+      // The test draws deferred parts itself (the test DOM has no IntersectionObserver to do it).
+      deferBlockBehavior: DeferBlockBehavior.Manual,
       imports: [PlanPage],
       providers: [
         provideHttpClient(),
@@ -149,6 +162,7 @@ describe('PlanPage', () => {
         role,
       },
     });
+    await TestBed.compileComponents();
     const fixture = TestBed.createComponent(PlanPage);
     fixture.componentRef.setInput('planId', 'plan-1');
     const http = TestBed.inject(HttpTestingController);
@@ -157,8 +171,35 @@ describe('PlanPage', () => {
     http.expectOne(`/api/rule-sets/${served.ruleSet.id}`).flush(ruleSetDto(rules));
     await fixture.whenStable();
     fixture.detectChanges();
+    // Later phases and the panels are drawn after the first paint (on idle or near the screen):
+    // most tests read the whole page, as a coach who scrolled would.
+    if (drawAll) await drawDeferred(fixture);
     return { fixture, http, root: fixture.nativeElement as HTMLElement };
   }
+
+  async function drawDeferred(fixture: ComponentFixture<PlanPage>): Promise<void> {
+    for (const block of await fixture.getDeferBlocks()) await block.render(DeferBlockState.Complete);
+    await fixture.whenStable();
+    fixture.detectChanges();
+  }
+
+  it('draws the first phase with the page and the rest after the first paint', async () => {
+    const { fixture, root } = await setUp({ drawAll: false });
+    const phases = Array.from(root.querySelectorAll('[data-testid="phase"]'));
+    expect(phases.length).toBe(plan.phases.length);
+    const drawn = () => phases.map((el) => el.querySelectorAll('cw-station-card').length);
+    const counts = plan.phases.map((ph) => ph.stations.length);
+    expect(drawn()[0]).toBe(counts[0]);
+    expect(
+      drawn()
+        .slice(1)
+        .every((n) => n === 0),
+    ).toBe(true);
+    expect(root.querySelector('cw-register-panel')).toBeNull();
+    await drawDeferred(fixture);
+    expect(drawn()).toEqual(counts);
+    expect(root.querySelector('cw-register-panel')).not.toBeNull();
+  });
 
   afterEach(() => {
     localStorage.clear();
@@ -264,7 +305,7 @@ describe('PlanPage', () => {
   });
 
   it("folds each station's details on a phone and keeps title, area and diagram in view", async () => {
-    const { root } = await setUp({ phone: true });
+    const { fixture, root } = await setUp({ phone: true });
     const stations = Array.from(root.querySelectorAll('cw-station-card'));
     expect(stations.length).toBe(plan.phases.reduce((n, p) => n + p.stations.length, 0));
     for (const card of stations) {
@@ -274,10 +315,18 @@ describe('PlanPage', () => {
       // What the coach scans first stays outside the fold.
       expect(details.contains(card.querySelector('h4'))).toBe(false);
       expect(details.contains(card.querySelector('cw-station-diagram'))).toBe(false);
-      expect(details.contains(card.querySelector('.cw-group'))).toBe(true);
-      const description = card.querySelector('.cw-description');
-      if (description) expect(details.contains(description)).toBe(true);
+      // Folded, the body is not even drawn: half a plan's page lives in these.
+      expect(card.querySelector('.cw-group')).toBeNull();
     }
+    // Opened, it is drawn inside the fold.
+    const card = stations[0]!;
+    const details = card.querySelector<HTMLDetailsElement>('[data-testid="station-details"]')!;
+    details.open = true;
+    details.dispatchEvent(new Event('toggle'));
+    await settle(fixture);
+    expect(details.contains(card.querySelector('.cw-group'))).toBe(true);
+    const description = card.querySelector('.cw-description');
+    if (description) expect(details.contains(description)).toBe(true);
   });
 
   it("keeps every station's details open on a wide screen, with no fold to open", async () => {
@@ -562,7 +611,9 @@ describe('PlanPage', () => {
 
     const [phaseIndex, stationId] = key.split(':');
     const phaseEl = root.querySelectorAll('[data-testid="phase"]')[Number(phaseIndex)];
-    const card = phaseEl.querySelector(`[data-station="${stationId}"]`)!.closest('cw-station-card')!;
+    // Folded, the card's body (where data-station is) is not drawn yet: find the card by its place.
+    const place = tight.phases[Number(phaseIndex)]!.stations.findIndex((st) => st.id === stationId);
+    const card = phaseEl.querySelectorAll('cw-station-card')[place]!;
     const details = card.querySelector('details')!;
     details.open = true;
     details.dispatchEvent(new Event('toggle'));

@@ -8,6 +8,7 @@ import {
   signal,
   untracked,
 } from '@angular/core';
+import { NgTemplateOutlet } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
@@ -48,6 +49,7 @@ interface SwapGroup {
 @Component({
   selector: 'cw-plan-page',
   imports: [
+    NgTemplateOutlet,
     RouterLink,
     CdkDropListGroup,
     MatButtonModule,
@@ -116,6 +118,11 @@ export class PlanPage {
         void untracked(() => this.session.refreshLimits());
       }
     });
+  }
+
+  /** The phase index handed to the stations template (its context is untyped). */
+  protected phaseIndex(at: unknown): number {
+    return at as number;
   }
 
   /** The last edit's answer when it belongs at `at` (the page, or a phase's swap button). */
