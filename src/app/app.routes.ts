@@ -2,6 +2,7 @@ import { Routes } from '@angular/router';
 import { roleGuard, signedInGuard, signedOutGuard } from './core/auth/auth-guards';
 import { PublicFrame } from './core/layout/public-frame';
 import { SignInPage } from './features/auth/sign-in-page';
+import { prefetchPlan } from './features/plans/services/plan-prefetch';
 
 /**
  * Every screen is lazy-loaded so the first paint stays small, except sign-in: it is the first
@@ -67,6 +68,7 @@ export const routes: Routes = [
       {
         path: 'plans/:planId',
         title: 'Plan · Conewise',
+        resolve: { started: prefetchPlan },
         loadComponent: () => import('./features/plans/plan-page').then((m) => m.PlanPage),
       },
       {

@@ -13,6 +13,11 @@ export class PlanHandover {
     this.pending = plan;
   }
 
+  /** Whether the plan `id` is waiting to be taken. */
+  has(id: string): boolean {
+    return this.pending?.id === id;
+  }
+
   /** The handed-over plan if it is the one asked for; forgotten either way. */
   take(id: string): SessionPlanDto | null {
     const plan = this.pending?.id === id ? this.pending : null;

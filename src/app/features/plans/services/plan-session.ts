@@ -5,6 +5,7 @@ import type { PlanEdit } from '../../../../../shared/types/plan-edit';
 import { PlansApi } from '../../../core/api/plans-api';
 import { PlanRulesApi } from '../../../core/api/plan-rules-api';
 import { ActivityOption, AreaLimits, BrowserEngine } from '../../../core/engine/browser-engine';
+import { PlanPrefetch } from './plan-prefetch';
 import { problemMessage } from '../../../core/http/problem-message';
 
 /**
@@ -24,6 +25,7 @@ export interface EditFeedback {
 @Injectable()
 export class PlanSession {
   private readonly plansApi = inject(PlansApi);
+  private readonly prefetch = inject(PlanPrefetch);
   private readonly engine = inject(BrowserEngine);
   private readonly planRules = inject(PlanRulesApi);
   /** The rules of the open plan's rule set, fetched once per rule set id. */
@@ -51,7 +53,7 @@ export class PlanSession {
       this.accept(handedOver);
       return;
     }
-    this.plansApi.get(id).subscribe({
+    (this.prefetch.take(id) ?? this.plansApi.get(id)).subscribe({
       next: (dto) => this.accept(dto),
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
