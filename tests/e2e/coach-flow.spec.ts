@@ -111,15 +111,24 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     await page.getByTestId('make-plan').click();
     const response = await created;
     expect(response.status()).toBe(201);
-    saved = (await response.json()) as SessionPlanDto;
+    await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
+    await page.getByTestId('phase').first().waitFor();
+    // Read back as stored. (Once the service worker controls the page it answers the POST, and the
+    // page's own network log may no longer hold the body.)
+    const id = new URL(page.url()).pathname.split('/').pop()!;
+    saved = await page.evaluate(async (planId) => {
+      const { token } = JSON.parse(localStorage.getItem('conewise.session')!) as { token: string };
+      const answer = await fetch(`/api/plans/${planId}`, { headers: { authorization: `Bearer ${token}` } });
+      return (await answer.json()) as SessionPlanDto;
+    }, id);
     expect(saved.request.players).toHaveLength(13);
     expect(saved.request.equipment).toMatchObject({ cones: 12, goals: 2 });
-    await page.waitForURL(`**/plans/${saved.id}`);
-    await page.getByTestId('phase').first().waitFor();
   });
 
   it('shows every present player exactly once in each phase, with the cautions on top', async () => {
     const present = saved.request.players.map((p) => p.id).sort();
+    // Later phases are drawn just after the first paint.
+    await page.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
     const phases = page.getByTestId('phase');
     expect(await phases.count()).toBe(saved.plan.phases.length);
     for (let i = 0; i < saved.plan.phases.length; i++) {

@@ -132,12 +132,18 @@ describe('activity library', () => {
     await page.getByTestId('make-plan').click();
     const response = await created;
     expect(response.status()).toBe(201);
-    const saved = (await response.json()) as SessionPlanDto;
+    await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
+    await page.getByTestId('phase').first().waitFor();
+    // Read back as stored (the page's network log may not keep the body once it has moved on).
+    const id = new URL(page.url()).pathname.split('/').pop()!;
+    const saved = await page.evaluate(async (planId) => {
+      const { token } = JSON.parse(localStorage.getItem('conewise.session')!) as { token: string };
+      const answer = await fetch(`/api/plans/${planId}`, { headers: { authorization: `Bearer ${token}` } });
+      return (await answer.json()) as SessionPlanDto;
+    }, id);
     expect(saved.request.pinnedActivityIds).toContain(PINNED);
     const used = saved.plan.phases.flatMap((p) => p.stations).filter((s) => s.activityId === PINNED);
     expect(used.length).toBeGreaterThan(0);
-    await page.waitForURL(`**/plans/${saved.id}`);
-    await page.getByTestId('phase').first().waitFor();
     expect(await page.locator('main').textContent()).toContain(activity.title);
     await page.close();
     expect(accessibility).toEqual([]);

@@ -100,9 +100,14 @@ describe('answers beside the control on a phone', () => {
   });
 
   it('greys "Larger area" at its limit and says the limit under it, on screen', async () => {
-    // The first station that can still grow.
+    // The first station that can still grow. On a phone the area buttons are inside each card's
+    // fold, drawn when it is opened (which also fetches the engine that greys them): open them all.
+    await page.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
     const cards = page.locator('cw-station-card');
     const count = await cards.count();
+    for (let i = 0; i < count; i++) await cards.nth(i).locator('summary').click();
+    await expect.poll(() => cards.getByTestId('area-larger').count()).toBe(count);
+    await page.waitForLoadState('networkidle');
     let card: Locator | null = null;
     for (let i = 0; i < count && !card; i++) {
       const candidate = cards.nth(i);
@@ -110,7 +115,6 @@ describe('answers beside the control on a phone', () => {
       if ((await larger.count()) && !(await larger.isDisabled())) card = candidate;
     }
     expect(card, 'a station whose area can still grow').not.toBeNull();
-    await card!.locator('summary').click();
     const larger = card!.getByTestId('area-larger');
     // While an edit is saved every edit control waits; "New groups" says when the page is idle.
     const idle = () => page.getByTestId('regenerate').isEnabled();

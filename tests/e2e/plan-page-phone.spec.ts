@@ -121,12 +121,14 @@ describe('the plan page on a phone', () => {
     await page.reload();
     await page.getByTestId('phase').first().waitFor();
     const points = page.locator('cw-station-card .cw-points');
-    expect(await points.first().isVisible()).toBe(false);
+    // Folded on screen, a card's body is not even drawn.
+    expect(await points.count()).toBe(0);
     await page.emulateMedia({ media: 'print' });
     try {
-      const shown = await points.evaluateAll((els) => els.map((el) => el.getBoundingClientRect().height > 0));
-      expect(shown.length).toBeGreaterThan(0);
-      expect(shown.every(Boolean)).toBe(true);
+      // Folded cards draw their body for paper as the page switches to print media.
+      const shown = () => points.evaluateAll((els) => els.map((el) => el.getBoundingClientRect().height > 0));
+      await expect.poll(async () => (await shown()).length).toBe(stationCount);
+      expect((await shown()).every(Boolean)).toBe(true);
       expect(await page.locator('cw-station-card summary').first().isVisible()).toBe(false);
       // Paper carries the plan only: no toolbar, navigation, buttons or button-styled links.
       expect(await visibleControls(page)).toEqual([]);
@@ -157,6 +159,8 @@ describe('the plan page on a phone', () => {
     const desktop = await browser.newPage(DESKTOP);
     await club.open(desktop, coach, `/plans/${saved.id}`);
     await desktop.getByTestId('phase').first().waitFor();
+    // Later phases are drawn just after the first paint.
+    await desktop.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
     expect(await openStates(desktop)).toEqual(Array(stationCount).fill(true));
     expect(await desktop.locator('cw-station-card summary').first().isVisible()).toBe(false);
     expect(await desktop.locator('cw-station-card .cw-points').first().isVisible()).toBe(true);
@@ -176,6 +180,8 @@ describe('the plan page on a phone', () => {
     const desktop = await browser.newPage(DESKTOP);
     await club.open(desktop, coach, `/plans/${full.id}`);
     await desktop.getByTestId('phase').first().waitFor();
+    // Later phases are drawn just after the first paint.
+    await desktop.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
     await desktop.evaluate(() => document.fonts.ready.then(() => undefined));
     expect(await visibleControls(desktop)).not.toEqual([]);
     await desktop.emulateMedia({ media: 'print' });
@@ -236,6 +242,8 @@ describe('a hot hour of training on the plan page', () => {
       page.on('pageerror', (error) => console.log(`[page error] ${error.message}`));
       await club.open(page, coach, `/plans/${saved.id}`);
       await page.getByTestId('phase').first().waitFor();
+      // Later phases are drawn just after the first paint.
+      await page.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
 
       // Heat: drinks breaks are phases of their own, each a row with no stations.
       const breaks = saved.plan.phases.filter((phase) => phase.activityKind === 'break');

@@ -1,7 +1,7 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
-import { ComponentFixture, DeferBlockBehavior, DeferBlockState, TestBed } from '@angular/core/testing';
+import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
 import { of } from 'rxjs';
@@ -18,6 +18,7 @@ import {
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 import { AuthStore } from '../../core/auth/auth-store';
 import { BrowserEngine } from '../../core/engine/browser-engine';
+import { PrintState } from '../../core/layout/print-state';
 import { PlanPage } from './plan-page';
 import { PlanSession } from './services/plan-session';
 
@@ -107,16 +108,6 @@ describe('PlanPage', () => {
   let training: Plan;
 
   beforeAll(async () => {
-    // The test DOM has no IntersectionObserver; the page's "near the screen" triggers need one to
-    // exist. This one never reports: the tests draw deferred parts themselves (drawDeferred).
-    globalThis.IntersectionObserver ??= class {
-      observe(): void {}
-      unobserve(): void {}
-      disconnect(): void {}
-      takeRecords(): [] {
-        return [];
-      }
-    } as unknown as typeof IntersectionObserver;
     plan = await generatePlan(REQUEST);
     training = await generatePlan(TRAINING);
   });
@@ -133,8 +124,6 @@ describe('PlanPage', () => {
   } = {}) {
     const served = shown ?? plan;
     TestBed.configureTestingModule({
-      // The test draws deferred parts itself (the test DOM has no IntersectionObserver to do it).
-      deferBlockBehavior: DeferBlockBehavior.Manual,
       imports: [PlanPage],
       providers: [
         provideHttpClient(),
@@ -162,7 +151,6 @@ describe('PlanPage', () => {
         role,
       },
     });
-    await TestBed.compileComponents();
     const fixture = TestBed.createComponent(PlanPage);
     fixture.componentRef.setInput('planId', 'plan-1');
     const http = TestBed.inject(HttpTestingController);
@@ -177,8 +165,15 @@ describe('PlanPage', () => {
     return { fixture, http, root: fixture.nativeElement as HTMLElement };
   }
 
+  /** Waits for the later phases and the panels, drawn just after the first paint. */
   async function drawDeferred(fixture: ComponentFixture<PlanPage>): Promise<void> {
-    for (const block of await fixture.getDeferBlocks()) await block.render(DeferBlockState.Complete);
+    await vi.waitFor(
+      () => {
+        fixture.detectChanges();
+        expect((fixture.nativeElement as HTMLElement).querySelector('cw-register-panel')).not.toBeNull();
+      },
+      { timeout: 5000, interval: 20 },
+    );
     await fixture.whenStable();
     fixture.detectChanges();
   }
@@ -198,6 +193,17 @@ describe('PlanPage', () => {
     expect(root.querySelector('cw-register-panel')).toBeNull();
     await drawDeferred(fixture);
     expect(drawn()).toEqual(counts);
+    expect(root.querySelector('cw-register-panel')).not.toBeNull();
+  });
+
+  it('draws everything at once for paper, folded station cards open', async () => {
+    const { fixture, root } = await setUp({ drawAll: false, phone: true });
+    expect(root.querySelector('cw-station-card .cw-group')).toBeNull();
+    TestBed.inject(PrintState).printing.set(true);
+    fixture.detectChanges();
+    const total = plan.phases.reduce((n, p) => n + p.stations.length, 0);
+    expect(root.querySelectorAll('cw-station-card').length).toBe(total);
+    expect(root.querySelectorAll('cw-station-card .cw-group').length).toBe(total);
     expect(root.querySelector('cw-register-panel')).not.toBeNull();
   });
 

@@ -1,9 +1,11 @@
 import {
+  afterNextRender,
   ChangeDetectionStrategy,
   Component,
   computed,
   effect,
   inject,
+  Injector,
   input,
   signal,
   untracked,
@@ -21,6 +23,7 @@ import { CardPaper, PlansApi } from '../../core/api/plans-api';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 import { AuthStore } from '../../core/auth/auth-store';
+import { PrintState } from '../../core/layout/print-state';
 import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
@@ -99,6 +102,12 @@ export class PlanPage {
   /** Phones fold each station's details (the shell's own phone breakpoint); wider screens keep them open. */
   protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);
 
+  private readonly printState = inject(PrintState);
+  private readonly injector = inject(Injector);
+  /** Later phases and the panels: drawn just after the plan's first paint, at once for paper. */
+  private readonly drawnLater = signal(false);
+  protected readonly drawAll = computed(() => this.drawnLater() || this.printState.printing());
+
   /** Whether a coach has unfolded a station card (and so can see its area buttons). */
   protected readonly areaButtonsShown = signal(false);
 
@@ -109,6 +118,17 @@ export class PlanPage {
     effect(() => {
       const id = this.planId();
       this.session.open(id, handover.take(id));
+    });
+    // A phone draws the first phase, paints, then the rest in the next quiet moment.
+    effect(() => {
+      if (!this.session.plan() || untracked(this.drawnLater)) return;
+      afterNextRender(
+        () => {
+          const later = window.requestIdleCallback ?? ((draw: () => void) => setTimeout(draw, 50));
+          later(() => this.drawnLater.set(true), { timeout: 500 });
+        },
+        { injector: this.injector },
+      );
     });
     // The area buttons grey out at their limits: worked out again for every plan on screen, once
     // they can be seen. On a phone they sit in folded station cards, so the engine (a large

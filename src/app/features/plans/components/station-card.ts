@@ -1,5 +1,6 @@
 import { CdkDrag, CdkDragDrop, CdkDropList } from '@angular/cdk/drag-drop';
-import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
+import { PrintState } from '../../../core/layout/print-state';
 import { MatButtonModule } from '@angular/material/button';
 import { MatMenuModule } from '@angular/material/menu';
 import { POSITION_STYLE, type Station } from '../../../../../shared/types';
@@ -102,6 +103,8 @@ export class StationCard {
 
   /** Whether the coach has opened the folded details; kept while the card stays on screen. */
   protected readonly expanded = signal(false);
+  /** Paper shows every card open. */
+  protected readonly printing = inject(PrintState).printing;
 
   /** Follows the native disclosure, which opens and closes itself on tap, Enter and Space. */
   protected toggled(event: Event): void {
