@@ -62,6 +62,8 @@ describe('the plan page on a phone', () => {
     page.on('pageerror', (error) => console.log(`[page error] ${error.message}`));
     await club.open(page, coach, `/plans/${saved.id}`);
     await page.getByTestId('phase').first().waitFor();
+    // Later phases are drawn one by one just after the first paint.
+    await page.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
     await page.evaluate(() => document.fonts.ready.then(() => undefined));
   });
   afterAll(async () => {

@@ -60,8 +60,9 @@ describe('the register', () => {
     await club.open(page, assistant, `/plans/${plan.id}`);
     const register = page.getByTestId('register');
     await register.waitFor();
+    // The panel is drawn after the phases, then reads the register, the roster and the team.
     await expect
-      .poll(() => register.getByTestId('register-headline').textContent())
+      .poll(() => register.getByTestId('register-headline').textContent(), { timeout: 15_000 })
       .toContain('Not taken yet');
     await register.locator('mat-expansion-panel-header').click();
     await register.getByTestId('register-all-here').click();

@@ -19,6 +19,7 @@ import type { PlanEdit } from '../../../../shared/types/plan-edit';
 import { AuthStore } from '../../core/auth/auth-store';
 import { BrowserEngine } from '../../core/engine/browser-engine';
 import { PrintState } from '../../core/layout/print-state';
+import { WHEN_IDLE } from '../../core/layout/when-idle';
 import { PlanPage } from './plan-page';
 import { PlanSession } from './services/plan-session';
 
@@ -104,6 +105,7 @@ const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges()
 vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
 
 describe('PlanPage', () => {
+  const idleWork: (() => void)[] = [];
   let plan: Plan;
   let training: Plan;
 
@@ -123,6 +125,7 @@ describe('PlanPage', () => {
     drawAll = true,
   } = {}) {
     const served = shown ?? plan;
+    idleWork.length = 0;
     TestBed.configureTestingModule({
       imports: [PlanPage],
       providers: [
@@ -130,6 +133,8 @@ describe('PlanPage', () => {
         provideHttpClientTesting(),
         provideRouter([]),
         provideNoopAnimations(),
+        // Work the page leaves for a quiet moment waits here until the test runs it.
+        { provide: WHEN_IDLE, useValue: (work: () => void) => idleWork.push(work) },
         ...(phone
           ? [
               {
@@ -165,15 +170,20 @@ describe('PlanPage', () => {
     return { fixture, http, root: fixture.nativeElement as HTMLElement };
   }
 
-  /** Waits for the later phases and the panels, drawn just after the first paint. */
+  /** Runs the page's quiet moments until the later phases and the panels are drawn. */
   async function drawDeferred(fixture: ComponentFixture<PlanPage>): Promise<void> {
-    await vi.waitFor(
-      () => {
-        fixture.detectChanges();
-        expect((fixture.nativeElement as HTMLElement).querySelector('cw-register-panel')).not.toBeNull();
-      },
-      { timeout: 5000, interval: 20 },
-    );
+    for (
+      let moments = 0;
+      moments < 50 && !fixture.nativeElement.querySelector('cw-register-panel');
+      moments++
+    ) {
+      await quietMoment(fixture);
+    }
+  }
+
+  /** One quiet moment: the work waiting for it runs, and the page draws what it changed. */
+  async function quietMoment(fixture: ComponentFixture<PlanPage>): Promise<void> {
+    for (const work of idleWork.splice(0)) work();
     await fixture.whenStable();
     fixture.detectChanges();
   }
@@ -191,6 +201,14 @@ describe('PlanPage', () => {
         .every((n) => n === 0),
     ).toBe(true);
     expect(root.querySelector('cw-register-panel')).toBeNull();
+    // One more phase at each quiet moment, in order.
+    await quietMoment(fixture);
+    expect(drawn()[1]).toBe(counts[1]);
+    expect(
+      drawn()
+        .slice(2)
+        .every((n) => n === 0),
+    ).toBe(true);
     await drawDeferred(fixture);
     expect(drawn()).toEqual(counts);
     expect(root.querySelector('cw-register-panel')).not.toBeNull();

@@ -24,6 +24,7 @@ import { ICONS } from '../../core/icons/shipped-icon';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 import { AuthStore } from '../../core/auth/auth-store';
 import { PrintState } from '../../core/layout/print-state';
+import { WHEN_IDLE } from '../../core/layout/when-idle';
 import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
@@ -104,9 +105,19 @@ export class PlanPage {
 
   private readonly printState = inject(PrintState);
   private readonly injector = inject(Injector);
-  /** Later phases and the panels: drawn just after the plan's first paint, at once for paper. */
-  private readonly drawnLater = signal(false);
-  protected readonly drawAll = computed(() => this.drawnLater() || this.printState.printing());
+  private readonly whenIdle = inject(WHEN_IDLE);
+  /**
+   * How many phases are drawn: the first with the page, then one more at each quiet moment after
+   * the first paint (short tasks, so a tap is never kept waiting), the panels after the last; all
+   * at once for paper.
+   */
+  private readonly drawnPhases = signal(1);
+  protected readonly drawnUpTo = computed(() =>
+    this.printState.printing() ? Number.MAX_SAFE_INTEGER : this.drawnPhases(),
+  );
+  protected readonly drawAll = computed(
+    () => this.drawnUpTo() > (this.session.plan()?.phases.length ?? Number.MAX_SAFE_INTEGER),
+  );
 
   /** Whether a coach has unfolded a station card (and so can see its area buttons). */
   protected readonly areaButtonsShown = signal(false);
@@ -119,16 +130,13 @@ export class PlanPage {
       const id = this.planId();
       this.session.open(id, handover.take(id));
     });
-    // A phone draws the first phase, paints, then the rest in the next quiet moment.
+    // The page draws the first phase, paints, then one more phase at each quiet moment.
     effect(() => {
-      if (!this.session.plan() || untracked(this.drawnLater)) return;
-      afterNextRender(
-        () => {
-          const later = window.requestIdleCallback ?? ((draw: () => void) => setTimeout(draw, 50));
-          later(() => this.drawnLater.set(true), { timeout: 500 });
-        },
-        { injector: this.injector },
-      );
+      const plan = this.session.plan();
+      if (!plan || this.drawnPhases() > plan.phases.length) return;
+      afterNextRender(() => this.whenIdle(() => this.drawnPhases.update((n) => n + 1)), {
+        injector: this.injector,
+      });
     });
     // The area buttons grey out at their limits: worked out again for every plan on screen, once
     // they can be seen. On a phone they sit in folded station cards, so the engine (a large
