@@ -13,13 +13,11 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import lighthouse from 'lighthouse';
 import { chromium } from 'playwright-core';
-import { precompressClient } from '../../server/build/precompress';
-import { buildClient } from '../../server/client-build';
 import { PROJECT_ROOT } from '../../server/config';
 import { DEMO_PASSWORD } from '../../server/seed';
 import type { Page, PlanSummaryDto } from '../../shared/types/api';
 import { CHROMIUM_ARGS } from '../e2e/support/browser';
-import { setup, teardown } from '../support/e2e-global-setup';
+import { startBenchStack, teardown } from './support/stack';
 
 const COACH = 'coach.u12@fernmoor.example.org';
 const REPORTS = join(PROJECT_ROOT, 'test-results');
@@ -54,13 +52,7 @@ async function newestPlan(baseUrl: string): Promise<{ session: string; planId: s
 }
 
 async function main(): Promise<void> {
-  if (process.env['SKIP_CLIENT_BUILD'] === '1') precompressClient();
-  else if (!buildClient(() => undefined))
-    throw new Error('The client build failed: run `npm run build` to see why.');
-  process.env['SKIP_CLIENT_BUILD'] = '1';
-  const provided = new Map<string, string>();
-  await setup({ provide: (key: string, value: string) => provided.set(key, value) } as never);
-  const baseUrl = provided.get('baseUrl')!;
+  const baseUrl = await startBenchStack();
   const profile = mkdtempSync(join(tmpdir(), 'conewise-lighthouse-'));
   const port = await freePort();
   const context = await chromium.launchPersistentContext(profile, {

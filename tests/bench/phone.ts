@@ -23,11 +23,9 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type CDPSession, type Page } from 'playwright-core';
-import { precompressClient } from '../../server/build/precompress';
-import { buildClient } from '../../server/client-build';
 import { DEMO_PASSWORD } from '../../server/seed';
 import { CHROMIUM_ARGS } from '../e2e/support/browser';
-import { setup, teardown } from '../support/e2e-global-setup';
+import { startBenchStack, teardown } from './support/stack';
 import { byType, kilobytes, WireMeter, type WireRecord } from './support/wire';
 
 const COACH = 'coach.u12@fernmoor.example.org';
@@ -226,14 +224,7 @@ async function repeatVisit(
 }
 
 async function main(): Promise<void> {
-  // SKIP_CLIENT_BUILD=1 measures the build that is there, compressed as `npm run build` would.
-  if (process.env['SKIP_CLIENT_BUILD'] === '1') precompressClient();
-  else if (!buildClient(() => undefined))
-    throw new Error('The client build failed: run `npm run build` to see why.');
-  process.env['SKIP_CLIENT_BUILD'] = '1';
-  const provided = new Map<string, string>();
-  await setup({ provide: (key: string, value: string) => provided.set(key, value) } as never);
-  const baseUrl = provided.get('baseUrl')!;
+  const baseUrl = await startBenchStack();
   const profiles: string[] = [];
   const launch = async (serviceWorkers: 'allow' | 'block') => {
     const profile = mkdtempSync(join(tmpdir(), 'conewise-phone-'));

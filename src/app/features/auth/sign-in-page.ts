@@ -27,7 +27,7 @@ const EMAIL =
   selector: 'cw-sign-in-page',
   imports: [RouterLink],
   templateUrl: './sign-in-page.html',
-  styleUrl: './sign-in-page.scss',
+  styleUrls: ['./auth-page.scss', './sign-in-page.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class SignInPage {
