@@ -148,7 +148,10 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     );
     // The absent player is in no phase; only the register lists the whole squad.
     expect(await page.getByTestId('phase').getByText(ABSENT).count()).toBe(0);
-    expect(await page.locator('cw-register-panel').getByText(ABSENT).count()).toBe(1);
+    // The register panel is drawn after the phases, then reads the roster.
+    await expect
+      .poll(() => page.locator('cw-register-panel').getByText(ABSENT).count(), { timeout: 15_000 })
+      .toBe(1);
     await expect
       .poll(() => page.getByTestId('cautions').textContent())
       .toContain(saved.plan.cautions[0]!.message);
