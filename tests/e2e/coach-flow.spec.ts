@@ -15,6 +15,7 @@ import {
   DESKTOP,
   launchBrowser,
   PHONE,
+  planDrawn,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
@@ -112,7 +113,7 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     const response = await created;
     expect(response.status()).toBe(201);
     await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
     // Read back as stored. (Once the service worker controls the page it answers the POST, and the
     // page's own network log may no longer hold the body.)
     const id = new URL(page.url()).pathname.split('/').pop()!;
@@ -127,8 +128,6 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
 
   it('shows every present player exactly once in each phase, with the cautions on top', async () => {
     const present = saved.request.players.map((p) => p.id).sort();
-    // Later phases are drawn just after the first paint.
-    await page.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
     const phases = page.getByTestId('phase');
     expect(await phases.count()).toBe(saved.plan.phases.length);
     for (let i = 0; i < saved.plan.phases.length; i++) {
@@ -194,7 +193,7 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
 
     // Saved: a fresh load shows the player where they were dragged.
     await page.reload();
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
     const reloaded = page.getByTestId('phase').nth(phaseIndex).locator(`[data-station="${to!.id}"]`);
     expect(await reloaded.locator(`[data-player="${playerId}"]`).count()).toBe(1);
   });

@@ -12,6 +12,7 @@ import {
   DESKTOP,
   launchBrowser,
   PHONE,
+  planDrawn,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
@@ -133,7 +134,7 @@ describe('activity library', () => {
     const response = await created;
     expect(response.status()).toBe(201);
     await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
     // Read back as stored (the page's network log may not keep the body once it has moved on).
     const id = new URL(page.url()).pathname.split('/').pop()!;
     const saved = await page.evaluate(async (planId) => {

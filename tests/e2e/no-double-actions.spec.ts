@@ -15,6 +15,7 @@ import type {
 import {
   launchBrowser,
   PHONE,
+  planDrawn,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
@@ -66,7 +67,7 @@ describe('no double actions, and plans can be deleted (phone)', () => {
     await make.waitFor();
     await make.dblclick();
     await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
     await screenshot(page, 'double-tap-plan');
 
     expect(posts).toHaveLength(1);
@@ -118,7 +119,7 @@ describe('no double actions, and plans can be deleted (phone)', () => {
     const { team, players } = await club.team(coach, TEAM);
     const plan = await club.plan(coach, team, players.slice(0, 6));
     const { page } = await phonePage(`/plans/${plan.id}`, /^$/);
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
     await page.getByTestId('delete-plan').click();
     const dialog = page.getByRole('dialog');
     await dialog.getByText('Who came and how each station went').waitFor();

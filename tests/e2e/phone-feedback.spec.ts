@@ -12,6 +12,7 @@ import type { AuthResponse, SessionPlanDto } from '../../shared/types';
 import {
   launchBrowser,
   PHONE,
+  planDrawn,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
@@ -72,7 +73,7 @@ describe('answers beside the control on a phone', () => {
     page = await browser.newPage(PHONE);
     page.on('pageerror', (error) => console.log(`[page error] ${error.message}`));
     await club.open(page, coach, `/plans/${saved.id}`);
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
   });
   afterAll(async () => {
     await browser?.close();

@@ -17,6 +17,7 @@ import {
   DESKTOP,
   launchBrowser,
   PHONE,
+  planDrawn,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
@@ -61,9 +62,7 @@ describe('the plan page on a phone', () => {
     page = await browser.newPage(PHONE);
     page.on('pageerror', (error) => console.log(`[page error] ${error.message}`));
     await club.open(page, coach, `/plans/${saved.id}`);
-    await page.getByTestId('phase').first().waitFor();
-    // Later phases are drawn one by one just after the first paint.
-    await page.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
+    await planDrawn(page);
     await page.evaluate(() => document.fonts.ready.then(() => undefined));
   });
   afterAll(async () => {
@@ -108,7 +107,7 @@ describe('the plan page on a phone', () => {
 
   it('is far shorter folded than with every station open', async () => {
     await page.reload();
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
     await page.evaluate(() => document.fonts.ready.then(() => undefined));
     const folded = await pageHeight(page);
     const summaries = page.locator('cw-station-card summary');
@@ -121,7 +120,7 @@ describe('the plan page on a phone', () => {
 
   it('prints every station open, also those folded on screen', async () => {
     await page.reload();
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
     const points = page.locator('cw-station-card .cw-points');
     // Folded on screen, a card's body is not even drawn.
     expect(await points.count()).toBe(0);
@@ -152,7 +151,7 @@ describe('the plan page on a phone', () => {
     expect(info).toMatch(/Page size:\s+612 x 792 pts/);
 
     await page.reload();
-    await page.getByTestId('phase').first().waitFor();
+    await planDrawn(page);
     expect(await page.getByRole('radio', { name: 'US Letter' }).getAttribute('aria-checked')).toBe('true');
     expect(await page.getByRole('radio', { name: 'A4' }).getAttribute('aria-checked')).toBe('false');
   });
@@ -160,9 +159,7 @@ describe('the plan page on a phone', () => {
   it('keeps every station open on a desktop, with no summary to open', async () => {
     const desktop = await browser.newPage(DESKTOP);
     await club.open(desktop, coach, `/plans/${saved.id}`);
-    await desktop.getByTestId('phase').first().waitFor();
-    // Later phases are drawn just after the first paint.
-    await desktop.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
+    await planDrawn(desktop);
     expect(await openStates(desktop)).toEqual(Array(stationCount).fill(true));
     expect(await desktop.locator('cw-station-card summary').first().isVisible()).toBe(false);
     expect(await desktop.locator('cw-station-card .cw-points').first().isVisible()).toBe(true);
@@ -181,9 +178,7 @@ describe('the plan page on a phone', () => {
     const fullCount = full.plan.phases.reduce((n, phase) => n + phase.stations.length, 0);
     const desktop = await browser.newPage(DESKTOP);
     await club.open(desktop, coach, `/plans/${full.id}`);
-    await desktop.getByTestId('phase').first().waitFor();
-    // Later phases are drawn just after the first paint.
-    await desktop.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
+    await planDrawn(desktop);
     await desktop.evaluate(() => document.fonts.ready.then(() => undefined));
     expect(await visibleControls(desktop)).not.toEqual([]);
     await desktop.emulateMedia({ media: 'print' });
@@ -243,9 +238,7 @@ describe('a hot hour of training on the plan page', () => {
       const page = await browser.newPage(viewport);
       page.on('pageerror', (error) => console.log(`[page error] ${error.message}`));
       await club.open(page, coach, `/plans/${saved.id}`);
-      await page.getByTestId('phase').first().waitFor();
-      // Later phases are drawn just after the first paint.
-      await page.locator('.cw-stations-waiting').first().waitFor({ state: 'detached' });
+      await planDrawn(page);
 
       // Heat: drinks breaks are phases of their own, each a row with no stations.
       const breaks = saved.plan.phases.filter((phase) => phase.activityKind === 'break');

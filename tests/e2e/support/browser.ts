@@ -106,3 +106,12 @@ export async function seriousAccessibilityViolations(page: Page): Promise<string
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
     .map((v) => `${v.impact} ${v.id}: ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
 }
+
+/**
+ * Waits for a plan page to be wholly drawn: its first phase shows with the page, the later phases
+ * and the panels follow one quiet moment at a time.
+ */
+export async function planDrawn(page: Page): Promise<void> {
+  await page.getByTestId('phase').first().waitFor();
+  await page.locator('.cw-stations-waiting, .cw-panels-waiting').first().waitFor({ state: 'detached' });
+}
