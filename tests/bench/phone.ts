@@ -194,7 +194,14 @@ async function repeatVisit(
   await first.evaluate((value) => localStorage.setItem('conewise.session', value), session);
   await first.goto(`${baseUrl}/plans/${planId}`);
   await visibleAt(first, '[data-testid="phase"]');
-  // Installed: the worker controls the page and has fetched every file it prefetches.
+  // Installed: the worker is active (the app registers it once stable, 30 s at most), controls
+  // the page after a reload (Chromium does not always hand an open page to a worker that claims
+  // it) and has fetched every file it prefetches.
+  await first.evaluate(async () => {
+    await navigator.serviceWorker.ready;
+  });
+  await first.reload();
+  await visibleAt(first, '[data-testid="phase"]');
   await first.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, {
     timeout: 60_000,
   });
