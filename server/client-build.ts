@@ -6,6 +6,7 @@ import {
   prefetchOfflineScreens,
   type ServiceWorkerManifest,
 } from './build/offline-groups';
+import { completePreloadHints, serviceWorkerHash } from './build/preload-hints';
 import { precompressClient } from './build/precompress';
 import { CLIENT_DIST, PROJECT_ROOT } from './config';
 
@@ -49,12 +50,22 @@ export function buildClient(log: (m: string) => void = console.log): boolean {
   });
   if (result.status !== 0) return false;
   const manifestPath = join(CLIENT_DIST, 'ngsw.json');
+  const indexPath = join(CLIENT_DIST, 'index.html');
+  const meta = JSON.parse(readFileSync(join(CLIENT_DIST, '..', 'stats.json'), 'utf8')) as BuildMetafile;
   const { manifest, moved } = prefetchOfflineScreens(
     JSON.parse(readFileSync(manifestPath, 'utf8')) as ServiceWorkerManifest,
-    JSON.parse(readFileSync(join(CLIENT_DIST, '..', 'stats.json'), 'utf8')) as BuildMetafile,
+    meta,
   );
+  const built = readFileSync(indexPath, 'utf8');
+  const hashes = manifest['hashTable'] as Record<string, string>;
+  if (hashes['/index.html'] !== serviceWorkerHash(built))
+    throw new Error('ngsw.json hashes index.html differently than expected: cannot update it');
+  const { html, added } = completePreloadHints(built, meta);
+  writeFileSync(indexPath, html);
+  hashes['/index.html'] = serviceWorkerHash(html);
   writeFileSync(manifestPath, JSON.stringify(manifest, null, 2));
   log(`[conewise] the service worker prefetches ${moved} chunks for the shell, the plan page and pitch-side`);
+  log(`[conewise] index.html preloads ${added.length} more chunks the first screen imports`);
   const { files, bytes, brotliBytes } = precompressClient();
   log(
     `[conewise] compressed ${files} built files: ${Math.round(bytes / 1024)} kB → ${Math.round(brotliBytes / 1024)} kB brotli`,

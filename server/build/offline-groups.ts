@@ -18,7 +18,7 @@ export const OFFLINE_SCREENS = [
 ] as const;
 
 /** The app's entry point: its static imports make the app shell. */
-const APP_ENTRY = 'src/main.ts';
+export const APP_ENTRY = 'src/main.ts';
 
 /** The parts of esbuild's metafile read here. */
 export interface BuildMetafile {

@@ -6,6 +6,10 @@
  * {"signIn":{"performance":…,"accessibility":…,"best-practices":…,"seo":…},"plan":{…}}.
  * Goals (issue 12): performance ≥ 95 on sign-in and ≥ 90 on the plan, accessibility 100 and
  * best practices 100 on both. The full reports go to test-results/lighthouse-<page>.json.
+ *
+ * Simulated throttling scales what this machine did, so one run swings by tens of points when the
+ * two cores are busy; each page is run LIGHTHOUSE_RUNS times (3 unless set) and the run with the
+ * median performance score is the one reported, as Lighthouse's own guidance on variability says.
  */
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
@@ -22,6 +26,7 @@ import { startBenchStack, teardown } from './support/stack';
 const COACH = 'coach.u12@fernmoor.example.org';
 const REPORTS = join(PROJECT_ROOT, 'test-results');
 const CATEGORIES = ['performance', 'accessibility', 'best-practices', 'seo'] as const;
+const RUNS = Math.max(1, Number(process.env['LIGHTHOUSE_RUNS'] ?? 3) || 3);
 type Scores = Record<(typeof CATEGORIES)[number], number>;
 
 function freePort(): Promise<number> {
@@ -63,7 +68,7 @@ async function main(): Promise<void> {
   const results: Record<string, Scores> = {};
   try {
     const { session, planId } = await newestPlan(baseUrl);
-    const run = async (name: string, url: string, signedIn: boolean) => {
+    const once = async (url: string, signedIn: boolean) => {
       if (signedIn) {
         // Signed in without loading the app first (a file of the same origin), so no service
         // worker is installed; then an empty cache, as after the sign-in page's own run.
@@ -83,11 +88,18 @@ async function main(): Promise<void> {
         disableStorageReset: signedIn,
       });
       if (!result) throw new Error(`Lighthouse gave no result for ${url}`);
-      const { lhr } = result;
-      // The whole report, for reading what the scores are made of.
+      if (result.lhr.runtimeError) throw new Error(`Lighthouse: ${result.lhr.runtimeError.message}`);
+      return result.lhr;
+    };
+    const run = async (name: string, url: string, signedIn: boolean) => {
+      const runs: Awaited<ReturnType<typeof once>>[] = [];
+      for (let i = 0; i < RUNS; i++) runs.push(await once(url, signedIn));
+      const performance = (lhr: (typeof runs)[number]) => lhr.categories['performance']?.score ?? 0;
+      runs.sort((a, b) => performance(a) - performance(b));
+      const lhr = runs[Math.floor((runs.length - 1) / 2)]!;
+      // The whole report of the median run, for reading what the scores are made of.
       mkdirSync(REPORTS, { recursive: true });
       writeFileSync(join(REPORTS, `lighthouse-${name}.json`), JSON.stringify(lhr, null, 1));
-      if (lhr.runtimeError) throw new Error(`Lighthouse: ${lhr.runtimeError.message}`);
       const scores = Object.fromEntries(
         CATEGORIES.map((c) => [c, Math.round((lhr.categories[c]?.score ?? 0) * 100)]),
       ) as Scores;
@@ -101,8 +113,9 @@ async function main(): Promise<void> {
       ]
         .map((id) => `${id.replace(/-/g, ' ')} ${lhr.audits[id]?.displayValue ?? '?'}`)
         .join(', ');
+      const spread = runs.map((r) => Math.round(performance(r) * 100)).join(', ');
       console.log(`${name.padEnd(8)} ${CATEGORIES.map((c) => `${c} ${scores[c]}`).join(' · ')}`);
-      console.log(`         ${metrics}`);
+      console.log(`         median of ${RUNS} runs (performance ${spread}): ${metrics}`);
       const failing = Object.values(lhr.audits).filter(
         (a) =>
           a.score !== null &&

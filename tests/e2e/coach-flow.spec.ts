@@ -147,7 +147,8 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     );
     // The absent player is in no phase; only the register lists the whole squad.
     expect(await page.getByTestId('phase').getByText(ABSENT).count()).toBe(0);
-    // The register panel is drawn after the phases, then reads the roster.
+    // The register panel is drawn after the phases, then reads the roster; its rows when opened.
+    await page.locator('cw-register-panel mat-expansion-panel-header').click();
     await expect
       .poll(() => page.locator('cw-register-panel').getByText(ABSENT).count(), { timeout: 15_000 })
       .toBe(1);

@@ -8,7 +8,6 @@ import {
 import { MatIconRegistry } from '@angular/material/icon';
 import { DomSanitizer } from '@angular/platform-browser';
 import { from, type Observable, switchMap } from 'rxjs';
-import { ICON_NAMES } from './icon-names';
 
 /**
  * Angular Material's icon registry, filled with the shipped icons the first time any icon is asked
@@ -20,28 +19,34 @@ import { ICON_NAMES } from './icon-names';
 export class ShippedIconRegistry extends MatIconRegistry {
   private readonly sanitizer = inject(DomSanitizer);
   private readonly pendingTasks = inject(PendingTasks);
-  private loading: Promise<void> | null = null;
-  private loaded = false;
+  private loading: Promise<Readonly<Record<string, string>>> | null = null;
+  private paths: Readonly<Record<string, string>> | null = null;
+  /** Icons handed to the registry so far: each is parsed into an SVG element only when first drawn. */
+  private readonly registered = new Set<string>();
 
   override getNamedSvgIcon(name: string, namespace = ''): Observable<SVGElement> {
-    if (this.loaded) return super.getNamedSvgIcon(name, namespace);
-    return from(this.registerShipped()).pipe(switchMap(() => super.getNamedSvgIcon(name, namespace)));
+    if (this.paths) return this.drawn(name, namespace);
+    return from(this.loadPaths()).pipe(switchMap(() => this.drawn(name, namespace)));
   }
 
-  private registerShipped(): Promise<void> {
+  private drawn(name: string, namespace: string): Observable<SVGElement> {
+    const path = namespace === '' ? this.paths?.[name] : undefined;
+    if (path !== undefined && !this.registered.has(name)) {
+      // Bypassing the sanitizer is safe here: the markup is built from constants generated at
+      // build time from our own list, never from user input or the network.
+      const svg = `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 -960 960 960"><path d="${path}"/></svg>`;
+      this.addSvgIconLiteral(name, this.sanitizer.bypassSecurityTrustHtml(svg));
+      this.registered.add(name);
+    }
+    return super.getNamedSvgIcon(name, namespace);
+  }
+
+  private loadPaths(): Promise<Readonly<Record<string, string>>> {
     // A pending task: the app (and a test's whenStable) is not stable until the icons are drawn.
     if (!this.loading) {
       const done = this.pendingTasks.add();
       this.loading = import('./generated/icon-svgs')
-        .then(({ ICON_PATHS }) => {
-          for (const name of ICON_NAMES) {
-            // Bypassing the sanitizer is safe here: the markup is built from constants generated at
-            // build time from our own list, never from user input or the network.
-            const svg = `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 -960 960 960"><path d="${ICON_PATHS[name]}"/></svg>`;
-            this.addSvgIconLiteral(name, this.sanitizer.bypassSecurityTrustHtml(svg));
-          }
-          this.loaded = true;
-        })
+        .then(({ ICON_PATHS }) => (this.paths = ICON_PATHS))
         .finally(done);
     }
     return this.loading;

@@ -48,6 +48,10 @@ function open(userId: string, role: 'lead' | 'coach' | 'assistant', coachIds: st
   http.expectOne('/api/teams/t1').flush({ id: 't1', coachIds });
   fixture.detectChanges();
   const el = fixture.nativeElement as HTMLElement;
+  // The rows are drawn when the coach opens the panel.
+  expect(el.querySelector('[data-testid=register-row]')).toBeNull();
+  el.querySelector<HTMLElement>('mat-expansion-panel-header')!.click();
+  fixture.detectChanges();
   return { fixture, http, el };
 }
 
