@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component } from '@angular/core';
-import { RouterLink, RouterOutlet } from '@angular/router';
+import { RouterOutlet } from '@angular/router';
+import { Brand } from './brand';
 
 /**
  * The frame of the pages anyone may open (sign in, create a club, join by invitation, status):
@@ -7,13 +8,10 @@ import { RouterLink, RouterOutlet } from '@angular/router';
  */
 @Component({
   selector: 'cw-public-frame',
-  imports: [RouterOutlet, RouterLink],
+  imports: [RouterOutlet, Brand],
   template: `
     <header class="cw-public-bar cw-no-print">
-      <a class="cw-brand" routerLink="/" aria-label="Conewise, this week">
-        <img src="assets/favicon.svg" alt="" width="28" height="28" />
-        <span>Conewise</span>
-      </a>
+      <cw-brand />
     </header>
     <main id="main"><router-outlet /></main>
   `,
@@ -30,16 +28,7 @@ import { RouterLink, RouterOutlet } from '@angular/router';
       padding: 0 16px;
       background: var(--mat-sys-primary);
       color: var(--mat-sys-on-primary);
-    }
-    .cw-brand {
-      display: inline-flex;
-      align-items: center;
-      gap: 8px;
-      color: inherit;
-      text-decoration: none;
       font-size: 1.25rem;
-      font-weight: 700;
-      letter-spacing: 0.02em;
     }
     @media (max-width: 599px) {
       .cw-public-bar {

@@ -6,6 +6,7 @@ import { MatToolbarModule } from '@angular/material/toolbar';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 import { AuthStore } from '../auth/auth-store';
 import { ICONS } from '../icons/shipped-icon';
+import { Brand } from './brand';
 import { mediaMatches, PHONE_WIDTH_QUERY } from './media-query';
 import { NAV_ITEMS } from './nav-items';
 
@@ -18,6 +19,7 @@ import { NAV_ITEMS } from './nav-items';
   imports: [
     RouterOutlet,
     RouterLink,
+    Brand,
     RouterLinkActive,
     MatToolbarModule,
     MatSidenavModule,
