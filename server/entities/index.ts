@@ -8,6 +8,7 @@ import { KitBag } from './kit-bag';
 import { Membership } from './membership';
 import { OutboxMessage } from './outbox-message';
 import { Player } from './player';
+import { RevokedToken } from './revoked-token';
 import { RuleSet } from './rule-set';
 import { RuleSetChange } from './rule-set-change';
 import { ScheduledSession } from './scheduled-session';
@@ -27,6 +28,7 @@ export {
   Membership,
   OutboxMessage,
   Player,
+  RevokedToken,
   RuleSet,
   RuleSetChange,
   ScheduledSession,
@@ -55,4 +57,5 @@ export const ENTITIES = [
   TeamCalendar,
   IdempotencyRecord,
   HelperLink,
+  RevokedToken,
 ];

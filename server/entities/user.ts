@@ -16,6 +16,13 @@ export class User {
   @Column({ type: 'varchar', length: 100 })
   passwordHash!: string;
 
+  /**
+   * Raised to end every session of this person at once (sign out everywhere, a new password):
+   * a token carries the version it was signed with and is refused once it is behind.
+   */
+  @Column({ type: 'integer', default: 0 })
+  tokenVersion!: number;
+
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;
 }

@@ -10,6 +10,8 @@ export interface AuthContext {
   role: Role;
   name: string;
   email: string;
+  /** The session token's id and expiry (seconds since 1970), for signing this one session out. */
+  token?: { id: string; expiresAt: number };
 }
 
 declare global {

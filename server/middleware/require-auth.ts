@@ -19,6 +19,11 @@ import { VerifiedTokens } from '../http/verified-tokens';
 export interface TokenClaims {
   sub: string;
   club: string;
+  /** The person's token version when it was signed (absent in tokens from before versions: 0). */
+  ver?: number;
+  /** The token's own id, for signing one session out. */
+  jti?: string;
+  exp?: number;
 }
 
 /** Only HS256 is accepted: tokens signed otherwise, or with `alg: none`, are refused. */
@@ -34,7 +39,11 @@ export function createRequireAuth(dataSource: DataSource, config: AppConfig): Re
     done: (error: unknown, user?: AuthContext | false) => void,
   ) => {
     if (typeof claims.sub !== 'string' || typeof claims.club !== 'string') return done(null, false);
-    loadAuthContext(dataSource, claims.sub, claims.club).then(
+    loadAuthContext(dataSource, claims.sub, claims.club, {
+      version: typeof claims.ver === 'number' ? claims.ver : 0,
+      id: typeof claims.jti === 'string' ? claims.jti : null,
+      expiresAt: typeof claims.exp === 'number' ? claims.exp : null,
+    }).then(
       (auth) => done(null, auth ?? false),
       (error) => done(error),
     );
@@ -81,15 +90,27 @@ export function createRequireAuth(dataSource: DataSource, config: AppConfig): Re
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-/** The caller's membership, or null when the user or membership no longer exists. */
+/** What a session token says about itself, checked against the database on every request. */
+export interface TokenState {
+  version: number;
+  id: string | null;
+  expiresAt: number | null;
+}
+
+/**
+ * The caller's membership, or null when the user or membership no longer exists, or the token
+ * was ended (signed out, or signed before the person's last "sign out everywhere" or new password).
+ */
 export async function loadAuthContext(
   dataSource: DataSource,
   userId: string,
   clubId: string,
+  token: TokenState,
 ): Promise<AuthContext | null> {
   if (!UUID.test(userId) || !UUID.test(clubId)) return null;
-  // One joined read per request: the role is re-read every time so a removed member loses access
-  // at once, and a single round trip keeps that check cheap.
+  if (token.id !== null && !UUID.test(token.id)) return null;
+  // One joined read per request: the role and the session's standing are re-read every time, so
+  // a removed member or an ended session loses access at once on every instance, in one round trip.
   const rows = await preparedQuery<{
     role: Membership['role'];
     userName: string;
@@ -102,13 +123,24 @@ export async function loadAuthContext(
          FROM membership m
          JOIN app_user u ON u.id = m."userId"
          JOIN club c ON c.id = m."clubId"
-        WHERE m."userId" = $1 AND m."clubId" = $2
+        WHERE m."userId" = $1 AND m."clubId" = $2 AND u."tokenVersion" = $3
+          AND NOT EXISTS (SELECT 1 FROM revoked_token r WHERE r.jti = $4::uuid)
         LIMIT 1`,
-    [userId, clubId],
+    [userId, clubId, token.version, token.id],
   );
   const row = rows[0];
   if (!row) return null;
-  return { userId, clubId, clubName: row.clubName, role: row.role, name: row.userName, email: row.email };
+  return {
+    userId,
+    clubId,
+    clubName: row.clubName,
+    role: row.role,
+    name: row.userName,
+    email: row.email,
+    ...(token.id !== null && token.expiresAt !== null
+      ? { token: { id: token.id, expiresAt: token.expiresAt } }
+      : {}),
+  };
 }
 
 type Done = (error: unknown, user?: AuthContext | false) => void;

@@ -9,6 +9,7 @@ import { IdempotencyRecords1764634000000 } from './1764634000000-idempotency-rec
 import { RegisterAndStationFeedback1764635000000 } from './1764635000000-register-and-station-feedback';
 import { TeamSchedule1764636000000 } from './1764636000000-team-schedule';
 import { HelperLinks1764637000000 } from './1764637000000-helper-links';
+import { SessionRevocation1764638000000 } from './1764638000000-session-revocation';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -23,4 +24,5 @@ export const MIGRATIONS = [
   RegisterAndStationFeedback1764635000000,
   TeamSchedule1764636000000,
   HelperLinks1764637000000,
+  SessionRevocation1764638000000,
 ];

@@ -5,7 +5,11 @@ import { validate } from '../middleware/validate';
 import { AuthService, userDto } from '../services/auth-service';
 import type { ApiDeps } from './api-deps';
 
-/** POST /auth/register, POST /auth/login, GET /auth/me. */
+/**
+ * POST /auth/register, POST /auth/login, GET /auth/me; POST /auth/sign-out (this session),
+ * POST /auth/sign-out-everywhere (every session of the caller), POST /auth/password (a new
+ * password, ending every session).
+ */
 export function authRouter(deps: ApiDeps): Router {
   const router = Router();
   const service = new AuthService(deps.dataSource, deps.config);
@@ -20,5 +24,23 @@ export function authRouter(deps: ApiDeps): Router {
   router.get('/auth/me', deps.requireAuth, (req, res) => {
     res.json(userDto(authOf(req)));
   });
+  router.post('/auth/sign-out', deps.requireAuth, async (req, res) => {
+    await service.signOut(authOf(req));
+    res.status(204).end();
+  });
+  router.post('/auth/sign-out-everywhere', deps.requireAuth, async (req, res) => {
+    await service.signOutEverywhere(authOf(req));
+    res.status(204).end();
+  });
+  router.post(
+    '/auth/password',
+    deps.requireAuth,
+    limiter,
+    validate({ body: 'auth-password-change' }),
+    async (req, res) => {
+      await service.changePassword(authOf(req), req.body);
+      res.status(204).end();
+    },
+  );
   return router;
 }

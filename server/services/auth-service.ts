@@ -85,18 +85,68 @@ export class AuthService {
       .getRepository(Membership)
       .findOne({ where: { userId: user.id }, relations: { club: true } });
     if (!membership?.club) throw unauthorized('This account no longer belongs to a club.');
-    return this.respond({
-      userId: user.id,
-      clubId: membership.clubId,
-      clubName: membership.club.name,
-      role: membership.role,
-      name: user.name,
-      email: user.email,
-    });
+    return this.respond(
+      {
+        userId: user.id,
+        clubId: membership.clubId,
+        clubName: membership.club.name,
+        role: membership.role,
+        name: user.name,
+        email: user.email,
+      },
+      user.tokenVersion,
+    );
   }
 
-  respond(auth: AuthContext): AuthResponse {
-    return { token: signToken(this.config, auth.userId, auth.clubId), user: userDto(auth) };
+  /** A session for `auth`, valid while the person's token version stays `version` (0 when new). */
+  respond(auth: AuthContext, version = 0): AuthResponse {
+    return { token: signToken(this.config, auth.userId, auth.clubId, version), user: userDto(auth) };
+  }
+
+  /**
+   * Ends the caller's own session: its token id is kept until the token would have expired, and
+   * expired entries are cleared in passing. A token from before token ids can only be ended by
+   * ending every session of the person.
+   */
+  async signOut(auth: AuthContext): Promise<void> {
+    if (!auth.token) return this.signOutEverywhere(auth);
+    await this.dataSource.query(
+      `INSERT INTO revoked_token (jti, "expiresAt") VALUES ($1, to_timestamp($2)) ON CONFLICT (jti) DO NOTHING`,
+      [auth.token.id, auth.token.expiresAt],
+    );
+    await this.dataSource.query(`DELETE FROM revoked_token WHERE "expiresAt" < now()`);
+  }
+
+  /** Ends every session of the caller, on every device and instance, at once. */
+  async signOutEverywhere(auth: AuthContext): Promise<void> {
+    await this.dataSource.query(`UPDATE app_user SET "tokenVersion" = "tokenVersion" + 1 WHERE id = $1`, [
+      auth.userId,
+    ]);
+  }
+
+  /**
+   * A new password, given the current one; every session of the person ends with it (the device
+   * that changed it signs in again with the new password).
+   */
+  async changePassword(
+    auth: AuthContext,
+    input: { currentPassword: string; newPassword: string },
+  ): Promise<void> {
+    const user = await this.dataSource.getRepository(User).findOneBy({ id: auth.userId });
+    if (!user) throw unauthorized();
+    if (!(await bcrypt.compare(input.currentPassword, user.passwordHash)))
+      throw new HttpError(400, 'Wrong current password', 'Your current password is not right.', [
+        { field: 'currentPassword', message: 'is not your current password' },
+      ]);
+    if (input.newPassword === input.currentPassword)
+      throw new HttpError(400, 'Same password', 'Choose a new password different from the current one.', [
+        { field: 'newPassword', message: 'is the same as the current password' },
+      ]);
+    const passwordHash = await hashPassword(input.newPassword);
+    await this.dataSource.query(
+      `UPDATE app_user SET "passwordHash" = $2, "tokenVersion" = "tokenVersion" + 1 WHERE id = $1`,
+      [auth.userId, passwordHash],
+    );
   }
 }
 
