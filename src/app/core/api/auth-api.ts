@@ -17,6 +17,11 @@ export interface CreateClubBody {
   timeZone?: string;
 }
 
+export interface ChangePasswordBody {
+  currentPassword: string;
+  newPassword: string;
+}
+
 export interface AcceptInvitationBody {
   name: string;
   password: string;
@@ -32,7 +37,7 @@ export interface InvitationLookup {
   teamName: string | null;
 }
 
-/** Sign-in, club creation and invitations: the calls that hand out a session. */
+/** Sign-in, club creation and invitations (the calls that hand out a session), and ending sessions. */
 @Injectable({ providedIn: 'root' })
 export class AuthApi {
   private readonly http = inject(HttpClient);
@@ -57,6 +62,21 @@ export class AuthApi {
   /** GET /api/invitations/lookup: the club, role and e-mail an unused invitation is for. */
   lookupInvitation(token: string): Observable<InvitationLookup> {
     return this.http.get<InvitationLookup>('/api/invitations/lookup', { params: { token } });
+  }
+
+  /** POST /api/auth/sign-out: this session ends on the server too, not only in this browser. */
+  signOut(): Observable<void> {
+    return this.http.post<void>('/api/auth/sign-out', {});
+  }
+
+  /** POST /api/auth/sign-out-everywhere: every session of the caller ends, on every device. */
+  signOutEverywhere(): Observable<void> {
+    return this.http.post<void>('/api/auth/sign-out-everywhere', {});
+  }
+
+  /** POST /api/auth/password: a new password; every session of the caller ends with it. */
+  changePassword(body: ChangePasswordBody): Observable<void> {
+    return this.http.post<void>('/api/auth/password', body);
   }
 
   /** GET /api/auth/me. */

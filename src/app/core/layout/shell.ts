@@ -1,10 +1,17 @@
+import { DOCUMENT } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, viewChild } from '@angular/core';
+import { MatDialog } from '@angular/material/dialog';
 import { MatButtonModule } from '@angular/material/button';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatSidenav, MatSidenavModule } from '@angular/material/sidenav';
 import { MatToolbarModule } from '@angular/material/toolbar';
-import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+import { AuthApi } from '../api/auth-api';
 import { AuthStore } from '../auth/auth-store';
+import { ChangePasswordDialog } from '../auth/change-password-dialog';
+import { forgetDeviceData, unsentPitchSideChanges } from '../auth/device-data';
+import { SignOutDialog, type SignOutDialogData } from '../auth/sign-out-dialog';
 import { ICONS } from '../icons/shipped-icon';
 import { Brand } from './brand';
 import { mediaMatches, PHONE_WIDTH_QUERY } from './media-query';
@@ -32,7 +39,9 @@ import { NAV_ITEMS } from './nav-items';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class Shell {
-  private readonly router = inject(Router);
+  private readonly document = inject(DOCUMENT);
+  private readonly dialog = inject(MatDialog);
+  private readonly authApi = inject(AuthApi);
   protected readonly auth = inject(AuthStore);
   private readonly drawer = viewChild(MatSidenav);
 
@@ -48,8 +57,34 @@ export class Shell {
     if (this.compact()) void this.drawer()?.close();
   }
 
-  protected signOut(): void {
+  protected changePassword(): void {
+    this.dialog.open(ChangePasswordDialog, { width: '420px', maxWidth: '95vw' });
+  }
+
+  /**
+   * Signs out here (or everywhere), asking first when more than this screen ends. The device is
+   * cleared and the app restarts on the sign-in page, so nothing of this person stays in memory
+   * for whoever picks up a shared club tablet next.
+   */
+  protected signOut(everywhere = false): void {
+    const data: SignOutDialogData = { everywhere, unsent: unsentPitchSideChanges() };
+    if (!everywhere && data.unsent === 0) {
+      void this.leave(false);
+      return;
+    }
+    this.dialog
+      .open<SignOutDialog, SignOutDialogData, boolean>(SignOutDialog, { data, maxWidth: '95vw' })
+      .afterClosed()
+      .subscribe((confirmed) => {
+        if (confirmed) void this.leave(everywhere);
+      });
+  }
+
+  private async leave(endedOnServer: boolean): Promise<void> {
+    // Offline, the token still ends when it expires; clearing the device matters more.
+    if (!endedOnServer) await firstValueFrom(this.authApi.signOut()).catch(() => undefined);
+    await forgetDeviceData();
     this.auth.signOut();
-    void this.router.navigate(['/sign-in']);
+    this.document.location.assign('/sign-in');
   }
 }

@@ -3,6 +3,7 @@ import { DestroyRef, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom, Observable, Subject, timeout, TimeoutError } from 'rxjs';
 import { problemMessage } from '../../../core/http/problem-message';
 import { PitchSideApi, type PlanChange, type ReplanBody, type VerdictBody } from './pitch-side-api';
+import { PITCH_SIDE_QUEUE_KEY } from '../../../core/auth/device-data';
 
 /** One pitch-side action waiting to reach the server. */
 export type QueuedAction =
@@ -16,7 +17,7 @@ export interface SyncedAction {
   change: PlanChange | null;
 }
 
-const STORAGE_KEY = 'conewise.pitch-side.queue';
+const STORAGE_KEY = PITCH_SIDE_QUEUE_KEY;
 /** First wait before retrying an unsent action, doubling up to the most. */
 const RETRY_FIRST_MS = 3_000;
 const RETRY_MAX_MS = 30_000;

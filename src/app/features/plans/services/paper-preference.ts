@@ -1,10 +1,12 @@
 import { Injectable, signal } from '@angular/core';
 import type { CardPaper } from '../../../core/api/plans-api';
+import { PAPER_SETTING_KEY } from '../../../core/auth/device-data';
 
 /** How each paper is named on screen. */
 export const PAPER_LABELS: Readonly<Record<CardPaper, string>> = { a4: 'A4', letter: 'US Letter' };
 
-const STORAGE_KEY = 'conewise.paper';
+/** A setting of the device, kept when someone signs out (see core/auth/device-data.ts). */
+const STORAGE_KEY = PAPER_SETTING_KEY;
 
 /** Regions where US Letter is the usual office paper. */
 const LETTER_REGIONS = new Set(['US', 'CA', 'MX', 'PH']);
