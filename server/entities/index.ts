@@ -7,6 +7,7 @@ import { Invitation } from './invitation';
 import { KitBag } from './kit-bag';
 import { Membership } from './membership';
 import { OutboxMessage } from './outbox-message';
+import { PasswordReset } from './password-reset';
 import { Player } from './player';
 import { RevokedToken } from './revoked-token';
 import { RuleSet } from './rule-set';
@@ -27,6 +28,7 @@ export {
   KitBag,
   Membership,
   OutboxMessage,
+  PasswordReset,
   Player,
   RevokedToken,
   RuleSet,
@@ -58,4 +60,5 @@ export const ENTITIES = [
   IdempotencyRecord,
   HelperLink,
   RevokedToken,
+  PasswordReset,
 ];

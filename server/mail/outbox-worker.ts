@@ -1,7 +1,9 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import type { DataSource } from 'typeorm';
 import type { OutboxMessage } from '../entities/outbox-message';
+import { CLEARED_BODY, SECRET_BEARING_KINDS } from '../services/mail-queue';
 import type { MailSettings } from './mail-settings';
+
 
 export interface OutboxWorkerOptions {
   dataSource: DataSource;
@@ -133,9 +135,13 @@ export class OutboxWorker {
           content: Buffer.from(a.contentBase64, 'base64'),
         })),
       });
+      // A body holding a working single-use link is not kept once delivered.
       await db.query(
-        `UPDATE outbox_message SET status = 'sent', "sentAt" = now(), "lastError" = NULL WHERE id = $1`,
-        [message.id],
+        `UPDATE outbox_message
+            SET status = 'sent', "sentAt" = now(), "lastError" = NULL,
+                "textBody" = CASE WHEN kind = ANY($2) THEN $3 ELSE "textBody" END
+          WHERE id = $1`,
+        [message.id, SECRET_BEARING_KINDS, CLEARED_BODY],
       );
       result.sent++;
     } catch (error) {

@@ -10,6 +10,7 @@ import { RegisterAndStationFeedback1764635000000 } from './1764635000000-registe
 import { TeamSchedule1764636000000 } from './1764636000000-team-schedule';
 import { HelperLinks1764637000000 } from './1764637000000-helper-links';
 import { SessionRevocation1764638000000 } from './1764638000000-session-revocation';
+import { PasswordReset1764639000000 } from './1764639000000-password-reset';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -25,4 +26,5 @@ export const MIGRATIONS = [
   TeamSchedule1764636000000,
   HelperLinks1764637000000,
   SessionRevocation1764638000000,
+  PasswordReset1764639000000,
 ];

@@ -3,17 +3,20 @@ import { authOf } from '../http/auth-context';
 import { authRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
 import { AuthService, userDto } from '../services/auth-service';
+import { PasswordResetService, RESET_REQUESTED } from '../services/password-reset-service';
 import type { ApiDeps } from './api-deps';
 
 /**
  * POST /auth/register, POST /auth/login, GET /auth/me; POST /auth/sign-out (this session),
  * POST /auth/sign-out-everywhere (every session of the caller), POST /auth/password (a new
- * password, ending every session).
+ * password, ending every session); POST /auth/password-reset (202 whether or not the address has
+ * an account) and POST /auth/password-reset/confirm (a new password with the e-mailed link).
  */
 export function authRouter(deps: ApiDeps): Router {
   const router = Router();
   const service = new AuthService(deps.dataSource, deps.config);
   const limiter = authRateLimit(deps.config);
+  const resets = new PasswordResetService(deps.dataSource, deps.config, deps.mail);
 
   router.post('/auth/register', limiter, validate({ body: 'auth-register' }), async (req, res) => {
     res.status(201).json(await service.register(req.body));
@@ -39,6 +42,19 @@ export function authRouter(deps: ApiDeps): Router {
     validate({ body: 'auth-password-change' }),
     async (req, res) => {
       await service.changePassword(authOf(req), req.body);
+      res.status(204).end();
+    },
+  );
+  router.post('/auth/password-reset', limiter, validate({ body: 'auth-password-reset' }), async (req, res) => {
+    await resets.request(req.body);
+    res.status(202).json(RESET_REQUESTED);
+  });
+  router.post(
+    '/auth/password-reset/confirm',
+    limiter,
+    validate({ body: 'auth-password-reset-confirm' }),
+    async (req, res) => {
+      await resets.confirm(req.body);
       res.status(204).end();
     },
   );

@@ -1,6 +1,13 @@
 import type { EntityManager } from 'typeorm';
 import { OutboxMessage, type OutboxAttachment, type OutboxReplyTo } from '../entities/outbox-message';
 
+/** The outbox kind of a password reset e-mail. */
+export const PASSWORD_RESET_MAIL = 'password-reset';
+/** Outbox kinds whose body holds a working single-use link: the body is cleared once sent. */
+export const SECRET_BEARING_KINDS: readonly string[] = [PASSWORD_RESET_MAIL];
+/** What such a body reads after sending. */
+export const CLEARED_BODY = '(Cleared once sent: it held a single-use link.)';
+
 /** A message to send later through the outbox. */
 export interface QueuedMail {
   clubId: string | null;

@@ -1,0 +1,112 @@
+import { createHash, randomBytes } from 'node:crypto';
+import type { DataSource } from 'typeorm';
+import type { AppConfig } from '../config';
+import { Membership } from '../entities/membership';
+import { PasswordReset } from '../entities/password-reset';
+import { User } from '../entities/user';
+import { HttpError } from '../http/problem';
+import { hashPassword, normaliseEmail } from './auth-service';
+import { PASSWORD_RESET_MAIL, type MailQueue } from './mail-queue';
+
+/** How long a reset link works. */
+export const RESET_TTL_MINUTES = 30;
+/** Reset e-mails one address can be sent in an hour; asking more often sends nothing more. */
+export const RESETS_PER_HOUR = 3;
+
+/** The same answer whether or not an account uses the address, so it tells no one who has one. */
+export const RESET_REQUESTED = {
+  message: `If an account uses this address, an e-mail with a link to choose a new password is on its way. The link works once, for ${RESET_TTL_MINUTES} minutes.`,
+} as const;
+
+export function hashResetToken(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}
+
+/** The reset e-mail. The token is in the link's fragment (after #), which browsers never send. */
+export function passwordResetMail(config: AppConfig, name: string, token: string) {
+  const link = `${config.publicUrl.replace(/\/$/, '')}/reset-password#${token}`;
+  return {
+    subject: 'Choose a new Conewise password',
+    text: [
+      `Hello ${name},`,
+      '',
+      `Someone (we hope you) asked to choose a new password for this address on Conewise: ${link}`,
+      '',
+      `The link works once and for ${RESET_TTL_MINUTES} minutes. Using it signs you out everywhere.`,
+      'If you did not ask, ignore this e-mail: your password stays as it is.',
+    ].join('\n'),
+    link,
+  };
+}
+
+const linkUnusable = () =>
+  new HttpError(400, 'Link not usable', 'This link was used already or is out of date. Ask for a new one.', [
+    { field: 'token', message: 'is used or out of date' },
+  ]);
+
+/** Choosing a new password by e-mail: ask for a link, then use it once. */
+export class PasswordResetService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly config: AppConfig,
+    private readonly mail: MailQueue,
+  ) {}
+
+  /** Queues a reset e-mail when an account uses the address (at most RESETS_PER_HOUR an hour). */
+  async request(input: { email: string }): Promise<void> {
+    const email = normaliseEmail(input.email);
+    await this.dataSource.transaction(async (manager) => {
+      const user = await manager.getRepository(User).findOneBy({ email });
+      if (!user) return;
+      // One request at a time per person, so the hourly count cannot be raced past.
+      await manager.query('SELECT id FROM app_user WHERE id = $1 FOR UPDATE', [user.id]);
+      const [{ recent }] = (await manager.query(
+        `SELECT count(*)::int AS recent FROM password_reset WHERE "userId" = $1 AND "createdAt" > now() - interval '1 hour'`,
+        [user.id],
+      )) as [{ recent: number }];
+      if (recent >= RESETS_PER_HOUR) return;
+      const token = randomBytes(32).toString('base64url');
+      await manager.getRepository(PasswordReset).save({
+        userId: user.id,
+        tokenHash: hashResetToken(token),
+        expiresAt: new Date(Date.now() + RESET_TTL_MINUTES * 60_000),
+        usedAt: null,
+      });
+      const membership = await manager.getRepository(Membership).findOneBy({ userId: user.id });
+      const mail = passwordResetMail(this.config, user.name, token);
+      await this.mail.enqueue(manager, {
+        clubId: membership?.clubId ?? null,
+        kind: PASSWORD_RESET_MAIL,
+        recipients: [user.email],
+        subject: mail.subject,
+        text: mail.text,
+      });
+    });
+  }
+
+  /**
+   * Sets the new password if the link is unused and in date; the link and every other open link
+   * of the person stop working, and every session ends.
+   */
+  async confirm(input: { token: string; password: string }): Promise<void> {
+    const passwordHash = await hashPassword(input.password);
+    await this.dataSource.transaction(async (manager) => {
+      // Claiming the link and marking it used in one statement keeps it single-use.
+      const [claimed] = (await manager.query(
+        `UPDATE password_reset SET "usedAt" = now()
+          WHERE "tokenHash" = $1 AND "usedAt" IS NULL AND "expiresAt" > now()
+          RETURNING "userId"`,
+        [hashResetToken(input.token)],
+      )) as [{ userId: string }[], number];
+      const userId = claimed[0]?.userId;
+      if (!userId) throw linkUnusable();
+      await manager.query(
+        `UPDATE app_user SET "passwordHash" = $2, "tokenVersion" = "tokenVersion" + 1 WHERE id = $1`,
+        [userId, passwordHash],
+      );
+      await manager.query(`UPDATE password_reset SET "usedAt" = now() WHERE "userId" = $1 AND "usedAt" IS NULL`, [
+        userId,
+      ]);
+    });
+  }
+}
