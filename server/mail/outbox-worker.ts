@@ -4,7 +4,6 @@ import type { OutboxMessage } from '../entities/outbox-message';
 import { CLEARED_BODY, SECRET_BEARING_KINDS } from '../services/mail-queue';
 import type { MailSettings } from './mail-settings';
 
-
 export interface OutboxWorkerOptions {
   dataSource: DataSource;
   mail: MailSettings;

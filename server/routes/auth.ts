@@ -45,10 +45,15 @@ export function authRouter(deps: ApiDeps): Router {
       res.status(204).end();
     },
   );
-  router.post('/auth/password-reset', limiter, validate({ body: 'auth-password-reset' }), async (req, res) => {
-    await resets.request(req.body);
-    res.status(202).json(RESET_REQUESTED);
-  });
+  router.post(
+    '/auth/password-reset',
+    limiter,
+    validate({ body: 'auth-password-reset' }),
+    async (req, res) => {
+      await resets.request(req.body);
+      res.status(202).json(RESET_REQUESTED);
+    },
+  );
   router.post(
     '/auth/password-reset/confirm',
     limiter,

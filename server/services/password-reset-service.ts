@@ -104,9 +104,10 @@ export class PasswordResetService {
         `UPDATE app_user SET "passwordHash" = $2, "tokenVersion" = "tokenVersion" + 1 WHERE id = $1`,
         [userId, passwordHash],
       );
-      await manager.query(`UPDATE password_reset SET "usedAt" = now() WHERE "userId" = $1 AND "usedAt" IS NULL`, [
-        userId,
-      ]);
+      await manager.query(
+        `UPDATE password_reset SET "usedAt" = now() WHERE "userId" = $1 AND "usedAt" IS NULL`,
+        [userId],
+      );
     });
   }
 }
