@@ -103,6 +103,11 @@ export const routes: Routes = [
         loadComponent: () => import('./features/auth/create-club-page').then((m) => m.CreateClubPage),
       },
       {
+        path: 'reset-password',
+        title: 'Choose a new password · Conewise',
+        loadComponent: () => import('./features/auth/reset-password-page').then((m) => m.ResetPasswordPage),
+      },
+      {
         path: 'invitations/:token',
         title: 'Join your club · Conewise',
         loadComponent: () =>

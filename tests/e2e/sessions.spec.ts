@@ -1,10 +1,12 @@
 /**
  * Ending sessions from the account menu, on a phone: a new password (this device stays signed
  * in, another session ends), and signing out on a shared tablet, which clears the device (the
- * session, pitch-side's copies and queue, cached API answers) and ends the token on the server.
+ * session, pitch-side's copies and queue, cached API answers) and ends the token on the server;
+ * and a forgotten password, from the sign-in page to the e-mailed link and a new password.
  */
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { CaughtMail } from '../../server/mail/fake-smtp';
 import type { AuthResponse } from '../../shared/types';
 import {
   launchBrowser,
@@ -19,6 +21,7 @@ const PASSWORD = 'first-secret-42';
 
 describe('ending sessions from the account menu (phone)', () => {
   const baseUrl = inject('baseUrl');
+  const mailUrl = inject('mailUrl');
   const club = new ClubSession(baseUrl);
   let browser: TestBrowser;
 
@@ -108,6 +111,58 @@ describe('ending sessions from the account menu (phone)', () => {
     }));
     expect(left).toEqual({ keys: ['conewise.paper'], caches: [] });
     expect(await me(lead.token)).toBe(401);
+    await page.close();
+  });
+
+  it('a forgotten password: ask from the sign-in page, open the e-mailed link, choose a new one', async () => {
+    const lead = await freshLead();
+    const page = await browser.newPage(PHONE);
+    await page.goto(`${baseUrl}/sign-in`);
+    await page.getByRole('link', { name: 'Forgot your password?' }).click();
+    await page.getByRole('heading', { name: 'Forgot your password?' }).waitFor();
+    await page.getByLabel('E-mail').fill(lead.user.email);
+    await page.getByTestId('reset-ask').click();
+    await expect
+      .poll(() => page.getByTestId('reset-asked').textContent())
+      .toContain('If an account uses this address');
+    await screenshot(page, 'reset-asked');
+
+    let mail: CaughtMail | undefined;
+    await expect
+      .poll(
+        async () => {
+          const list = (await (await fetch(`${mailUrl}/`)).json()) as CaughtMail[];
+          mail = list.find((m) => m.to.includes(lead.user.email) && /new Conewise password/.test(m.subject));
+          return Boolean(mail);
+        },
+        { timeout: 20_000, interval: 300 },
+      )
+      .toBe(true);
+    const link = /(https?:\/\/\S+\/reset-password#[\w-]+)/.exec(mail!.text)?.[1];
+    expect(link, mail!.text).toBeDefined();
+    // The link names the public address; open it on this server, fragment and all.
+    const opened = `${baseUrl}${new URL(link!).pathname}${new URL(link!).hash}`;
+    const requested: string[] = [];
+    page.on('request', (request) => requested.push(request.url()));
+    await page.goto(opened);
+    await page.getByLabel('New password').waitFor();
+    // The secret left the address bar at once, and no request carried it in its address.
+    expect(page.url()).toBe(`${baseUrl}/reset-password`);
+    const secret = new URL(link!).hash.slice(1);
+    expect(requested.filter((url) => url.includes(secret))).toEqual([]);
+    await page.getByLabel('New password').fill('reset-by-mail-42');
+    await page.getByTestId('reset-choose').click();
+    await page.getByTestId('reset-done').waitFor();
+    await screenshot(page, 'reset-done');
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+    expect(await me(lead.token)).toBe(401);
+
+    await page.getByRole('link', { name: 'Back to sign in' }).click();
+    await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+    await page.getByLabel('E-mail').fill(lead.user.email);
+    await page.getByLabel('Password').fill('reset-by-mail-42');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
     await page.close();
   });
 });

@@ -79,6 +79,16 @@ export class AuthApi {
     return this.http.post<void>('/api/auth/password', body);
   }
 
+  /** POST /api/auth/password-reset: the same answer whether or not an account uses the address. */
+  requestPasswordReset(email: string): Observable<{ message: string }> {
+    return this.http.post<{ message: string }>('/api/auth/password-reset', { email });
+  }
+
+  /** POST /api/auth/password-reset/confirm: a new password with the e-mailed link's token. */
+  confirmPasswordReset(token: string, password: string): Observable<void> {
+    return this.http.post<void>('/api/auth/password-reset/confirm', { token, password });
+  }
+
   /** GET /api/auth/me. */
   me(): Observable<UserDto> {
     return this.http.get<UserDto>('/api/auth/me');
