@@ -47,13 +47,23 @@ function packageVersion(): string {
   }
 }
 
+/** The shortest JWT_SECRET accepted (256 bits of base64 text is 43 characters; 32 is the floor). */
+export const MIN_JWT_SECRET_LENGTH = 32;
+
 /**
  * The JWT secret: JWT_SECRET from the environment, else one generated on first use and kept in
  * the data folder, so restarts and several instances on one machine accept each other's tokens.
  */
 export function loadJwtSecret(dataDir = DATA_DIR): string {
   const fromEnv = process.env['JWT_SECRET'];
-  if (fromEnv && fromEnv.length >= 16) return fromEnv;
+  if (fromEnv !== undefined && fromEnv !== '') {
+    // A short secret can be guessed offline from any one token: refuse to start rather than warn.
+    if (fromEnv.length < MIN_JWT_SECRET_LENGTH)
+      throw new Error(
+        `JWT_SECRET is ${fromEnv.length} characters long; it needs at least ${MIN_JWT_SECRET_LENGTH} (for example: openssl rand -base64 48).`,
+      );
+    return fromEnv;
+  }
   const file = join(dataDir, 'jwt-secret');
   if (existsSync(file)) {
     const kept = readFileSync(file, 'utf8').trim();

@@ -14,6 +14,7 @@ import { RuleSet } from './rule-set';
 import { RuleSetChange } from './rule-set-change';
 import { ScheduledSession } from './scheduled-session';
 import { SessionPlan } from './session-plan';
+import { SignInThrottle } from './sign-in-throttle';
 import { Team } from './team';
 import { TeamCalendar } from './team-calendar';
 import { User } from './user';
@@ -35,6 +36,7 @@ export {
   RuleSetChange,
   ScheduledSession,
   SessionPlan,
+  SignInThrottle,
   Team,
   TeamCalendar,
   User,
@@ -61,4 +63,5 @@ export const ENTITIES = [
   HelperLink,
   RevokedToken,
   PasswordReset,
+  SignInThrottle,
 ];

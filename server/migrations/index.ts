@@ -11,6 +11,7 @@ import { TeamSchedule1764636000000 } from './1764636000000-team-schedule';
 import { HelperLinks1764637000000 } from './1764637000000-helper-links';
 import { SessionRevocation1764638000000 } from './1764638000000-session-revocation';
 import { PasswordReset1764639000000 } from './1764639000000-password-reset';
+import { SignInThrottle1764640000000 } from './1764640000000-sign-in-throttle';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -27,4 +28,5 @@ export const MIGRATIONS = [
   HelperLinks1764637000000,
   SessionRevocation1764638000000,
   PasswordReset1764639000000,
+  SignInThrottle1764640000000,
 ];

@@ -7,6 +7,7 @@ import { Membership } from '../entities/membership';
 import { User } from '../entities/user';
 import type { AuthContext } from '../http/auth-context';
 import { HttpError, unauthorized } from '../http/problem';
+import { clearFailures, countFailure, refuseIfLocked } from './sign-in-throttle';
 import { signToken } from './token';
 
 /** bcrypt work factor: about 70 ms a hash with bcryptjs on this machine. */
@@ -78,9 +79,14 @@ export class AuthService {
 
   async login(input: { email: string; password: string }): Promise<AuthResponse> {
     const email = normaliseEmail(input.email);
+    await refuseIfLocked(this.dataSource.manager, email);
     const user = await this.dataSource.getRepository(User).findOneBy({ email });
     const ok = await bcrypt.compare(input.password, user?.passwordHash ?? DUMMY_HASH);
-    if (!user || !ok) throw unauthorized('E-mail or password is wrong.');
+    if (!user || !ok) {
+      await countFailure(this.dataSource.manager, email);
+      throw unauthorized('E-mail or password is wrong.');
+    }
+    await clearFailures(this.dataSource.manager, email);
     const membership = await this.dataSource
       .getRepository(Membership)
       .findOne({ where: { userId: user.id }, relations: { club: true } });

@@ -7,6 +7,7 @@ import { User } from '../entities/user';
 import { HttpError } from '../http/problem';
 import { hashPassword, normaliseEmail } from './auth-service';
 import { PASSWORD_RESET_MAIL, type MailQueue } from './mail-queue';
+import { clearFailures } from './sign-in-throttle';
 
 /** How long a reset link works. */
 export const RESET_TTL_MINUTES = 30;
@@ -100,10 +101,12 @@ export class PasswordResetService {
       )) as [{ userId: string }[], number];
       const userId = claimed[0]?.userId;
       if (!userId) throw linkUnusable();
-      await manager.query(
-        `UPDATE app_user SET "passwordHash" = $2, "tokenVersion" = "tokenVersion" + 1 WHERE id = $1`,
+      const [updated] = (await manager.query(
+        `UPDATE app_user SET "passwordHash" = $2, "tokenVersion" = "tokenVersion" + 1 WHERE id = $1 RETURNING email`,
         [userId, passwordHash],
-      );
+      )) as [{ email: string }[], number];
+      // Whoever was guessing the old password no longer keeps the owner locked out.
+      if (updated[0]) await clearFailures(manager, updated[0].email);
       await manager.query(
         `UPDATE password_reset SET "usedAt" = now() WHERE "userId" = $1 AND "usedAt" IS NULL`,
         [userId],
