@@ -20,9 +20,15 @@ export interface AppDeps {
   mail?: MailQueue;
 }
 
-/** A calendar feed's address is its secret: the log keeps the path without it. */
+/** Secrets that can appear in an address (a calendar feed's, an old invitation link's, a token= query) are kept out of the request log. */
 export function withoutSecrets(url: string): string {
-  return url.replace(/\/calendar\/[^/?#]+/, '/calendar/[secret]');
+  return (
+    url
+      .replace(/\/calendar\/[^/?#]+/, '/calendar/[secret]')
+      // Invitation links from before the token moved into the fragment.
+      .replace(/\/invitations\/(?![0-9a-f]{8}-[0-9a-f]{4}-)[A-Za-z0-9_%-]{20,}/, '/invitations/[secret]')
+      .replace(/([?&]token=)[^&#]*/g, '$1[secret]')
+  );
 }
 
 /** JSON bodies above this answer 413. */

@@ -59,7 +59,11 @@ async function main(): Promise<void> {
   const applied = await connectAndMigrate(dataSource);
   cleanups.push(() => dataSource.destroy());
   if (applied.length) log(`[conewise] migrations applied: ${applied.join(', ')}`);
-  await seedDemo(dataSource, log);
+  // The demo accounts share a published password: they go into the private cluster only, or into
+  // an external database when asked for with SEED_DEMO=1.
+  const withDemo = !process.env['DATABASE_URL'] || process.env['SEED_DEMO'] === '1';
+  if (withDemo) await seedDemo(dataSource, log);
+  else log('[conewise] no demo accounts added to DATABASE_URL (SEED_DEMO=1 adds them)');
 
   let fake: FakeSmtp | null = null;
   const useFake = !process.env['SMTP_HOST'];
@@ -93,8 +97,10 @@ async function main(): Promise<void> {
       `  Caught e-mail: ${join(DATA_DIR, 'mail')} (.eml files), list at http://127.0.0.1:${fake.httpPort}/`,
     );
   }
-  log(`  Demo sign-ins (password "${DEMO_PASSWORD}"):`);
-  for (const person of DEMO_PEOPLE) log(`    ${person.role.padEnd(9)} ${person.email}  (${person.name})`);
+  if (withDemo) {
+    log(`  Demo sign-ins (password "${DEMO_PASSWORD}"):`);
+    for (const person of DEMO_PEOPLE) log(`    ${person.role.padEnd(9)} ${person.email}  (${person.name})`);
+  }
   log('  Press Ctrl-C to stop.');
 }
 

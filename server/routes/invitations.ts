@@ -16,14 +16,10 @@ export function invitationsRouter({ dataSource, config, mail, requireAuth }: Api
   const limiter = authRateLimit(config);
   const once = idempotency(dataSource);
 
-  router.get(
-    '/invitations/lookup',
-    limiter,
-    validate({ query: 'invitation-lookup-query' }),
-    async (req, res) => {
-      res.json(await accepting.lookup((req.query as { token: string }).token));
-    },
-  );
+  // The token goes in the body, never in an address a request log would keep.
+  router.post('/invitations/lookup', limiter, validate({ body: 'invitation-lookup' }), async (req, res) => {
+    res.json(await accepting.lookup((req.body as { token: string }).token));
+  });
   router.post('/invitations/accept', limiter, validate({ body: 'invitation-accept' }), async (req, res) => {
     res.status(201).json(await accepting.accept(req.body));
   });

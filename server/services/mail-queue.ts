@@ -3,10 +3,33 @@ import { OutboxMessage, type OutboxAttachment, type OutboxReplyTo } from '../ent
 
 /** The outbox kind of a password reset e-mail. */
 export const PASSWORD_RESET_MAIL = 'password-reset';
+/** The outbox kind of an invitation e-mail. */
+export const INVITATION_MAIL = 'invitation';
 /** Outbox kinds whose body holds a working single-use link: the body is cleared once sent. */
-export const SECRET_BEARING_KINDS: readonly string[] = [PASSWORD_RESET_MAIL];
+export const SECRET_BEARING_KINDS: readonly string[] = [PASSWORD_RESET_MAIL, INVITATION_MAIL];
 /** What such a body reads after sending. */
 export const CLEARED_BODY = '(Cleared once sent: it held a single-use link.)';
+
+/** The outbox's subject column holds this many characters. */
+export const SUBJECT_MAX_LENGTH = 200;
+
+/**
+ * A subject that fits the outbox: a longer one (a long club and person name) is cut at a whole
+ * character, never inside an emoji or accented letter, and ends with "…".
+ */
+export function fitSubject(subject: string, max = SUBJECT_MAX_LENGTH): string {
+  const oneLine = subject.replace(/[\r\n]+/g, ' ');
+  // UTF-16 length, never less than PostgreSQL's count of characters: what fits here fits there.
+  if (oneLine.length <= max) return oneLine;
+  let out = '';
+  for (const { segment: character } of new Intl.Segmenter('en', { granularity: 'grapheme' }).segment(
+    oneLine,
+  )) {
+    if (out.length + character.length > max - 1) break;
+    out += character;
+  }
+  return `${out.trimEnd()}…`;
+}
 
 /** A message to send later through the outbox. */
 export interface QueuedMail {
@@ -36,7 +59,7 @@ export const outboxMailQueue: MailQueue = {
       clubId: mail.clubId,
       kind: mail.kind,
       recipients: mail.recipients,
-      subject: mail.subject,
+      subject: fitSubject(mail.subject),
       replyTo: mail.replyTo ?? null,
       textBody: mail.text,
       htmlBody: mail.html ?? null,

@@ -10,7 +10,7 @@ import { User } from '../entities/user';
 import { badRequest, conflict, notFound } from '../http/problem';
 import { AuthService, emailTaken, hashPassword, normaliseEmail } from './auth-service';
 import type { ClubScope } from './club-scope';
-import type { MailQueue } from './mail-queue';
+import { INVITATION_MAIL, type MailQueue } from './mail-queue';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
@@ -38,7 +38,10 @@ async function teamNames(manager: EntityManager, clubId: string, ids: (string | 
   return new Map(teams.map((team) => [team.id, team.name]));
 }
 
-/** The invitation e-mail: a link to the client's join page with the single-use token. */
+/**
+ * The invitation e-mail: a link to the client's join page with the single-use token in its
+ * fragment (after #), which browsers never send, so no server or proxy log records it.
+ */
 export function invitationMail(
   config: AppConfig,
   clubName: string,
@@ -47,7 +50,7 @@ export function invitationMail(
   token: string,
   teamName: string | null = null,
 ) {
-  const link = `${config.publicUrl.replace(/\/$/, '')}/invitations/${encodeURIComponent(token)}`;
+  const link = `${config.publicUrl.replace(/\/$/, '')}/join#${token}`;
   return {
     subject: `${inviter} invited you to ${clubName} on Conewise`,
     text: [
@@ -164,7 +167,7 @@ export class MemberService {
       );
       await this.mail.enqueue(manager, {
         clubId: this.scope.clubId,
-        kind: 'invitation',
+        kind: INVITATION_MAIL,
         recipients: [email],
         subject: message.subject,
         text: message.text,

@@ -71,7 +71,7 @@ export class PlanCardService {
             kind: 'plan-share',
             recipients: [recipient],
             replyTo: { name: auth.name, address: auth.email },
-            subject: subject.slice(0, 200),
+            subject,
             text,
             attachments: [attachment],
           }),

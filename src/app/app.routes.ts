@@ -108,7 +108,15 @@ export const routes: Routes = [
         loadComponent: () => import('./features/auth/reset-password-page').then((m) => m.ResetPasswordPage),
       },
       {
-        path: 'invitations/:token',
+        // The invitation e-mail's link: /join#<token> (the fragment never reaches a server).
+        path: 'join',
+        title: 'Join your club · Conewise',
+        loadComponent: () =>
+          import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
+      },
+      {
+        // Links e-mailed before the token moved into the fragment.
+        path: 'invitations/:tokenInPath',
         title: 'Join your club · Conewise',
         loadComponent: () =>
           import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),

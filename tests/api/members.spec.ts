@@ -33,9 +33,9 @@ describe('members and invitations', () => {
 
   async function tokenFromOutbox(email: string): Promise<string> {
     const message = await outboxFor(email);
-    const match = /\/invitations\/([\w-]+)/.exec(message.textBody);
+    const match = /\/join#([\w-]+)/.exec(message.textBody);
     if (!match) throw new Error(`no link in ${message.textBody}`);
-    return decodeURIComponent(match[1]!);
+    return match[1]!;
   }
 
   it('the lead invites by e-mail: the outbox holds a mail with a single-use link; accepting joins the club', async () => {
@@ -54,9 +54,11 @@ describe('members and invitations', () => {
     expect(outbox.status).toBe('pending');
     expect(outbox.subject).toContain('Members Club');
     const token = await tokenFromOutbox(email);
-    expect(outbox.textBody).toContain(`${app.config.publicUrl}/invitations/`);
+    expect(outbox.textBody).toContain(`${app.config.publicUrl}/join#`);
+    // The token never sits in a path or query string a request log would keep.
+    expect(outbox.textBody).not.toMatch(/\/invitations\/|[?&]token=/);
 
-    const lookup = await app.api.get(`/api/invitations/lookup?token=${encodeURIComponent(token)}`);
+    const lookup = await app.api.post('/api/invitations/lookup', { token });
     expect(lookup.body).toMatchObject({ email, role: 'coach', clubName: 'Members Club' });
 
     const accepted = await app.api.post('/api/invitations/accept', {
@@ -91,6 +93,28 @@ describe('members and invitations', () => {
     expect(outbox.textBody).toContain('with U11 Kites');
   });
 
+  it('a club and lead with the longest names allowed still invite: the subject is shortened, not refused', async () => {
+    const clubName = `${'Hazelbrook and District Youth Football Club '.repeat(3)}`.slice(0, 118) + ' ⚽';
+    const register = await app.api.post('/api/auth/register', {
+      clubName,
+      name: `${'Alexandra-Christabel '.repeat(6)}`.slice(0, 120),
+      email: uniqueEmail('longname'),
+      password: 'long-names-secret-42',
+    });
+    expect(register.status, register.text).toBe(201);
+    const email = uniqueEmail('invitee');
+    const invited = await app.api.post(
+      '/api/invitations',
+      { email, role: 'coach' },
+      { token: register.body.token },
+    );
+    expect(invited.status, invited.text).toBe(201);
+    const outbox = await outboxFor(email);
+    expect(outbox.subject.length).toBeLessThanOrEqual(200);
+    expect(outbox.subject.endsWith('…')).toBe(true);
+    expect(outbox.textBody).toContain(clubName);
+  });
+
   it('an invited assistant lands on the invitation’s team and sees its plans at once', async () => {
     const squad = await createSquad(app, club.lead.token, 8, 'U9 Plovers');
     const team = { id: squad.teamId };
@@ -102,7 +126,7 @@ describe('members and invitations', () => {
       { token: club.lead.token },
     );
     const token = await tokenFromOutbox(email);
-    const lookup = await app.api.get(`/api/invitations/lookup?token=${encodeURIComponent(token)}`);
+    const lookup = await app.api.post('/api/invitations/lookup', { token });
     expect(lookup.body).toMatchObject({ role: 'assistant', teamName: 'U9 Plovers' });
     const accepted = await app.api.post('/api/invitations/accept', {
       token,
@@ -172,7 +196,7 @@ describe('members and invitations', () => {
       (await app.api.post('/api/invitations/accept', { token, name: 'Late', password: TEST_PASSWORD }))
         .status,
     ).toBe(400);
-    expect((await app.api.get(`/api/invitations/lookup?token=${'z'.repeat(43)}`)).status).toBe(400);
+    expect((await app.api.post('/api/invitations/lookup', { token: 'z'.repeat(43) })).status).toBe(400);
   });
 
   it('changes roles, keeps at least one lead, removes members', async () => {

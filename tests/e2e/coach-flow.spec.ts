@@ -264,7 +264,7 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     await fresh.getByRole('heading', { name: 'Create a club' }).waitFor();
     expect(await captureScreen(fresh, 'create-club')).toEqual([]);
     // An invitation link that was never issued says so in plain words.
-    await fresh.goto(`${baseUrl}/invitations/${'x'.repeat(32)}`);
+    await fresh.goto(`${baseUrl}/join#${'x'.repeat(32)}`);
     await fresh.getByRole('heading', { name: 'Join your club' }).waitFor();
     await fresh.getByText('has been used or has expired').waitFor();
     expect(await captureScreen(fresh, 'accept-invitation')).toEqual([]);

@@ -131,11 +131,13 @@ describe('staff', () => {
       )
       .toBe(true);
     expect(mail!.text).toContain(`as an assistant with ${TEAM}`);
-    const link = /(https?:\/\/\S+\/invitations\/[\w-]+)/.exec(mail!.text)?.[1];
+    const link = /(https?:\/\/\S+\/join#[\w-]+)/.exec(mail!.text)?.[1];
     expect(link).toBeDefined();
 
-    const joining = await phonePage(null, new URL(link!).pathname);
+    const joining = await phonePage(null, new URL(link!).pathname + new URL(link!).hash);
     await joining.getByText(`to join as assistant with ${TEAM}`).waitFor();
+    // The secret left the address bar as soon as the page read it.
+    expect(new URL(joining.url()).hash).toBe('');
     await joining.getByLabel('Your name').fill(name);
     await joining.getByLabel('Password').fill('wren-helps-42');
     await joining.getByRole('button', { name: 'Join' }).click();

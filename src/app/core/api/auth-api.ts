@@ -59,9 +59,9 @@ export class AuthApi {
     return this.http.post<AuthResponse>('/api/invitations/accept', { token, ...body });
   }
 
-  /** GET /api/invitations/lookup: the club, role and e-mail an unused invitation is for. */
+  /** POST /api/invitations/lookup: the club, role and e-mail an unused invitation is for. */
   lookupInvitation(token: string): Observable<InvitationLookup> {
-    return this.http.get<InvitationLookup>('/api/invitations/lookup', { params: { token } });
+    return this.http.post<InvitationLookup>('/api/invitations/lookup', { token });
   }
 
   /** POST /api/auth/sign-out: this session ends on the server too, not only in this browser. */

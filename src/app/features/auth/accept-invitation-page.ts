@@ -1,10 +1,11 @@
-import { ChangeDetectionStrategy, Component, effect, inject, input, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { Router } from '@angular/router';
+import { ActivatedRoute, Router } from '@angular/router';
 import { AuthApi, InvitationLookup } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
@@ -26,8 +27,13 @@ export class AcceptInvitationPage {
   private readonly auth = inject(AuthStore);
   private readonly router = inject(Router);
 
-  /** The single-use token from the link. */
-  readonly token = input.required<string>();
+  /** The single-use token of a link e-mailed before it moved into the fragment (/invitations/:tokenInPath). */
+  readonly tokenInPath = input<string | undefined>(undefined);
+  private readonly route = inject(ActivatedRoute);
+  /** The single-use token from the link's fragment (/join#<token>). */
+  private readonly tokenInFragment = signal<string | null>(null);
+  /** The link's token, wherever it came. */
+  protected readonly token = computed(() => this.tokenInFragment() ?? this.tokenInPath() ?? '');
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', Validators.required],
@@ -40,8 +46,20 @@ export class AcceptInvitationPage {
   protected readonly invitation = signal<InvitationLookup | null>(null);
 
   constructor() {
+    this.route.fragment.pipe(takeUntilDestroyed()).subscribe((fragment) => {
+      if (!fragment) return;
+      this.tokenInFragment.set(fragment);
+      // Out of the address bar and history, so it is not shared or bookmarked by mistake.
+      void this.router.navigate([], { relativeTo: this.route, replaceUrl: true });
+    });
     effect(() => {
-      this.authApi.lookupInvitation(this.token()).subscribe({
+      const token = this.token();
+      if (!token) {
+        this.error.set('This invitation link is not complete. Open it again from the e-mail, whole.');
+        return;
+      }
+      this.error.set(null);
+      this.authApi.lookupInvitation(token).subscribe({
         next: (found) => this.invitation.set(found),
         error: () =>
           this.error.set(
