@@ -58,7 +58,7 @@ describe('ending sessions from the account menu (phone)', () => {
     await page.getByLabel('New password').fill('second-secret-42');
     await page.getByTestId('change-password').click();
     await expect
-      .poll(() => page.locator('mat-dialog-container').textContent())
+      .poll(() => page.locator('mat-dialog-container').textContent(), { timeout: 15_000 })
       .toContain('Current password is not your current password.');
     expect(await me(otherDevice.token)).toBe(200);
 
@@ -96,7 +96,7 @@ describe('ending sessions from the account menu (phone)', () => {
     await page.getByRole('button', { name: 'Account menu' }).click();
     await page.getByTestId('menu-sign-out').click();
     await expect
-      .poll(() => page.getByTestId('unsent-warning').textContent())
+      .poll(() => page.getByTestId('unsent-warning').textContent(), { timeout: 15_000 })
       .toContain('1 pitch-side change has not reached the server yet');
     await page.locator('.mat-mdc-menu-panel').waitFor({ state: 'detached' });
     await screenshot(page, 'sign-out-unsent');
@@ -123,7 +123,7 @@ describe('ending sessions from the account menu (phone)', () => {
     await page.getByLabel('E-mail').fill(lead.user.email);
     await page.getByTestId('reset-ask').click();
     await expect
-      .poll(() => page.getByTestId('reset-asked').textContent())
+      .poll(() => page.getByTestId('reset-asked').textContent(), { timeout: 15_000 })
       .toContain('If an account uses this address');
     await screenshot(page, 'reset-asked');
 
