@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AuthResponse } from '../../shared/types/api';
 import {
   registerClub,
-  startTestApp,
+  startTwoInstances,
   TEST_PASSWORD,
   type SignedIn,
   type TestApp,
@@ -17,15 +17,12 @@ import {
 describe('sessions: sign out, sign out everywhere, change password', () => {
   let app: TestApp;
   let second: TestApp;
+  let instances: Awaited<ReturnType<typeof startTwoInstances>>;
   beforeAll(async () => {
-    app = await startTestApp();
-    // A second instance with the same secret, as behind a load balancer.
-    second = await startTestApp({ jwtSecret: app.config.jwtSecret });
+    instances = await startTwoInstances();
+    ({ app, second } = instances);
   });
-  afterAll(async () => {
-    await second.close();
-    await app.close();
-  });
+  afterAll(() => instances.close());
 
   const signIn = async (lead: SignedIn, password = TEST_PASSWORD): Promise<string> => {
     const response = await app.api.post('/api/auth/login', { email: lead.user.email, password });

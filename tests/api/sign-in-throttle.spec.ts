@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { LOCK_MINUTES, MAX_FAILURES } from '../../server/services/sign-in-throttle';
 import {
   registerClub,
-  startTestApp,
+  startTwoInstances,
   TEST_PASSWORD,
   uniqueEmail,
   type TestApp,
@@ -17,14 +17,12 @@ import {
 describe('sign-in throttle per account, across instances', () => {
   let app: TestApp;
   let second: TestApp;
+  let instances: Awaited<ReturnType<typeof startTwoInstances>>;
   beforeAll(async () => {
-    app = await startTestApp();
-    second = await startTestApp({ jwtSecret: app.config.jwtSecret });
+    instances = await startTwoInstances();
+    ({ app, second } = instances);
   });
-  afterAll(async () => {
-    await second.close();
-    await app.close();
-  });
+  afterAll(() => instances.close());
 
   const login = (on: TestApp, email: string, password: string) =>
     on.api.post('/api/auth/login', { email, password });

@@ -60,6 +60,27 @@ export async function startTestApp(
   };
 }
 
+/**
+ * Two instances of the app on the test database with one JWT secret, as behind a load balancer;
+ * close() stops both.
+ */
+export async function startTwoInstances(): Promise<{
+  app: TestApp;
+  second: TestApp;
+  close(): Promise<void>;
+}> {
+  const app = await startTestApp();
+  const second = await startTestApp({ jwtSecret: app.config.jwtSecret });
+  return {
+    app,
+    second,
+    async close() {
+      await second.close();
+      await app.close();
+    },
+  };
+}
+
 export function uniqueEmail(label = 'user'): string {
   return `${label}-${randomUUID().slice(0, 8)}@example.org`;
 }
