@@ -11,6 +11,8 @@
 
 /** Screens a coach needs at the pitch with no signal, by their source file. */
 export const OFFLINE_SCREENS = [
+  // The signed-in frame around the plan page, and what its account menu opens (signing out).
+  'src/app/core/layout/shell.ts',
   'src/app/features/plans/plan-page.ts',
   'src/app/features/pitch-side/pitch-side-page.ts',
   // The icons, loaded on first use by the icon registry (src/app/core/icons/provide-icons.ts).

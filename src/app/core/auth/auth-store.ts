@@ -42,6 +42,11 @@ export class AuthStore {
   }
 }
 
+/** Whether this device keeps a session (read before the app starts, to fetch the screen's code). */
+export function hasStoredSession(): boolean {
+  return readStoredSession() !== null;
+}
+
 function readStoredSession(): AuthResponse | null {
   try {
     const raw = globalThis.localStorage?.getItem(STORAGE_KEY);

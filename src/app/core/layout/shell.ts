@@ -1,6 +1,5 @@
 import { DOCUMENT } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, viewChild } from '@angular/core';
-import { MatDialog } from '@angular/material/dialog';
+import { ChangeDetectionStrategy, Component, computed, inject, Injector, viewChild } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatMenuModule } from '@angular/material/menu';
 import { MatSidenav, MatSidenavModule } from '@angular/material/sidenav';
@@ -9,9 +8,8 @@ import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { AuthApi } from '../api/auth-api';
 import { AuthStore } from '../auth/auth-store';
-import { ChangePasswordDialog } from '../auth/change-password-dialog';
 import { forgetDeviceData, unsentPitchSideChanges } from '../auth/device-data';
-import { SignOutDialog, type SignOutDialogData } from '../auth/sign-out-dialog';
+import type { SignOutDialogData } from '../auth/sign-out-dialog';
 import { ICONS } from '../icons/shipped-icon';
 import { Brand } from './brand';
 import { mediaMatches, PHONE_WIDTH_QUERY } from './media-query';
@@ -40,7 +38,7 @@ import { NAV_ITEMS } from './nav-items';
 })
 export class Shell {
   private readonly document = inject(DOCUMENT);
-  private readonly dialog = inject(MatDialog);
+  private readonly injector = inject(Injector);
   private readonly authApi = inject(AuthApi);
   protected readonly auth = inject(AuthStore);
   private readonly drawer = viewChild(MatSidenav);
@@ -57,8 +55,8 @@ export class Shell {
     if (this.compact()) void this.drawer()?.close();
   }
 
-  protected changePassword(): void {
-    this.dialog.open(ChangePasswordDialog, { width: '420px', maxWidth: '95vw' });
+  protected async changePassword(): Promise<void> {
+    (await this.accountDialogs()).changePassword();
   }
 
   /**
@@ -66,18 +64,20 @@ export class Shell {
    * cleared and the app restarts on the sign-in page, so nothing of this person stays in memory
    * for whoever picks up a shared club tablet next.
    */
-  protected signOut(everywhere = false): void {
+  protected async signOut(everywhere = false): Promise<void> {
     const data: SignOutDialogData = { everywhere, unsent: unsentPitchSideChanges() };
     if (!everywhere && data.unsent === 0) {
-      void this.leave(false);
+      await this.leave(false);
       return;
     }
-    this.dialog
-      .open<SignOutDialog, SignOutDialogData, boolean>(SignOutDialog, { data, maxWidth: '95vw' })
-      .afterClosed()
-      .subscribe((confirmed) => {
-        if (confirmed) void this.leave(everywhere);
-      });
+    (await this.accountDialogs()).confirmSignOut(data).subscribe((confirmed) => {
+      if (confirmed) void this.leave(everywhere);
+    });
+  }
+
+  private async accountDialogs() {
+    const { AccountDialogs } = await import('../auth/account-dialogs');
+    return this.injector.get(AccountDialogs);
   }
 
   private async leave(endedOnServer: boolean): Promise<void> {
