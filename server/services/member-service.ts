@@ -93,40 +93,57 @@ export class MemberService {
   }
 
   /** Members are addressed by user id; another club's member answers 404. */
-  private async membership(userId: string): Promise<Membership> {
+  private async membership(manager: EntityManager, userId: string): Promise<Membership> {
     const row = UUID.test(userId)
-      ? await this.scope.manager.getRepository(Membership).findOneBy(this.scope.where<Membership>({ userId }))
+      ? await manager.getRepository(Membership).findOneBy(this.scope.where<Membership>({ userId }))
       : null;
     if (!row) throw notFound('member');
     return row;
   }
 
-  private async leadCount(): Promise<number> {
-    return this.scope.manager.getRepository(Membership).countBy({ clubId: this.scope.clubId, role: 'lead' });
+  /**
+   * Runs a change to the club's memberships in one transaction that first locks the club's row,
+   * so two leads demoting or removing each other at once take turns: the second one reads the
+   * lead count after the first has committed, and the club never ends up without a lead.
+   * FOR NO KEY UPDATE still lets other requests add rows that point at the club.
+   */
+  private withMembersLocked<T>(work: (manager: EntityManager) => Promise<T>): Promise<T> {
+    return this.scope.manager.transaction(async (manager) => {
+      await manager.query('SELECT id FROM club WHERE id = $1 FOR NO KEY UPDATE', [this.scope.clubId]);
+      return work(manager);
+    });
+  }
+
+  private async leadCount(manager: EntityManager): Promise<number> {
+    return manager.getRepository(Membership).countBy({ clubId: this.scope.clubId, role: 'lead' });
   }
 
   async changeRole(userId: string, role: Role): Promise<MemberDto> {
-    const membership = await this.membership(userId);
-    if (membership.role === 'lead' && role !== 'lead' && (await this.leadCount()) <= 1) {
-      throw conflict(
-        `${this.scope.auth.clubName} needs at least one lead. Make someone else lead first, then change this role.`,
-      );
-    }
-    membership.role = role;
-    await this.scope.manager.getRepository(Membership).save(membership);
+    await this.withMembersLocked(async (manager) => {
+      const membership = await this.membership(manager, userId);
+      if (membership.role === 'lead' && role !== 'lead' && (await this.leadCount(manager)) <= 1) {
+        throw conflict(
+          `${this.scope.auth.clubName} needs at least one lead. Make someone else lead first, then change this role.`,
+        );
+      }
+      await manager.getRepository(Membership).update({ id: membership.id }, { role });
+    });
     const [dto] = (await this.list()).filter((m) => m.userId === userId);
-    return dto!;
+    if (!dto) throw notFound('member');
+    return dto;
   }
 
   async remove(userId: string): Promise<void> {
-    const membership = await this.membership(userId);
-    if (membership.userId === this.scope.auth.userId) throw conflict('You cannot remove yourself.');
-    if (membership.role === 'lead' && (await this.leadCount()) <= 1)
-      throw conflict(
-        `${this.scope.auth.clubName} needs at least one lead. Make someone else lead first, then remove this member.`,
-      );
-    // A user belongs to one club, so leaving it removes the account; their plans stay.
-    await this.scope.manager.getRepository(User).delete({ id: membership.userId });
+    await this.withMembersLocked(async (manager) => {
+      const membership = await this.membership(manager, userId);
+      if (membership.userId === this.scope.auth.userId) throw conflict('You cannot remove yourself.');
+      if (membership.role === 'lead' && (await this.leadCount(manager)) <= 1)
+        throw conflict(
+          `${this.scope.auth.clubName} needs at least one lead. Make someone else lead first, then remove this member.`,
+        );
+      // A user belongs to one club, so leaving it removes the account; their plans stay.
+      await manager.getRepository(User).delete({ id: membership.userId });
+    });
   }
 
   async invitations(): Promise<InvitationDto[]> {
