@@ -9,6 +9,7 @@ import { Membership } from './membership';
 import { OutboxMessage } from './outbox-message';
 import { PasswordReset } from './password-reset';
 import { Player } from './player';
+import { RateLimitHit } from './rate-limit-hit';
 import { RevokedToken } from './revoked-token';
 import { RuleSet } from './rule-set';
 import { RuleSetChange } from './rule-set-change';
@@ -31,6 +32,7 @@ export {
   OutboxMessage,
   PasswordReset,
   Player,
+  RateLimitHit,
   RevokedToken,
   RuleSet,
   RuleSetChange,
@@ -64,4 +66,5 @@ export const ENTITIES = [
   RevokedToken,
   PasswordReset,
   SignInThrottle,
+  RateLimitHit,
 ];

@@ -1,27 +1,41 @@
 import type { RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
+import type { DataSource } from 'typeorm';
 import type { AppConfig } from '../config';
+import { PostgresRateLimitStore } from '../db/postgres-rate-limit-store';
 import { HttpError } from '../http/problem';
 
 /**
- * Limits password and token guessing per IP on the public auth routes (429 problem).
- * Counters live in this instance's memory: behind a load balancer each instance counts its own,
- * which still bounds guessing to instances × limit.
+ * Limits password and token guessing per IP on the public auth routes (429 problem with
+ * Retry-After). Counters live in PostgreSQL, so behind a load balancer every instance adds to
+ * the same count and the limit holds for the whole deployment. `name` keeps each limiter's count
+ * apart (e.g. "sign-in", "invitation").
  */
-export function authRateLimit(config: AppConfig): RequestHandler {
-  return publicRateLimit(config, 'Too many sign-in attempts from here. Wait a few minutes.');
+export function authRateLimit(config: AppConfig, dataSource: DataSource, name: string): RequestHandler {
+  return publicRateLimit(
+    config,
+    dataSource,
+    name,
+    'Too many sign-in attempts from here. Wait a few minutes.',
+  );
 }
 
 /**
  * The same per-IP limit for any public route that needs no sign-in (calendar feeds, helper links),
- * with its own counter and message.
+ * with its own counter (`name`) and message.
  */
-export function publicRateLimit(config: AppConfig, message: string): RequestHandler {
+export function publicRateLimit(
+  config: AppConfig,
+  dataSource: DataSource,
+  name: string,
+  message: string,
+): RequestHandler {
   return rateLimit({
     windowMs: config.authRateLimit.windowMs,
     limit: config.authRateLimit.max,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    store: new PostgresRateLimitStore(dataSource, name),
     handler: (_req, _res, next) => next(new HttpError(429, 'Too many requests', message)),
   });
 }

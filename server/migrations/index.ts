@@ -12,6 +12,7 @@ import { HelperLinks1764637000000 } from './1764637000000-helper-links';
 import { SessionRevocation1764638000000 } from './1764638000000-session-revocation';
 import { PasswordReset1764639000000 } from './1764639000000-password-reset';
 import { SignInThrottle1764640000000 } from './1764640000000-sign-in-throttle';
+import { RateLimitHits1764641000000 } from './1764641000000-rate-limit-hits';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -29,4 +30,5 @@ export const MIGRATIONS = [
   SessionRevocation1764638000000,
   PasswordReset1764639000000,
   SignInThrottle1764640000000,
+  RateLimitHits1764641000000,
 ];

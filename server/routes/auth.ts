@@ -15,7 +15,7 @@ import type { ApiDeps } from './api-deps';
 export function authRouter(deps: ApiDeps): Router {
   const router = Router();
   const service = new AuthService(deps.dataSource, deps.config);
-  const limiter = authRateLimit(deps.config);
+  const limiter = authRateLimit(deps.config, deps.dataSource, 'sign-in');
   const resets = new PasswordResetService(deps.dataSource, deps.config, deps.mail);
 
   router.post('/auth/register', limiter, validate({ body: 'auth-register' }), async (req, res) => {

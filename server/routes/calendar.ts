@@ -13,7 +13,12 @@ import { scopeOf } from './scoped';
 export function calendarRouter({ dataSource, config, requireAuth }: ApiDeps): Router {
   const router = Router();
   const id = validate({ params: 'id-param' });
-  const limiter = publicRateLimit(config, 'Too many calendar requests from here. Wait a few minutes.');
+  const limiter = publicRateLimit(
+    config,
+    dataSource,
+    'calendar',
+    'Too many calendar requests from here. Wait a few minutes.',
+  );
   const service = (req: Parameters<typeof scopeOf>[0]) => new CalendarService(scopeOf(req, dataSource));
 
   router.get('/teams/:id/calendar', requireAuth, id, async (req, res) => {

@@ -16,6 +16,8 @@ export function helperLinksRouter({ dataSource, config, requireAuth }: ApiDeps):
   const id = validate({ params: 'id-param' });
   const limiter = publicRateLimit(
     config,
+    dataSource,
+    'helper-view',
     'Too many tries from here. Wait a few minutes and open the link again.',
   );
 

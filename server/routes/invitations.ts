@@ -13,7 +13,7 @@ export function invitationsRouter({ dataSource, config, mail, requireAuth }: Api
   const members = (req: Parameters<typeof scopeOf>[0]) =>
     new MemberService(scopeOf(req, dataSource), config, mail);
   const accepting = new InvitationAcceptService(dataSource, config);
-  const limiter = authRateLimit(config);
+  const limiter = authRateLimit(config, dataSource, 'invitation');
   const once = idempotency(dataSource);
 
   // The token goes in the body, never in an address a request log would keep.

@@ -46,6 +46,9 @@ export async function startTestApp(
 ): Promise<TestApp> {
   const dataSource = createDataSource({ url: databaseUrl, poolSize: 5 });
   await dataSource.initialize();
+  // The per-client limits count in the database, shared by every app on it: a test that sets its
+  // own limit starts from a fresh count, as a newly started deployment would.
+  if (overrides.authRateLimit) await dataSource.query('DELETE FROM rate_limit_hit');
   const config = testConfig(overrides);
   const http = await startHttpServer({ dataSource, config, port: 0, logger: pino({ level: 'silent' }) });
   return {
@@ -61,16 +64,16 @@ export async function startTestApp(
 }
 
 /**
- * Two instances of the app on the test database with one JWT secret, as behind a load balancer;
- * close() stops both.
+ * Two instances of the app on the test database with one JWT secret (and the same overrides), as
+ * behind a load balancer; close() stops both.
  */
-export async function startTwoInstances(): Promise<{
+export async function startTwoInstances(overrides: Partial<AppConfig> = {}): Promise<{
   app: TestApp;
   second: TestApp;
   close(): Promise<void>;
 }> {
-  const app = await startTestApp();
-  const second = await startTestApp({ jwtSecret: app.config.jwtSecret });
+  const app = await startTestApp(overrides);
+  const second = await startTestApp({ ...overrides, jwtSecret: app.config.jwtSecret });
   return {
     app,
     second,
