@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { authRateLimit } from '../middleware/rate-limit';
 import { idempotency } from '../middleware/idempotency';
+import { refuseCommonPassword } from '../middleware/new-password';
 import { requireRole } from '../middleware/require-role';
 import { validate } from '../middleware/validate';
 import { InvitationAcceptService, MemberService } from '../services/member-service';
@@ -20,9 +21,15 @@ export function invitationsRouter({ dataSource, config, mail, requireAuth }: Api
   router.post('/invitations/lookup', limiter, validate({ body: 'invitation-lookup' }), async (req, res) => {
     res.json(await accepting.lookup((req.body as { token: string }).token));
   });
-  router.post('/invitations/accept', limiter, validate({ body: 'invitation-accept' }), async (req, res) => {
-    res.status(201).json(await accepting.accept(req.body));
-  });
+  router.post(
+    '/invitations/accept',
+    limiter,
+    validate({ body: 'invitation-accept' }),
+    refuseCommonPassword('password'),
+    async (req, res) => {
+      res.status(201).json(await accepting.accept(req.body));
+    },
+  );
   router.get('/invitations', requireAuth, requireRole('lead'), async (req, res) => {
     res.json(await members(req).invitations());
   });

@@ -38,7 +38,7 @@ describe('errors as problems', () => {
       clubName: 'x'.repeat(300 * 1024),
       name: 'N',
       email: 'big@example.org',
-      password: 'longenough',
+      password: 'long-enough-secret',
     });
     expectProblem(response, 413);
   });

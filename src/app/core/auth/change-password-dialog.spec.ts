@@ -3,6 +3,7 @@ import { HttpTestingController, provideHttpClientTesting } from '@angular/common
 import { TestBed } from '@angular/core/testing';
 import { MatDialogRef } from '@angular/material/dialog';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
+import { MIN_PASSWORD_LENGTH } from '../../../../shared/types/password-rules';
 import { AuthStore } from './auth-store';
 import { ChangePasswordDialog } from './change-password-dialog';
 
@@ -48,8 +49,11 @@ describe('ChangePasswordDialog', () => {
 
   it('checks the fields before sending: a short or unchanged new password is said under its field', () => {
     const { el, type, http } = open();
-    type('old-secret-1', 'short');
-    expect(el.textContent).toContain('New password needs at least 8 characters.');
+    // OWASP ASVS 4.0 2.1.1: at least 12 characters; one fewer is refused before anything is sent.
+    expect(MIN_PASSWORD_LENGTH).toBe(12);
+    expect(el.textContent).toContain('At least 12 characters, and not one of the most common passwords.');
+    type('old-secret-1', 'x'.repeat(MIN_PASSWORD_LENGTH - 1));
+    expect(el.textContent).toContain('New password needs at least 12 characters.');
     type('old-secret-1', 'old-secret-1');
     expect(el.textContent).toContain('The new password must differ from the current one.');
     http.expectNone('/api/auth/password');
@@ -67,6 +71,23 @@ describe('ChangePasswordDialog', () => {
     );
     fixture.detectChanges();
     expect(el.textContent).toContain('Current password is not your current password.');
+    expect(auth.token()).toBe('old-token');
+  });
+
+  it('shows the server’s reason for refusing a common password under the new password, as it is', () => {
+    const { el, type, http, auth, fixture } = open();
+    type('old-secret-1', 'password1234');
+    const reason =
+      'This password is one of the most commonly used ones, so it is easy to guess. Choose another.';
+    http
+      .expectOne('/api/auth/password')
+      .flush(
+        { title: 'Invalid request', errors: [{ field: 'newPassword', message: reason }] },
+        { status: 400, statusText: 'Bad Request' },
+      );
+    fixture.detectChanges();
+    const errors = Array.from(el.querySelectorAll('mat-error'), (e) => e.textContent?.trim());
+    expect(errors).toContain(reason);
     expect(auth.token()).toBe('old-token');
   });
 

@@ -8,10 +8,8 @@ import { switchMap } from 'rxjs';
 import { AuthApi } from '../api/auth-api';
 import { applyFieldErrors, controlMessage } from '../forms/form-errors';
 import { problemFieldErrors, problemMessage } from '../http/problem-message';
+import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
 import { AuthStore } from './auth-store';
-
-/** The shortest new password (common.schema.json's password). */
-export const MIN_PASSWORD_LENGTH = 8;
 
 const LABELS = { currentPassword: 'Current password', newPassword: 'New password' } as const;
 
@@ -49,7 +47,7 @@ const LABELS = { currentPassword: 'Current password', newPassword: 'New password
           <mat-form-field appearance="outline">
             <mat-label>{{ labels.newPassword }}</mat-label>
             <input matInput type="password" formControlName="newPassword" autocomplete="new-password" />
-            <mat-hint>At least {{ minLength }} characters. Other devices will be signed out.</mat-hint>
+            <mat-hint>{{ passwordHint }} Other devices will be signed out.</mat-hint>
             <mat-error>{{ message('newPassword') }}</mat-error>
           </mat-form-field>
           @if (error(); as text) {
@@ -78,7 +76,7 @@ export class ChangePasswordDialog {
   private readonly authApi = inject(AuthApi);
   private readonly auth = inject(AuthStore);
   protected readonly labels = LABELS;
-  protected readonly minLength = MIN_PASSWORD_LENGTH;
+  protected readonly passwordHint = PASSWORD_HINT;
   protected readonly form = inject(NonNullableFormBuilder).group({
     currentPassword: ['', [Validators.required]],
     newPassword: ['', [Validators.required, Validators.minLength(MIN_PASSWORD_LENGTH)]],
@@ -115,11 +113,14 @@ export class ChangePasswordDialog {
         },
         error: (error: unknown) => {
           this.busy.set(false);
-          // The server words a field as a fragment ("is not your current password"): say whose.
+          // The server words most fields as a fragment ("is not your current password"): say
+          // whose. A whole sentence (a common password's reason) is shown as it is.
           const fields = Object.fromEntries(
             Object.entries(problemFieldErrors(error)).map(([field, text]) => [
               field,
-              field in LABELS ? `${LABELS[field as keyof typeof LABELS]} ${text}.` : text,
+              field in LABELS && /^[a-z]/.test(text)
+                ? `${LABELS[field as keyof typeof LABELS]} ${text}.`
+                : text,
             ]),
           );
           const unmatched = applyFieldErrors(this.form, fields);

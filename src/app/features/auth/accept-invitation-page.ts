@@ -11,6 +11,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
 
 const LABELS = { name: 'Your name', password: 'Password' };
 
@@ -37,9 +38,10 @@ export class AcceptInvitationPage {
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', Validators.required],
-    password: ['', [Validators.required, Validators.minLength(8)]],
+    password: ['', [Validators.required, Validators.minLength(MIN_PASSWORD_LENGTH)]],
   });
   protected readonly labels = LABELS;
+  protected readonly passwordHint = PASSWORD_HINT;
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
   protected readonly message = controlMessage;

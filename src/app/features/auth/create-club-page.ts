@@ -10,6 +10,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
 
 const LABELS = { clubName: 'Club name', name: 'Your name', email: 'E-mail', password: 'Password' };
 
@@ -37,9 +38,10 @@ export class CreateClubPage {
     clubName: ['', Validators.required],
     name: ['', Validators.required],
     email: ['', [Validators.required, Validators.email]],
-    password: ['', [Validators.required, Validators.minLength(8)]],
+    password: ['', [Validators.required, Validators.minLength(MIN_PASSWORD_LENGTH)]],
   });
   protected readonly labels = LABELS;
+  protected readonly passwordHint = PASSWORD_HINT;
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
   protected readonly message = controlMessage;

@@ -8,9 +8,9 @@ import { MatInputModule } from '@angular/material/input';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import type { Observable } from 'rxjs';
 import { AuthApi } from '../../core/api/auth-api';
-import { MIN_PASSWORD_LENGTH } from '../../core/auth/change-password-dialog';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
 
 const LABELS = { email: 'E-mail', password: 'New password' } as const;
 
@@ -42,7 +42,7 @@ export class ResetPasswordPage {
   /** The e-mailed link's token, or null when the page was opened to ask for a link. */
   protected readonly token = signal<string | null>(null);
   protected readonly labels = LABELS;
-  protected readonly minLength = MIN_PASSWORD_LENGTH;
+  protected readonly passwordHint = PASSWORD_HINT;
   protected readonly askForm = this.formBuilder.group({
     email: ['', [Validators.required, Validators.email]],
   });
