@@ -10,6 +10,27 @@ export const MAX_IMPORT_ROWS = 60;
 /** Longest stored name, counted in characters as the request schema counts them. */
 const MAX_NAME_LENGTH = 40;
 
+/**
+ * Most lines under the heading a preview reads: a longer file is read no further, so a large
+ * upload costs no more time than this many lines (one file adds at most MAX_IMPORT_ROWS anyway).
+ */
+export const MAX_PREVIEW_LINES = 200;
+
+/** Most problems a preview lists one by one; the rest are summed up in one line. */
+export const MAX_PREVIEW_ERRORS = 50;
+
+/** Longest name cell worth shortening: anything longer is refused at once. */
+const MAX_NAME_CELL = 200;
+
+/** Most characters of a cell quoted back in a message. */
+const MAX_QUOTED = 40;
+
+/** A cell as quoted back to the coach: long ones shortened, so an answer stays small. */
+function quoted(cell: string): string {
+  const chars = [...cell.slice(0, MAX_QUOTED * 2)];
+  return chars.length > MAX_QUOTED ? `${chars.slice(0, MAX_QUOTED).join('')}…` : cell;
+}
+
 // Column headings are compared in lower case with anything but letters removed.
 const NAME_HEADERS = ['name', 'displayname', 'player', 'playername', 'fullname', 'child'];
 const FIRST_HEADERS = ['firstname', 'givenname', 'forename'];
@@ -107,23 +128,57 @@ interface FileLine {
   cells: string[];
 }
 
-/** The file's records with the line each starts on (the file's own numbering: the first line is 1). */
-function readLines(text: string): { lines: FileLine[]; delimiter: string } {
-  const sourceLines = text.split(/\r\n|\n|\r/);
-  let offset = 0;
+/**
+ * The text of line `n` (from 1) of `body`, or undefined past its end. Asked for lines in rising
+ * order, it walks the body once, and only as far as it is asked.
+ */
+function lineWalker(body: string): (n: number) => string | undefined {
+  let line = 1;
+  let start = 0;
+  return (n) => {
+    while (line < n) {
+      const end = body.indexOf('\n', start);
+      if (end === -1) return undefined;
+      start = end + 1;
+      line++;
+    }
+    const end = body.indexOf('\n', start);
+    return body.slice(start, end === -1 ? undefined : end);
+  };
+}
+
+/**
+ * The file's records with the line each starts on (the file's own numbering: the first line is 1),
+ * at most `maxRecords` of them: the parser stops there and reads no further.
+ */
+function readLines(text: string, maxRecords: number): { lines: FileLine[]; delimiter: string } {
+  // Line ends made alike, without splitting the whole file into lines: only the part the
+  // parser reads is ever walked line by line.
+  const normalised = text.replace(/\r\n?/g, '\n');
+  const firstEnd = normalised.indexOf('\n');
+  const firstLine = firstEnd === -1 ? normalised : normalised.slice(0, firstEnd);
   // Some spreadsheets write "sep=;" above the header to name the delimiter.
-  const sep = /^sep=(.)$/i.exec(sourceLines[0]?.trim() ?? '');
-  if (sep) offset = 1;
-  const body = sourceLines.slice(offset).join('\n');
-  const headerLine = sourceLines.slice(offset).find((l) => l.trim() !== '') ?? '';
+  const sep = /^sep=(.)$/i.exec(firstLine.trim());
+  const offset = sep ? 1 : 0;
+  const body = !sep ? normalised : firstEnd === -1 ? '' : normalised.slice(firstEnd + 1);
+  const headerLines = lineWalker(body);
+  let headerLine = '';
+  for (let n = 1; ; n++) {
+    const line = headerLines(n);
+    if (line === undefined) break;
+    if (line.trim() !== '') {
+      headerLine = line;
+      break;
+    }
+  }
   const delimiter = sep?.[1] ?? detectDelimiter(headerLine);
 
   // Where the next record starts: after the previous one's last line, past blank lines.
+  const bodyLines = lineWalker(body);
   let previousEnd = 0;
   const nextStart = () => {
     let line = previousEnd + 1;
-    while (line <= sourceLines.length - offset && (sourceLines[line - 1 + offset] ?? '').trim() === '')
-      line++;
+    for (let text = bodyLines(line); text !== undefined && text.trim() === ''; text = bodyLines(line)) line++;
     return line;
   };
   const lines: FileLine[] = [];
@@ -134,6 +189,7 @@ function readLines(text: string): { lines: FileLine[]; delimiter: string } {
       relax_quotes: true,
       skip_empty_lines: true,
       trim: true,
+      to: maxRecords,
       on_record: (record: string[], context: { lines: number }) => {
         lines.push({ line: nextStart() + offset, cells: record });
         previousEnd = context.lines;
@@ -189,9 +245,12 @@ export function previewRoster(
   existingNames: string[],
   sign: (rows: CsvPreviewRow[]) => string,
 ): CsvPreview {
-  const { lines } = readLines(text);
+  // The heading, MAX_PREVIEW_LINES lines, and one more that tells whether the file goes on.
+  const { lines } = readLines(text, MAX_PREVIEW_LINES + 2);
   if (!lines.length) throw fileError('The file has no lines with names.');
-  const [header, ...records] = lines;
+  const [header, ...read] = lines;
+  const records = read.slice(0, MAX_PREVIEW_LINES);
+  const stoppedAt = read[MAX_PREVIEW_LINES]?.line;
   const columns = findColumns(header!.cells);
   if (columns.name < 0 && columns.first < 0) {
     throw fileError(
@@ -207,11 +266,26 @@ export function previewRoster(
   const firstLineOf = new Map<string, number>();
   const fullNameLines = new Map<string, number>();
   const leftOut: number[] = [];
+  // Problems past MAX_PREVIEW_ERRORS: counted, and the first one's line kept for the summary.
+  let unlisted = 0;
+  let firstUnlisted = 0;
   for (const { line, cells } of records) {
     if (cells.every((c) => c === '')) continue; // a spreadsheet's empty row
+    const problem = (field: string, message: string) => {
+      if (errors.length < MAX_PREVIEW_ERRORS) errors.push({ row: line, field, message });
+      else if (unlisted++ === 0) firstUnlisted = line;
+    };
+    const nameCells = [columns.name, columns.first, columns.family].filter((i) => i >= 0);
+    if (nameCells.some((i) => (cells[i] ?? '').length > MAX_NAME_CELL)) {
+      // Far too long to be a name however it is shortened: refused before any work on it.
+      problem(
+        'name',
+        `Line ${line}: the name is longer than ${MAX_NAME_LENGTH} letters even when shortened.`,
+      );
+      continue;
+    }
     const raw = fullName(cells, columns);
     const rawKeeper = (columns.keeper >= 0 ? (cells[columns.keeper] ?? '') : '').toLowerCase();
-    const problem = (field: string, message: string) => errors.push({ row: line, field, message });
     if (!raw) {
       problem('name', `Line ${line} has no name.`);
       continue;
@@ -219,14 +293,14 @@ export function previewRoster(
     if (/[@0-9<>]/.test(raw)) {
       problem(
         'name',
-        `Line ${line}: “${raw}” is not just a name. Leave out numbers, e-mail addresses and < >.`,
+        `Line ${line}: “${quoted(raw)}” is not just a name. Leave out numbers, e-mail addresses and < >.`,
       );
       continue;
     }
     if (!YES.includes(rawKeeper) && !NO.includes(rawKeeper)) {
       problem(
         'goalkeeper',
-        `Line ${line}: Goalkeeper says “${rawKeeper}”. Write yes or no, or leave it empty.`,
+        `Line ${line}: Goalkeeper says “${quoted(rawKeeper)}”. Write yes or no, or leave it empty.`,
       );
       continue;
     }
@@ -271,6 +345,23 @@ export function previewRoster(
       row: leftOut[0]!,
       field: 'file',
       message: `${span} left out: one file adds at most ${MAX_IMPORT_ROWS} players.`,
+    });
+  }
+  if (unlisted) {
+    errors.push({
+      row: firstUnlisted,
+      field: 'file',
+      message:
+        unlisted === 1
+          ? `Line ${firstUnlisted} cannot be used either. Fix the lines above and choose the file again to see why.`
+          : `${unlisted} more lines, from line ${firstUnlisted} on, cannot be used either. Fix the lines above and choose the file again to see why.`,
+    });
+  }
+  if (stoppedAt !== undefined) {
+    errors.push({
+      row: stoppedAt,
+      field: 'file',
+      message: `Reading stopped at line ${stoppedAt}: a preview reads at most ${MAX_PREVIEW_LINES} lines under the heading. Put the rest in another file.`,
     });
   }
   return { importId: sign(rows), rows, errors };
