@@ -68,6 +68,7 @@ function engineSources(): GeneratedSource[] {
 /** The API request bodies the client's forms check before sending (src/app/core/forms/api-schemas.ts). */
 const CLIENT_API_SCHEMAS = [
   'auth-login',
+  'auth-me-update',
   'auth-register',
   'invitation-accept',
   'team-create',

@@ -1,38 +1,37 @@
 import { Router } from 'express';
 import { authOf } from '../http/auth-context';
-import { refuseCommonPassword } from '../middleware/new-password';
 import { authRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
+import { AccountService } from '../services/account-service';
 import { AuthService, userDto } from '../services/auth-service';
 import { PasswordResetService, RESET_REQUESTED } from '../services/password-reset-service';
 import type { ApiDeps } from './api-deps';
 
 /**
- * POST /auth/register, POST /auth/login, GET /auth/me; POST /auth/sign-out (this session),
- * POST /auth/sign-out-everywhere (every session of the caller), POST /auth/password (a new
- * password, ending every session); POST /auth/password-reset (202 whether or not the address has
- * an account) and POST /auth/password-reset/confirm (a new password with the e-mailed link).
+ * POST /auth/register, POST /auth/login, GET /auth/me, PATCH /auth/me (the caller's own name);
+ * POST /auth/sign-out (this session), POST /auth/sign-out-everywhere (every session of the
+ * caller), POST /auth/password (a new password, ending every session); POST /auth/password-reset
+ * (202 whether or not the address has an account) and POST /auth/password-reset/confirm (a new
+ * password with the e-mailed link).
  */
 export function authRouter(deps: ApiDeps): Router {
   const router = Router();
   const service = new AuthService(deps.dataSource, deps.config);
-  const limiter = authRateLimit(deps.config, deps.dataSource, 'sign-in');
+  const limiter = authRateLimit(deps.config);
   const resets = new PasswordResetService(deps.dataSource, deps.config, deps.mail);
+  const account = new AccountService(deps.dataSource);
 
-  router.post(
-    '/auth/register',
-    limiter,
-    validate({ body: 'auth-register' }),
-    refuseCommonPassword('password'),
-    async (req, res) => {
-      res.status(201).json(await service.register(req.body));
-    },
-  );
+  router.post('/auth/register', limiter, validate({ body: 'auth-register' }), async (req, res) => {
+    res.status(201).json(await service.register(req.body));
+  });
   router.post('/auth/login', limiter, validate({ body: 'auth-login' }), async (req, res) => {
     res.json(await service.login(req.body));
   });
   router.get('/auth/me', deps.requireAuth, (req, res) => {
     res.json(userDto(authOf(req)));
+  });
+  router.patch('/auth/me', deps.requireAuth, validate({ body: 'auth-me-update' }), async (req, res) => {
+    res.json(await account.changeName(authOf(req), req.body));
   });
   router.post('/auth/sign-out', deps.requireAuth, async (req, res) => {
     await service.signOut(authOf(req));
@@ -47,7 +46,6 @@ export function authRouter(deps: ApiDeps): Router {
     deps.requireAuth,
     limiter,
     validate({ body: 'auth-password-change' }),
-    refuseCommonPassword('newPassword'),
     async (req, res) => {
       await service.changePassword(authOf(req), req.body);
       res.status(204).end();
@@ -66,7 +64,6 @@ export function authRouter(deps: ApiDeps): Router {
     '/auth/password-reset/confirm',
     limiter,
     validate({ body: 'auth-password-reset-confirm' }),
-    refuseCommonPassword('password'),
     async (req, res) => {
       await resets.confirm(req.body);
       res.status(204).end();

@@ -72,6 +72,11 @@ export const routes: Routes = [
         loadComponent: () => import('./features/plans/plan-page').then((m) => m.PlanPage),
       },
       {
+        path: 'account',
+        title: 'Your account · Conewise',
+        loadComponent: () => import('./features/account/account-page').then((m) => m.AccountPage),
+      },
+      {
         path: 'club/rules',
         title: 'Club rules · Conewise',
         canActivate: [roleGuard('lead')],

@@ -135,7 +135,7 @@ describe('staff', () => {
     expect(link).toBeDefined();
 
     const joining = await phonePage(null, new URL(link!).pathname + new URL(link!).hash);
-    await joining.getByText(`to join as assistant with ${TEAM}`).waitFor();
+    await joining.getByText(`to join as an assistant coach with ${TEAM}`).waitFor();
     // The secret left the address bar as soon as the page read it.
     expect(new URL(joining.url()).hash).toBe('');
     await joining.getByLabel('Your name').fill(name);

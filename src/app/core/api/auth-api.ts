@@ -93,4 +93,9 @@ export class AuthApi {
   me(): Observable<UserDto> {
     return this.http.get<UserDto>('/api/auth/me');
   }
+
+  /** PATCH /api/auth/me: the caller's own display name; answers the updated user. */
+  changeName(name: string): Observable<UserDto> {
+    return this.http.patch<UserDto>('/api/auth/me', { name });
+  }
 }

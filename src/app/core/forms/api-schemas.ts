@@ -4,6 +4,7 @@
  */
 export type SchemaName =
   | 'auth-login'
+  | 'auth-me-update'
   | 'auth-register'
   | 'invitation-accept'
   | 'team-create'
@@ -21,6 +22,7 @@ type Json = { default: object };
 
 const loaders: Partial<Record<SchemaName, () => Promise<Json>>> = {
   'auth-login': () => import('../../../../shared/schemas/api/auth-login.schema.json'),
+  'auth-me-update': () => import('../../../../shared/schemas/api/auth-me-update.schema.json'),
   'auth-register': () => import('../../../../shared/schemas/api/auth-register.schema.json'),
   'invitation-accept': () => import('../../../../shared/schemas/api/invitation-accept.schema.json'),
   'team-create': () => import('../../../../shared/schemas/api/team-create.schema.json'),

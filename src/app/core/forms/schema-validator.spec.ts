@@ -4,6 +4,7 @@ import { schemaCheck } from './schema-validator';
 // Record<SchemaName, …> so a new form schema without a precompiled validator fails here.
 const EVERY_SCHEMA: Record<SchemaName, true> = {
   'auth-login': true,
+  'auth-me-update': true,
   'auth-register': true,
   'invitation-accept': true,
   'team-create': true,

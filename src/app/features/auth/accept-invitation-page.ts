@@ -5,20 +5,27 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
-import { ActivatedRoute, Router } from '@angular/router';
+import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { AuthApi, InvitationLookup } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
-import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
+import { ROLE_IN_A_SENTENCE } from '../../core/labels/role-labels';
 
 const LABELS = { name: 'Your name', password: 'Password' };
 
 /** The page an invitation link opens: the invitee sets their name and password and joins. */
 @Component({
   selector: 'cw-accept-invitation-page',
-  imports: [ReactiveFormsModule, MatCardModule, MatFormFieldModule, MatInputModule, MatButtonModule],
+  imports: [
+    ReactiveFormsModule,
+    RouterLink,
+    MatCardModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatButtonModule,
+  ],
   templateUrl: './accept-invitation-page.html',
   styleUrl: './auth-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -38,12 +45,14 @@ export class AcceptInvitationPage {
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', Validators.required],
-    password: ['', [Validators.required, Validators.minLength(MIN_PASSWORD_LENGTH)]],
+    password: ['', [Validators.required, Validators.minLength(8)]],
   });
   protected readonly labels = LABELS;
-  protected readonly passwordHint = PASSWORD_HINT;
   protected readonly error = signal<string | null>(null);
+  /** Why the link cannot be used (incomplete, used or expired): the page then offers no form. */
+  protected readonly linkProblem = signal<string | null>(null);
   protected readonly sending = signal(false);
+  protected readonly roleWords = ROLE_IN_A_SENTENCE;
   protected readonly message = controlMessage;
   protected readonly invitation = signal<InvitationLookup | null>(null);
 
@@ -57,16 +66,13 @@ export class AcceptInvitationPage {
     effect(() => {
       const token = this.token();
       if (!token) {
-        this.error.set('This invitation link is not complete. Open it again from the e-mail, whole.');
+        this.linkProblem.set('This invitation link is not complete. Open it again from the e-mail, whole.');
         return;
       }
-      this.error.set(null);
+      this.linkProblem.set(null);
       this.authApi.lookupInvitation(token).subscribe({
         next: (found) => this.invitation.set(found),
-        error: () =>
-          this.error.set(
-            'This invitation link has been used or has expired. Ask your club lead for a new one.',
-          ),
+        error: () => this.linkProblem.set('This invitation link has been used or has expired.'),
       });
     });
   }
