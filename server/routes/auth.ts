@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { authOf } from '../http/auth-context';
+import { refuseCommonPassword } from '../middleware/new-password';
 import { authRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
 import { AccountService } from '../services/account-service';
@@ -17,13 +18,19 @@ import type { ApiDeps } from './api-deps';
 export function authRouter(deps: ApiDeps): Router {
   const router = Router();
   const service = new AuthService(deps.dataSource, deps.config);
-  const limiter = authRateLimit(deps.config);
+  const limiter = authRateLimit(deps.config, deps.dataSource, 'sign-in');
   const resets = new PasswordResetService(deps.dataSource, deps.config, deps.mail);
   const account = new AccountService(deps.dataSource);
 
-  router.post('/auth/register', limiter, validate({ body: 'auth-register' }), async (req, res) => {
-    res.status(201).json(await service.register(req.body));
-  });
+  router.post(
+    '/auth/register',
+    limiter,
+    validate({ body: 'auth-register' }),
+    refuseCommonPassword('password'),
+    async (req, res) => {
+      res.status(201).json(await service.register(req.body));
+    },
+  );
   router.post('/auth/login', limiter, validate({ body: 'auth-login' }), async (req, res) => {
     res.json(await service.login(req.body));
   });
@@ -46,6 +53,7 @@ export function authRouter(deps: ApiDeps): Router {
     deps.requireAuth,
     limiter,
     validate({ body: 'auth-password-change' }),
+    refuseCommonPassword('newPassword'),
     async (req, res) => {
       await service.changePassword(authOf(req), req.body);
       res.status(204).end();
@@ -64,6 +72,7 @@ export function authRouter(deps: ApiDeps): Router {
     '/auth/password-reset/confirm',
     limiter,
     validate({ body: 'auth-password-reset-confirm' }),
+    refuseCommonPassword('password'),
     async (req, res) => {
       await resets.confirm(req.body);
       res.status(204).end();
