@@ -2,10 +2,11 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
-import { pino, type Logger } from 'pino';
+import type { Logger } from 'pino';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from './config';
+import { createLogger, errorForLog } from './http/app-logger';
 import { clientAssets, clientShell, compressAnswers, noStore } from './middleware/client-files';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { createRequireAuth } from './middleware/require-auth';
@@ -36,7 +37,7 @@ export const JSON_BODY_LIMIT = '256kb';
 
 /** The Express app: API under /api, the built client everywhere else. */
 export function createApp(deps: AppDeps): Express {
-  const logger = deps.logger ?? pino({ level: deps.config.logLevel });
+  const logger = deps.logger ?? createLogger(deps.config.logLevel);
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', deps.config.trustProxy);
@@ -88,6 +89,7 @@ export function createApp(deps: AppDeps): Express {
           url: withoutSecrets(req.url),
         }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+        err: errorForLog,
       },
     }),
   );
