@@ -26,6 +26,12 @@ export interface AppConfig {
   staticDir: string | null;
   /** Invitation tokens expire after this many hours. */
   invitationTtlHours: number;
+  /**
+   * E-mails one club may have Conewise send in any 24 hours (INVITATIONS_PER_DAY,
+   * SHARE_MAILS_PER_DAY): invitations, and plan cards (one per recipient). Enough for a busy
+   * club's week; a stolen or careless account cannot turn the server into a mass mailer.
+   */
+  dailyMailLimits: { invitations: number; shares: number };
   /** pino level; 'silent' in tests. */
   logLevel: string;
   /**
@@ -95,6 +101,10 @@ export function loadConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     publicUrl: process.env['PUBLIC_URL'] ?? `http://127.0.0.1:${port}`,
     staticDir: existsSync(CLIENT_DIST) ? CLIENT_DIST : null,
     invitationTtlHours: intFromEnv('INVITATION_TTL_HOURS', 72),
+    dailyMailLimits: {
+      invitations: intFromEnv('INVITATIONS_PER_DAY', 50),
+      shares: intFromEnv('SHARE_MAILS_PER_DAY', 300),
+    },
     logLevel: process.env['LOG_LEVEL'] ?? 'info',
     trustProxy: trustProxyFromEnv(process.env['TRUST_PROXY']),
     locale: process.env['CLUB_LOCALE'] || 'en-GB',

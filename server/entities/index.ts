@@ -1,5 +1,6 @@
 import { Attendance } from './attendance';
 import { Club } from './club';
+import { EmailVerification } from './email-verification';
 import { Feedback } from './feedback';
 import { IdempotencyRecord } from './idempotency-record';
 import { HelperLink } from './helper-link';
@@ -23,6 +24,7 @@ import { User } from './user';
 export {
   Attendance,
   Club,
+  EmailVerification,
   Feedback,
   IdempotencyRecord,
   HelperLink,
@@ -67,4 +69,5 @@ export const ENTITIES = [
   PasswordReset,
   SignInThrottle,
   RateLimitHit,
+  EmailVerification,
 ];

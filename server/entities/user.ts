@@ -23,6 +23,13 @@ export class User {
   @Column({ type: 'integer', default: 0 })
   tokenVersion!: number;
 
+  /**
+   * When the person showed they read mail at this address (a mailed link opened); null until
+   * then. Unconfirmed accounts cannot send invitations or plans to others.
+   */
+  @Column({ type: 'timestamptz', nullable: true })
+  emailVerifiedAt!: Date | null;
+
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;
 }

@@ -10,6 +10,8 @@ export interface AuthContext {
   role: Role;
   name: string;
   email: string;
+  /** Whether the person confirmed their e-mail address (a mailed link opened). */
+  emailVerified: boolean;
   /** The session token's id and expiry (seconds since 1970), for signing this one session out. */
   token?: { id: string; expiresAt: number };
 }

@@ -5,6 +5,9 @@ export type FieldError = { field: string; message: string; row?: number };
 
 /** An error that becomes an RFC 9457 problem response. Services throw these. */
 export class HttpError extends Error {
+  /** Seconds after which asking again can succeed: sent as Retry-After (with 429 and 503). */
+  retryAfterSeconds?: number;
+
   constructor(
     readonly status: number,
     readonly title: string,
@@ -38,4 +41,10 @@ export const forbidden = (detail = 'Your role does not allow this.') =>
   new HttpError(403, 'Forbidden', detail);
 export const notFound = (what = 'resource') => new HttpError(404, 'Not found', `No such ${what}.`);
 export const conflict = (detail: string) => new HttpError(409, 'Conflict', detail);
+/** 429 with Retry-After: a limit that lifts by itself after `seconds`. */
+export function tooManyRequests(title: string, detail: string, seconds: number): HttpError {
+  const error = new HttpError(429, title, detail);
+  error.retryAfterSeconds = Math.max(1, Math.ceil(seconds));
+  return error;
+}
 export const payloadTooLarge = (detail: string) => new HttpError(413, 'Payload too large', detail);

@@ -63,6 +63,7 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
     return;
   }
   if (problem.status === 401) res.setHeader('WWW-Authenticate', 'Bearer realm="conewise"');
+  if (problem.retryAfterSeconds) res.setHeader('Retry-After', String(problem.retryAfterSeconds));
   res
     .status(problem.status)
     .type(PROBLEM_TYPE)

@@ -115,11 +115,13 @@ export async function loadAuthContext(
     role: Membership['role'];
     userName: string;
     email: string;
+    emailVerified: boolean;
     clubName: string;
   }>(
     dataSource.manager,
     'auth-context',
-    `SELECT m.role, u.name AS "userName", u.email, c.name AS "clubName"
+    `SELECT m.role, u.name AS "userName", u.email, u."emailVerifiedAt" IS NOT NULL AS "emailVerified",
+              c.name AS "clubName"
          FROM membership m
          JOIN app_user u ON u.id = m."userId"
          JOIN club c ON c.id = m."clubId"
@@ -137,6 +139,7 @@ export async function loadAuthContext(
     role: row.role,
     name: row.userName,
     email: row.email,
+    emailVerified: row.emailVerified,
     ...(token.id !== null && token.expiresAt !== null
       ? { token: { id: token.id, expiresAt: token.expiresAt } }
       : {}),

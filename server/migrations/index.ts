@@ -11,6 +11,7 @@ import { TeamSchedule1764636000000 } from './1764636000000-team-schedule';
 import { HelperLinks1764637000000 } from './1764637000000-helper-links';
 import { SessionRevocation1764638000000 } from './1764638000000-session-revocation';
 import { PasswordReset1764639000000 } from './1764639000000-password-reset';
+import { EmailVerification1764642000000 } from './1764642000000-email-verification';
 import { SignInThrottle1764640000000 } from './1764640000000-sign-in-throttle';
 import { RateLimitHits1764641000000 } from './1764641000000-rate-limit-hits';
 
@@ -31,4 +32,5 @@ export const MIGRATIONS = [
   PasswordReset1764639000000,
   SignInThrottle1764640000000,
   RateLimitHits1764641000000,
+  EmailVerification1764642000000,
 ];

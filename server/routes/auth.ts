@@ -5,6 +5,7 @@ import { authRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
 import { AccountService } from '../services/account-service';
 import { AuthService, userDto } from '../services/auth-service';
+import { EmailVerificationService, resendWords } from '../services/email-verification-service';
 import { PasswordResetService, RESET_REQUESTED } from '../services/password-reset-service';
 import type { ApiDeps } from './api-deps';
 
@@ -13,11 +14,13 @@ import type { ApiDeps } from './api-deps';
  * POST /auth/sign-out (this session), POST /auth/sign-out-everywhere (every session of the
  * caller), POST /auth/password (a new password, ending every session); POST /auth/password-reset
  * (202 whether or not the address has an account) and POST /auth/password-reset/confirm (a new
- * password with the e-mailed link).
+ * password with the e-mailed link); POST /auth/email-confirmation (the link mailed to a new
+ * account's address) and POST /auth/email-confirmation/resend (another link, signed in).
  */
 export function authRouter(deps: ApiDeps): Router {
   const router = Router();
-  const service = new AuthService(deps.dataSource, deps.config);
+  const verification = new EmailVerificationService(deps.dataSource, deps.config, deps.mail);
+  const service = new AuthService(deps.dataSource, deps.config, verification);
   const limiter = authRateLimit(deps.config, deps.dataSource, 'sign-in');
   const resets = new PasswordResetService(deps.dataSource, deps.config, deps.mail);
   const account = new AccountService(deps.dataSource);
@@ -59,6 +62,20 @@ export function authRouter(deps: ApiDeps): Router {
       res.status(204).end();
     },
   );
+  router.post(
+    '/auth/email-confirmation',
+    limiter,
+    validate({ body: 'auth-email-confirmation' }),
+    async (req, res) => {
+      await verification.confirm(req.body);
+      res.status(204).end();
+    },
+  );
+  router.post('/auth/email-confirmation/resend', deps.requireAuth, async (req, res) => {
+    const auth = authOf(req);
+    const outcome = await verification.resend(auth);
+    res.status(outcome === 'sent' ? 202 : 200).json({ outcome, message: resendWords(outcome, auth.email) });
+  });
   router.post(
     '/auth/password-reset',
     limiter,

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import { authRateLimit } from '../middleware/rate-limit';
 import { idempotency } from '../middleware/idempotency';
 import { refuseCommonPassword } from '../middleware/new-password';
+import { requireConfirmedEmail } from '../middleware/require-confirmed-email';
 import { requireRole } from '../middleware/require-role';
 import { validate } from '../middleware/validate';
 import { InvitationAcceptService, MemberService } from '../services/member-service';
@@ -37,6 +38,7 @@ export function invitationsRouter({ dataSource, config, mail, requireAuth }: Api
     '/invitations',
     requireAuth,
     requireRole('lead'),
+    requireConfirmedEmail,
     validate({ body: 'invitation-create' }),
     once,
     async (req, res) => {

@@ -3,6 +3,7 @@ import { authOf } from '../http/auth-context';
 import { ifMatchNumber } from '../http/detailed-problem';
 import { badRequest } from '../http/problem';
 import { idempotency } from '../middleware/idempotency';
+import { requireConfirmedEmail } from '../middleware/require-confirmed-email';
 import { requireRole } from '../middleware/require-role';
 import { validate } from '../middleware/validate';
 import type { Paper } from '../pdf';
@@ -70,6 +71,7 @@ export function plansRouter({ dataSource, config, requireAuth, mail }: ApiDeps):
     '/plans/:id/share',
     requireAuth,
     planners,
+    requireConfirmedEmail,
     id,
     validate({ body: 'plan-share' }),
     once,

@@ -144,7 +144,7 @@ export async function seedDemo(
     for (const person of DEMO_PEOPLE) {
       const user = await manager
         .getRepository(User)
-        .save({ email: person.email, name: person.name, passwordHash });
+        .save({ email: person.email, name: person.name, passwordHash, emailVerifiedAt: new Date() });
       await manager.getRepository(Membership).save({ clubId: club.id, userId: user.id, role: person.role });
       users.set(person.email, user);
     }

@@ -7,6 +7,7 @@ import { Membership } from '../entities/membership';
 import { User } from '../entities/user';
 import type { AuthContext } from '../http/auth-context';
 import { HttpError, unauthorized } from '../http/problem';
+import type { EmailVerificationService } from './email-verification-service';
 import { clearFailures, countFailure, refuseIfLocked } from './sign-in-throttle';
 import { signToken } from './token';
 
@@ -26,6 +27,7 @@ export function userDto(auth: AuthContext): UserDto {
     id: auth.userId,
     name: auth.name,
     email: auth.email,
+    emailVerified: auth.emailVerified,
     clubId: auth.clubId,
     clubName: auth.clubName,
     role: auth.role,
@@ -45,9 +47,14 @@ export class AuthService {
   constructor(
     private readonly dataSource: DataSource,
     private readonly config: AppConfig,
+    /** Needed to register (the new address is sent a confirmation link). */
+    private readonly verification?: EmailVerificationService,
   ) {}
 
-  /** Creates a club and its lead, and signs the lead in. */
+  /**
+   * Creates a club and its lead, signs the lead in and mails a link that confirms the address;
+   * until it is opened the lead can plan but not invite anyone or e-mail plans.
+   */
   async register(input: {
     clubName: string;
     name: string;
@@ -57,6 +64,8 @@ export class AuthService {
   }): Promise<AuthResponse> {
     const email = normaliseEmail(input.email);
     const passwordHash = await hashPassword(input.password);
+    const verification = this.verification;
+    if (!verification) throw new Error('AuthService.register needs the e-mail verification service');
     const auth = await this.dataSource.transaction(async (manager) => {
       if (await manager.getRepository(User).existsBy({ email })) throw emailTaken();
       const club = await manager
@@ -64,6 +73,7 @@ export class AuthService {
         .save({ name: input.clubName.trim(), timeZone: knownTimeZone(input.timeZone) });
       const user = await manager.getRepository(User).save({ email, name: input.name.trim(), passwordHash });
       await manager.getRepository(Membership).save({ clubId: club.id, userId: user.id, role: 'lead' });
+      await verification.issue(manager, user, club);
       const context: AuthContext = {
         userId: user.id,
         clubId: club.id,
@@ -71,6 +81,7 @@ export class AuthService {
         role: 'lead',
         name: user.name,
         email,
+        emailVerified: false,
       };
       return context;
     });
@@ -99,6 +110,7 @@ export class AuthService {
         role: membership.role,
         name: user.name,
         email: user.email,
+        emailVerified: user.emailVerifiedAt !== null,
       },
       user.tokenVersion,
     );

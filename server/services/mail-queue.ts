@@ -5,8 +5,14 @@ import { OutboxMessage, type OutboxAttachment, type OutboxReplyTo } from '../ent
 export const PASSWORD_RESET_MAIL = 'password-reset';
 /** The outbox kind of an invitation e-mail. */
 export const INVITATION_MAIL = 'invitation';
+/** The outbox kind of the e-mail that confirms a new account's address. */
+export const EMAIL_VERIFICATION_MAIL = 'email-verification';
 /** Outbox kinds whose body holds a working single-use link: the body is cleared once sent. */
-export const SECRET_BEARING_KINDS: readonly string[] = [PASSWORD_RESET_MAIL, INVITATION_MAIL];
+export const SECRET_BEARING_KINDS: readonly string[] = [
+  PASSWORD_RESET_MAIL,
+  INVITATION_MAIL,
+  EMAIL_VERIFICATION_MAIL,
+];
 /** What such a body reads after sending. */
 export const CLEARED_BODY = '(Cleared once sent: it held a single-use link.)';
 

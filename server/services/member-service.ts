@@ -7,9 +7,10 @@ import { Invitation } from '../entities/invitation';
 import { Membership } from '../entities/membership';
 import { Team } from '../entities/team';
 import { User } from '../entities/user';
-import { badRequest, conflict, notFound } from '../http/problem';
-import { AuthService, emailTaken, hashPassword, normaliseEmail } from './auth-service';
+import { badRequest, conflict, HttpError, notFound } from '../http/problem';
+import { AuthService, hashPassword, normaliseEmail } from './auth-service';
 import type { ClubScope } from './club-scope';
+import { refuseOverDailyLimit } from './daily-mail-limit';
 import { INVITATION_MAIL, type MailQueue } from './mail-queue';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -162,7 +163,22 @@ export class MemberService {
     const email = normaliseEmail(input.email);
     const team = input.teamId ? await this.scope.team(input.teamId) : null;
     return this.scope.manager.transaction(async (manager) => {
-      if (await manager.getRepository(User).existsBy({ email })) throw emailTaken();
+      // Only this club's own members are refused by name (the lead sees them in the list anyway).
+      // An address in use elsewhere is invited like any other, so the answer reveals nothing
+      // about other clubs; its owner learns on the join page that it has an account already.
+      const member = (await manager.query(
+        `SELECT 1 FROM membership m JOIN app_user u ON u.id = m."userId"
+          WHERE u.email = $1 AND m."clubId" = $2`,
+        [email, this.scope.clubId],
+      )) as unknown[];
+      if (member.length > 0) throw alreadyMember(email, this.scope.auth.clubName);
+      await refuseOverDailyLimit(
+        manager,
+        this.scope.clubId,
+        INVITATION_MAIL,
+        1,
+        this.config.dailyMailLimits.invitations,
+      );
       const token = randomBytes(32).toString('base64url');
       const invitation = await manager.getRepository(Invitation).save({
         clubId: this.scope.clubId,
@@ -196,6 +212,33 @@ export class MemberService {
   async revoke(id: string): Promise<void> {
     const invitation = await this.scope.byId(Invitation, id, 'invitation');
     await this.scope.manager.getRepository(Invitation).delete({ id: invitation.id });
+  }
+}
+
+const alreadyMember = (email: string, clubName: string) =>
+  new HttpError(409, 'Already a member', `${email} is already a member of ${clubName}.`, [
+    { field: 'email', message: `is already a member of ${clubName}` },
+  ]);
+
+/** Told only to whoever opened the invitation sent to the address, that is, its owner. */
+const accountElsewhere = () =>
+  new HttpError(
+    409,
+    'Address has an account',
+    'This e-mail address already has a Conewise account, in another club. An account belongs to one club: sign in with it, or ask whoever invited you to invite another address.',
+  );
+
+/** Removes an account that never confirmed its address, and its club if no one else is in it. */
+async function discardUnconfirmedAccount(manager: EntityManager, userId: string): Promise<void> {
+  const clubs = (await manager.query(`SELECT "clubId" FROM membership WHERE "userId" = $1`, [
+    userId,
+  ])) as { clubId: string }[];
+  await manager.query(`DELETE FROM app_user WHERE id = $1 AND "emailVerifiedAt" IS NULL`, [userId]);
+  for (const { clubId } of clubs) {
+    await manager.query(
+      `DELETE FROM club WHERE id = $1 AND NOT EXISTS (SELECT 1 FROM membership WHERE "clubId" = $1)`,
+      [clubId],
+    );
   }
 }
 
@@ -242,10 +285,18 @@ export class InvitationAcceptService {
       )) as [Pick<Invitation, 'id' | 'clubId' | 'email' | 'role' | 'teamId'>[], number];
       const invitation = claimed[0];
       if (!invitation || !invitation.clubId) throw invalidToken();
-      if (await manager.getRepository(User).existsBy({ email: invitation.email })) throw emailTaken();
-      const user = await manager
-        .getRepository(User)
-        .save({ email: invitation.email, name: input.name.trim(), passwordHash });
+      const existing = await manager.getRepository(User).findOneBy({ email: invitation.email });
+      if (existing?.emailVerifiedAt) throw accountElsewhere();
+      // Someone registered this address without ever confirming it: whoever opened this link
+      // reads its mail, so the address is theirs and the unconfirmed account goes.
+      if (existing) await discardUnconfirmedAccount(manager, existing.id);
+      const user = await manager.getRepository(User).save({
+        email: invitation.email,
+        name: input.name.trim(),
+        passwordHash,
+        // The invitation reached this address and was opened: it is confirmed.
+        emailVerifiedAt: new Date(),
+      });
       await manager
         .getRepository(Membership)
         .save({ clubId: invitation.clubId, userId: user.id, role: invitation.role });
@@ -263,6 +314,7 @@ export class InvitationAcceptService {
         role: invitation.role,
         name: user.name,
         email: user.email,
+        emailVerified: true,
       };
     });
     return new AuthService(this.dataSource, this.config).respond(auth);

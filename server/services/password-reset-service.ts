@@ -6,6 +6,7 @@ import { PasswordReset } from '../entities/password-reset';
 import { User } from '../entities/user';
 import { HttpError } from '../http/problem';
 import { hashPassword, normaliseEmail } from './auth-service';
+import { markConfirmed } from './email-verification-service';
 import { PASSWORD_RESET_MAIL, type MailQueue } from './mail-queue';
 import { clearFailures } from './sign-in-throttle';
 
@@ -107,6 +108,8 @@ export class PasswordResetService {
       )) as [{ email: string }[], number];
       // Whoever was guessing the old password no longer keeps the owner locked out.
       if (updated[0]) await clearFailures(manager, updated[0].email);
+      // The link reached the address and was opened: the address is confirmed too.
+      await markConfirmed(manager, userId);
       await manager.query(
         `UPDATE password_reset SET "usedAt" = now() WHERE "userId" = $1 AND "usedAt" IS NULL`,
         [userId],

@@ -6,6 +6,7 @@ import { minuteLabel, planMinutes, sessionStart } from '../pdf/clock';
 import type { Paper } from '../pdf';
 import type { SessionPlan } from '../entities/session-plan';
 import type { Team } from '../entities/team';
+import { refuseOverDailyLimit } from './daily-mail-limit';
 import { ClubScope } from './club-scope';
 import { HelperLinkService } from './helper-link-service';
 import type { MailQueue } from './mail-queue';
@@ -56,6 +57,13 @@ export class PlanCardService {
     };
     const expiresAt = await this.helperLinks.expiryFor(row);
     const messageIds = await this.dataSource.transaction(async (manager) => {
+      await refuseOverDailyLimit(
+        manager,
+        auth.clubId,
+        'plan-share',
+        input.recipients.length,
+        this.config.dailyMailLimits.shares,
+      );
       const helper = expiresAt
         ? {
             url: (await this.helperLinks.issue(manager, row, auth.userId, input.recipients.length)).url,

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { HttpError } from '../http/problem';
+import { tooManyRequests } from '../http/problem';
 
 /** Wrong passwords for one address within WINDOW_MINUTES before it is locked. */
 export const MAX_FAILURES = 10;
@@ -14,16 +14,17 @@ export const LOCK_MINUTES = 15;
  */
 export async function refuseIfLocked(manager: EntityManager, email: string): Promise<void> {
   const rows = (await manager.query(
-    `SELECT ceil(extract(epoch FROM "lockedUntil" - now()) / 60)::int AS minutes
+    `SELECT ceil(extract(epoch FROM "lockedUntil" - now()))::int AS seconds
        FROM sign_in_throttle WHERE email = $1 AND "lockedUntil" > now()`,
     [email],
-  )) as { minutes: number }[];
-  const minutes = rows[0]?.minutes;
-  if (minutes === undefined) return;
-  throw new HttpError(
-    429,
+  )) as { seconds: number }[];
+  const seconds = rows[0]?.seconds;
+  if (seconds === undefined) return;
+  const minutes = Math.ceil(seconds / 60);
+  throw tooManyRequests(
     'Too many wrong passwords',
     `Too many wrong passwords for this account. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or choose a new password with "Forgot your password?".`,
+    seconds,
   );
 }
 

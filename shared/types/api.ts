@@ -10,6 +10,8 @@ export interface UserDto {
   id: string;
   name: string;
   email: string;
+  /** False until the person opens the confirmation link mailed to a new account's address. */
+  emailVerified: boolean;
   clubId: string;
   clubName: string;
   role: Role;

@@ -127,6 +127,12 @@ export const routes: Routes = [
           import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
       },
       {
+        // The link mailed to a new account's address: /confirm-email#<token>.
+        path: 'confirm-email',
+        title: 'Confirm your e-mail address · Conewise',
+        loadComponent: () => import('./features/auth/confirm-email-page').then((m) => m.ConfirmEmailPage),
+      },
+      {
         path: 'status',
         title: 'System status · Conewise',
         loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),

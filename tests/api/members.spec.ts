@@ -4,6 +4,7 @@ import { OutboxMessage } from '../../server/entities/outbox-message';
 import {
   clubWithStaff,
   createTeam,
+  linkTokenFor,
   startTestApp,
   TEST_PASSWORD,
   uniqueEmail,
@@ -95,13 +96,16 @@ describe('members and invitations', () => {
 
   it('a club and lead with the longest names allowed still invite: the subject is shortened, not refused', async () => {
     const clubName = `${'Hazelbrook and District Youth Football Club '.repeat(3)}`.slice(0, 118) + ' ⚽';
+    const leadEmail = uniqueEmail('longname');
     const register = await app.api.post('/api/auth/register', {
       clubName,
       name: `${'Alexandra-Christabel '.repeat(6)}`.slice(0, 120),
-      email: uniqueEmail('longname'),
+      email: leadEmail,
       password: 'long-names-secret-42',
     });
     expect(register.status, register.text).toBe(201);
+    const confirmation = await linkTokenFor(app, leadEmail, 'email-verification', '/confirm-email');
+    expect((await app.api.post('/api/auth/email-confirmation', { token: confirmation })).status).toBe(204);
     const email = uniqueEmail('invitee');
     const invited = await app.api.post(
       '/api/invitations',
@@ -175,13 +179,45 @@ describe('members and invitations', () => {
     }
   });
 
-  it('inviting an e-mail that already has an account answers 409', async () => {
-    const response = await app.api.post(
+  it('inviting an address of another club answers as for any address (nothing revealed); its owner is told on joining', async () => {
+    const taken = await app.api.post(
       '/api/invitations',
       { email: other.coach.user.email, role: 'coach' },
       { token: club.lead.token },
     );
+    const fresh = await app.api.post(
+      '/api/invitations',
+      { email: uniqueEmail('fresh'), role: 'coach' },
+      { token: club.lead.token },
+    );
+    expect(taken.status).toBe(201);
+    expect(fresh.status).toBe(201);
+    expect(Object.keys(taken.body).sort()).toEqual(Object.keys(fresh.body).sort());
+    expect(taken.body).toMatchObject({ acceptedAt: null, role: 'coach' });
+
+    // Only whoever reads that address's mail learns it has an account, and nothing changes.
+    const token = await tokenFromOutbox(other.coach.user.email);
+    const accepted = await app.api.post('/api/invitations/accept', {
+      token,
+      name: 'Someone',
+      password: TEST_PASSWORD,
+    });
+    expect(accepted.status).toBe(409);
+    expect(accepted.body.detail).toMatch(/already has a Conewise account, in another club/);
+    const stillThere = await app.api.get('/api/auth/me', { token: other.coach.token });
+    expect(stillThere.body).toMatchObject({ clubId: other.lead.user.clubId, role: 'coach' });
+  });
+
+  it("inviting someone already in the lead's own club is refused, naming the address", async () => {
+    const response = await app.api.post(
+      '/api/invitations',
+      { email: club.coach.user.email, role: 'assistant' },
+      { token: club.lead.token },
+    );
     expect(response.status).toBe(409);
+    expect(response.body.errors).toEqual([
+      { field: 'email', message: 'is already a member of Members Club' },
+    ]);
   });
 
   it('an expired or unknown token is refused', async () => {

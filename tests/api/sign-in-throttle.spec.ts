@@ -37,6 +37,10 @@ describe('sign-in throttle per account, across instances', () => {
     expect(right.status).toBe(429);
     expect(right.body.detail).toMatch(new RegExp(`Try again in ${LOCK_MINUTES} minutes`));
     expect(right.body.detail).toContain('Forgot your password?');
+    // Retry-After says when, in seconds (RFC 9110 10.2.3): within the lock's length.
+    const retryAfter = Number(right.headers.get('retry-after'));
+    expect(retryAfter).toBeGreaterThan((LOCK_MINUTES - 1) * 60);
+    expect(retryAfter).toBeLessThanOrEqual(LOCK_MINUTES * 60);
     // Sessions already open are not touched by someone guessing.
     expect((await app.api.get('/api/auth/me', { token: lead.token })).status).toBe(200);
 

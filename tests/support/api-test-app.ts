@@ -10,6 +10,7 @@ import type { AuthResponse, Role } from '../../shared/types/api';
 import { loadConfig, type AppConfig } from '../../server/config';
 import { createDataSource } from '../../server/data-source';
 import { Membership } from '../../server/entities/membership';
+import { OutboxMessage } from '../../server/entities/outbox-message';
 import { User } from '../../server/entities/user';
 import { startHttpServer, type RunningHttpServer } from '../../server/http-server';
 import { hashPassword } from '../../server/services/auth-service';
@@ -92,16 +93,46 @@ export interface SignedIn extends AuthResponse {
   password: string;
 }
 
-/** Registers a fresh club; returns its lead, signed in. */
-export async function registerClub(app: TestApp, clubName = 'Riverside Test FC'): Promise<SignedIn> {
+/** The newest e-mail of `kind` queued for `email`, from the outbox table. */
+export async function newestMail(app: TestApp, email: string, kind: string): Promise<OutboxMessage> {
+  const rows = await app.dataSource
+    .getRepository(OutboxMessage)
+    .find({ where: { kind }, order: { createdAt: 'DESC' } });
+  const found = rows.find((row) => row.recipients.includes(email));
+  if (!found) throw new Error(`no ${kind} mail for ${email} in the outbox`);
+  return found;
+}
+
+/** The single-use token of the newest e-mailed link to `path` ("/confirm-email") for `email`. */
+export async function linkTokenFor(app: TestApp, email: string, kind: string, path: string): Promise<string> {
+  const message = await newestMail(app, email, kind);
+  const match = new RegExp(`${path}#([\\w-]+)`).exec(message.textBody);
+  if (!match?.[1]) throw new Error(`no ${path}# link in the ${kind} mail for ${email}`);
+  return match[1];
+}
+
+/**
+ * Registers a fresh club; returns its lead, signed in. The lead confirms their address through
+ * the mailed link (as a real lead does before inviting or sharing) unless `confirmed` is false.
+ */
+export async function registerClub(
+  app: TestApp,
+  clubName = 'Riverside Test FC',
+  { confirmed = true, email = uniqueEmail('lead') }: { confirmed?: boolean; email?: string } = {},
+): Promise<SignedIn> {
   const response = await app.api.post('/api/auth/register', {
     clubName,
     name: 'Lena Lead',
-    email: uniqueEmail('lead'),
+    email,
     password: TEST_PASSWORD,
   });
   if (response.status !== 201) throw new Error(`register failed: ${response.status} ${response.text}`);
-  return { ...(response.body as AuthResponse), password: TEST_PASSWORD };
+  const signedIn = { ...(response.body as AuthResponse), password: TEST_PASSWORD };
+  if (!confirmed) return signedIn;
+  const token = await linkTokenFor(app, email, 'email-verification', '/confirm-email');
+  const confirm = await app.api.post('/api/auth/email-confirmation', { token });
+  if (confirm.status !== 204) throw new Error(`confirming failed: ${confirm.status} ${confirm.text}`);
+  return { ...signedIn, user: { ...signedIn.user, emailVerified: true } };
 }
 
 /** Adds a member with a role straight in the database, then signs them in through the API. */
@@ -114,7 +145,7 @@ export async function addMember(
   const email = uniqueEmail(role);
   const user = await app.dataSource
     .getRepository(User)
-    .save({ email, name, passwordHash: await hashPassword(TEST_PASSWORD) });
+    .save({ email, name, passwordHash: await hashPassword(TEST_PASSWORD), emailVerifiedAt: new Date() });
   await app.dataSource.getRepository(Membership).save({ clubId, userId: user.id, role });
   const login = await app.api.post('/api/auth/login', { email, password: TEST_PASSWORD });
   if (login.status !== 200) throw new Error(`login failed: ${login.status} ${login.text}`);

@@ -89,6 +89,19 @@ export class AuthApi {
     return this.http.post<void>('/api/auth/password-reset/confirm', { token, password });
   }
 
+  /** POST /api/auth/email-confirmation: the link mailed to a new account's address, opened. */
+  confirmEmail(token: string): Observable<void> {
+    return this.http.post<void>('/api/auth/email-confirmation', { token });
+  }
+
+  /** POST /api/auth/email-confirmation/resend: another link for the signed-in person's address. */
+  resendEmailConfirmation(): Observable<{ outcome: 'sent' | 'confirmed' | 'wait'; message: string }> {
+    return this.http.post<{ outcome: 'sent' | 'confirmed' | 'wait'; message: string }>(
+      '/api/auth/email-confirmation/resend',
+      {},
+    );
+  }
+
   /** GET /api/auth/me. */
   me(): Observable<UserDto> {
     return this.http.get<UserDto>('/api/auth/me');

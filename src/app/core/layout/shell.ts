@@ -9,6 +9,7 @@ import { SignOut } from '../auth/sign-out';
 import { ROLE_LABELS } from '../labels/role-labels';
 import { ICONS } from '../icons/shipped-icon';
 import { Brand } from './brand';
+import { EmailConfirmationNotice } from './email-confirmation-notice';
 import { mediaMatches, PHONE_WIDTH_QUERY } from './media-query';
 import { NAV_ITEMS } from './nav-items';
 
@@ -22,6 +23,7 @@ import { NAV_ITEMS } from './nav-items';
     RouterOutlet,
     RouterLink,
     Brand,
+    EmailConfirmationNotice,
     RouterLinkActive,
     MatToolbarModule,
     MatSidenavModule,

@@ -21,6 +21,7 @@ const coach: UserDto = {
   email: 'ines@example.org',
   clubId: 'c1',
   clubName: 'Test Club',
+  emailVerified: true,
   role: 'coach',
 };
 const team = (over: Partial<TeamDto>): TeamDto => ({

@@ -81,6 +81,7 @@ describe('MembersPage', () => {
         email: 'rhona@club.test',
         clubId: 'c1',
         clubName: 'Heath Rovers',
+        emailVerified: true,
         role: 'lead',
       },
     });

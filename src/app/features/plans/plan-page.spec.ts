@@ -153,6 +153,7 @@ describe('PlanPage', () => {
         email: 'rhea@example.org',
         clubId: 'c1',
         clubName: 'Harbour',
+        emailVerified: true,
         role,
       },
     });
