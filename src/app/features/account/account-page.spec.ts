@@ -7,24 +7,25 @@ import type { Role, UserDto } from '../../../../shared/types';
 import { AuthStore } from '../../core/auth/auth-store';
 import { AccountPage } from './account-page';
 
-function user(role: Role, name = 'Cat Coach'): UserDto {
+function user(role: Role, name = 'Cat Coach', emailVerified = true): UserDto {
   return {
     id: 'u1',
     name,
     email: 'cat@example.org',
+    emailVerified,
     clubId: 'c1',
     clubName: 'Millbrook Juniors',
     role,
-  } as UserDto;
+  };
 }
 
-function open(role: Role = 'coach') {
+function open(role: Role = 'coach', emailVerified = true) {
   TestBed.configureTestingModule({
     imports: [AccountPage],
     providers: [provideHttpClient(), provideHttpClientTesting(), provideNoopAnimations(), provideRouter([])],
   });
   const auth = TestBed.inject(AuthStore);
-  auth.signIn({ token: 'the-token', user: user(role) });
+  auth.signIn({ token: 'the-token', user: user(role, 'Cat Coach', emailVerified) });
   const fixture = TestBed.createComponent(AccountPage);
   fixture.detectChanges();
   const el = fixture.nativeElement as HTMLElement;
@@ -54,8 +55,15 @@ describe('AccountPage', () => {
     expect(text('account-role')).toBe(words);
     expect(text('account-email')).toBe('cat@example.org');
     expect(text('account-club')).toBe('Millbrook Juniors');
-    expect(el.querySelector('[data-testid=email-state]')).not.toBeNull();
+    expect(text('email-state')).toBe('Confirmed');
     expect(el.textContent).not.toMatch(/\b(lead|assistant)\b/);
+  });
+
+  it('says when the e-mail address still needs confirming, and how', () => {
+    const { text } = open('lead', false);
+    expect(text('email-state')).toBe(
+      'Not confirmed yet: open the link we e-mailed you (the notice above sends it again).',
+    );
   });
 
   it('sends a new name, keeps the answer in the session and says it is saved', async () => {
