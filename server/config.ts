@@ -56,11 +56,28 @@ function packageVersion(): string {
 /** The shortest JWT_SECRET accepted (256 bits of base64 text is 43 characters; 32 is the floor). */
 export const MIN_JWT_SECRET_LENGTH = 32;
 
+/** The address the server listens on: HOST, else this machine only (127.0.0.1). */
+export function bindHostFromEnv(): string {
+  return process.env['HOST']?.trim() || '127.0.0.1';
+}
+
+/** Whether a listen address is reachable from this machine only (127.0.0.0/8, ::1, localhost). */
+export function isLoopbackHost(host: string): boolean {
+  const name = host
+    .trim()
+    .toLowerCase()
+    .replace(/^\[(.*)\]$/, '$1');
+  return name === 'localhost' || name === '::1' || /^(::ffff:)?127(\.\d{1,3}){3}$/.test(name);
+}
+
 /**
- * The JWT secret: JWT_SECRET from the environment, else one generated on first use and kept in
- * the data folder, so restarts and several instances on one machine accept each other's tokens.
+ * The JWT secret: JWT_SECRET from the environment, else, for a server that listens on this
+ * machine only, one generated on first use and kept in the data folder, so restarts and several
+ * instances on one machine accept each other's tokens. A server reachable from other machines
+ * must be given its secret: one made up on a server's own disk is easily lost or left behind in
+ * copies of the data folder, and instances on several machines would each make their own.
  */
-export function loadJwtSecret(dataDir = DATA_DIR): string {
+export function loadJwtSecret(dataDir = DATA_DIR, host = bindHostFromEnv()): string {
   const fromEnv = process.env['JWT_SECRET'];
   if (fromEnv !== undefined && fromEnv !== '') {
     // A short secret can be guessed offline from any one token: refuse to start rather than warn.
@@ -69,6 +86,13 @@ export function loadJwtSecret(dataDir = DATA_DIR): string {
         `JWT_SECRET is ${fromEnv.length} characters long; it needs at least ${MIN_JWT_SECRET_LENGTH} (for example: openssl rand -base64 48).`,
       );
     return fromEnv;
+  }
+  if (!isLoopbackHost(host)) {
+    throw new Error(
+      `JWT_SECRET is not set, and HOST=${host} lets other machines reach this server. ` +
+        `Set JWT_SECRET to at least ${MIN_JWT_SECRET_LENGTH} random characters, the same on every instance ` +
+        `(for example: JWT_SECRET=$(openssl rand -base64 48)), or set HOST=127.0.0.1 to serve this machine only.`,
+    );
   }
   const file = join(dataDir, 'jwt-secret');
   if (existsSync(file)) {

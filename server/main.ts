@@ -4,7 +4,7 @@
  * (SEND_MAIL=false leaves mail queued). Run several of these on one database behind a load
  * balancer; each is stateless. `npm start` (server/start.ts) is the one-command local setup.
  */
-import { loadConfig } from './config';
+import { bindHostFromEnv, loadConfig } from './config';
 import { connectAndMigrate, createDataSource } from './data-source';
 import { startHttpServer } from './http-server';
 import { startMailSender } from './mail-hooks';
@@ -16,14 +16,20 @@ if (!databaseUrl) {
   process.exit(2);
 }
 
-const config = loadConfig();
+let config: ReturnType<typeof loadConfig>;
+try {
+  config = loadConfig();
+} catch (error) {
+  console.error(`[conewise] ${(error as Error).message}`);
+  process.exit(2);
+}
 const dataSource = createDataSource({ url: databaseUrl });
 await connectAndMigrate(dataSource);
 const http = await startHttpServer({
   dataSource,
   config,
   port: Number(process.env['PORT'] ?? 4300),
-  host: process.env['HOST'] ?? '127.0.0.1',
+  host: bindHostFromEnv(),
 });
 const mailSender =
   process.env['SEND_MAIL'] === 'false' ? null : startMailSender({ dataSource, mail: mailSettingsFromEnv() });

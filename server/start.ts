@@ -6,7 +6,7 @@
  */
 import { join } from 'node:path';
 import { buildClientIfStale } from './client-build';
-import { CLIENT_DIST, DATA_DIR, loadConfig } from './config';
+import { bindHostFromEnv, CLIENT_DIST, DATA_DIR, loadConfig, loadJwtSecret } from './config';
 import { connectAndMigrate, createDataSource } from './data-source';
 import { startCluster, type PgCluster } from './db/pg-cluster';
 import { startHttpServer, type RunningHttpServer } from './http-server';
@@ -38,7 +38,9 @@ for (const signal of ['SIGINT', 'SIGTERM'] as const) {
 
 async function main(): Promise<void> {
   const port = Number(process.env['PORT'] ?? 4300);
-  const host = process.env['HOST'] ?? '127.0.0.1';
+  const host = bindHostFromEnv();
+  // Before the slow steps: a server reachable from other machines needs JWT_SECRET.
+  const jwtSecret = loadJwtSecret(DATA_DIR, host);
   process.env['PUBLIC_URL'] ??= `http://${host}:${port}`;
 
   if (process.env['SKIP_CLIENT_BUILD'] !== '1' && !buildClientIfStale(log)) {
@@ -75,7 +77,7 @@ async function main(): Promise<void> {
   const sender: Stoppable = startMailSender({ dataSource, mail });
   cleanups.push(() => sender.stop());
 
-  const config = loadConfig({ staticDir: CLIENT_DIST });
+  const config = loadConfig({ staticDir: CLIENT_DIST, jwtSecret });
   let http: RunningHttpServer;
   try {
     http = await startHttpServer({ dataSource, config, port, host });
