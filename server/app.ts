@@ -71,8 +71,12 @@ export function createApp(deps: AppDeps): Express {
           frameAncestors: ["'none'"],
         },
       },
-      // Served over plain HTTP on a club laptop or closed network; HSTS would only get in the way.
-      strictTransportSecurity: false,
+      // Off by default: served over plain HTTP on a club laptop or closed network, HSTS would only
+      // get in the way. A deployment behind TLS turns it on with HSTS_MAX_AGE.
+      strictTransportSecurity:
+        deps.config.hstsMaxAgeSeconds === null
+          ? false
+          : { maxAge: deps.config.hstsMaxAgeSeconds, includeSubDomains: true, preload: false },
     }),
   );
   app.use(

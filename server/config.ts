@@ -40,6 +40,11 @@ export interface AppConfig {
    * another machine, its address or subnet (TRUST_PROXY=10.0.0.0/8) or a hop count (TRUST_PROXY=1).
    */
   trustProxy: string | number;
+  /**
+   * Strict-Transport-Security max-age in seconds (HSTS_MAX_AGE), for a deployment served over
+   * HTTPS only; null (unset) sends no such header, as a club laptop serves plain HTTP.
+   */
+  hstsMaxAgeSeconds: number | null;
   /** Locale of dates in e-mails (CLUB_LOCALE), e.g. en-GB: "Tuesday 8 December". */
   locale: string;
 }
@@ -131,9 +136,22 @@ export function loadConfig(overrides: Partial<AppConfig> = {}): AppConfig {
     },
     logLevel: process.env['LOG_LEVEL'] ?? 'info',
     trustProxy: trustProxyFromEnv(process.env['TRUST_PROXY']),
+    hstsMaxAgeSeconds: hstsMaxAgeFromEnv(process.env['HSTS_MAX_AGE']),
     locale: process.env['CLUB_LOCALE'] || 'en-GB',
     ...overrides,
   };
+}
+
+/** HSTS_MAX_AGE: whole seconds (0 tells browsers to forget an earlier one), or null when unset. */
+export function hstsMaxAgeFromEnv(raw: string | undefined): number | null {
+  const value = raw?.trim();
+  if (!value) return null;
+  if (!/^\d+$/.test(value)) {
+    throw new Error(
+      `HSTS_MAX_AGE is "${value}"; it must be a whole number of seconds (for example 31536000 for a year), or unset to send no HSTS header.`,
+    );
+  }
+  return Number(value);
 }
 
 /** TRUST_PROXY as Express takes it: a hop count, or addresses and subnet names separated by commas. */
