@@ -15,6 +15,7 @@ function metafile(): BuildMetafile {
         entryPoint: 'src/main.ts',
         imports: [
           { path: 'chunk-CORE0001.js', kind: 'import-statement' },
+          { path: 'chunk-SHEL0001.js', kind: 'dynamic-import' },
           { path: 'chunk-PLAN0001.js', kind: 'dynamic-import' },
           { path: 'chunk-SIDE0001.js', kind: 'dynamic-import' },
           { path: 'chunk-TEAM0001.js', kind: 'dynamic-import' },
@@ -23,6 +24,15 @@ function metafile(): BuildMetafile {
       },
       'chunk-ICON0001.js': { entryPoint: 'src/app/core/icons/generated/icon-svgs.ts', imports: [] },
       'chunk-CORE0001.js': { imports: [] },
+      // The signed-in frame, which opens the account menu's dialogs on demand.
+      'chunk-SHEL0001.js': {
+        entryPoint: 'src/app/core/layout/shell.ts',
+        imports: [
+          { path: 'chunk-CORE0001.js', kind: 'import-statement' },
+          { path: 'chunk-DLGS0001.js', kind: 'dynamic-import' },
+        ],
+      },
+      'chunk-DLGS0001.js': { entryPoint: 'src/app/core/auth/account-dialogs.ts', imports: [] },
       'chunk-PLAN0001.js': {
         entryPoint: 'src/app/features/plans/plan-page.ts',
         imports: [
@@ -83,22 +93,24 @@ describe('the service worker prefetch list', () => {
     ]);
   });
 
-  it('moves the plan page, pitch-side, the engine and the icons into the prefetched group and leaves other screens lazy', () => {
+  it('moves the shell and its dialogs, the plan page, pitch-side, the engine and the icons into the prefetched group and leaves other screens lazy', () => {
     const { manifest: tuned, moved } = prefetchOfflineScreens(manifest(), metafile());
     const [app, screens] = tuned.assetGroups;
     expect(app!.urls).toEqual([
       '/chunk-CARD0001.js',
       '/chunk-CORE0001.js',
+      '/chunk-DLGS0001.js',
       '/chunk-ENGN0001.js',
       '/chunk-ICON0001.js',
       '/chunk-PLAN0001.js',
       '/chunk-RULE0001.js',
+      '/chunk-SHEL0001.js',
       '/chunk-SIDE0001.js',
       '/index.html',
       '/main-AAAA0001.js',
     ]);
     expect(screens!.urls.sort()).toEqual(['/chunk-CHRT0001.js', '/chunk-TEAM0001.js']);
-    expect(moved).toBe(7);
+    expect(moved).toBe(9);
   });
 
   it('refuses a build where an offline screen is no longer its own chunk', () => {
