@@ -1,7 +1,7 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import type { DataSource } from 'typeorm';
 import type { OutboxMessage } from '../entities/outbox-message';
-import { CLEARED_BODY, SECRET_BEARING_KINDS } from '../services/mail-queue';
+import { CLEARED_BODY } from '../services/mail-queue';
 import type { MailSettings } from './mail-settings';
 
 export interface OutboxWorkerOptions {
@@ -134,13 +134,13 @@ export class OutboxWorker {
           content: Buffer.from(a.contentBase64, 'base64'),
         })),
       });
-      // A body holding a working single-use link is not kept once delivered.
+      // Delivered: body and attachments are not kept (links, children's names on the card).
       await db.query(
         `UPDATE outbox_message
             SET status = 'sent', "sentAt" = now(), "lastError" = NULL,
-                "textBody" = CASE WHEN kind = ANY($2) THEN $3 ELSE "textBody" END
+                "textBody" = $2, "htmlBody" = NULL, attachments = '[]'::jsonb
           WHERE id = $1`,
-        [message.id, SECRET_BEARING_KINDS, CLEARED_BODY],
+        [message.id, CLEARED_BODY],
       );
       result.sent++;
     } catch (error) {

@@ -7,14 +7,12 @@ export const PASSWORD_RESET_MAIL = 'password-reset';
 export const INVITATION_MAIL = 'invitation';
 /** The outbox kind of the e-mail that confirms a new account's address. */
 export const EMAIL_VERIFICATION_MAIL = 'email-verification';
-/** Outbox kinds whose body holds a working single-use link: the body is cleared once sent. */
-export const SECRET_BEARING_KINDS: readonly string[] = [
-  PASSWORD_RESET_MAIL,
-  INVITATION_MAIL,
-  EMAIL_VERIFICATION_MAIL,
-];
-/** What such a body reads after sending. */
-export const CLEARED_BODY = '(Cleared once sent: it held a single-use link.)';
+/**
+ * What a message's body reads once sent. Bodies can hold working links (invitations, resets,
+ * confirmations, helper links) and plan cards carry children's first names: after delivery the
+ * outbox keeps only who it went to, the subject and how sending went.
+ */
+export const CLEARED_BODY = '(Cleared once sent: the outbox keeps only recipients, subject and status.)';
 
 /** The outbox's subject column holds this many characters. */
 export const SUBJECT_MAX_LENGTH = 200;

@@ -5,10 +5,12 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { SessionPlanDto } from '../../shared/types/api';
 import { freePort } from '../../server/db/free-port';
+import { OutboxMessage } from '../../server/entities/outbox-message';
 import { OutboxWorker } from '../../server/mail/outbox-worker';
 import { startFakeSmtp, type FakeSmtp } from '../../server/mail/fake-smtp';
 import { mailSettingsFromEnv } from '../../server/mail/mail-settings';
 import { formatClock } from '../../server/pdf/clock';
+import { CLEARED_BODY } from '../../server/services/mail-queue';
 import { clubWithStaff, startTestApp, type ClubCast, type TestApp } from '../support/api-test-app';
 import { createPlan, createSquad, SQUAD_NAMES, type Squad } from './fixtures/plan-helpers';
 
@@ -122,6 +124,16 @@ describe('the printed card and e-mail through the outbox', () => {
         expect(mail.attachments).toHaveLength(1);
         expect(mail.attachments[0].contentType).toBe('application/pdf');
         expect(pdfText(mail.attachments[0].content, 'attached.pdf')).toContain('U10 Wrens');
+      }
+      // Once delivered the outbox keeps who, what about and how it went; not the card or body.
+      const kept = await app.dataSource.getRepository(OutboxMessage).findByIds(response.body.messageIds);
+      expect(kept.map((row) => [row.status, row.subject.includes('U10 Wrens')])).toEqual([
+        ['sent', true],
+        ['sent', true],
+      ]);
+      expect(kept.flatMap((row) => row.recipients).sort()).toEqual(recipients);
+      for (const row of kept) {
+        expect(row).toMatchObject({ textBody: CLEARED_BODY, htmlBody: null, attachments: [] });
       }
       expect(
         (
