@@ -1,4 +1,3 @@
-import { randomBytes } from 'node:crypto';
 import ical, { ICalCalendarMethod } from 'ical-generator';
 import type { EntityManager } from 'typeorm';
 import type { TeamCalendarDto } from '../../shared/types/schedule';
@@ -10,16 +9,12 @@ import { notFound } from '../http/problem';
 import type { ClubScope } from './club-scope';
 import { zonedMoment, todayIn } from './local-time';
 import { clubTimeZone, ScheduleService } from './schedule-service';
+import { newLinkToken } from './link-token';
 
 /** The feed lists sessions from this many days back (so last week's stay visible) … */
 const FEED_DAYS_BACK = 35;
 /** … and at most this many. */
 const FEED_LIMIT = 400;
-
-/** A new secret for a feed's address: 32 random bytes, base64url (43 characters). */
-function newToken(): string {
-  return randomBytes(32).toString('base64url');
-}
 
 function feedPath(token: string): string {
   return `/api/calendar/${token}.ics`;
@@ -83,7 +78,7 @@ export class CalendarService {
   /** Turns the feed on with a new address; an address given out before stops working. */
   async renew(teamId: string): Promise<TeamCalendarDto> {
     const team = await new ScheduleService(this.scope).teamToSchedule(teamId);
-    const token = newToken();
+    const token = newLinkToken();
     await this.scope.manager
       .getRepository(TeamCalendar)
       .upsert({ teamId: team.id, clubId: this.scope.clubId, token, createdAt: new Date() }, ['teamId']);

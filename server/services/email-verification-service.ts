@@ -1,19 +1,15 @@
-import { createHash, randomBytes } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { AppConfig } from '../config';
 import { EmailVerification } from '../entities/email-verification';
 import type { AuthContext } from '../http/auth-context';
 import { HttpError } from '../http/problem';
 import { EMAIL_VERIFICATION_MAIL, type MailQueue } from './mail-queue';
+import { hashLinkToken, linkUnusable, newLinkToken } from './link-token';
 
 /** How long a confirmation link works: two days, for mail read at the weekend's next session. */
 export const VERIFICATION_TTL_HOURS = 48;
 /** Confirmation e-mails one person can be sent in an hour; asking more often sends nothing more. */
 export const VERIFICATIONS_PER_HOUR = 3;
-
-export function hashVerificationToken(token: string): string {
-  return createHash('sha256').update(token).digest('hex');
-}
 
 /** The confirmation e-mail. The token is in the link's fragment (after #), never sent to servers. */
 export function verificationMail(config: AppConfig, name: string, clubName: string, token: string) {
@@ -51,11 +47,6 @@ export function resendWords(outcome: 'sent' | 'confirmed' | 'wait', email: strin
   return `A new link is on its way to ${email}. It works for ${VERIFICATION_TTL_HOURS} hours.`;
 }
 
-const linkUnusable = () =>
-  new HttpError(400, 'Link not usable', 'This link was used already or is out of date. Ask for a new one.', [
-    { field: 'token', message: 'is used or out of date' },
-  ]);
-
 /**
  * Confirming that a new account's owner reads mail at its address (a mailed single-use secret,
  * kept hashed, short-lived), before the account may make Conewise send mail to anyone else
@@ -75,10 +66,10 @@ export class EmailVerificationService {
     user: { id: string; name: string; email: string },
     club: { id: string; name: string },
   ): Promise<void> {
-    const token = randomBytes(32).toString('base64url');
+    const token = newLinkToken();
     await manager.getRepository(EmailVerification).save({
       userId: user.id,
-      tokenHash: hashVerificationToken(token),
+      tokenHash: hashLinkToken(token),
       expiresAt: new Date(Date.now() + VERIFICATION_TTL_HOURS * 3600_000),
       usedAt: null,
     });
@@ -123,7 +114,7 @@ export class EmailVerificationService {
         `UPDATE email_verification SET "usedAt" = now()
           WHERE "tokenHash" = $1 AND "usedAt" IS NULL AND "expiresAt" > now()
           RETURNING "userId"`,
-        [hashVerificationToken(input.token)],
+        [hashLinkToken(input.token)],
       )) as [{ userId: string }[], number];
       const userId = claimed[0]?.userId;
       if (!userId) throw linkUnusable();

@@ -1,4 +1,3 @@
-import { createHash, randomBytes } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { IsNull } from 'typeorm';
 import type { Phase, Station, StationRoles } from '../../shared/types/plan';
@@ -13,14 +12,11 @@ import { ClubScope } from './club-scope';
 import { firstNames } from './first-names';
 import { clubTimeZone } from './schedule-service';
 import { expiryInWords, helperLinkExpiry } from './session-day';
+import { hashLinkToken, newLinkToken } from './link-token';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 /** 32 random bytes in base64url: 43 characters. */
 const TOKEN = /^[A-Za-z0-9_-]{43}$/;
-
-export function hashHelperToken(token: string): string {
-  return createHash('sha256').update(token).digest('hex');
-}
 
 /** The address a helper opens: the token rides in the fragment, which browsers never send to a server. */
 export function helperLinkUrl(config: AppConfig, token: string): string {
@@ -93,12 +89,12 @@ export class HelperLinkService {
         'This session is more than a day ago, and a helper link only works until the end of the day after the session.',
       );
     }
-    const token = randomBytes(32).toString('base64url');
+    const token = newLinkToken();
     const link = await manager.getRepository(HelperLink).save(
       manager.getRepository(HelperLink).create({
         planId: plan.id,
         clubId: plan.clubId,
-        tokenHash: hashHelperToken(token),
+        tokenHash: hashLinkToken(token),
         createdBy: userId,
         emailedTo,
         expiresAt,
@@ -144,7 +140,7 @@ export class HelperLinkService {
     if (!token || !TOKEN.test(token)) throw linkNotKnown();
     const link = await this.dataSource
       .getRepository(HelperLink)
-      .findOne({ where: { tokenHash: hashHelperToken(token) } });
+      .findOne({ where: { tokenHash: hashLinkToken(token) } });
     if (!link) throw linkNotKnown();
     if (link.revokedAt) {
       throw linkEnded('The coach has stopped this link. Ask them for a new one if you are still helping.');

@@ -1,4 +1,3 @@
-import { createHash, randomBytes } from 'node:crypto';
 import { In, IsNull, MoreThan, type DataSource, type EntityManager } from 'typeorm';
 import type { AuthResponse, InvitationDto, MemberDto, Role } from '../../shared/types/api';
 import type { AppConfig } from '../config';
@@ -12,12 +11,9 @@ import { AuthService, hashPassword, normaliseEmail } from './auth-service';
 import type { ClubScope } from './club-scope';
 import { refuseOverDailyLimit } from './daily-mail-limit';
 import { INVITATION_MAIL, type MailQueue } from './mail-queue';
+import { hashLinkToken, newLinkToken } from './link-token';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
-export function hashInvitationToken(token: string): string {
-  return createHash('sha256').update(token).digest('hex');
-}
 
 function invitationDto(invitation: Invitation, teamName: string | null): InvitationDto {
   return {
@@ -179,13 +175,13 @@ export class MemberService {
         1,
         this.config.dailyMailLimits.invitations,
       );
-      const token = randomBytes(32).toString('base64url');
+      const token = newLinkToken();
       const invitation = await manager.getRepository(Invitation).save({
         clubId: this.scope.clubId,
         email,
         role: input.role,
         teamId: input.teamId ?? null,
-        tokenHash: hashInvitationToken(token),
+        tokenHash: hashLinkToken(token),
         expiresAt: new Date(Date.now() + this.config.invitationTtlHours * 3600_000),
         acceptedAt: null,
         invitedById: this.scope.auth.userId,
@@ -230,9 +226,9 @@ const accountElsewhere = () =>
 
 /** Removes an account that never confirmed its address, and its club if no one else is in it. */
 async function discardUnconfirmedAccount(manager: EntityManager, userId: string): Promise<void> {
-  const clubs = (await manager.query(`SELECT "clubId" FROM membership WHERE "userId" = $1`, [
-    userId,
-  ])) as { clubId: string }[];
+  const clubs = (await manager.query(`SELECT "clubId" FROM membership WHERE "userId" = $1`, [userId])) as {
+    clubId: string;
+  }[];
   await manager.query(`DELETE FROM app_user WHERE id = $1 AND "emailVerifiedAt" IS NULL`, [userId]);
   for (const { clubId } of clubs) {
     await manager.query(
@@ -258,7 +254,7 @@ export class InvitationAcceptService {
     token: string,
   ): Promise<{ email: string; role: Role; clubName: string; expiresAt: string; teamName: string | null }> {
     const invitation = await this.dataSource.getRepository(Invitation).findOne({
-      where: { tokenHash: hashInvitationToken(token), acceptedAt: IsNull(), expiresAt: MoreThan(new Date()) },
+      where: { tokenHash: hashLinkToken(token), acceptedAt: IsNull(), expiresAt: MoreThan(new Date()) },
       relations: { club: true },
     });
     if (!invitation?.club) throw invalidToken();
@@ -281,7 +277,7 @@ export class InvitationAcceptService {
         `UPDATE invitation SET "acceptedAt" = now()
          WHERE "tokenHash" = $1 AND "acceptedAt" IS NULL AND "expiresAt" > now()
          RETURNING id, "clubId", email, role, "teamId"`,
-        [hashInvitationToken(input.token)],
+        [hashLinkToken(input.token)],
       )) as [Pick<Invitation, 'id' | 'clubId' | 'email' | 'role' | 'teamId'>[], number];
       const invitation = claimed[0];
       if (!invitation || !invitation.clubId) throw invalidToken();

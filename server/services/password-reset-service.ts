@@ -1,14 +1,13 @@
-import { createHash, randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from '../config';
 import { Membership } from '../entities/membership';
 import { PasswordReset } from '../entities/password-reset';
 import { User } from '../entities/user';
-import { HttpError } from '../http/problem';
 import { hashPassword, normaliseEmail } from './auth-service';
 import { markConfirmed } from './email-verification-service';
 import { PASSWORD_RESET_MAIL, type MailQueue } from './mail-queue';
 import { clearFailures } from './sign-in-throttle';
+import { hashLinkToken, linkUnusable, newLinkToken } from './link-token';
 
 /** How long a reset link works. */
 export const RESET_TTL_MINUTES = 30;
@@ -19,10 +18,6 @@ export const RESETS_PER_HOUR = 3;
 export const RESET_REQUESTED = {
   message: `If an account uses this address, an e-mail with a link to choose a new password is on its way. The link works once, for ${RESET_TTL_MINUTES} minutes.`,
 } as const;
-
-export function hashResetToken(token: string): string {
-  return createHash('sha256').update(token).digest('hex');
-}
 
 /** The reset e-mail. The token is in the link's fragment (after #), which browsers never send. */
 export function passwordResetMail(config: AppConfig, name: string, token: string) {
@@ -40,11 +35,6 @@ export function passwordResetMail(config: AppConfig, name: string, token: string
     link,
   };
 }
-
-const linkUnusable = () =>
-  new HttpError(400, 'Link not usable', 'This link was used already or is out of date. Ask for a new one.', [
-    { field: 'token', message: 'is used or out of date' },
-  ]);
 
 /** Choosing a new password by e-mail: ask for a link, then use it once. */
 export class PasswordResetService {
@@ -67,10 +57,10 @@ export class PasswordResetService {
         [user.id],
       )) as [{ recent: number }];
       if (recent >= RESETS_PER_HOUR) return;
-      const token = randomBytes(32).toString('base64url');
+      const token = newLinkToken();
       await manager.getRepository(PasswordReset).save({
         userId: user.id,
-        tokenHash: hashResetToken(token),
+        tokenHash: hashLinkToken(token),
         expiresAt: new Date(Date.now() + RESET_TTL_MINUTES * 60_000),
         usedAt: null,
       });
@@ -98,7 +88,7 @@ export class PasswordResetService {
         `UPDATE password_reset SET "usedAt" = now()
           WHERE "tokenHash" = $1 AND "usedAt" IS NULL AND "expiresAt" > now()
           RETURNING "userId"`,
-        [hashResetToken(input.token)],
+        [hashLinkToken(input.token)],
       )) as [{ userId: string }[], number];
       const userId = claimed[0]?.userId;
       if (!userId) throw linkUnusable();

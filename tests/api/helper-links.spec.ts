@@ -9,7 +9,7 @@ import { startHttpServer } from '../../server/http-server';
 import { OutboxWorker } from '../../server/mail/outbox-worker';
 import { startFakeSmtp } from '../../server/mail/fake-smtp';
 import { mailSettingsFromEnv } from '../../server/mail/mail-settings';
-import { hashHelperToken } from '../../server/services/helper-link-service';
+import { hashLinkToken } from '../../server/services/link-token';
 import { ApiClient } from '../support/api-client';
 import {
   addMember,
@@ -77,7 +77,7 @@ describe('helper links', () => {
       expect(made.headers.get('cache-control')).toBe('no-store');
       // Only the hash is stored.
       const row = await app.dataSource.getRepository(HelperLink).findOneByOrFail({ id: made.body.id });
-      expect(row.tokenHash).toBe(hashHelperToken(tokenOf(made.body.url)));
+      expect(row.tokenHash).toBe(hashLinkToken(tokenOf(made.body.url)));
       expect(row.tokenHash).not.toContain(tokenOf(made.body.url));
     }
     const listed = await app.api.get(`/api/plans/${plan.id}/helper-links`, { token: club.coach.token });
@@ -305,7 +305,7 @@ describe('helper links', () => {
       expect((await view(app, tokenOf(url!))).status).toBe(200);
       const link = await app.dataSource
         .getRepository(HelperLink)
-        .findOneByOrFail({ tokenHash: hashHelperToken(tokenOf(url!)) });
+        .findOneByOrFail({ tokenHash: hashLinkToken(tokenOf(url!)) });
       expect(link.emailedTo).toBe(2);
 
       await worker.drainOnce();

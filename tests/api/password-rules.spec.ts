@@ -13,7 +13,7 @@ import { Invitation } from '../../server/entities/invitation';
 import { Membership } from '../../server/entities/membership';
 import { User } from '../../server/entities/user';
 import { hashPassword } from '../../server/services/auth-service';
-import { hashInvitationToken } from '../../server/services/member-service';
+import { hashLinkToken } from '../../server/services/link-token';
 import { COMMON_PASSWORD_MESSAGE, isCommonPassword } from '../../server/services/password-policy';
 import {
   registerClub,
@@ -113,7 +113,7 @@ describe('choosing a password', () => {
       email,
       role: 'coach',
       teamId: null,
-      tokenHash: hashInvitationToken(token),
+      tokenHash: hashLinkToken(token),
       expiresAt: new Date(Date.now() + 60 * 60_000),
       acceptedAt: null,
       invitedById: lead.user.id,

@@ -62,7 +62,15 @@ describe('TeamPage', () => {
     });
     TestBed.inject(AuthStore).signIn({
       token: 't',
-      user: { id: userId, name: 'Someone', email: 'x@example.org', emailVerified: true, clubId: 'c1', clubName: 'Club', role },
+      user: {
+        id: userId,
+        name: 'Someone',
+        email: 'x@example.org',
+        emailVerified: true,
+        clubId: 'c1',
+        clubName: 'Club',
+        role,
+      },
     });
     const navigate = vi.spyOn(TestBed.inject(Router), 'navigate').mockResolvedValue(true);
     const fixture = TestBed.createComponent(TeamPage);

@@ -30,7 +30,15 @@ describe('NoTeamYet', () => {
     });
     TestBed.inject(AuthStore).signIn({
       token: 't',
-      user: { id: userId, name: 'Someone', email: 'x@example.org', emailVerified: true, clubId: 'c1', clubName: 'Club', role },
+      user: {
+        id: userId,
+        name: 'Someone',
+        email: 'x@example.org',
+        emailVerified: true,
+        clubId: 'c1',
+        clubName: 'Club',
+        role,
+      },
     });
     const fixture = TestBed.createComponent(NoTeamYet);
     fixture.componentRef.setInput('teams', teams);
