@@ -44,7 +44,7 @@ const LABELS = { currentPassword: 'Current password', newPassword: 'New password
             />
             <mat-error>{{ message('currentPassword') }}</mat-error>
           </mat-form-field>
-          <mat-form-field appearance="outline">
+          <mat-form-field appearance="outline" subscriptSizing="dynamic">
             <mat-label>{{ labels.newPassword }}</mat-label>
             <input matInput type="password" formControlName="newPassword" autocomplete="new-password" />
             <mat-hint>{{ passwordHint }} Other devices will be signed out.</mat-hint>

@@ -1,13 +1,18 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import type { ProblemDto } from '../../../../shared/types';
 
-/** Turns an API error into words a coach can act on. */
-export function problemMessage(error: unknown): string {
+/**
+ * Turns an API error into words a coach can act on. With `fields` false the field errors are left
+ * out: for forms that show each under its own input already.
+ */
+export function problemMessage(error: unknown, { fields: withFields = true } = {}): string {
   if (error instanceof HttpErrorResponse) {
     if (error.status === 0) return 'Conewise cannot reach the server. Check the connection and try again.';
     const problem = error.error as Partial<ProblemDto> | null;
     if (problem && typeof problem === 'object') {
-      const fields = problem.errors?.map((e) => `${e.field}: ${e.message}`).join('; ');
+      const fields = withFields
+        ? problem.errors?.map((e) => `${e.field}: ${e.message}`).join('; ')
+        : undefined;
       const head = problem.detail ?? problem.title;
       if (head && fields) return `${head} (${fields})`;
       if (head) return head;

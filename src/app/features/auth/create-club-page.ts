@@ -65,8 +65,9 @@ export class CreateClubPage {
       },
       error: (error: unknown) => {
         this.sending.set(false);
-        applyFieldErrors(this.form, problemFieldErrors(error));
-        this.error.set(problemMessage(error));
+        // Errors a field shows under itself are not repeated above the form.
+        const unmatched = applyFieldErrors(this.form, problemFieldErrors(error));
+        this.error.set(problemMessage(error, { fields: unmatched.length > 0 }));
       },
     });
   }

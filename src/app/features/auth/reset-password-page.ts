@@ -107,7 +107,7 @@ export class ResetPasswordPage {
         const fields = problemFieldErrors(error);
         // A used or out-of-date link is said in full above the form; field words go under fields.
         if (!fields['token']) applyFieldErrors(this.token() ? this.chooseForm : this.askForm, fields);
-        this.error.set(problemMessage(error).replace(/ \(.*\)$/, ''));
+        this.error.set(problemMessage(error, { fields: false }));
       },
     });
   }
