@@ -4,7 +4,7 @@ import { EmailVerification } from '../entities/email-verification';
 import type { AuthContext } from '../http/auth-context';
 import { HttpError } from '../http/problem';
 import { EMAIL_VERIFICATION_MAIL, type MailQueue } from './mail-queue';
-import { hashLinkToken, linkUnusable, newLinkToken } from './link-token';
+import { claimLink, hashLinkToken, linksSentInLastHour, newLinkToken } from './link-token';
 
 /** How long a confirmation link works: two days, for mail read at the weekend's next session. */
 export const VERIFICATION_TTL_HOURS = 48;
@@ -90,13 +90,7 @@ export class EmailVerificationService {
   async resend(auth: AuthContext): Promise<'sent' | 'confirmed' | 'wait'> {
     if (auth.emailVerified) return 'confirmed';
     return this.dataSource.transaction(async (manager) => {
-      // One request at a time per person, so the hourly count cannot be raced past.
-      await manager.query('SELECT id FROM app_user WHERE id = $1 FOR UPDATE', [auth.userId]);
-      const [{ recent }] = (await manager.query(
-        `SELECT count(*)::int AS recent FROM email_verification
-          WHERE "userId" = $1 AND "createdAt" > now() - interval '1 hour'`,
-        [auth.userId],
-      )) as [{ recent: number }];
+      const recent = await linksSentInLastHour(manager, 'email_verification', auth.userId);
       if (recent >= VERIFICATIONS_PER_HOUR) return 'wait';
       await this.issue(
         manager,
@@ -110,15 +104,7 @@ export class EmailVerificationService {
   /** Confirms the address the link was sent to; the link and every other one stop working. */
   async confirm(input: { token: string }): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const [claimed] = (await manager.query(
-        `UPDATE email_verification SET "usedAt" = now()
-          WHERE "tokenHash" = $1 AND "usedAt" IS NULL AND "expiresAt" > now()
-          RETURNING "userId"`,
-        [hashLinkToken(input.token)],
-      )) as [{ userId: string }[], number];
-      const userId = claimed[0]?.userId;
-      if (!userId) throw linkUnusable();
-      await markConfirmed(manager, userId);
+      await markConfirmed(manager, await claimLink(manager, 'email_verification', input.token));
     });
   }
 }

@@ -7,7 +7,7 @@ import { hashPassword, normaliseEmail } from './auth-service';
 import { markConfirmed } from './email-verification-service';
 import { PASSWORD_RESET_MAIL, type MailQueue } from './mail-queue';
 import { clearFailures } from './sign-in-throttle';
-import { hashLinkToken, linkUnusable, newLinkToken } from './link-token';
+import { claimLink, hashLinkToken, linksSentInLastHour, newLinkToken } from './link-token';
 
 /** How long a reset link works. */
 export const RESET_TTL_MINUTES = 30;
@@ -50,13 +50,7 @@ export class PasswordResetService {
     await this.dataSource.transaction(async (manager) => {
       const user = await manager.getRepository(User).findOneBy({ email });
       if (!user) return;
-      // One request at a time per person, so the hourly count cannot be raced past.
-      await manager.query('SELECT id FROM app_user WHERE id = $1 FOR UPDATE', [user.id]);
-      const [{ recent }] = (await manager.query(
-        `SELECT count(*)::int AS recent FROM password_reset WHERE "userId" = $1 AND "createdAt" > now() - interval '1 hour'`,
-        [user.id],
-      )) as [{ recent: number }];
-      if (recent >= RESETS_PER_HOUR) return;
+      if ((await linksSentInLastHour(manager, 'password_reset', user.id)) >= RESETS_PER_HOUR) return;
       const token = newLinkToken();
       await manager.getRepository(PasswordReset).save({
         userId: user.id,
@@ -83,15 +77,7 @@ export class PasswordResetService {
   async confirm(input: { token: string; password: string }): Promise<void> {
     const passwordHash = await hashPassword(input.password);
     await this.dataSource.transaction(async (manager) => {
-      // Claiming the link and marking it used in one statement keeps it single-use.
-      const [claimed] = (await manager.query(
-        `UPDATE password_reset SET "usedAt" = now()
-          WHERE "tokenHash" = $1 AND "usedAt" IS NULL AND "expiresAt" > now()
-          RETURNING "userId"`,
-        [hashLinkToken(input.token)],
-      )) as [{ userId: string }[], number];
-      const userId = claimed[0]?.userId;
-      if (!userId) throw linkUnusable();
+      const userId = await claimLink(manager, 'password_reset', input.token);
       const [updated] = (await manager.query(
         `UPDATE app_user SET "passwordHash" = $2, "tokenVersion" = "tokenVersion" + 1 WHERE id = $1 RETURNING email`,
         [userId, passwordHash],
