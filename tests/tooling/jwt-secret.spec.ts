@@ -102,5 +102,6 @@ describe('loadJwtSecret', () => {
       '[conewise] JWT_SECRET is not set, and HOST=0.0.0.0 lets other machines reach',
     );
     expect(run.stderr).not.toMatch(/\n\s+at /);
-  });
+    // Starting tsx and the server's imports took over vitest's 5 s default on a busy CI machine.
+  }, 60_000);
 });
