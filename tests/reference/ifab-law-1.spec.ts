@@ -1,6 +1,7 @@
 /**
  * Source: IFAB Laws of the Game, Law 1 (The Field of Play) — touchline 90–120 m, goal line
- * 45–90 m, goal 7.32 m × 2.44 m, centre-circle radius 9.15 m, penalty area 16.5 m from the goal line.
+ * 45–90 m (the Law's yards: 100–130 yd and 50–100 yd), goal 7.32 m × 2.44 m, centre-circle radius
+ * 9.15 m, penalty area 16.5 m from the goal line.
  */
 import { describe, expect, it } from 'vitest';
 import { IFAB_LAW_1, spacePresetsFor, type PlanRequest } from '../../shared/types';
@@ -20,6 +21,10 @@ describe('IFAB Laws of the Game, Law 1', () => {
 
   it('the 11v11 preset lies within the Law’s ranges; a maximal pitch is a valid space', async () => {
     const full = spacePresetsFor('U15')[0].space;
+    // The same pitch in the Law's yards (100–130 × 50–100 yd): the middle, whole yards.
+    const yards = spacePresetsFor('U15', 'yards')[0];
+    expect(yards.size).toEqual({ width: 75, length: 115 });
+    expect(yards.source).toBe('IFAB Laws of the Game, Law 1');
     expect(full.length).toBeGreaterThanOrEqual(IFAB_LAW_1.touchlineM.min);
     expect(full.length).toBeLessThanOrEqual(IFAB_LAW_1.touchlineM.max);
     expect(full.width).toBeGreaterThanOrEqual(IFAB_LAW_1.goalLineM.min);

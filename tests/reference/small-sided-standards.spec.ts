@@ -27,15 +27,32 @@ describe('US Soccer Player Development Initiatives (2016) small-sided standards'
     expect(['U13', 'U16', 'adult'].map((a) => ballSizeFor(a as 'U13'))).toEqual([5, 5, 5]);
   });
 
-  it('presets: the U9–U10 7v7 pitch at the middle of 55–65 × 35–45 yd, and its half and third', () => {
-    const [full, half, third] = spacePresetsFor('U10');
-    expect(full.space).toEqual({
-      width: Math.round(40 * METRES_PER_YARD * 10) / 10,
-      length: Math.round(60 * METRES_PER_YARD * 10) / 10,
-    });
-    expect(full.space).toEqual({ width: 36.6, length: 54.9 });
-    expect(half.space).toEqual({ width: 36.6, length: 27.5 });
-    expect(third.space).toEqual({ width: 36.6, length: 18.3 });
+  it('presets in yards: the U9–U10 7v7 pitch at the middle of 55–65 × 35–45 yd, its half and third, whole yards', () => {
+    const [full, half, third] = spacePresetsFor('U10', 'yards');
+    expect([full.size, half.size, third.size]).toEqual([
+      { width: 40, length: 60 },
+      { width: 40, length: 30 },
+      { width: 40, length: 20 },
+    ]);
+    expect(full.source).toMatch(/US Soccer Player Development Initiatives \(2016\)/);
+    // The request gets the same pitch in metres, which reads back as the same whole yards.
+    expect(full.space.width / METRES_PER_YARD).toBeCloseTo(40, 1);
+    expect(full.space.length / METRES_PER_YARD).toBeCloseTo(60, 1);
+  });
+
+  it('presets in metres: the same 40 × 60 yd pitch in whole metres (36.6 × 54.9 m), half and third from it', () => {
+    const [full, half, third] = spacePresetsFor('U10', 'metres');
+    expect([full.size, half.size, third.size]).toEqual([
+      { width: 37, length: 55 },
+      { width: 37, length: 27 },
+      { width: 37, length: 18 },
+    ]);
+    expect(full.space).toEqual(full.size);
+  });
+
+  it('U6–U8 and U11–U12 presets in yards are the middle of their published ranges', () => {
+    expect(spacePresetsFor('U7', 'yards')[0].size).toEqual({ width: 20, length: 30 });
+    expect(spacePresetsFor('U12', 'yards')[0].size).toEqual({ width: 50, length: 75 });
   });
 
   it("the rule set's U6–U8 small-sided game area sits inside the 4v4 field range", () => {

@@ -1,0 +1,3 @@
+export * from './units';
+export * from './convert';
+export * from './format';
