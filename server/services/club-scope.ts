@@ -83,7 +83,7 @@ export class ClubScope {
   assertManageable(team: Team | null, attached: boolean): Team {
     if (!team) throw notFound('team');
     if (!this.canManageWhenAttached(attached))
-      throw forbidden('Only the club lead and the team’s coaches can change this team.');
+      throw forbidden('Only the head of coaching and the team’s coaches can change this team.');
     return team;
   }
 
@@ -100,7 +100,7 @@ export class ClubScope {
   async teamToRun(id: string, doing = 'take its register'): Promise<Team> {
     const team = await this.team(id);
     if (this.auth.role !== 'lead' && !(await this.isAttached(team.id))) {
-      throw forbidden(`Only the club lead and the team’s own coaches and assistants can ${doing}.`);
+      throw forbidden(`Only the head of coaching and the team’s own coaches and assistants can ${doing}.`);
     }
     return team;
   }

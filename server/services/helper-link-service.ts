@@ -50,7 +50,9 @@ export class HelperLinkService {
     const scope = new ClubScope(this.dataSource.manager, auth);
     const plan = await scope.plan(planId);
     if (auth.role !== 'lead' && !(await scope.isAttached(plan.teamId))) {
-      throw forbidden('Only the team’s coaches and assistants and the club lead can share helper links.');
+      throw forbidden(
+        'Only the team’s coaches and assistants and the head of coaching can share helper links.',
+      );
     }
     return plan;
   }

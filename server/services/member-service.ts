@@ -1,5 +1,6 @@
 import { In, IsNull, MoreThan, type DataSource, type EntityManager } from 'typeorm';
 import type { AuthResponse, InvitationDto, MemberDto, Role } from '../../shared/types/api';
+import { ROLE_IN_A_SENTENCE } from '../../shared/types/role-words';
 import type { AppConfig } from '../config';
 import { Club } from '../entities/club';
 import { Invitation } from '../entities/invitation';
@@ -51,7 +52,7 @@ export function invitationMail(
   return {
     subject: `${inviter} invited you to ${clubName} on Conewise`,
     text: [
-      `${inviter} invited you to join ${clubName} on Conewise as ${role === 'assistant' ? 'an' : 'a'} ${role}` +
+      `${inviter} invited you to join ${clubName} on Conewise as ${ROLE_IN_A_SENTENCE[role]}` +
         (teamName ? ` with ${teamName}.` : '.'),
       '',
       `Choose your name and password here: ${link}`,
@@ -120,7 +121,7 @@ export class MemberService {
       const membership = await this.membership(manager, userId);
       if (membership.role === 'lead' && role !== 'lead' && (await this.leadCount(manager)) <= 1) {
         throw conflict(
-          `${this.scope.auth.clubName} needs at least one lead. Make someone else lead first, then change this role.`,
+          `${this.scope.auth.clubName} needs at least one head of coaching. Make someone else head of coaching first, then change this role.`,
         );
       }
       await manager.getRepository(Membership).update({ id: membership.id }, { role });
@@ -136,7 +137,7 @@ export class MemberService {
       if (membership.userId === this.scope.auth.userId) throw conflict('You cannot remove yourself.');
       if (membership.role === 'lead' && (await this.leadCount(manager)) <= 1)
         throw conflict(
-          `${this.scope.auth.clubName} needs at least one lead. Make someone else lead first, then remove this member.`,
+          `${this.scope.auth.clubName} needs at least one head of coaching. Make someone else head of coaching first, then remove this member.`,
         );
       // A user belongs to one club, so leaving it removes the account; their plans stay.
       await manager.getRepository(User).delete({ id: membership.userId });

@@ -81,7 +81,9 @@ export class ScheduleService {
   async teamToSchedule(teamId: string): Promise<Team> {
     const team = await this.scope.team(teamId);
     if (this.scope.auth.role !== 'lead' && !(await this.scope.isAttached(team.id))) {
-      throw forbidden('Only the club lead and this team’s coaches and assistants can change its schedule.');
+      throw forbidden(
+        'Only the head of coaching and this team’s coaches and assistants can change its schedule.',
+      );
     }
     return team;
   }

@@ -29,13 +29,15 @@ export function staffChangeRefusal(
 ): string | null {
   if (caller.role === 'lead') return null;
   if (caller.role !== 'coach' || !teamStaffIds.includes(caller.id)) {
-    return 'Only the club lead and this team’s coaches can change who helps with it.';
+    return 'Only the head of coaching and this team’s coaches can change who helps with it.';
   }
   if (member.userId === caller.id) {
-    return change === 'remove' ? 'You cannot take yourself off your own team. Ask the club lead.' : null;
+    return change === 'remove'
+      ? 'You cannot take yourself off your own team. Ask the head of coaching.'
+      : null;
   }
   if (member.role !== 'assistant') {
-    return 'Coaches can add and remove assistants. Ask the club lead to change this team’s coaches.';
+    return 'Coaches can add and remove assistants. Ask the head of coaching to change this team’s coaches.';
   }
   return null;
 }

@@ -89,7 +89,7 @@ describe('at least one lead, even when two leads act at once', () => {
       ]);
       expect(answers.map((a) => a.status).sort()).toEqual([204, 409]);
       const refused = answers.find((a) => a.status === 409)!;
-      expect(refused.body.detail).toContain(`Removal Race ${round} needs at least one lead`);
+      expect(refused.body.detail).toContain(`Removal Race ${round} needs at least one head of coaching`);
       const leads = await leadsOf(clubId);
       expect(leads).toHaveLength(1);
       // The lead left is the one whose removal of the other went through.
@@ -108,7 +108,7 @@ describe('at least one lead, even when two leads act at once', () => {
       ]);
       expect(answers.map((a) => a.status).sort()).toEqual([200, 409]);
       const refused = answers.find((a) => a.status === 409)!;
-      expect(refused.body.detail).toContain(`Demotion Race ${round} needs at least one lead`);
+      expect(refused.body.detail).toContain(`Demotion Race ${round} needs at least one head of coaching`);
       const leads = await leadsOf(clubId);
       expect(leads).toHaveLength(1);
       const winner = answers[0]!.status === 200 ? first : second;

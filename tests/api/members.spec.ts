@@ -257,7 +257,7 @@ describe('members and invitations', () => {
       { token: local.lead.token },
     );
     expect(lastLead.status).toBe(409);
-    expect(lastLead.body.detail).toContain('needs at least one lead');
+    expect(lastLead.body.detail).toContain('needs at least one head of coaching');
     expect(
       (await app.api.delete(`/api/members/${local.lead.user.id}`, { token: local.lead.token })).status,
     ).toBe(409);

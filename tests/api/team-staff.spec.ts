@@ -56,7 +56,7 @@ describe('team staff', () => {
 
     const coach = await app.api.put(staffPath(team.id, otherCoach.user.id), undefined, { token });
     expect(coach.status).toBe(403);
-    expect(coach.body.detail).toContain('Ask the club lead');
+    expect(coach.body.detail).toContain('Ask the head of coaching');
     const self = await app.api.delete(staffPath(team.id, club.coach.user.id), { token });
     expect(self.status).toBe(403);
     expect(self.body.detail).toContain('cannot take yourself off');

@@ -279,7 +279,7 @@ describe('a hot hour of training on the plan page', () => {
       if (label === 'phone') await game.locator('summary').click();
       const roles = game.getByTestId('station-roles');
       await roles.waitFor();
-      expect(await roles.locator('dt').allTextContents()).toEqual(['Side A (bibs)', 'Side B', 'In goal']);
+      expect(await roles.locator('dt').allTextContents()).toEqual(['Side A (bibs)', 'Side B', 'Goalkeeper']);
       expect(await game.locator('cw-station-diagram g.cw-dot[data-role="goalkeeper"]').count()).toBe(2);
 
       await page.evaluate(() => window.scrollTo(0, 0));

@@ -135,7 +135,7 @@ describe('staff', () => {
     expect(link).toBeDefined();
 
     const joining = await phonePage(null, new URL(link!).pathname + new URL(link!).hash);
-    await joining.getByText(`to join as an assistant coach with ${TEAM}`).waitFor();
+    await joining.getByText(`to join as an assistant with ${TEAM}`).waitFor();
     // The secret left the address bar as soon as the page read it.
     expect(new URL(joining.url()).hash).toBe('');
     await joining.getByLabel('Your name').fill(name);
@@ -225,7 +225,9 @@ describe('staff', () => {
     await page.getByRole('button', { name: 'Make assistant' }).click();
     const refusal = page.locator('mat-dialog-container [role=alert]');
     await refusal.waitFor();
-    expect(await refusal.textContent()).toContain('needs at least one lead. Make someone else lead first');
+    expect(await refusal.textContent()).toContain(
+      'needs at least one head of coaching. Make someone else head of coaching first',
+    );
     await settled(page);
     await screenshot(page, 'staff-last-lead');
     await page.getByRole('button', { name: 'Keep as lead' }).click();

@@ -136,7 +136,7 @@ describe('teams', () => {
       const other = await club.login(U12_COACH);
       const page = await pageAs(other, viewport, `/teams/${team.id}`);
       await page.getByRole('heading', { name: 'U8 Foxes', level: 1 }).waitFor();
-      await page.getByText('Only the club lead or this team’s coaches can change it.').waitFor();
+      await page.getByText('Only the head of coaching or this team’s coaches can change it.').waitFor();
       await page.getByRole('cell', { name: squad[0]!.displayName, exact: true }).waitFor();
       for (const name of ['Add a player', 'Delete team', `Remove ${squad[0]!.displayName} from the squad`]) {
         expect(await page.getByRole('button', { name }).count(), name).toBe(0);

@@ -1,15 +1,9 @@
 import type { PlanKind } from '../../../../shared/types';
 
-export { ACTIVITY_KIND_LABELS, FOCUS_LABELS } from '../../../../shared/types';
+export { ACTIVITY_KIND_LABELS, ageGroupLabel, FOCUS_LABELS, LEVEL_LABELS } from '../../../../shared/types';
 
 /** Words shown for the engine's codes. */
 export const KIND_LABELS: Record<PlanKind, string> = {
   'match-warm-up': 'Match warm-up',
   training: 'Training session',
 };
-
-export const LEVEL_LABELS = {
-  beginner: 'Beginner',
-  intermediate: 'Intermediate',
-  advanced: 'Advanced',
-} as const;

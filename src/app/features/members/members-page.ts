@@ -10,7 +10,15 @@ import { MatSnackBar } from '@angular/material/snack-bar';
 import { DatePipe } from '@angular/common';
 import { Router } from '@angular/router';
 import { forkJoin } from 'rxjs';
-import { ROLES, type InvitationDto, type MemberDto, type Role, type TeamDto } from '../../../../shared/types';
+import {
+  ROLE_IN_A_SENTENCE,
+  ROLE_LABELS,
+  ROLES,
+  type InvitationDto,
+  type MemberDto,
+  type Role,
+  type TeamDto,
+} from '../../../../shared/types';
 import { MembersApi } from '../../core/api/members-api';
 import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
@@ -59,6 +67,7 @@ export class MembersPage {
 
   protected readonly roles = ROLES;
   protected readonly roleDescriptions = ROLE_DESCRIPTIONS;
+  protected readonly roleLabels = ROLE_LABELS;
   protected readonly members = signal<MemberDto[]>([]);
   protected readonly invitations = signal<InvitationDto[]>([]);
   protected readonly teams = signal<TeamDto[]>([]);
@@ -136,7 +145,7 @@ export class MembersPage {
       .subscribe((updated) => {
         if (!updated) return;
         this.members.update((list) => list.map((m) => (m.userId === updated.userId ? updated : m)));
-        this.say(`${updated.name} is now ${updated.role}.`);
+        this.say(`${updated.name} is now ${ROLE_IN_A_SENTENCE[updated.role]}.`);
         const me = this.me();
         if (row.self && me && updated.role !== 'lead') {
           // No longer a lead: this page is not theirs any more.
@@ -211,7 +220,9 @@ export class MembersPage {
         this.sending.set(false);
         this.invitations.update((list) => [invitation, ...list.filter((i) => i.id !== invitation.id)]);
         const team = invitation.teamName ? ` for ${invitation.teamName}` : '';
-        this.inviteNotice.set(`Invitation sent to ${invitation.email} as ${invitation.role}${team}.`);
+        this.inviteNotice.set(
+          `Invitation sent to ${invitation.email} as ${ROLE_IN_A_SENTENCE[invitation.role]}${team}.`,
+        );
         this.formDirective().resetForm({ email: '', role, teamId });
       },
       error: (error: unknown) => {

@@ -194,12 +194,16 @@ describe('PlanWizard', () => {
     expect(chips.map((c) => c.textContent?.trim())).toEqual(FOCUSES.map((f) => FOCUS_LABELS[f]));
     expect(chips).toHaveLength(10);
     const hint = () => root.querySelector('[data-testid="focus-hint"]')!.textContent!;
-    expect(hint()).toContain('first focus you pick as its theme');
+    // A match warm-up (the wizard's default) says a focus only tips its choices.
+    expect(hint()).toContain('only tips the choice of activities');
+    expect(hint()).not.toContain('as its theme');
 
     const training = Array.from(root.querySelectorAll<HTMLButtonElement>('.cw-kind button')).find((b) =>
       b.textContent?.includes('Training'),
     )!;
     training.click();
+    fixture.detectChanges();
+    expect(hint()).toContain('first focus you pick as its theme');
     const chip = (label: string) =>
       chips
         .find((c) => c.textContent?.trim() === label)!

@@ -59,6 +59,7 @@ import { isoDate } from '../../core/time/dates';
 import { buildPlanRequest, wizardFieldOf, type WizardValue } from './services/plan-request-builder';
 import { SpacePreset, SpacePresets } from './services/space-presets';
 import { PlanHandover } from '../plans/services/plan-handover';
+import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
 
 /** The wizard's steps, in order, as named in its form. */
 type Step = 'who' | 'kit' | 'time';
@@ -107,6 +108,7 @@ const someAdult: ValidatorFn = (control) =>
 @Component({
   selector: 'cw-plan-wizard',
   imports: [
+    AgeGroupLabelPipe,
     ReactiveFormsModule,
     RouterLink,
     MatStepperModule,

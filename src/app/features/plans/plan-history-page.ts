@@ -43,10 +43,10 @@ export class PlanHistoryPage {
   protected readonly kindLabels: Record<string, string> = KIND_LABELS;
   protected readonly day = shortDay;
   protected readonly canPlan = computed(() => this.auth.hasRole('lead', 'coach'));
-  /** On a phone the session, players and status fold under the date, so the row fits 390 px. */
+  /** On a phone the session and players fold under the date, so the row fits 390 px. */
   protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);
   protected readonly columns = computed(() => {
-    const facts = this.compact() ? ['date'] : ['date', 'kind', 'players', 'status'];
+    const facts = this.compact() ? ['date'] : ['date', 'kind', 'players'];
     return this.canPlan() ? [...facts, 'reuse'] : facts;
   });
 

@@ -420,7 +420,7 @@ describe('PlanPage', () => {
       dt.nextElementSibling!.textContent!,
     ]);
     const [sideA, sideB] = game.roles.teams!;
-    expect(roles.map(([label]) => label)).toEqual(['Side A (bibs)', 'Side B', 'In goal']);
+    expect(roles.map(([label]) => label)).toEqual(['Side A (bibs)', 'Side B', 'Goalkeeper']);
     for (const id of sideA) expect(roles[0][1]).toContain(name(id));
     for (const id of sideB) expect(roles[1][1]).toContain(name(id));
     for (const id of game.roles.goalkeeper!) expect(roles[2][1]).toContain(name(id));

@@ -11,11 +11,20 @@ import { ICONS } from '../../core/icons/shipped-icon';
 import { LEVEL_LABELS } from '../../core/labels/plan-labels';
 import { NoTeamYet } from '../../shared/components/no-team-yet';
 import { TeamDefaultsForm } from './components/team-defaults-form';
+import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
 
 /** The club's teams, and a short form to add one. */
 @Component({
   selector: 'cw-team-list-page',
-  imports: [RouterLink, MatCardModule, MatButtonModule, ...ICONS, TeamDefaultsForm, NoTeamYet],
+  imports: [
+    AgeGroupLabelPipe,
+    RouterLink,
+    MatCardModule,
+    MatButtonModule,
+    ...ICONS,
+    TeamDefaultsForm,
+    NoTeamYet,
+  ],
   templateUrl: './team-list-page.html',
   styleUrl: './team-list-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

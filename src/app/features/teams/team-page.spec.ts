@@ -143,12 +143,12 @@ describe('TeamPage', () => {
         type: 'about:blank',
         title: 'Forbidden',
         status: 403,
-        detail: 'Only the club lead and the team’s coaches can change this team.',
+        detail: 'Only the head of coaching and the team’s coaches can change this team.',
       },
       { status: 403, statusText: 'Forbidden' },
     );
     await settle(fixture);
-    expect(dialog()!.querySelector('[role=alert]')?.textContent).toContain('Only the club lead');
+    expect(dialog()!.querySelector('[role=alert]')?.textContent).toContain('Only the head of coaching');
     expect(button(dialog()!, 'Remove player').disabled).toBe(false);
     expect(rowNames(root)).toContain('Tam J.');
   });
@@ -160,7 +160,7 @@ describe('TeamPage', () => {
     );
     const has = (test: (name: string) => boolean) => names.some(test);
     return [
-      has((n) => n.endsWith('Plan a warm-up')) && 'plan',
+      has((n) => n.endsWith('Plan a session')) && 'plan',
       has((n) => n.endsWith('Add a player')) && 'add player',
       has((n) => n === 'Edit Rui M.') && 'edit player',
       has((n) => n === 'Remove Rui M. from the squad') && 'remove player',
@@ -203,7 +203,7 @@ describe('TeamPage', () => {
   it('a coach of another team sees the team read-only: no changing it, no deleting it', async () => {
     const { root } = await setUp('coach', 'coach-2');
     expect(changeControls(root)).toEqual([]);
-    expect(readOnlyNote(root)).toBe('Only the club lead or this team’s coaches can change it.');
+    expect(readOnlyNote(root)).toBe('Only the head of coaching or this team’s coaches can change it.');
     // The same facts, as text: the squad's switches as Yes/No, kit and details under their labels.
     const rows = Array.from(root.querySelectorAll('tbody tr')).map((tr) =>
       Array.from(tr.querySelectorAll('td')).map((td) => td.textContent!.trim()),
@@ -220,7 +220,7 @@ describe('TeamPage', () => {
       'Balls 10',
       'Cones 20',
       'Bibs 8',
-      'Small or pop-up goals 2',
+      'Small goals 2',
       'Team name U9 Herons',
       'Age group U9',
       'Level Beginner',
@@ -231,7 +231,7 @@ describe('TeamPage', () => {
   it('an assistant attached to the team sees it read-only too: helping is not changing', async () => {
     const { root } = await setUp('assistant', 'helper-1', { ...TEAM, coachIds: ['coach-1', 'helper-1'] });
     expect(changeControls(root)).toEqual([]);
-    expect(readOnlyNote(root)).toBe('Only the club lead or this team’s coaches can change it.');
+    expect(readOnlyNote(root)).toBe('Only the head of coaching or this team’s coaches can change it.');
     // Reading stays open: past plans and insight.
     expect(root.querySelector('a[href="/teams/t1/plans"]')).not.toBeNull();
     expect(root.querySelector('a[href="/teams/t1/insight"]')).not.toBeNull();

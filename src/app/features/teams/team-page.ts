@@ -34,11 +34,13 @@ import { TeamStaff } from './components/team-staff';
 import { TeamSchedule } from './components/team-schedule';
 import { canEditSchedule } from './schedule-permissions';
 import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
+import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
 
 /** One team: its players, CSV import, kit bag and defaults, with the way into planning and out. */
 @Component({
   selector: 'cw-team-page',
   imports: [
+    AgeGroupLabelPipe,
     RouterLink,
     MatButtonModule,
     MatCardModule,

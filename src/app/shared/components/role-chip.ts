@@ -1,10 +1,10 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
-import type { Role } from '../../../../shared/types';
+import { ROLE_LABELS, type Role } from '../../../../shared/types';
 
 /** A member's role as a small coloured label, the same on the members and team pages. */
 @Component({
   selector: 'cw-role-chip',
-  template: `{{ role() }}`,
+  template: `{{ labels[role()] }}`,
   host: { '[attr.data-role]': 'role()' },
   styles: `
     :host {
@@ -33,4 +33,5 @@ import type { Role } from '../../../../shared/types';
 export class RoleChip {
   /** The role to show. */
   readonly role = input.required<Role>();
+  protected readonly labels = ROLE_LABELS;
 }

@@ -3,7 +3,13 @@ import { FormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import { MatRadioModule } from '@angular/material/radio';
-import { ROLES, type MemberDto, type Role } from '../../../../../shared/types';
+import {
+  ROLE_IN_A_SENTENCE,
+  ROLE_LABELS,
+  ROLES,
+  type MemberDto,
+  type Role,
+} from '../../../../../shared/types';
 import { MembersApi } from '../../../core/api/members-api';
 import { problemMessage } from '../../../core/http/problem-message';
 import { ROLE_DESCRIPTIONS } from '../role-descriptions';
@@ -27,7 +33,7 @@ export interface MemberRoleData {
       <mat-radio-group [(ngModel)]="role" class="cw-roles" aria-label="Role">
         @for (choice of roles; track choice) {
           <mat-radio-button [value]="choice" [attr.data-role]="choice">
-            <span class="cw-roles__name">{{ choice }}</span>
+            <span class="cw-roles__name">{{ labels[choice] }}</span>
             <span class="cw-roles__what">{{ descriptions[choice] }}</span>
           </mat-radio-button>
         }
@@ -42,7 +48,7 @@ export interface MemberRoleData {
       </div>
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" mat-dialog-close>Keep as {{ data.member.role }}</button>
+      <button mat-button type="button" mat-dialog-close>Keep as {{ inSentence[data.member.role] }}</button>
       <button
         mat-flat-button
         type="button"
@@ -50,7 +56,7 @@ export interface MemberRoleData {
         [disabled]="busy() || role() === data.member.role"
         (click)="saveRole()"
       >
-        Make {{ role() }}
+        Make {{ inSentence[role()] }}
       </button>
     </mat-dialog-actions>
   `,
@@ -63,7 +69,6 @@ export interface MemberRoleData {
     .cw-roles__name {
       display: block;
       font-weight: 600;
-      text-transform: capitalize;
     }
     .cw-roles__what {
       display: block;
@@ -82,6 +87,8 @@ export class MemberRoleDialog {
   protected readonly data = inject<MemberRoleData>(MAT_DIALOG_DATA);
   protected readonly roles = ROLES;
   protected readonly descriptions = ROLE_DESCRIPTIONS;
+  protected readonly labels = ROLE_LABELS;
+  protected readonly inSentence = ROLE_IN_A_SENTENCE;
   protected readonly role = signal<Role>(this.data.member.role);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);

@@ -5,6 +5,7 @@ import { MAT_DIALOG_DATA, MatDialogModule } from '@angular/material/dialog';
 import type { MemberDto, TeamDto } from '../../../../../shared/types';
 import { TeamsApi } from '../../../core/api/teams-api';
 import { problemMessage } from '../../../core/http/problem-message';
+import { AgeGroupLabelPipe } from '../../../shared/pipes/age-group-label';
 
 /** The member and the club's teams, as the members page holds them. */
 export interface MemberTeamsData {
@@ -19,7 +20,7 @@ export interface MemberTeamsData {
  */
 @Component({
   selector: 'cw-member-teams-dialog',
-  imports: [MatButtonModule, MatCheckboxModule, MatDialogModule],
+  imports: [AgeGroupLabelPipe, MatButtonModule, MatCheckboxModule, MatDialogModule],
   template: `
     <h2 mat-dialog-title>{{ data.member.name }}’s teams</h2>
     <mat-dialog-content>
@@ -39,7 +40,7 @@ export interface MemberTeamsData {
                 [disabled]="busy() === team.id"
                 (change)="setOnTeam(team, $event)"
               >
-                {{ team.name }} <span class="cw-muted">({{ team.ageGroup }})</span>
+                {{ team.name }} <span class="cw-muted">({{ team.ageGroup | ageGroupLabel }})</span>
               </mat-checkbox>
             </li>
           }

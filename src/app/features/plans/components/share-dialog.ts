@@ -86,8 +86,8 @@ export interface ShareDialogData {
           </mat-form-field>
         } @else {
           <p>
-            E-mailing the card is for the team's coaches and the club lead. You can make a helper link below
-            and send it yourself: it shows the plan on a phone, with first names only.
+            E-mailing the card is for the team's coaches and the head of coaching. You can make a helper link
+            below and send it yourself: it shows the plan on a phone, with first names only.
           </p>
         }
         <cw-helper-links [planId]="data.planId" />

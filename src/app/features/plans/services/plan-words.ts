@@ -11,7 +11,7 @@ export interface RoleLine {
 }
 
 /**
- * The station's roles as lines: the two sides (side A wears bibs) and who is in goal for a
+ * The station's roles as lines: the two sides (side A wears bibs) and the goalkeepers for a
  * game-like station; attackers and defenders otherwise; then servers, neutrals and the rotation.
  */
 export function roleLines(station: Station, nameOf: (id: string) => string): RoleLine[] {
@@ -19,7 +19,7 @@ export function roleLines(station: Station, nameOf: (id: string) => string): Rol
   const keepers = new Set(roles.goalkeeper ?? []);
   const list = (ids: string[] | undefined, markKeepers = false) =>
     (ids ?? [])
-      .map((id) => (markKeepers && keepers.has(id) ? `${nameOf(id)} (in goal)` : nameOf(id)))
+      .map((id) => (markKeepers && keepers.has(id) ? `${nameOf(id)} (goalkeeper)` : nameOf(id)))
       .join(', ');
   const lines: RoleLine[] = [];
   if (roles.teams) {
@@ -30,7 +30,7 @@ export function roleLines(station: Station, nameOf: (id: string) => string): Rol
     if (roles.attackers?.length) lines.push({ label: 'Attack', text: list(roles.attackers) });
     if (roles.defenders?.length) lines.push({ label: 'Defend (bibs)', text: list(roles.defenders) });
   }
-  if (keepers.size) lines.push({ label: 'In goal', text: list([...keepers]) });
+  if (keepers.size) lines.push({ label: 'Goalkeeper', text: list([...keepers]) });
   if (roles.servers?.length) lines.push({ label: 'Serve', text: list(roles.servers) });
   if (roles.neutrals?.length) lines.push({ label: 'Neutral', text: list(roles.neutrals) });
   if (roles.rotation?.length && !roles.teams) lines.push({ label: 'Rotation', text: list(roles.rotation) });
@@ -39,7 +39,7 @@ export function roleLines(station: Station, nameOf: (id: string) => string): Rol
 
 /** A short tag beside a player's name for the roles worth saying (attackers and plain players get none). */
 export const ROLE_TAGS: Partial<Record<PositionRole, string>> = {
-  goalkeeper: 'In goal',
+  goalkeeper: 'Goalkeeper',
   'team-a': 'Side A · bib',
   'team-b': 'Side B',
   defender: 'Defender · bib',

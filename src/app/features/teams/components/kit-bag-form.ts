@@ -7,7 +7,7 @@ import type { KitBagDto } from '../../../../../shared/types';
 import { controlMessage } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
 
-export const KIT_LABELS = { balls: 'Balls', cones: 'Cones', bibs: 'Bibs', goals: 'Small or pop-up goals' };
+export const KIT_LABELS = { balls: 'Balls', cones: 'Cones', bibs: 'Bibs', goals: 'Small goals' };
 
 /** What is in the team's kit bag, as a form or, for those who may not change it, as plain figures. */
 @Component({

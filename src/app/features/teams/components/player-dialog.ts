@@ -46,7 +46,7 @@ export interface PlayerDialogData {
           <mat-hint>A first name and initial is enough, e.g. "Sam T."</mat-hint>
           <mat-error>{{ message(form.controls.displayName, 'Name') }}</mat-error>
         </mat-form-field>
-        <mat-checkbox formControlName="goalkeeper">Plays in goal</mat-checkbox>
+        <mat-checkbox formControlName="goalkeeper">Goalkeeper</mat-checkbox>
       </mat-dialog-content>
       <mat-dialog-actions align="end">
         <button mat-button type="button" mat-dialog-close>Cancel</button>

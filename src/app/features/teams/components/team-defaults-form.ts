@@ -9,6 +9,7 @@ import type { TeamBody } from '../../../core/api/teams-api';
 import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
 import { LEVEL_LABELS } from '../../../core/labels/plan-labels';
+import { AgeGroupLabelPipe } from '../../../shared/pipes/age-group-label';
 
 const LABELS = {
   name: 'Team name',
@@ -19,7 +20,14 @@ const LABELS = {
 /** The team's name, age group, level and the space it usually trains on: a form, or plain values. */
 @Component({
   selector: 'cw-team-defaults-form',
-  imports: [ReactiveFormsModule, MatFormFieldModule, MatInputModule, MatSelectModule, MatButtonModule],
+  imports: [
+    AgeGroupLabelPipe,
+    ReactiveFormsModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatSelectModule,
+    MatButtonModule,
+  ],
   templateUrl: './team-defaults-form.html',
   styleUrl: './read-only-facts.scss',
   styles: `

@@ -3,7 +3,7 @@ import { FormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectModule } from '@angular/material/select';
-import { ROLES, type MemberDto, type TeamDto } from '../../../../../shared/types';
+import { ROLE_LABELS, ROLES, type MemberDto, type TeamDto } from '../../../../../shared/types';
 import { TeamsApi } from '../../../core/api/teams-api';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { problemMessage } from '../../../core/http/problem-message';
@@ -70,7 +70,9 @@ interface StaffRow {
           <mat-label>Add someone from the club</mat-label>
           <mat-select [(ngModel)]="picked" data-testid="staff-pick">
             @for (member of candidates(); track member.userId) {
-              <mat-option [value]="member.userId">{{ member.name }} ({{ member.role }})</mat-option>
+              <mat-option [value]="member.userId"
+                >{{ member.name }} ({{ roleLabels[member.role] }})</mat-option
+              >
             }
           </mat-select>
         </mat-form-field>
@@ -143,6 +145,7 @@ export class TeamStaff {
   protected readonly confirming = signal<string | null>(null);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
+  protected readonly roleLabels = ROLE_LABELS;
 
   private readonly byId = computed(() => new Map(this.members().map((m) => [m.userId, m])));
 
@@ -173,7 +176,7 @@ export class TeamStaff {
   protected readonly noneToAdd = computed(() =>
     this.user()?.role === 'lead'
       ? 'Everyone in the club is on this team. Invite more people from the Members page.'
-      : 'Every assistant in the club is on this team. Ask the club lead to invite more.',
+      : 'Every assistant in the club is on this team. Ask the head of coaching to invite more.',
   );
 
   protected addStaff(): void {
