@@ -11,3 +11,5 @@ export * from './team-staff';
 export * from './schedule';
 export * from './attendance';
 export * from './helper-view';
+export * from './role-words';
+export * from './squad-words';
