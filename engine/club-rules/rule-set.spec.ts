@@ -30,7 +30,7 @@ describe('validateRuleSet', () => {
     expect(result.ok).toBe(false);
     expect(result.errors).toContainEqual({
       pointer: '/parameters/groupSizes/passing-pattern',
-      message: 'is required',
+      message: 'Group sizes › Passing practice: is missing.',
     });
   });
 
@@ -49,7 +49,7 @@ describe('validateRuleSet', () => {
     doc.parameters.focusBoost['juggling'] = 2;
     expect(validateRuleSet(doc).errors).toContainEqual({
       pointer: '/parameters/focusBoost/juggling',
-      message: 'is not a known key here',
+      message: 'Focus weight › Juggling: is not a setting Conewise knows here.',
     });
   });
 
@@ -59,6 +59,30 @@ describe('validateRuleSet', () => {
     const result = validateRuleSet(doc);
     expect(result.ok).toBe(false);
     expect(result.errors[0].pointer).toBe('/parameters/keepBall/beginner/formats/0');
+    expect(result.errors[0].message).toBe('Keep-ball, Beginner: 5v1 has more than 4 attackers per defender.');
+  });
+
+  it('says in words which group size is out of order, at that cell', () => {
+    const doc = clone();
+    doc.parameters.groupSizes['keep-ball'].beginner = { min: 5, preferred: 5, max: 4 };
+    expect(validateRuleSet(doc).errors).toEqual([
+      {
+        pointer: '/parameters/groupSizes/keep-ball/beginner/max',
+        message: 'Keep-ball, Beginner: the most players in a group (4) is below the fewest (5).',
+      },
+    ]);
+  });
+
+  it('prints no codes, ids or pointers in its messages', () => {
+    const doc = clone();
+    doc.parameters.groupSizes.duel.advanced.preferred = 99;
+    doc.parameters.areas['keep-ball']['U15-adult'].minWidth = 99;
+    doc.parameters.activities[0].players = { min: 9, max: 2 };
+    const messages = validateRuleSet(doc).errors.map((e) => e.message);
+    expect(messages.length).toBe(3);
+    for (const message of messages) {
+      expect(message).not.toMatch(/\/|beginner|advanced|U\d|keep-ball|[a-z]+[A-Z][a-z]+/);
+    }
   });
 
   it('refuses an unknown operator and an unknown event type inside a rule', () => {
@@ -78,11 +102,13 @@ describe('validateRuleSet', () => {
     const setter = doc.rules.findIndex((r) => r.event.type === 'set-parameter');
     (doc.rules[setter].event.params as { path: string }).path = 'layout.nowhere';
     const errors = validateRuleSet(doc).errors;
-    expect(errors).toContainEqual({ pointer: '/rules/1/id', message: 'duplicates /rules/0/id' });
-    expect(errors).toContainEqual({
-      pointer: `/rules/${setter}/event/params/path`,
-      message: 'does not name an existing parameter',
-    });
+    expect(errors.map((e) => e.pointer)).toContain('/rules/1/id');
+    expect(errors.find((e) => e.pointer === '/rules/1/id')?.message).toContain(
+      `Reference: is the same as that of “${doc.rules[0].description.replace(/\.$/, '')}”`,
+    );
+    expect(errors.find((e) => e.pointer === `/rules/${setter}/event/params/path`)?.message).toMatch(
+      /: changes a setting this rule set does not have\.$/,
+    );
   });
 
   it('generatePlan refuses a bad rule set with the pointers', async () => {

@@ -37,6 +37,13 @@ export class RuleSetChange {
   @Column({ type: 'jsonb', default: () => "'[]'" })
   changedPaths!: string[];
 
+  /**
+   * What each touched place said before and after a save, as RuleSetDiffEntry objects (null for
+   * other steps and for saves made before this was kept).
+   */
+  @Column({ type: 'json', nullable: true })
+  changes!: object[] | null;
+
   /** The document as it stood after the change. */
   @Column({ type: 'json' })
   body!: unknown;

@@ -14,6 +14,7 @@ import { PasswordReset1764639000000 } from './1764639000000-password-reset';
 import { EmailVerification1764642000000 } from './1764642000000-email-verification';
 import { SignInThrottle1764640000000 } from './1764640000000-sign-in-throttle';
 import { RateLimitHits1764641000000 } from './1764641000000-rate-limit-hits';
+import { RuleChangeValues1764645000000 } from './1764645000000-rule-change-values';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -33,4 +34,5 @@ export const MIGRATIONS = [
   SignInThrottle1764640000000,
   RateLimitHits1764641000000,
   EmailVerification1764642000000,
+  RuleChangeValues1764645000000,
 ];

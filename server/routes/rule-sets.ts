@@ -28,6 +28,9 @@ export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
       res.json(await ruleSets.history(authOf(req), (req.query as { ruleSetId?: string }).ruleSetId));
     },
   );
+  router.get('/rule-sets/reach', requireAuth, lead, async (req, res) => {
+    res.json(await ruleSets.reach(authOf(req)));
+  });
   router.get('/rule-sets/diff', requireAuth, validate({ query: 'rule-set-diff-query' }), async (req, res) => {
     const { from, to } = req.query as { from: string; to: string };
     res.json(await ruleSets.diff(authOf(req), from, to));
@@ -48,6 +51,9 @@ export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
   router.get('/rule-sets/:id', requireAuth, id, async (req, res) => {
     const dto = await ruleSets.get(authOf(req), req.params['id'] as string);
     res.setHeader('ETag', `"${dto.revision}"`).json(dto);
+  });
+  router.get('/rule-sets/:id/summary', requireAuth, id, async (req, res) => {
+    res.json(await ruleSets.summary(authOf(req), req.params['id'] as string));
   });
   router.put(
     '/rule-sets/:id',

@@ -2,7 +2,14 @@ import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { RuleSetDto } from '../../shared/types/api';
 import type { RuleSetDocument } from '../../shared/types/plan-rules';
-import type { RuleSetChangeDto, RuleSetDiffDto, RuleSetRef } from '../../shared/types/rule-set-api';
+import type {
+  RuleSetChangeDto,
+  RuleSetDiffDto,
+  RuleSetDiffEntry,
+  RuleSetReachDto,
+  RuleSetRef,
+  RuleSetSummaryDto,
+} from '../../shared/types/rule-set-api';
 import { RuleSet } from '../entities/rule-set';
 import { RuleSetChange, type RuleSetChangeAction } from '../entities/rule-set-change';
 import { User } from '../entities/user';
@@ -114,9 +121,13 @@ export class RuleSetService {
         );
       }
       const row = await manager.getRepository(RuleSet).findOneByOrFail({ id });
-      const paths = jsonDiff(current.body, row.body).map((d) => d.path);
-      if (input.name !== undefined && input.name !== current.name) paths.unshift('(name)');
-      await recordChange(manager, auth, row, 'update', paths);
+      const changes = jsonDiff(current.body, row.body);
+      const paths = changes.map((d) => d.path);
+      if (input.name !== undefined && input.name !== current.name) {
+        paths.unshift('(name)');
+        changes.unshift({ path: '/name', change: 'changed', before: current.name, after: name });
+      }
+      await recordChange(manager, auth, row, 'update', paths, changes);
       return this.reload(manager, id);
     });
   }
@@ -183,8 +194,39 @@ export class RuleSetService {
       authorId: r.authorId,
       authorName: r.authorName,
       changedPaths: r.changedPaths,
+      ...(r.changes ? { changes: r.changes as RuleSetDiffEntry[] } : {}),
       createdAt: r.createdAt.toISOString(),
     }));
+  }
+
+  /**
+   * Who plans from the club's published rules: every team of the club (the club's rules are one
+   * for all its teams) and the distinct members on their staff. Publishing changes their next plans.
+   */
+  async reach(auth: AuthContext): Promise<RuleSetReachDto> {
+    const [row] = (await this.dataSource.manager.query(
+      `SELECT (SELECT COUNT(*) FROM team t WHERE t."clubId" = $1)::int AS teams,
+              (SELECT COUNT(DISTINCT tc."userId") FROM team_coach tc
+                 JOIN team t ON t.id = tc."teamId"
+                 JOIN membership m ON m."userId" = tc."userId" AND m."clubId" = t."clubId"
+                WHERE t."clubId" = $1)::int AS coaches`,
+      [auth.clubId],
+    )) as { teams: number; coaches: number }[];
+    return { teams: Number(row?.teams ?? 0), coaches: Number(row?.coaches ?? 0) };
+  }
+
+  /** A version's name, number, state and publishing date, without its document (any member). */
+  async summary(auth: AuthContext, id: RuleSetRefInput): Promise<RuleSetSummaryDto> {
+    const resolved = await this.resolve(this.dataSource.manager, auth, id);
+    const row = resolved.row;
+    return {
+      id: resolved.ref.id,
+      name: row?.name ?? 'Conewise starting rules',
+      version: resolved.ref.version,
+      status: row ? row.status : 'published',
+      publishedAt: row?.publishedAt ? row.publishedAt.toISOString() : null,
+      builtIn: !row,
+    };
   }
 
   async diff(auth: AuthContext, from: RuleSetRefInput, to: RuleSetRefInput): Promise<RuleSetDiffDto> {
@@ -277,6 +319,7 @@ async function recordChange(
   row: RuleSet,
   action: RuleSetChangeAction,
   changedPaths: string[],
+  changes: RuleSetDiffEntry[] | null = null,
 ): Promise<void> {
   const repo = manager.getRepository(RuleSetChange);
   await repo.insert({
@@ -288,6 +331,7 @@ async function recordChange(
     authorId: auth.userId,
     authorName: auth.name,
     changedPaths: changedPaths.slice(0, MAX_CHANGED_PATHS),
+    changes: changes ? changes.slice(0, MAX_CHANGED_PATHS) : null,
     body: row.body as object,
   });
 }

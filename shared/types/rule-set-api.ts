@@ -14,7 +14,29 @@ export interface RuleSetChangeDto {
   authorName: string;
   /** JSON pointers the change touched. */
   changedPaths: string[];
+  /** For a save: what each touched place said before and after (absent on older entries). */
+  changes?: RuleSetDiffEntry[];
   createdAt: string;
+}
+
+/** Answer of GET /api/rule-sets/reach: who plans from the club's published rules. */
+export interface RuleSetReachDto {
+  /** The club's teams: every one plans from the club's rules. */
+  teams: number;
+  /** Distinct members on those teams' staff. */
+  coaches: number;
+}
+
+/** Answer of GET /api/rule-sets/:id/summary: a version without its document. */
+export interface RuleSetSummaryDto {
+  id: string;
+  name: string;
+  version: number;
+  status: string;
+  /** When the version was published (null for a draft and for Conewise's starting rules). */
+  publishedAt: string | null;
+  /** Conewise's own starting rules rather than a version the club made. */
+  builtIn: boolean;
 }
 
 /** One difference between two rule-set documents. */

@@ -233,24 +233,28 @@ function fieldPath(pointer: string): string {
 export function coachWords(path: string, message: string): string {
   const words = fieldWords(path);
   let m: RegExpExecArray | null;
-  if ((m = /must NOT have more than (\d+) characters/.exec(message)))
+  if ((m = /can have at most (\d+) characters/.exec(message)))
     return `${words}: keep it to ${m[1]} characters.`;
-  if (/must NOT have fewer than 1 characters|is required/.test(message)) return `${words} is needed.`;
-  if ((m = /must NOT have more than (\d+) items/.exec(message))) return `${words}: at most ${m[1]}.`;
-  if (/must NOT have fewer than \d+ items/.test(message))
+  if (/cannot be empty|is missing/.test(message)) return `${words} is needed.`;
+  if ((m = /can have at most (\d+) entries/.exec(message))) return `${words}: at most ${m[1]}.`;
+  if (/needs at least (one entry|\d+ entries)/.test(message))
     return path === 'levels' ? 'Choose at least one level.' : 'Add at least one coaching point.';
-  if (/must NOT have duplicate items/.test(message)) return `${words}: each choice once.`;
-  if ((m = /must be >= (\d+)/.exec(message))) return `${words} must be at least ${m[1]}.`;
-  if ((m = /must be <= (\d+)/.exec(message))) return `${words} must be at most ${m[1]}.`;
-  if (/must be integer/.test(message)) return `${words} must be a whole number.`;
-  if (/needs the youngest age first/.test(message))
+  if (/lists the same thing twice/.test(message)) return `${words}: each choice once.`;
+  if ((m = /must be at least (\d+)/.exec(message))) return `${words} must be at least ${m[1]}.`;
+  if ((m = /must be at most (\d+)/.exec(message))) return `${words} must be at most ${m[1]}.`;
+  if (/must be a whole number/.test(message)) return `${words} must be a whole number.`;
+  if (/the oldest age \(.*\) is below the youngest/.test(message))
     return 'The oldest age group must not be younger than the youngest.';
-  if (/needs min ≤ max/.test(message)) return 'Most players must be at least the fewest players.';
-  if (/^duplicates /.test(message)) return 'Another activity already has this name: pick another.';
-  if (path === 'title' && /pattern/.test(message)) return 'Name needs at least one letter or number.';
+  if (/the most players in a group \(\d+\) is below the fewest/.test(message))
+    return 'Most players must be at least the fewest players.';
+  if (/is the same as that of/.test(message)) return 'Another activity already has this name: pick another.';
+  if (path === 'title' && /characters that are not allowed/.test(message))
+    return 'Name needs at least one letter or number.';
   if (path === 'layout') return 'Choose one of the set-ups this kind can draw.';
-  if (/must be one of|allowed values/.test(message)) return `${words}: choose one of the options.`;
-  return `${words} ${message}.`;
+  if (/must be one of/.test(message)) return `${words}: choose one of the options.`;
+  // The check's own sentence names the place already: keep only what is wrong.
+  const what = message.slice(message.indexOf(': ') + 2).replace(/\.$/, '');
+  return `${words}: ${what}.`;
 }
 
 function numberOrNaN(value: number | null): number {
