@@ -30,6 +30,13 @@ export class User {
   @Column({ type: 'timestamptz', nullable: true })
   emailVerifiedAt!: Date | null;
 
+  /**
+   * The person's locale as their browser reports it (BCP 47, e.g. en-US), for dates and clock
+   * times on the cards and e-mails they send; null until a browser sends one (CLUB_LOCALE then).
+   */
+  @Column({ type: 'varchar', length: 35, nullable: true })
+  locale!: string | null;
+
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;
 }

@@ -12,6 +12,7 @@ import { HelperLinks1764637000000 } from './1764637000000-helper-links';
 import { SessionRevocation1764638000000 } from './1764638000000-session-revocation';
 import { PasswordReset1764639000000 } from './1764639000000-password-reset';
 import { EmailVerification1764642000000 } from './1764642000000-email-verification';
+import { UserLocale1764643000000 } from './1764643000000-user-locale';
 import { SignInThrottle1764640000000 } from './1764640000000-sign-in-throttle';
 import { RateLimitHits1764641000000 } from './1764641000000-rate-limit-hits';
 import { RuleChangeValues1764645000000 } from './1764645000000-rule-change-values';
@@ -34,5 +35,6 @@ export const MIGRATIONS = [
   SignInThrottle1764640000000,
   RateLimitHits1764641000000,
   EmailVerification1764642000000,
+  UserLocale1764643000000,
   RuleChangeValues1764645000000,
 ];

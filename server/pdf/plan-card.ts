@@ -1,7 +1,8 @@
 import type { Column, Content, TDocumentDefinitions, TableCell } from 'pdfmake/interfaces';
 import type { Changeover, Equipment, Phase, Plan, PositionRole, Station } from '../../shared/types';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, POSITION_STYLE } from '../../shared/types/activity-words';
-import { minuteLabel, planMinutes, sessionStart } from './clock';
+import { planLength, sessionClock } from '../../shared/time/session-clock';
+import { dayInWords, minuteInWords, timeInWords } from '../services/session-day';
 import { CARD_FONT } from './fonts';
 import { printableContent } from './printable';
 import { diagramMarks, legendSymbolSvg, stationDiagramSvg, type LegendKey } from './station-diagram';
@@ -15,8 +16,10 @@ export interface CardInput {
   teamName: string;
   /** ISO date (YYYY-MM-DD) of the session, if set. */
   date?: string | null;
-  /** "HH:MM": kick-off for a match warm-up, start time for training. */
+  /** "HH:MM": kick-off for a match warm-up (the plan ends there), start time for training. */
   kickOff?: string | null;
+  /** Locale of dates and clock times (BCP 47): the person's stored one, else the club's. */
+  locale?: string;
   /** Display names by player id; falls back to names in the request, then the id. */
   playerNames?: Record<string, string>;
 }
@@ -147,9 +150,11 @@ export function planCardDefinition(
   const { plan } = input;
   const MARGIN = density.margin;
   const contentWidth = PAGE_WIDTH[paper] - 2 * MARGIN;
-  const start = sessionStart(plan, input.kickOff);
+  const locale = input.locale ?? 'en-GB';
+  const clock = sessionClock(plan.request.kind, input.kickOff, planLength(plan.phases));
+  const at = (minute: number) => minuteInWords(clock, minute, locale);
   const context: CardContext = {
-    start,
+    at,
     names: nameLookup(input),
     width: contentWidth,
     density,
@@ -184,8 +189,8 @@ export function planCardDefinition(
       };
     },
     content: printableContent([
-      header(input, start),
-      timeline(plan, start, contentWidth),
+      header(input, at, clock.start !== null),
+      timeline(plan, at, contentWidth),
       kitChecklist(plan),
       legend(plan),
       ...plan.phases.map((phase, i) => phaseBlock(phase, plan.phases.slice(0, i), context)),
@@ -194,13 +199,15 @@ export function planCardDefinition(
   };
 }
 
-function header(input: CardInput, start: number | null): Content {
+function header(input: CardInput, at: MinuteText, timed: boolean): Content {
   const { plan } = input;
   const request = plan.request;
   const when = [
-    input.date ? formatDate(input.date) : null,
-    input.kickOff ? `${plan.request.kind === 'match-warm-up' ? 'kick-off' : 'start'} ${input.kickOff}` : null,
-    `${planMinutes(plan)} min`,
+    input.date ? dayInWords(input.date, input.locale ?? 'en-GB', 'short-day-year') : null,
+    input.kickOff
+      ? `${plan.request.kind === 'match-warm-up' ? 'kick-off' : 'start'} ${timeInWords(input.kickOff, input.locale ?? 'en-GB')}`
+      : null,
+    `${planLength(plan.phases)} min`,
   ].filter(Boolean);
   const facts = [
     request.ageGroup,
@@ -208,7 +215,7 @@ function header(input: CardInput, start: number | null): Content {
     `${request.players.length} players`,
     `${request.coaches} ${request.coaches === 1 ? 'coach' : 'coaches'}`,
     `space ${request.space.width} × ${request.space.length} m`,
-    start !== null ? `arrive by ${minuteLabel(start, -10)}` : null,
+    timed ? `arrive by ${at(-10)}` : null,
   ].filter(Boolean);
   const theme = plan.theme ? ` · theme: ${FOCUS_LABELS[plan.theme] ?? plan.theme}` : '';
   return {
@@ -234,14 +241,14 @@ function header(input: CardInput, start: number | null): Content {
 }
 
 /** One row of phase cells, widths proportional to their minutes, ending at kick-off for a warm-up. */
-function timeline(plan: Plan, start: number | null, width: number): Content {
-  const total = Math.max(planMinutes(plan), 1);
+function timeline(plan: Plan, at: MinuteText, width: number): Content {
+  const total = Math.max(planLength(plan.phases), 1);
   const endCell = plan.request.kind === 'match-warm-up' ? 46 : 0;
   const usable = width - endCell - plan.phases.length * 4;
   const cells: TableCell[] = plan.phases.map((phase) => ({
     fillColor: isBreak(phase) ? BREAK_TINT : TINT[Math.min(Math.max((phase.intensity ?? 2) - 1, 0), 4)],
     stack: [
-      { text: `${minuteLabel(start, phase.startMinute)}–${minuteLabel(start, phase.endMinute)}`, bold: true },
+      { text: `${at(phase.startMinute)}–${at(phase.endMinute)}`, bold: true },
       { text: isBreak(phase) ? 'Drinks' : phase.name, style: 'small' },
     ],
   }));
@@ -255,7 +262,7 @@ function timeline(plan: Plan, start: number | null, width: number): Content {
       fillColor: '#1f3d28',
       color: '#ffffff',
       stack: [
-        { text: minuteLabel(start, total), bold: true },
+        { text: at(total), bold: true },
         { text: 'Kick-off', style: 'small' },
       ],
     });
@@ -309,9 +316,12 @@ function legend(plan: Plan): Content {
   };
 }
 
+/** A plan minute as the card prints it: a clock time in the reader's locale, or "min 12". */
+type MinuteText = (minute: number) => string;
+
 /** What every phase block needs from the card. */
 interface CardContext {
-  start: number | null;
+  at: MinuteText;
   names: (id: string) => string;
   width: number;
   density: CardDensity;
@@ -331,17 +341,14 @@ function firstPhases(plan: Plan): Map<string, Phase> {
 }
 
 function phaseBlock(phase: Phase, allBefore: Phase[], ctx: CardContext): Content {
-  const { start, names, width, density } = ctx;
+  const { at, names, width, density } = ctx;
   const previous = allBefore.at(-1);
-  if (isBreak(phase) || !phase.stations.length) return breakRow(phase, start, density);
-  const heading = [phaseHeading(phase, previous, start)];
+  if (isBreak(phase) || !phase.stations.length) return breakRow(phase, at, density);
+  const heading = [phaseHeading(phase, previous, at)];
   const before = resumed(phase, allBefore);
   if (before) {
-    const same = `same groups, set-up and coaching as ${minuteLabel(start, before.startMinute)}–${minuteLabel(
-      start,
-      before.endMinute,
-    )}: play on`;
-    return { margin: [0, 2, 0, density.gap], stack: [phaseHeading(phase, previous, start, same)] };
+    const same = `same groups, set-up and coaching as ${at(before.startMinute)}–${at(before.endMinute)}: play on`;
+    return { margin: [0, 2, 0, density.gap], stack: [phaseHeading(phase, previous, at, same)] };
   }
   if (phase.stations.length === 1) {
     return {
@@ -406,7 +413,7 @@ function phaseBlock(phase: Phase, allBefore: Phase[], ctx: CardContext): Content
 }
 
 /** A drinks break: one tinted row with its time, no stations. */
-function breakRow(phase: Phase, start: number | null, density: CardDensity): Content {
+function breakRow(phase: Phase, at: MinuteText, density: CardDensity): Content {
   const minutes = phase.endMinute - phase.startMinute;
   return {
     margin: [0, 0, 0, density.gap],
@@ -418,7 +425,7 @@ function breakRow(phase: Phase, start: number | null, density: CardDensity): Con
             fillColor: BREAK_TINT,
             text: [
               {
-                text: `${minuteLabel(start, phase.startMinute)}–${minuteLabel(start, phase.endMinute)}  `,
+                text: `${at(phase.startMinute)}–${at(phase.endMinute)}  `,
                 bold: true,
               },
               { text: phase.name || ACTIVITY_KIND_LABELS.break, bold: true },
@@ -436,7 +443,7 @@ function breakRow(phase: Phase, start: number | null, density: CardDensity): Con
 function phaseHeading(
   phase: Phase,
   previous: Phase | undefined,
-  start: number | null,
+  at: MinuteText,
   note?: string,
 ): Content {
   const setUp = changeoverText(phase.changeover, previous);
@@ -445,7 +452,7 @@ function phaseHeading(
   const kindText = kind && kind.toLowerCase() !== phase.name.toLowerCase() ? ` · ${kind}` : '';
   return {
     text: [
-      `${minuteLabel(start, phase.startMinute)}–${minuteLabel(start, phase.endMinute)}  `,
+      `${at(phase.startMinute)}–${at(phase.endMinute)}  `,
       { text: phase.name },
       {
         text: `${kindText}  · ${minutes} min${phase.intensity ? ` · intensity ${phase.intensity}/5` : ''}`,
@@ -815,7 +822,7 @@ function isBreak(phase: Phase): boolean {
 function shownBefore(station: Station, phase: Phase, ctx: CardContext): string | null {
   const first = ctx.firstShown.get(station.activityId);
   if (!first || first === phase) return null;
-  return `${minuteLabel(ctx.start, first.startMinute)}–${minuteLabel(ctx.start, first.endMinute)}`;
+  return `${ctx.at(first.startMinute)}–${ctx.at(first.endMinute)}`;
 }
 
 /** The phase's activities in station order, one station standing for each. */
@@ -833,16 +840,4 @@ function nameLookup(input: CardInput): (id: string) => string {
 
 function kindLabel(plan: Plan): string {
   return plan.request.kind === 'match-warm-up' ? 'Match warm-up' : 'Training session';
-}
-
-function formatDate(iso: string): string {
-  const date = new Date(`${iso}T12:00:00Z`);
-  if (Number.isNaN(date.getTime())) return iso;
-  return date.toLocaleDateString('en-GB', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  });
 }

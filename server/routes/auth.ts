@@ -10,7 +10,7 @@ import { PasswordResetService, RESET_REQUESTED } from '../services/password-rese
 import type { ApiDeps } from './api-deps';
 
 /**
- * POST /auth/register, POST /auth/login, GET /auth/me, PATCH /auth/me (the caller's own name);
+ * POST /auth/register, POST /auth/login, GET /auth/me, PATCH /auth/me (the caller's own name and locale);
  * POST /auth/sign-out (this session), POST /auth/sign-out-everywhere (every session of the
  * caller), POST /auth/password (a new password, ending every session); POST /auth/password-reset
  * (202 whether or not the address has an account) and POST /auth/password-reset/confirm (a new
@@ -41,7 +41,7 @@ export function authRouter(deps: ApiDeps): Router {
     res.json(userDto(authOf(req)));
   });
   router.patch('/auth/me', deps.requireAuth, validate({ body: 'auth-me-update' }), async (req, res) => {
-    res.json(await account.changeName(authOf(req), req.body));
+    res.json(await account.update(authOf(req), req.body));
   });
   router.post('/auth/sign-out', deps.requireAuth, async (req, res) => {
     await service.signOut(authOf(req));

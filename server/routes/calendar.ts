@@ -34,7 +34,7 @@ export function calendarRouter({ dataSource, config, requireAuth }: ApiDeps): Ro
 
   router.get('/calendar/:file', limiter, validate({ params: 'calendar-param' }), async (req, res) => {
     const token = (req.params['file'] as string).replace(/\.ics$/, '');
-    const text = await calendarFeed(dataSource.manager, token, config.publicUrl);
+    const text = await calendarFeed(dataSource.manager, token, config.publicUrl, config.locale);
     res
       .type('text/calendar; charset=utf-8')
       // Not the API's no-store: calendar apps poll the feed, and it names no player.

@@ -1,5 +1,6 @@
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import type { UserDto } from '../../shared/types/api';
+import { usableLocale } from '../../shared/time/locale-format';
 import { User } from '../entities/user';
 import type { AuthContext } from '../http/auth-context';
 import { unauthorized } from '../http/problem';
@@ -9,11 +10,25 @@ import { userDto } from './auth-service';
 export class AccountService {
   constructor(private readonly dataSource: DataSource) {}
 
-  /** A new display name for the caller; answers the caller as everyone now sees them. */
-  async changeName(auth: AuthContext, input: { name: string }): Promise<UserDto> {
-    const name = input.name.trim();
-    const result = await this.dataSource.getRepository(User).update({ id: auth.userId }, { name });
+  /**
+   * A new display name and/or the browser's locale for the caller; answers the caller as everyone
+   * now sees them. The locale is kept in canonical form (en-gb → en-GB); a tag Intl does not know
+   * is not kept.
+   */
+  async update(auth: AuthContext, input: { name?: string; locale?: string }): Promise<UserDto> {
+    const change: Partial<Pick<User, 'name' | 'locale'>> = {};
+    if (input.name !== undefined) change.name = input.name.trim();
+    if (input.locale !== undefined) change.locale = usableLocale(input.locale, '') || null;
+    const result = await this.dataSource.getRepository(User).update({ id: auth.userId }, change);
     if (!result.affected) throw unauthorized();
-    return userDto({ ...auth, name });
+    return userDto({ ...auth, ...(change.name !== undefined ? { name: change.name } : {}) });
   }
+}
+
+/** The locale dates and times are written in for a person: their stored one, else the club's (CLUB_LOCALE). */
+export async function localeOf(manager: EntityManager, userId: string, fallback: string): Promise<string> {
+  const user = await manager
+    .getRepository(User)
+    .findOne({ where: { id: userId }, select: { id: true, locale: true } });
+  return usableLocale(user?.locale, fallback);
 }

@@ -1,13 +1,15 @@
 import ical, { ICalCalendarMethod } from 'ical-generator';
 import type { EntityManager } from 'typeorm';
 import type { TeamCalendarDto } from '../../shared/types/schedule';
-import { addDays } from '../../shared/types/schedule';
+import { addDays, PLAN_KIND_OF } from '../../shared/types/schedule';
+import { startOffset } from '../../shared/time/session-clock';
 import { ScheduledSession } from '../entities/scheduled-session';
 import { Team } from '../entities/team';
 import { TeamCalendar } from '../entities/team-calendar';
 import { notFound } from '../http/problem';
 import type { ClubScope } from './club-scope';
 import { zonedMoment, todayIn } from './local-time';
+import { timeInWords } from './session-day';
 import { clubTimeZone, ScheduleService } from './schedule-service';
 import { newLinkToken } from './link-token';
 
@@ -34,6 +36,7 @@ export function calendarDocument(
   sessions: ScheduledSession[],
   timeZone: string,
   publicUrl: string,
+  locale: string,
 ): string {
   const label = teamLabel(team);
   const link = `${publicUrl.replace(/\/$/, '')}/teams/${team.id}`;
@@ -45,19 +48,23 @@ export function calendarDocument(
     ttl: 60 * 60,
   });
   for (const session of sessions) {
-    const start = zonedMoment(session.date, session.startTime, timeZone);
+    // A match: from the warm-up Conewise plans to kick-off. Training: the session itself.
+    const start = zonedMoment(session.date, session.startTime, timeZone).add(
+      startOffset(PLAN_KIND_OF[session.kind], session.minutes),
+      'minute',
+    );
     const match = session.kind === 'match';
+    const time = timeInWords(session.startTime, locale);
     calendar.createEvent({
       id: `${session.id}@conewise`,
-      // A match: from the warm-up Conewise plans to kick-off. Training: the session itself.
-      start: match ? start.subtract(session.minutes, 'minute') : start,
-      end: match ? start : start.add(session.minutes, 'minute'),
+      start,
+      end: start.add(session.minutes, 'minute'),
       timezone: timeZone,
       stamp: session.updatedAt,
-      summary: match ? `${label}: match (kick-off ${session.startTime})` : `${label}: training`,
+      summary: match ? `${label}: match (kick-off ${time})` : `${label}: training`,
       description: match
-        ? `Warm-up ${session.minutes} minutes before kick-off at ${session.startTime}.`
-        : `Training, ${session.minutes} minutes.`,
+        ? `Warm-up ${session.minutes} minutes before kick-off at ${time}.`
+        : `Training at ${time}, ${session.minutes} minutes.`,
       ...(session.place ? { location: session.place } : {}),
       url: link,
     });
@@ -92,11 +99,12 @@ export class CalendarService {
   }
 }
 
-/** The feed behind a secret address, for anyone who has it (no account), or 404. */
+/** The feed behind a secret address, for anyone who has it (no account), or 404; times in the club's locale (CLUB_LOCALE). */
 export async function calendarFeed(
   manager: EntityManager,
   token: string,
   publicUrl: string,
+  locale: string,
 ): Promise<string> {
   const feed = await manager.getRepository(TeamCalendar).findOneBy({ token });
   if (!feed) throw notFound('calendar');
@@ -112,5 +120,5 @@ export async function calendarFeed(
     .addOrderBy('s."startTime"')
     .limit(FEED_LIMIT)
     .getMany();
-  return calendarDocument(team, sessions, zone, publicUrl);
+  return calendarDocument(team, sessions, zone, publicUrl, locale);
 }

@@ -70,9 +70,9 @@ export class HelperLinkService {
     return expiresAt > now ? expiresAt : null;
   }
 
-  /** "the end of Wednesday 9 December", in the club's words and time zone. */
-  async expiryWords(expiresAt: Date, clubId: string): Promise<string> {
-    return expiryInWords(expiresAt, this.config.locale, await clubTimeZone(this.dataSource.manager, clubId));
+  /** "the end of Wednesday 9 December", in the given locale (the club's by default) and the club's time zone. */
+  async expiryWords(expiresAt: Date, clubId: string, locale = this.config.locale): Promise<string> {
+    return expiryInWords(expiresAt, locale, await clubTimeZone(this.dataSource.manager, clubId));
   }
 
   /**

@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import type { ShareResultDto } from '../../shared/types/plan-api';
 import type { AppConfig } from '../config';
 import type { AuthContext } from '../http/auth-context';
-import { minuteLabel, planMinutes, sessionStart } from '../pdf/clock';
+import { planLength, sessionClock } from '../../shared/time/session-clock';
 import type { Paper } from '../pdf';
 import type { SessionPlan } from '../entities/session-plan';
 import type { Team } from '../entities/team';
@@ -10,7 +10,8 @@ import { refuseOverDailyLimit } from './daily-mail-limit';
 import { ClubScope } from './club-scope';
 import { HelperLinkService } from './helper-link-service';
 import type { MailQueue } from './mail-queue';
-import { sessionInWords } from './session-day';
+import { localeOf } from './account-service';
+import { minuteInWords, sessionInWords } from './session-day';
 
 export interface SharePlanInput {
   recipients: string[];
@@ -34,7 +35,8 @@ export class PlanCardService {
     const scope = new ClubScope(this.dataSource.manager, auth);
     const row = await scope.plan(planId);
     const team = await scope.teamToRead(row.teamId);
-    return { pdf: await render(row, team, paper), filename: cardFilename(row, team) };
+    const locale = await localeOf(this.dataSource.manager, auth.userId, this.config.locale);
+    return { pdf: await render(row, team, paper, locale), filename: cardFilename(row, team) };
   }
 
   /**
@@ -47,8 +49,10 @@ export class PlanCardService {
     const scope = new ClubScope(this.dataSource.manager, auth);
     const row = await scope.plan(planId);
     const team = await scope.teamToManage(row.teamId);
-    const pdf = await render(row, team, input.paper ?? 'a4');
-    const when = sessionInWords(row.date, row.kickOff, this.config.locale);
+    // The card and the e-mail read in the sender's locale (their browser's), else the club's.
+    const locale = await localeOf(this.dataSource.manager, auth.userId, this.config.locale);
+    const pdf = await render(row, team, input.paper ?? 'a4', locale);
+    const when = sessionInWords(row.date, row.kickOff, locale);
     const subject = `${team.name}: ${kindLabel(row)}${when ? ` on ${when}` : ''}`;
     const attachment = {
       filename: cardFilename(row, team),
@@ -67,10 +71,10 @@ export class PlanCardService {
       const helper = expiresAt
         ? {
             url: (await this.helperLinks.issue(manager, row, auth.userId, input.recipients.length)).url,
-            until: await this.helperLinks.expiryWords(expiresAt, row.clubId),
+            until: await this.helperLinks.expiryWords(expiresAt, row.clubId, locale),
           }
         : null;
-      const text = shareText(row, team, auth.name, when, helper, input.message);
+      const text = shareText(row, team, auth.name, when, helper, locale, input.message);
       const ids: string[] = [];
       for (const recipient of input.recipients) {
         ids.push(
@@ -91,10 +95,13 @@ export class PlanCardService {
   }
 }
 
-async function render(row: SessionPlan, team: Team, paper: Paper): Promise<Buffer> {
+async function render(row: SessionPlan, team: Team, paper: Paper, locale: string): Promise<Buffer> {
   // pdfmake, pdfkit and fontkit are large: load them on the first card, not at server start.
   const { renderPlanPdf } = await import('../pdf');
-  return renderPlanPdf({ plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff }, paper);
+  return renderPlanPdf(
+    { plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff, locale },
+    paper,
+  );
 }
 
 function kindLabel(row: SessionPlan): string {
@@ -116,12 +123,12 @@ function shareText(
   sender: string,
   when: string | null,
   helper: { url: string; until: string } | null,
+  locale: string,
   message?: string,
 ): string {
-  const start = sessionStart(row.plan, row.kickOff);
-  const lines = row.plan.phases.map(
-    (p) => `${minuteLabel(start, p.startMinute)}–${minuteLabel(start, p.endMinute)}  ${p.name}`,
-  );
+  const clock = sessionClock(row.plan.request.kind, row.kickOff, planLength(row.plan.phases));
+  const at = (minute: number) => minuteInWords(clock, minute, locale);
+  const lines = row.plan.phases.map((p) => `${at(p.startMinute)}–${at(p.endMinute)}  ${p.name}`);
   return [
     `${sender} shared the ${kindLabel(row)} for ${team.name}${when ? ` on ${when}` : ''} with you.`,
     message ? `\n${message}\n` : '',
@@ -133,7 +140,7 @@ function shareText(
           '',
         ]
       : []),
-    `${planMinutes(row.plan)} minutes, ${row.playerCount} players:`,
+    `${planLength(row.plan.phases)} minutes, ${row.playerCount} players:`,
     ...lines,
     '',
     'The printable card is attached (PDF).',

@@ -1,8 +1,12 @@
 /**
- * A session's day in words and the end of a helper link's life, in the club's locale and time
- * zone (AppConfig.locale; the club's `timeZone` column). Dates travel as YYYY-MM-DD, times as
- * HH:MM; zone arithmetic is dayjs's (local-time.ts), shared with the schedule and calendar feed.
+ * Dates and clock times in words for the printed card and e-mails, in a person's locale (their
+ * stored `app_user.locale`, else AppConfig.locale) and the club's time zone (the club's `timeZone`
+ * column). Dates travel as YYYY-MM-DD, times as HH:MM; the words come from shared/time's
+ * locale formats (the browser uses the same ones), zone arithmetic from dayjs (local-time.ts),
+ * clock times of a plan from shared/time/session-clock.
  */
+import { clockText, dayText, momentClockText, type DayStyle } from '../../shared/time/locale-format';
+import { parseClock, type SessionClock } from '../../shared/time/session-clock';
 import { dayjs, zonedMoment } from './local-time';
 
 const HOUR_MS = 3_600_000;
@@ -10,26 +14,27 @@ const HOUR_MS = 3_600_000;
 /** A link to a plan without a date works this long after it is made. */
 export const UNDATED_HELPER_LINK_HOURS = 48;
 
-function dayParts(date: string): [number, number, number] {
-  const [y, m, d] = date.split('-').map(Number) as [number, number, number];
-  return [y, m, d];
+/** "2026-12-08" → "Tuesday 8 December" (en-GB), "Tuesday, December 8" (en-US); the calendar day itself, whatever the zone. */
+export function dayInWords(date: string, locale: string, style: DayStyle = 'long-day'): string {
+  return dayText(date, locale, style);
 }
 
-/** "2026-12-08" → "Tuesday 8 December" (en-GB); the calendar day itself, whatever the zone. */
-export function dayInWords(date: string, locale: string): string {
-  const [y, m, d] = dayParts(date);
-  return new Intl.DateTimeFormat(locale, {
-    weekday: 'long',
-    day: 'numeric',
-    month: 'long',
-    timeZone: 'UTC',
-  }).format(new Date(Date.UTC(y, m - 1, d)));
+/** A stored "HH:MM" in the locale's clock: "18:00" (en-GB), "6:00 PM" (en-US); as given when malformed. */
+export function timeInWords(hhmm: string, locale: string): string {
+  const minutes = parseClock(hhmm);
+  return minutes === null ? hhmm : clockText(minutes, locale);
 }
 
 /** "Tuesday 8 December, 18:00"; the day alone without a time; null without a date. */
-export function sessionInWords(date: string | null, kickOff: string | null, locale: string): string | null {
+export function sessionInWords(date: string | null, time: string | null, locale: string): string | null {
   if (!date) return null;
-  return kickOff ? `${dayInWords(date, locale)}, ${kickOff}` : dayInWords(date, locale);
+  return time ? `${dayInWords(date, locale)}, ${timeInWords(time, locale)}` : dayInWords(date, locale);
+}
+
+/** A plan minute on the clock in the locale's style ("18:15", "6:15 PM"), or "min 15" when the plan has no time. */
+export function minuteInWords(clock: SessionClock, minute: number, locale: string): string {
+  const at = clock.at(minute);
+  return at === null ? `min ${minute}` : clockText(at, locale);
 }
 
 /**
@@ -48,5 +53,5 @@ export function expiryInWords(expiresAt: Date, locale: string, timeZone: string)
   if (local.hour() === 0 && local.minute() === 0) {
     return `the end of ${dayInWords(local.subtract(1, 'day').format('YYYY-MM-DD'), locale)}`;
   }
-  return `${dayInWords(local.format('YYYY-MM-DD'), locale)}, ${local.format('HH:mm')}`;
+  return `${dayInWords(local.format('YYYY-MM-DD'), locale)}, ${momentClockText(expiresAt, locale, timeZone)}`;
 }

@@ -12,6 +12,7 @@ import { authInterceptor } from './core/auth/auth-interceptor';
 import { provideIcons } from './core/icons/provide-icons';
 import { idempotencyInterceptor } from './core/http/idempotency-interceptor';
 import { loadingInterceptor } from './core/http/loading-interceptor';
+import { provideLocaleSync } from './core/locale/locale-sync';
 
 export const appConfig: ApplicationConfig = {
   providers: [
@@ -27,6 +28,7 @@ export const appConfig: ApplicationConfig = {
       withInterceptors([loadingInterceptor, idempotencyInterceptor, authInterceptor]),
     ),
     provideIcons(),
+    provideLocaleSync(),
     provideServiceWorker('ngsw-worker.js', {
       enabled: !isDevMode(),
       registrationStrategy: 'registerWhenStable:30000',

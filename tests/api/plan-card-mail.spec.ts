@@ -9,7 +9,7 @@ import { OutboxMessage } from '../../server/entities/outbox-message';
 import { OutboxWorker } from '../../server/mail/outbox-worker';
 import { startFakeSmtp, type FakeSmtp } from '../../server/mail/fake-smtp';
 import { mailSettingsFromEnv } from '../../server/mail/mail-settings';
-import { formatClock } from '../../server/pdf/clock';
+import { storedClock } from '../../shared/time/session-clock';
 import { CLEARED_BODY } from '../../server/services/mail-queue';
 import { clubWithStaff, startTestApp, type ClubCast, type TestApp } from '../support/api-test-app';
 import { createPlan, createSquad, SQUAD_NAMES, type Squad } from './fixtures/plan-helpers';
@@ -82,7 +82,7 @@ describe('the printed card and e-mail through the outbox', () => {
     const total = plan.plan.phases.at(-1)!.endMinute;
     for (const phase of plan.plan.phases) {
       expect(text).toContain(
-        `${formatClock(630 - total + phase.startMinute)}–${formatClock(630 - total + phase.endMinute)}`,
+        `${storedClock(630 - total + phase.startMinute)}–${storedClock(630 - total + phase.endMinute)}`,
       );
       for (const station of phase.stations) {
         expect(text).toContain(station.title);

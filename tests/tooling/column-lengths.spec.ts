@@ -36,6 +36,7 @@ const DEFINITION_WRITES: Record<string, string[]> = {
 const WRITES: Record<string, string[]> = {
   'auth-register.clubName': ['club.name'],
   'auth-register.timeZone': ['club.timeZone'],
+  'auth-me-update.locale': ['app_user.locale'],
   'team-pinned-activities.activityIds[]': ['team.pinnedActivityIds'],
   'rule-set-create.name': ['rule_set.name'],
   'rule-set-update.name': ['rule_set.name'],

@@ -33,8 +33,11 @@ export interface TestBrowser {
   close(): Promise<void>;
 }
 
-/** Launches Chromium with a fresh user-data-dir for one suite. */
-export async function launchBrowser(baseUrl: string): Promise<TestBrowser> {
+/**
+ * Launches Chromium with a fresh user-data-dir for one suite. The browser's locale (dates, clock
+ * times, first day of the week) is British unless a suite asks for another.
+ */
+export async function launchBrowser(baseUrl: string, locale = 'en-GB'): Promise<TestBrowser> {
   const profile = mkdtempSync(join(tmpdir(), 'conewise-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: '/usr/bin/chromium',
@@ -42,6 +45,7 @@ export async function launchBrowser(baseUrl: string): Promise<TestBrowser> {
     headless: true,
     viewport: DESKTOP,
     acceptDownloads: true,
+    locale,
   });
   const origin = new URL(baseUrl).origin;
   const outsideRequests: string[] = [];

@@ -1,6 +1,7 @@
 import type { ScheduleKind } from '../../../../shared/types';
 import { addDays } from '../../../../shared/types';
-import { isoDate, shortDay } from '../time/dates';
+import { dayWords } from '../locale/locale-format';
+import { isoDate } from '../time/dates';
 
 /** Words for a scheduled session's kind. */
 export const SCHEDULE_KIND_LABELS: Record<ScheduleKind, string> = {
@@ -8,9 +9,9 @@ export const SCHEDULE_KIND_LABELS: Record<ScheduleKind, string> = {
   match: 'Match',
 };
 
-/** "Today", "Tomorrow" or "Thu 3 Dec" for a YYYY-MM-DD day. */
+/** "Today", "Tomorrow" or "Thu 3 Dec" (in the browser's locale) for a YYYY-MM-DD day. */
 export function sessionDay(date: string, today = isoDate(new Date())): string {
   if (date === today) return 'Today';
   if (date === addDays(today, 1)) return 'Tomorrow';
-  return shortDay(date);
+  return dayWords(date);
 }

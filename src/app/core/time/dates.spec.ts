@@ -1,26 +1,29 @@
-import { clockTime, minutesOfDay, shortDay, weekRange } from './dates';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { isoDate, weekRange } from './dates';
 
 describe('dates', () => {
-  it('writes a day as a coach reads it: weekday, day of the month, month', () => {
-    expect(shortDay('2026-12-01')).toBe('Tue 1 Dec');
-    expect(shortDay('2027-01-31')).toBe('Sun 31 Jan');
-    expect(shortDay('2028-02-29')).toBe('Tue 29 Feb');
-    expect(shortDay(null)).toBe('No date');
+  afterEach(() => vi.restoreAllMocks());
+
+  it('writes a local day as YYYY-MM-DD', () => {
+    expect(isoDate(new Date(2026, 11, 3))).toBe('2026-12-03');
   });
 
-  it('agrees with the browser’s own British short date for every day of a year (Sep for Sept)', () => {
-    const british = new Intl.DateTimeFormat('en-GB', { weekday: 'short', day: 'numeric', month: 'short' });
-    for (let day = new Date(2026, 0, 1); day.getFullYear() === 2026; day.setDate(day.getDate() + 1)) {
-      const iso = `2026-${String(day.getMonth() + 1).padStart(2, '0')}-${String(day.getDate()).padStart(2, '0')}`;
-      // ICU writes September "Sept"; the app keeps three letters for every month.
-      expect(shortDay(iso), iso).toBe(british.format(day).replace(',', '').replace('Sept', 'Sep'));
-    }
+  it('finds the week from the given first day: Monday to Sunday, or Sunday to Saturday', () => {
+    // Thursday 3 December 2026.
+    expect(weekRange(new Date(2026, 11, 3), 1)).toEqual({ from: '2026-11-30', to: '2026-12-06' });
+    expect(weekRange(new Date(2026, 11, 3), 0)).toEqual({ from: '2026-11-29', to: '2026-12-05' });
+    // A Sunday is the last day of a Monday week and the first of a Sunday week.
+    expect(weekRange(new Date(2026, 11, 6), 1)).toEqual({ from: '2026-11-30', to: '2026-12-06' });
+    expect(weekRange(new Date(2026, 11, 6), 0)).toEqual({ from: '2026-12-06', to: '2026-12-12' });
   });
 
-  it('reads and writes clock times and finds Monday to Sunday', () => {
-    expect(minutesOfDay('09:45')).toBe(585);
-    expect(minutesOfDay('nine')).toBeNull();
-    expect(clockTime(-15)).toBe('23:45');
-    expect(weekRange(new Date(2026, 11, 3))).toEqual({ from: '2026-11-30', to: '2026-12-06' });
+  it('starts the week on the browser locale’s first day', () => {
+    const language = vi.spyOn(navigator, 'language', 'get');
+    language.mockReturnValue('en-US');
+    expect(weekRange(new Date(2026, 11, 3)).from).toBe('2026-11-29');
+    language.mockReturnValue('en-GB');
+    expect(weekRange(new Date(2026, 11, 3)).from).toBe('2026-11-30');
+    language.mockReturnValue('es-ES');
+    expect(weekRange(new Date(2026, 11, 3)).from).toBe('2026-11-30');
   });
 });

@@ -1,11 +1,11 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatTabsModule } from '@angular/material/tabs';
 import type { RuleSetDto } from '../../../../shared/types';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
+import { momentDayWords } from '../../core/locale/locale-format';
 import { ClubActivities, type ActivityEdit } from './club-activities';
 import { RuleHistory } from './rule-history';
 import { RuleJsonEditor } from './rule-json-editor';
@@ -27,7 +27,6 @@ interface Conflict {
 @Component({
   selector: 'cw-club-rules-page',
   imports: [
-    DatePipe,
     MatButtonModule,
     ...ICONS,
     MatTabsModule,
@@ -44,6 +43,8 @@ interface Conflict {
 export class ClubRulesPage {
   private readonly api = inject(RuleSetsApi);
 
+  /** "1 Dec 2026" in the browser's locale. */
+  protected readonly dayOf = (at: string) => momentDayWords(at, 'day-month-year');
   protected readonly versions = signal<RuleSetDto[]>([]);
   protected readonly draft = signal<RuleSetDto | null>(null);
   protected readonly published = signal<RuleSetDto | null>(null);

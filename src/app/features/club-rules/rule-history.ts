@@ -1,4 +1,3 @@
-import { DatePipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -14,6 +13,7 @@ import type { RuleSetDto } from '../../../../shared/types';
 import type { RuleSetChangeDto } from '../../../../shared/types/rule-set-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
+import { momentWords } from '../../core/locale/locale-format';
 import { diffJson, showValue, type JsonChange } from './services/json-diff';
 import { RuleSetsApi } from './services/rule-sets-api';
 
@@ -34,7 +34,7 @@ const STARTING_RULES: RuleSetDto = {
 /** Every version with who saved it and when, a diff between any two, and roll back. */
 @Component({
   selector: 'cw-rule-history',
-  imports: [DatePipe, MatButtonModule, ...ICONS],
+  imports: [MatButtonModule, ...ICONS],
   templateUrl: './rule-history.html',
   styleUrl: './rule-history.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -54,6 +54,8 @@ export class RuleHistory {
   private readonly bodies = signal<Record<string, unknown>>({});
   protected readonly error = signal<string | null>(null);
   protected readonly showValue = showValue;
+  /** "1 Dec 2026, 16:20" in the browser's locale. */
+  protected readonly when = momentWords;
   /** The change log: who saved, published or rolled back what. */
   protected readonly log = signal<RuleSetChangeDto[]>([]);
 

@@ -55,6 +55,7 @@ describe('HelperViewPage', () => {
   afterEach(() => {
     sessionStorage.clear();
     window.location.hash = '';
+    vi.restoreAllMocks();
   });
 
   function setUp() {
@@ -74,6 +75,7 @@ describe('HelperViewPage', () => {
   }
 
   it('sends the token from the fragment in a header and shows the plan read-only with first names', async () => {
+    vi.spyOn(navigator, 'language', 'get').mockReturnValue('en-GB');
     window.location.hash = `#${TOKEN}`;
     const { fixture, http, root } = setUp();
     const request = http.expectOne('/api/helper-view');
@@ -130,5 +132,20 @@ describe('HelperViewPage', () => {
     http.expectNone('/api/helper-view');
     await settle(fixture);
     expect(root.textContent).toContain('This link is not complete');
+  });
+
+  it('starts a training session at its start time, in a US reader’s words and 12-hour clock', async () => {
+    vi.spyOn(navigator, 'language', 'get').mockReturnValue('en-US');
+    window.location.hash = `#${TOKEN}`;
+    const { fixture, http, root } = setUp();
+    http.expectOne('/api/helper-view').flush({ ...view(plan), kind: 'training' });
+    await settle(fixture);
+    const text = root.textContent!.replace(/[\u202f\u00a0]/g, ' ');
+    expect(text).toContain('Tuesday, December 8, start 6:00 PM');
+    // Minute 0 is the start time: the first phase of a training session starts at 6:00 PM.
+    const firstClock = root
+      .querySelector('cw-phase-timeline .cw-clock')!
+      .textContent!.replace(/[\u202f\u00a0]/g, ' ');
+    expect(firstClock.trim()).toBe('6:00 PM');
   });
 });

@@ -7,7 +7,9 @@ import { HelperLinksApi } from '../../core/api/helper-links-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
+import { dayWords, timeWords } from '../../core/locale/locale-format';
 import { untilWords } from '../../core/time/link-expiry';
+import { GIVEN_TIME_IN_A_SENTENCE } from '../../../../shared/time/session-clock';
 import { PhaseTimeline } from '../plans/components/phase-timeline';
 import { PlanNotices } from '../plans/components/plan-notices';
 import { StationCard } from '../plans/components/station-card';
@@ -94,16 +96,10 @@ export class HelperViewPage {
     });
   }
 
-  /** "Tuesday 8 December, kick-off 18:00"; the plan's own date, read as a calendar day. */
+  /** "Tuesday 8 December, kick-off 18:00" in the reader's locale; the plan's own date, read as a calendar day. */
   protected when(view: HelperViewDto): string {
     if (!view.date) return '';
-    const [y, m, d] = view.date.split('-').map(Number) as [number, number, number];
-    const day = new Date(y, m - 1, d).toLocaleDateString('en-GB', {
-      weekday: 'long',
-      day: 'numeric',
-      month: 'long',
-    });
-    const label = view.kind === 'match-warm-up' ? 'kick-off' : 'start';
-    return view.kickOff ? `${day}, ${label} ${view.kickOff}` : day;
+    const day = dayWords(view.date, 'long-day');
+    return view.kickOff ? `${day}, ${GIVEN_TIME_IN_A_SENTENCE[view.kind]} ${timeWords(view.kickOff)}` : day;
   }
 }

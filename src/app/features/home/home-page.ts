@@ -9,7 +9,8 @@ import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
-import { shortDay, weekRange } from '../../core/time/dates';
+import { dayWords, timeWords } from '../../core/locale/locale-format';
+import { weekRange } from '../../core/time/dates';
 import { problemMessage } from '../../core/http/problem-message';
 import { NoTeamYet } from '../../shared/components/no-team-yet';
 import { WeekSessions } from './components/week-sessions';
@@ -37,7 +38,8 @@ export class HomePage {
   protected readonly loaded = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly kindLabels = KIND_LABELS;
-  protected readonly day = shortDay;
+  protected readonly day = dayWords;
+  protected readonly time = timeWords;
   protected readonly canPlan = computed(() => this.auth.hasRole('lead', 'coach'));
 
   protected readonly weeks = computed<TeamWeek[]>(() =>

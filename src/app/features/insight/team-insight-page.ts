@@ -1,4 +1,3 @@
-import { DatePipe, DecimalPipe } from '@angular/common';
 import {
   ChangeDetectionStrategy,
   Component,
@@ -16,6 +15,7 @@ import type { TeamDto } from '../../../../shared/types';
 import type { TeamInsightDto } from '../../../../shared/types/plan-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
+import { dayWords, momentDayWords, numberWords } from '../../core/locale/locale-format';
 import { InsightChart } from './insight-chart';
 import { InsightApi } from './services/insight-api';
 import { LOW_TOUCH_SHARE, summariseInsight } from './services/insight-summary';
@@ -26,7 +26,7 @@ const CONE = '#d9631c';
 /** Who comes and who gets the ball: a team's attendance and estimated touches over its sessions. */
 @Component({
   selector: 'cw-team-insight-page',
-  imports: [DatePipe, DecimalPipe, RouterLink, MatButtonModule, ...ICONS, InsightChart],
+  imports: [RouterLink, MatButtonModule, ...ICONS, InsightChart],
   templateUrl: './team-insight-page.html',
   styleUrl: './team-insight-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -39,6 +39,8 @@ export class TeamInsightPage {
   protected readonly insight = signal<TeamInsightDto | null>(null);
   protected readonly team = signal<TeamDto | null>(null);
   protected readonly error = signal<string | null>(null);
+  /** A number with the browser's separators, no decimals. */
+  protected readonly number = (value: number) => numberWords(value);
 
   protected readonly summary = computed(() => {
     const insight = this.insight();
@@ -59,7 +61,7 @@ export class TeamInsightPage {
     return {
       type: 'bar',
       data: {
-        labels: insight.sessions.map((s) => this.sessionLabel(s.date ?? s.createdAt)),
+        labels: insight.sessions.map((s) => this.sessionLabel(s.date, s.createdAt)),
         datasets: [
           {
             label: 'Players present',
@@ -127,10 +129,13 @@ export class TeamInsightPage {
     this.api.team(teamId).subscribe({ next: (team) => this.team.set(team), error: () => undefined });
   }
 
-  private sessionLabel(iso: string): string {
-    const date = new Date(iso);
-    return Number.isNaN(date.getTime())
-      ? iso
-      : date.toLocaleDateString(undefined, { day: 'numeric', month: 'short' });
+  /** "1 Dec 2026" in the browser's locale: the session's day, else the day the plan was made. */
+  protected sessionDay(date: string | null, createdAt: string): string {
+    return date ? dayWords(date, 'day-month-year') : momentDayWords(createdAt, 'day-month-year');
+  }
+
+  /** "1 Dec" for the chart's axis, in the browser's locale. */
+  private sessionLabel(date: string | null, createdAt: string): string {
+    return date ? dayWords(date, 'day-month') : momentDayWords(createdAt, 'day-month');
   }
 }

@@ -55,7 +55,9 @@ import { problemFieldErrors, problemMessage } from '../../core/http/problem-mess
 import { RetryKey } from '../../core/http/retry-key';
 import { FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { SCHEDULE_KIND_LABELS, sessionDay } from '../../core/labels/schedule-labels';
+import { dayWords, timeWords } from '../../core/locale/locale-format';
 import { isoDate } from '../../core/time/dates';
+import { GIVEN_TIME_LABELS } from '../../../../shared/time/session-clock';
 import { buildPlanRequest, wizardFieldOf, type WizardValue } from './services/plan-request-builder';
 import { SpacePreset, SpacePresets } from './services/space-presets';
 import { PlanHandover } from '../plans/services/plan-handover';
@@ -161,6 +163,8 @@ export class PlanWizard {
   protected readonly status = signal('');
   protected readonly kinds = PLAN_KINDS;
   protected readonly kindLabels = KIND_LABELS;
+  /** "Kick-off" for a match warm-up (the plan ends there), "Start time" for a training session. */
+  protected readonly givenTimeLabels = GIVEN_TIME_LABELS;
   protected readonly focuses = FOCUSES;
   protected readonly focusLabels = FOCUS_LABELS;
   protected readonly message = controlMessage;
@@ -387,7 +391,8 @@ export class PlanWizard {
           focus: r.focus ?? [],
           kickOff: past.kickOff ?? '',
         });
-        this.status.set(`Started from the plan of ${past.date ?? 'an earlier day'}. Tick who is here today.`);
+        const day = past.date ? dayWords(past.date, 'long-day') : 'an earlier day';
+        this.status.set(`Started from the plan of ${day}. Tick who is here today.`);
       },
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
@@ -408,7 +413,7 @@ export class PlanWizard {
         const words = [
           `${s.teamName}: ${SCHEDULE_KIND_LABELS[s.kind].toLowerCase()}`,
           sessionDay(s.date),
-          s.startTime,
+          timeWords(s.startTime),
           s.place,
         ]
           .filter(Boolean)

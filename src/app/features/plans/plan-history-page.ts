@@ -12,7 +12,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
-import { shortDay } from '../../core/time/dates';
+import { dayWords, timeWords } from '../../core/locale/locale-format';
 import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 
@@ -41,7 +41,8 @@ export class PlanHistoryPage {
   protected readonly error = signal<string | null>(null);
   protected readonly loaded = signal(false);
   protected readonly kindLabels: Record<string, string> = KIND_LABELS;
-  protected readonly day = shortDay;
+  protected readonly day = dayWords;
+  protected readonly time = timeWords;
   protected readonly canPlan = computed(() => this.auth.hasRole('lead', 'coach'));
   /** On a phone the session and players fold under the date, so the row fits 390 px. */
   protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);

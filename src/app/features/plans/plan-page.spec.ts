@@ -1,4 +1,5 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
+import { NEW_CLUB_UNIT_FIELDS } from '../../../../shared/units';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
@@ -155,6 +156,7 @@ describe('PlanPage', () => {
         clubName: 'Harbour',
         emailVerified: true,
         role,
+        ...NEW_CLUB_UNIT_FIELDS,
       },
     });
     const fixture = TestBed.createComponent(PlanPage);
@@ -365,6 +367,7 @@ describe('PlanPage', () => {
   });
 
   it('shows every phase with clock times counting to kick-off, and every player once in each', async () => {
+    vi.spyOn(navigator, 'language', 'get').mockReturnValue('en-GB');
     const { root } = await setUp();
     const phases = root.querySelectorAll('[data-testid="phase"]');
     expect(phases.length).toBe(plan.phases.length);
@@ -372,6 +375,7 @@ describe('PlanPage', () => {
     const timeline = root.querySelector('cw-phase-timeline')!.textContent!;
     expect(timeline).toContain('10:10');
     expect(timeline).toContain('10:30');
+    vi.restoreAllMocks();
     for (const phase of Array.from(phases)) {
       const ids = Array.from(phase.querySelectorAll('[data-player]')).map((el) =>
         el.getAttribute('data-player'),

@@ -28,7 +28,8 @@ import { WHEN_IDLE } from '../../core/layout/when-idle';
 import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
-import { shortDay } from '../../core/time/dates';
+import { dayWords, timeWords } from '../../core/locale/locale-format';
+import { GIVEN_TIME_IN_A_SENTENCE } from '../../../../shared/time/session-clock';
 import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
 import { EditAnswer } from './components/edit-answer';
 import { PhaseTimeline } from './components/phase-timeline';
@@ -85,7 +86,9 @@ export class PlanPage {
 
   protected readonly kindLabels = KIND_LABELS;
   protected readonly focusLabels = FOCUS_LABELS;
-  protected readonly day = shortDay;
+  protected readonly day = dayWords;
+  protected readonly time = timeWords;
+  protected readonly givenTime = GIVEN_TIME_IN_A_SENTENCE;
   protected readonly isBreak = isBreak;
   protected readonly breakWords = breakWords;
   protected readonly canEdit = computed(() => this.auth.hasRole('lead', 'coach'));

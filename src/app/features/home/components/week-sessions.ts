@@ -6,6 +6,7 @@ import { ScheduleApi } from '../../../core/api/schedule-api';
 import { problemMessage } from '../../../core/http/problem-message';
 import { ICONS } from '../../../core/icons/shipped-icon';
 import { SCHEDULE_KIND_LABELS, sessionDay } from '../../../core/labels/schedule-labels';
+import { timeWords } from '../../../core/locale/locale-format';
 
 /** The next seven days' training nights and matches of the member's teams, each with its plan or "Plan it". */
 @Component({
@@ -27,7 +28,7 @@ import { SCHEDULE_KIND_LABELS, sessionDay } from '../../../core/labels/schedule-
         @for (s of sessions(); track s.id) {
           <li class="cw-session" [class.cw-planned]="!!s.planId">
             <div class="cw-what">
-              <span class="cw-when">{{ day(s.date) }} · {{ s.startTime }}</span>
+              <span class="cw-when">{{ day(s.date) }} · {{ time(s.startTime) }}</span>
               <span class="cw-title">{{ s.teamName }}: {{ kindLabels[s.kind] }}</span>
               <span class="cw-muted">
                 {{ s.minutes }} min{{ s.kind === 'match' ? ' warm-up' : ''
@@ -124,6 +125,7 @@ export class WeekSessions {
   protected readonly error = signal<string | null>(null);
   protected readonly kindLabels = SCHEDULE_KIND_LABELS;
   protected readonly day = sessionDay;
+  protected readonly time = timeWords;
 
   constructor() {
     this.api.upcoming(7).subscribe({

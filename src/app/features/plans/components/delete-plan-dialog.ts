@@ -5,11 +5,11 @@ import type { PlanSummaryDto } from '../../../../../shared/types';
 import { PlansApi } from '../../../core/api/plans-api';
 import { problemMessage } from '../../../core/http/problem-message';
 import { KIND_LABELS } from '../../../core/labels/plan-labels';
-import { shortDay } from '../../../core/time/dates';
+import { dayWords } from '../../../core/locale/locale-format';
 
 /** "Training session of Tue 1 Dec for U10 Kestrels": how a plan is named when it is deleted. */
 export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'>): string {
-  const day = plan.date ? ` of ${shortDay(plan.date)}` : '';
+  const day = plan.date ? ` of ${dayWords(plan.date)}` : '';
   return `${KIND_LABELS[plan.kind]}${day} for ${plan.teamName}`;
 }
 

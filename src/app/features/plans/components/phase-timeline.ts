@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import type { Phase } from '../../../../../shared/types';
-import { clockTime, minutesOfDay } from '../../../core/time/dates';
 import { isBreak } from '../services/plan-words';
+import { timelineClock } from '../services/timeline-clock';
 
 interface TimelineRow {
   index: number;
@@ -16,7 +16,10 @@ interface TimelineRow {
   share: number;
 }
 
-/** The phases in order, drinks breaks among them, with clock times that count down to kick-off. */
+/**
+ * The phases in order, drinks breaks among them, with clock times: a match warm-up counts down to
+ * kick-off, a training session runs from its start time.
+ */
 @Component({
   selector: 'cw-phase-timeline',
   template: `
@@ -49,21 +52,17 @@ interface TimelineRow {
 export class PhaseTimeline {
   /** The plan's phases, drinks breaks included. */
   readonly phases = input.required<Phase[]>();
-  /** HH:MM the plan ends at (kick-off for a match warm-up). */
+  /** The plan's HH:MM time: kick-off for a match warm-up (the plan ends there), start time for training. */
   readonly kickOff = input<string | null>(null);
   /** Whether the plan ends at a kick-off (a match warm-up) rather than at the end of training. */
   readonly matchDay = input(true);
 
   protected readonly total = computed(() => this.phases().at(-1)?.endMinute ?? 0);
   protected readonly endLabel = computed(() => (this.matchDay() ? 'kick-off' : 'the end'));
-  private readonly startOfDay = computed(() => {
-    const end = minutesOfDay(this.kickOff());
-    return end === null ? null : end - this.total();
-  });
-  protected readonly endClock = computed(() => {
-    const end = minutesOfDay(this.kickOff());
-    return end === null ? null : clockTime(end);
-  });
+  private readonly clock = computed(() =>
+    timelineClock(this.phases(), this.matchDay() ? 'match-warm-up' : 'training', this.kickOff()),
+  );
+  protected readonly endClock = computed(() => this.clock().end);
 
   protected readonly rows = computed<TimelineRow[]>(() =>
     this.phases().map((phase, index) => ({
@@ -72,7 +71,7 @@ export class PhaseTimeline {
       isBreak: isBreak(phase),
       minutes: phase.endMinute - phase.startMinute,
       setUpMinutes: phase.changeover?.minutes ?? 0,
-      clock: this.startOfDay() === null ? null : clockTime((this.startOfDay() ?? 0) + phase.startMinute),
+      clock: this.clock().starts[index] ?? null,
       toKickOff: this.total() - phase.startMinute,
       share: Math.max(1, phase.endMinute - phase.startMinute),
     })),

@@ -8,6 +8,7 @@ import { ScheduleApi } from '../../../core/api/schedule-api';
 import { problemMessage } from '../../../core/http/problem-message';
 import { ICONS } from '../../../core/icons/shipped-icon';
 import { SCHEDULE_KIND_LABELS, sessionDay } from '../../../core/labels/schedule-labels';
+import { timeWords } from '../../../core/locale/locale-format';
 import { ScheduleDialog, type ScheduleDialogData } from './schedule-dialog';
 
 /**
@@ -50,6 +51,7 @@ export class TeamSchedule {
   protected readonly busy = signal(false);
   protected readonly kindLabels = SCHEDULE_KIND_LABELS;
   protected readonly day = sessionDay;
+  protected readonly time = timeWords;
 
   protected readonly feedUrl = computed(() => {
     const path = this.feedPath();
