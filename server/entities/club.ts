@@ -1,10 +1,13 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Check, Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import type { DistanceUnit, TemperatureUnit } from '../../shared/units';
 
 /** A club's time zone until it says otherwise (the column's default, and the fallback for unknown zones). */
 export const DEFAULT_TIME_ZONE = 'Europe/London';
 
 /** A football club: the boundary of every piece of data. */
 @Entity({ name: 'club' })
+@Check('CHK_club_distanceUnit', `"distanceUnit" IN ('metres', 'yards')`)
+@Check('CHK_club_temperatureUnit', `"temperatureUnit" IN ('celsius', 'fahrenheit')`)
 export class Club {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -15,6 +18,14 @@ export class Club {
   /** IANA time zone of the club's sessions: their days and times are local to it. */
   @Column({ type: 'varchar', length: 64, default: DEFAULT_TIME_ZONE })
   timeZone!: string;
+
+  /** The units the club reads distances in (plans stay in metres): "metres" or "yards". */
+  @Column({ type: 'varchar', length: 10, default: 'metres' })
+  distanceUnit!: DistanceUnit;
+
+  /** The units the club reads temperatures in (requests stay in °C): "celsius" or "fahrenheit". */
+  @Column({ type: 'varchar', length: 10, default: 'celsius' })
+  temperatureUnit!: TemperatureUnit;
 
   @CreateDateColumn({ type: 'timestamptz' })
   createdAt!: Date;

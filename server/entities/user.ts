@@ -1,7 +1,10 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import { Check, Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+import type { DistanceUnit, TemperatureUnit } from '../../shared/units';
 
 /** A person who signs in. The e-mail is stored lower-cased and is unique. */
 @Entity({ name: 'app_user' })
+@Check('CHK_app_user_distanceUnit', `"distanceUnit" IN ('metres', 'yards')`)
+@Check('CHK_app_user_temperatureUnit', `"temperatureUnit" IN ('celsius', 'fahrenheit')`)
 export class User {
   @PrimaryGeneratedColumn('uuid')
   id!: string;
@@ -29,6 +32,14 @@ export class User {
    */
   @Column({ type: 'timestamptz', nullable: true })
   emailVerifiedAt!: Date | null;
+
+  /** The person's own distance unit; null follows the club's. */
+  @Column({ type: 'varchar', length: 10, nullable: true })
+  distanceUnit!: DistanceUnit | null;
+
+  /** The person's own temperature unit; null follows the club's. */
+  @Column({ type: 'varchar', length: 10, nullable: true })
+  temperatureUnit!: TemperatureUnit | null;
 
   /**
    * The person's locale as their browser reports it (BCP 47, e.g. en-US), for dates and clock

@@ -1,5 +1,6 @@
 import type { Request } from 'express';
 import type { Role } from '../../shared/types/api';
+import type { UnitOverride, Units } from '../../shared/units';
 import { unauthorized } from './problem';
 
 /** Who is calling, loaded from the database on every request (nothing kept in memory). */
@@ -12,6 +13,11 @@ export interface AuthContext {
   email: string;
   /** Whether the person confirmed their e-mail address (a mailed link opened). */
   emailVerified: boolean;
+  /** The units the caller reads (their own choice, else the club's): cards and e-mails use them. */
+  units: Units;
+  /** The club's unit setting, and the caller's own choice (null follows the club). */
+  clubUnits: Units;
+  ownUnits: UnitOverride;
   /** The session token's id and expiry (seconds since 1970), for signing this one session out. */
   token?: { id: string; expiresAt: number };
 }

@@ -13,6 +13,8 @@ import { preparedQuery } from '../db/prepared-query';
 import { Membership } from '../entities/membership';
 import type { AuthContext } from '../http/auth-context';
 import { HttpError, unauthorized } from '../http/problem';
+import type { DistanceUnit, TemperatureUnit } from '../../shared/units';
+import { unitFields } from '../services/unit-settings';
 import { VerifiedTokens } from '../http/verified-tokens';
 
 /** Claims Conewise puts in its tokens. */
@@ -117,11 +119,17 @@ export async function loadAuthContext(
     email: string;
     emailVerified: boolean;
     clubName: string;
+    clubDistanceUnit: DistanceUnit;
+    clubTemperatureUnit: TemperatureUnit;
+    ownDistanceUnit: DistanceUnit | null;
+    ownTemperatureUnit: TemperatureUnit | null;
   }>(
     dataSource.manager,
     'auth-context',
     `SELECT m.role, u.name AS "userName", u.email, u."emailVerifiedAt" IS NOT NULL AS "emailVerified",
-              c.name AS "clubName"
+              c.name AS "clubName", c."distanceUnit" AS "clubDistanceUnit",
+              c."temperatureUnit" AS "clubTemperatureUnit", u."distanceUnit" AS "ownDistanceUnit",
+              u."temperatureUnit" AS "ownTemperatureUnit"
          FROM membership m
          JOIN app_user u ON u.id = m."userId"
          JOIN club c ON c.id = m."clubId"
@@ -140,6 +148,10 @@ export async function loadAuthContext(
     name: row.userName,
     email: row.email,
     emailVerified: row.emailVerified,
+    ...unitFields(
+      { distance: row.clubDistanceUnit, temperature: row.clubTemperatureUnit },
+      { distance: row.ownDistanceUnit, temperature: row.ownTemperatureUnit },
+    ),
     ...(token.id !== null && token.expiresAt !== null
       ? { token: { id: token.id, expiresAt: token.expiresAt } }
       : {}),

@@ -16,6 +16,7 @@ import { UserLocale1764643000000 } from './1764643000000-user-locale';
 import { SignInThrottle1764640000000 } from './1764640000000-sign-in-throttle';
 import { RateLimitHits1764641000000 } from './1764641000000-rate-limit-hits';
 import { RuleChangeValues1764645000000 } from './1764645000000-rule-change-values';
+import { Units1764644000000 } from './1764644000000-units';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -36,5 +37,6 @@ export const MIGRATIONS = [
   RateLimitHits1764641000000,
   EmailVerification1764642000000,
   UserLocale1764643000000,
+  Units1764644000000,
   RuleChangeValues1764645000000,
 ];

@@ -3,6 +3,7 @@ import type { Changeover, Equipment, Phase, Plan, PositionRole, Station } from '
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, POSITION_STYLE } from '../../shared/types/activity-words';
 import { planLength, sessionClock } from '../../shared/time/session-clock';
 import { dayInWords, minuteInWords, timeInWords } from '../services/session-day';
+import { DEFAULT_UNITS, formatSize, inUnitsDeep, type DistanceUnit, type Units } from '../../shared/units';
 import { CARD_FONT } from './fonts';
 import { printableContent } from './printable';
 import { diagramMarks, legendSymbolSvg, stationDiagramSvg, type LegendKey } from './station-diagram';
@@ -20,6 +21,8 @@ export interface CardInput {
   kickOff?: string | null;
   /** Locale of dates and clock times (BCP 47): the person's stored one, else the club's. */
   locale?: string;
+  /** Units of the person printing or sharing (their own, else the club's); metres and °C when absent. */
+  units?: Units;
   /** Display names by player id; falls back to names in the request, then the id. */
   playerNames?: Record<string, string>;
 }
@@ -147,7 +150,10 @@ export function planCardDefinition(
   density: CardDensity = REGULAR,
   onPageCount?: (pages: number) => void,
 ): TDocumentDefinitions {
-  const { plan } = input;
+  const units = input.units ?? DEFAULT_UNITS;
+  // The engine words its warnings and notes in metres and °C: the card reads in the printer's units.
+  const plan = inUnitsDeep(input.plan, units);
+  input = { ...input, plan, units };
   const MARGIN = density.margin;
   const contentWidth = PAGE_WIDTH[paper] - 2 * MARGIN;
   const locale = input.locale ?? 'en-GB';
@@ -159,6 +165,7 @@ export function planCardDefinition(
     width: contentWidth,
     density,
     firstShown: firstPhases(plan),
+    distance: units.distance,
   };
 
   return {
@@ -214,7 +221,7 @@ function header(input: CardInput, at: MinuteText, timed: boolean): Content {
     request.level,
     `${request.players.length} players`,
     `${request.coaches} ${request.coaches === 1 ? 'coach' : 'coaches'}`,
-    `space ${request.space.width} × ${request.space.length} m`,
+    `space ${formatSize((input.units ?? DEFAULT_UNITS).distance, request.space)}`,
     timed ? `arrive by ${at(-10)}` : null,
   ].filter(Boolean);
   const theme = plan.theme ? ` · theme: ${FOCUS_LABELS[plan.theme] ?? plan.theme}` : '';
@@ -327,6 +334,8 @@ interface CardContext {
   density: CardDensity;
   /** Where each activity's coaching is first printed; later phases point back to it. */
   firstShown: Map<string, Phase>;
+  /** The unit of the diagrams' side labels. */
+  distance: DistanceUnit;
 }
 
 /** Each activity's first phase on the card (drinks breaks and resumed phases print none). */
@@ -370,7 +379,7 @@ function phaseBlock(phase: Phase, allBefore: Phase[], ctx: CardContext): Content
   for (let i = 0; i < count; i += perRow) {
     const row: TableCell[] = phase.stations
       .slice(i, i + perRow)
-      .map((station, j) => stationCell(phase, station, i + j + 1, names, cellWidth, density));
+      .map((station, j) => stationCell(phase, station, i + j + 1, names, cellWidth, density, ctx.distance));
     while (row.length < perRow) row.push({ text: '' });
     rows.push(row);
   }
@@ -494,7 +503,11 @@ export function changeoverText(
 function soloStation(phase: Phase, station: Station, ctx: CardContext): Content {
   const { names, width, density } = ctx;
   const shownAt = shownBefore(station, phase, ctx);
-  const diagram = stationDiagramSvg(station, { maxWidth: 170, maxHeight: density.soloDiagramHeight });
+  const diagram = stationDiagramSvg(station, {
+    maxWidth: 170,
+    maxHeight: density.soloDiagramHeight,
+    distance: ctx.distance,
+  });
   return {
     columnGap: 10,
     columns: [
@@ -576,11 +589,13 @@ function stationCell(
   names: (id: string) => string,
   width: number,
   density: CardDensity,
+  distance: DistanceUnit,
 ): TableCell {
   const inner = width - 6;
   const diagram = stationDiagramSvg(station, {
     maxWidth: Math.min(inner - 2, 150),
     maxHeight: density.gridDiagramHeight,
+    distance,
   });
   const group = groupList(station, names);
   const picture: Content = { svg: diagram.svg, width: diagram.width, height: diagram.height };

@@ -9,6 +9,7 @@ import type {
 } from '../../shared/types';
 import { MARKER_STYLE, POSITION_STYLE } from '../../shared/types/activity-words';
 import { CARD_FONT } from './fonts';
+import { formatDistance, type DistanceUnit } from '../../shared/units';
 import { printable } from './printable';
 
 /** The card's own inks for what the shared styles leave to each medium: grass, edges, labels. */
@@ -39,6 +40,8 @@ export function diagramMarks(station: Station): Set<LegendKey> {
 export interface DiagramSize {
   maxWidth: number;
   maxHeight: number;
+  /** The unit of the side labels (the drawing stays in metres); metres when absent. */
+  distance?: DistanceUnit;
 }
 
 /**
@@ -88,8 +91,9 @@ export function stationDiagramSvg(
       INK.grass
     }" stroke="${INK.edge}" stroke-width="0.8"/>`,
   );
-  parts.push(text(corner.x + areaWidth / 2, 4.6, `${fmt(station.area.width)} m`, 5));
-  parts.push(text(4.4, corner.y + areaLength / 2, `${fmt(station.area.length)} m`, 5, -90));
+  const unit = size.distance ?? 'metres';
+  parts.push(text(corner.x + areaWidth / 2, 4.6, sideLabel(unit, station.area.width), 5));
+  parts.push(text(4.4, corner.y + areaLength / 2, sideLabel(unit, station.area.length), 5, -90));
   for (const zone of zones) parts.push(zoneSvg(zone, px(zone), scale));
   for (const line of lines) parts.push(lineSvg(line, px(line.from), px(line.to)));
   for (const goal of goals) parts.push(goalSvg(goal, px(goal), scale));
@@ -181,8 +185,10 @@ function escapeXml(value: string): string {
   return value.replace(/[<>&"']/g, (c) => `&#${c.charCodeAt(0)};`);
 }
 
-function fmt(metres: number): string {
-  return Number.isInteger(metres) ? String(metres) : metres.toFixed(1);
+/** A side's length as the card prints it: metres as planned (a tenth where needed), yards whole. */
+function sideLabel(unit: DistanceUnit, metres: number): string {
+  if (unit !== 'metres') return formatDistance(unit, metres);
+  return `${Number.isInteger(metres) ? String(metres) : metres.toFixed(1)} m`;
 }
 
 function round(n: number): number {

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import type { ApiDeps } from './api-deps';
 import { authRouter } from './auth';
 import { calendarRouter } from './calendar';
+import { clubUnitsRouter } from './club-units';
 import { healthRouter } from './health';
 import { helperLinksRouter } from './helper-links';
 import { invitationsRouter } from './invitations';
@@ -36,5 +37,6 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(teamInsightRouter(deps));
   api.use(scheduleRouter(deps));
   api.use(calendarRouter(deps));
+  api.use(clubUnitsRouter(deps));
   return api;
 }

@@ -10,6 +10,7 @@ import { HttpError, unauthorized } from '../http/problem';
 import type { EmailVerificationService } from './email-verification-service';
 import { clearFailures, countFailure, refuseIfLocked } from './sign-in-throttle';
 import { signToken } from './token';
+import { unitsOf } from './unit-settings';
 
 /** bcrypt work factor: about 70 ms a hash with bcryptjs on this machine. */
 export const BCRYPT_ROUNDS = 10;
@@ -31,6 +32,9 @@ export function userDto(auth: AuthContext): UserDto {
     clubId: auth.clubId,
     clubName: auth.clubName,
     role: auth.role,
+    units: auth.units,
+    clubUnits: auth.clubUnits,
+    ownUnits: auth.ownUnits,
   };
 }
 
@@ -82,6 +86,7 @@ export class AuthService {
         name: user.name,
         email,
         emailVerified: false,
+        ...unitsOf(club, null),
       };
       return context;
     });
@@ -111,6 +116,7 @@ export class AuthService {
         name: user.name,
         email: user.email,
         emailVerified: user.emailVerifiedAt !== null,
+        ...unitsOf(membership.club, user),
       },
       user.tokenVersion,
     );

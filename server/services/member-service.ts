@@ -12,6 +12,7 @@ import { AuthService, hashPassword, normaliseEmail } from './auth-service';
 import type { ClubScope } from './club-scope';
 import { refuseOverDailyLimit } from './daily-mail-limit';
 import { INVITATION_MAIL, type MailQueue } from './mail-queue';
+import { unitsOf } from './unit-settings';
 import { hashLinkToken, newLinkToken } from './link-token';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -312,6 +313,7 @@ export class InvitationAcceptService {
         name: user.name,
         email: user.email,
         emailVerified: true,
+        ...unitsOf(club, null),
       };
     });
     return new AuthService(this.dataSource, this.config).respond(auth);

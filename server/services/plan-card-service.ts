@@ -11,6 +11,7 @@ import { ClubScope } from './club-scope';
 import { HelperLinkService } from './helper-link-service';
 import type { MailQueue } from './mail-queue';
 import { localeOf } from './account-service';
+import type { Units } from '../../shared/units';
 import { minuteInWords, sessionInWords } from './session-day';
 
 export interface SharePlanInput {
@@ -36,7 +37,7 @@ export class PlanCardService {
     const row = await scope.plan(planId);
     const team = await scope.teamToRead(row.teamId);
     const locale = await localeOf(this.dataSource.manager, auth.userId, this.config.locale);
-    return { pdf: await render(row, team, paper, locale), filename: cardFilename(row, team) };
+    return { pdf: await render(row, team, paper, locale, auth.units), filename: cardFilename(row, team) };
   }
 
   /**
@@ -51,7 +52,7 @@ export class PlanCardService {
     const team = await scope.teamToManage(row.teamId);
     // The card and the e-mail read in the sender's locale (their browser's), else the club's.
     const locale = await localeOf(this.dataSource.manager, auth.userId, this.config.locale);
-    const pdf = await render(row, team, input.paper ?? 'a4', locale);
+    const pdf = await render(row, team, input.paper ?? 'a4', locale, auth.units);
     const when = sessionInWords(row.date, row.kickOff, locale);
     const subject = `${team.name}: ${kindLabel(row)}${when ? ` on ${when}` : ''}`;
     const attachment = {
@@ -95,11 +96,17 @@ export class PlanCardService {
   }
 }
 
-async function render(row: SessionPlan, team: Team, paper: Paper, locale: string): Promise<Buffer> {
+async function render(
+  row: SessionPlan,
+  team: Team,
+  paper: Paper,
+  locale: string,
+  units: Units,
+): Promise<Buffer> {
   // pdfmake, pdfkit and fontkit are large: load them on the first card, not at server start.
   const { renderPlanPdf } = await import('../pdf');
   return renderPlanPdf(
-    { plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff, locale },
+    { plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff, locale, units },
     paper,
   );
 }

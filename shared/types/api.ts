@@ -2,6 +2,7 @@
 import type { AgeGroup, Equipment, Level, PlanKind, PlanRequest, Space } from './plan-request';
 import type { Plan } from './plan';
 import type { AttendanceEntryDto } from './attendance';
+import type { UnitOverride, Units } from '../units';
 
 export const ROLES = ['lead', 'coach', 'assistant'] as const;
 export type Role = (typeof ROLES)[number];
@@ -15,7 +16,16 @@ export interface UserDto {
   clubId: string;
   clubName: string;
   role: Role;
+  /** The units this person reads and types: their own choice where made, else the club's. */
+  units: Units;
+  /** The club's setting (the head of coaching changes it). */
+  clubUnits: Units;
+  /** This person's own choice; null follows the club. */
+  ownUnits: UnitOverride;
 }
+
+/** The club's unit setting, as GET and PUT /api/club/units answer it. */
+export type ClubUnitsDto = Units;
 
 export interface AuthResponse {
   token: string;

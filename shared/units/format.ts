@@ -90,3 +90,19 @@ export function inUnitsText(
   }
   return out;
 }
+
+/**
+ * Every text inside a plan-shaped value (warnings, notes, descriptions) through `inUnitsText`;
+ * numbers, and everything when the units are metres and °C, are left as they are.
+ */
+export function inUnitsDeep<T>(value: T, units: { distance: DistanceUnit; temperature: TemperatureUnit }): T {
+  if (units.distance === 'metres' && units.temperature === 'celsius') return value;
+  const walk = (v: unknown): unknown => {
+    if (typeof v === 'string') return inUnitsText(v, units);
+    if (Array.isArray(v)) return v.map(walk);
+    if (v && typeof v === 'object')
+      return Object.fromEntries(Object.entries(v).map(([k, x]) => [k, walk(x)]));
+    return v;
+  };
+  return walk(value) as T;
+}

@@ -46,3 +46,10 @@ export function isDistanceUnit(value: unknown): value is DistanceUnit {
 export function isTemperatureUnit(value: unknown): value is TemperatureUnit {
   return (TEMPERATURE_UNITS as readonly unknown[]).includes(value);
 }
+
+/** The unit fields of a person in a club that kept the defaults and who chose nothing. */
+export const NEW_CLUB_UNIT_FIELDS: { units: Units; clubUnits: Units; ownUnits: UnitOverride } = {
+  units: DEFAULT_UNITS,
+  clubUnits: DEFAULT_UNITS,
+  ownUnits: NO_OVERRIDE,
+};

@@ -2,6 +2,7 @@ import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
 import type { AuthResponse, Role, UserDto } from '../../../../shared/types';
+import type { DistanceUnit, TemperatureUnit } from '../../../../shared/units';
 
 export interface SignInBody {
   email: string;
@@ -105,6 +106,14 @@ export class AuthApi {
   /** GET /api/auth/me. */
   me(): Observable<UserDto> {
     return this.http.get<UserDto>('/api/auth/me');
+  }
+
+  /** PATCH /api/auth/me: the caller's own units (null follows the club); answers the updated user. */
+  changeOwnUnits(body: {
+    distanceUnit?: DistanceUnit | null;
+    temperatureUnit?: TemperatureUnit | null;
+  }): Observable<UserDto> {
+    return this.http.patch<UserDto>('/api/auth/me', body);
   }
 
   /** PATCH /api/auth/me: the caller's own display name; answers the updated user. */

@@ -1,4 +1,5 @@
 import { ValidatorFn, Validators } from '@angular/forms';
+import type { NumberLimits } from '../../../../shared/units';
 
 /** The numeric keywords of one property of a JSON Schema. */
 interface NumberSchema {
@@ -24,9 +25,15 @@ export function schemaAt(schema: object, pointer: string): NumberSchema | null {
  * the API's limits and never a copy: minimum/maximum (errors `min`/`max`), exclusive bounds
  * (`above`/`below`) and whole numbers (`wholeNumber`). Messages: `controlMessage`.
  */
-export function schemaNumberValidators(schema: object, pointer: string): ValidatorFn[] {
-  const at = schemaAt(schema, pointer);
-  if (!at) throw new Error(`No property ${pointer} in the schema`);
+export function schemaNumberValidators(
+  schema: object,
+  pointer: string,
+  /** The limits in the unit the field is typed in (shared/units), when it is not the schema's. */
+  inUnit?: (limits: NumberLimits) => NumberLimits,
+): ValidatorFn[] {
+  const found = schemaAt(schema, pointer);
+  if (!found) throw new Error(`No property ${pointer} in the schema`);
+  const at: NumberSchema = inUnit ? { type: found.type, ...inUnit(found) } : found;
   const validators: ValidatorFn[] = [];
   if (at.minimum !== undefined) validators.push(Validators.min(at.minimum));
   if (at.maximum !== undefined) validators.push(Validators.max(at.maximum));

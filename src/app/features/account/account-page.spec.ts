@@ -1,4 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
+import { NEW_CLUB_UNIT_FIELDS } from '../../../../shared/units';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
@@ -16,6 +17,7 @@ function user(role: Role, name = 'Cat Coach', emailVerified = true): UserDto {
     clubId: 'c1',
     clubName: 'Millbrook Juniors',
     role,
+    ...NEW_CLUB_UNIT_FIELDS,
   };
 }
 

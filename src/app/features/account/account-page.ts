@@ -15,6 +15,7 @@ import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { ROLE_LABELS } from '../../core/labels/role-labels';
+import { OwnUnits } from './own-units';
 
 const LABELS = { name: 'Your name' } as const;
 
@@ -32,6 +33,7 @@ const LABELS = { name: 'Your name' } as const;
     MatFormFieldModule,
     MatInputModule,
     ...ICONS,
+    OwnUnits,
   ],
   templateUrl: './account-page.html',
   styleUrl: './account-page.scss',

@@ -1,4 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
+import { NEW_CLUB_UNIT_FIELDS } from '../../../../shared/units';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
@@ -23,6 +24,7 @@ const coach: UserDto = {
   clubName: 'Test Club',
   emailVerified: true,
   role: 'coach',
+  ...NEW_CLUB_UNIT_FIELDS,
 };
 const team = (over: Partial<TeamDto>): TeamDto => ({
   id: 't12',

@@ -1,4 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
+import { NEW_CLUB_UNIT_FIELDS } from '../../../../shared/units';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
@@ -83,6 +84,7 @@ describe('MembersPage', () => {
         clubName: 'Heath Rovers',
         emailVerified: true,
         role: 'lead',
+        ...NEW_CLUB_UNIT_FIELDS,
       },
     });
     const fixture = TestBed.createComponent(MembersPage);

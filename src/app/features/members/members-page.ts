@@ -28,6 +28,7 @@ import { RoleChip } from '../../shared/components/role-chip';
 import { MemberRoleDialog, type MemberRoleData } from './components/member-role-dialog';
 import { MemberTeamsDialog, type MemberTeamsData } from './components/member-teams-dialog';
 import { RemoveMemberDialog, type RemoveMemberData } from './components/remove-member-dialog';
+import { ClubUnits } from './components/club-units';
 import { ROLE_DESCRIPTIONS } from './role-descriptions';
 
 export { ROLE_DESCRIPTIONS };
@@ -54,6 +55,7 @@ const DIALOG_SIZE = { width: '480px', maxWidth: 'calc(100vw - 32px)' };
     MatInputModule,
     MatSelectModule,
     RoleChip,
+    ClubUnits,
   ],
   templateUrl: './members-page.html',
   styleUrl: './members-page.scss',

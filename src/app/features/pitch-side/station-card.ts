@@ -1,10 +1,12 @@
-import { ChangeDetectionStrategy, Component, computed, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { POSITION_STYLE, type Station, type StationVerdict } from '../../../../shared/types';
 import type { IconName } from '../../core/icons/icon-names';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS } from '../../core/labels/plan-labels';
 import { StationDiagram } from '../../shared/components/station-diagram';
+import { SizeInUnitsPipe } from '../../shared/pipes/size-in-units';
+import { UnitChoice } from '../../core/units/unit-choice';
 import { readableOn, ROLE_TAGS, startRoles } from '../plans/services/plan-words';
 
 /** The three verdicts a coach can give a station, with their labels and icons. */
@@ -20,7 +22,7 @@ export const VERDICTS: { value: StationVerdict; label: string; icon: IconName }[
  */
 @Component({
   selector: 'cw-station-card',
-  imports: [MatButtonModule, ...ICONS, StationDiagram],
+  imports: [MatButtonModule, ...ICONS, StationDiagram, SizeInUnitsPipe],
   templateUrl: './station-card.html',
   styleUrl: './station-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -47,6 +49,8 @@ export class StationCard {
 
   protected readonly verdicts = VERDICTS;
   protected readonly kindLabels = ACTIVITY_KIND_LABELS;
+  /** The reader's units for the area's size. */
+  protected readonly units = inject(UnitChoice);
   protected readonly headingId = computed(() => `station-${this.station().id}-title`);
 
   protected readonly group = computed(() => {

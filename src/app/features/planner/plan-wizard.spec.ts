@@ -12,6 +12,8 @@ import {
   type PlayerDto,
   type TeamDto,
 } from '../../../../shared/types';
+import type { Units } from '../../../../shared/units';
+import { AuthStore } from '../../core/auth/auth-store';
 import { PlanWizard } from './plan-wizard';
 
 const TEAM: TeamDto = {
@@ -40,7 +42,10 @@ const ROSTER: PlayerDto[] = [...NAMES, ...MORE].map((displayName, i) => ({
 vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
 
 describe('PlanWizard', () => {
-  async function setUp() {
+  afterEach(() => localStorage.removeItem('conewise.session'));
+
+  /** `units`: the signed-in coach's units (no one signed in reads metres and °C). */
+  async function setUp(units?: Units) {
     TestBed.configureTestingModule({
       imports: [PlanWizard],
       providers: [
@@ -50,6 +55,23 @@ describe('PlanWizard', () => {
         provideNoopAnimations(),
       ],
     });
+    if (units) {
+      TestBed.inject(AuthStore).signIn({
+        token: 'token',
+        user: {
+          id: 'u1',
+          name: 'Sam Coach',
+          email: 'sam@example.org',
+          emailVerified: true,
+          clubId: 'c1',
+          clubName: 'Harbour',
+          role: 'coach',
+          units,
+          clubUnits: units,
+          ownUnits: { distance: null, temperature: null },
+        },
+      });
+    }
     const fixture = TestBed.createComponent(PlanWizard);
     fixture.componentRef.setInput('teamId', TEAM.id);
     const http = TestBed.inject(HttpTestingController);
@@ -149,12 +171,56 @@ describe('PlanWizard', () => {
     const buttons = Array.from(root.querySelectorAll<HTMLButtonElement>('.cw-presets button'));
     const half = buttons.find((b) => b.textContent?.includes('Half a 7v7 pitch'))!;
     expect(buttons.some((b) => b.textContent?.includes('A third of a 7v7 pitch'))).toBe(true);
+    // 7v7 pitch, US Soccer 2016: 35–45 yd wide, 55–65 yd long; midpoints 40 × 60 yd = 36.6 × 54.9 m,
+    // whole metres 37 × 55; half of its length 27.4 m, so 27.
+    expect(half.textContent).toContain('37×27 m');
+    expect(root.querySelector('[data-testid="preset-source"]')?.textContent).toContain(
+      'US Soccer Player Development Initiatives (2016)',
+    );
     half.click();
     await fixture.whenStable();
-    // 7v7 pitch, US Soccer 2016: 35–45 yd wide, 55–65 yd long; midpoints 40 × 60 yd = 36.6 × 54.9 m,
-    // and half of its length 27.45 m, shown to a tenth.
-    expect(input('width').value).toBe('36.6');
-    expect(input('length').value).toBe('27.5');
+    expect(input('width').value).toBe('37');
+    expect(input('length').value).toBe('27');
+  });
+
+  it('in yards and °F: presets, the usual space and the limits in yards, the request in metres and °C', async () => {
+    const { fixture, root, input, type, next, stepper, fieldText, http, submit } = await setUp({
+      distance: 'yards',
+      temperature: 'fahrenheit',
+    });
+    expect(root.textContent).toContain('Space (yards)');
+    // The team's usual 36 × 44 m in whole yards.
+    expect(input('width').value).toBe('39');
+    expect(input('length').value).toBe('48');
+    const buttons = Array.from(root.querySelectorAll<HTMLButtonElement>('.cw-presets button'));
+    expect(buttons.map((b) => b.textContent?.trim())).toEqual([
+      'Full 7v7 pitch · 40×60 yd',
+      'Half a 7v7 pitch · 40×30 yd',
+      'A third of a 7v7 pitch · 40×20 yd',
+    ]);
+    buttons[0].click();
+    await fixture.whenStable();
+    expect(input('width').value).toBe('40');
+    expect(input('length').value).toBe('60');
+    // The schema's 200 m is 218.7 yd: 219 is refused in words, 218 taken.
+    await type('length', '219');
+    await next('who');
+    await next('kit');
+    expect(stepper().selectedIndex).toBe(1);
+    expect(fieldText('length')).toContain('Length must be at most 218.');
+    await type('length', '60');
+    await next('kit');
+    expect(stepper().selectedIndex).toBe(2);
+    expect(root.textContent).toContain('Temperature (°F)');
+    // −30…50 °C is −22…122 °F.
+    await type('temperature', '123');
+    await next('time');
+    expect(fieldText('temperature')).toContain('Temperature must be at most 122.');
+    await type('temperature', '70');
+    await submit();
+    const body = http.expectOne('/api/plans').request.body as { request: PlanRequest };
+    expect(body.request.space).toEqual({ width: 36.58, length: 54.86 });
+    expect(body.request.conditions).toEqual({ temperatureC: 21.1 });
   });
 
   it('adds a guest to the team as not active and plans with them', async () => {
@@ -313,11 +379,11 @@ describe('PlanWizard', () => {
     const { root, stepper, next, type, fieldText } = await setUp();
     await next('who');
     await next('kit');
-    await type('temperatureC', '55');
+    await type('temperature', '55');
     await next('time');
     expect(stepper().selectedIndex).toBe(2);
-    expect(fieldText('temperatureC')).toContain('Temperature must be at most 50.');
-    await type('temperatureC', '31');
+    expect(fieldText('temperature')).toContain('Temperature must be at most 50.');
+    await type('temperature', '31');
     await next('time');
     expect(stepper().selectedIndex).toBe(3);
     expect(root.querySelector('[data-testid="weather-note"]')!.textContent).toContain('Safety:');

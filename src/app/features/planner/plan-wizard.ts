@@ -61,6 +61,16 @@ import { GIVEN_TIME_LABELS } from '../../../../shared/time/session-clock';
 import { buildPlanRequest, wizardFieldOf, type WizardValue } from './services/plan-request-builder';
 import { SpacePreset, SpacePresets } from './services/space-presets';
 import { PlanHandover } from '../plans/services/plan-handover';
+import { UnitChoice } from '../../core/units/unit-choice';
+import {
+  distanceLimitsIn,
+  distanceSymbol,
+  distanceUnitName,
+  temperatureLimitsIn,
+  temperatureSymbol,
+  wholeDistance,
+  type NumberLimits,
+} from '../../../../shared/units';
 import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
 
 /** The wizard's steps, in order, as named in its form. */
@@ -77,7 +87,14 @@ const LIMITS: Record<string, string> = {
   'kit.width': '/properties/space/properties/width',
   'kit.length': '/properties/space/properties/length',
   'time.minutes': '/properties/minutes',
-  'time.temperatureC': '/properties/conditions/properties/temperatureC',
+  'time.temperature': '/properties/conditions/properties/temperatureC',
+};
+
+/** The fields typed in the coach's units, whose schema limits (metres, °C) are converted. */
+const IN_UNITS: Record<string, 'distance' | 'temperature'> = {
+  'kit.width': 'distance',
+  'kit.length': 'distance',
+  'time.temperature': 'temperature',
 };
 
 /** The names the fields go by in messages, as on their labels. */
@@ -91,7 +108,7 @@ const FIELD_LABELS: Record<string, string> = {
   width: 'Width',
   length: 'Length',
   minutes: 'Minutes',
-  temperatureC: 'Temperature',
+  temperature: 'Temperature',
 };
 
 /** Someone must be there to plan for: a ticked player or a guest. */
@@ -135,6 +152,11 @@ export class PlanWizard {
   private readonly plansApi = inject(PlansApi);
   private readonly scheduleApi = inject(ScheduleApi);
   private readonly presetsService = inject(SpacePresets);
+  /** The units the coach reads and types (theirs, else the club's); the request is metric. */
+  protected readonly units = inject(UnitChoice).units();
+  protected readonly distanceSymbol = distanceSymbol(this.units.distance);
+  protected readonly distanceName = distanceUnitName(this.units.distance);
+  protected readonly temperatureSymbol = temperatureSymbol(this.units.temperature);
   private readonly router = inject(Router);
   private readonly handover = inject(PlanHandover);
   private readonly fb = inject(NonNullableFormBuilder);
@@ -202,7 +224,7 @@ export class PlanWizard {
       kickOff: [''],
       kind: ['match-warm-up' as PlanKind, Validators.required],
       focus: [[] as Focus[]],
-      temperatureC: [null as number | null],
+      temperature: [null as number | null],
     }),
   });
 
@@ -214,7 +236,7 @@ export class PlanWizard {
   protected readonly presentCount = computed(
     () => (this.whoValue().present?.length ?? 0) + (this.whoValue().guests?.length ?? 0),
   );
-  private readonly temperature = toSignal(this.form.controls.time.controls.temperatureC.valueChanges, {
+  private readonly temperature = toSignal(this.form.controls.time.controls.temperature.valueChanges, {
     initialValue: null,
   });
   /** A safety line for a hot or cold day, whatever the figure: the coach judges the weather. */
@@ -237,7 +259,10 @@ export class PlanWizard {
     this.form.controls.who.controls.teamId.valueChanges.subscribe((id) => this.loadTeam(id));
     effect(() => {
       const team = this.team();
-      if (team) void this.presetsService.forAgeGroup(team.ageGroup).then((list) => this.presets.set(list));
+      if (team)
+        void this.presetsService
+          .forAgeGroup(team.ageGroup, this.units.distance)
+          .then((list) => this.presets.set(list));
     });
   }
 
@@ -268,7 +293,7 @@ export class PlanWizard {
     if (request) {
       for (const [path, pointer] of Object.entries(LIMITS)) {
         const control = this.form.get(path)!;
-        control.addValidators(schemaNumberValidators(request, pointer));
+        control.addValidators(schemaNumberValidators(request, pointer, this.limitsInUnits(path)));
         control.updateValueAndValidity({ emitEvent: false });
       }
     }
@@ -307,7 +332,12 @@ export class PlanWizard {
     const schema = await loadApiSchema('plan-request');
     if (!team || !schema || this.form.controls[step].invalid) return;
     const raw = this.form.getRawValue();
-    const request = buildPlanRequest(team, this.roster(), { ...raw.who, ...raw.kit, ...raw.time });
+    const request = buildPlanRequest(
+      team,
+      this.roster(),
+      { ...raw.who, ...raw.kit, ...raw.time },
+      this.units,
+    );
     const errors = (await schemaCheck(schema))(request);
     const mine: Record<string, string> = {};
     for (const [path, text] of Object.entries(errors)) {
@@ -369,7 +399,7 @@ export class PlanWizard {
         const team = this.teams().find((t) => t.id === id);
         this.form.controls.kit.patchValue({
           ...kit,
-          ...(team ? { width: team.usualSpace.width, length: team.usualSpace.length } : {}),
+          ...(team ? this.spaceInUnits(team.usualSpace) : {}),
         });
         const from = this.from();
         if (from) this.reuse(from);
@@ -384,7 +414,7 @@ export class PlanWizard {
       next: (past) => {
         const r = past.request;
         this.form.controls.who.controls.coaches.setValue(r.coaches);
-        this.form.controls.kit.patchValue({ ...r.equipment, width: r.space.width, length: r.space.length });
+        this.form.controls.kit.patchValue({ ...r.equipment, ...this.spaceInUnits(r.space) });
         this.form.controls.time.patchValue({
           minutes: r.minutes,
           kind: r.kind,
@@ -425,13 +455,32 @@ export class PlanWizard {
     });
   }
 
+  /** A field's schema limits in the coach's unit (the schema's own for unitless fields). */
+  private limitsInUnits(path: string): ((limits: NumberLimits) => NumberLimits) | undefined {
+    const quantity = IN_UNITS[path];
+    if (quantity === 'distance') return (limits) => distanceLimitsIn(this.units.distance, limits);
+    if (quantity === 'temperature') return (limits) => temperatureLimitsIn(this.units.temperature, limits);
+    return undefined;
+  }
+
+  /** A space in metres in the coach's unit (whole yards; metres as they are), for the width and length fields. */
+  private spaceInUnits(space: { width: number; length: number }): { width: number; length: number } {
+    if (this.units.distance === 'metres') return { width: space.width, length: space.length };
+    return {
+      width: wholeDistance(this.units.distance, space.width),
+      length: wholeDistance(this.units.distance, space.length),
+    };
+  }
+
   protected tickAll(present: boolean): void {
     this.form.controls.who.controls.present.setValue(present ? this.activeRoster().map((p) => p.id) : []);
   }
 
   protected usePreset(preset: SpacePreset): void {
-    this.form.controls.kit.patchValue({ width: preset.space.width, length: preset.space.length });
-    this.status.set(`Space set to ${preset.label}: ${preset.space.width} by ${preset.space.length} metres.`);
+    this.form.controls.kit.patchValue({ width: preset.size.width, length: preset.size.length });
+    this.status.set(
+      `Space set to ${preset.label}: ${preset.size.width} by ${preset.size.length} ${this.distanceName} (${preset.source}).`,
+    );
   }
 
   protected toggleFocus(focus: Focus): void {
@@ -460,7 +509,7 @@ export class PlanWizard {
     }
     const raw = this.form.getRawValue();
     const value: WizardValue = { ...raw.who, ...raw.kit, ...raw.time };
-    const request = buildPlanRequest(team, this.roster(), value);
+    const request = buildPlanRequest(team, this.roster(), value, this.units);
     if (request.players.length === 0) {
       this.form.controls.who.controls.present.setErrors({ message: 'Tick at least one player who is here.' });
       this.error.set('Tick at least one player who is here.');
@@ -488,7 +537,7 @@ export class PlanWizard {
     }
     const body = {
       teamId: team.id,
-      request: buildPlanRequest(team, this.roster(), value, guestIds),
+      request: buildPlanRequest(team, this.roster(), value, this.units, guestIds),
       date: raw.time.date || undefined,
       kickOff: raw.time.kickOff || undefined,
       scheduledSessionId: this.scheduledSessionId,

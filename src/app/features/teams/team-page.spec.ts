@@ -1,4 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
+import { NEW_CLUB_UNIT_FIELDS } from '../../../../shared/units';
 import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideNoopAnimations } from '@angular/platform-browser/animations';
@@ -70,6 +71,7 @@ describe('TeamPage', () => {
         clubId: 'c1',
         clubName: 'Club',
         role,
+        ...NEW_CLUB_UNIT_FIELDS,
       },
     });
     const navigate = vi.spyOn(TestBed.inject(Router), 'navigate').mockResolvedValue(true);

@@ -1,4 +1,5 @@
 import { provideHttpClient } from '@angular/common/http';
+import { NEW_CLUB_UNIT_FIELDS } from '../../../../shared/units';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
@@ -38,6 +39,7 @@ describe('NoTeamYet', () => {
         clubId: 'c1',
         clubName: 'Club',
         role,
+        ...NEW_CLUB_UNIT_FIELDS,
       },
     });
     const fixture = TestBed.createComponent(NoTeamYet);

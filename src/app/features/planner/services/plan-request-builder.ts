@@ -1,4 +1,5 @@
 import type { Focus, PlanKind, PlanRequest, PlayerDto, TeamDto } from '../../../../../shared/types';
+import { celsiusFrom, metresFrom, type Units } from '../../../../../shared/units';
 
 /** What the wizard's three steps hold, flattened. */
 export interface WizardValue {
@@ -9,22 +10,28 @@ export interface WizardValue {
   cones: number;
   bibs: number;
   goals: number;
+  /** Width and length in the coach's distance unit. */
   width: number;
   length: number;
   minutes: number;
   kind: PlanKind;
   focus: Focus[];
-  temperatureC: number | null;
+  /** In the coach's temperature unit. */
+  temperature: number | null;
 }
 
 /** A stand-in id for a guest until the server has given them one. */
 export const guestId = (index: number) => `guest-${index + 1}`;
 
-/** Turns the wizard's answers into the engine's request; `guestIds` are the ids the guests were given. */
+/**
+ * Turns the wizard's answers into the engine's request, in metres and °C whatever `units` the
+ * coach typed in; `guestIds` are the ids the guests were given.
+ */
 export function buildPlanRequest(
   team: TeamDto,
   roster: PlayerDto[],
   value: WizardValue,
+  units: Units,
   guestIds: string[] = value.guests.map((_, i) => guestId(i)),
 ): PlanRequest {
   const byId = new Map(roster.map((p) => [p.id, p]));
@@ -45,13 +52,16 @@ export function buildPlanRequest(
     players,
     coaches: value.coaches,
     equipment: { balls: value.balls, cones: value.cones, bibs: value.bibs, goals: value.goals },
-    space: { width: value.width, length: value.length },
+    space: {
+      width: metresFrom(units.distance, value.width),
+      length: metresFrom(units.distance, value.length),
+    },
     minutes: value.minutes,
     kind: value.kind,
   };
   if (value.focus.length) request.focus = value.focus;
-  if (value.temperatureC !== null && value.temperatureC !== undefined && String(value.temperatureC) !== '') {
-    request.conditions = { temperatureC: Number(value.temperatureC) };
+  if (value.temperature !== null && value.temperature !== undefined && String(value.temperature) !== '') {
+    request.conditions = { temperatureC: celsiusFrom(units.temperature, Number(value.temperature)) };
   }
   return request;
 }
@@ -62,7 +72,7 @@ export function wizardFieldOf(path: string): string {
   if (path === 'coaches') return 'who.coaches';
   if (path.startsWith('equipment.')) return `kit.${path.slice('equipment.'.length)}`;
   if (path.startsWith('space.')) return `kit.${path.slice('space.'.length)}`;
-  if (path.startsWith('conditions.')) return 'time.temperatureC';
+  if (path.startsWith('conditions.')) return 'time.temperature';
   if (['minutes', 'kind', 'focus'].some((key) => path.startsWith(key))) return `time.${path.split('.')[0]}`;
   return path;
 }

@@ -8,6 +8,8 @@ import { ICONS } from '../../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS } from '../../../core/labels/plan-labels';
 import { readableOn, ROLE_TAGS, roleLines, startRoles } from '../services/plan-words';
 import { StationDiagram } from '../../../shared/components/station-diagram';
+import { SizeInUnitsPipe } from '../../../shared/pipes/size-in-units';
+import { UnitChoice } from '../../../core/units/unit-choice';
 import { EditAnswer, type EditAnswerLines } from './edit-answer';
 
 /** Why the area cannot step larger or smaller (null where it can). */
@@ -31,7 +33,16 @@ export interface PlayerMoveRequest {
  */
 @Component({
   selector: 'cw-station-card',
-  imports: [CdkDropList, CdkDrag, MatButtonModule, ...ICONS, MatMenuModule, EditAnswer, StationDiagram],
+  imports: [
+    CdkDropList,
+    CdkDrag,
+    MatButtonModule,
+    ...ICONS,
+    MatMenuModule,
+    EditAnswer,
+    StationDiagram,
+    SizeInUnitsPipe,
+  ],
   templateUrl: './station-card.html',
   styleUrl: './station-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -65,6 +76,8 @@ export class StationCard {
   readonly opened = output<void>();
 
   protected readonly kindLabels = ACTIVITY_KIND_LABELS;
+  /** The reader's units for the area's size. */
+  protected readonly units = inject(UnitChoice);
   /** The move menu's destinations, named by number and title so no two read alike. */
   protected readonly others = computed(() =>
     this.siblings()
