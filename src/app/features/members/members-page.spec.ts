@@ -136,7 +136,7 @@ describe('MembersPage', () => {
     });
     await fixture.whenStable();
     expect(el.querySelector('[data-testid=pending-invitations]')?.textContent).toContain('sam@club.test');
-    expect(el.textContent).toContain('Invitation sent to sam@club.test as coach');
+    expect(el.textContent).toContain('Invitation sent to sam@club.test as a coach');
   });
 
   it('refuses to send without a valid e-mail', async () => {
@@ -198,15 +198,18 @@ describe('MembersPage', () => {
       {
         title: 'Conflict',
         status: 409,
-        detail: 'Heath Rovers needs at least one lead. Make someone else lead first, then change this role.',
+        detail:
+          'Heath Rovers needs at least one head of coaching. Make someone else head of coaching first, then change this role.',
       },
       { status: 409, statusText: 'Conflict' },
     );
     await settle(fixture);
-    expect(dialog.querySelector('[role=alert]')?.textContent).toContain('Make someone else lead first');
-    button(dialog, 'Keep as lead').click();
+    expect(dialog.querySelector('[role=alert]')?.textContent).toContain(
+      'Make someone else head of coaching first',
+    );
+    button(dialog, 'Keep as head of coaching').click();
     await settle(fixture);
-    expect(el.querySelector('[data-member="Rhona Lead"] cw-role-chip')?.textContent).toBe('lead');
+    expect(el.querySelector('[data-member="Rhona Lead"] cw-role-chip')?.textContent).toBe('Head of coaching');
   });
 
   it('invites an assistant to a team, nudging until a team is picked', async () => {

@@ -314,7 +314,7 @@ describe('TeamPage', () => {
     (root.querySelector('[data-testid=staff-pick] .mat-mdc-select-trigger') as HTMLElement).click();
     await settle(fixture);
     const options = Array.from(document.querySelectorAll('mat-option')).map((o) => o.textContent?.trim());
-    expect(options).toEqual(['Hew Helper (assistant)']);
+    expect(options).toEqual(['Hew Helper (Assistant)']);
     (document.querySelector('mat-option') as HTMLElement).click();
     await settle(fixture);
     button(root, 'Add to staff').click();
