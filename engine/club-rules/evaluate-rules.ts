@@ -1,5 +1,6 @@
 /** Runs the club's json-rules-engine rules on the facts and turns fired events into effects. */
 import type {
+  ActivityKind,
   StationKind,
   ForbiddenActivity,
   Notice,
@@ -8,6 +9,7 @@ import type {
   TraceEntry,
 } from '../../shared/types';
 import { Fact } from 'json-rules-engine';
+import { ACTIVITY_KIND_LABELS } from '../../shared/types/activity-words';
 import type { CompiledRuleSet } from './compile-rule-set';
 import type { Facts } from './facts';
 
@@ -55,7 +57,7 @@ export async function evaluateRules(compiled: CompiledRuleSet, facts: Facts): Pr
     if (result === undefined) return;
     const didFire = result === true;
     const entry: TraceEntry = { ruleId: rule.id, description: rule.description, fired: didFire };
-    if (didFire) entry.effect = applyEvent(rule.id, rule.event, outcome, overrides);
+    if (didFire) entry.effect = applyEvent(rule.id, rule.event, outcome, overrides, doc.parameters);
     outcome.trace.push(entry);
   });
   if (overrides.length) outcome.parameters = withOverrides(doc.parameters, overrides);
@@ -81,23 +83,25 @@ function applyEvent(
   event: RuleEvent,
   outcome: RuleOutcome,
   overrides: { path: string; value: unknown }[],
+  parameters: RuleParameters,
 ): string {
+  // What the rule did, in a sentence a head of coaching reads (no codes or ids).
   switch (event.type) {
     case 'set-parameter':
       overrides.push({ path: event.params.path, value: event.params.value });
       return event.params.effect;
     case 'forbid-activity':
       outcome.forbidden.push({ ...event.params });
-      return `forbids ${event.params.activityId ?? event.params.kind}: ${event.params.reason}`;
+      return `Leaves out ${leftOut(event.params, parameters)}: ${event.params.reason}`;
     case 'require-activity':
       outcome.required.push({ kind: event.params.kind, reason: event.params.reason });
-      return `requires ${event.params.kind}: ${event.params.reason}`;
+      return `Adds ${ACTIVITY_KIND_LABELS[event.params.kind] ?? 'an activity'}: ${event.params.reason}`;
     case 'warning':
       outcome.warnings.push({ code: event.params.code, message: event.params.message });
-      return `warning ${event.params.code}`;
+      return `Adds a note for the coach: ${event.params.message}`;
     case 'caution':
       outcome.cautions.push({ ...event.params });
-      return `caution ${event.params.code}`;
+      return `Adds a safety note: ${event.params.message}`;
     case 'progression-step':
       outcome.steps[event.params.kind] = {
         direction: event.params.direction,
@@ -106,6 +110,15 @@ function applyEvent(
       };
       return event.params.reason;
   }
+}
+
+/** "the Rondo square" (an activity, by its title) or "Keep-ball" (a kind). */
+function leftOut(params: { kind?: ActivityKind; activityId?: string }, parameters: RuleParameters): string {
+  if (params.activityId) {
+    const title = parameters.activities.find((a) => a.id === params.activityId)?.title;
+    return title ? `“${title}”` : 'one activity';
+  }
+  return params.kind ? ACTIVITY_KIND_LABELS[params.kind] : 'an activity';
 }
 
 /** Copies only the branches an override touches; the cached document stays untouched. */

@@ -201,7 +201,7 @@ async function swapActivity(
         {
           ruleId: 'edit.swap-activity',
           fired: true,
-          effect: `${phase.name}: ${phase.activityId} → ${activity.id}`,
+          effect: `${phase.name}: now ${activity.title}`,
         },
       ],
     },

@@ -120,7 +120,7 @@ export function feedbackTrace(ctx: BuildContext, starts: FeedbackStart[], phases
       ruleId: 'engine.feedback-start',
       description,
       fired: true,
-      effect: `${start.kind} area starts at ${describeArea({ width: start.width, length: start.width })} wide${group} (last ${start.from} m): ${start.step.reason}`,
+      effect: `${ACTIVITY_KIND_LABELS[start.kind]} area starts at ${describeArea({ width: start.width, length: start.width })} wide${group} (last ${start.from} m): ${start.step.reason}`,
     });
   }
 }

@@ -4,7 +4,7 @@
  * pins and the club's required kinds find a place, and short slots lose their least important parts.
  */
 import type { ActivityDefinition, Focus, SessionSlot, SlotRole, StationKind } from '../../shared/types';
-import { FOCUSES } from '../../shared/types';
+import { ACTIVITY_KIND_LABELS, FOCUSES } from '../../shared/types';
 import { activityBlocked, activityById, kindBlocked, rankedActivities, type Ranked } from './activities';
 import { activityFeasible, type AllocationRules } from './allocation';
 import { addWarning, type BuildContext } from './context';
@@ -112,7 +112,7 @@ export function sessionSlots(
         ctx.trace.push({
           ruleId: 'engine.phase-substitute',
           fired: true,
-          effect: `${slot.name}: ${kinds.join(' / ')} → ${ranked[0].activity.kind} (${whyNot(ctx, kinds[0])})`,
+          effect: `${slot.name}: ${kinds.map((k) => ACTIVITY_KIND_LABELS[k]).join(' or ')} could not be played (${whyNot(ctx, kinds[0])}), so ${ranked[0].activity.title}`,
         });
       }
     }
@@ -278,7 +278,7 @@ function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityD
     ctx.trace.push({
       ruleId: 'engine.required-phase',
       fired: true,
-      effect: `added ${req.kind}: ${req.reason}`,
+      effect: `added ${ACTIVITY_KIND_LABELS[req.kind]}: ${req.reason}`,
     });
   }
 }

@@ -19,6 +19,8 @@ export interface CardInput {
   date?: string | null;
   /** "HH:MM": kick-off for a match warm-up (the plan ends there), start time for training. */
   kickOff?: string | null;
+  /** "Club rules: Fernmoor rules, published 3 Dec": the footer says which rules made the plan. */
+  rules?: string;
   /** Locale of dates and clock times (BCP 47): the person's stored one, else the club's. */
   locale?: string;
   /** Units of the person printing or sharing (their own, else the club's); metres and °C when absent. */
@@ -189,7 +191,7 @@ export function planCardDefinition(
     footer: (page: number, pages: number) => {
       onPageCount?.(pages);
       return {
-        text: `Conewise card · rules ${plan.ruleSet.id} v${plan.ruleSet.version} · seed ${plan.seed} · page ${page} of ${pages}`,
+        text: `Conewise card · ${input.rules ?? 'Club rules'} · plan ref ${plan.seed} · page ${page} of ${pages}`,
         fontSize: 6,
         color: '#7a857e',
         margin: [MARGIN, 8, MARGIN, 0],

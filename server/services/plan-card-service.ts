@@ -8,8 +8,10 @@ import type { SessionPlan } from '../entities/session-plan';
 import type { Team } from '../entities/team';
 import { refuseOverDailyLimit } from './daily-mail-limit';
 import { ClubScope } from './club-scope';
+import { rulesInWords } from '../../shared/types/rule-words';
 import { HelperLinkService } from './helper-link-service';
 import type { MailQueue } from './mail-queue';
+import { RuleSetService } from './rule-set-service';
 import { localeOf } from './account-service';
 import type { Units } from '../../shared/units';
 import { minuteInWords, sessionInWords } from './session-day';
@@ -37,7 +39,11 @@ export class PlanCardService {
     const row = await scope.plan(planId);
     const team = await scope.teamToRead(row.teamId);
     const locale = await localeOf(this.dataSource.manager, auth.userId, this.config.locale);
-    return { pdf: await render(row, team, paper, locale, auth.units), filename: cardFilename(row, team) };
+    const rules = await this.rulesWords(auth, row, locale);
+    return {
+      pdf: await render(row, team, paper, locale, auth.units, rules),
+      filename: cardFilename(row, team),
+    };
   }
 
   /**
@@ -52,7 +58,8 @@ export class PlanCardService {
     const team = await scope.teamToManage(row.teamId);
     // The card and the e-mail read in the sender's locale (their browser's), else the club's.
     const locale = await localeOf(this.dataSource.manager, auth.userId, this.config.locale);
-    const pdf = await render(row, team, input.paper ?? 'a4', locale, auth.units);
+    const rules = await this.rulesWords(auth, row, locale);
+    const pdf = await render(row, team, input.paper ?? 'a4', locale, auth.units, rules);
     const when = sessionInWords(row.date, row.kickOff, locale);
     const subject = `${team.name}: ${kindLabel(row)}${when ? ` on ${when}` : ''}`;
     const attachment = {
@@ -94,6 +101,12 @@ export class PlanCardService {
     });
     return { queued: messageIds.length, messageIds };
   }
+
+  /** "Club rules: Fernmoor rules, published 3 Dec" for the card's footer ("Club rules" if they are gone). */
+  private async rulesWords(auth: AuthContext, row: SessionPlan, locale: string): Promise<string> {
+    const summary = await new RuleSetService(this.dataSource).summary(auth, row.ruleSetId).catch(() => null);
+    return rulesInWords(summary, locale);
+  }
 }
 
 async function render(
@@ -102,11 +115,12 @@ async function render(
   paper: Paper,
   locale: string,
   units: Units,
+  rules: string,
 ): Promise<Buffer> {
   // pdfmake, pdfkit and fontkit are large: load them on the first card, not at server start.
   const { renderPlanPdf } = await import('../pdf');
   return renderPlanPdf(
-    { plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff, locale, units },
+    { plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff, locale, units, rules },
     paper,
   );
 }

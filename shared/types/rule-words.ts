@@ -300,3 +300,59 @@ export function rulePathWords(pointer: string, document?: unknown): string {
   const parts = rulePathParts(pointer, document);
   return parts.length ? parts.join(' › ') : 'The whole rule set';
 }
+
+/** A value of the rules as a person reads it: "4v1, 3v1", "Keep-ball, Duel", "Yes", an activity's title. */
+export function ruleValueWords(value: unknown): string {
+  if (value === undefined || value === null) return '—';
+  if (typeof value === 'boolean') return value ? 'Yes' : 'No';
+  if (typeof value === 'number') return String(value);
+  if (typeof value === 'string')
+    return /^[a-z0-9]+(-[a-z0-9]+)*$|^U\d/.test(value) ? codeWords(value) : value;
+  if (Array.isArray(value)) {
+    if (value.length === 0) return 'none';
+    if (value.every((v) => v && typeof v === 'object' && 'attackers' in v && 'defenders' in v))
+      return value
+        .map((v: { attackers: number; defenders: number }) => `${v.attackers}v${v.defenders}`)
+        .join(', ');
+    const words = value.map((v) => ruleValueWords(v)).join(', ');
+    return words.length > 120 ? `${words.slice(0, 117)}…` : words;
+  }
+  const named = value as Record<string, unknown>;
+  for (const key of ['title', 'description', 'name'])
+    if (typeof named[key] === 'string' && named[key]) return `“${named[key] as string}”`;
+  return 'a group of settings';
+}
+
+/** One change in words: "Group sizes › Keep-ball › Beginner › Most: 6 → 5". */
+export function ruleChangeWords(
+  change: { path: string; change: 'added' | 'removed' | 'changed'; before?: unknown; after?: unknown },
+  document?: unknown,
+): string {
+  const place = change.path === '(name)' ? 'Name' : rulePathWords(change.path, document);
+  if (change.change === 'added') return `${place}: added ${ruleValueWords(change.after)}`;
+  if (change.change === 'removed') return `${place}: removed (was ${ruleValueWords(change.before)})`;
+  return `${place}: ${ruleValueWords(change.before)} → ${ruleValueWords(change.after)}`;
+}
+
+/** What "Club rules: …" needs to know of a version (RuleSetSummaryDto has it). */
+export interface RulesNamed {
+  name: string;
+  status: string;
+  publishedAt: string | null;
+  builtIn: boolean;
+}
+
+/**
+ * "Club rules: Fernmoor rules, published 3 Dec": the rules a plan was made with, as the plan page
+ * and the printed card say it (the date in the reader's locale).
+ */
+export function rulesInWords(rules: RulesNamed | null, locale?: string): string {
+  if (!rules) return 'Club rules';
+  if (rules.builtIn) return 'Club rules: Conewise’s starting rules';
+  const when = rules.publishedAt
+    ? `, published ${new Intl.DateTimeFormat(locale, { day: 'numeric', month: 'short' }).format(new Date(rules.publishedAt))}`
+    : '';
+  const state =
+    rules.status === 'draft' ? ' (a draft)' : rules.status === 'archived' ? ' (an earlier version)' : '';
+  return `Club rules: ${rules.name}${when}${state}`;
+}

@@ -1,4 +1,8 @@
 /** Publishing in words: who the club's rules reach, a version's summary, and each save's before and after. */
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { RuleSetDto } from '../../shared/types/api';
 import type { RuleSetDocument } from '../../shared/types/plan-rules';
@@ -10,6 +14,9 @@ import {
   type ClubCast,
   type TestApp,
 } from '../support/api-test-app';
+import { createPlan, createSquad } from './fixtures/plan-helpers';
+
+const scratch = mkdtempSync(join(tmpdir(), 'conewise-rules-card-'));
 
 describe('/api/rule-sets/reach and summary', () => {
   let app: TestApp;
@@ -21,7 +28,10 @@ describe('/api/rule-sets/reach and summary', () => {
     club = await clubWithStaff(app, 'Fernmoor Rovers');
     rival = await clubWithStaff(app, 'Saltmarsh United');
   });
-  afterAll(() => app.close());
+  afterAll(async () => {
+    await app.close();
+    rmSync(scratch, { recursive: true, force: true });
+  });
 
   const reach = async (token: string) => app.api.get('/api/rule-sets/reach', { token });
 
@@ -89,5 +99,21 @@ describe('/api/rule-sets/reach and summary', () => {
         after: before - 1,
       },
     ]);
+  });
+
+  it('prints the rules in words on the card, the plan ref in small print, no ids', async () => {
+    const squad = await createSquad(app, club.coach.token, 10, 'U10 Wagtails');
+    const plan = await createPlan(app, club.coach.token, squad);
+    const response = await fetch(`${app.http.url}/api/plans/${plan.id}/pdf`, {
+      headers: { authorization: `Bearer ${club.coach.token}` },
+    });
+    expect(response.status).toBe(200);
+    const file = join(scratch, 'card.pdf');
+    writeFileSync(file, Buffer.from(await response.arrayBuffer()));
+    const text = execFileSync('pdftotext', ['-raw', file, '-'], { encoding: 'utf8' }).replace(/\s+/g, ' ');
+    expect(text).toMatch(/Club rules: Fernmoor rules, published \d{1,2} \w{3}/);
+    expect(text).toContain(`plan ref ${plan.seed}`);
+    expect(text).not.toContain(plan.ruleSetId);
+    expect(text).not.toMatch(/rules \S+ v\d/);
   });
 });
