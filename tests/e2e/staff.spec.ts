@@ -108,11 +108,11 @@ describe('staff', () => {
     const page = await phonePage(lead, '/club/members');
     await page.getByTestId('member-table').waitFor();
     await page.getByLabel('E-mail').fill(email);
-    await pick(page, 'invite-role', 'assistant');
+    await pick(page, 'invite-role', 'Assistant');
     await page.getByText('pick one so they land on it').waitFor();
     await pick(page, 'invite-team', TEAM);
     await page.getByRole('button', { name: 'Send invitation' }).click();
-    await page.getByText(`Invitation sent to ${email} as assistant for ${TEAM}.`).waitFor();
+    await page.getByText(`Invitation sent to ${email} as an assistant for ${TEAM}.`).waitFor();
     const pending = page.getByTestId('pending-invitations');
     expect(await pending.textContent()).toContain(`for ${TEAM}`);
     await screenshot(page, 'staff-invite');
@@ -176,7 +176,7 @@ describe('staff', () => {
     const second = await teamNamed(SECOND_TEAM);
     const page = await phonePage(lead, `/teams/${second.id}`);
     await page.getByRole('heading', { name: 'Staff' }).waitFor();
-    await pick(page, 'staff-pick', `${name} (assistant)`);
+    await pick(page, 'staff-pick', `${name} (Assistant)`);
     await page.getByRole('button', { name: 'Add to staff' }).click();
     await page.getByTestId('team-staff').getByText(name).waitFor();
     await page.getByRole('heading', { name: 'Staff' }).scrollIntoViewIfNeeded();
@@ -215,14 +215,14 @@ describe('staff', () => {
     await page.locator('mat-radio-button[data-role=coach] input').check();
     await settled(page);
     await screenshot(page, 'staff-role-dialog');
-    await page.getByRole('button', { name: 'Make coach' }).click();
-    await page.getByText(`${name} is now coach.`).waitFor();
-    expect(await row.locator('cw-role-chip').textContent()).toBe('coach');
+    await page.getByRole('button', { name: 'Make a coach' }).click();
+    await page.getByText(`${name} is now a coach.`).waitFor();
+    expect(await row.locator('cw-role-chip').textContent()).toBe('Coach');
 
     await page.getByRole('button', { name: 'Change Morag Ellison’s role' }).click();
     await page.getByRole('heading', { name: 'Your role' }).waitFor();
     await page.locator('mat-radio-button[data-role=assistant] input').check();
-    await page.getByRole('button', { name: 'Make assistant' }).click();
+    await page.getByRole('button', { name: 'Make an assistant' }).click();
     const refusal = page.locator('mat-dialog-container [role=alert]');
     await refusal.waitFor();
     expect(await refusal.textContent()).toContain(
@@ -230,7 +230,7 @@ describe('staff', () => {
     );
     await settled(page);
     await screenshot(page, 'staff-last-lead');
-    await page.getByRole('button', { name: 'Keep as lead' }).click();
+    await page.getByRole('button', { name: 'Keep as head of coaching' }).click();
     await settled(page);
 
     await page.getByRole('button', { name: `Remove ${name} from the club` }).click();

@@ -51,7 +51,7 @@ describe('AccountPage', () => {
   it.each([
     ['lead', 'Head of coaching'],
     ['coach', 'Coach'],
-    ['assistant', 'Assistant coach'],
+    ['assistant', 'Assistant'],
   ] as const)('shows the %s role in words, with the e-mail address and club', (role, words) => {
     const { text, el } = open(role);
     expect(text('account-role')).toBe(words);
