@@ -44,7 +44,6 @@ const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges()
   fixture.detectChanges();
 };
 
-vi.setConfig({ testTimeout: 30_000 });
 
 describe('HelperViewPage', () => {
   let plan: Plan;

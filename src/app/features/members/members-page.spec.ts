@@ -61,7 +61,6 @@ function button(root: ParentNode, label: string): HTMLButtonElement {
   return found;
 }
 
-vi.setConfig({ testTimeout: 30_000 });
 
 describe('MembersPage', () => {
   function setUp() {

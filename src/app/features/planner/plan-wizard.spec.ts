@@ -39,7 +39,6 @@ const ROSTER: PlayerDto[] = [...NAMES, ...MORE].map((displayName, i) => ({
 }));
 
 // A shared, busy machine can make the first render slow; the checks, not the clock, are the test.
-vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
 
 describe('PlanWizard', () => {
   afterEach(() => localStorage.removeItem('conewise.session'));

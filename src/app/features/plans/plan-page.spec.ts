@@ -103,7 +103,6 @@ const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges()
 };
 
 // A shared, busy machine can make the first render slow; the checks, not the clock, are the test.
-vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
 
 describe('PlanPage', () => {
   const idleWork: (() => void)[] = [];

@@ -48,7 +48,6 @@ function button(root: ParentNode, name: string): HTMLButtonElement {
   return found;
 }
 
-vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
 
 describe('TeamPage', () => {
   async function setUp(role: Role, userId = 'coach-1', team: TeamDto = TEAM) {

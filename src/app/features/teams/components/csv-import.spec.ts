@@ -27,7 +27,6 @@ const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges()
   fixture.detectChanges();
 };
 
-vi.setConfig({ testTimeout: 30_000, hookTimeout: 60_000 });
 
 describe('CsvImport', () => {
   async function setUp() {
