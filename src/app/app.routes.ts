@@ -134,7 +134,7 @@ export const routes: Routes = [
       },
       {
         path: 'status',
-        title: 'System status · Conewise',
+        title: 'Is Conewise working? · Conewise',
         loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),
       },
     ],

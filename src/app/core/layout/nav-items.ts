@@ -18,5 +18,5 @@ export const NAV_ITEMS: NavItem[] = [
   { label: 'Activities', icon: 'local_library', link: '/library' },
   { label: 'Club rules', icon: 'rule_settings', link: '/club/rules', roles: ['lead'] },
   { label: 'Members', icon: 'manage_accounts', link: '/club/members', roles: ['lead'] },
-  { label: 'System status', icon: 'monitor_heart', link: '/status' },
+  { label: 'Is Conewise working?', icon: 'monitor_heart', link: '/status', roles: ['lead'] },
 ];

@@ -182,4 +182,110 @@ describe('ClubRulesPage', () => {
     expect(row.textContent).toContain('Retired in the draft');
     expect(el.querySelector('[data-testid=draft-state]')?.getAttribute('data-unsaved')).toBe('0');
   });
+
+  it('marks the cell of a problem with a sentence, lists it, and takes the lead there', async () => {
+    const { fixture, el, input } = await setUp([
+      ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 }),
+    ]);
+    await fixture.whenStable();
+    const set = (pointer: string, value: number) => {
+      const field = input(pointer);
+      field.value = String(value);
+      field.dispatchEvent(new Event('change'));
+    };
+    set('/parameters/groupSizes/keep-ball/beginner/min', 5);
+    set('/parameters/groupSizes/keep-ball/beginner/preferred', 5);
+    set('/parameters/groupSizes/keep-ball/beginner/max', 4);
+    const most = input('/parameters/groupSizes/keep-ball/beginner/max');
+    await expect
+      .poll(async () => {
+        await fixture.whenStable();
+        return most.getAttribute('aria-invalid');
+      })
+      .toBe('true');
+    const sentence = 'Keep-ball, Beginner: the most players in a group (4) is below the fewest (5).';
+    expect(document.getElementById(most.getAttribute('aria-describedby')!)?.textContent).toBe(sentence);
+    expect(input('/parameters/groupSizes/keep-ball/beginner/min').getAttribute('aria-invalid')).toBe('false');
+    expect(el.textContent).not.toContain('JSON');
+
+    const listed = Array.from(el.querySelectorAll<HTMLButtonElement>('[data-testid=problem-list] button'));
+    expect(listed.map((b) => b.textContent?.trim())).toEqual([sentence]);
+    listed[0].click();
+    await expect
+      .poll(async () => {
+        await fixture.whenStable();
+        return document.activeElement;
+      })
+      .toBe(most);
+  });
+
+  it('shows the server’s refusal of a save at the cells it names', async () => {
+    const { fixture, http, el, button, input } = await setUp([
+      ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 }),
+    ]);
+    await fixture.whenStable();
+    const cold = input('/parameters/cautions/coldC');
+    cold.value = '1';
+    cold.dispatchEvent(new Event('change'));
+    await fixture.whenStable();
+    button('Save draft').click();
+    http.expectOne('/api/rule-sets/d2').flush(
+      {
+        type: '/problems/validation',
+        title: 'Invalid request',
+        status: 400,
+        detail: 'The rule set is not valid.',
+        errors: [
+          {
+            field: 'body/parameters/cautions/coldC',
+            message: 'Safety › Cold weather below: must be at most 0.',
+          },
+        ],
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
+    await fixture.whenStable();
+    expect(cold.getAttribute('aria-invalid')).toBe('true');
+    expect(document.getElementById(cold.getAttribute('aria-describedby')!)?.textContent).toBe(
+      'Safety › Cold weather below: must be at most 0.',
+    );
+    expect(el.querySelector('[role=alert]')?.textContent).toContain('The rule set is not valid.');
+    expect(el.querySelector('[role=alert]')?.textContent).not.toContain('body/');
+  });
+
+  it('asks before publishing, saying how many teams and coaches the server counts', async () => {
+    const { fixture, http, button } = await setUp([
+      ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 }),
+    ]);
+    await fixture.whenStable();
+    const dialogButton = (label: string) =>
+      Array.from(document.querySelectorAll<HTMLButtonElement>('mat-dialog-container button')).find((b) =>
+        b.textContent?.includes(label),
+      )!;
+
+    button('Publish').click();
+    await fixture.whenStable();
+    http.expectOne('/api/rule-sets/reach').flush({ teams: 7, coaches: 12 });
+    await fixture.whenStable();
+    const reach = document.querySelector('[data-testid=publish-reach]')!.textContent!;
+    expect(reach).toContain(
+      'Publishing changes the plans every coach makes from now on for 7 teams (12 coaches on their staff).',
+    );
+    expect(reach).toContain('Plans already made keep their rules.');
+    dialogButton('Not yet').click();
+    await fixture.whenStable();
+    http.expectNone('/api/rule-sets/d2/publish');
+
+    button('Publish').click();
+    await fixture.whenStable();
+    http.expectOne('/api/rule-sets/reach').flush({ teams: 1, coaches: 1 });
+    await fixture.whenStable();
+    expect(document.querySelector('[data-testid=publish-reach]')!.textContent).toContain(
+      'for 1 team (1 coach on their staff).',
+    );
+    dialogButton('Publish').click();
+    await fixture.whenStable();
+    const publish = http.expectOne('/api/rule-sets/d2/publish');
+    expect(publish.request.method).toBe('POST');
+  });
 });

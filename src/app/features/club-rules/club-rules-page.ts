@@ -1,6 +1,16 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, effect, inject, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  ElementRef,
+  inject,
+  signal,
+  viewChild,
+} from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
+import { MatDialog } from '@angular/material/dialog';
 import { MatTabsModule } from '@angular/material/tabs';
 import type { RuleSetDto } from '../../../../shared/types';
 import { problemMessage } from '../../core/http/problem-message';
@@ -8,14 +18,20 @@ import { ICONS } from '../../core/icons/shipped-icon';
 import { momentDayWords } from '../../core/locale/locale-format';
 import { ClubActivities, type ActivityEdit } from './club-activities';
 import { RuleHistory } from './rule-history';
+import { PublishDialog, type PublishDialogData } from './publish-dialog';
 import { RuleJsonEditor } from './rule-json-editor';
 import { RuleTables, type RuleEdit } from './rule-tables';
 import { RuleTryIt } from './rule-try-it';
 import { diffJson } from './services/json-diff';
+import { rulePathWords } from '../../../../shared/types/rule-words';
 import { setAt } from './services/json-pointer';
 import { rebaseEdits, type Rebased } from './services/rebase-edits';
+import { activityIndexOf, cellOf, refusalProblems } from './services/rule-cells';
 import { RuleSetsApi } from './services/rule-sets-api';
 import { loadRuleValidator, type RuleProblem } from './services/rule-validation';
+
+/** Tabs of the workspace, in order. */
+const TABS = { tables: 0, activities: 1 } as const;
 
 /** A save refused because another lead saved first. */
 interface Conflict {
@@ -42,6 +58,9 @@ interface Conflict {
 })
 export class ClubRulesPage {
   private readonly api = inject(RuleSetsApi);
+  private readonly dialog = inject(MatDialog);
+  private readonly tables = viewChild(RuleTables);
+  private readonly advanced = viewChild<ElementRef<HTMLElement>>('advanced');
 
   /** "1 Dec 2026" in the browser's locale. */
   protected readonly dayOf = (at: string) => momentDayWords(at, 'day-month-year');
@@ -56,7 +75,25 @@ export class ClubRulesPage {
   protected readonly baseBody = signal<unknown>(null);
   /** The draft as edited on screen. */
   protected readonly body = signal<unknown>(null);
+  /** What the rules check finds in the rules shown. */
   protected readonly problems = signal<RuleProblem[]>([]);
+  /** What the server found when it refused a save or a publish, until the next edit. */
+  protected readonly refused = signal<RuleProblem[]>([]);
+  /** Every problem once, each shown at its table cell and listed above the tables. */
+  protected readonly allProblems = computed(() => {
+    const seen = new Set<string>();
+    return [...this.problems(), ...this.refused()].filter((p) => {
+      const key = `${p.pointer}\u0000${p.message}`;
+      if (seen.has(key)) return false;
+      seen.add(key);
+      return true;
+    });
+  });
+  protected readonly tab = signal<number>(TABS.tables);
+  /** "Group sizes › Keep-ball › Beginner › Most": a place in the rules in words. */
+  protected readonly placeWords = (pointer: string) => rulePathWords(pointer, this.body());
+  /** The whole rule set as text, for the rare change the tables do not offer. */
+  protected readonly advancedOpen = signal(false);
   protected readonly loading = signal(true);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
@@ -125,11 +162,13 @@ export class ClubRulesPage {
 
   protected applyEdit(edit: RuleEdit): void {
     this.notice.set(null);
+    this.refused.set([]);
     this.body.update((body) => setAt(body, edit.pointer, edit.value));
   }
 
   protected replaceBody(body: unknown): void {
     this.notice.set(null);
+    this.refused.set([]);
     this.body.set(body);
   }
 
@@ -173,8 +212,8 @@ export class ClubRulesPage {
           });
           failed?.('another lead saved the draft first; see the message at the top of the page.');
         } else {
-          this.error.set(problemMessage(error));
-          failed?.(problemMessage(error));
+          this.refuse(error);
+          failed?.(problemMessage(error, { fields: false }));
         }
       },
     });
@@ -201,19 +240,61 @@ export class ClubRulesPage {
   protected publish(): void {
     const draft = this.draft();
     if (!draft) return;
-    if (this.problems().length) {
+    if (this.allProblems().length) {
       this.error.set('Fix the problems listed before publishing; coaches would get plans from broken rules.');
       return;
     }
-    const go = () =>
-      this.run(this.api.publish(draft.id), (published) => {
+    const data: PublishDialogData = { version: draft.version };
+    this.dialog
+      .open<PublishDialog, PublishDialogData, boolean>(PublishDialog, { data, autoFocus: 'dialog' })
+      .afterClosed()
+      .subscribe((confirmed) => {
+        if (!confirmed) return;
+        const go = () => this.publishDraft(draft.id);
+        if (this.unsavedCount() > 0) this.save(go);
+        else go();
+      });
+  }
+
+  /** Takes the head of coaching to where a problem is: its table cell, its activity, or the text. */
+  protected showProblem(problem: RuleProblem): void {
+    if (cellOf(problem.pointer)) {
+      this.tab.set(TABS.tables);
+      this.tables()?.reveal(problem.pointer);
+      return;
+    }
+    if (activityIndexOf(problem.pointer) !== null) {
+      this.tab.set(TABS.activities);
+      return;
+    }
+    this.advancedOpen.set(true);
+    setTimeout(() => this.advanced()?.nativeElement.scrollIntoView?.({ block: 'start' }));
+  }
+
+  private publishDraft(id: string): void {
+    if (this.busy()) return;
+    this.busy.set(true);
+    this.error.set(null);
+    this.api.publish(id).subscribe({
+      next: (published) => {
+        this.busy.set(false);
         this.notice.set(
           `Published as version ${published.version}. New plans use it; old plans keep theirs.`,
         );
         this.load();
-      });
-    if (this.unsavedCount() > 0) this.save(go);
-    else go();
+      },
+      error: (error: unknown) => {
+        this.busy.set(false);
+        this.refuse(error);
+      },
+    });
+  }
+
+  /** A refusal: its field problems go to their cells, its words to the top of the page. */
+  private refuse(error: unknown): void {
+    const problems = refusalProblems(error);
+    this.refused.set(problems);
+    this.error.set(problemMessage(error, { fields: problems.length === 0 }));
   }
 
   protected rollbackTo(version: RuleSetDto): void {

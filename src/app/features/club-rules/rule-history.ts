@@ -14,7 +14,8 @@ import type { RuleSetChangeDto } from '../../../../shared/types/rule-set-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { momentWords } from '../../core/locale/locale-format';
-import { diffJson, showValue, type JsonChange } from './services/json-diff';
+import { ruleChangeWords, rulePathWords, ruleValueWords } from '../../../../shared/types/rule-words';
+import { diffJson, type JsonChange } from './services/json-diff';
 import { RuleSetsApi } from './services/rule-sets-api';
 
 /** Conewise's own starting rules, as the server answers for the id "default". */
@@ -30,6 +31,9 @@ const STARTING_RULES: RuleSetDto = {
   updatedAt: '',
   revision: 0,
 };
+
+/** Changes listed under one entry of the log before "and N more". */
+const SHOWN_CHANGES = 6;
 
 /** Every version with who saved it and when, a diff between any two, and roll back. */
 @Component({
@@ -53,7 +57,7 @@ export class RuleHistory {
   protected readonly toId = signal<string | null>(null);
   private readonly bodies = signal<Record<string, unknown>>({});
   protected readonly error = signal<string | null>(null);
-  protected readonly showValue = showValue;
+  protected readonly valueWords = ruleValueWords;
   /** "1 Dec 2026, 16:20" in the browser's locale. */
   protected readonly when = momentWords;
   /** The change log: who saved, published or rolled back what. */
@@ -92,18 +96,37 @@ export class RuleHistory {
 
   protected actionWord(action: string): string {
     const words: Record<string, string> = {
-      create: 'started draft',
-      update: 'saved',
-      publish: 'published',
-      rollback: 'rolled back to',
+      create: 'started a draft, version',
+      update: 'saved the draft, version',
+      publish: 'published version',
+      rollback: 'published earlier rules again as version',
     };
-    return words[action] ?? action;
+    return words[action] ?? 'changed version';
   }
 
-  protected paths(entry: RuleSetChangeDto): string {
-    const shown = entry.changedPaths.slice(0, 3).join(', ');
-    const more = entry.changedPaths.length - 3;
-    return more > 0 ? `${shown} and ${more} more` : shown;
+  /** "Draft", "Published" (what new plans use) or "Earlier version". */
+  protected statusWords(version: RuleSetDto): string {
+    if (version.id === this.publishedId()) return 'Published';
+    return version.status === 'draft' ? 'Draft' : 'Earlier version';
+  }
+
+  /** What a save changed, a line a place: "Group sizes › Keep-ball › Beginner › Most: 6 → 5". */
+  protected changeLines(entry: RuleSetChangeDto): string[] {
+    const document = this.versions().find((v) => v.id === entry.ruleSetId)?.body;
+    const lines = entry.changes
+      ? entry.changes.map((change) => ruleChangeWords(change, document))
+      : entry.changedPaths.map((path) => (path === '(name)' ? 'Name' : rulePathWords(path, document)));
+    return lines.length > SHOWN_CHANGES + 1
+      ? [...lines.slice(0, SHOWN_CHANGES), `and ${lines.length - SHOWN_CHANGES} more changes`]
+      : lines;
+  }
+
+  /** A place of the compared rules in words. */
+  protected placeWords(change: JsonChange): string {
+    return rulePathWords(
+      change.pointer,
+      this.bodies()[this.toId() ?? ''] ?? this.bodies()[this.fromId() ?? ''],
+    );
   }
 
   protected versionOf(entry: RuleSetChangeDto): number {
@@ -114,13 +137,13 @@ export class RuleHistory {
     const from = this.fromVersion();
     const to = this.toVersion();
     const name = (v: RuleSetDto | null) =>
-      v && v.id !== STARTING_RULES.id ? `v${v.version}` : 'the starting rules';
+      v && v.id !== STARTING_RULES.id ? `version ${v.version}` : 'the starting rules';
     return `${count} difference${count === 1 ? '' : 's'} from ${name(from)} to ${name(to)}`;
   }
 
   protected label(version: RuleSetDto): string {
     if (version.id === STARTING_RULES.id) return 'Conewise starting rules';
-    return `v${version.version} · ${version.status} · ${version.authorName}`;
+    return `Version ${version.version} · ${this.statusWords(version)} · ${version.authorName}`;
   }
 
   protected choose(which: 'from' | 'to', event: Event): void {

@@ -29,7 +29,7 @@ interface PinnedProblem {
   offset: number | null;
 }
 
-/** The rule set as JSON for leads who want everything; every problem pinned to its line. */
+/** The advanced text view: the whole rule set as text, every problem pinned to its line. */
 @Component({
   selector: 'cw-rule-json-editor',
   imports: [MatButtonModule, ...ICONS],
@@ -97,7 +97,7 @@ export class RuleJsonEditor {
       this.bodyChange.emit(parsed);
     } catch (error) {
       this.syntaxError.set({
-        message: error instanceof Error ? error.message : 'This is not valid JSON.',
+        message: error instanceof Error ? error.message : 'The text cannot be read.',
         at: syntaxErrorLocation(text, error),
       });
     }

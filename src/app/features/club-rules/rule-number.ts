@@ -1,4 +1,14 @@
-import { computed, Directive, inject, InjectionToken, input, type Signal } from '@angular/core';
+import {
+  computed,
+  Directive,
+  effect,
+  ElementRef,
+  inject,
+  InjectionToken,
+  input,
+  Renderer2,
+  type Signal,
+} from '@angular/core';
 import { getAt } from './services/json-pointer';
 
 /** The document a number field edits: what it reads, whether it may change it, where edits go. */
@@ -6,14 +16,27 @@ export interface RuleDocument {
   readonly body: Signal<unknown>;
   readonly readOnly: Signal<boolean>;
   edit(pointer: string, value: unknown): void;
+  /** The problems the rules check found at a cell, in sentences (none: an empty list). */
+  problemsAt(pointer: string): string[];
 }
 
 export const RULE_DOCUMENT = new InjectionToken<RuleDocument>('RULE_DOCUMENT');
 
+let nextId = 0;
+
+const PROBLEM_STYLE: Record<string, string> = {
+  display: 'block',
+  color: 'var(--mat-sys-error)',
+  'font-size': '0.85rem',
+  'white-space': 'normal',
+  'max-width': '260px',
+};
+
 /**
  * A number input bound to one place of the rule-set document: shows the number there, is read-only
- * with the document, carries the pointer for tests and the JSON view, and sends an edit when a
- * number is entered (an empty or unreadable field changes nothing).
+ * with the document, carries the pointer for tests and for finding the cell, sends an edit when a
+ * number is entered (an empty or unreadable field changes nothing), and while the rules check
+ * finds a problem there is marked invalid with the problem written under it.
  */
 @Directive({
   selector: 'input[cwRuleNumber]',
@@ -21,6 +44,8 @@ export const RULE_DOCUMENT = new InjectionToken<RuleDocument>('RULE_DOCUMENT');
     '[value]': 'value()',
     '[readOnly]': 'document.readOnly()',
     '[attr.data-pointer]': 'cwRuleNumber()',
+    '[attr.aria-invalid]': 'problems().length > 0',
+    '[attr.aria-describedby]': 'problems().length ? messageId : null',
     '(change)': 'changed($event)',
   },
 })
@@ -28,10 +53,35 @@ export class RuleNumber {
   /** The JSON pointer of the number. */
   readonly cwRuleNumber = input.required<string>();
   protected readonly document = inject(RULE_DOCUMENT);
+  protected readonly messageId = `cw-cell-problem-${++nextId}`;
   protected readonly value = computed(() => {
     const v = getAt(this.document.body(), this.cwRuleNumber());
     return typeof v === 'number' ? v : null;
   });
+  protected readonly problems = computed(() => this.document.problemsAt(this.cwRuleNumber()));
+
+  constructor() {
+    const field = inject<ElementRef<HTMLInputElement>>(ElementRef).nativeElement;
+    const renderer = inject(Renderer2);
+    let shown: HTMLElement | null = null;
+    effect(() => {
+      const text = this.problems().join(' ');
+      if (!text) {
+        shown?.remove();
+        shown = null;
+        return;
+      }
+      if (!shown) {
+        shown = renderer.createElement('span') as HTMLElement;
+        // Made here, outside the table's template: styled in place, as the tables' own errors are.
+        for (const [name, value] of Object.entries(PROBLEM_STYLE)) renderer.setStyle(shown, name, value);
+        renderer.setAttribute(shown, 'id', this.messageId);
+        renderer.setAttribute(shown, 'data-testid', 'cell-problem');
+        field.insertAdjacentElement('afterend', shown);
+      }
+      shown.textContent = text;
+    });
+  }
 
   protected changed(event: Event): void {
     const field = event.target as HTMLInputElement;

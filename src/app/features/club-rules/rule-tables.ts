@@ -1,8 +1,12 @@
 import {
+  afterNextRender,
   ChangeDetectionStrategy,
   Component,
   computed,
+  ElementRef,
   forwardRef,
+  inject,
+  Injector,
   input,
   output,
   signal,
@@ -17,8 +21,11 @@ import {
   PLAN_KINDS,
   STATION_KINDS,
 } from '../../../../shared/types';
+import { ageBandWords, ageGroupWords, LEVEL_WORDS } from '../../../../shared/types/rule-words';
 import { RULE_DOCUMENT, RuleNumber, type RuleDocument } from './rule-number';
 import { getAt, toPointer } from './services/json-pointer';
+import { cellOf, placeOf, problemsByCell, type RulePanel } from './services/rule-cells';
+import type { RuleProblem } from './services/rule-validation';
 
 /** An edit from the tables: the value to put at a pointer of the rule-set document. */
 export interface RuleEdit {
@@ -57,8 +64,19 @@ export class RuleTables implements RuleDocument {
   readonly body = input.required<unknown>();
   /** Shows the tables without inputs that change anything. */
   readonly readOnly = input(false);
+  /** Problems the rules check (or the server) found, each shown at its cell. */
+  readonly problems = input<readonly RuleProblem[]>([]);
   /** Emits each edit as a pointer and value. */
   readonly edited = output<RuleEdit>();
+
+  private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
+  private readonly injector = inject(Injector);
+  private readonly cellProblems = computed(() => problemsByCell(this.problems()));
+  /** The folds that are open (the first table starts open). */
+  protected readonly open = signal<ReadonlySet<RulePanel>>(new Set(['keepBall']));
+  protected readonly levelWords: Record<string, string> = LEVEL_WORDS;
+  protected readonly bandWords = ageBandWords;
+  protected readonly ageWords = ageGroupWords;
 
   protected readonly levels = LEVELS;
   protected readonly bands = AGE_BANDS;
@@ -88,6 +106,50 @@ export class RuleTables implements RuleDocument {
   protected readonly phaseShareTotal = computed(() =>
     this.phaseRows().reduce((sum, row) => sum + (row.share || 0), 0),
   );
+
+  /** The problems at a cell, in sentences. */
+  problemsAt(pointer: string): string[] {
+    return this.cellProblems().get(pointer) ?? [];
+  }
+
+  /** Whether any cell in a fold has a problem (the fold's title says so). */
+  protected panelHasProblems(panel: RulePanel): boolean {
+    return [...this.cellProblems().keys()].some((cell) => placeOf(cell)?.panel === panel);
+  }
+
+  protected setOpen(panel: RulePanel, open: boolean): void {
+    this.open.update((all) => {
+      const next = new Set(all);
+      if (open) next.add(panel);
+      else next.delete(panel);
+      return next;
+    });
+  }
+
+  /**
+   * Shows the cell of a problem: opens its fold, picks its level, age band or kind of session,
+   * then puts the cursor in it. False when no table shows that place.
+   */
+  reveal(pointer: string): boolean {
+    const cell = cellOf(pointer);
+    const place = cell ? placeOf(cell) : null;
+    if (!cell || !place) return false;
+    this.setOpen(place.panel, true);
+    if (place.level) this.level.set(place.level);
+    if (place.band) this.band.set(place.band);
+    if (place.planKind) this.planKind.set(place.planKind);
+    afterNextRender(
+      () => {
+        const field = this.host.nativeElement.querySelector<HTMLElement>(
+          `[data-pointer="${cell.replace(/["\\]/g, '\\$&')}"]`,
+        );
+        field?.scrollIntoView?.({ block: 'center' });
+        field?.focus();
+      },
+      { injector: this.injector },
+    );
+    return true;
+  }
 
   protected kindLabel(kind: string): string {
     return KIND_LABELS[kind] ?? kind;
@@ -120,6 +182,12 @@ export class RuleTables implements RuleDocument {
     this.edited.emit({ pointer, value: (event.target as HTMLInputElement).checked });
   }
 
+  /** The formats cell's own message (unreadable text) and the rules check's, in one line. */
+  protected formatsProblem(level: string): string {
+    const pointer = this.ptr('keepBall', level, 'formats');
+    return [this.formatErrors()[level], ...this.problemsAt(pointer)].filter(Boolean).join(' ');
+  }
+
   protected formatsText(level: string): string {
     return formatsToText(this.value(this.ptr('keepBall', level, 'formats')));
   }
@@ -127,7 +195,12 @@ export class RuleTables implements RuleDocument {
   protected setFormats(level: string, event: Event): void {
     const text = (event.target as HTMLInputElement).value;
     const formats = textToFormats(text);
-    this.formatErrors.update((all) => ({ ...all, [level]: formats ? '' : 'Write formats like 4v1, 3v1' }));
+    this.formatErrors.update((all) => ({
+      ...all,
+      [level]: formats
+        ? ''
+        : `Keep-ball, ${LEVEL_WORDS[level as keyof typeof LEVEL_WORDS] ?? level}: write formats like 4v1, 3v1.`,
+    }));
     if (formats) this.edited.emit({ pointer: this.ptr('keepBall', level, 'formats'), value: formats });
   }
 

@@ -18,8 +18,9 @@ describe('StatusPage', () => {
     const { fixture, http, text } = setUp();
     http.expectOne('/api/health').flush({ status: 'ok', db: 'up', version: '1.2.3' });
     await fixture.whenStable();
-    expect(text()).toContain('database up');
-    expect(text()).toContain('Version 1.2.3');
+    expect(text()).toContain('Conewise is working normally.');
+    expect(text()).toContain('Conewise 1.2.3');
+    expect(text()).not.toMatch(/database|Server ok/);
   });
 
   it('shows the database as down from the body of a 503', async () => {
@@ -31,13 +32,14 @@ describe('StatusPage', () => {
         { status: 503, statusText: 'Unavailable' },
       );
     await fixture.whenStable();
-    expect(text()).toContain('database down');
+    expect(text()).toContain('Conewise cannot reach its stored plans and teams just now.');
+    expect(text()).not.toContain('working normally');
   });
 
   it('says the server does not answer when the request fails outright', async () => {
     const { fixture, http, text } = setUp();
     http.expectOne('/api/health').error(new ProgressEvent('error'));
     await fixture.whenStable();
-    expect(text()).toContain('does not answer');
+    expect(text()).toContain('Conewise cannot be reached.');
   });
 });

@@ -2,7 +2,7 @@ import { HttpClient, HttpHeaders } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { map, Observable } from 'rxjs';
 import type { Page, PlanSummaryDto, RuleSetDto, SessionPlanDto } from '../../../../../shared/types';
-import type { RuleSetChangeDto } from '../../../../../shared/types/rule-set-api';
+import type { RuleSetChangeDto, RuleSetReachDto } from '../../../../../shared/types/rule-set-api';
 
 /** The club's rule sets: every version, drafts and published, with who changed them. Lead only. */
 @Injectable({ providedIn: 'root' })
@@ -44,6 +44,11 @@ export class RuleSetsApi {
   /** POST /api/rule-sets/:id/publish: the club's rules for new plans from now on. */
   publish(id: string): Observable<RuleSetDto> {
     return this.http.post<RuleSetDto>(`/api/rule-sets/${encodeURIComponent(id)}/publish`, {});
+  }
+
+  /** GET /api/rule-sets/reach: the teams (and their staff) whose new plans follow the published rules. */
+  reach(): Observable<RuleSetReachDto> {
+    return this.http.get<RuleSetReachDto>('/api/rule-sets/reach');
   }
 
   /** POST /api/rule-sets/rollback: publishes an earlier version again, as a new version. */

@@ -1,43 +1,75 @@
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { HttpClient } from '@angular/common/http';
+import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatExpansionModule } from '@angular/material/expansion';
-import type { Plan } from '../../../../../shared/types';
+import type { Plan, TraceEntry } from '../../../../../shared/types';
+import type { RuleSetSummaryDto } from '../../../../../shared/types/rule-set-api';
+import { rulesInWords } from '../../../../../shared/types/rule-words';
 
-/** Why the plan looks the way it does: the club rules that fired and what each changed. */
+/** Steps the planner takes by itself (timing, keepers, edits), as against the club's own rules. */
+export function isPlannerStep(entry: TraceEntry): boolean {
+  return /^(replan:)?(engine|edit)\./.test(entry.ruleId);
+}
+
+/** "1 club rule", "3 club rules": a count and its noun. */
+export function counted(n: number, one: string, many: string): string {
+  return `${n === 0 ? 'No' : n} ${n === 1 ? one : many}`;
+}
+
+/**
+ * Why the plan looks the way it does: in sentences, what each club rule did, then the planner's
+ * own steps, counted apart. Codes, the rule set's version and the plan reference (its seed) wait in
+ * a "Details" fold for whoever needs to reproduce the plan.
+ */
 @Component({
   selector: 'cw-why-panel',
   imports: [MatExpansionModule],
   template: `
-    <mat-expansion-panel>
+    <mat-expansion-panel (opened)="loadRules()">
       <mat-expansion-panel-header>
         <mat-panel-title><h2>Why this plan</h2></mat-panel-title>
-        <mat-panel-description>{{ fired().length }} club rules applied</mat-panel-description>
+        <mat-panel-description data-testid="why-count">{{ countWords() }}</mat-panel-description>
       </mat-expansion-panel-header>
-      <p class="cw-muted">
-        Rule set {{ plan().ruleSet.id }}, version {{ plan().ruleSet.version }} · seed {{ plan().seed }}
-      </p>
-      <ul class="cw-trace">
-        @for (entry of fired(); track entry.ruleId + $index) {
-          <li>
-            <strong>{{ entry.description ?? entry.ruleId }}</strong>
-            @if (entry.effect) {
-              <span> — {{ entry.effect }}</span>
-            }
-          </li>
-        }
-      </ul>
-      @if (skipped().length) {
-        <details>
-          <summary>{{ skipped().length }} rules checked that did not apply</summary>
-          <ul class="cw-trace">
-            @for (entry of skipped(); track entry.ruleId + $index) {
-              <li>{{ entry.description ?? entry.ruleId }}</li>
-            }
-          </ul>
-        </details>
+      <p class="cw-muted" data-testid="why-rules">{{ rulesLine() }}</p>
+      <h3>What the club’s rules did</h3>
+      @if (clubRules().length) {
+        <ul class="cw-trace" data-testid="why-club-rules">
+          @for (entry of clubRules(); track entry.ruleId + $index) {
+            <li>
+              <strong>{{ entry.description ?? 'A club rule' }}</strong>
+              @if (entry.effect) {
+                <span> — {{ entry.effect }}</span>
+              }
+            </li>
+          }
+        </ul>
+      } @else {
+        <p>None of the club’s rules changed this plan.</p>
+      }
+      @if (plannerSteps().length) {
+        <h3>How the planner fitted the session</h3>
+        <ul class="cw-trace" data-testid="why-planner">
+          @for (entry of plannerSteps(); track entry.ruleId + $index) {
+            <li>{{ entry.effect ?? entry.description }}</li>
+          }
+        </ul>
       }
       @if (plan().estimateNote) {
         <p class="cw-muted">{{ plan().estimateNote }}</p>
       }
+      <details data-testid="why-details">
+        <summary>Details</summary>
+        <p class="cw-muted">
+          Rules {{ plan().ruleSet.id }}, version {{ plan().ruleSet.version }} · plan ref {{ plan().seed }}
+          (the same request, rules and plan ref make the same plan)
+        </p>
+        <ul class="cw-trace">
+          @for (entry of plan().trace; track entry.ruleId + $index) {
+            <li>
+              <code>{{ entry.ruleId }}</code> {{ entry.fired ? 'applied' : 'checked, did not apply' }}
+            </li>
+          }
+        </ul>
+      </details>
     </mat-expansion-panel>
   `,
   styles: `
@@ -45,12 +77,19 @@ import type { Plan } from '../../../../../shared/types';
       margin: 0;
       font-size: 1.1rem;
     }
+    h3 {
+      margin: 12px 0 4px;
+      font-size: 1rem;
+    }
     .cw-trace {
       padding-left: 20px;
       margin: 6px 0;
     }
     .cw-trace li {
       margin: 4px 0;
+    }
+    code {
+      overflow-wrap: anywhere;
     }
     summary {
       cursor: pointer;
@@ -60,7 +99,32 @@ import type { Plan } from '../../../../../shared/types';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class WhyPanel {
+  private readonly http = inject(HttpClient);
+
   readonly plan = input.required<Plan>();
-  protected readonly fired = computed(() => this.plan().trace.filter((t) => t.fired));
-  protected readonly skipped = computed(() => this.plan().trace.filter((t) => !t.fired));
+  protected readonly clubRules = computed(() =>
+    this.plan().trace.filter((t) => t.fired && !isPlannerStep(t)),
+  );
+  protected readonly plannerSteps = computed(() =>
+    this.plan().trace.filter((t) => t.fired && isPlannerStep(t)),
+  );
+  protected readonly countWords = computed(
+    () =>
+      `${counted(this.clubRules().length, 'club rule', 'club rules')} applied · ${counted(this.plannerSteps().length, 'planner step', 'planner steps').toLowerCase()}`,
+  );
+  private readonly rules = signal<RuleSetSummaryDto | null>(null);
+  protected readonly rulesLine = computed(() => rulesInWords(this.rules()));
+  private asked: string | null = null;
+
+  /** The rules' name and publishing date, read when the panel is first opened. */
+  protected loadRules(): void {
+    const id = this.plan().ruleSet.id;
+    if (this.asked === id) return;
+    this.asked = id;
+    this.http.get<RuleSetSummaryDto>(`/api/rule-sets/${encodeURIComponent(id)}/summary`).subscribe({
+      next: (summary) => this.rules.set(summary),
+      // Offline or gone: the line says "Club rules" and the details keep the rest.
+      error: () => this.rules.set(null),
+    });
+  }
 }
