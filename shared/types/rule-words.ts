@@ -318,6 +318,8 @@ export function ruleValueWords(value: unknown): string {
     return words.length > 120 ? `${words.slice(0, 117)}…` : words;
   }
   const named = value as Record<string, unknown>;
+  if (typeof named['attackers'] === 'number' && typeof named['defenders'] === 'number')
+    return `${named['attackers']}v${named['defenders']}`;
   for (const key of ['title', 'description', 'name'])
     if (typeof named[key] === 'string' && named[key]) return `“${named[key] as string}”`;
   return 'a group of settings';

@@ -67,8 +67,25 @@ describe('club rules', () => {
     await page.getByRole('button', { name: 'Save draft' }).click();
     await expect.poll(() => page.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
 
-    // The JSON view pins a rule the engine refuses to its line; discarding puts the saved draft back.
-    await page.getByRole('tab', { name: 'JSON' }).click();
+    // A refused value is marked at its cell with a sentence and listed above the tables.
+    await formats.fill('5v1');
+    await formats.press('Tab');
+    const sentence = 'Keep-ball, Intermediate: 5v1 has more than 4 attackers per defender.';
+    await expect.poll(() => formats.getAttribute('aria-invalid')).toBe('true');
+    const cellProblem = page.locator(`#${await formats.getAttribute('aria-describedby')}`);
+    expect(await cellProblem.textContent()).toContain(sentence);
+    const listed = page.getByTestId('problem-list').getByRole('button', { name: sentence });
+    await listed.click();
+    await expect.poll(() => formats.evaluate((field) => field === document.activeElement)).toBe(true);
+    await screenshot(page, 'club-rules-cell-problem');
+    expect(await page.locator('cw-club-rules-page').innerText()).not.toMatch(/JSON|\/parameters/);
+    await page.getByRole('button', { name: 'Discard' }).click();
+    await expect.poll(() => page.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
+
+    // The advanced text view, out of the way below the tabs, pins a refused rule to its line;
+    // discarding puts the saved draft back.
+    expect(await page.getByRole('tab', { name: /JSON|text/i }).count()).toBe(0);
+    await page.getByTestId('advanced-toggle').click();
     const editor = page.locator('#rule-json');
     const document = JSON.parse(await editor.inputValue());
     document.parameters.keepBall.intermediate.formats = [{ attackers: 5, defenders: 1 }];
@@ -86,10 +103,10 @@ describe('club rules', () => {
     const intermediate = lines.findIndex((l, i) => i > keepBall && l.includes('"intermediate"'));
     const formatsLine = lines.findIndex((l, i) => i > intermediate && l.includes('"formats"'));
     const line = formatsLine + 2;
-    expect(await problem.textContent()).toContain('/parameters/keepBall/intermediate/formats/0');
-    expect(await problem.textContent()).toMatch(new RegExp(`Line ${line}\\b`));
+    expect(await problem.textContent()).toContain(sentence);
+    expect(await problem.textContent()).toMatch(new RegExp(`Line ${line}(?!\\d)`));
     await problem.click();
-    await screenshot(page, 'club-rules-json');
+    await screenshot(page, 'club-rules-advanced-text');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.getByRole('button', { name: 'Discard' }).click();
     await expect.poll(() => page.getByTestId('draft-state').getAttribute('data-unsaved')).toBe('0');
@@ -102,7 +119,19 @@ describe('club rules', () => {
     await screenshot(page, 'club-rules-try-it');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
+    // Publishing asks first, saying how many teams it changes (the server counts the club's teams).
+    const teams = (await club.api.get<{ teams: number }>('/api/rule-sets/reach', { token: lead.token })).body
+      .teams;
     await page.getByRole('button', { name: 'Publish' }).click();
+    const reach = page.getByTestId('publish-reach');
+    await expect
+      .poll(() => reach.textContent())
+      .toContain(
+        `changes the plans every coach makes from now on for ${teams} team${teams === 1 ? '' : 's'}`,
+      );
+    expect(await reach.textContent()).toContain('Plans already made keep their rules.');
+    await screenshot(page, 'club-rules-publish-confirm');
+    await page.getByTestId('confirm-publish').click();
     // Published once the club's published rules hold the change (the heading may say "version"
     // before, when an earlier suite published rules of its own).
     const publishedFormats = async () => {
@@ -123,9 +152,17 @@ describe('club rules', () => {
     await page.getByRole('tab', { name: 'History' }).click();
     await page.getByTestId('rule-diff').waitFor();
     expect(await page.getByTestId('rule-diff').textContent()).toContain(
-      '/parameters/keepBall/intermediate/formats',
+      'Keep-ball ratios › Intermediate › Formats',
     );
-    expect(await page.getByTestId('rule-change-log').textContent()).toContain('Morag Ellison');
+    const log = (await page.getByTestId('rule-change-log').textContent()) ?? '';
+    expect(log).toContain('Morag Ellison');
+    // The saved change as the server diffed it: the first format's attackers, the others gone.
+    expect(log).toContain('Keep-ball ratios › Intermediate › Formats › Format 1 › Attackers: 4 → 3');
+    expect(log).toMatch(/Keep-ball ratios › Intermediate › Formats › Format 2: removed \(was \d+v\d+\)/);
+    expect(log).not.toMatch(/\/parameters|group of settings/);
+    const history = await page.getByTestId('rule-history').textContent();
+    expect(history).toContain('Published');
+    expect(history).not.toMatch(/archived/i);
     await screenshot(page, 'club-rules-history');
     await page.close();
   });
@@ -154,7 +191,7 @@ describe('club rules', () => {
       for (const page of [pageA, pageB]) await page.getByTestId('draft-state').waitFor();
 
       // Both open the cautions table; A saves first.
-      for (const page of [pageA, pageB]) await page.getByText('Caution thresholds').click();
+      for (const page of [pageA, pageB]) await page.getByText('Weather safety').click();
       const heat = pageA.locator('input[data-pointer="/parameters/cautions/heatC"]');
       await heat.fill('30');
       await heat.press('Tab');
@@ -211,7 +248,7 @@ describe('club rules', () => {
     page.on('dialog', (dialog) => void dialog.accept());
     await club.open(page, lead, '/club/rules');
     await page.getByRole('tab', { name: 'History' }).click();
-    await page.getByRole('button', { name: `Roll back to v${earlier.version}` }).click();
+    await page.getByRole('button', { name: `Publish version ${earlier.version} again` }).click();
     await page.getByText(`version ${earlier.version}'s rules are published again`).waitFor();
 
     const now = await club.api.get<RuleSetDto>('/api/rule-sets/published', { token: lead.token });

@@ -70,6 +70,13 @@ describe('rulePathWords', () => {
         after: [],
       }),
     ).toBe('Activities by age › Under 8 › Activities allowed: Keep-ball → none');
+    expect(
+      ruleChangeWords({
+        path: '/parameters/keepBall/beginner/formats/1',
+        change: 'removed',
+        before: { attackers: 3, defenders: 1 },
+      }),
+    ).toBe('Keep-ball ratios › Beginner › Formats › Format 2: removed (was 3v1)');
   });
 });
 
