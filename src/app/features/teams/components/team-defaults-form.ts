@@ -1,13 +1,27 @@
 import { ChangeDetectionStrategy, Component, effect, inject, input, output, signal } from '@angular/core';
-import { NonNullableFormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import {
+  NonNullableFormBuilder,
+  ReactiveFormsModule,
+  Validators,
+  type AbstractControl,
+} from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { AGE_GROUPS, LEVELS, type AgeGroup, type Level, type TeamDto } from '../../../../../shared/types';
+import {
+  distanceLimitsIn,
+  distanceSymbol,
+  formatSize,
+  metresFrom,
+  wholeDistance,
+} from '../../../../../shared/units';
 import type { TeamBody } from '../../../core/api/teams-api';
 import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
+import { schemaNumberValidators } from '../../../core/forms/schema-limits';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
+import { UnitChoice } from '../../../core/units/unit-choice';
 import { LEVEL_LABELS } from '../../../core/labels/plan-labels';
 import { AgeGroupLabelPipe } from '../../../shared/pipes/age-group-label';
 
@@ -67,27 +81,59 @@ export class TeamDefaultsForm {
   protected readonly message = controlMessage;
   /** True while the value is checked against the schema, before `save` is emitted. */
   protected readonly checking = signal(false);
-  private readonly metres = [Validators.required, Validators.min(5), Validators.max(130)];
+  /** The person's distance unit: the usual space is typed and shown in it, and kept in metres. */
+  private readonly unit = inject(UnitChoice).distance();
+  protected readonly unitSymbol = distanceSymbol(this.unit);
+  protected readonly sizeText = (space: { width: number; length: number }) => formatSize(this.unit, space);
   protected readonly form = inject(NonNullableFormBuilder).group({
     name: ['', Validators.required],
     ageGroup: ['U10' as AgeGroup],
     level: ['beginner' as Level],
-    usualSpace: inject(NonNullableFormBuilder).group({ width: [30, this.metres], length: [40, this.metres] }),
+    usualSpace: inject(NonNullableFormBuilder).group({
+      width: [this.inUnit(30), Validators.required],
+      length: [this.inUnit(40), Validators.required],
+    }),
   });
 
   constructor() {
     effect(() => {
       const team = this.team();
-      if (team) this.form.reset({ ...team, usualSpace: { ...team.usualSpace } });
+      if (!team) return;
+      const { width, length } = team.usualSpace;
+      this.form.reset({ ...team, usualSpace: { width: this.inUnit(width), length: this.inUnit(length) } });
     });
     effect(() => applyFieldErrors(this.form, this.serverErrors()));
+    void this.loadLimits();
+  }
+
+  /** The schema's limits for a space (metres), converted to the person's unit, on both fields. */
+  private async loadLimits(): Promise<void> {
+    const common = (await import('../../../../../shared/schemas/api/common.schema.json')).default;
+    const inUnit = (limits: Parameters<typeof distanceLimitsIn>[1]) => distanceLimitsIn(this.unit, limits);
+    const { width, length } = this.form.controls.usualSpace.controls;
+    for (const control of [width, length] as AbstractControl[]) {
+      control.addValidators(schemaNumberValidators(common, '/definitions/metres', inUnit));
+      control.updateValueAndValidity({ emitEvent: false });
+    }
+  }
+
+  /** Metres as typed in the person's unit: whole yards, metres as they are. */
+  private inUnit(metres: number): number {
+    return this.unit === 'metres' ? metres : wholeDistance(this.unit, metres);
   }
 
   protected async submit(): Promise<void> {
     if (this.pending() || this.checking()) return;
     this.checking.set(true);
     try {
-      const value = this.form.getRawValue();
+      const typed = this.form.getRawValue();
+      const value = {
+        ...typed,
+        usualSpace: {
+          width: metresFrom(this.unit, typed.usualSpace.width),
+          length: metresFrom(this.unit, typed.usualSpace.length),
+        },
+      };
       const check = await checkAgainstSchema(this.form, this.schemaName(), value, LABELS);
       if (check.ok) this.save.emit(value);
     } finally {
