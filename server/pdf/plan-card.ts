@@ -1,6 +1,7 @@
 import type { Column, Content, TDocumentDefinitions, TableCell } from 'pdfmake/interfaces';
 import type { Changeover, Equipment, Phase, Plan, PositionRole, Station } from '../../shared/types';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, POSITION_STYLE } from '../../shared/types/activity-words';
+import { ageGroupLabel, LEVEL_LABELS } from '../../shared/types/squad-words';
 import { planLength, sessionClock } from '../../shared/time/session-clock';
 import { dayInWords, minuteInWords, timeInWords } from '../services/session-day';
 import { DEFAULT_UNITS, formatSize, inUnitsDeep, type DistanceUnit, type Units } from '../../shared/units';
@@ -97,7 +98,7 @@ export const SMALLEST: CardDensity = {
 
 const KIT_LABELS: Record<keyof Equipment, [one: string, many: string]> = {
   balls: ['ball', 'balls'],
-  cones: ['disc cone', 'disc cones'],
+  cones: ['cone', 'cones'],
   bibs: ['bib', 'bibs'],
   goals: ['small goal', 'small goals'],
 };
@@ -137,8 +138,8 @@ const LEGEND: [LegendKey, string][] = [
 
 /** Short role tags in the group list, so the list still reads on a grey printout. */
 const ROLE_TAGS: Partial<Record<PositionRole, string>> = {
-  goalkeeper: 'GK',
-  defender: 'def',
+  goalkeeper: 'goalkeeper',
+  defender: 'defender',
   'team-a': 'A',
   'team-b': 'B',
   server: 'server',
@@ -219,8 +220,8 @@ function header(input: CardInput, at: MinuteText, timed: boolean): Content {
     `${planLength(plan.phases)} min`,
   ].filter(Boolean);
   const facts = [
-    request.ageGroup,
-    request.level,
+    ageGroupLabel(request.ageGroup),
+    LEVEL_LABELS[request.level],
     `${request.players.length} players`,
     `${request.coaches} ${request.coaches === 1 ? 'coach' : 'coaches'}`,
     `space ${formatSize((input.units ?? DEFAULT_UNITS).distance, request.space)}`,
@@ -451,12 +452,7 @@ function breakRow(phase: Phase, at: MinuteText, density: CardDensity): Content {
 }
 
 /** "10:05–10:12  Keep-ball and breakouts · Keep-ball · 7 min · intensity 4/5", then its set-up work. */
-function phaseHeading(
-  phase: Phase,
-  previous: Phase | undefined,
-  at: MinuteText,
-  note?: string,
-): Content {
+function phaseHeading(phase: Phase, previous: Phase | undefined, at: MinuteText, note?: string): Content {
   const setUp = changeoverText(phase.changeover, previous);
   const minutes = phase.endMinute - phase.startMinute;
   const kind = ACTIVITY_KIND_LABELS[phase.activityKind];
@@ -542,7 +538,7 @@ function stationTitle(phase: Phase, station: Station, index: number): Content {
   };
 }
 
-/** "1 Ava K. (GK) · 2 Bilal R. …": numbers as in the diagram's circles, roles from the start positions. */
+/** "1 Ava K. (goalkeeper) · 2 Bilal R. …": numbers as in the diagram's circles, roles from the start positions. */
 export function groupList(station: Station, names: (id: string) => string): string[] {
   const roleOf = new Map(station.positions.map((p) => [p.id, p.role]));
   const keepers = new Set(station.roles.goalkeeper ?? []);
@@ -567,7 +563,7 @@ export function groupList(station: Station, names: (id: string) => string): stri
     group = [
       ...sides.map(
         (side, i) =>
-          `${POSITION_STYLE[i === 0 ? 'team-a' : 'team-b'].label}: ${side.map((id) => entry(id, { goalkeeper: 'GK' })).join(', ')}`,
+          `${POSITION_STYLE[i === 0 ? 'team-a' : 'team-b'].label}: ${side.map((id) => entry(id, { goalkeeper: 'goalkeeper' })).join(', ')}`,
       ),
       ...[...others].map(([label, entries]) => `${label}: ${entries.join(', ')}`),
     ];
@@ -653,7 +649,7 @@ function coachingStack(station: Station): Content {
     style: 'small',
     stack: [
       station.coachingPoints.length
-        ? { text: [{ text: 'Look for: ', style: 'label' }, station.coachingPoints.join('; ')] }
+        ? { text: [{ text: 'Coaching points: ', style: 'label' }, station.coachingPoints.join('; ')] }
         : '',
       station.progressions.easier.length
         ? { text: [{ text: 'Easier: ', style: 'label' }, station.progressions.easier.join('; ')] }
@@ -675,7 +671,7 @@ function coachingColumns(station: Station): Content {
     margin: [0, 3, 0, 0],
     columnGap: 10,
     columns: [
-      list('Look for', station.coachingPoints),
+      list('Coaching points', station.coachingPoints),
       list('Easier', station.progressions.easier),
       list('Harder', station.progressions.harder),
     ],
@@ -688,7 +684,7 @@ function coachingRunOn(station: Station): Content {
     margin: [0, 2, 0, 0],
     style: 'small',
     text: [
-      ...coachingPart('Look for', station.coachingPoints),
+      ...coachingPart('Coaching points', station.coachingPoints),
       ...coachingPart('Easier', station.progressions.easier),
       ...coachingPart('Harder', station.progressions.harder),
     ],
@@ -713,7 +709,7 @@ function coachingParagraphs(phase: Phase, activities: Station[], titled: boolean
       style: 'small',
       stack: [
         station.description ? { text: station.description, margin: [0, 0, 0, 2] } : '',
-        line('Look for', station.coachingPoints),
+        line('Coaching points', station.coachingPoints),
         line('Easier', station.progressions.easier),
         line('Harder', station.progressions.harder),
       ],
@@ -731,7 +727,7 @@ function coachingParagraphs(phase: Phase, activities: Station[], titled: boolean
           : [
               { text: `${station.title}: `, bold: true },
               station.description ? `${station.description} ` : '',
-              ...part('Look for', station.coachingPoints),
+              ...part('Coaching points', station.coachingPoints),
               ...part('Easier', station.progressions.easier),
               ...part('Harder', station.progressions.harder),
             ],
@@ -793,7 +789,7 @@ function closingBlock(plan: Plan): Content {
     unbreakable: true,
     margin: [0, 4, 0, 0],
     stack: [
-      { text: 'Cautions', style: 'phase', margin: [0, 0, 0, 2] },
+      { text: 'Safety', style: 'phase', margin: [0, 0, 0, 2] },
       ...(notices.length ? [list] : []),
       {
         text: [

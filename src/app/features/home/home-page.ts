@@ -14,6 +14,7 @@ import { weekRange } from '../../core/time/dates';
 import { problemMessage } from '../../core/http/problem-message';
 import { NoTeamYet } from '../../shared/components/no-team-yet';
 import { WeekSessions } from './components/week-sessions';
+import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
 
 interface TeamWeek {
   team: TeamDto;
@@ -23,7 +24,7 @@ interface TeamWeek {
 /** This week's sessions by team, and the one thing a coach comes for: plan a warm-up. */
 @Component({
   selector: 'cw-home-page',
-  imports: [RouterLink, MatButtonModule, MatCardModule, ...ICONS, NoTeamYet, WeekSessions],
+  imports: [AgeGroupLabelPipe, RouterLink, MatButtonModule, MatCardModule, ...ICONS, NoTeamYet, WeekSessions],
   templateUrl: './home-page.html',
   styleUrl: './home-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
