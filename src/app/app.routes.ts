@@ -88,6 +88,13 @@ export const routes: Routes = [
         canActivate: [roleGuard('lead')],
         loadComponent: () => import('./features/members/members-page').then((m) => m.MembersPage),
       },
+      {
+        // For the head of coaching; monitoring asks /api/health itself, which stays public.
+        path: 'status',
+        title: 'Is Conewise working? · Conewise',
+        canActivate: [roleGuard('lead')],
+        loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),
+      },
     ],
   },
   // After the signed-in routes: an empty-path frame would otherwise match / with nothing in it.
@@ -131,11 +138,6 @@ export const routes: Routes = [
         path: 'confirm-email',
         title: 'Confirm your e-mail address · Conewise',
         loadComponent: () => import('./features/auth/confirm-email-page').then((m) => m.ConfirmEmailPage),
-      },
-      {
-        path: 'status',
-        title: 'Is Conewise working? · Conewise',
-        loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),
       },
     ],
   },

@@ -55,7 +55,7 @@ describe('ClubRulesPage', () => {
     create.flush(ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 }));
     await fixture.whenStable();
     expect(input('/parameters/keepBall/beginner/maxAttackersPerDefender').readOnly).toBe(false);
-    expect(el.querySelector('[data-testid=draft-state]')?.textContent).toContain('Draft v2');
+    expect(el.querySelector('[data-testid=draft-state]')?.textContent).toContain('Draft (version 2)');
   });
 
   it('with nothing published, shows the starting rules read-only and lets the lead try them', async () => {
@@ -108,6 +108,9 @@ describe('ClubRulesPage', () => {
     );
     await fixture.whenStable();
     expect(el.querySelector('[data-testid=conflict]')?.textContent).toContain('nothing of yours is lost');
+    expect(el.querySelector('[data-testid=conflict] h2')?.textContent).toContain(
+      'Someone else saved these rules while you were editing',
+    );
 
     button('re-apply my changes').click();
     const theirs = body();

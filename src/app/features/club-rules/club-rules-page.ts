@@ -33,7 +33,7 @@ import { loadRuleValidator, type RuleProblem } from './services/rule-validation'
 /** Tabs of the workspace, in order. */
 const TABS = { tables: 0, activities: 1 } as const;
 
-/** A save refused because another lead saved first. */
+/** A save refused because someone else saved first. */
 interface Conflict {
   message: string;
   currentRevision: number | null;
@@ -210,7 +210,7 @@ export class ClubRulesPage {
             message: problemMessage(error),
             currentRevision: current.currentRevision ?? current.revision ?? null,
           });
-          failed?.('another lead saved the draft first; see the message at the top of the page.');
+          failed?.('someone else saved the draft first; see the message at the top of the page.');
         } else {
           this.refuse(error);
           failed?.(problemMessage(error, { fields: false }));

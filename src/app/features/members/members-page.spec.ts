@@ -61,7 +61,6 @@ function button(root: ParentNode, label: string): HTMLButtonElement {
   return found;
 }
 
-
 describe('MembersPage', () => {
   function setUp() {
     TestBed.configureTestingModule({
@@ -109,6 +108,37 @@ describe('MembersPage', () => {
     expect(pending).toContain('new@club.test');
     expect(pending).toContain('for U10 Larks');
     expect(pending).not.toContain('done@club.test');
+  });
+
+  it('writes invitation dates in the browser’s locale, not a fixed pattern', async () => {
+    // Midday UTC: the same calendar day in every time zone the test may run in.
+    const open: InvitationDto = { ...invitations[0], id: 'i3', expiresAt: '2099-03-07T12:00:00.000Z' };
+    const gone: InvitationDto = {
+      ...invitations[0],
+      id: 'i4',
+      email: 'late@club.test',
+      expiresAt: '2020-11-24T12:00:00.000Z',
+    };
+    const read = async (language: string) => {
+      const spy = vi.spyOn(navigator, 'language', 'get').mockReturnValue(language);
+      const { fixture, http, el } = setUp();
+      http.expectOne('/api/members').flush(members);
+      http.expectOne('/api/invitations').flush([open, gone]);
+      http.expectOne('/api/teams').flush(teams);
+      await fixture.whenStable();
+      const lines = Array.from(el.querySelectorAll('[data-testid=pending-invitations] li')).map((li) =>
+        (li.textContent ?? '').replace(/\s+/g, ' '),
+      );
+      spy.mockRestore();
+      TestBed.resetTestingModule();
+      return lines;
+    };
+    const [goneUs, openUs] = await read('en-US');
+    expect(openUs).toMatch(/link valid until Sat, Mar 7, \d{1,2}:\d{2} (AM|PM)/);
+    expect(goneUs).toContain('expired Tue, Nov 24');
+    const [goneGb, openGb] = await read('en-GB');
+    expect(openGb).toMatch(/link valid until Sat 7 Mar, \d{2}:\d{2}/);
+    expect(goneGb).toContain('expired Tue 24 Nov');
   });
 
   it('sends an invitation with the chosen role and shows it as pending', async () => {

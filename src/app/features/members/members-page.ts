@@ -7,7 +7,6 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSnackBar } from '@angular/material/snack-bar';
-import { DatePipe } from '@angular/common';
 import { Router } from '@angular/router';
 import { forkJoin } from 'rxjs';
 import {
@@ -24,6 +23,7 @@ import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
+import { momentDayWords, momentWords } from '../../core/locale/locale-format';
 import { RoleChip } from '../../shared/components/role-chip';
 import { MemberRoleDialog, type MemberRoleData } from './components/member-role-dialog';
 import { MemberTeamsDialog, type MemberTeamsData } from './components/member-teams-dialog';
@@ -47,7 +47,6 @@ const DIALOG_SIZE = { width: '480px', maxWidth: 'calc(100vw - 32px)' };
   selector: 'cw-members-page',
   imports: [
     ReactiveFormsModule,
-    DatePipe,
     MatButtonModule,
     MatCardModule,
     MatFormFieldModule,
@@ -70,6 +69,10 @@ export class MembersPage {
   protected readonly roles = ROLES;
   protected readonly roleDescriptions = ROLE_DESCRIPTIONS;
   protected readonly roleLabels = ROLE_LABELS;
+  /** An expiry's day in the browser's locale and time zone: "Tue 1 Dec" (en-GB). */
+  protected readonly dayOf = momentDayWords;
+  /** An expiry's day and clock time in the browser's locale: "Tue 1 Dec, 16:20" (en-GB). */
+  protected readonly momentOf = momentWords;
   protected readonly members = signal<MemberDto[]>([]);
   protected readonly invitations = signal<InvitationDto[]>([]);
   protected readonly teams = signal<TeamDto[]>([]);
