@@ -5,7 +5,13 @@
  * ids, sizes in order, keep-ball never 5v1 or worse, every kind playable).
  */
 import type { ErrorObject, ValidateFunction } from 'ajv';
-import { AGE_GROUPS, LEVELS, STATION_KINDS, type RuleSetDocument } from '../../shared/types';
+import {
+  AGE_GROUPS,
+  LEVELS,
+  STATION_KINDS,
+  type RuleSetDocument,
+  type StationKind,
+} from '../../shared/types';
 import { ACTIVITY_KIND_LABELS } from '../../shared/types/activity-words';
 import {
   ageGroupWords,
@@ -21,6 +27,8 @@ import generated from './generated/rule-set.validator';
 export interface PointerError {
   pointer: string;
   message: string;
+  /** Set when the club would have no activity of this kind in use (what the screens check, not the words). */
+  missingKind?: StationKind;
 }
 
 export interface RuleSetValidation {
@@ -155,6 +163,7 @@ function semanticErrors(doc: RuleSetDocument): PointerError[] {
       errors.push({
         pointer: '/parameters/activities',
         message: `Our activities: at least one ${ACTIVITY_KIND_LABELS[kind]} activity must be in use; bring one back or add one.`,
+        missingKind: kind,
       });
     }
   }

@@ -143,7 +143,7 @@ export class ClubActivities {
   protected retire(row: Row): void {
     const pointer = toPointer(['parameters', 'activities', row.index, 'retired']);
     const lost = validateRuleSet(setAt(this.body(), pointer, true)).errors.find(
-      (e) => e.pointer === '/parameters/activities' && e.message.endsWith(`kind ${row.activity.kind}`),
+      (e) => e.missingKind === row.activity.kind,
     );
     if (lost) {
       this.say(
