@@ -3,7 +3,9 @@
  * returns each problem as a notice in a coach's words.
  */
 import type {
+  AgeGroup,
   Equipment,
+  Level,
   Notice,
   Phase,
   Plan,
@@ -11,7 +13,7 @@ import type {
   RuleSetDocument,
   Station,
 } from '../shared/types';
-import { GAME_LIKE_KINDS } from '../shared/types';
+import { GAME_LIKE_KINDS, LEVEL_LABELS } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
 import { gapBetween, insideSpace, overlaps, rectOf } from './geometry';
 import { kindModule } from './kinds/registry';
@@ -66,7 +68,7 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
         if (!roster.has(id))
           notices.push({
             code: 'player-unknown',
-            message: `${where(s)}: ${nameOf(plan, id)} is not here today.`,
+            message: `${where(s)}: ${unknownPlayer(plan, id)}`,
           });
       }
     }
@@ -104,7 +106,7 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
       if (!allowed.includes(s.activityKind)) {
         notices.push({
           code: 'activity-not-for-age',
-          message: `${where(s)}: ${s.title} is not in the club's activities for ${request.ageGroup}.`,
+          message: `${where(s)}: not one of the club's activities for ${ageWords(request.ageGroup)}.`,
         });
       }
       // The rules that forbid were run for today's squad: a phase played before someone left
@@ -113,7 +115,7 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
         (f) => f.activityId === s.activityId || (!f.activityId && f.kind === s.activityKind),
       );
       if (ruled && phase.endMinute > lastChange) {
-        notices.push({ code: 'activity-forbidden', message: `${where(s)}: ${s.title} — ${ruled.reason}` });
+        notices.push({ code: 'activity-forbidden', message: `${where(s)}: ${ruled.reason}` });
       }
       notices.push(...stationNotices(plan, params, s, where(s), keepersWarm, cold));
     });
@@ -173,7 +175,7 @@ function stationNotices(
     out.push({
       code: 'too-many-waiting',
       message: cold
-        ? `${where}: ${s.waiting} player(s) stand waiting in the cold.`
+        ? `${where}: ${s.waiting} ${s.waiting === 1 ? 'player stands' : 'players stand'} waiting in the cold.`
         : `${where}: more than one player waits for a turn or a ball.`,
     });
   }
@@ -207,13 +209,13 @@ function sideNotices(plan: Plan, params: RuleParameters, s: Station, where: stri
     if (biggest > format.maxPerSide) {
       out.push({
         code: 'game-over-format',
-        message: `${where}: ${teams[0].length}v${teams[1].length} is above the ${format.maxPerSide}-a-side format for ${plan.request.ageGroup}.`,
+        message: `${where}: ${teams[0].length}v${teams[1].length} is more than the ${format.maxPerSide}-a-side games the club plays for ${ageWords(plan.request.ageGroup)}.`,
       });
     }
     if (!format.goalkeepers && keepers.size) {
       out.push({
         code: 'keepers-not-at-age',
-        message: `${where}: games at ${plan.request.ageGroup} have no goalkeepers.`,
+        message: `${where}: games for ${ageWords(plan.request.ageGroup)} have no goalkeepers.`,
       });
     }
   }
@@ -230,7 +232,7 @@ function keepBallNotices(plan: Plan, params: RuleParameters, s: Station, where: 
     const suggested = keepBallFormat(params, level, attackers + defenders.length);
     out.push({
       code: 'keep-ball-ratio',
-      message: `${where}: ${attackers}v${defenders.length} — keep-ball works with 2 to ${max} attackers per defender here (try ${suggested.attackers}v${suggested.defenders}).`,
+      message: `${where}: ${attackers}v${defenders.length} — keep-ball for ${levelWords(level)} works with 2 to ${max} attackers per defender (try ${suggested.attackers}v${suggested.defenders}).`,
     });
   }
   const byId = new Map(plan.request.players.map((p) => [p.id, p]));
@@ -249,9 +251,23 @@ function keepBallNotices(plan: Plan, params: RuleParameters, s: Station, where: 
   return out;
 }
 
-/** "station 2" by its place in the phase. */
+/**
+ * A station by its activity's title, as the plan page and the card head it: "‘Rondo 4v1’". Only
+ * when two groups in the phase play the same activity does its number on the page tell them apart.
+ */
 function stationName(phase: Phase, s: Station): string {
-  return `station ${phase.stations.indexOf(s) + 1}`;
+  const twins = phase.stations.filter((other) => other.title === s.title).length;
+  return twins > 1 ? `‘${s.title}’ (station ${phase.stations.indexOf(s) + 1})` : `‘${s.title}’`;
+}
+
+/** "U10" as coaches say it; "adults" for an adult team. */
+function ageWords(age: AgeGroup): string {
+  return age === 'adult' ? 'adults' : age;
+}
+
+/** "beginners", "intermediate players", "advanced players". */
+function levelWords(level: Level): string {
+  return level === 'beginner' ? 'beginners' : `${LEVEL_LABELS[level].toLowerCase()} players`;
 }
 
 /** Who should be on the pitch in a phase ending at `endMinute`, given pitch-side changes. */
@@ -266,5 +282,11 @@ function rosterFor(plan: Plan, endMinute: number): Set<string> {
 }
 
 function nameOf(plan: Plan, id: string): string {
-  return plan.request.players.find((p) => p.id === id)?.name ?? id;
+  return plan.request.players.find((p) => p.id === id)?.name ?? 'a player not on today’s list';
+}
+
+/** A player in a group who is not on today's list: by name when the plan knows it, never by id. */
+function unknownPlayer(plan: Plan, id: string): string {
+  const name = plan.request.players.find((p) => p.id === id)?.name;
+  return name ? `${name} is not here today.` : 'a player who is not on today’s list is in this group.';
 }

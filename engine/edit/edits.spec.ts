@@ -58,7 +58,11 @@ describe('checkPlan', () => {
     kb.roles.attackers!.push('extra');
     kb.playerIds.push('extra');
     const notice = checkPlan(plan).find((n) => n.code === 'keep-ball-ratio');
-    expect(notice?.message).toMatch(/station \d: 5v1/);
+    // Named by its activity, as the plan page heads the station; the level in words.
+    expect(notice?.message).toContain(`‘${kb.title}’`);
+    expect(notice?.message).toMatch(
+      /: 5v1 — keep-ball for (beginners|intermediate players|advanced players) /,
+    );
     expect(notice?.message).not.toMatch(/p\d-s\d/);
   });
 

@@ -40,7 +40,7 @@ export function summarize(
     if (below > 0) {
       warnings.push({
         code: 'touches-below-target',
-        message: `Estimated touches: ${below} player(s) below ${target.minPerPlayer} (lowest ${Math.min(...values)}); aim at ${target.minPerPlayer}–${target.maxPerPlayer} before kick-off — more ball-mastery or more balls would help.`,
+        message: `Estimated touches: ${below} player(s) below ${target.minPerPlayer} (lowest ${Math.min(...values)}); aim at ${target.minPerPlayer}–${target.maxPerPlayer} before kick-off — more ball mastery or more balls would help.`,
       });
     }
   }
