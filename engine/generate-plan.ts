@@ -68,7 +68,7 @@ export async function generatePlan(
   ctx.trace.push({
     ruleId: 'engine.estimates',
     fired: true,
-    effect: `touches per player ${range(Object.values(totals.touches))}, active share ${totals.activeShare} (estimates)`,
+    effect: `Each player: about ${range(Object.values(totals.touches))} touches, on the ball or in play ${Math.round(totals.activeShare * 100)}% of the time (estimates)`,
   });
   const plan: Plan = {
     request: req,

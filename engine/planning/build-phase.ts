@@ -262,7 +262,7 @@ function finishAttempt(
     trace.push({
       ruleId: 'engine.coach-fill-in',
       fired: true,
-      effect: `${name}: a coach joins ${coachStations.length} group(s) so numbers work or to serve a keeper`,
+      effect: `${name}: a coach joins ${coachStations.length === 1 ? 'one group' : `${coachStations.length} groups`} to even the numbers or to serve a goalkeeper`,
     });
   }
   const allowedWait = ctx.cold ? 0 : 1;

@@ -101,6 +101,6 @@ export function planKeepers(ctx: BuildContext, specs: PhaseSpec[]): void {
   ctx.trace.push({
     ruleId: 'engine.keepers',
     fired: true,
-    effect: `${ctx.keepers.length} goalkeeper${ctx.keepers.length === 1 ? '' : 's'} warm up as keepers in ${marked.join(' and ')}${inGoal ? `, then go in goal from ${inGoal.name}` : ''}`,
+    effect: `${ctx.keepers.length === 1 ? 'The goalkeeper does' : `${ctx.keepers.length} goalkeepers do`} their own warm-up in ${marked.join(' and ')}${inGoal ? `, then ${ctx.keepers.length === 1 ? 'goes' : 'go'} in goal from ${inGoal.name}` : ''}`,
   });
 }
