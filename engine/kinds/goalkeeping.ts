@@ -4,7 +4,7 @@ import { ballNeed, coachAt, groupCount, place, tableSizes, waitingFor } from './
 
 export const goalkeeping: KindModule = {
   kind: 'goalkeeping',
-  layouts: [{ id: 'goal', label: 'A keeper in a real goal, a server in front' }],
+  layouts: [{ id: 'goal', label: 'A goalkeeper in a real goal, a server in front' }],
   facesShots: false,
   targets: () => ({ ends: 1, keepers: true }),
   sizes: (params, level, _band, activity) => tableSizes(params, 'goalkeeping', level, activity),
@@ -19,10 +19,10 @@ export const goalkeeping: KindModule = {
           : 'with a ball of their own';
     return {
       roles: { goalkeeper: keepers, servers, rotation: keepers },
-      format: `${keepers.length} keeper${keepers.length === 1 ? '' : 's'}, ${who}`,
+      format: `${keepers.length} goalkeeper${keepers.length === 1 ? '' : 's'}, ${who}`,
       points: [
         keepers.length > 1
-          ? 'Keepers swap between the goal and serving every six to eight balls'
+          ? 'Goalkeepers swap between the goal and serving every six to eight balls'
           : 'Server: start with throws to the hands, then volleys, then shots along the ground',
       ],
     };

@@ -19,9 +19,9 @@ export const passingFinishing: KindModule = {
     const n = outfield.length + coachJoins;
     return {
       roles: { goalkeeper: keepers, rotation: outfield },
-      format: `${n} + ${keepers.length ? 'keeper' : 'an empty goal'}`,
+      format: `${n} + ${keepers.length ? 'goalkeeper' : 'an empty goal'}`,
       points: keepers.length
-        ? ['Shooters: hit the target first; the keeper sets the pace between shots']
+        ? ['Shooters: hit the target first; the goalkeeper sets the pace between shots']
         : undefined,
     };
   },

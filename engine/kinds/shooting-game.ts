@@ -31,7 +31,7 @@ export const shootingGame: KindModule = {
       const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
       return {
         roles: { goalkeeper: keepers, teams },
-        format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + keepers' : ''}`,
+        format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + goalkeepers' : ''}`,
       };
     }
     const defenderCount = outfield.length >= 6 ? 2 : 1;
@@ -39,7 +39,7 @@ export const shootingGame: KindModule = {
     const attackers = outfield.slice(0, outfield.length - defenderCount);
     return {
       roles: { goalkeeper: keepers, attackers, defenders, rotation: [...defenders, ...attackers] },
-      format: `${attackers.length}v${defenders.length}${keepers.length ? ' + keeper' : ''}`,
+      format: `${attackers.length}v${defenders.length}${keepers.length ? ' + goalkeeper' : ''}`,
       points: ['Swap the defenders every two minutes'],
     };
   },

@@ -30,9 +30,9 @@ export const smallSidedGame: KindModule = {
     );
     return {
       roles: { teams, goalkeeper: keepers },
-      format: `${teams[0].length}v${teams[1].length}${keepers.length ? ' with keepers' : ''}`,
+      format: `${teams[0].length}v${teams[1].length}${keepers.length ? ' with goalkeepers' : ''}`,
       points: keepers.length
-        ? ['Keepers start every attack with a throw or a pass along the ground']
+        ? ['Goalkeepers start every attack with a throw or a pass along the ground']
         : undefined,
     };
   },

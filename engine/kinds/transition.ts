@@ -21,7 +21,7 @@ export const transition: KindModule = {
     const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
     return {
       roles: { teams, goalkeeper: keepers },
-      format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + keepers' : ''}`,
+      format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + goalkeepers' : ''}`,
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 3),

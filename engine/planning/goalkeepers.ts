@@ -21,7 +21,7 @@ export function eligibleKeepers(
       warnings: [
         {
           code: 'keepers-play-out',
-          message: `At ${request.ageGroup} everyone plays out: small games at this age have no goalkeepers, so today’s keepers join in as outfield players.`,
+          message: `At ${request.ageGroup} everyone plays out: small games at this age have no goalkeepers, so today’s goalkeepers join in as outfield players.`,
           source: 'US Soccer Player Development Initiatives (2016): 4v4 for U6–U8, no goalkeepers',
         },
       ],
@@ -34,7 +34,7 @@ export function eligibleKeepers(
         {
           code: 'keepers-no-goal',
           message:
-            'No goals in the bag: goalkeepers play as outfield players today — a keeper only goes in goal where a real goal stands.',
+            'No goals in the bag: goalkeepers play as outfield players today — a goalkeeper only goes in goal where a real goal stands.',
         },
       ],
     };
