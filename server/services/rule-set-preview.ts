@@ -53,7 +53,7 @@ export function sampleRequests(ageGroup: AgeGroup, level: Level): Case[] {
     },
     {
       // Long enough for drinks breaks, a theme and the keepers' own warm-up.
-      label: 'sample: an hour’s training with 2 keepers (16)',
+      label: 'sample: an hour’s training with 2 goalkeepers (16)',
       source: 'sample',
       request: {
         ...base(16),
