@@ -13,6 +13,8 @@ import { firstNames } from './first-names';
 import { clubTimeZone } from './schedule-service';
 import { expiryInWords, helperLinkExpiry } from './session-day';
 import { hashLinkToken, newLinkToken } from './link-token';
+import type { DistanceUnit, TemperatureUnit, Units } from '../../shared/units';
+import { unitsOf } from './unit-settings';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 /** 32 random bytes in base64url: 43 characters. */
@@ -158,7 +160,34 @@ export class HelperLinkService {
       ? await this.dataSource.getRepository(Team).findOne({ where: { id: plan.teamId, clubId: link.clubId } })
       : null;
     if (!plan || !team) throw linkNotKnown();
-    return helperView(plan, team.name, link.expiresAt);
+    return helperView(plan, team.name, link.expiresAt, await this.linkUnits(link));
+  }
+
+  /**
+   * The units a helper reads: those of the coach who made the link (what they saw when they
+   * shared it: their own choice, else the club's), or the club's once they have left the club.
+   */
+  private async linkUnits(link: HelperLink): Promise<Units> {
+    const rows: {
+      clubDistance: DistanceUnit;
+      clubTemperature: TemperatureUnit;
+      ownDistance: DistanceUnit | null;
+      ownTemperature: TemperatureUnit | null;
+    }[] = await this.dataSource.query(
+      `SELECT club."distanceUnit" AS "clubDistance", club."temperatureUnit" AS "clubTemperature",
+              maker."distanceUnit" AS "ownDistance", maker."temperatureUnit" AS "ownTemperature"
+         FROM club
+         LEFT JOIN membership member ON member."clubId" = club.id AND member."userId" = $2
+         LEFT JOIN app_user maker ON maker.id = member."userId"
+        WHERE club.id = $1`,
+      [link.clubId, link.createdBy],
+    );
+    const row = rows[0];
+    if (!row) throw linkNotKnown();
+    return unitsOf(
+      { distanceUnit: row.clubDistance, temperatureUnit: row.clubTemperature },
+      { distanceUnit: row.ownDistance, temperatureUnit: row.ownTemperature },
+    ).units;
   }
 }
 
@@ -177,7 +206,7 @@ function toDto(link: HelperLink, createdByName: string | null): HelperLinkDto {
  * The plan with each player id replaced by a stand-in (h1, h2 …) and each name cut to the first
  * name; the request, rules, trace, touches and warnings stay behind.
  */
-export function helperView(row: SessionPlan, teamName: string, expiresAt: Date): HelperViewDto {
+export function helperView(row: SessionPlan, teamName: string, expiresAt: Date, units: Units): HelperViewDto {
   const players = row.plan.request.players;
   const first = firstNames(players.map((p) => p.name));
   const aliases = new Map<string, string>();
@@ -212,6 +241,7 @@ export function helperView(row: SessionPlan, teamName: string, expiresAt: Date):
     cautions: row.plan.cautions,
     names,
     expiresAt: expiresAt.toISOString(),
+    units,
   };
 }
 

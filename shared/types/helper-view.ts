@@ -1,6 +1,7 @@
 /** API shapes of helper links: a read-only view of one plan for a parent helper without an account. */
 import type { Notice, Phase } from './plan';
 import type { PlanKind } from './plan-request';
+import type { Units } from '../units';
 
 /** A live helper link as the team's staff see it (the token itself is never stored). */
 export interface HelperLinkDto {
@@ -40,6 +41,11 @@ export interface HelperViewDto {
   /** First name by stand-in id; a repeated first name gets a number ("Sam", "Sam 2"). */
   names: Record<string, string>;
   expiresAt: string;
+  /**
+   * The units the helper reads sizes and temperatures in: those of the coach who made the link,
+   * or the club's once they have left. The plan itself stays metric, as everywhere.
+   */
+  units: Units;
 }
 
 /** The request header that carries a helper link's token to GET /api/helper-view. */

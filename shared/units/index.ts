@@ -1,3 +1,4 @@
 export * from './units';
 export * from './convert';
 export * from './format';
+export * from './measure';

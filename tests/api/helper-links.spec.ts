@@ -332,6 +332,50 @@ describe('helper links', () => {
     expect(row!.textBody).not.toContain('/helper#');
     expect(row!.subject).toBe('U10 Larks: match warm-up on Tuesday 6 January, 10:30');
   });
+
+  it('a helper reads the units of the coach who made the link, else the club’s; the plan stays metric', async () => {
+    const clubId = club.lead.user.clubId;
+    const setClub = (distance: string, temperature: string) =>
+      app.api.put('/api/club/units', { distance, temperature }, { token: club.lead.token });
+    const maker = await addMember(app, clubId, 'coach', 'Mina Maker');
+    await attach(app, squad.teamId, maker);
+    try {
+      expect((await setClub('yards', 'celsius')).status).toBe(200);
+      const made = await app.api.post<CreatedHelperLinkDto>(`/api/plans/${plan.id}/helper-links`, undefined, {
+        token: maker.token,
+      });
+      expect(made.status, made.text).toBe(201);
+      const token = tokenOf(made.body.url);
+
+      // The maker follows the club: yards and °C.
+      let seen = await view(app, token);
+      expect(seen.status, seen.text).toBe(200);
+      expect(seen.body.units).toEqual({ distance: 'yards', temperature: 'celsius' });
+      // The plan is metric as stored: the same areas in metres as the coach's own plan.
+      expect(seen.body.phases.map((p) => p.stations.map((s) => s.area))).toEqual(
+        plan.plan.phases.map((p) => p.stations.map((s) => s.area)),
+      );
+
+      // The maker's own choice wins, as on their own screens.
+      const own = await app.api.patch(
+        '/api/auth/me',
+        { distanceUnit: 'metres', temperatureUnit: 'fahrenheit' },
+        { token: maker.token },
+      );
+      expect(own.status, own.text).toBe(200);
+      seen = await view(app, token);
+      expect(seen.body.units).toEqual({ distance: 'metres', temperature: 'fahrenheit' });
+
+      // Once the maker has left the club, the link reads in the club's setting.
+      const removed = await app.api.delete(`/api/members/${maker.user.id}`, { token: club.lead.token });
+      expect(removed.status, removed.text).toBeLessThan(300);
+      seen = await view(app, token);
+      expect(seen.status, seen.text).toBe(200);
+      expect(seen.body.units).toEqual({ distance: 'yards', temperature: 'celsius' });
+    } finally {
+      await setClub('metres', 'celsius');
+    }
+  });
 });
 
 describe('helper view and the request log', () => {

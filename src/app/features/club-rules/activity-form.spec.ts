@@ -8,13 +8,18 @@ import {
   type RuleSetDocument,
 } from '../../../../shared/types';
 import { ActivityForm } from './activity-form';
+import { AuthStore } from '../../core/auth/auth-store';
+import { METRIC_WORDS, signInReading, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 import { ACTIVITY_LIMITS } from './services/activity-draft';
 
 const rules = () => structuredClone(defaultRules) as unknown as RuleSetDocument;
 
 describe('ActivityForm', () => {
-  async function setUp(options: { activity?: ActivityDefinition; index?: number; readOnly?: boolean } = {}) {
+  async function setUp(
+    options: { activity?: ActivityDefinition; index?: number; readOnly?: boolean; yards?: boolean } = {},
+  ) {
     TestBed.configureTestingModule({ imports: [ActivityForm], providers: [provideNoopAnimations()] });
+    if (options.yards) signInReading(TestBed.inject(AuthStore), YARDS_AND_FAHRENHEIT, 'lead');
     const fixture = TestBed.createComponent(ActivityForm);
     const body = rules();
     fixture.componentRef.setInput('ruleSet', body);
@@ -137,6 +142,15 @@ describe('ActivityForm', () => {
     );
     await t.type('players.min', 3);
     expect(t.diagramLabel()).toContain(ACTIVITY_KIND_LABELS['keep-ball']);
+  });
+
+  it('gives the preview’s size in yards to a head of coaching who reads yards', async () => {
+    const t = await setUp({ activity: rules().parameters.activities[0], readOnly: true, yards: true });
+    const caption = t.el.querySelector('.cw-activity-form__caption')!.textContent!;
+    expect(caption).toMatch(/· \d+ × \d+ yd ·/);
+    expect(t.diagramLabel()).toMatch(/ in \d+ × \d+ yd/);
+    expect(t.el.querySelector('[data-testid=activity-preview]')!.textContent).not.toMatch(METRIC_WORDS);
+    localStorage.clear();
   });
 
   it('shows a starting activity read-only, with its diagram and no save', async () => {

@@ -43,6 +43,8 @@ import {
 import { ICONS } from '../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, LEVEL_LABELS } from '../../core/labels/plan-labels';
 import { StationDiagram } from '../../shared/components/station-diagram';
+import { formatSize } from '../../../../shared/units';
+import { UnitChoice } from '../../core/units/unit-choice';
 import {
   ACTIVITY_LIMITS,
   activityOf,
@@ -89,6 +91,8 @@ type ListKey = 'coachingPoints' | 'easier' | 'harder';
 })
 export class ActivityForm {
   private readonly fb = inject(NonNullableFormBuilder);
+  /** The reader's units, for the preview's size. */
+  private readonly units = inject(UnitChoice);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef);
 
   /** The rule-set document the activity goes into (the draft, or the rules in force when viewing). */
@@ -208,13 +212,13 @@ export class ActivityForm {
     return null;
   });
 
-  /** "U10 intermediate group of 5, 4v1 · 10 × 10 m · 4 cones". */
+  /** "U10 intermediate group of 5, 4v1 · 10 × 10 m · 4 cones", the size in the reader's units. */
   protected readonly caption = computed(() => {
     const p = this.preview();
     if (!p) return '';
     const s = p.station;
     const format = s.format ? `, ${s.format}` : '';
-    return `${p.ageGroup} ${LEVEL_LABELS[p.level].toLowerCase()} group of ${s.playerIds.length}${format} · ${s.area.width} × ${s.area.length} m · ${s.equipment.cones} cones`;
+    return `${p.ageGroup} ${LEVEL_LABELS[p.level].toLowerCase()} group of ${s.playerIds.length}${format} · ${formatSize(this.units.distance(), s.area)} · ${s.equipment.cones} cones`;
   });
 
   private readonly matchers = new Map<string, ErrorStateMatcher>();

@@ -5,6 +5,9 @@ import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import type { RuleSetDto } from '../../../../shared/types';
 import defaultRules from '../../../../rules/default-rule-set.json';
 import { ClubRulesPage } from './club-rules-page';
+import { measureIn } from '../../../../shared/units';
+import { AuthStore } from '../../core/auth/auth-store';
+import { signInReading, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 
 const body = () =>
   structuredClone(defaultRules) as unknown as { parameters: { cautions: { heatC: number; coldC: number } } };
@@ -23,11 +26,12 @@ const ruleSet = (over: Partial<RuleSetDto>): RuleSetDto => ({
 });
 
 describe('ClubRulesPage', () => {
-  async function setUp(versions: RuleSetDto[]) {
+  async function setUp(versions: RuleSetDto[], units = false) {
     TestBed.configureTestingModule({
       imports: [ClubRulesPage],
       providers: [provideHttpClient(), provideHttpClientTesting(), provideNoopAnimations()],
     });
+    if (units) signInReading(TestBed.inject(AuthStore), YARDS_AND_FAHRENHEIT, 'lead');
     // The activities tab is loaded on demand (@defer): its parts are resolved first.
     await TestBed.compileComponents();
     const fixture = TestBed.createComponent(ClubRulesPage);
@@ -184,6 +188,67 @@ describe('ClubRulesPage', () => {
     await fixture.whenStable();
     expect(row.textContent).toContain('Retired in the draft');
     expect(el.querySelector('[data-testid=draft-state]')?.getAttribute('data-unsaved')).toBe('0');
+  });
+
+  it('shows and takes yards, square yards and °F for a head of coaching who reads them, and saves metres and °C', async () => {
+    const { fixture, http, el, button, input } = await setUp(
+      [ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 3 })],
+      true,
+    );
+    await fixture.whenStable();
+    const rules = defaultRules as unknown as {
+      parameters: {
+        keepBallLimits: { minM2PerPlayer: number; minSideM: number };
+        cautions: { heatC: number; coldC: number };
+        areas: Record<string, Record<string, { width: number; forPlayers: number }>>;
+      };
+    };
+    const p = rules.parameters;
+    const width = '/parameters/areas/keep-ball/U6-U8/width';
+    // Shown in the reader's units, to a tenth: metres × 1.094, square metres × 1.196, °C × 9/5 + 32.
+    expect(Number(input(width).value)).toBe(
+      measureIn('distance', YARDS_AND_FAHRENHEIT, p.areas['keep-ball']!['U6-U8']!.width),
+    );
+    expect(Number(input('/parameters/areas/keep-ball/U6-U8/forPlayers').value)).toBe(
+      p.areas['keep-ball']!['U6-U8']!.forPlayers,
+    );
+    expect(Number(input('/parameters/keepBallLimits/minM2PerPlayer').value)).toBe(
+      measureIn('area', YARDS_AND_FAHRENHEIT, p.keepBallLimits.minM2PerPlayer),
+    );
+    expect(Number(input('/parameters/cautions/heatC').value)).toBe(
+      measureIn('temperature', YARDS_AND_FAHRENHEIT, p.cautions.heatC),
+    );
+    // The words say which units.
+    expect(el.querySelector('[data-testid=area-units]')!.textContent).toContain('yards');
+    expect(el.textContent).toContain('Keep-ball room a player (yd²)');
+    expect(el.textContent).toContain('Keep-ball shortest side (yd)');
+    expect(el.textContent).toContain('Heat caution from (°F)');
+    expect(el.textContent).not.toMatch(/\((m|m²|°C)\)/);
+
+    const type = async (pointer: string, value: string) => {
+      const field = input(pointer);
+      field.value = value;
+      field.dispatchEvent(new Event('change'));
+      await fixture.whenStable();
+    };
+    await type(width, '20');
+    await type('/parameters/keepBallLimits/minM2PerPlayer', '5.5');
+    await type('/parameters/keepBallLimits/minSideM', '10');
+    await type('/parameters/cautions/heatC', '85');
+    await type('/parameters/cautions/coldC', '35.6');
+    // What was typed shows again as typed.
+    expect(input(width).value).toBe('20');
+    expect(input('/parameters/keepBallLimits/minM2PerPlayer').value).toBe('5.5');
+    expect(input('/parameters/cautions/coldC').value).toBe('35.6');
+
+    button('Save draft').click();
+    const save = http.expectOne('/api/rule-sets/d2');
+    const sent = save.request.body as { body: typeof rules };
+    // Stored metric: 20 yd = 18.29 m, 5.5 yd² = 4.6 m², 10 yd = 9.14 m, 85 °F = 29.44 °C, 35.6 °F = 2 °C.
+    expect(sent.body.parameters.areas['keep-ball']!['U6-U8']!.width).toBe(18.29);
+    expect(sent.body.parameters.keepBallLimits).toMatchObject({ minM2PerPlayer: 4.6, minSideM: 9.14 });
+    expect(sent.body.parameters.cautions).toEqual({ heatC: 29.44, coldC: 2 });
+    localStorage.clear();
   });
 
   it('marks the cell of a problem with a sentence, lists it, and takes the lead there', async () => {

@@ -10,6 +10,8 @@ import {
   type Signal,
 } from '@angular/core';
 import { getAt } from './services/json-pointer';
+import { measureIn, metricFrom, type Measure } from '../../../../shared/units';
+import { UnitChoice } from '../../core/units/unit-choice';
 
 /** The document a number field edits: what it reads, whether it may change it, where edits go. */
 export interface RuleDocument {
@@ -36,7 +38,9 @@ const PROBLEM_STYLE: Record<string, string> = {
  * A number input bound to one place of the rule-set document: shows the number there, is read-only
  * with the document, carries the pointer for tests and for finding the cell, sends an edit when a
  * number is entered (an empty or unreadable field changes nothing), and while the rules check
- * finds a problem there is marked invalid with the problem written under it.
+ * finds a problem there is marked invalid with the problem written under it (in the reader's
+ * units). A number that measures something (`cwRuleMeasure`) is stored metric and shown and typed
+ * in the reader's units, converted here at the edge.
  */
 @Directive({
   selector: 'input[cwRuleNumber]',
@@ -52,13 +56,20 @@ const PROBLEM_STYLE: Record<string, string> = {
 export class RuleNumber {
   /** The JSON pointer of the number. */
   readonly cwRuleNumber = input.required<string>();
+  /** What the stored metric number measures (metres, square metres, °C); null for counts and minutes. */
+  readonly cwRuleMeasure = input<Measure | null>(null);
   protected readonly document = inject(RULE_DOCUMENT);
+  private readonly units = inject(UnitChoice);
   protected readonly messageId = `cw-cell-problem-${++nextId}`;
   protected readonly value = computed(() => {
     const v = getAt(this.document.body(), this.cwRuleNumber());
-    return typeof v === 'number' ? v : null;
+    if (typeof v !== 'number') return null;
+    const measure = this.cwRuleMeasure();
+    return measure ? measureIn(measure, this.units.units(), v) : v;
   });
-  protected readonly problems = computed(() => this.document.problemsAt(this.cwRuleNumber()));
+  protected readonly problems = computed(() =>
+    this.document.problemsAt(this.cwRuleNumber()).map((problem) => this.units.text(problem)),
+  );
 
   constructor() {
     const field = inject<ElementRef<HTMLInputElement>>(ElementRef).nativeElement;
@@ -86,6 +97,8 @@ export class RuleNumber {
   protected changed(event: Event): void {
     const field = event.target as HTMLInputElement;
     if (field.value.trim() === '' || Number.isNaN(field.valueAsNumber)) return;
-    this.document.edit(this.cwRuleNumber(), field.valueAsNumber);
+    const measure = this.cwRuleMeasure();
+    const typed = field.valueAsNumber;
+    this.document.edit(this.cwRuleNumber(), measure ? metricFrom(measure, this.units.units(), typed) : typed);
   }
 }

@@ -26,6 +26,8 @@ import { RULE_DOCUMENT, RuleNumber, type RuleDocument } from './rule-number';
 import { getAt, toPointer } from './services/json-pointer';
 import { cellOf, placeOf, problemsByCell, type RulePanel } from './services/rule-cells';
 import type { RuleProblem } from './services/rule-validation';
+import { distanceUnitName, measureSymbol, type Measure } from '../../../../shared/units';
+import { UnitChoice } from '../../core/units/unit-choice';
 
 /** An edit from the tables: the value to put at a pointer of the rule-set document. */
 export interface RuleEdit {
@@ -49,6 +51,28 @@ export function textToFormats(text: string): { attackers: number; defenders: num
   if (parts.length === 0 || formats.some((m) => !m)) return null;
   return formats.map((m) => ({ attackers: Number(m![1]), defenders: Number(m![2]) }));
 }
+
+/** One number of the supervision, breaks and space fold: where it is, its words, what it measures. */
+interface LimitField {
+  path: [string, string];
+  label: string;
+  measure: Measure | null;
+}
+
+const LIMIT_FIELDS: LimitField[] = [
+  { path: ['supervision', 'minAdults'], label: 'Fewest adults at a children’s session', measure: null },
+  { path: ['supervision', 'stationsPerAdult'], label: 'Stations one adult can oversee', measure: null },
+  { path: ['timing', 'drinksEveryMinutes'], label: 'Drinks break at least every (min)', measure: null },
+  { path: ['timing', 'heatDrinksEveryMinutes'], label: 'In the heat, at least every (min)', measure: null },
+  { path: ['timing', 'drinksMinutes'], label: 'Drinks break length (min)', measure: null },
+  { path: ['keepBallLimits', 'minM2PerPlayer'], label: 'Keep-ball room a player', measure: 'area' },
+  { path: ['keepBallLimits', 'minSideM'], label: 'Keep-ball shortest side', measure: 'distance' },
+  {
+    path: ['keepBallLimits', 'twoDefendersFromAge'],
+    label: 'Two defenders in keep-ball from age',
+    measure: null,
+  },
+];
 
 /** The rule set's main tables as forms, so a lead tunes numbers without touching JSON. */
 @Component({
@@ -77,6 +101,11 @@ export class RuleTables implements RuleDocument {
   protected readonly levelWords: Record<string, string> = LEVEL_WORDS;
   protected readonly bandWords = ageBandWords;
   protected readonly ageWords = ageGroupWords;
+  /** The reader's units: the tables store metres and °C and show and take these. */
+  private readonly units = inject(UnitChoice);
+  protected readonly limitFields = LIMIT_FIELDS;
+  /** "metres" or "yards", for the area sizes' heading. */
+  protected readonly distanceName = computed(() => distanceUnitName(this.units.distance()));
 
   protected readonly levels = LEVELS;
   protected readonly bands = AGE_BANDS;
@@ -149,6 +178,11 @@ export class RuleTables implements RuleDocument {
       { injector: this.injector },
     );
     return true;
+  }
+
+  /** "m", "yd²", "°F": the sign after a measured field's heading, in the reader's units. */
+  protected symbol(measure: Measure): string {
+    return measureSymbol(measure, this.units.units());
   }
 
   protected kindLabel(kind: string): string {

@@ -4,6 +4,8 @@ import { TestBed } from '@angular/core/testing';
 import type { KitBagDto, TeamDto } from '../../../../shared/types';
 import defaultRules from '../../../../rules/default-rule-set.json';
 import { RuleTryIt } from './rule-try-it';
+import { AuthStore } from '../../core/auth/auth-store';
+import { METRIC_WORDS, signInReading, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 
 const team = (over: Partial<TeamDto>): TeamDto => ({
   id: 't1',
@@ -28,11 +30,12 @@ const otters = team({
 const heronsKit: KitBagDto = { balls: 7, cones: 16, bibs: 8, goals: 0 };
 
 describe('RuleTryIt', () => {
-  function setUp(teams: TeamDto[]) {
+  function setUp(teams: TeamDto[], yards = false) {
     TestBed.configureTestingModule({
       imports: [RuleTryIt],
       providers: [provideHttpClient(), provideHttpClientTesting()],
     });
+    if (yards) signInReading(TestBed.inject(AuthStore), YARDS_AND_FAHRENHEIT, 'lead');
     const fixture = TestBed.createComponent(RuleTryIt);
     fixture.componentRef.setInput('draftBody', structuredClone(defaultRules));
     const http = TestBed.inject(HttpTestingController);
@@ -89,6 +92,24 @@ describe('RuleTryIt', () => {
       const placed = (line.split(':')[1].match(/\d+/g) ?? []).map(Number).reduce((a, b) => a + b, 0);
       expect(placed, line).toBe(9);
     }
+  });
+
+  it('puts the team, the squads and every area in yards for a head of coaching who reads yards', async () => {
+    const { fixture, el, labels, run } = setUp([herons], true);
+    await fixture.whenStable();
+    // 30 × 36 m is 33 × 39 yd.
+    expect(el.querySelector('[data-testid=try-team-summary]')?.textContent).toContain(
+      'players on 33 × 39 yd',
+    );
+    await run(6, { teamId: 't1', body: heronsKit });
+    expect(labels()[0]).toContain('(9 players on 33 × 39 yd, 7 balls, 0 goals)');
+    // 15 × 20 m is 16 × 22 yd.
+    expect(labels().some((l) => l?.includes('Tiny space (12 on 16 × 22 yd)'))).toBe(true);
+    const areas = Array.from(el.querySelectorAll('[data-testid=try-result] tbody tr:nth-child(2) td'));
+    expect(areas.length).toBeGreaterThan(0);
+    for (const cell of areas) expect(cell.textContent).toMatch(/\d+ × \d+ yd/);
+    expect(el.textContent).not.toMatch(METRIC_WORDS);
+    localStorage.clear();
   });
 
   it("switches to another of the club's teams from the selector", async () => {

@@ -18,6 +18,8 @@ import { runPlan } from './services/plan-runner';
 import { RuleSetsApi } from './services/rule-sets-api';
 import { sampleSquads, type SampleSquad } from './services/sample-squads';
 import { teamSquad } from './services/team-squad';
+import { SizeInUnitsPipe } from '../../shared/pipes/size-in-units';
+import { UnitChoice } from '../../core/units/unit-choice';
 
 /** One situation run under both rule sets. */
 export interface TryItResult {
@@ -37,7 +39,7 @@ const isOutline = (value: PlanOutline | { error: string }): value is PlanOutline
  */
 @Component({
   selector: 'cw-rule-try-it',
-  imports: [MatButtonModule, ...ICONS],
+  imports: [MatButtonModule, ...ICONS, SizeInUnitsPipe],
   templateUrl: './rule-try-it.html',
   styleUrl: './rule-try-it.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -45,6 +47,8 @@ const isOutline = (value: PlanOutline | { error: string }): value is PlanOutline
 export class RuleTryIt {
   private readonly api = inject(RuleSetsApi);
   private readonly teamsApi = inject(TeamsApi);
+  /** The reader's units: the runs are metric, what they show is put into these. */
+  protected readonly units = inject(UnitChoice);
 
   /** The rules being edited. */
   readonly draftBody = input.required<unknown>();
@@ -87,15 +91,18 @@ export class RuleTryIt {
       const cases = [...own, ...sampleSquads(this.ageGroup(), this.level()), ...recent];
       const results: TryItResult[] = [];
       for (const item of cases) {
-        const [now, draft] = await Promise.all([
-          this.outline(item.request, this.publishedBody()),
-          this.outline(item.request, this.draftBody()),
-        ]);
+        // Compared as the head of coaching reads them: sizes and warnings in their units.
+        const [now, draft] = this.units.deep(
+          await Promise.all([
+            this.outline(item.request, this.publishedBody()),
+            this.outline(item.request, this.draftBody()),
+          ]),
+        );
         const changed =
           isOutline(now) && isOutline(draft)
             ? OUTLINE_ROWS.filter((row) => now[row.key] !== draft[row.key]).length
             : 1;
-        results.push({ id: item.id, label: item.label, now, draft, changed });
+        results.push({ id: item.id, label: this.units.text(item.label), now, draft, changed });
       }
       this.results.set(results);
     } catch (error) {

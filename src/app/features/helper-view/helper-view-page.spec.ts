@@ -5,6 +5,9 @@ import { provideNoopAnimations } from '@angular/platform-browser/animations';
 import { provideRouter } from '@angular/router';
 import { generatePlan } from '../../../../engine/index';
 import type { HelperViewDto, Plan, PlanRequest } from '../../../../shared/types';
+import { DEFAULT_UNITS, type Units } from '../../../../shared/units';
+import { AuthStore } from '../../core/auth/auth-store';
+import { METRIC_WORDS, signInReading, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 import { HelperViewPage } from './helper-view-page';
 
 const TOKEN = 'A'.repeat(20) + '_-' + 'b'.repeat(21);
@@ -23,7 +26,7 @@ const REQUEST: PlanRequest = {
 };
 
 /** What GET /api/helper-view answers: the plan's phases with stand-in ids and first names. */
-function view(plan: Plan): HelperViewDto {
+function view(plan: Plan, units: Units = DEFAULT_UNITS): HelperViewDto {
   return {
     teamName: 'Meadow Larks U10',
     kind: 'match-warm-up',
@@ -35,6 +38,7 @@ function view(plan: Plan): HelperViewDto {
     cautions: plan.cautions,
     names: Object.fromEntries(FIRST.map((name, i) => [`h${i + 1}`, name])),
     expiresAt: '2026-12-09T23:00:00.000Z',
+    units,
   };
 }
 
@@ -43,7 +47,6 @@ const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges()
   await fixture.whenStable();
   fixture.detectChanges();
 };
-
 
 describe('HelperViewPage', () => {
   let plan: Plan;
@@ -98,6 +101,36 @@ describe('HelperViewPage', () => {
       expect(details.open).toBe(true);
     expect(root.querySelector('[data-testid="cautions"]')).not.toBeNull();
     expect(document.querySelector('meta[name="robots"]')!.getAttribute('content')).toContain('noindex');
+  });
+
+  it('reads in the units the link carries (yards), not those of whoever is signed in on the phone', async () => {
+    window.location.hash = `#${TOKEN}`;
+    const { fixture, http, root } = setUp();
+    // Someone signed in on this phone reads metres: the link's units still win.
+    signInReading(TestBed.inject(AuthStore), DEFAULT_UNITS);
+    http.expectOne('/api/helper-view').flush(view(plan, YARDS_AND_FAHRENHEIT));
+    await settle(fixture);
+
+    const cards = Array.from(root.querySelectorAll('cw-station-card'));
+    expect(cards.length).toBeGreaterThan(0);
+    // The engine's steps ("Area 14 m → 16 m") and every size read in yards.
+    const steps = root.textContent!.match(/Area [^\n]*yd/g) ?? [];
+    expect(steps.length).toBeGreaterThan(0);
+    expect(root.querySelector('[data-testid="station-kind"]')!.textContent).toMatch(/\d+ × \d+ yd/);
+    expect(root.querySelector('cw-station-diagram svg[role=img]')!.getAttribute('aria-label')).toMatch(
+      / in \d+ × \d+ yd/,
+    );
+    expect(root.textContent).not.toMatch(METRIC_WORDS);
+    localStorage.clear();
+  });
+
+  it('reads metres when the link says metres', async () => {
+    window.location.hash = `#${TOKEN}`;
+    const { fixture, http, root } = setUp();
+    http.expectOne('/api/helper-view').flush(view(plan));
+    await settle(fixture);
+    expect(root.textContent).toMatch(/Area \d+ (× \d+ )?m →/);
+    expect(root.textContent).not.toContain(' yd');
   });
 
   it('keeps the token for the tab when a timeline tap has replaced the fragment', async () => {

@@ -14,6 +14,8 @@ import { PhaseTimeline } from '../plans/components/phase-timeline';
 import { PlanNotices } from '../plans/components/plan-notices';
 import { StationCard } from '../plans/components/station-card';
 import { breakWords, changeoverWords, isBreak } from '../plans/services/plan-words';
+import { UnitChoice } from '../../core/units/unit-choice';
+import { DEFAULT_UNITS } from '../../../../shared/units';
 
 /** A token as the server makes them: 32 random bytes in base64url. */
 const TOKEN = /^[A-Za-z0-9_-]{43}$/;
@@ -36,20 +38,25 @@ type Loaded =
   imports: [...ICONS, PhaseTimeline, PlanNotices, StationCard],
   templateUrl: './helper-view-page.html',
   styleUrls: ['../plans/plan-page.scss', './helper-view-page.scss'],
+  // The helper is not signed in: the page reads in the units its link carries, and so do the
+  // station cards and diagrams inside it.
+  providers: [UnitChoice],
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class HelperViewPage {
   private readonly api = inject(HelperLinksApi);
   private readonly document = inject(DOCUMENT);
+  private readonly units = inject(UnitChoice);
 
   protected readonly loaded = signal<Loaded>({ state: 'loading' });
   protected readonly kindLabels = KIND_LABELS;
   protected readonly isBreak = isBreak;
   protected readonly breakWords = breakWords;
   protected readonly until = untilWords;
+  /** The plan as the helper reads it: the engine's texts (notes, safety) in the link's units. */
   protected readonly view = computed(() => {
     const loaded = this.loaded();
-    return loaded.state === 'ready' ? loaded.view : null;
+    return loaded.state === 'ready' ? this.units.deep(loaded.view) : null;
   });
   protected readonly names = computed<ReadonlyMap<string, string>>(
     () => new Map(Object.entries(this.view()?.names ?? {})),
@@ -87,7 +94,11 @@ export class HelperViewPage {
       return;
     }
     this.api.view(token).subscribe({
-      next: (view) => this.loaded.set({ state: 'ready', view }),
+      next: (view) => {
+        // A copy saved before links carried units reads in metres and °C, as it did then.
+        this.units.readAs(view.units ?? DEFAULT_UNITS);
+        this.loaded.set({ state: 'ready', view });
+      },
       error: (error: unknown) => {
         const status = error instanceof HttpErrorResponse ? error.status : 0;
         const state = status === 410 ? 'ended' : status === 404 ? 'unknown' : 'failed';

@@ -15,6 +15,7 @@ import {
 } from '../../../../shared/types';
 import { AuthStore } from '../../core/auth/auth-store';
 import { LibraryPage, MAX_PINS } from './library-page';
+import { METRIC_WORDS, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 
 const coach: UserDto = {
   id: 'u-coach',
@@ -135,6 +136,26 @@ describe('LibraryPage', () => {
     expect(details.textContent).toContain(activity.description);
     for (const point of activity.coachingPoints) expect(details.textContent).toContain(point);
     for (const step of [...activity.easier, ...activity.harder]) expect(details.textContent).toContain(step);
+  });
+
+  it('shows a coach who reads yards every drawn size and step in yards', async () => {
+    const { fixture, el, body, card, button } = await setUp({
+      user: { ...coach, units: YARDS_AND_FAHRENHEIT },
+    });
+    // Each drawn set-up is metric inside; the cards read it in yards.
+    const own = body.parameters.activities.find((a) => a.kind === 'keep-ball')!;
+    expect(own).toBeDefined();
+    const setups = Array.from(el.querySelectorAll('.cw-activity__setup')).map((p) => p.textContent!);
+    expect(setups.length).toBeGreaterThan(0);
+    for (const text of setups) expect(text).toMatch(/· \d+ × \d+ yd$/);
+    for (const svg of Array.from(el.querySelectorAll('cw-station-diagram svg[role=img]')))
+      expect(svg.getAttribute('aria-label')).toMatch(/ in \d+ × \d+ yd/);
+    const article = card(own.id);
+    button(article, 'Details').click();
+    await fixture.whenStable();
+    // The engine's steps for the drawn group ("Area 12 m → 14 m") in yards.
+    expect(article.querySelector('[data-testid=activity-details]')!.textContent).toMatch(/Area \d+[^→]*yd →/);
+    expect(el.textContent).not.toMatch(METRIC_WORDS);
   });
 
   it('marks the club’s own activities and never offers a retired one', async () => {

@@ -6,6 +6,9 @@ import { provideRouter } from '@angular/router';
 import { applyProgression, generatePlan, progressionOutcome } from '../../../../engine/index';
 import type { Plan, SessionPlanDto, Station, StationVerdict } from '../../../../shared/types';
 import { PitchSidePage } from './pitch-side-page';
+import { inUnitsText } from '../../../../shared/units';
+import { AuthStore } from '../../core/auth/auth-store';
+import { METRIC_WORDS, signInReading, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 
 const station = (id: string, title: string, playerIds: string[], width = 10): Station => ({
   id,
@@ -68,13 +71,19 @@ const plan: Plan = {
 const session = { id: 'p1', teamId: 't1', teamName: 'U10 Kites', plan, ruleSetId: 'rs1' } as SessionPlanDto;
 
 describe('PitchSidePage', () => {
-  beforeEach(() => localStorage.clear());
+  /** The units of the coach signed in for a test (none: nobody signed in, metres and °C). */
+  let reader: typeof YARDS_AND_FAHRENHEIT | null = null;
+  beforeEach(() => {
+    localStorage.clear();
+    reader = null;
+  });
 
   function setUp() {
     TestBed.configureTestingModule({
       imports: [PitchSidePage],
       providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])],
     });
+    if (reader) signInReading(TestBed.inject(AuthStore), reader);
     const fixture = TestBed.createComponent(PitchSidePage);
     fixture.componentRef.setInput('planId', 'p1');
     fixture.detectChanges();
@@ -197,6 +206,34 @@ describe('PitchSidePage', () => {
       `The area stays: ${refused}`,
     );
     expect(card.querySelector('[data-testid=verdict-refusal]')!.textContent).not.toMatch(/s\d|beginner/);
+    http.expectOne('/api/plans/p1/progression');
+  });
+
+  it('shows a coach who reads yards the steps, sizes and a refused step in yards', async () => {
+    reader = YARDS_AND_FAHRENHEIT;
+    let real = await generatePlan({
+      ...plan.request,
+      players: ['a', 'b', 'c', 'd', 'e', 'f', 'g', 'h'].map((id) => ({ id, name: id.toUpperCase() })),
+      seed: 'pitch-limit',
+    });
+    const first = real.phases[0].stations[0];
+    for (let i = 0; i < 20 && !progressionOutcome(real, 0, first.id, 'too-easy').refused; i++) {
+      real = applyProgression(real, 0, first.id, 'too-easy');
+    }
+    const refused = progressionOutcome(real, 0, first.id, 'too-easy').refused!;
+    const { http, el, settle } = await opened({ ...session, plan: real });
+    const card = el.querySelector('cw-station-card')!;
+    expect(card.querySelector('[data-testid=station-kind]')!.textContent).toMatch(/\d+ × \d+ yd/);
+    expect(card.querySelector('svg[role=img]')!.getAttribute('aria-label')).toMatch(/ in \d+ × \d+ yd/);
+    card.querySelector<HTMLButtonElement>('[data-verdict=too-easy]')!.click();
+    for (let i = 0; i < 100 && !card.querySelector('[data-testid=verdict-refusal]'); i++) {
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      await settle();
+    }
+    expect(card.querySelector('[data-testid=verdict-refusal]')!.textContent).toContain(
+      inUnitsText(refused, YARDS_AND_FAHRENHEIT),
+    );
+    expect(el.textContent).not.toMatch(METRIC_WORDS);
     http.expectOne('/api/plans/p1/progression');
   });
 

@@ -42,6 +42,7 @@ import { PhaseSignal } from './services/phase-signal';
 import { PitchSideApi } from './services/pitch-side-api';
 import { readSnapshot, saveSnapshot } from './services/plan-snapshot';
 import { ScreenAwake } from './services/screen-awake';
+import { UnitChoice } from '../../core/units/unit-choice';
 import { StationCard } from './station-card';
 import { leftEarlyIds } from '../../../../engine/attendance-from-plan';
 import { RegisterPanel } from '../plans/components/register-panel';
@@ -65,6 +66,7 @@ export class PitchSidePage {
   private readonly api = inject(PitchSideApi);
   private readonly planRules = inject(PlanRulesApi);
   protected readonly queue = inject(ActionQueue);
+  private readonly units = inject(UnitChoice);
   private readonly phaseSignal = new PhaseSignal();
   private readonly screenAwake = new ScreenAwake();
 
@@ -85,7 +87,19 @@ export class PitchSidePage {
   protected readonly awake = signal(false);
   private readonly now = signal(Date.now());
 
-  protected readonly phases = computed(() => this.plan()?.phases ?? []);
+  /**
+   * The plan as the coach reads it: the engine's texts (notes, safety, steps) in their units, once
+   * for the whole page; `plan` stays metric for the engine's re-plans and steps.
+   */
+  protected readonly shown = computed(() => {
+    const plan = this.plan();
+    return plan ? this.units.deep(plan) : null;
+  });
+  protected readonly phases = computed(() => this.shown()?.phases ?? []);
+  /** Changes the server refused, their reasons in the coach's units. */
+  protected readonly refused = computed(() =>
+    this.queue.refused().map((refusal) => ({ ...refusal, message: this.units.text(refusal.message) })),
+  );
   protected readonly reading = computed(() => readClock(this.clock(), this.phases(), this.now()));
   protected readonly running = computed(
     () => this.clock().startedAt !== null && this.clock().pausedAt === null,
@@ -304,8 +318,9 @@ export class PitchSidePage {
           if (this.plan() !== plan) return;
           this.plan.set(stepped);
           if (refused) {
-            this.refusals.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: refused }));
-            this.announcement.set(`The area stays: ${refused}`);
+            const why = this.units.text(refused);
+            this.refusals.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: why }));
+            this.announcement.set(`The area stays: ${why}`);
           }
         })
         .catch(() => undefined);

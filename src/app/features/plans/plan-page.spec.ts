@@ -1,5 +1,5 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
-import { NEW_CLUB_UNIT_FIELDS } from '../../../../shared/units';
+import { NEW_CLUB_UNIT_FIELDS, type Units } from '../../../../shared/units';
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting, TestRequest } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
@@ -23,6 +23,7 @@ import { PrintState } from '../../core/layout/print-state';
 import { WHEN_IDLE } from '../../core/layout/when-idle';
 import { PlanPage } from './plan-page';
 import { PlanSession } from './services/plan-session';
+import { METRIC_WORDS, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 
 const NAMES = ['Ada P.', 'Ben O.', 'Cleo R.', 'Dev S.', 'Edie T.', 'Finn U.', 'Gia V.', 'Hal W.', 'Ines X.'];
 const ALL = [...NAMES, 'Jon Y.', 'Kit Z.', 'Lou A.', 'Max B.'];
@@ -123,6 +124,7 @@ describe('PlanPage', () => {
     shown = undefined as Plan | undefined,
     role = 'coach' as 'coach' | 'assistant',
     drawAll = true,
+    units = undefined as Units | undefined,
   } = {}) {
     const served = shown ?? plan;
     idleWork.length = 0;
@@ -156,6 +158,7 @@ describe('PlanPage', () => {
         emailVerified: true,
         role,
         ...NEW_CLUB_UNIT_FIELDS,
+        ...(units ? { units } : {}),
       },
     });
     const fixture = TestBed.createComponent(PlanPage);
@@ -481,6 +484,25 @@ describe('PlanPage', () => {
     for (const caution of plan.cautions) expect(cautions.textContent).toContain(caution.message);
     const fired = plan.trace.filter((t) => t.fired);
     expect(root.querySelector('cw-why-panel')!.textContent).toContain(`${fired.length} club rules applied`);
+  });
+
+  it('shows a coach who reads yards and °F the whole plan in them: header, notices, cards, steps, why', async () => {
+    const { root } = await setUp({ shown: training, units: YARDS_AND_FAHRENHEIT });
+    // 45 × 60 m is 49 × 66 yd.
+    expect(root.querySelector('[data-testid="plan-space"]')!.textContent!.trim()).toBe('49×66 yd');
+    // The engine's steps ("Area 13 × 20 m → 12 × 18 m") come in yards, and so does each diagram's label.
+    expect(root.textContent).toMatch(/Area \d+ (× \d+ )?yd → \d+ (× \d+ )?yd/);
+    for (const svg of Array.from(root.querySelectorAll('cw-station-diagram svg[role=img]')))
+      expect(svg.getAttribute('aria-label')).toMatch(/ in \d+ × \d+ yd/);
+    expect(root.querySelector('[data-testid="warnings"], [data-testid="cautions"]')).not.toBeNull();
+    expect(root.textContent).not.toMatch(METRIC_WORDS);
+  });
+
+  it('keeps metres for a coach who reads metres', async () => {
+    const { root } = await setUp({ shown: training });
+    expect(root.querySelector('[data-testid="plan-space"]')!.textContent!.trim()).toBe('45×60 m');
+    expect(root.textContent).toMatch(/Area \d+ (× \d+ )?m → /);
+    expect(root.textContent).not.toContain(' yd');
   });
 
   it('moves a player to another station, re-checks it in the browser, announces it and saves the edit', async () => {

@@ -42,6 +42,8 @@ import { PAPER_LABELS, PaperPreference } from './services/paper-preference';
 import { PlanHandover } from './services/plan-handover';
 import { EditFeedback, PlanSession } from './services/plan-session';
 import { breakWords, changeoverWords, isBreak } from './services/plan-words';
+import { SizeInUnitsPipe } from '../../shared/pipes/size-in-units';
+import { UnitChoice } from '../../core/units/unit-choice';
 
 /** One kind's activities in the swap menu. */
 interface SwapGroup {
@@ -65,6 +67,7 @@ interface SwapGroup {
     PhaseTimeline,
     PlanNotices,
     RegisterPanel,
+    SizeInUnitsPipe,
     StationCard,
     WhyPanel,
   ],
@@ -81,6 +84,8 @@ export class PlanPage {
   private readonly auth = inject(AuthStore);
   private readonly paperPreference = inject(PaperPreference);
   private readonly router = inject(Router);
+  /** The reader's units, for the space in the header (the rest of the plan comes converted). */
+  protected readonly units = inject(UnitChoice);
 
   readonly planId = input.required<string>();
 
@@ -96,7 +101,7 @@ export class PlanPage {
   protected readonly swapGroups = signal<SwapGroup[] | null>(null);
   /** "Set up first: …" for each phase, in order (null where nothing changes). */
   protected readonly changeovers = computed(() => {
-    const phases = this.session.plan()?.phases ?? [];
+    const phases = this.session.shown()?.phases ?? [];
     return phases.map((_, i) => changeoverWords(phases, i));
   });
   protected readonly printing = signal(false);

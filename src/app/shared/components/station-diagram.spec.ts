@@ -1,6 +1,8 @@
 import { TestBed } from '@angular/core/testing';
 import { generatePlan } from '../../../../engine/index';
 import { POSITION_STYLE, type PlanRequest, type Station } from '../../../../shared/types';
+import { AuthStore } from '../../core/auth/auth-store';
+import { signInReading, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 import { StationDiagram } from './station-diagram';
 
 /** A 4v1 square drawn by hand, so every count below is known without the engine. */
@@ -71,6 +73,16 @@ describe('StationDiagram', () => {
   it('says what is drawn, counting gate cones with their gates', () => {
     const label = render(KEEP_BALL).querySelector('svg')!.getAttribute('aria-label');
     expect(label).toBe('Keep-ball, 4v1 in 12 × 12 m: 4 attackers, 1 defender (bib), 4 cones, 2 gates');
+  });
+
+  it('says the size in yards to someone who reads yards', () => {
+    signInReading(TestBed.inject(AuthStore), YARDS_AND_FAHRENHEIT);
+    const label = render({ ...KEEP_BALL, area: { width: 18.29, length: 27.43 } })
+      .querySelector('svg')!
+      .getAttribute('aria-label');
+    // 18.29 × 27.43 m is 20 × 30 yd.
+    expect(label).toMatch(/^Keep-ball, 4v1 in 20 × 30 yd: /);
+    localStorage.clear();
   });
 
   it('reads out names with their numbers when given', () => {

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import {
   ACTIVITY_KIND_LABELS,
   MARKER_STYLE,
@@ -11,6 +11,8 @@ import {
   type Station,
   type Zone,
 } from '../../../../shared/types';
+import { formatSize } from '../../../../shared/units';
+import { UnitChoice } from '../../core/units/unit-choice';
 
 /** One start position as drawn: where, its colours and the number in its circle. */
 interface Dot extends Point {
@@ -62,6 +64,8 @@ export class StationDiagram {
   readonly names = input<ReadonlyMap<string, string> | Record<string, string> | null>(null);
 
   protected readonly marker = MARKER_STYLE;
+  /** The reader's units, for the size read out in the label (the drawing itself has no numbers). */
+  private readonly units = inject(UnitChoice);
 
   /** Marks are sized to the area so a 60 m pitch and a 9 m square both read clearly on a phone. */
   protected readonly scale = computed(() => {
@@ -162,10 +166,14 @@ export class StationDiagram {
     return items;
   });
 
-  /** What is drawn, in words: "Keep-ball, 4v1 in 12 × 12 m: 4 attackers, 1 defender (bib), 4 cones, 2 gates". */
+  /**
+   * What is drawn, in words, the size in the reader's units: "Keep-ball, 4v1 in 12 × 12 m: 4
+   * attackers, 1 defender (bib), 4 cones, 2 gates" ("13 × 13 yd" for yards).
+   */
   protected readonly label = computed(() => {
     const s = this.station();
-    const head = `${ACTIVITY_KIND_LABELS[s.activityKind] ?? s.title}${s.format ? ', ' + s.format : ''} in ${s.area.width} × ${s.area.length} m`;
+    const size = formatSize(this.units.distance(), s.area);
+    const head = `${ACTIVITY_KIND_LABELS[s.activityKind] ?? s.title}${s.format ? ', ' + s.format : ''} in ${size}`;
     const names = this.names();
     const nameOf = (id: string): string | undefined =>
       names instanceof Map ? names.get(id) : names ? (names as Record<string, string>)[id] : undefined;

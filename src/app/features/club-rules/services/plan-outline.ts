@@ -15,7 +15,10 @@ export const OUTLINE_ROWS: { key: keyof PlanOutline; label: string }[] = [
   { key: 'warnings', label: 'Warnings' },
 ];
 
-/** One line per aspect, phase by phase, so two outlines compare as text. */
+/**
+ * One line per aspect, phase by phase, so two outlines compare as text; metric, in the engine's
+ * own way of writing sizes ("12 × 20 m"), so the screen can put them into the reader's units.
+ */
 export function outlinePlan(plan: Plan): PlanOutline {
   const groups = plan.phases.map((phase) => {
     const sizes = phase.stations.map((s) => {
@@ -30,7 +33,7 @@ export function outlinePlan(plan: Plan): PlanOutline {
   });
   const areas = plan.phases.map(
     (phase) =>
-      `${phase.name}: ${[...new Set(phase.stations.map((s) => `${s.area.width}×${s.area.length} m`))].join(', ')}`,
+      `${phase.name}: ${[...new Set(phase.stations.map((s) => `${s.area.width} × ${s.area.length} m`))].join(', ')}`,
   );
   const timing = plan.phases.map((phase) => `${phase.name} ${phase.endMinute - phase.startMinute}′`);
   const warnings = plan.warnings.map((w) => w.message);

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatMenuModule } from '@angular/material/menu';
 import { suitsAge } from '../../../../../engine';
@@ -8,6 +8,8 @@ import { ICONS } from '../../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, LEVEL_LABELS } from '../../../core/labels/plan-labels';
 import { StationDiagram } from '../../../shared/components/station-diagram';
 import type { LibraryEntry } from '../services/library-entries';
+import { formatSize } from '../../../../../shared/units';
+import { UnitChoice } from '../../../core/units/unit-choice';
 
 /** A team the member may pin for, and whether this activity is pinned for it. */
 export interface PinTeam {
@@ -71,31 +73,40 @@ export class ActivityCard {
   protected readonly levelLabels = LEVEL_LABELS;
   protected readonly ballWords = BALL_WORDS;
   protected readonly open = signal(false);
+  private readonly units = inject(UnitChoice);
 
-  /** The engine's single-station set-up of this activity, or null when it cannot be drawn. */
+  /** The activity with its words (summary, description, points, steps) in the reader's units. */
+  protected readonly shown = computed(() => this.units.deep(this.entry()));
+
+  /**
+   * The engine's single-station set-up of this activity (its texts in the reader's units), or null
+   * when it cannot be drawn.
+   */
   protected readonly preview = computed<ActivityPreview | null>(() => {
     const entry = this.entry();
     const age = this.ageGroup();
     const level = this.level();
+    let preview: ActivityPreview;
     try {
-      return previewActivity(entry.definition, this.ruleSet(), {
+      preview = previewActivity(entry.definition, this.ruleSet(), {
         ...(age && suitsAge(entry, age) ? { ageGroup: age } : {}),
         ...(level && entry.levels.includes(level) ? { level } : {}),
       });
     } catch {
       return null;
     }
+    return this.units.deep(preview);
   });
 
   /** Coaching points as the plan would list them (the set-up adds its own), else the activity's. */
   protected readonly coachingPoints = computed(
-    () => this.preview()?.station.coachingPoints ?? this.entry().definition.coachingPoints,
+    () => this.preview()?.station.coachingPoints ?? this.shown().definition.coachingPoints,
   );
   protected readonly easier = computed(
-    () => this.preview()?.station.progressions.easier ?? this.entry().definition.easier,
+    () => this.preview()?.station.progressions.easier ?? this.shown().definition.easier,
   );
   protected readonly harder = computed(
-    () => this.preview()?.station.progressions.harder ?? this.entry().definition.harder,
+    () => this.preview()?.station.progressions.harder ?? this.shown().definition.harder,
   );
   protected readonly levelsText = computed(() =>
     this.entry()
@@ -106,12 +117,12 @@ export class ActivityCard {
     const { from, to } = this.entry().ages;
     return from === to ? from : `${from}–${to}`;
   });
-  /** "Drawn for U10 intermediate, 4v1 · 10 × 10 m". */
+  /** "Drawn for U10 intermediate, 4v1 · 10 × 10 m", the size in the reader's units. */
   protected readonly setupText = computed(() => {
     const p = this.preview();
     if (!p) return '';
     const format = p.station.format ? `, ${p.station.format}` : '';
-    return `Drawn for ${p.ageGroup} ${this.levelLabels[p.level].toLowerCase()}${format} · ${p.station.area.width} × ${p.station.area.length} m`;
+    return `Drawn for ${p.ageGroup} ${this.levelLabels[p.level].toLowerCase()}${format} · ${formatSize(this.units.distance(), p.station.area)}`;
   });
   /** "7 cones · 3 balls · 1 goal": what the drawn group needs. */
   protected readonly kitText = computed(() => {

@@ -7,6 +7,7 @@ import { PlanRulesApi } from '../../../core/api/plan-rules-api';
 import { ActivityOption, AreaLimits, BrowserEngine } from '../../../core/engine/browser-engine';
 import { PlanPrefetch } from './plan-prefetch';
 import { problemMessage } from '../../../core/http/problem-message';
+import { UnitChoice } from '../../../core/units/unit-choice';
 
 /**
  * What the last edit came to, shown beside the control that asked for it: `at` names the place
@@ -20,7 +21,9 @@ export interface EditFeedback {
 
 /**
  * One plan being looked at and edited: each edit is applied and re-checked by the engine in the
- * browser at once, then saved; the server's answer is the plan of record.
+ * browser at once, then saved; the server's answer is the plan of record. The engine words its
+ * texts in metres and °C: `shown`, the edit answers, the area limits and the swap menu are where
+ * they are put into the reader's units, once for the whole page.
  */
 @Injectable()
 export class PlanSession {
@@ -28,11 +31,18 @@ export class PlanSession {
   private readonly prefetch = inject(PlanPrefetch);
   private readonly engine = inject(BrowserEngine);
   private readonly planRules = inject(PlanRulesApi);
+  private readonly units = inject(UnitChoice);
   /** The rules of the open plan's rule set, fetched once per rule set id. */
   private rules: { id: string; document: Promise<RuleSetDocument | null> } | null = null;
 
   readonly saved = signal<SessionPlanDto | null>(null);
+  /** The plan as the engine keeps it (metric): what edits start from. */
   readonly plan = signal<Plan | null>(null);
+  /** The plan as the reader reads it: every text in their units (the same plan in metres and °C). */
+  readonly shown = computed(() => {
+    const plan = this.plan();
+    return plan ? this.units.deep(plan) : null;
+  });
   readonly problems = signal<Notice[]>([]);
   readonly busy = signal(false);
   readonly error = signal<string | null>(null);
@@ -87,7 +97,7 @@ export class PlanSession {
     const plan = this.plan();
     if (!saved || !plan) return [];
     const [engine, rules] = await Promise.all([this.engine.load(), this.rulesOf(saved)]);
-    return engine.activities(plan, rules);
+    return this.units.deep(engine.activities(plan, rules));
   }
 
   /** Recomputes the area buttons' limits for the plan on screen (with the plan's own rules). */
@@ -96,7 +106,7 @@ export class PlanSession {
     const plan = this.plan();
     if (!saved || !plan) return;
     const [engine, rules] = await Promise.all([this.engine.load(), this.rulesOf(saved)]);
-    if (this.plan() === plan) this.limits.set(engine.areaLimits(plan, rules));
+    if (this.plan() === plan) this.limits.set(this.units.deep(engine.areaLimits(plan, rules)));
   }
 
   /**
@@ -114,15 +124,17 @@ export class PlanSession {
       const [engine, rules] = await Promise.all([this.engine.load(), this.rulesOf(saved)]);
       const outcome = await engine.tryEdit(before, edit, rules);
       if (outcome.refused) {
-        this.feedback.set({ at, kind: 'refused', lines: [outcome.refused] });
-        this.announcement.set(`Not changed. ${outcome.refused}`);
+        const refused = this.units.text(outcome.refused);
+        this.feedback.set({ at, kind: 'refused', lines: [refused] });
+        this.announcement.set(`Not changed. ${refused}`);
         return;
       }
       const next = outcome.plan;
       const problems = engine.checkPlan(next, rules);
       this.plan.set(next);
       this.problems.set(problems);
-      if (problems.length) this.feedback.set({ at, kind: 'problems', lines: uniqueMessages(problems) });
+      if (problems.length)
+        this.feedback.set({ at, kind: 'problems', lines: this.units.deep(uniqueMessages(problems)) });
       this.announcement.set(
         problems.length
           ? `${describe}. Re-checked: ${problems.length} problem${problems.length === 1 ? '' : 's'} to look at.`
@@ -134,7 +146,9 @@ export class PlanSession {
     } catch (error: unknown) {
       this.plan.set(before);
       this.problems.set([]);
-      const text = error instanceof Error && !('status' in error) ? error.message : problemMessage(error);
+      const text = this.units.text(
+        error instanceof Error && !('status' in error) ? error.message : problemMessage(error),
+      );
       this.feedback.set({ at, kind: 'not-saved', lines: [`That change was not saved: ${text}`] });
       this.announcement.set(`That change was not saved: ${text}`);
     } finally {
