@@ -104,6 +104,27 @@ describe('a helper link on a phone', () => {
     await screenshot(helperPage, 'helper-view');
   });
 
+  it('a coach who reads yards and °F hands on a link that reads in them too', async () => {
+    const me = (body: object) => club.api.patch('/api/auth/me', body, { token: coach.token });
+    expect((await me({ distanceUnit: 'yards', temperatureUnit: 'fahrenheit' })).status).toBe(200);
+    try {
+      await helperPage.reload();
+      const kind = helperPage.getByTestId('station-kind').first();
+      await kind.waitFor();
+      // The first station's stored metres, in whole yards.
+      const area = saved.plan.phases.find((p) => p.stations.length)!.stations[0]!.area;
+      const yards = (m: number) => Math.round(m / 0.9144);
+      expect(await kind.innerText()).toContain(`${yards(area.width)} × ${yards(area.length)} yd`);
+      const text = await helperPage.getByTestId('helper-view').innerText();
+      expect(text).toContain(' yd');
+      // No size, area or temperature left in metric words.
+      expect(text).not.toMatch(/\d m(?![\w])|\d m²|°C/);
+      await screenshot(helperPage, 'helper-view-yards');
+    } finally {
+      expect((await me({ distanceUnit: null, temperatureUnit: null })).status).toBe(200);
+    }
+  });
+
   it('once the coach stops the link, the helper’s page says it no longer works', async () => {
     await coachPage.getByTestId('helper-link-revoke').first().click();
     await coachPage.getByTestId('helper-link-url').waitFor({ state: 'detached' });
