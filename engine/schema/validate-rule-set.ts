@@ -217,7 +217,7 @@ function semanticErrors(doc: RuleSetDocument): PointerError[] {
         const base = `/parameters/areas/${kind}/${band}`;
         errors.push({
           pointer: `${base}/maxWidth`,
-          message: `${rowWords(base, doc)}: the widest area (${a.maxWidth}) is below the narrowest (${a.minWidth}).`,
+          message: `${rowWords(base, doc)}: the widest area (${a.maxWidth} m) is below the narrowest (${a.minWidth} m).`,
         });
       }
     }

@@ -222,6 +222,8 @@ describe('activity library', () => {
     expect(added.id).toMatch(/^club-/);
 
     await page.getByRole('button', { name: 'Publish' }).click();
+    // Publishing asks first (how many teams it changes); then it publishes.
+    await page.getByTestId('confirm-publish').click();
     // Published once the club's published rules hold it (the page's heading may say "version" before).
     await expect
       .poll(async () => {

@@ -251,6 +251,31 @@ describe('ClubRulesPage', () => {
     localStorage.clear();
   });
 
+  it('shows time in play as a percentage and saves it as a share', async () => {
+    const { fixture, http, el, button, input } = await setUp([
+      ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 3 }),
+    ]);
+    await fixture.whenStable();
+    const rates = (
+      defaultRules as unknown as { parameters: { touchRates: Record<string, { activeShare: number }> } }
+    ).parameters.touchRates;
+    const pointer = '/parameters/touchRates/keep-ball/activeShare';
+    expect(Number(input(pointer).value)).toBe(Math.round(rates['keep-ball']!.activeShare * 1000) / 10);
+    expect(el.textContent).toContain('Time in play (%)');
+    expect(el.textContent).not.toContain('(0–1)');
+    expect(input(pointer).getAttribute('aria-label')).toBe('Keep-ball, time in play (%)');
+    input(pointer).value = '72.5';
+    input(pointer).dispatchEvent(new Event('change'));
+    await fixture.whenStable();
+    expect(input(pointer).value).toBe('72.5');
+    button('Save draft').click();
+    const save = http.expectOne('/api/rule-sets/d2');
+    const sent = save.request.body as {
+      body: { parameters: { touchRates: Record<string, { activeShare: number }> } };
+    };
+    expect(sent.body.parameters.touchRates['keep-ball']!.activeShare).toBe(0.725);
+  });
+
   it('marks the cell of a problem with a sentence, lists it, and takes the lead there', async () => {
     const { fixture, el, input } = await setUp([
       ruleSet({ id: 'd2', version: 2, status: 'draft', revision: 1 }),

@@ -58,12 +58,15 @@ export class RuleNumber {
   readonly cwRuleNumber = input.required<string>();
   /** What the stored metric number measures (metres, square metres, °C); null for counts and minutes. */
   readonly cwRuleMeasure = input<Measure | null>(null);
+  /** A share stored as 0–1 and shown and typed as a percentage (0.8 ↔ 80). */
+  readonly cwRulePercent = input(false);
   protected readonly document = inject(RULE_DOCUMENT);
   private readonly units = inject(UnitChoice);
   protected readonly messageId = `cw-cell-problem-${++nextId}`;
   protected readonly value = computed(() => {
     const v = getAt(this.document.body(), this.cwRuleNumber());
     if (typeof v !== 'number') return null;
+    if (this.cwRulePercent()) return Math.round(v * 1000) / 10;
     const measure = this.cwRuleMeasure();
     return measure ? measureIn(measure, this.units.units(), v) : v;
   });
@@ -99,6 +102,10 @@ export class RuleNumber {
     if (field.value.trim() === '' || Number.isNaN(field.valueAsNumber)) return;
     const measure = this.cwRuleMeasure();
     const typed = field.valueAsNumber;
+    if (this.cwRulePercent()) {
+      this.document.edit(this.cwRuleNumber(), Math.round(typed * 10) / 1000);
+      return;
+    }
     this.document.edit(this.cwRuleNumber(), measure ? metricFrom(measure, this.units.units(), typed) : typed);
   }
 }

@@ -20,6 +20,8 @@ import { sampleSquads, type SampleSquad } from './services/sample-squads';
 import { teamSquad } from './services/team-squad';
 import { SizeInUnitsPipe } from '../../shared/pipes/size-in-units';
 import { UnitChoice } from '../../core/units/unit-choice';
+import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
+import { LEVEL_LABELS } from '../../core/labels/plan-labels';
 
 /** One situation run under both rule sets. */
 export interface TryItResult {
@@ -39,7 +41,7 @@ const isOutline = (value: PlanOutline | { error: string }): value is PlanOutline
  */
 @Component({
   selector: 'cw-rule-try-it',
-  imports: [MatButtonModule, ...ICONS, SizeInUnitsPipe],
+  imports: [AgeGroupLabelPipe, MatButtonModule, ...ICONS, SizeInUnitsPipe],
   templateUrl: './rule-try-it.html',
   styleUrl: './rule-try-it.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -57,6 +59,7 @@ export class RuleTryIt {
 
   protected readonly ageGroups = AGE_GROUPS;
   protected readonly levels = LEVELS;
+  protected readonly levelLabels = LEVEL_LABELS;
   protected readonly rows = OUTLINE_ROWS;
   protected readonly teams = signal<TeamDto[]>([]);
   protected readonly teamId = signal('');

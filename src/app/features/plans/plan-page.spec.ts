@@ -23,6 +23,7 @@ import { PrintState } from '../../core/layout/print-state';
 import { WHEN_IDLE } from '../../core/layout/when-idle';
 import { PlanPage } from './plan-page';
 import { PlanSession } from './services/plan-session';
+import { isPlannerStep } from './components/why-panel';
 import { METRIC_WORDS, YARDS_AND_FAHRENHEIT } from '../../core/units/units.testing';
 
 const NAMES = ['Ada P.', 'Ben O.', 'Cleo R.', 'Dev S.', 'Edie T.', 'Finn U.', 'Gia V.', 'Hal W.', 'Ines X.'];
@@ -482,8 +483,13 @@ describe('PlanPage', () => {
     expect(plan.cautions.length).toBeGreaterThan(0);
     const cautions = root.querySelector('[data-testid="cautions"]')!;
     for (const caution of plan.cautions) expect(cautions.textContent).toContain(caution.message);
-    const fired = plan.trace.filter((t) => t.fired);
-    expect(root.querySelector('cw-why-panel')!.textContent).toContain(`${fired.length} club rules applied`);
+    // Club rules are counted apart from the planner's own steps (engine.*).
+    const clubRules = plan.trace.filter((t) => t.fired && !isPlannerStep(t));
+    const steps = plan.trace.filter((t) => t.fired && isPlannerStep(t));
+    expect(clubRules.length).toBeGreaterThan(1);
+    expect(root.querySelector('cw-why-panel')!.textContent).toContain(
+      `${clubRules.length} club rules applied · ${steps.length} planner steps`,
+    );
   });
 
   it('shows a coach who reads yards and °F the whole plan in them: header, notices, cards, steps, why', async () => {
