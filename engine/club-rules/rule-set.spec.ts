@@ -73,6 +73,30 @@ describe('validateRuleSet', () => {
     ]);
   });
 
+  it('writes a measured limit with its metric unit, so a screen in yards can convert it', () => {
+    const doc = clone();
+    doc.parameters.keepBallLimits.minSideM = 120;
+    doc.parameters.keepBallLimits.minM2PerPlayer = 101;
+    const messages = validateRuleSet(doc).errors.map((e) => [e.pointer, e.message]);
+    expect(messages).toContainEqual([
+      '/parameters/keepBallLimits/minSideM',
+      expect.stringMatching(/must be at most 100 m\.?$/),
+    ]);
+    expect(messages).toContainEqual([
+      '/parameters/keepBallLimits/minM2PerPlayer',
+      expect.stringMatching(/must be at most 100 m²\.?$/),
+    ]);
+    // A count keeps its bare number.
+    doc.parameters.keepBallLimits.minSideM = 10;
+    doc.parameters.keepBallLimits.minM2PerPlayer = 5;
+    doc.parameters.groupSizes['keep-ball'].beginner.min = 0;
+    expect(
+      validateRuleSet(doc)
+        .errors.map((e) => e.message)
+        .join(' '),
+    ).toMatch(/at least 1\b(?! m)/);
+  });
+
   it('prints no codes, ids or pointers in its messages', () => {
     const doc = clone();
     doc.parameters.groupSizes.duel.advanced.preferred = 99;

@@ -20,6 +20,7 @@ import {
   rulePathParts,
   rulePathWords,
 } from '../../shared/types/rule-words';
+import { DEFAULT_UNITS, measureSymbol, ruleSetMeasureAt } from '../../shared/units';
 import { kindLayouts } from '../kinds/registry';
 // Precompiled from shared/schemas/rule-set.schema.json: no eval, so it runs under the app's CSP.
 import generated from './generated/rule-set.validator';
@@ -72,6 +73,12 @@ const TYPE_WORDS: Record<string, string> = {
   object: 'must be a group of settings',
 };
 
+/** A schema limit with its metric unit where the place measures something ("45 °C"), so screens can convert it. */
+function limitWords(pointer: string, limit: unknown): string {
+  const measure = ruleSetMeasureAt(pointer);
+  return measure ? `${String(limit)} ${measureSymbol(measure, DEFAULT_UNITS)}` : String(limit);
+}
+
 function describe(e: ErrorObject, doc: unknown): PointerError {
   const p = e.params as Record<string, unknown>;
   const pointer = e.instancePath || '';
@@ -88,13 +95,13 @@ function describe(e: ErrorObject, doc: unknown): PointerError {
     case 'type':
       return at(pointer, doc, TYPE_WORDS[String(p['type'])] ?? 'is the wrong kind of value');
     case 'minimum':
-      return at(pointer, doc, `must be at least ${String(p['limit'])}`);
+      return at(pointer, doc, `must be at least ${limitWords(pointer, p['limit'])}`);
     case 'maximum':
-      return at(pointer, doc, `must be at most ${String(p['limit'])}`);
+      return at(pointer, doc, `must be at most ${limitWords(pointer, p['limit'])}`);
     case 'exclusiveMinimum':
-      return at(pointer, doc, `must be more than ${String(p['limit'])}`);
+      return at(pointer, doc, `must be more than ${limitWords(pointer, p['limit'])}`);
     case 'exclusiveMaximum':
-      return at(pointer, doc, `must be less than ${String(p['limit'])}`);
+      return at(pointer, doc, `must be less than ${limitWords(pointer, p['limit'])}`);
     case 'minItems':
       return at(
         pointer,

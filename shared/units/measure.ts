@@ -56,3 +56,16 @@ function hundredth(x: number): number {
   const n = Math.round(x * 100) / 100;
   return n === 0 ? 0 : n;
 }
+
+/** What the rule set's measured numbers measure, by their place; counts and minutes measure nothing. */
+const RULE_SET_MEASURES: [place: RegExp, measure: Measure][] = [
+  [/^\/parameters\/areas\/[^/]+\/[^/]+\/(width|length|minWidth|maxWidth|step)$/, 'distance'],
+  [/^\/parameters\/keepBallLimits\/minM2PerPlayer$/, 'area'],
+  [/^\/parameters\/keepBallLimits\/minSideM$/, 'distance'],
+  [/^\/parameters\/cautions\/(heatC|coldC)$/, 'temperature'],
+];
+
+/** The measure of the rule-set number at a JSON pointer, or null for a count or minutes. */
+export function ruleSetMeasureAt(pointer: string): Measure | null {
+  return RULE_SET_MEASURES.find(([place]) => place.test(pointer))?.[1] ?? null;
+}

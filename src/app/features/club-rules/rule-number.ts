@@ -10,7 +10,7 @@ import {
   type Signal,
 } from '@angular/core';
 import { getAt } from './services/json-pointer';
-import { measureIn, metricFrom, type Measure } from '../../../../shared/units';
+import { measureIn, metricFrom, ruleSetMeasureAt, type Measure } from '../../../../shared/units';
 import { UnitChoice } from '../../core/units/unit-choice';
 
 /** The document a number field edits: what it reads, whether it may change it, where edits go. */
@@ -60,6 +60,8 @@ export class RuleNumber {
   readonly cwRuleMeasure = input<Measure | null>(null);
   /** A share stored as 0–1 and shown and typed as a percentage (0.8 ↔ 80). */
   readonly cwRulePercent = input(false);
+  /** What the number measures: as given, else as the rule set's place says (shared/units). */
+  private readonly measure = computed(() => this.cwRuleMeasure() ?? ruleSetMeasureAt(this.cwRuleNumber()));
   protected readonly document = inject(RULE_DOCUMENT);
   private readonly units = inject(UnitChoice);
   protected readonly messageId = `cw-cell-problem-${++nextId}`;
@@ -67,7 +69,7 @@ export class RuleNumber {
     const v = getAt(this.document.body(), this.cwRuleNumber());
     if (typeof v !== 'number') return null;
     if (this.cwRulePercent()) return Math.round(v * 1000) / 10;
-    const measure = this.cwRuleMeasure();
+    const measure = this.measure();
     return measure ? measureIn(measure, this.units.units(), v) : v;
   });
   protected readonly problems = computed(() =>
@@ -100,7 +102,7 @@ export class RuleNumber {
   protected changed(event: Event): void {
     const field = event.target as HTMLInputElement;
     if (field.value.trim() === '' || Number.isNaN(field.valueAsNumber)) return;
-    const measure = this.cwRuleMeasure();
+    const measure = this.measure();
     const typed = field.valueAsNumber;
     if (this.cwRulePercent()) {
       this.document.edit(this.cwRuleNumber(), Math.round(typed * 10) / 1000);
