@@ -1,22 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
-import { FormsModule } from '@angular/forms';
-import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatSelectModule } from '@angular/material/select';
-import {
-  DEFAULT_UNITS,
-  DISTANCE_UNIT_WORDS,
-  DISTANCE_UNITS,
-  TEMPERATURE_UNIT_WORDS,
-  TEMPERATURE_UNITS,
-  type DistanceUnit,
-  type TemperatureUnit,
-} from '../../../../shared/units';
+import { DEFAULT_UNITS, DISTANCE_UNIT_WORDS, TEMPERATURE_UNIT_WORDS } from '../../../../shared/units';
 import { AuthApi } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
-import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
-
-/** The select's value for "follow the club" (a select cannot hold null and show it). */
-const CLUB = 'club';
+import { FOLLOW_CLUB, UnitFields, unitProblem, type UnitPick } from '../../shared/components/unit-fields';
 
 const FIELD_WORDS: Record<string, string> = { distanceUnit: 'Distances', temperatureUnit: 'Temperatures' };
 
@@ -26,43 +12,21 @@ const FIELD_WORDS: Record<string, string> = { distanceUnit: 'Distances', tempera
  */
 @Component({
   selector: 'cw-own-units',
-  imports: [FormsModule, MatFormFieldModule, MatSelectModule],
+  imports: [UnitFields],
   template: `
     <h2>Units</h2>
     <p class="cw-muted">
       How you read and type distances and temperatures: on plans, the printed card and in e-mails you send.
       Plans are the same whatever you choose.
     </p>
-    <div class="cw-own-units">
-      <mat-form-field appearance="outline" subscriptSizing="dynamic">
-        <mat-label>Distances</mat-label>
-        <mat-select
-          [ngModel]="distance()"
-          (ngModelChange)="save('distanceUnit', $event)"
-          [disabled]="saving()"
-          data-testid="own-distance-unit"
-        >
-          <mat-option value="club">As the club: {{ distanceWords[clubUnits().distance] }}</mat-option>
-          @for (unit of distanceUnits; track unit) {
-            <mat-option [value]="unit">{{ distanceWords[unit] }}</mat-option>
-          }
-        </mat-select>
-      </mat-form-field>
-      <mat-form-field appearance="outline" subscriptSizing="dynamic">
-        <mat-label>Temperatures</mat-label>
-        <mat-select
-          [ngModel]="temperature()"
-          (ngModelChange)="save('temperatureUnit', $event)"
-          [disabled]="saving()"
-          data-testid="own-temperature-unit"
-        >
-          <mat-option value="club">As the club: {{ temperatureWords[clubUnits().temperature] }}</mat-option>
-          @for (unit of temperatureUnits; track unit) {
-            <mat-option [value]="unit">{{ temperatureWords[unit] }}</mat-option>
-          }
-        </mat-select>
-      </mat-form-field>
-    </div>
+    <cw-unit-fields
+      [distance]="distance()"
+      [temperature]="temperature()"
+      [club]="clubUnits()"
+      [disabled]="saving()"
+      testIdPrefix="own"
+      (picked)="save($event)"
+    />
     <div aria-live="polite">
       @if (saved()) {
         <p role="status" class="cw-muted" data-testid="units-saved">Saved: {{ savedWords() }}.</p>
@@ -72,29 +36,15 @@ const FIELD_WORDS: Record<string, string> = { distanceUnit: 'Distances', tempera
       }
     </div>
   `,
-  styles: `
-    .cw-own-units {
-      display: flex;
-      flex-wrap: wrap;
-      gap: 0.75rem;
-    }
-    .cw-own-units mat-form-field {
-      flex: 1 1 12rem;
-    }
-  `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class OwnUnits {
   private readonly auth = inject(AuthStore);
   private readonly authApi = inject(AuthApi);
 
-  protected readonly distanceUnits = DISTANCE_UNITS;
-  protected readonly temperatureUnits = TEMPERATURE_UNITS;
-  protected readonly distanceWords = DISTANCE_UNIT_WORDS;
-  protected readonly temperatureWords = TEMPERATURE_UNIT_WORDS;
   protected readonly clubUnits = computed(() => this.auth.user()?.clubUnits ?? DEFAULT_UNITS);
-  protected readonly distance = computed(() => this.auth.user()?.ownUnits?.distance ?? CLUB);
-  protected readonly temperature = computed(() => this.auth.user()?.ownUnits?.temperature ?? CLUB);
+  protected readonly distance = computed(() => this.auth.user()?.ownUnits?.distance ?? FOLLOW_CLUB);
+  protected readonly temperature = computed(() => this.auth.user()?.ownUnits?.temperature ?? FOLLOW_CLUB);
   protected readonly saving = signal(false);
   protected readonly saved = signal(false);
   protected readonly error = signal<string | null>(null);
@@ -106,15 +56,13 @@ export class OwnUnits {
   });
 
   /** Saves one choice ("club" goes back to following the club). */
-  protected save(
-    field: 'distanceUnit' | 'temperatureUnit',
-    value: DistanceUnit | TemperatureUnit | typeof CLUB,
-  ): void {
+  protected save(pick: UnitPick): void {
     if (this.saving()) return;
     this.saving.set(true);
     this.saved.set(false);
     this.error.set(null);
-    this.authApi.changeOwnUnits({ [field]: value === CLUB ? null : value }).subscribe({
+    const field = pick.quantity === 'distance' ? 'distanceUnit' : 'temperatureUnit';
+    this.authApi.changeOwnUnits({ [field]: pick.unit === FOLLOW_CLUB ? null : pick.unit }).subscribe({
       next: (user) => {
         this.auth.updateUser(user);
         this.saving.set(false);
@@ -122,12 +70,7 @@ export class OwnUnits {
       },
       error: (error: unknown) => {
         this.saving.set(false);
-        const fields = Object.entries(problemFieldErrors(error));
-        this.error.set(
-          fields.length
-            ? fields.map(([name, text]) => `${FIELD_WORDS[name] ?? name} ${text}.`).join(' ')
-            : problemMessage(error),
-        );
+        this.error.set(unitProblem(error, FIELD_WORDS));
       },
     });
   }

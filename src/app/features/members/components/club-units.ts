@@ -1,19 +1,11 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
-import { FormsModule } from '@angular/forms';
 import { MatCardModule } from '@angular/material/card';
-import { MatFormFieldModule } from '@angular/material/form-field';
-import { MatSelectModule } from '@angular/material/select';
-import {
-  DISTANCE_UNIT_WORDS,
-  DISTANCE_UNITS,
-  TEMPERATURE_UNIT_WORDS,
-  TEMPERATURE_UNITS,
-  type Units,
-} from '../../../../../shared/units';
+import type { Units } from '../../../../../shared/units';
 import { AuthApi } from '../../../core/api/auth-api';
 import { ClubUnitsApi } from '../../../core/api/club-units-api';
 import { AuthStore } from '../../../core/auth/auth-store';
-import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
+import { problemMessage } from '../../../core/http/problem-message';
+import { FOLLOW_CLUB, UnitFields, unitProblem, type UnitPick } from '../../../shared/components/unit-fields';
 
 const FIELD_WORDS: Record<string, string> = { distance: 'Distances', temperature: 'Temperatures' };
 
@@ -23,7 +15,7 @@ const FIELD_WORDS: Record<string, string> = { distance: 'Distances', temperature
  */
 @Component({
   selector: 'cw-club-units',
-  imports: [FormsModule, MatCardModule, MatFormFieldModule, MatSelectModule],
+  imports: [MatCardModule, UnitFields],
   template: `
     <mat-card appearance="outlined" class="cw-club-units">
       <mat-card-header><h2 mat-card-title>Club units</h2></mat-card-header>
@@ -34,34 +26,13 @@ const FIELD_WORDS: Record<string, string> = { distance: 'Distances', temperature
           are the same whatever you choose.
         </p>
         @if (units(); as current) {
-          <div class="cw-club-units__fields">
-            <mat-form-field appearance="outline" subscriptSizing="dynamic">
-              <mat-label>Distances</mat-label>
-              <mat-select
-                [ngModel]="current.distance"
-                (ngModelChange)="save({ distance: $event })"
-                [disabled]="saving()"
-                data-testid="club-distance-unit"
-              >
-                @for (unit of distanceUnits; track unit) {
-                  <mat-option [value]="unit">{{ distanceWords[unit] }}</mat-option>
-                }
-              </mat-select>
-            </mat-form-field>
-            <mat-form-field appearance="outline" subscriptSizing="dynamic">
-              <mat-label>Temperatures</mat-label>
-              <mat-select
-                [ngModel]="current.temperature"
-                (ngModelChange)="save({ temperature: $event })"
-                [disabled]="saving()"
-                data-testid="club-temperature-unit"
-              >
-                @for (unit of temperatureUnits; track unit) {
-                  <mat-option [value]="unit">{{ temperatureWords[unit] }}</mat-option>
-                }
-              </mat-select>
-            </mat-form-field>
-          </div>
+          <cw-unit-fields
+            [distance]="current.distance"
+            [temperature]="current.temperature"
+            [disabled]="saving()"
+            testIdPrefix="club"
+            (picked)="save($event)"
+          />
         }
         <div aria-live="polite">
           @if (saved()) {
@@ -78,14 +49,6 @@ const FIELD_WORDS: Record<string, string> = { distance: 'Distances', temperature
     .cw-club-units {
       margin-top: 1.5rem;
     }
-    .cw-club-units__fields {
-      display: flex;
-      flex-wrap: wrap;
-      gap: 0.75rem;
-    }
-    .cw-club-units__fields mat-form-field {
-      flex: 1 1 12rem;
-    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
@@ -94,10 +57,6 @@ export class ClubUnits {
   private readonly authApi = inject(AuthApi);
   private readonly auth = inject(AuthStore);
 
-  protected readonly distanceUnits = DISTANCE_UNITS;
-  protected readonly temperatureUnits = TEMPERATURE_UNITS;
-  protected readonly distanceWords = DISTANCE_UNIT_WORDS;
-  protected readonly temperatureWords = TEMPERATURE_UNIT_WORDS;
   protected readonly units = signal<Units | null>(null);
   protected readonly saving = signal(false);
   protected readonly saved = signal(false);
@@ -111,11 +70,14 @@ export class ClubUnits {
   }
 
   /** Saves one unit for the club, then reads the signed-in person again so every screen follows. */
-  protected save(change: Partial<Units>): void {
-    if (this.saving()) return;
+  protected save(pick: UnitPick): void {
+    // The club's own setting offers no "as the club" choice.
+    if (this.saving() || pick.unit === FOLLOW_CLUB) return;
     this.saving.set(true);
     this.saved.set(false);
     this.error.set(null);
+    const change: Partial<Units> =
+      pick.quantity === 'distance' ? { distance: pick.unit } : { temperature: pick.unit };
     this.api.set(change).subscribe({
       next: (units) => {
         this.units.set(units);
@@ -125,12 +87,7 @@ export class ClubUnits {
       },
       error: (error: unknown) => {
         this.saving.set(false);
-        const fields = Object.entries(problemFieldErrors(error));
-        this.error.set(
-          fields.length
-            ? fields.map(([name, text]) => `${FIELD_WORDS[name] ?? name} ${text}.`).join(' ')
-            : problemMessage(error),
-        );
+        this.error.set(unitProblem(error, FIELD_WORDS));
       },
     });
   }
