@@ -108,7 +108,7 @@ describe('attendance, feedback, pitch-side changes and team insight', () => {
     expect(
       next.plan.trace.some(
         (t: { ruleId: string; effect?: string }) =>
-          t.ruleId === 'engine.feedback-start' && /keep-ball/.test(t.effect ?? ''),
+          t.ruleId === 'engine.feedback-start' && /keep-ball/i.test(t.effect ?? ''),
       ),
     ).toBe(true);
     // Too easy in keep-ball means less room per player next time (or the same at the club's

@@ -117,19 +117,25 @@ describe('answers beside the control on a phone', () => {
     }
     expect(card, 'a station whose area can still grow').not.toBeNull();
     const larger = card!.getByTestId('area-larger');
-    // While an edit is saved every edit control waits; "New groups" says when the page is idle.
+    const note = card!.locator('.cw-area-note');
+    // While an edit is saved every edit control waits, "Larger area" too; "New groups" says when
+    // the page is idle. Only a button still grey on an idle page, with the limit said, is at its limit.
     const idle = () => page.getByTestId('regenerate').isEnabled();
+    const atLimit = async () =>
+      (await idle()) &&
+      (await larger.isDisabled()) &&
+      /Largest area|No room/.test((await note.textContent()) ?? '');
     let taps = 0;
-    while (taps < 20) {
+    for (let round = 0; round < 40 && taps < 20; round++) {
       await expect.poll(idle, { timeout: 15_000 }).toBe(true);
-      if (await larger.isDisabled()) break;
+      if (await atLimit()) break;
+      if (await larger.isDisabled()) continue;
       await larger.scrollIntoViewIfNeeded();
       await larger.click();
       taps++;
     }
     expect(taps).toBeGreaterThan(0);
-    await expect.poll(() => larger.isDisabled(), { timeout: 15_000 }).toBe(true);
-    const note = card!.locator('.cw-area-note');
+    await expect.poll(atLimit, { timeout: 15_000 }).toBe(true);
     await expect
       .poll(async () => (await note.textContent()) ?? '', { timeout: 15_000 })
       .toMatch(/Largest area|No room/);

@@ -1,4 +1,7 @@
-/** The walking skeleton end to end: the served client calls /api/health through HttpClient and shows it. */
+/**
+ * The walking skeleton end to end: the served client calls /api/health through HttpClient and shows
+ * it, in plain words, to the head of coaching (the only one whose menu has the page).
+ */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import {
   DESKTOP,
@@ -8,6 +11,7 @@ import {
   seriousAccessibilityViolations,
   type TestBrowser,
 } from './support/browser';
+import { ClubSession, LEAD } from './support/club-session';
 
 describe('smoke: the served app on a closed network', () => {
   const baseUrl = inject('baseUrl');
@@ -24,18 +28,30 @@ describe('smoke: the served app on a closed network', () => {
     ['phone', PHONE],
     ['desktop', DESKTOP],
   ] as const) {
-    it(`shows server and database health on a ${label}`, async () => {
+    it(`tells the head of coaching Conewise is working, on a ${label}`, async () => {
       const page = await browser.newPage(viewport);
-      await page.goto(`${baseUrl}/status`);
+      const club = new ClubSession(baseUrl);
+      await club.open(page, await club.login(LEAD), '/status');
       const status = page.getByTestId('health-status');
       await status.waitFor();
-      await expect.poll(() => status.textContent()).toContain('database up');
+      await expect.poll(() => status.textContent()).toContain('Conewise is working normally.');
       expect(await page.title()).toContain('Conewise');
       await screenshot(page, 'status');
       expect(await seriousAccessibilityViolations(page)).toEqual([]);
       await page.close();
     });
   }
+
+  it('sends someone signed out from the status page to sign in', async () => {
+    const page = await browser.newPage(PHONE);
+    // The pages above signed in on this profile: sign out of it first.
+    await page.goto(`${baseUrl}/api/health`);
+    await page.evaluate(() => localStorage.clear());
+    await page.goto(`${baseUrl}/status`);
+    await page.waitForURL(/\/sign-in\?returnTo=%2Fstatus/);
+    expect(await page.getByTestId('health-status').count()).toBe(0);
+    await page.close();
+  });
 
   it('answers a deep link with the client (history fallback), not a 404', async () => {
     const response = await fetch(`${baseUrl}/teams/some-team/plans`);

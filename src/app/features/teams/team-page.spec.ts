@@ -48,7 +48,6 @@ function button(root: ParentNode, name: string): HTMLButtonElement {
   return found;
 }
 
-
 describe('TeamPage', () => {
   async function setUp(role: Role, userId = 'coach-1', team: TeamDto = TEAM) {
     TestBed.configureTestingModule({

@@ -27,7 +27,6 @@ const settle = async (fixture: { whenStable(): Promise<unknown>; detectChanges()
   fixture.detectChanges();
 };
 
-
 describe('CsvImport', () => {
   async function setUp() {
     TestBed.configureTestingModule({

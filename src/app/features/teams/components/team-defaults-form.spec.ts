@@ -61,7 +61,7 @@ describe('TeamDefaultsForm', () => {
   afterEach(() => localStorage.clear());
 
   it('shows a coach who reads yards the usual space in whole yards and saves it in metres', async () => {
-    const { fixture, root, saved, input, label } = await setUp({
+    const { root, saved, input, label } = await setUp({
       distance: 'yards',
       temperature: 'fahrenheit',
     });
