@@ -7,6 +7,8 @@
  * use and kept, one per locale and style.
  */
 
+import { wrapDay } from './session-clock';
+
 /** The locale used when none is given or the one given is not a valid tag. */
 export const FALLBACK_LOCALE = 'en-GB';
 
@@ -121,7 +123,7 @@ export function momentClockText(at: Date, locale: string, timeZone?: string): st
 
 /** Minutes since midnight as a clock time in the locale's style: "18:05" (en-GB, es-ES), "6:05 PM" (en-US). */
 export function clockText(minutes: number, locale: string): string {
-  const m = ((Math.round(minutes) % 1440) + 1440) % 1440;
+  const m = wrapDay(minutes);
   return spaced(
     clockFormat(locale, 'UTC').format(new Date(Date.UTC(2000, 0, 1, Math.floor(m / 60), m % 60))),
   );
