@@ -1,6 +1,8 @@
 import { defineConfig } from 'vitest/config';
 
-// Node-side suites. Client component tests (src/**/*.spec.ts) run through `ng test`.
+// Node-side suites. Client component tests (src/**/*.spec.ts) run through `ng test`. Code shared
+// with the client may mark words with `$localize`: its global is set up here as in the app (words
+// stay in English on this side).
 export default defineConfig({
   test: {
     projects: [
@@ -8,7 +10,7 @@ export default defineConfig({
         test: {
           name: 'engine',
           environment: 'node',
-          setupFiles: ['tests/support/fast-check-seed.ts'],
+          setupFiles: ['@angular/localize/init', 'tests/support/fast-check-seed.ts'],
           include: [
             'engine/**/*.spec.ts',
             'shared/**/*.spec.ts',
@@ -22,7 +24,7 @@ export default defineConfig({
         test: {
           name: 'api',
           environment: 'node',
-          setupFiles: ['tests/support/fast-check-seed.ts'],
+          setupFiles: ['@angular/localize/init', 'tests/support/fast-check-seed.ts'],
           include: ['server/**/*.spec.ts', 'tests/api/**/*.spec.ts'],
           globalSetup: ['tests/support/api-global-setup.ts'],
           // Property tests send hundreds of requests; a loaded CI machine needs the headroom.

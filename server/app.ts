@@ -1,5 +1,3 @@
-import { existsSync } from 'node:fs';
-import { join } from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import type { Logger } from 'pino';
@@ -7,6 +5,7 @@ import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from './config';
 import { createLogger, errorForLog } from './http/app-logger';
+import { localeBuilds } from './build/locale-builds';
 import { clientAssets, clientShell, compressAnswers, noStore } from './middleware/client-files';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { createRequireAuth } from './middleware/require-auth';
@@ -44,9 +43,9 @@ export function createApp(deps: AppDeps): Express {
   app.use(compressAnswers());
   // The built client's scripts, styles, fonts and images: before helmet and the request log (their
   // own few headers, see clientAssets). Pages and worker scripts come last, with helmet's headers.
-  const staticDir = deps.config.staticDir;
-  const client = staticDir && existsSync(join(staticDir, 'index.html')) ? staticDir : null;
-  if (client) app.use(clientAssets(client));
+  // One build per language (server/build/locale-builds.ts), or none when the client is not built.
+  const builds = localeBuilds(deps.config.staticDir);
+  if (builds.length) app.use(clientAssets(builds));
 
   app.use(
     helmet({
@@ -113,7 +112,7 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use('/api', apiNotFound);
 
-  if (client) app.use(clientShell(client));
+  if (builds.length) app.use(clientShell(builds));
 
   app.use(apiNotFound);
   app.use(errorHandler);

@@ -6,6 +6,7 @@ import {
   prefetchOfflineScreens,
   type ServiceWorkerManifest,
 } from './build/offline-groups';
+import { htmlUnderFolder, localeBuilds, manifestUnderFolder } from './build/locale-builds';
 import { completePreloadHints, serviceWorkerHash } from './build/preload-hints';
 import { precompressClient } from './build/precompress';
 import { CLIENT_DIST, PROJECT_ROOT } from './config';
@@ -29,11 +30,11 @@ function newestMtime(path: string): number {
   return newest;
 }
 
-/** Whether dist/conewise/browser/index.html is missing or older than any client source. */
+/** Whether a language's index.html (dist/conewise/browser/en-GB/…) is missing or older than any client source. */
 export function clientIsStale(): boolean {
-  const index = join(CLIENT_DIST, 'index.html');
-  if (!existsSync(index)) return true;
-  const built = statSync(index).mtimeMs;
+  const builds = localeBuilds(CLIENT_DIST);
+  if (!builds.length) return true;
+  const built = Math.min(...builds.map((b) => statSync(join(b.dir, 'index.html')).mtimeMs));
   const sources = [...CLIENT_SOURCES, ...CONFIG_FILES].map((p) => newestMtime(join(PROJECT_ROOT, p)));
   return Math.max(...sources) > built;
 }
@@ -49,23 +50,33 @@ export function buildClient(log: (m: string) => void = console.log): boolean {
     env: { ...process.env, NG_CLI_ANALYTICS: 'false' },
   });
   if (result.status !== 0) return false;
-  const manifestPath = join(CLIENT_DIST, 'ngsw.json');
-  const indexPath = join(CLIENT_DIST, 'index.html');
   const meta = JSON.parse(readFileSync(join(CLIENT_DIST, '..', 'stats.json'), 'utf8')) as BuildMetafile;
-  const { manifest, moved } = prefetchOfflineScreens(
-    JSON.parse(readFileSync(manifestPath, 'utf8')) as ServiceWorkerManifest,
-    meta,
-  );
-  const built = readFileSync(indexPath, 'utf8');
-  const hashes = manifest['hashTable'] as Record<string, string>;
-  if (hashes['/index.html'] !== serviceWorkerHash(built))
-    throw new Error('ngsw.json hashes index.html differently than expected: cannot update it');
-  const { html, added } = completePreloadHints(built, meta);
-  writeFileSync(indexPath, html);
-  hashes['/index.html'] = serviceWorkerHash(html);
-  writeFileSync(manifestPath, JSON.stringify(manifest, null, 2));
-  log(`[conewise] the service worker prefetches ${moved} chunks for the shell, the plan page and pitch-side`);
-  log(`[conewise] index.html preloads ${added.length} more chunks the first screen imports`);
+  const builds = localeBuilds(CLIENT_DIST);
+  if (!builds.length) throw new Error(`ng build wrote no index.html under ${CLIENT_DIST}`);
+  for (const build of builds) {
+    const manifestPath = join(build.dir, 'ngsw.json');
+    const indexPath = join(build.dir, 'index.html');
+    const { manifest, moved } = prefetchOfflineScreens(
+      JSON.parse(readFileSync(manifestPath, 'utf8')) as ServiceWorkerManifest,
+      meta,
+    );
+    const built = readFileSync(indexPath, 'utf8');
+    const hashes = manifest['hashTable'] as Record<string, string>;
+    if (hashes['/index.html'] !== serviceWorkerHash(built))
+      throw new Error('ngsw.json hashes index.html differently than expected: cannot update it');
+    const { html, added } = completePreloadHints(built, meta);
+    // Each language's scripts and styles are fetched from its own folder (server/build/locale-builds.ts).
+    const final = htmlUnderFolder(html, build.prefix);
+    const placed = manifestUnderFolder({ ...manifest, hashTable: hashes }, build.prefix);
+    placed.hashTable['/index.html'] = serviceWorkerHash(final);
+    writeFileSync(indexPath, final);
+    writeFileSync(manifestPath, JSON.stringify(placed, null, 2));
+    const name = build.prefix || 'the app';
+    log(
+      `[conewise] ${name}: the service worker prefetches ${moved} chunks for the shell, the plan page and pitch-side`,
+    );
+    log(`[conewise] ${name}: index.html preloads ${added.length} more chunks the first screen imports`);
+  }
   const { files, bytes, brotliBytes } = precompressClient();
   log(
     `[conewise] compressed ${files} built files: ${Math.round(bytes / 1024)} kB → ${Math.round(brotliBytes / 1024)} kB brotli`,

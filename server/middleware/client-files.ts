@@ -1,14 +1,37 @@
 import type { ServerResponse } from 'node:http';
 import { join } from 'node:path';
 import compression from 'compression';
-import express, { Router, type RequestHandler } from 'express';
+import express, { Router, type Request, type RequestHandler, type Response } from 'express';
 import expressStaticGzip from 'express-static-gzip';
+import { HASHED_FILE, type LocaleBuild, SOURCE_LANGUAGE } from '../build/locale-builds';
 
 /**
  * Files whose name carries a content hash (`chunk-PS7PETOW.js`, `media/…-OJ3A7MQ4.woff2`): a new
  * build gives new names, so a browser may keep these for a year without asking again.
  */
-const HASHED = /-[A-Z0-9]{8}\.(?:js|css|woff2?|svg|png|jpe?g|webp)$/;
+const HASHED = HASHED_FILE;
+
+/** The cookie that holds the language a person chose ("en", "es"); without it, the browser's. */
+export const LANGUAGE_COOKIE = 'cw-lang';
+
+/**
+ * The build for this reader: the language they chose (the cookie), else the first of their
+ * browser's languages (Accept-Language, negotiated by Express) that is built, else the source's.
+ */
+export function buildFor(req: Request, builds: readonly LocaleBuild[]): LocaleBuild {
+  const languages = builds.map((b) => b.language);
+  const chosen = /(?:^|;\s*)cw-lang=([a-z]{2,3})\b/.exec(req.headers.cookie ?? '')?.[1];
+  const language =
+    (chosen && languages.includes(chosen) ? chosen : null) ||
+    (req.headers['accept-language'] ? req.acceptsLanguages(...languages) : null) ||
+    SOURCE_LANGUAGE;
+  return builds.find((b) => b.language === language) ?? builds[0]!;
+}
+
+/** Files at the root (index.html, ngsw.json, the manifest) differ by language when there are several. */
+function varyByLanguage(res: Response, builds: readonly LocaleBuild[]): void {
+  if (builds.length > 1) res.vary('Cookie').vary('Accept-Language');
+}
 
 /** What a browser and any cache in between may keep. */
 export const CACHE_CONTROL = {
@@ -64,7 +87,7 @@ function fileHeaders(res: ServerResponse): void {
  * (server/build/precompress.ts) when the browser accepts one, by `express-static-gzip`; hashed
  * files cached for a year, the rest asked again. Worker scripts and pages pass on to clientShell.
  */
-export function clientAssets(staticDir: string): Router {
+export function clientAssets(builds: readonly LocaleBuild[]): Router {
   const router = Router();
   const files = {
     index: false,
@@ -74,48 +97,68 @@ export function clientAssets(staticDir: string): Router {
       res.setHeader('Cache-Control', cacheControlFor(path));
     },
   };
-  const assets = Router();
-  assets.use(
-    expressStaticGzip(staticDir, {
-      enableBrotli: true,
-      orderPreference: ['br', 'gz'],
-      index: false,
-      serveStatic: files,
-    }),
-  );
-  // express-static-gzip lists the compressed copies once, at start. A build made while the server
-  // runs replaces them: such files are then read as they are (and compressed per answer), the
-  // encoding announced for a copy that is gone taken back first.
-  assets.use((_req, res, next) => {
-    if (!res.headersSent) res.removeHeader('Content-Encoding');
-    next();
-  });
-  assets.use(express.static(staticDir, files));
+  const served = (dir: string) => {
+    const assets = Router();
+    assets.use(
+      expressStaticGzip(dir, {
+        enableBrotli: true,
+        orderPreference: ['br', 'gz'],
+        index: false,
+        serveStatic: files,
+      }),
+    );
+    // express-static-gzip lists the compressed copies once, at start. A build made while the server
+    // runs replaces them: such files are then read as they are (and compressed per answer), the
+    // encoding announced for a copy that is gone taken back first.
+    assets.use((_req, res, next) => {
+      if (!res.headersSent) res.removeHeader('Content-Encoding');
+      next();
+    });
+    assets.use(express.static(dir, files));
+    return assets;
+  };
+  // Each language's hashed files under its folder (/es/main-….js): the same name in every language.
+  for (const build of builds) if (build.prefix) router.use(build.prefix, served(build.dir));
+  // The rest (ngsw.json, the manifest, icons) from the reader's language.
+  const atRoot = new Map(builds.map((b) => [b, served(b.dir)]));
   router.use((req, res, next) => {
     if (/^\/api(\/|$)|^\/index\.html$/.test(req.path) || WORKER_SCRIPTS.test(req.path)) return next();
-    assets(req, res, next);
+    const build = buildFor(req, builds);
+    if (!HASHED.test(req.path)) varyByLanguage(res, builds);
+    atRoot.get(build)!(req, res, next);
   });
   return router;
 }
 
 /**
  * After helmet: the worker scripts, and the app shell (index.html) for any client route such as
- * /teams/42 (history fallback), both with the full security headers.
+ * /teams/42 (history fallback) in the reader's language, both with the full security headers.
  */
-export function clientShell(staticDir: string): Router {
+export function clientShell(builds: readonly LocaleBuild[]): Router {
   const router = Router();
-  const workers = express.static(staticDir, {
-    index: false,
-    cacheControl: false,
-    setHeaders: (res: ServerResponse) => res.setHeader('Cache-Control', CACHE_CONTROL.revalidate),
+  const workers = new Map(
+    builds.map((b) => [
+      b,
+      express.static(b.dir, {
+        index: false,
+        cacheControl: false,
+        setHeaders: (res: ServerResponse) => res.setHeader('Cache-Control', CACHE_CONTROL.revalidate),
+      }),
+    ]),
+  );
+  router.use((req, res, next) => {
+    if (!WORKER_SCRIPTS.test(req.path)) return next();
+    workers.get(buildFor(req, builds))!(req, res, next);
   });
-  router.use((req, res, next) => (WORKER_SCRIPTS.test(req.path) ? workers(req, res, next) : next()));
   router.get(/^(?!\/api(\/|$)).*/, (req, res, next) => {
     if (!req.accepts('html')) return next();
+    const build = buildFor(req, builds);
     res.setHeader('Cache-Control', CACHE_CONTROL.revalidate);
+    varyByLanguage(res, builds);
+    res.setHeader('Content-Language', build.language);
     // The helper's view of a plan is for one family's evening, not for search engines.
     if (req.path === '/helper') res.setHeader('X-Robots-Tag', 'noindex, nofollow');
-    res.sendFile(join(staticDir, 'index.html'));
+    res.sendFile(join(build.dir, 'index.html'));
   });
   return router;
 }

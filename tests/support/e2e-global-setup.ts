@@ -7,11 +7,10 @@
  *   inject('databaseUrl') the database, for tests that need to look underneath
  * Everything is stopped and the cluster removed afterwards, also when tests fail.
  */
-import { existsSync } from 'node:fs';
-import { join } from 'node:path';
 import { pino } from 'pino';
 import type { TestProject } from 'vitest/node';
 import { buildClientIfStale } from '../../server/client-build';
+import { localeBuilds } from '../../server/build/locale-builds';
 import { CLIENT_DIST, loadConfig } from '../../server/config';
 import { connectAndMigrate, createDataSource } from '../../server/data-source';
 import { startThrowawayCluster } from '../../server/db/pg-cluster';
@@ -35,7 +34,7 @@ export async function setup(project: TestProject): Promise<void> {
   try {
     // SKIP_CLIENT_BUILD=1 tests whatever build is there (handy while iterating on server code).
     const built = process.env['SKIP_CLIENT_BUILD'] === '1' || buildClientIfStale();
-    if (!built || !existsSync(join(CLIENT_DIST, 'index.html'))) {
+    if (!built || !localeBuilds(CLIENT_DIST).length) {
       throw new Error('The client build failed: run `npx ng build` to see why.');
     }
     const cluster = await startThrowawayCluster(() => undefined);
