@@ -15,7 +15,7 @@ import type {
 } from '../shared/types';
 import { GAME_LIKE_KINDS, LEVEL_LABELS } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
-import { gapBetween, insideSpace, overlaps, rectOf } from './geometry';
+import { insideSpace, overlaps, rectOf, roomBetween } from './geometry';
 import { kindModule } from './kinds/registry';
 import { keepBallFormat } from './kinds/keep-ball';
 import { effectiveParameters } from './planning/effective-parameters';
@@ -96,7 +96,7 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
             code: 'stations-overlap',
             message: `${label}: ${stationName(phase, s)} and ${stationName(phase, phase.stations[j])} overlap.`,
           });
-        } else if (gapBetween(rects[i], rects[j]) < Math.min(params.layout.bufferM, 0.5) - 1e-6) {
+        } else if (!roomBetween(rects[i], rects[j], params.layout.bufferM)) {
           notices.push({
             code: 'stations-too-close',
             message: `${label}: ${stationName(phase, s)} and ${stationName(phase, phase.stations[j])} have no room between them.`,

@@ -37,6 +37,15 @@ export function gapBetween(a: Rect, b: Rect): number {
   return Math.hypot(dx, dy);
 }
 
+/**
+ * Whether two stations have room between them: apart by the layout's buffer, up to half a metre
+ * (a tight space may pack closer than the buffer; never touching). The plan check and a station's
+ * area step both ask this, so an area the buttons allow is never one the check refuses.
+ */
+export function roomBetween(a: Rect, b: Rect, bufferM: number): boolean {
+  return !overlaps(a, b) && gapBetween(a, b) >= Math.min(bufferM, 0.5) - 1e-6;
+}
+
 export function round1(value: number): number {
   return Math.round(value * 10) / 10;
 }

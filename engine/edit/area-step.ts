@@ -5,7 +5,7 @@
  */
 import type { Area, Plan, RuleSetDocument, Station } from '../../shared/types';
 import { compileRuleSet } from '../club-rules/compile-rule-set';
-import { insideSpace, overlaps, rectOf } from '../geometry';
+import { insideSpace, rectOf, roomBetween } from '../geometry';
 import { boundedTable } from '../planning/areas';
 import { packStations } from '../planning/layout';
 import { steppedArea, widthSide } from '../planning/progressions';
@@ -51,7 +51,8 @@ export function stepArea(
   const rects = stations.map((s) => rectOf(s.position, s.area));
   const index = stations.findIndex((s) => s.id === stationId);
   const clash =
-    !insideSpace(rects[index], space) || rects.some((r, j) => j !== index && overlaps(r, rects[index]));
+    !insideSpace(rects[index], space) ||
+    rects.some((r, j) => j !== index && !roomBetween(r, rects[index], params.layout.bufferM));
   if (clash) {
     const placed = packStations(
       stations.map((s) => s.area),

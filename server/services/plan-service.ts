@@ -285,15 +285,18 @@ export function planColumns(plan: Plan): Partial<SessionPlan> {
   };
 }
 
-/** 422 listing each rule the plan would break. */
+/**
+ * 422 saying, in words, each rule the plan would break (the codes stay in `violations` for
+ * programs; they are not fields, so no field errors).
+ */
 export function violationsProblem(violations: engine.Violation[]): DetailedProblem {
-  const errors: FieldError[] = violations.map((v) => ({ field: `plan/${v.code}`, message: v.message }));
+  const said = [...new Set(violations.map((v) => v.message))].join(' ');
   return new DetailedProblem(
     422,
     'Plan breaks the club rules',
-    'The change would break the rules this plan was made with.',
+    `The change would break the rules this plan was made with: ${said}`,
     { violations },
-    errors,
+    undefined,
     '/problems/rule-violations',
   );
 }
