@@ -64,7 +64,7 @@ export class TeamInsightPage {
         labels: insight.sessions.map((s) => this.sessionLabel(s.date, s.createdAt)),
         datasets: [
           {
-            label: 'Players present',
+            label: $localize`Players present`,
             data: insight.sessions.map((s) => s.present),
             backgroundColor: insight.sessions.map((s) => (s.recorded ? PITCH : '#9cc7ad')),
             borderRadius: 4,
@@ -77,7 +77,7 @@ export class TeamInsightPage {
             beginAtZero: true,
             suggestedMax: insight.squadSize,
             ticks: { precision: 0 },
-            title: { display: true, text: 'players' },
+            title: { display: true, text: $localize`:Chart axis title:players` },
           },
         },
         plugins: { legend: { display: false } },
@@ -95,7 +95,7 @@ export class TeamInsightPage {
         labels: players.map((p) => p.displayName),
         datasets: [
           {
-            label: 'Estimated touches per session attended',
+            label: $localize`Estimated touches per session attended`,
             data: players.map((p) => Math.round(p.averageTouches)),
             backgroundColor: players.map((p) => (low.has(p.playerId) ? CONE : PITCH)),
             borderRadius: 4,
@@ -104,7 +104,12 @@ export class TeamInsightPage {
       },
       options: {
         indexAxis: 'y',
-        scales: { x: { beginAtZero: true, title: { display: true, text: 'touches (estimate)' } } },
+        scales: {
+          x: {
+            beginAtZero: true,
+            title: { display: true, text: $localize`:Chart axis title:touches (estimate)` },
+          },
+        },
         plugins: { legend: { display: false } },
       },
     };
@@ -127,6 +132,11 @@ export class TeamInsightPage {
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
     this.api.team(teamId).subscribe({ next: (team) => this.team.set(team), error: () => undefined });
+  }
+
+  /** A chart's words for screen readers: what it is, then what it shows. */
+  protected chartSummary(line: string): string {
+    return $localize`Bar chart. ${line}:summary:`;
   }
 
   /** "1 Dec 2026" in the browser's locale: the session's day, else the day the plan was made. */

@@ -123,7 +123,7 @@ export class LibraryPage {
             this.ruleSet.set(rules);
           } catch {
             this.error.set(
-              'The club’s activities cannot be read. Ask the head of coaching to check the club rules.',
+              $localize`The club’s activities cannot be read. Ask the head of coaching to check the club rules.`,
             );
           }
         },
@@ -179,6 +179,13 @@ export class LibraryPage {
       .map((t) => t.name);
   }
 
+  /** The name of a pin summary's unpin button, for screen readers. */
+  protected unpinLabel(title: string | null, teamName: string): string {
+    return title
+      ? $localize`Unpin ${title}:activity: from ${teamName}:teamName:`
+      : $localize`Unpin the activity no longer offered from ${teamName}:teamName:`;
+  }
+
   /** Adds the activity to the team's pins, or takes it out, and says so on the card. */
   protected changePin(activity: { id: string; title: string }, change: PinChange, at = activity.id): void {
     const team = this.teams().find((t) => t.id === change.teamId);
@@ -187,7 +194,7 @@ export class LibraryPage {
     const current = pinsOf(team).filter((id) => id === activity.id || this.offered().has(id));
     if (change.pinned && !current.includes(activity.id) && current.length >= MAX_PINS) {
       this.say(at, {
-        text: `${team.name} already has ${MAX_PINS} pinned activities, the most a plan takes. Unpin one first.`,
+        text: $localize`${team.name}:teamName: already has ${MAX_PINS}:most: pinned activities, the most a plan takes. Unpin one first.`,
         error: true,
       });
       return;
@@ -204,8 +211,8 @@ export class LibraryPage {
         );
         this.say(at, {
           text: change.pinned
-            ? `Pinned for ${team.name}: the next plan uses it where it fits the players, kit and space.`
-            : `Unpinned from ${team.name}.`,
+            ? $localize`Pinned for ${team.name}:teamName:: the next plan uses it where it fits the players, kit and space.`
+            : $localize`Unpinned from ${team.name}:teamName:.`,
           error: false,
         });
       },

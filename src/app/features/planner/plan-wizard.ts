@@ -98,17 +98,19 @@ const IN_UNITS: Record<string, 'distance' | 'temperature'> = {
 };
 
 /** The names the fields go by in messages, as on their labels. */
-const FIELD_LABELS: Record<string, string> = {
-  teamId: 'Team',
-  coaches: 'Adults',
-  balls: 'Balls',
-  cones: 'Cones',
-  bibs: 'Bibs',
-  goals: 'Goals',
-  width: 'Width',
-  length: 'Length',
-  minutes: 'Minutes',
-  temperature: 'Temperature',
+const FIELD_LABELS = {
+  teamId: $localize`:Field name in messages:Team`,
+  present: $localize`:Field name in messages:Players`,
+  guestName: $localize`:Field name in messages:Guest name`,
+  coaches: $localize`:Field name in messages, for the adults helping:Adults`,
+  balls: $localize`:Field name in messages:Balls`,
+  cones: $localize`:Field name in messages:Cones`,
+  bibs: $localize`:Field name in messages:Bibs`,
+  goals: $localize`:Field name in messages:Goals`,
+  width: $localize`:Field name in messages:Width`,
+  length: $localize`:Field name in messages:Length`,
+  minutes: $localize`:Field name in messages:Minutes`,
+  temperature: $localize`:Field name in messages:Temperature`,
 };
 
 /** Someone must be there to plan for: a ticked player or a guest. */
@@ -120,7 +122,7 @@ const somebodyHere: ValidatorFn = (group: AbstractControl): ValidationErrors | n
 /** An adult runs the session; the coach counts. */
 const someAdult: ValidatorFn = (control) =>
   typeof control.value === 'number' && control.value < 1
-    ? { message: 'Count at least one adult: you, the coach, count.' }
+    ? { message: $localize`Count at least one adult: you, the coach, count.` }
     : null;
 
 /** Who is here → kit and space → time and aim → the plan. */
@@ -190,6 +192,7 @@ export class PlanWizard {
   protected readonly focuses = FOCUSES;
   protected readonly focusLabels = FOCUS_LABELS;
   protected readonly message = controlMessage;
+  protected readonly fieldLabels = FIELD_LABELS;
   protected readonly narrow = mediaMatches('(max-width: 720px)');
   private readonly stepper = viewChild.required(MatStepper);
   private readonly host = inject<ElementRef<HTMLElement>>(ElementRef).nativeElement;
@@ -298,7 +301,7 @@ export class PlanWizard {
       }
     }
     if (player) {
-      this.guestName = await schemaCheck(player, { displayName: 'Guest name' });
+      this.guestName = await schemaCheck(player, { displayName: FIELD_LABELS.guestName });
       for (const guest of this.guests.controls)
         guest.get('name')!.updateValueAndValidity({ emitEvent: false });
     }
@@ -350,24 +353,26 @@ export class PlanWizard {
   /** What stops this step, said by its "Next" button: the first field's message and how many more. */
   private problemWords(step: Step): string {
     if (step === 'who' && this.form.controls.who.hasError('nobodyHere')) {
-      return 'Tick at least one player who is here, or add a guest.';
+      return $localize`Tick at least one player who is here, or add a guest.`;
     }
     const group = this.form.controls[step] as FormGroup;
     const messages: string[] = [];
     for (const [name, control] of Object.entries(group.controls)) {
       if (control instanceof FormArray) {
         control.controls.forEach((guest, i) => {
-          const text = this.message(guest.get('name'), `Guest ${i + 1} name`);
+          const text = this.message(guest.get('name'), $localize`Guest ${i + 1}:number: name`);
           if (text) messages.push(text);
         });
       } else {
-        const text = this.message(control, FIELD_LABELS[name] ?? name);
+        const text = this.message(control, (FIELD_LABELS as Record<string, string>)[name] ?? name);
         if (text) messages.push(text);
       }
     }
-    if (!messages.length) return 'Something on this step needs a look.';
+    if (!messages.length) return $localize`Something on this step needs a look.`;
     const more = messages.length - 1;
-    return more ? `${messages[0]} (and ${more} more on this step)` : messages[0];
+    return more
+      ? $localize`${messages[0]}:firstProblem: (and ${more}:count: more on this step)`
+      : messages[0];
   }
 
   /** Puts the cursor in the first field with a problem, so a phone scrolls to it. */
@@ -421,8 +426,11 @@ export class PlanWizard {
           focus: r.focus ?? [],
           kickOff: past.kickOff ?? '',
         });
-        const day = past.date ? dayWords(past.date, 'long-day') : 'an earlier day';
-        this.status.set(`Started from the plan of ${day}. Tick who is here today.`);
+        this.status.set(
+          past.date
+            ? $localize`Started from the plan of ${dayWords(past.date, 'long-day')}:day:. Tick who is here today.`
+            : $localize`Started from the plan of an earlier day. Tick who is here today.`,
+        );
       },
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
@@ -449,7 +457,7 @@ export class PlanWizard {
           .filter(Boolean)
           .join(' · ');
         this.fromSession.set(words);
-        this.status.set(`Planning from the schedule: ${words}.`);
+        this.status.set($localize`Planning from the schedule: ${words}:session:.`);
       },
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
@@ -479,7 +487,7 @@ export class PlanWizard {
   protected usePreset(preset: SpacePreset): void {
     this.form.controls.kit.patchValue({ width: preset.size.width, length: preset.size.length });
     this.status.set(
-      `Space set to ${preset.label}: ${preset.size.width} by ${preset.size.length} ${this.distanceName} (${preset.source}).`,
+      $localize`Space set to ${preset.label}:preset:: ${preset.size.width}:width: by ${preset.size.length}:length: ${this.distanceName}:unit: (${preset.source}:source:).`,
     );
   }
 
@@ -502,8 +510,9 @@ export class PlanWizard {
       // Open the step that needs a look, rather than leave every step folded.
       const step = team ? STEPS[firstBad] : 'who';
       this.stepper().selectedIndex = STEPS.indexOf(step);
-      this.stepProblem.set({ step, text: team ? this.problemWords(step) : 'Choose a team first.' });
-      this.error.set(team ? 'Some answers need a look: see the step that is open.' : 'Choose a team first.');
+      const chooseTeam = $localize`Choose a team first.`;
+      this.stepProblem.set({ step, text: team ? this.problemWords(step) : chooseTeam });
+      this.error.set(team ? $localize`Some answers need a look: see the step that is open.` : chooseTeam);
       this.focusFirstProblem();
       return;
     }
@@ -511,8 +520,9 @@ export class PlanWizard {
     const value: WizardValue = { ...raw.who, ...raw.kit, ...raw.time };
     const request = buildPlanRequest(team, this.roster(), value, this.units);
     if (request.players.length === 0) {
-      this.form.controls.who.controls.present.setErrors({ message: 'Tick at least one player who is here.' });
-      this.error.set('Tick at least one player who is here.');
+      const nobody = $localize`Tick at least one player who is here.`;
+      this.form.controls.who.controls.present.setErrors({ message: nobody });
+      this.error.set(nobody);
       return;
     }
     this.sending.set(true);
@@ -525,7 +535,7 @@ export class PlanWizard {
         return;
       }
     }
-    this.status.set('Making the plan…');
+    this.status.set($localize`Making the plan…`);
     let guestIds: string[];
     try {
       guestIds = await this.registerGuests(team.id, value.guests);
@@ -593,7 +603,7 @@ export class PlanWizard {
       ] = text;
     }
     const unmatched = applyFieldErrors(this.form, mapped);
-    this.error.set(['Some answers need a look.', ...unmatched].join(' '));
+    this.error.set([$localize`Some answers need a look.`, ...unmatched].join(' '));
     const firstBad = STEPS.findIndex((step) => this.form.controls[step].invalid);
     if (firstBad >= 0) this.stepper().selectedIndex = firstBad;
   }

@@ -14,12 +14,12 @@ import { timeWords } from '../../../core/locale/locale-format';
   imports: [RouterLink, MatButtonModule, ...ICONS],
   template: `
     <section class="cw-week-sessions" aria-labelledby="next-days">
-      <h2 id="next-days">Next 7 days</h2>
+      <h2 id="next-days" i18n>Next 7 days</h2>
       @if (error(); as text) {
         <p class="cw-form-error" role="alert">{{ text }}</p>
       }
       @if (loaded() && sessions().length === 0 && !error()) {
-        <p class="cw-muted" data-testid="week-empty">
+        <p class="cw-muted" data-testid="week-empty" i18n>
           Nothing on the schedule for the next 7 days. Training nights and matches added on a team's page show
           here.
         </p>
@@ -31,13 +31,17 @@ import { timeWords } from '../../../core/locale/locale-format';
               <span class="cw-when">{{ day(s.date) }} · {{ time(s.startTime) }}</span>
               <span class="cw-title">{{ s.teamName }}: {{ kindLabels[s.kind] }}</span>
               <span class="cw-muted">
-                {{ s.minutes }} min{{ s.kind === 'match' ? ' warm-up' : ''
-                }}{{ s.place ? ' · ' + s.place : '' }}
+                <ng-container i18n="How many minutes Conewise plans for the session">{s.kind, select,
+                  match {{{ s.minutes }} min warm-up}
+                  other {{{ s.minutes }} min}
+                }</ng-container
+                >{{ s.place ? ' · ' + s.place : '' }}
               </span>
             </div>
             @if (s.planId) {
               <a mat-stroked-button class="cw-go" [routerLink]="['/plans', s.planId]" data-testid="open-plan">
-                <mat-icon svgIcon="task_alt" aria-hidden="true" /> See the plan
+                <mat-icon svgIcon="task_alt" aria-hidden="true" />
+                <ng-container i18n="Link to the plan made for this session">See the plan</ng-container>
               </a>
             } @else if (canPlan()) {
               <a
@@ -46,11 +50,12 @@ import { timeWords } from '../../../core/locale/locale-format';
                 routerLink="/plan/new"
                 [queryParams]="{ session: s.id }"
                 data-testid="plan-it"
+                i18n="Link that makes a plan for this session"
               >
                 Plan it
               </a>
             } @else {
-              <span class="cw-muted cw-go">Not planned yet</span>
+              <span class="cw-muted cw-go" i18n>Not planned yet</span>
             }
           </li>
         }

@@ -32,37 +32,47 @@ export function summariseInsight(insight: TeamInsightDto): InsightSummary {
   const averagePresent = sessions
     ? Math.round((insight.sessions.reduce((sum, s) => sum + s.present, 0) / sessions) * 10) / 10
     : null;
+  const squad = insight.squadSize;
   const attendanceLine =
     averagePresent === null
-      ? 'No sessions yet.'
-      : `On average ${averagePresent} of ${insight.squadSize} players came to each of ${sessions} session${sessions === 1 ? '' : 's'}.`;
+      ? $localize`No sessions yet.`
+      : sessions === 1
+        ? $localize`On average ${averagePresent}:average: of ${squad}:squadSize: players came to each of 1 session.`
+        : $localize`On average ${averagePresent}:average: of ${squad}:squadSize: players came to each of ${sessions}:sessions: sessions.`;
 
   const attended = insight.players.filter((p) => p.sessionsAttended > 0 && p.totalTouches > 0);
   const typical = median(attended.map((p) => p.averageTouches));
   const fewestTouches = attended
     .filter((p) => p.averageTouches < typical * LOW_TOUCH_SHARE)
     .sort((a, b) => a.averageTouches - b.averageTouches);
+  const usual = Math.round(typical);
+  const fewest = fewestTouches
+    .map((p) => $localize`${p.displayName}:playerName: (about ${Math.round(p.averageTouches)}:touches:)`)
+    .join(', ');
   const touchesLine = !attended.length
-    ? 'No touches estimated yet.'
+    ? $localize`No touches estimated yet.`
     : fewestTouches.length
-      ? `Typical player: about ${Math.round(typical)} touches a session. Getting less of the ball: ${fewestTouches
-          .map((p) => `${p.displayName} (about ${Math.round(p.averageTouches)})`)
-          .join(', ')}.`
-      : `Typical player: about ${Math.round(typical)} touches a session; nobody is far below that.`;
+      ? $localize`Typical player: about ${usual}:touches: touches a session. Getting less of the ball: ${fewest}:players:.`
+      : $localize`Typical player: about ${usual}:touches: touches a session; nobody is far below that.`;
 
   const active = insight.players.filter((p) => p.active);
   const fewerThanHalf = active.filter((p) => p.sessionsAttended * 2 < sessions).length;
   const regularityLine = !sessions
     ? ''
     : fewerThanHalf === 0
-      ? 'Every player came to at least half of them.'
-      : `${fewerThanHalf} player${fewerThanHalf === 1 ? '' : 's'} came to fewer than half of them.`;
+      ? $localize`Every player came to at least half of them.`
+      : fewerThanHalf === 1
+        ? $localize`1 player came to fewer than half of them.`
+        : $localize`${fewerThanHalf}:count: players came to fewer than half of them.`;
   const late = insight.sessions.reduce((n, s) => n + (s.cameLate ?? 0), 0);
   const early = insight.sessions.reduce((n, s) => n + (s.leftEarly ?? 0), 0);
-  const parts = [
-    late ? `${late} late arrival${late === 1 ? '' : 's'}` : '',
-    early ? `${early} early leaver${early === 1 ? '' : 's'}` : '',
-  ].filter(Boolean);
-  const partLine = parts.length ? `Counted as came: ${parts.join(' and ')}.` : '';
+  const lateWords = late === 1 ? $localize`1 late arrival` : $localize`${late}:count: late arrivals`;
+  const earlyWords = early === 1 ? $localize`1 early leaver` : $localize`${early}:count: early leavers`;
+  const partLine =
+    late && early
+      ? $localize`Counted as came: ${lateWords}:lateArrivals: and ${earlyWords}:earlyLeavers:.`
+      : late || early
+        ? $localize`Counted as came: ${late ? lateWords : earlyWords}:lateArrivalsOrEarlyLeavers:.`
+        : '';
   return { sessions, averagePresent, attendanceLine, fewestTouches, touchesLine, regularityLine, partLine };
 }

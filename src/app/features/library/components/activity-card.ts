@@ -31,11 +31,19 @@ export interface CardMessage {
 }
 
 const BALL_WORDS = {
-  each: 'a ball each',
-  pair: 'one ball per pair',
-  group: 'a few balls per group',
-  none: 'no balls',
-} as const;
+  each: $localize`a ball each`,
+  pair: $localize`one ball per pair`,
+  group: $localize`a few balls per group`,
+  none: $localize`no balls`,
+};
+
+/** "1 cone", "7 cones" and so on: a whole phrase per number, so each language words its own plural. */
+const KIT_WORDS = {
+  cones: (n: number) => (n === 1 ? $localize`1 cone` : $localize`${n}:count: cones`),
+  balls: (n: number) => (n === 1 ? $localize`1 ball` : $localize`${n}:count: balls`),
+  bibs: (n: number) => (n === 1 ? $localize`1 bib` : $localize`${n}:count: bibs`),
+  goals: (n: number) => (n === 1 ? $localize`1 goal` : $localize`${n}:count: goals`),
+};
 
 /**
  * One activity of the library: what it is, its diagram as the engine would set it up, and on
@@ -121,19 +129,21 @@ export class ActivityCard {
   protected readonly setupText = computed(() => {
     const p = this.preview();
     if (!p) return '';
-    const format = p.station.format ? `, ${p.station.format}` : '';
-    return `Drawn for ${p.ageGroup} ${this.levelLabels[p.level].toLowerCase()}${format} · ${formatSize(this.units.distance(), p.station.area)}`;
+    const level = this.levelLabels[p.level].toLowerCase();
+    const size = formatSize(this.units.distance(), p.station.area);
+    return p.station.format
+      ? $localize`Drawn for ${p.ageGroup}:ageGroup: ${level}:level:, ${p.station.format}:format: · ${size}:size:`
+      : $localize`Drawn for ${p.ageGroup}:ageGroup: ${level}:level: · ${size}:size:`;
   });
   /** "7 cones · 3 balls · 1 goal": what the drawn group needs. */
   protected readonly kitText = computed(() => {
     const kit = this.preview()?.station.equipment;
     if (!kit) return '';
-    const count = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
     return [
-      count(kit.cones, 'cone'),
-      count(kit.balls, 'ball'),
-      ...(kit.bibs ? [count(kit.bibs, 'bib')] : []),
-      ...(kit.goals ? [count(kit.goals, 'goal')] : []),
+      KIT_WORDS.cones(kit.cones),
+      KIT_WORDS.balls(kit.balls),
+      ...(kit.bibs ? [KIT_WORDS.bibs(kit.bibs)] : []),
+      ...(kit.goals ? [KIT_WORDS.goals(kit.goals)] : []),
     ].join(' · ');
   });
   protected readonly pinnedCount = computed(() => this.pinTeams().filter((t) => t.pinned).length);

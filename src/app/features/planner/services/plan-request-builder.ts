@@ -42,7 +42,7 @@ export function buildPlanRequest(
       .map((p) => ({ id: p.id, name: p.displayName, ...(p.goalkeeper ? { goalkeeper: true } : {}) })),
     ...value.guests.map((g, i) => ({
       id: guestIds[i] ?? guestId(i),
-      name: g.name.trim() || `Guest ${i + 1}`,
+      name: g.name.trim() || $localize`Guest ${i + 1}:number:`,
       ...(g.goalkeeper ? { goalkeeper: true } : {}),
     })),
   ];
