@@ -5,6 +5,7 @@
  * the printed card and the share e-mail all read clock times from here. Pure TypeScript: minutes
  * since midnight in, minutes since midnight out; words and locale are locale-format.ts's job.
  */
+import '../i18n/localize';
 import type { PlanKind } from '../types/plan-request';
 
 /** Minutes in a day; clock times wrap past midnight. */
@@ -48,8 +49,8 @@ export function startOffset(kind: PlanKind, length: number): number {
 
 /** The name of the time a plan is given, as a field label: "Kick-off" or "Start time". */
 export const GIVEN_TIME_LABELS: Record<PlanKind, string> = {
-  'match-warm-up': 'Kick-off',
-  training: 'Start time',
+  'match-warm-up': $localize`Kick-off`,
+  training: $localize`Start time`,
 };
 
 /** The same in a sentence before the time: "kick-off 10:30", "start 18:00". */

@@ -2,39 +2,40 @@
  * Words and colours for the engine's activity codes, shared by the screens and the printed card
  * so both say and draw the same thing.
  */
+import '../i18n/localize';
 import type { ActivityKind, PositionRole } from './plan';
 import type { Focus } from './plan-request';
 
 export const ACTIVITY_KIND_LABELS: Record<ActivityKind, string> = {
-  'ball-mastery': 'Ball mastery',
-  'tag-game': 'Tag game',
-  duel: '1v1 duels',
-  'receiving-turning': 'Receive and turn',
-  'passing-pattern': 'Passing practice',
-  'passing-finishing': 'Passing and finishing',
-  'shooting-game': 'Shooting game',
-  'keep-ball': 'Keep-ball',
-  'directional-possession': 'Possession to a target',
-  transition: 'Transition game',
-  'small-sided-game': 'Small-sided game',
-  goalkeeping: 'Goalkeepers’ warm-up',
-  speed: 'Speed',
-  'movement-prep': 'Movement preparation',
-  'cool-down': 'Cool-down',
-  break: 'Drinks break',
+  'ball-mastery': $localize`:kind of activity:Ball mastery`,
+  'tag-game': $localize`:kind of activity:Tag game`,
+  duel: $localize`:kind of activity:1v1 duels`,
+  'receiving-turning': $localize`:kind of activity:Receive and turn`,
+  'passing-pattern': $localize`:kind of activity:Passing practice`,
+  'passing-finishing': $localize`:kind of activity:Passing and finishing`,
+  'shooting-game': $localize`:kind of activity:Shooting game`,
+  'keep-ball': $localize`:kind of activity:Keep-ball`,
+  'directional-possession': $localize`:kind of activity:Possession to a target`,
+  transition: $localize`:kind of activity:Transition game`,
+  'small-sided-game': $localize`:kind of activity:Small-sided game`,
+  goalkeeping: $localize`:kind of activity:Goalkeepers’ warm-up`,
+  speed: $localize`:kind of activity:Speed`,
+  'movement-prep': $localize`:kind of activity:Movement preparation`,
+  'cool-down': $localize`:kind of activity:Cool-down`,
+  break: $localize`:kind of activity:Drinks break`,
 };
 
 export const FOCUS_LABELS: Record<Focus, string> = {
-  passing: 'Passing',
-  receiving: 'Receiving',
-  dribbling: 'Dribbling',
-  '1v1': '1v1',
-  finishing: 'Finishing',
-  pressing: 'Pressing',
-  possession: 'Possession',
-  transition: 'Transition',
-  goalkeeping: 'Goalkeeping',
-  speed: 'Speed',
+  passing: $localize`:focus of a session:Passing`,
+  receiving: $localize`:focus of a session:Receiving`,
+  dribbling: $localize`:focus of a session:Dribbling`,
+  '1v1': $localize`:focus of a session:1v1`,
+  finishing: $localize`:focus of a session:Finishing`,
+  pressing: $localize`:focus of a session:Pressing`,
+  possession: $localize`:focus of a session:Possession`,
+  transition: $localize`:focus of a session:Transition`,
+  goalkeeping: $localize`:focus of a session:Goalkeeping`,
+  speed: $localize`:focus of a session:Speed`,
 };
 
 /**
@@ -42,15 +43,15 @@ export const FOCUS_LABELS: Record<Focus, string> = {
  * fill, WCAG 2.1 AA) and its legend words.
  */
 export const POSITION_STYLE: Record<PositionRole, { fill: string; text: string; label: string }> = {
-  player: { fill: '#0b4f56', text: '#ffffff', label: 'Player' },
-  attacker: { fill: '#21508f', text: '#ffffff', label: 'Attacker' },
-  defender: { fill: '#b8342a', text: '#ffffff', label: 'Defender (bib)' },
-  goalkeeper: { fill: '#f2c230', text: '#1b1b1b', label: 'Goalkeeper' },
-  'team-a': { fill: '#b84d17', text: '#ffffff', label: 'Side A (bibs)' },
-  'team-b': { fill: '#21508f', text: '#ffffff', label: 'Side B' },
-  server: { fill: '#6b3d98', text: '#ffffff', label: 'Server' },
-  neutral: { fill: '#5f6b66', text: '#ffffff', label: 'Neutral' },
-  coach: { fill: '#ffffff', text: '#1b1b1b', label: 'Coach' },
+  player: { fill: '#0b4f56', text: '#ffffff', label: $localize`:diagram legend:Player` },
+  attacker: { fill: '#21508f', text: '#ffffff', label: $localize`:diagram legend:Attacker` },
+  defender: { fill: '#b8342a', text: '#ffffff', label: $localize`:diagram legend:Defender (bib)` },
+  goalkeeper: { fill: '#f2c230', text: '#1b1b1b', label: $localize`:diagram legend:Goalkeeper` },
+  'team-a': { fill: '#b84d17', text: '#ffffff', label: $localize`:diagram legend:Side A (bibs)` },
+  'team-b': { fill: '#21508f', text: '#ffffff', label: $localize`:diagram legend:Side B` },
+  server: { fill: '#6b3d98', text: '#ffffff', label: $localize`:diagram legend:Server` },
+  neutral: { fill: '#5f6b66', text: '#ffffff', label: $localize`:diagram legend:Neutral` },
+  coach: { fill: '#ffffff', text: '#1b1b1b', label: $localize`:diagram legend:Coach` },
 };
 
 /** Colours of the kit in a diagram. */

@@ -5,9 +5,10 @@
  * password definition in shared/schemas says the same. Signing in takes any length, so passwords
  * chosen under an older, shorter minimum still work.
  */
+import '../i18n/localize';
 
 /** The fewest characters of a new password: OWASP ASVS 4.0 2.1.1 (at least 12 characters). */
 export const MIN_PASSWORD_LENGTH = 12;
 
 /** The hint under a new-password field. */
-export const PASSWORD_HINT = `At least ${MIN_PASSWORD_LENGTH} characters, and not one of the most common passwords.`;
+export const PASSWORD_HINT = $localize`At least ${MIN_PASSWORD_LENGTH}:count: characters, and not one of the most common passwords.`;

@@ -1,3 +1,4 @@
+import '../i18n/localize';
 import type { Role } from './api';
 
 /**
@@ -5,14 +6,14 @@ import type { Role } from './api';
  * the role code). The glossary in DEVELOPERS.md names these three.
  */
 export const ROLE_LABELS: Record<Role, string> = {
-  lead: 'Head of coaching',
-  coach: 'Coach',
-  assistant: 'Assistant',
+  lead: $localize`Head of coaching`,
+  coach: $localize`Coach`,
+  assistant: $localize`Assistant`,
 };
 
 /** The same words inside a sentence: "… to join as a coach". */
 export const ROLE_IN_A_SENTENCE: Record<Role, string> = {
-  lead: 'head of coaching',
-  coach: 'a coach',
-  assistant: 'an assistant',
+  lead: $localize`:role inside a sentence, e.g. join as …:head of coaching`,
+  coach: $localize`:role inside a sentence, e.g. join as …:a coach`,
+  assistant: $localize`:role inside a sentence, e.g. join as …:an assistant`,
 };

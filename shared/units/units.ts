@@ -2,6 +2,7 @@
  * The units a person reads and types distances and temperatures in. The engine, the API and the
  * database stay metric (metres, °C); these choices only change what people read and type.
  */
+import '../i18n/localize';
 
 export const DISTANCE_UNITS = ['metres', 'yards'] as const;
 export const TEMPERATURE_UNITS = ['celsius', 'fahrenheit'] as const;
@@ -33,10 +34,13 @@ export function effectiveUnits(club: Units, own: UnitOverride): Units {
 }
 
 /** The choices in words, for lists and selects. */
-export const DISTANCE_UNIT_WORDS: Record<DistanceUnit, string> = { metres: 'Metres', yards: 'Yards' };
+export const DISTANCE_UNIT_WORDS: Record<DistanceUnit, string> = {
+  metres: $localize`Metres`,
+  yards: $localize`Yards`,
+};
 export const TEMPERATURE_UNIT_WORDS: Record<TemperatureUnit, string> = {
-  celsius: 'Degrees Celsius (°C)',
-  fahrenheit: 'Degrees Fahrenheit (°F)',
+  celsius: $localize`Degrees Celsius (°C)`,
+  fahrenheit: $localize`Degrees Fahrenheit (°F)`,
 };
 
 export function isDistanceUnit(value: unknown): value is DistanceUnit {

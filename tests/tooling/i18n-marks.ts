@@ -92,18 +92,19 @@ function isReadableAttribute(name: string, value: string): boolean {
 }
 
 /** String literals a binding shows as they are: the whole value, a branch of `?:`, a part of `+`. */
-function shownLiterals(ast: AST, out: string[] = []): string[] {
-  if (ast instanceof ASTWithSource) return shownLiterals(ast.ast, out);
+function shownLiterals(ast: AST, out: string[] = [], branch = false): string[] {
+  if (ast instanceof ASTWithSource) return shownLiterals(ast.ast, out, branch);
   if (ast instanceof Interpolation) {
     for (const e of ast.expressions) shownLiterals(e, out);
   } else if (ast instanceof LiteralPrimitive) {
-    if (typeof ast.value === 'string' && WORDS.test(ast.value)) out.push(ast.value);
+    // A branch may add a single letter to a word: `bib{{ n === 1 ? '' : 's' }}`.
+    if (typeof ast.value === 'string' && (branch ? /[A-Za-z]/ : WORDS).test(ast.value)) out.push(ast.value);
   } else if (ast instanceof Conditional) {
-    shownLiterals(ast.trueExp, out);
-    shownLiterals(ast.falseExp, out);
+    shownLiterals(ast.trueExp, out, true);
+    shownLiterals(ast.falseExp, out, true);
   } else if (ast instanceof Binary && ast.operation === '+') {
-    shownLiterals(ast.left, out);
-    shownLiterals(ast.right, out);
+    shownLiterals(ast.left, out, branch);
+    shownLiterals(ast.right, out, branch);
   }
   return out;
 }
