@@ -128,14 +128,30 @@ export class PitchSidePage {
   });
   /** "Start session" before anything ran, "Start phase" after a jump to a phase's start, else "Resume". */
   protected readonly startLabel = computed(() => {
-    if (!this.started()) return 'Start session';
+    if (!this.started()) return $localize`:Starts the session clock (verb):Start session`;
     const phase = this.currentPhase();
     const atPhaseStart = phase && Math.abs(this.reading().elapsedSeconds - phase.startMinute * 60) < 1;
-    return atPhaseStart ? 'Start phase' : 'Resume';
+    return atPhaseStart
+      ? $localize`:Starts the clock at the phase chosen (verb):Start phase`
+      : $localize`:Starts the paused clock again (verb):Resume`;
   });
+  /** What the countdown is, for screen readers. */
+  protected readonly countdownLabel = computed(() =>
+    this.onBreak() ? $localize`Time left in the drinks break` : $localize`Time left in this phase`,
+  );
   protected readonly pendingCount = computed(
     () => this.queue.pending().filter((action) => action.planId === this.planId()).length,
   );
+  /** "Offline", "Syncing · 2 queued": the badge shown while changes wait for the network. */
+  protected readonly badgeWords = computed(() => {
+    const state = this.queue.online()
+      ? $localize`:Changes are being sent to the server:Syncing`
+      : $localize`:The phone has no network:Offline`;
+    const count = this.pendingCount();
+    return count > 0
+      ? $localize`:Network state, then how many changes wait to be sent:${state}:state: · ${count}:count: queued`
+      : state;
+  });
 
   /** Names by player id: the roster first, then whatever the plan carries. */
   protected readonly names = computed(() => {
@@ -156,7 +172,9 @@ export class PitchSidePage {
     return plan ? leftEarlyIds(plan) : new Set<string>();
   });
   protected readonly leftEarly = computed(() =>
-    [...this.leftEarlyIds()].map((id) => this.names()[id] ?? 'A player').sort((a, b) => a.localeCompare(b)),
+    [...this.leftEarlyIds()]
+      .map((id) => this.names()[id] ?? $localize`:A player whose name is not known:A player`)
+      .sort((a, b) => a.localeCompare(b)),
   );
   protected readonly absent = computed(() => {
     const here = new Set((this.plan()?.request.players ?? []).map((player) => player.id));
@@ -177,19 +195,19 @@ export class PitchSidePage {
         const phase = phases[move.phaseIndex];
         const stationLabel = (id: string | null) => {
           const index = phase?.stations.findIndex((s) => s.id === id) ?? -1;
-          return index >= 0 ? `station ${index + 1} (${phase.stations[index].title})` : 'another station';
+          return index >= 0
+            ? $localize`:A station a player moves to, by number and title:station ${index + 1}:stationNumber: (${phase.stations[index].title}:stationTitle:)`
+            : $localize`:Where a player moves to:another station`;
         };
         const who = names[move.playerId] ?? move.playerId;
-        const where =
+        const when = phase?.name ?? $localize`:A later phase whose name is not known:Later`;
+        const text =
           move.toStationId === null
-            ? 'leaves'
+            ? $localize`:In a phase, a player leaves:${when}:phaseName:: ${who}:playerName: leaves`
             : move.fromStationId === null
-              ? `joins ${stationLabel(move.toStationId)}`
-              : `moves to ${stationLabel(move.toStationId)}`;
-        return {
-          key: `${move.phaseIndex}-${move.playerId}`,
-          text: `${phase?.name ?? 'Later'}: ${who} ${where}`,
-        };
+              ? $localize`:In a phase, a player joins a station:${when}:phaseName:: ${who}:playerName: joins ${stationLabel(move.toStationId)}:station:`
+              : $localize`:In a phase, a player moves to another station:${when}:phaseName:: ${who}:playerName: moves to ${stationLabel(move.toStationId)}:station:`;
+        return { key: `${move.phaseIndex}-${move.playerId}`, text };
       });
   });
   /** Players who just joined a station of the current phase. */
@@ -225,7 +243,11 @@ export class PitchSidePage {
       if (running && lastPhase !== -1 && marker !== lastPhase) {
         this.phaseSignal.play();
         const phase = untracked(this.currentPhase);
-        this.announcement.set(finished ? 'Session finished.' : `Now: ${phase?.name ?? ''}.`);
+        this.announcement.set(
+          finished
+            ? $localize`:Read out when the session ends:Session finished.`
+            : $localize`:Read out when a phase begins:Now: ${phase?.name ?? ''}:phaseName:.`,
+        );
       }
       lastPhase = running ? marker : -1;
     });
@@ -270,7 +292,7 @@ export class PitchSidePage {
     if (!phase) return;
     this.phaseSignal.unlock();
     this.clock.update((state) => jumpToMinute(state, phase.startMinute, Date.now()));
-    this.announcement.set(`Now: ${phase.name}.`);
+    this.announcement.set($localize`:Read out when a phase begins:Now: ${phase.name}:phaseName:.`);
   }
 
   protected arrivalsOf(stationId: string): string[] {
@@ -320,7 +342,9 @@ export class PitchSidePage {
           if (refused) {
             const why = this.units.text(refused);
             this.refusals.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: why }));
-            this.announcement.set(`The area stays: ${why}`);
+            this.announcement.set(
+              $localize`:A station's area could not change, then why:The area stays: ${why}:reason:`,
+            );
           }
         })
         .catch(() => undefined);
@@ -335,9 +359,21 @@ export class PitchSidePage {
     });
     this.announcement.set(
       verdict === 'right'
-        ? 'Noted: about right.'
-        : `Noted: ${verdict.replace('-', ' ')}. The station steps ${verdict === 'too-easy' ? 'harder' : 'easier'}.`,
+        ? $localize`:Read out after the coach says a station is about right:Noted: about right.`
+        : verdict === 'too-easy'
+          ? $localize`:Read out after the coach says a station is too easy:Noted: too easy. The station steps harder.`
+          : $localize`:Read out after the coach says a station is too hard:Noted: too hard. The station steps easier.`,
     );
+  }
+
+  /** A present player's button, for screen readers. */
+  protected leavesLabel(name: string): string {
+    return $localize`:Button that marks a player as leaving early:${name}:playerName: leaves early`;
+  }
+
+  /** A missing player's button, for screen readers. */
+  protected arrivesLabel(name: string): string {
+    return $localize`:Button that marks a late player as arrived:${name}:playerName: arrives`;
   }
 
   /** One tap: a late arrival joins. */
@@ -367,8 +403,15 @@ export class PitchSidePage {
         }
       })
       .catch(() => undefined);
-    const who = change.add?.[0]?.name ?? this.names()[change.remove?.[0] ?? ''] ?? 'A player';
-    this.announcement.set(`${who} ${change.add ? 'joins' : 'leaves'}. Re-planning the rest of the session.`);
+    const who =
+      change.add?.[0]?.name ??
+      this.names()[change.remove?.[0] ?? ''] ??
+      $localize`:A player whose name is not known:A player`;
+    this.announcement.set(
+      change.add
+        ? $localize`:Read out when a player arrives:${who}:playerName: joins. Re-planning the rest of the session.`
+        : $localize`:Read out when a player leaves early:${who}:playerName: leaves. Re-planning the rest of the session.`,
+    );
     void this.queue.enqueue({
       kind: 'replan',
       clientId: newClientId(),

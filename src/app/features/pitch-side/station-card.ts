@@ -11,9 +11,9 @@ import { readableOn, ROLE_TAGS, startRoles } from '../plans/services/plan-words'
 
 /** The three verdicts a coach can give a station, with their labels and icons. */
 export const VERDICTS: { value: StationVerdict; label: string; icon: IconName }[] = [
-  { value: 'too-easy', label: 'Too easy', icon: 'trending_up' },
-  { value: 'right', label: 'About right', icon: 'thumb_up' },
-  { value: 'too-hard', label: 'Too hard', icon: 'trending_down' },
+  { value: 'too-easy', label: $localize`:How a station is going:Too easy`, icon: 'trending_up' },
+  { value: 'right', label: $localize`:How a station is going:About right`, icon: 'thumb_up' },
+  { value: 'too-hard', label: $localize`:How a station is going:Too hard`, icon: 'trending_down' },
 ];
 
 /**
@@ -72,7 +72,25 @@ export class StationCard {
     });
   });
 
-  protected verdictLabel(value: string | null): string {
-    return VERDICTS.find((v) => v.value === value)?.label ?? '';
+  /** The verdict buttons' group, for screen readers. */
+  protected readonly verdictsLabel = computed(
+    () =>
+      $localize`:The buttons that say how a station is going:How is station ${this.number()}:stationNumber: going?`,
+  );
+
+  /** "12 players", "12 players + a coach": who plays at the station. */
+  protected readonly playersWords = computed(() => {
+    const count = this.station().playerIds.length;
+    return this.station().coachJoins
+      ? $localize`:The players at a station, and a coach who joins them:${count}:count: players + a coach`
+      : $localize`:The players at a station:${count}:count: players`;
+  });
+
+  /** "Too easy noted · saved": the verdict given, and whether it has reached the server. */
+  protected statusWords(value: string | null): string {
+    const label = VERDICTS.find((v) => v.value === value)?.label ?? '';
+    return this.verdictQueued()
+      ? $localize`:The verdict given, still waiting to be sent:${label}:verdict: noted · waiting for the network`
+      : $localize`:The verdict given, saved:${label}:verdict: noted · saved`;
   }
 }

@@ -75,6 +75,16 @@ export class PlanHistoryPage {
     this.pageIndex.set(event.pageIndex);
   }
 
+  /** The "Use today" link of one plan, for screen readers. */
+  protected reuseLabel(plan: PlanSummaryDto): string {
+    return $localize`:Link that makes today's plan from a past one, named by its day:Use the plan of ${dayWords(plan.date)}:day: again today`;
+  }
+
+  /** The delete button of one plan, for screen readers. */
+  protected deleteLabel(plan: PlanSummaryDto): string {
+    return $localize`:Button that deletes a past plan, named by its day:Delete the plan of ${dayWords(plan.date)}:day:`;
+  }
+
   /** Asks, deletes, then shows the page again without the plan and says what went. */
   protected deletePlan(plan: PlanSummaryDto): void {
     this.dialog
@@ -86,7 +96,11 @@ export class PlanHistoryPage {
       .afterClosed()
       .subscribe((deleted) => {
         if (!deleted) return;
-        this.snackBar.open(`${planName(plan)} deleted.`, undefined, { duration: 5000, politeness: 'polite' });
+        this.snackBar.open(
+          $localize`:A plan deleted, named by kind, day and team:${planName(plan)}:plan: deleted.`,
+          undefined,
+          { duration: 5000, politeness: 'polite' },
+        );
         // The last plan of a page gone: show the page before it.
         if (this.plans().length === 1 && this.pageIndex() > 0) this.pageIndex.update((i) => i - 1);
         else this.load(this.teamId(), this.pageIndex());

@@ -29,7 +29,6 @@ import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { dayWords, timeWords } from '../../core/locale/locale-format';
-import { GIVEN_TIME_IN_A_SENTENCE } from '../../../../shared/time/session-clock';
 import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
 import { EditAnswer } from './components/edit-answer';
 import { PhaseTimeline } from './components/phase-timeline';
@@ -91,9 +90,6 @@ export class PlanPage {
 
   protected readonly kindLabels = KIND_LABELS;
   protected readonly focusLabels = FOCUS_LABELS;
-  protected readonly day = dayWords;
-  protected readonly time = timeWords;
-  protected readonly givenTime = GIVEN_TIME_IN_A_SENTENCE;
   protected readonly isBreak = isBreak;
   protected readonly breakWords = breakWords;
   protected readonly canEdit = computed(() => this.auth.hasRole('lead', 'coach'));
@@ -131,6 +127,18 @@ export class PlanPage {
   protected readonly areaButtonsShown = signal(false);
 
   protected readonly totalPlayers = computed(() => this.session.plan()?.request.players.length ?? 0);
+
+  /** The day under the title, with the kick-off or start time when the plan has one. */
+  protected readonly when = computed(() => {
+    const saved = this.session.saved();
+    if (!saved) return '';
+    const day = dayWords(saved.date);
+    if (!saved.kickOff) return day;
+    const time = timeWords(saved.kickOff);
+    return saved.kind === 'match-warm-up'
+      ? $localize`:The day of a match warm-up and its kick-off time:${day}:day:, kick-off ${time}:time:`
+      : $localize`:The day of a training session and its start time:${day}:day:, start ${time}:time:`;
+  });
 
   constructor() {
     const handover = inject(PlanHandover);
@@ -179,12 +187,16 @@ export class PlanPage {
   }
 
   protected movePlayer(phaseIndex: number, move: PlayerMoveRequest, phase: Phase, fromCard: string): void {
-    const name = this.session.names().get(move.playerId) ?? 'Player';
+    const name =
+      this.session.names().get(move.playerId) ?? $localize`:A player whose name is not known:Player`;
     const index = phase.stations.findIndex((s) => s.id === move.toStationId);
-    const to = index >= 0 ? `station ${index + 1}, ${phase.stations[index].title}` : 'another station';
+    const to =
+      index >= 0
+        ? $localize`:Where a player moved to:station ${index + 1}:stationNumber:, ${phase.stations[index].title}:stationTitle:`
+        : $localize`:Where a player moved to:another station`;
     void this.session.edit(
       { type: 'move-player', playerId: move.playerId, toStationId: move.toStationId, phaseIndex },
-      `${name} moved to ${to} in ${phase.name}`,
+      $localize`:A player moved to another station in a phase:${name}:playerName: moved to ${to}:station: in ${phase.name}:phaseName:`,
       `move:${phaseIndex}:${fromCard}`,
     );
   }
@@ -192,7 +204,9 @@ export class PlanPage {
   protected resize(phaseIndex: number, stationId: string, step: 'larger' | 'smaller', title: string): void {
     void this.session.edit(
       { type: 'resize-area', stationId, phaseIndex, step },
-      `${title}: area made ${step}`,
+      step === 'larger'
+        ? $localize`:A station's area made larger:${title}:stationTitle:: area made larger`
+        : $localize`:A station's area made smaller:${title}:stationTitle:: area made smaller`,
       `area:${phaseIndex}:${stationId}`,
     );
   }
@@ -218,18 +232,25 @@ export class PlanPage {
     );
   }
 
+  /** What a swap menu option says under its title: its summary, or why it does not fit this plan. */
+  protected optionSummary(activity: ActivityOption): string {
+    return activity.allowed
+      ? activity.summary
+      : $localize`:A swap menu option the plan cannot take, then why:Not for this plan: ${activity.reason}:reason:`;
+  }
+
   protected swap(phaseIndex: number, activity: ActivityOption): void {
     if (!activity.allowed) return;
     void this.session.edit(
       { type: 'swap-activity', phaseIndex, activityId: activity.id },
-      `Phase ${phaseIndex + 1} swapped to ${activity.title}`,
+      $localize`:A phase given another activity:Phase ${phaseIndex + 1}:phaseNumber: swapped to ${activity.title}:activityTitle:`,
       `swap:${phaseIndex}`,
     );
   }
 
   protected regenerate(): void {
     const seed = Math.random().toString(36).slice(2, 10);
-    void this.session.edit({ type: 'regenerate', seed }, 'New groups and layout made');
+    void this.session.edit({ type: 'regenerate', seed }, $localize`New groups and layout made`);
   }
 
   protected choosePaper(paper: CardPaper): void {
@@ -268,7 +289,11 @@ export class PlanPage {
       .afterClosed()
       .subscribe((queued) => {
         if (queued) {
-          this.snackBar.open(`${queued} e-mail${queued === 1 ? '' : 's'} queued for sending.`, undefined, {
+          const words =
+            queued === 1
+              ? $localize`1 e-mail queued for sending.`
+              : $localize`${queued}:count: e-mails queued for sending.`;
+          this.snackBar.open(words, undefined, {
             duration: 4000,
             politeness: 'polite',
           });
@@ -289,10 +314,14 @@ export class PlanPage {
       .afterClosed()
       .subscribe((deleted) => {
         if (!deleted) return;
-        this.snackBar.open(`${planName(saved)} deleted.`, undefined, {
-          duration: 5000,
-          politeness: 'polite',
-        });
+        this.snackBar.open(
+          $localize`:A plan deleted, named by kind, day and team:${planName(saved)}:plan: deleted.`,
+          undefined,
+          {
+            duration: 5000,
+            politeness: 'polite',
+          },
+        );
         void this.router.navigate(['/teams', saved.teamId, 'plans']);
       });
   }

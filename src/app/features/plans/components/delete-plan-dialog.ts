@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/material/dialog';
 import type { PlanSummaryDto } from '../../../../../shared/types';
@@ -9,8 +9,11 @@ import { dayWords } from '../../../core/locale/locale-format';
 
 /** "Training session of Tue 1 Dec for U10 Kestrels": how a plan is named when it is deleted. */
 export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'>): string {
-  const day = plan.date ? ` of ${dayWords(plan.date)}` : '';
-  return `${KIND_LABELS[plan.kind]}${day} for ${plan.teamName}`;
+  const kind = KIND_LABELS[plan.kind];
+  if (!plan.date)
+    return $localize`:A plan named by its kind and team:${kind}:kind: for ${plan.teamName}:teamName:`;
+  const day = dayWords(plan.date);
+  return $localize`:A plan named by its kind, day and team:${kind}:kind: of ${day}:day: for ${plan.teamName}:teamName:`;
 }
 
 /**
@@ -21,23 +24,23 @@ export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'
   selector: 'cw-delete-plan-dialog',
   imports: [MatDialogModule, MatButtonModule],
   template: `
-    <h2 mat-dialog-title>Delete this plan?</h2>
+    <h2 mat-dialog-title i18n>Delete this plan?</h2>
     <mat-dialog-content>
       <p>
         <strong>{{ name }}</strong>
       </p>
       <ul class="cw-consequences">
-        <li>The plan goes for everyone in the club, with its stations and groups.</li>
-        <li>Who came and how each station went in this session are deleted with it.</li>
-        <li>The players stay on the team.</li>
+        <li i18n>The plan goes for everyone in the club, with its stations and groups.</li>
+        <li i18n>Who came and how each station went in this session are deleted with it.</li>
+        <li i18n>The players stay on the team.</li>
       </ul>
-      <p>You can't undo this.</p>
+      <p i18n>You can't undo this.</p>
       @if (error(); as text) {
         <p class="cw-form-error" role="alert">{{ text }}</p>
       }
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" mat-dialog-close cdkFocusInitial>Keep plan</button>
+      <button mat-button type="button" mat-dialog-close cdkFocusInitial i18n>Keep plan</button>
       <button
         mat-flat-button
         type="button"
@@ -46,7 +49,7 @@ export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'
         data-testid="confirm-delete-plan"
         (click)="deletePlan()"
       >
-        {{ busy() ? 'Deleting…' : 'Delete plan' }}
+        {{ deleteLabel() }}
       </button>
     </mat-dialog-actions>
   `,
@@ -59,6 +62,9 @@ export class DeletePlanDialog {
   private readonly plan = inject<PlanSummaryDto>(MAT_DIALOG_DATA);
   protected readonly name = planName(this.plan);
   protected readonly busy = signal(false);
+  protected readonly deleteLabel = computed(() =>
+    this.busy() ? $localize`:While a plan is being deleted:Deleting…` : $localize`Delete plan`,
+  );
   protected readonly error = signal<string | null>(null);
 
   protected deletePlan(): void {

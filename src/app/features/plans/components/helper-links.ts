@@ -16,8 +16,8 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
   imports: [MatButtonModule, ...ICONS],
   template: `
     <section class="cw-helper-links" aria-labelledby="helper-links-heading" data-testid="helper-links">
-      <h3 id="helper-links-heading">A link for a parent helper</h3>
-      <p class="cw-muted">
+      <h3 id="helper-links-heading" i18n>A link for a parent helper</h3>
+      <p class="cw-muted" i18n>
         Opens the plan on a phone without an account: stations, groups with first names only, areas, diagrams
         and timings. It works until the end of the day after the session.
       </p>
@@ -28,49 +28,54 @@ import { madeWords, untilWords } from '../../../core/time/link-expiry';
         [disabled]="making()"
         data-testid="helper-link-make"
       >
-        <mat-icon svgIcon="link" aria-hidden="true" /> Make a helper link
+        <mat-icon svgIcon="link" aria-hidden="true" />
+        <ng-container i18n="Button that makes a read-only link to the plan for a parent helper"
+          >Make a helper link</ng-container
+        >
       </button>
       @if (made(); as link) {
         <div class="cw-new-link">
           <input
             readonly
             [value]="link.url"
+            i18n-aria-label
             aria-label="Helper link"
             (focus)="selectAll($event)"
             data-testid="helper-link-url"
           />
           <button mat-flat-button type="button" (click)="copy(link.url)" data-testid="helper-link-copy">
-            <mat-icon svgIcon="content_copy" aria-hidden="true" /> Copy
+            <mat-icon svgIcon="content_copy" aria-hidden="true" />
+            <ng-container i18n="Button that copies the link (verb)">Copy</ng-container>
           </button>
         </div>
-        <p class="cw-muted" role="status">
-          {{ copied() ? 'Copied. ' : '' }}Works until {{ until(link.expiresAt) }}. Send it only to the helper:
-          anyone with the link sees the plan.
+        <p
+          class="cw-muted"
+          role="status"
+          i18n="Under a new helper link; the first sentence shows once the link is copied"
+        >
+          @if (copied()) {
+            Copied.
+          }
+          Works until {{ until(link.expiresAt) }}. Send it only to the helper: anyone with the link sees the
+          plan.
         </p>
       }
       @if (error(); as text) {
         <p class="cw-form-error" role="alert">{{ text }}</p>
       }
       @if (links().length) {
-        <h4>Links that work now</h4>
+        <h4 i18n>Links that work now</h4>
         <ul class="cw-link-list" data-testid="helper-link-list">
           @for (link of links(); track link.id) {
             <li data-testid="helper-link-item">
-              <span>
-                Made {{ madeAt(link.createdAt) }}{{ link.createdByName ? ' by ' + link.createdByName : '' }}
-                {{
-                  link.emailedTo
-                    ? '· e-mailed to ' + link.emailedTo + (link.emailedTo === 1 ? ' person' : ' people')
-                    : ''
-                }}
-                · until {{ until(link.expiresAt) }}
-              </span>
+              <span>{{ linkLine(link) }}</span>
               <button
                 mat-button
                 type="button"
                 (click)="revoke(link)"
                 [disabled]="stopping() === link.id"
                 data-testid="helper-link-revoke"
+                i18n="Button that stops a helper link from working"
               >
                 Stop link
               </button>
@@ -145,7 +150,6 @@ export class HelperLinks {
   protected readonly stopping = signal<string | null>(null);
   protected readonly error = signal<string | null>(null);
   protected readonly until = untilWords;
-  protected readonly madeAt = madeWords;
 
   constructor() {
     effect(() => this.load(this.planId()));
@@ -183,6 +187,25 @@ export class HelperLinks {
         this.error.set(problemMessage(error));
       },
     });
+  }
+
+  /** "Made Tue 1 Dec by Rhea Coach · e-mailed to 2 people · until Wed 2 Dec": one link in the list. */
+  protected linkLine(link: HelperLinkDto): string {
+    const made = madeWords(link.createdAt);
+    const parts = [
+      link.createdByName
+        ? $localize`:When a helper link was made and by whom:Made ${made}:madeAt: by ${link.createdByName}:madeBy:`
+        : $localize`:When a helper link was made:Made ${made}:madeAt:`,
+    ];
+    if (link.emailedTo) {
+      parts.push(
+        link.emailedTo === 1
+          ? $localize`:How many people a helper link was e-mailed to:e-mailed to 1 person`
+          : $localize`:How many people a helper link was e-mailed to:e-mailed to ${link.emailedTo}:count: people`,
+      );
+    }
+    parts.push($localize`:Until when a helper link works:until ${untilWords(link.expiresAt)}:until:`);
+    return parts.join(' · ');
   }
 
   protected copy(url: string): void {

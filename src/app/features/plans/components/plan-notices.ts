@@ -20,7 +20,7 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
           <li>
             {{ notice.message }}
             @if (notice.source) {
-              <span class="cw-source">Source: {{ notice.source }}</span>
+              <span class="cw-source" i18n="The guidance a notice rests on">Source: {{ notice.source }}</span>
             }
           </li>
         }
@@ -29,9 +29,9 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
     <ng-template #ratio>
       @if (supervision(); as s) {
         @if (s.recommendedAdults) {
-          <p class="cw-ratio">
-            {{ s.children }} players · {{ s.adults }} adult{{ s.adults === 1 ? '' : 's' }} here · usual
-            guidance {{ s.ratio }}, so {{ s.recommendedAdults }} adults
+          <p class="cw-ratio" i18n="Children and adults at the session against the usual ratio, e.g. 1:8">
+            {{ s.children }} players · {s.adults, plural, =1 {1 adult} other {{{ s.adults }} adults}} here ·
+            usual guidance {{ s.ratio }}, so {{ s.recommendedAdults }} adults
           </p>
         }
       }
@@ -43,39 +43,52 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
             @if (safety()[0]; as first) {
               <span class="cw-line cw-safety-line" data-testid="safety-line">
                 <mat-icon svgIcon="health_and_safety" aria-hidden="true" />
-                <span class="cw-clip"><strong>Safety:</strong> {{ first.message }}</span>
+                <span class="cw-clip"
+                  ><strong i18n="Before the first safety notice">Safety:</strong> {{ first.message }}</span
+                >
               </span>
             }
             @if (toCheck().length) {
               <span class="cw-line">
                 <mat-icon svgIcon="warning" aria-hidden="true" />
                 <span class="cw-clip"
-                  ><strong>{{ toCheck().length }} to check:</strong> {{ toCheck()[0].message }}</span
+                  ><strong i18n="How many warnings to check, before the first of them"
+                    >{{ toCheck().length }} to check:</strong
+                  >
+                  {{ toCheck()[0].message }}</span
                 >
               </span>
             }
             <span class="cw-more">
               <mat-icon svgIcon="keyboard_arrow_down" aria-hidden="true" class="cw-more-icon" />
-              <span class="cw-when-closed">{{
-                total() === 1 ? 'Read it in full' : 'Read all ' + total()
-              }}</span>
-              <span class="cw-when-open">Fold away</span>
+              <span class="cw-when-closed" i18n="Unfolds the notices: one, or all of them">{total(), plural,
+                =1 {Read it in full}
+                other {Read all {{ total() }}}
+              }</span>
+              <span class="cw-when-open" i18n="Folds the notices away again">Fold away</span>
             </span>
           </summary>
           @if (adultWarnings().length) {
             <h2 data-testid="supervision">
-              <mat-icon svgIcon="groups" aria-hidden="true" /> Adults on the pitch
+              <mat-icon svgIcon="groups" aria-hidden="true" />
+              <ng-container i18n="Heading of the warnings about supervision"
+                >Adults on the pitch</ng-container
+              >
             </h2>
             <ng-container *ngTemplateOutlet="ratio" />
             <ng-container *ngTemplateOutlet="list; context: { $implicit: adultWarnings() }" />
           }
           @if (safety().length) {
-            <h2 data-testid="cautions"><mat-icon svgIcon="health_and_safety" aria-hidden="true" /> Safety</h2>
+            <h2 data-testid="cautions">
+              <mat-icon svgIcon="health_and_safety" aria-hidden="true" />
+              <ng-container i18n="Heading of the safety cautions">Safety</ng-container>
+            </h2>
             <ng-container *ngTemplateOutlet="list; context: { $implicit: safety() }" />
           }
           @if (otherWarnings().length) {
             <h2 data-testid="warnings">
-              <mat-icon svgIcon="warning" aria-hidden="true" /> Check before you start
+              <mat-icon svgIcon="warning" aria-hidden="true" />
+              <ng-container i18n="Heading of the other warnings">Check before you start</ng-container>
             </h2>
             <ng-container *ngTemplateOutlet="list; context: { $implicit: otherWarnings() }" />
           }
@@ -89,21 +102,28 @@ const SUPERVISION_CODES = new Set(['supervision-ratio', 'no-adult', 'stations-pe
           aria-labelledby="adults-heading"
           data-testid="supervision"
         >
-          <h2 id="adults-heading"><mat-icon svgIcon="groups" aria-hidden="true" /> Adults on the pitch</h2>
+          <h2 id="adults-heading">
+            <mat-icon svgIcon="groups" aria-hidden="true" />
+            <ng-container i18n="Heading of the warnings about supervision">Adults on the pitch</ng-container>
+          </h2>
           <ng-container *ngTemplateOutlet="ratio" />
           <ng-container *ngTemplateOutlet="list; context: { $implicit: adultWarnings() }" />
         </section>
       }
       @if (safety().length) {
         <section class="cw-notices cw-cautions" aria-labelledby="cautions-heading" data-testid="cautions">
-          <h2 id="cautions-heading"><mat-icon svgIcon="health_and_safety" aria-hidden="true" /> Safety</h2>
+          <h2 id="cautions-heading">
+            <mat-icon svgIcon="health_and_safety" aria-hidden="true" />
+            <ng-container i18n="Heading of the safety cautions">Safety</ng-container>
+          </h2>
           <ng-container *ngTemplateOutlet="list; context: { $implicit: safety() }" />
         </section>
       }
       @if (otherWarnings().length) {
         <section class="cw-notices cw-warnings" aria-labelledby="warnings-heading" data-testid="warnings">
           <h2 id="warnings-heading">
-            <mat-icon svgIcon="warning" aria-hidden="true" /> Check before you start
+            <mat-icon svgIcon="warning" aria-hidden="true" />
+            <ng-container i18n="Heading of the other warnings">Check before you start</ng-container>
           </h2>
           <ng-container *ngTemplateOutlet="list; context: { $implicit: otherWarnings() }" />
         </section>

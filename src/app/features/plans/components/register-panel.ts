@@ -37,6 +37,10 @@ interface RegisterRow {
   mark: RegisterMark;
   /** "came 10 min late, left 15 min early", "came", "didn't come". */
   status: string;
+  /** The late button, for screen readers: "Ada K. came late". */
+  lateLabel: string;
+  /** The early button, for screen readers: "Ada K. left early". */
+  earlyLabel: string;
   lateProblem: string | null;
   earlyProblem: string | null;
 }
@@ -97,6 +101,8 @@ export class RegisterPanel {
           name: p.displayName,
           mark,
           status: statusOf(mark),
+          lateLabel: $localize`:Button that marks a player as having come late:${p.displayName}:playerName: came late`,
+          earlyLabel: $localize`:Button that marks a player as having left early:${p.displayName}:playerName: left early`,
           lateProblem: minutesProblem(mark.late, 'late'),
           earlyProblem:
             minutesProblem(mark.early, 'left early') ?? lengthProblem(mark, this.plan().request.minutes),
@@ -106,7 +112,23 @@ export class RegisterPanel {
   });
   protected readonly line = computed(() => registerLine(this.marks(), this.rows().length));
   protected readonly headline = computed(() =>
-    this.loading() ? 'Loading…' : this.saved()?.recorded ? this.line() : 'Not taken yet',
+    this.loading()
+      ? $localize`:While the register is read:Loading…`
+      : this.saved()?.recorded
+        ? this.line()
+        : $localize`:Nobody has taken the register yet:Not taken yet`,
+  );
+  /** How to take the register, after where it was filled in from when nobody has saved it yet. */
+  protected readonly hint = computed(() => {
+    const tap = $localize`Tap a name for who came. Coming late or leaving early still counts as came.`;
+    if (!this.fromPlan()) return tap;
+    const filled = this.plan().rosterChanges?.length
+      ? $localize`Filled in from the plan and pitch-side: check it and save.`
+      : $localize`Filled in from the plan: check it and save.`;
+    return `${filled} ${tap}`;
+  });
+  protected readonly saveLabel = computed(() =>
+    this.saving() ? $localize`:While the register is saved:Saving…` : $localize`Save register`,
   );
   protected readonly invalid = computed(() => this.rows().some((r) => r.lateProblem || r.earlyProblem));
   protected readonly everyoneHere = computed(() => this.rows().every((r) => r.mark.came));
@@ -128,7 +150,7 @@ export class RegisterPanel {
     const next = { ...this.marks() };
     for (const row of this.rows()) if (!row.mark.came) next[row.id] = { came: true, late: null, early: null };
     this.edits.set(next);
-    this.status.set('Everyone marked as here. Save to keep it.');
+    this.status.set($localize`Everyone marked as here. Save to keep it.`);
   }
 
   /** Shows or clears the minutes field for late or left early. */
@@ -150,7 +172,10 @@ export class RegisterPanel {
         this.saved.set(dto);
         this.edits.set(null);
         this.saving.set(false);
-        this.status.set(`Register saved: ${registerLine(marksFrom(dto.players), order.length)}.`);
+        const line = registerLine(marksFrom(dto.players), order.length);
+        this.status.set(
+          $localize`:The register saved, then who came in short:Register saved: ${line}:register:.`,
+        );
       },
       error: (err: unknown) => {
         this.saving.set(false);
@@ -181,17 +206,28 @@ export class RegisterPanel {
       },
       error: (err: unknown) => {
         this.loading.set(false);
-        this.error.set(`The register could not be read. ${problemMessage(err)}`);
+        this.error.set($localize`The register could not be read. ${problemMessage(err)}:reason:`);
       },
     });
   }
 }
 
 function statusOf(mark: RegisterMark): string {
-  if (!mark.came) return 'didn’t come';
+  if (!mark.came) return $localize`:A player on the register:didn’t come`;
   const parts: string[] = [];
-  if (mark.late !== null) parts.push(mark.late.trim() ? `came ${mark.late.trim()} min late` : 'came late');
+  const late = mark.late?.trim();
+  const early = mark.early?.trim();
+  if (mark.late !== null)
+    parts.push(
+      late
+        ? $localize`:A player on the register:came ${late}:minutes: min late`
+        : $localize`:A player on the register:came late`,
+    );
   if (mark.early !== null)
-    parts.push(mark.early.trim() ? `left ${mark.early.trim()} min early` : 'left early');
-  return parts.length ? parts.join(', ') : 'came';
+    parts.push(
+      early
+        ? $localize`:A player on the register:left ${early}:minutes: min early`
+        : $localize`:A player on the register:left early`,
+    );
+  return parts.length ? parts.join(', ') : $localize`:A player on the register:came`;
 }

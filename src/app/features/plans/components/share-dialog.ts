@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import {
   AbstractControl,
   NonNullableFormBuilder,
@@ -20,6 +20,12 @@ import { HelperLinks } from './helper-links';
 
 const EMAIL = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
+/** The form's fields as a refusal names them. */
+const FIELD_NAMES = {
+  recipients: $localize`:The e-mail addresses field, as an error names it:Recipients`,
+  message: $localize`:The optional note field, as an error names it:Note`,
+};
+
 /** Splits "a@x.org, b@y.org" or one address a line into addresses. */
 export function parseRecipients(text: string): string[] {
   return text
@@ -30,10 +36,10 @@ export function parseRecipients(text: string): string[] {
 
 function recipientsValidator(control: AbstractControl): ValidationErrors | null {
   const list = parseRecipients(String(control.value ?? ''));
-  if (list.length === 0) return { message: 'Add at least one e-mail address.' };
+  if (list.length === 0) return { message: $localize`Add at least one e-mail address.` };
   const bad = list.filter((address) => !EMAIL.test(address));
-  if (bad.length) return { message: `Not an e-mail address: ${bad.join(', ')}` };
-  if (list.length > 20) return { message: 'At most 20 recipients at once.' };
+  if (bad.length) return { message: $localize`Not an e-mail address: ${bad.join(', ')}:addresses:` };
+  if (list.length > 20) return { message: $localize`At most 20 recipients at once.` };
   return null;
 }
 
@@ -57,11 +63,11 @@ export interface ShareDialogData {
     HelperLinks,
   ],
   template: `
-    <h2 mat-dialog-title>Share the plan</h2>
+    <h2 mat-dialog-title i18n>Share the plan</h2>
     <form [formGroup]="form" (ngSubmit)="send()" novalidate>
       <mat-dialog-content>
         @if (data.canEmail) {
-          <p>
+          <p i18n="Paper is A4 or US Letter">
             Each person gets an e-mail with the one-page card attached as a PDF on
             {{ paperLabels[data.paper] }} paper, and a link to see the plan on their phone.
           </p>
@@ -69,7 +75,7 @@ export interface ShareDialogData {
             <p class="cw-form-error" role="alert">{{ text }}</p>
           }
           <mat-form-field appearance="outline" class="cw-wide">
-            <mat-label>E-mail addresses</mat-label>
+            <mat-label i18n>E-mail addresses</mat-label>
             <textarea
               matInput
               formControlName="recipients"
@@ -77,15 +83,15 @@ export interface ShareDialogData {
               cdkFocusInitial
               data-testid="share-recipients"
             ></textarea>
-            <mat-hint>Separate with commas or put one a line.</mat-hint>
-            <mat-error>{{ message(form.controls.recipients, 'Recipients') }}</mat-error>
+            <mat-hint i18n>Separate with commas or put one a line.</mat-hint>
+            <mat-error>{{ message(form.controls.recipients, fieldNames.recipients) }}</mat-error>
           </mat-form-field>
           <mat-form-field appearance="outline" class="cw-wide">
-            <mat-label>Note (optional)</mat-label>
+            <mat-label i18n>Note (optional)</mat-label>
             <input matInput formControlName="message" maxlength="500" />
           </mat-form-field>
         } @else {
-          <p>
+          <p i18n>
             E-mailing the card is for the team's coaches and the head of coaching. You can make a helper link
             below and send it yourself: it shows the plan on a phone, with first names only.
           </p>
@@ -93,10 +99,16 @@ export interface ShareDialogData {
         <cw-helper-links [planId]="data.planId" />
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-button type="button" mat-dialog-close>{{ data.canEmail ? 'Cancel' : 'Close' }}</button>
+        <button mat-button type="button" mat-dialog-close>
+          @if (data.canEmail) {
+            <ng-container i18n>Cancel</ng-container>
+          } @else {
+            <ng-container i18n="Closes the dialog (verb)">Close</ng-container>
+          }
+        </button>
         @if (data.canEmail) {
           <button mat-flat-button type="submit" [disabled]="sending()" data-testid="share-send">
-            {{ sending() ? 'Sending…' : 'Send' }}
+            {{ sendLabel() }}
           </button>
         }
       </mat-dialog-actions>
@@ -115,6 +127,12 @@ export class ShareDialog {
   protected readonly message = controlMessage;
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
+  protected readonly sendLabel = computed(() =>
+    this.sending()
+      ? $localize`:While the e-mails are being sent:Sending…`
+      : $localize`:Sends the e-mails (verb):Send`,
+  );
+  protected readonly fieldNames = FIELD_NAMES;
   protected readonly form = inject(NonNullableFormBuilder).group({
     recipients: ['', [Validators.required, recipientsValidator]],
     message: [''],
@@ -127,10 +145,7 @@ export class ShareDialog {
     const recipients = [...new Set(parseRecipients(this.form.controls.recipients.value))];
     const message = this.form.controls.message.value.trim();
     const body = { recipients, ...(message ? { message } : {}) };
-    const check = await checkAgainstSchema(this.form, 'plan-share', body, {
-      recipients: 'Recipients',
-      message: 'Note',
-    });
+    const check = await checkAgainstSchema(this.form, 'plan-share', body, FIELD_NAMES);
     if (!check.ok) {
       this.sending.set(false);
       return;

@@ -81,9 +81,21 @@ export class StationCard {
   /** The move menu's destinations, named by number and title so no two read alike. */
   protected readonly others = computed(() =>
     this.siblings()
-      .map((s, i) => ({ id: s.id, label: `Station ${i + 1} · ${s.title}${s.format ? ` ${s.format}` : ''}` }))
+      .map((s, i) => ({
+        id: s.id,
+        label: $localize`:A station in the move menu, by number and title:Station ${i + 1}:stationNumber: · ${
+          s.format ? `${s.title} ${s.format}` : s.title
+        }:stationTitle:`,
+      }))
       .filter((s) => s.id !== this.station().id),
   );
+  /** The fold's label: what the folded details hold. */
+  protected readonly detailsLabel = computed(() => {
+    const count = this.station().playerIds.length;
+    return this.station().roles.teams
+      ? $localize`:What a station's folded details hold:${count}:count: players · sides · coaching points · steps · kit`
+      : $localize`:What a station's folded details hold:${count}:count: players · roles · coaching points · steps · kit`;
+  });
   /** The limit to say under the area buttons: the one the coach just ran into first. */
   protected readonly limitLines = computed(() => {
     const limits = this.areaLimits();
@@ -125,6 +137,16 @@ export class StationCard {
     const open = (event.target as HTMLDetailsElement).open;
     this.expanded.set(open);
     if (open) this.opened.emit();
+  }
+
+  /** The area buttons' group, for screen readers. */
+  protected readonly areaLabel = computed(
+    () => $localize`:The buttons that change a station's area:Area of ${this.station().title}:stationTitle:`,
+  );
+
+  /** The move button of one player, for screen readers. */
+  protected moveLabel(id: string): string {
+    return $localize`:Button that moves a player to another station:Move ${this.name(id)}:playerName: to another station`;
   }
 
   protected name(id: string): string {

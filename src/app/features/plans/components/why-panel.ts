@@ -10,9 +10,21 @@ export function isPlannerStep(entry: TraceEntry): boolean {
   return /^(replan:)?(engine|edit)\./.test(entry.ruleId);
 }
 
-/** "1 club rule", "3 club rules": a count and its noun. */
-export function counted(n: number, one: string, many: string): string {
-  return `${n === 0 ? 'No' : n} ${n === 1 ? one : many}`;
+/** "No club rules applied", "1 club rule applied", "3 club rules applied". */
+function clubRulesWords(n: number): string {
+  if (n === 0) return $localize`:How many club rules changed the plan:No club rules applied`;
+  return n === 1
+    ? $localize`:How many club rules changed the plan:1 club rule applied`
+    : $localize`:How many club rules changed the plan:${n}:count: club rules applied`;
+}
+
+/** "no planner steps", "1 planner step", "3 planner steps" (after the club rules' count). */
+function plannerStepsWords(n: number): string {
+  if (n === 0)
+    return $localize`:How many steps the planner took by itself, after the club rules' count:no planner steps`;
+  return n === 1
+    ? $localize`:How many steps the planner took by itself, after the club rules' count:1 planner step`
+    : $localize`:How many steps the planner took by itself, after the club rules' count:${n}:count: planner steps`;
 }
 
 /**
@@ -26,16 +38,18 @@ export function counted(n: number, one: string, many: string): string {
   template: `
     <mat-expansion-panel (opened)="loadRules()">
       <mat-expansion-panel-header>
-        <mat-panel-title><h2>Why this plan</h2></mat-panel-title>
+        <mat-panel-title
+          ><h2 i18n="Heading of the panel that explains the plan">Why this plan</h2></mat-panel-title
+        >
         <mat-panel-description data-testid="why-count">{{ countWords() }}</mat-panel-description>
       </mat-expansion-panel-header>
       <p class="cw-muted" data-testid="why-rules">{{ rulesLine() }}</p>
-      <h3>What the club’s rules did</h3>
+      <h3 i18n>What the club’s rules did</h3>
       @if (clubRules().length) {
         <ul class="cw-trace" data-testid="why-club-rules">
           @for (entry of clubRules(); track entry.ruleId + $index) {
             <li>
-              <strong>{{ entry.description ?? 'A club rule' }}</strong>
+              <strong>{{ entry.description ?? aClubRule }}</strong>
               @if (entry.effect) {
                 <span> — {{ entry.effect }}</span>
               }
@@ -43,10 +57,10 @@ export function counted(n: number, one: string, many: string): string {
           }
         </ul>
       } @else {
-        <p>None of the club’s rules changed this plan.</p>
+        <p i18n>None of the club’s rules changed this plan.</p>
       }
       @if (plannerSteps().length) {
-        <h3>How the planner fitted the session</h3>
+        <h3 i18n>How the planner fitted the session</h3>
         <ul class="cw-trace" data-testid="why-planner">
           @for (entry of plannerSteps(); track entry.ruleId + $index) {
             <li>{{ entry.effect ?? entry.description }}</li>
@@ -57,15 +71,18 @@ export function counted(n: number, one: string, many: string): string {
         <p class="cw-muted">{{ plan().estimateNote }}</p>
       }
       <details data-testid="why-details">
-        <summary>Details</summary>
-        <p class="cw-muted">
+        <summary i18n="Fold with the rule codes, version and plan reference">Details</summary>
+        <p
+          class="cw-muted"
+          i18n="The rule set's id and version and the plan's reference, which together reproduce the plan"
+        >
           Rules {{ plan().ruleSet.id }}, version {{ plan().ruleSet.version }} · plan ref {{ plan().seed }}
           (the same request, rules and plan ref make the same plan)
         </p>
         <ul class="cw-trace">
           @for (entry of plan().trace; track entry.ruleId + $index) {
             <li>
-              <code>{{ entry.ruleId }}</code> {{ entry.fired ? 'applied' : 'checked, did not apply' }}
+              <code>{{ entry.ruleId }}</code> {{ firedWords(entry) }}
             </li>
           }
         </ul>
@@ -109,12 +126,20 @@ export class WhyPanel {
     this.plan().trace.filter((t) => t.fired && isPlannerStep(t)),
   );
   protected readonly countWords = computed(
-    () =>
-      `${counted(this.clubRules().length, 'club rule', 'club rules')} applied · ${counted(this.plannerSteps().length, 'planner step', 'planner steps').toLowerCase()}`,
+    () => `${clubRulesWords(this.clubRules().length)} · ${plannerStepsWords(this.plannerSteps().length)}`,
   );
+  /** A club rule the trace gives no description. */
+  protected readonly aClubRule = $localize`:A club rule the plan's trace does not describe:A club rule`;
   private readonly rules = signal<RuleSetSummaryDto | null>(null);
   protected readonly rulesLine = computed(() => rulesInWords(this.rules()));
   private asked: string | null = null;
+
+  /** Whether a rule in the details applied or was only checked. */
+  protected firedWords(entry: TraceEntry): string {
+    return entry.fired
+      ? $localize`:A rule code in the details, then whether it applied:applied`
+      : $localize`:A rule code in the details, then whether it applied:checked, did not apply`;
+  }
 
   /** The rules' name and publishing date, read when the panel is first opened. */
   protected loadRules(): void {

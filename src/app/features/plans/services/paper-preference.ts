@@ -3,7 +3,10 @@ import type { CardPaper } from '../../../core/api/plans-api';
 import { PAPER_SETTING_KEY } from '../../../core/auth/device-data';
 
 /** How each paper is named on screen. */
-export const PAPER_LABELS: Readonly<Record<CardPaper, string>> = { a4: 'A4', letter: 'US Letter' };
+export const PAPER_LABELS: Readonly<Record<CardPaper, string>> = {
+  a4: 'A4',
+  letter: $localize`:Paper size used in North America:US Letter`,
+};
 
 /** A setting of the device, kept when someone signs out (see core/auth/device-data.ts). */
 const STORAGE_KEY = PAPER_SETTING_KEY;

@@ -126,7 +126,9 @@ export class PlanSession {
       if (outcome.refused) {
         const refused = this.units.text(outcome.refused);
         this.feedback.set({ at, kind: 'refused', lines: [refused] });
-        this.announcement.set(`Not changed. ${refused}`);
+        this.announcement.set(
+          $localize`:Read out when an edit is refused, then why:Not changed. ${refused}:reason:`,
+        );
         return;
       }
       const next = outcome.plan;
@@ -136,9 +138,11 @@ export class PlanSession {
       if (problems.length)
         this.feedback.set({ at, kind: 'problems', lines: this.units.deep(uniqueMessages(problems)) });
       this.announcement.set(
-        problems.length
-          ? `${describe}. Re-checked: ${problems.length} problem${problems.length === 1 ? '' : 's'} to look at.`
-          : `${describe}. Re-checked: the plan still holds every rule.`,
+        problems.length === 0
+          ? $localize`:Read out after an edit, which it names first:${describe}:edit:. Re-checked: the plan still holds every rule.`
+          : problems.length === 1
+            ? $localize`:Read out after an edit, which it names first:${describe}:edit:. Re-checked: 1 problem to look at.`
+            : $localize`:Read out after an edit, which it names first:${describe}:edit:. Re-checked: ${problems.length}:count: problems to look at.`,
       );
       const stored = await firstValueFrom(this.plansApi.update(saved.id, { edit }, saved.version));
       this.saved.set(stored);
@@ -149,8 +153,9 @@ export class PlanSession {
       const text = this.units.text(
         error instanceof Error && !('status' in error) ? error.message : problemMessage(error),
       );
-      this.feedback.set({ at, kind: 'not-saved', lines: [`That change was not saved: ${text}`] });
-      this.announcement.set(`That change was not saved: ${text}`);
+      const notSaved = $localize`That change was not saved: ${text}:reason:`;
+      this.feedback.set({ at, kind: 'not-saved', lines: [notSaved] });
+      this.announcement.set(notSaved);
     } finally {
       this.busy.set(false);
     }

@@ -19,32 +19,59 @@ export function roleLines(station: Station, nameOf: (id: string) => string): Rol
   const keepers = new Set(roles.goalkeeper ?? []);
   const list = (ids: string[] | undefined, markKeepers = false) =>
     (ids ?? [])
-      .map((id) => (markKeepers && keepers.has(id) ? `${nameOf(id)} (goalkeeper)` : nameOf(id)))
+      .map((id) =>
+        markKeepers && keepers.has(id)
+          ? $localize`:A player's name on a side, marked as its goalkeeper:${nameOf(id)}:playerName: (goalkeeper)`
+          : nameOf(id),
+      )
       .join(', ');
   const lines: RoleLine[] = [];
   if (roles.teams) {
     const [a, b] = roles.teams;
-    lines.push({ label: 'Side A (bibs)', text: list(a, true) || '—' });
-    lines.push({ label: 'Side B', text: list(b, true) || '—' });
+    lines.push({
+      label: $localize`:One of the two sides of a game, the one wearing bibs:Side A (bibs)`,
+      text: list(a, true) || '—',
+    });
+    lines.push({ label: $localize`:The other side of a game:Side B`, text: list(b, true) || '—' });
   } else {
-    if (roles.attackers?.length) lines.push({ label: 'Attack', text: list(roles.attackers) });
-    if (roles.defenders?.length) lines.push({ label: 'Defend (bibs)', text: list(roles.defenders) });
+    if (roles.attackers?.length)
+      lines.push({
+        label: $localize`:Players who attack at a station (verb):Attack`,
+        text: list(roles.attackers),
+      });
+    if (roles.defenders?.length)
+      lines.push({
+        label: $localize`:Players who defend at a station, wearing bibs (verb):Defend (bibs)`,
+        text: list(roles.defenders),
+      });
   }
-  if (keepers.size) lines.push({ label: 'Goalkeeper', text: list([...keepers]) });
-  if (roles.servers?.length) lines.push({ label: 'Serve', text: list(roles.servers) });
-  if (roles.neutrals?.length) lines.push({ label: 'Neutral', text: list(roles.neutrals) });
-  if (roles.rotation?.length && !roles.teams) lines.push({ label: 'Rotation', text: list(roles.rotation) });
+  if (keepers.size) lines.push({ label: $localize`Goalkeeper`, text: list([...keepers]) });
+  if (roles.servers?.length)
+    lines.push({
+      label: $localize`:Players who feed the ball in at a station (verb):Serve`,
+      text: list(roles.servers),
+    });
+  if (roles.neutrals?.length)
+    lines.push({
+      label: $localize`:Players who play for whichever side has the ball:Neutral`,
+      text: list(roles.neutrals),
+    });
+  if (roles.rotation?.length && !roles.teams)
+    lines.push({
+      label: $localize`:Players who wait and swap in on the rotation:Rotation`,
+      text: list(roles.rotation),
+    });
   return lines;
 }
 
 /** A short tag beside a player's name for the roles worth saying (attackers and plain players get none). */
 export const ROLE_TAGS: Partial<Record<PositionRole, string>> = {
-  goalkeeper: 'Goalkeeper',
-  'team-a': 'Side A · bib',
-  'team-b': 'Side B',
-  defender: 'Defender · bib',
-  server: 'Server',
-  neutral: 'Neutral',
+  goalkeeper: $localize`Goalkeeper`,
+  'team-a': $localize`:Tag beside a player on side A, who wears a bib:Side A · bib`,
+  'team-b': $localize`:Tag beside a player on side B:Side B`,
+  defender: $localize`:Tag beside a defender, who wears a bib:Defender · bib`,
+  server: $localize`:Tag beside a player who feeds the ball in:Server`,
+  neutral: $localize`:Tag beside a player who plays for whichever side has the ball:Neutral`,
 };
 
 /** The role each player starts in, from the station's start positions (the diagram's colours). */
@@ -59,7 +86,8 @@ export function isBreak(phase: Phase): boolean {
 
 /** "Drinks break · 2 min" (the engine names a break taken for the heat "Drinks break (heat)"). */
 export function breakWords(phase: Phase): string {
-  return `${phase.name || 'Drinks break'} · ${phase.endMinute - phase.startMinute} min`;
+  const name = phase.name || $localize`Drinks break`;
+  return $localize`:A drinks break and its length in minutes:${name}:breakName: · ${phase.endMinute - phase.startMinute}:minutes: min`;
 }
 
 /**
@@ -72,24 +100,40 @@ export function changeoverWords(phases: readonly Phase[], index: number): string
   const change = phase?.changeover;
   if (!change || isBreak(phase)) return null;
   const parts: string[] = [];
-  if (change.conesPlaced) parts.push(plural(change.conesPlaced, 'cone'));
-  if (change.conesLifted) parts.push(`lift ${plural(change.conesLifted, 'cone')}`);
-  if (change.goalsMoved)
-    parts.push(`${index === 0 ? 'put out' : 'move'} ${plural(change.goalsMoved, 'goal')}`);
+  if (change.conesPlaced) parts.push(conesWords(change.conesPlaced));
+  if (change.conesLifted) parts.push(liftWords(change.conesLifted));
+  if (change.goalsMoved) parts.push(goalsWords(change.goalsMoved, index === 0));
   if (!parts.length) return null;
   const before = phases[index - 1];
   const lead =
     index === 0
-      ? 'Before you start'
+      ? $localize`:Set-up line before the first phase:Before you start`
       : before && isBreak(before) && !change.minutes
-        ? 'Set up during the drinks break'
-        : 'Set up first';
-  const time = change.minutes ? ` · ${plural(change.minutes, 'min')} of this phase` : '';
-  return `${lead}: ${parts.join(', ')}${time}`;
+        ? $localize`:Set-up line when the drinks break comes just before:Set up during the drinks break`
+        : $localize`:Set-up line before a later phase:Set up first`;
+  const things = parts.join(', ');
+  const line = $localize`:When to set up, then what to put out, e.g. "Set up first: 12 cones, lift 4 cones":${lead}:when:: ${things}:whatToSetUp:`;
+  if (!change.minutes) return line;
+  const time = $localize`:Minutes of a phase set aside for setting up:${change.minutes}:minutes: min of this phase`;
+  return `${line} · ${time}`;
 }
 
-function plural(n: number, word: string): string {
-  return `${n} ${word}${n === 1 || word === 'min' ? '' : 's'}`;
+/** "1 cone", "12 cones": cones to put out. */
+function conesWords(n: number): string {
+  return n === 1 ? $localize`:Cones to put out:1 cone` : $localize`:Cones to put out:${n}:count: cones`;
+}
+
+/** "lift 1 cone", "lift 4 cones". */
+function liftWords(n: number): string {
+  return n === 1
+    ? $localize`:Cones to pick up:lift 1 cone`
+    : $localize`:Cones to pick up:lift ${n}:count: cones`;
+}
+
+/** "put out 1 goal" before the first phase, "move 2 goals" later. */
+function goalsWords(n: number, first: boolean): string {
+  if (first) return n === 1 ? $localize`put out 1 goal` : $localize`put out ${n}:count: goals`;
+  return n === 1 ? $localize`move 1 goal` : $localize`move ${n}:count: goals`;
 }
 
 /**

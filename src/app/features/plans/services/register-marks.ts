@@ -30,9 +30,15 @@ export function marksFrom(entries: AttendanceEntryDto[]): RegisterMarks {
 export function minutesProblem(text: string | null, what: 'late' | 'left early'): string | null {
   if (text === null) return null;
   const trimmed = text.trim();
-  if (!/^\d+$/.test(trimmed)) return `Minutes ${what}: type a whole number, such as 10.`;
+  if (!/^\d+$/.test(trimmed))
+    return what === 'late'
+      ? $localize`Minutes late: type a whole number, such as 10.`
+      : $localize`Minutes left early: type a whole number, such as 10.`;
   const n = Number(trimmed);
-  if (n < 1 || n > MAX_MINUTES) return `Minutes ${what}: from 1 to ${MAX_MINUTES}.`;
+  if (n < 1 || n > MAX_MINUTES)
+    return what === 'late'
+      ? $localize`Minutes late: from 1 to ${MAX_MINUTES}:maxMinutes:.`
+      : $localize`Minutes left early: from 1 to ${MAX_MINUTES}:maxMinutes:.`;
   return null;
 }
 
@@ -41,7 +47,7 @@ export function lengthProblem(mark: RegisterMark, sessionMinutes: number): strin
   const late = mark.late !== null && !minutesProblem(mark.late, 'late') ? Number(mark.late) : 0;
   const early = mark.early !== null && !minutesProblem(mark.early, 'left early') ? Number(mark.early) : 0;
   return late + early >= sessionMinutes && late + early > 0
-    ? `Late and early together leave no time in the ${sessionMinutes}-minute session.`
+    ? $localize`Late and early together leave no time in the ${sessionMinutes}:sessionMinutes:-minute session.`
     : null;
 }
 
@@ -66,9 +72,9 @@ export function registerLine(marks: RegisterMarks, squad: number): string {
   const came = Object.values(marks).filter((m) => m.came);
   const late = came.filter((m) => m.late !== null).length;
   const early = came.filter((m) => m.early !== null).length;
-  const parts = [`${came.length} of ${squad} came`];
-  if (late) parts.push(`${late} late`);
-  if (early) parts.push(`${early} left early`);
+  const parts = [$localize`:The register in short:${came.length}:came: of ${squad}:squad: came`];
+  if (late) parts.push($localize`:The register in short: how many came late:${late}:count: late`);
+  if (early) parts.push($localize`:The register in short: how many left early:${early}:count: left early`);
   return parts.join(' · ');
 }
 
