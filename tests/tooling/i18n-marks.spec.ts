@@ -22,6 +22,17 @@ describe('the i18n mark check', () => {
     expect(found.map((f) => f.line)).toEqual([1, 2, 3, 4, 5]);
   });
 
+  it('finds an aria attribute bound as a property, which writes no attribute', () => {
+    const found = unmarkedIn(
+      `<button i18n-aria-label aria-label="Remove guest {{ n }}">x</button>
+       <button [attr.aria-label]="label(n)">x</button>`,
+      'sample.html',
+    );
+    expect(found.map((f) => [f.line, f.what])).toEqual([
+      [1, '[aria-label] writes no attribute: use [attr.aria-label]'],
+    ]);
+  });
+
   it('accepts marked text, marked attributes, plurals and code-only attributes', () => {
     const found = unmarkedIn(
       `<h2 i18n>Teams</h2>

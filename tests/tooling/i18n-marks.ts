@@ -10,6 +10,7 @@ import { join, relative } from 'node:path';
 import {
   ASTWithSource,
   Binary,
+  BindingType,
   Conditional,
   Interpolation,
   LiteralPrimitive,
@@ -153,7 +154,9 @@ export function unmarkedIn(template: string, file: string, firstLine = 0): Unmar
       const inside = marked || !!node.i18n;
       const attributes: TmplAstTextAttribute[] = [
         ...node.attributes,
-        ...(node instanceof TmplAstTemplate ? node.templateAttrs.filter((a) => a instanceof TmplAstTextAttribute) : []),
+        ...(node instanceof TmplAstTemplate
+          ? node.templateAttrs.filter((a) => a instanceof TmplAstTextAttribute)
+          : []),
       ] as TmplAstTextAttribute[];
       for (const a of attributes) {
         if (!a.i18n && isReadableAttribute(a.name, a.value))
@@ -161,6 +164,19 @@ export function unmarkedIn(template: string, file: string, firstLine = 0): Unmar
       }
       for (const input of node.inputs as TmplAstBoundAttribute[]) {
         const key = input.name.toLowerCase();
+        // `aria-label="Area of {{ x }}"` (marked or not) binds a DOM property of that name, which
+        // writes no attribute: screen readers get nothing. `[attr.aria-label]` writes it.
+        if (
+          input.type === BindingType.Property &&
+          key.startsWith('aria-') &&
+          node instanceof TmplAstElement &&
+          !node.name.includes('-')
+        )
+          add(
+            input,
+            `[${input.name}] writes no attribute: use [attr.${input.name}]`,
+            (input.value as ASTWithSource).source ?? '',
+          );
         if (!READABLE.has(key.replace(/^attr\./, ''))) continue;
         for (const literal of shownLiterals(input.value)) add(input, `words inside [${input.name}]`, literal);
       }

@@ -390,6 +390,11 @@ export class PlanWizard {
     this.form.controls.who.controls.guests.push(this.guestGroup());
   }
 
+  /** The name a screen reader gives a guest's remove button: "Remove guest 2". */
+  protected removeGuestLabel(index: number): string {
+    return $localize`:Button that removes the first, second… guest:Remove guest ${index + 1}:number:`;
+  }
+
   protected removeGuest(index: number): void {
     this.form.controls.who.controls.guests.removeAt(index);
   }
