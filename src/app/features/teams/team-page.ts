@@ -119,7 +119,11 @@ export class TeamPage {
       .afterClosed()
       .subscribe((saved) => {
         if (!saved) return;
-        this.say(player ? `${saved.displayName} saved.` : `${saved.displayName} added.`);
+        this.say(
+          player
+            ? $localize`${saved.displayName}:playerName: saved.`
+            : $localize`${saved.displayName}:playerName: added.`,
+        );
         this.loadPlayers();
       });
   }
@@ -129,7 +133,8 @@ export class TeamPage {
     this.playersApi.update(player.id, body).subscribe({
       next: (saved) => {
         this.players.update((list) => list.map((p) => (p.id === saved.id ? { ...p, ...saved } : p)));
-        if (body.active === false) this.say(`${player.displayName} is no longer in the active squad.`);
+        if (body.active === false)
+          this.say($localize`${player.displayName}:playerName: is no longer in the active squad.`);
       },
       error: (error: unknown) => {
         this.error.set(problemMessage(error));
@@ -151,7 +156,7 @@ export class TeamPage {
         this.players.update((list) => list.filter((p) => p.id !== player.id));
         // The row and its button are gone; put focus somewhere that still exists.
         this.playersHeading()?.nativeElement.focus();
-        this.say(`${player.displayName} removed from the squad.`);
+        this.say($localize`${player.displayName}:playerName: removed from the squad.`);
       });
   }
 
@@ -165,7 +170,7 @@ export class TeamPage {
       .afterClosed()
       .subscribe((deleted) => {
         if (!deleted) return;
-        this.say(`${team.name} deleted.`);
+        this.say($localize`${team.name}:teamName: deleted.`);
         void this.router.navigate(['/teams']);
       });
   }
@@ -174,7 +179,7 @@ export class TeamPage {
     this.teamsApi.saveKit(this.teamId(), kit).subscribe({
       next: (saved) => {
         this.kit.set(saved);
-        this.say('Kit bag saved.');
+        this.say($localize`Kit bag saved.`);
       },
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
@@ -184,7 +189,7 @@ export class TeamPage {
     this.teamsApi.update(this.teamId(), body).subscribe({
       next: (saved) => {
         this.team.set(saved);
-        this.say('Team details saved.');
+        this.say($localize`Team details saved.`);
       },
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
@@ -196,8 +201,21 @@ export class TeamPage {
     const names = new Map(this.members().map((m) => [m.userId, m.name]));
     const added = team.coachIds.find((id) => !before.has(id));
     const removed = [...before].find((id) => !team.coachIds.includes(id));
-    if (added) this.say(`${names.get(added) ?? 'They'} can now see ${team.name} and its plans.`);
-    else if (removed) this.say(`${names.get(removed) ?? 'They'} is no longer on ${team.name}.`);
+    if (added) {
+      const name = names.get(added);
+      this.say(
+        name
+          ? $localize`${name}:memberName: can now see ${team.name}:teamName: and its plans.`
+          : $localize`They can now see ${team.name}:teamName: and its plans.`,
+      );
+    } else if (removed) {
+      const name = names.get(removed);
+      this.say(
+        name
+          ? $localize`${name}:memberName: is no longer on ${team.name}:teamName:.`
+          : $localize`They is no longer on ${team.name}:teamName:.`,
+      );
+    }
   }
 
   private say(text: string): void {

@@ -17,7 +17,7 @@ export interface TeamPermissions {
 }
 
 /** Shown instead of the editing controls to everyone else. */
-export const READ_ONLY_NOTE = 'Only the head of coaching or this team’s coaches can change it.';
+export const READ_ONLY_NOTE = $localize`Only the head of coaching or this team’s coaches can change it.`;
 
 const NONE: TeamPermissions = { change: false, delete: false, staff: false };
 

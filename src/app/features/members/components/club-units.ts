@@ -7,7 +7,10 @@ import { AuthStore } from '../../../core/auth/auth-store';
 import { problemMessage } from '../../../core/http/problem-message';
 import { FOLLOW_CLUB, UnitFields, unitProblem, type UnitPick } from '../../../shared/components/unit-fields';
 
-const FIELD_WORDS: Record<string, string> = { distance: 'Distances', temperature: 'Temperatures' };
+const FIELD_WORDS: Record<string, string> = {
+  distance: $localize`Distances`,
+  temperature: $localize`Temperatures`,
+};
 
 /**
  * The club's units, on the head of coaching's club page: what everyone in the club reads and
@@ -18,9 +21,13 @@ const FIELD_WORDS: Record<string, string> = { distance: 'Distances', temperature
   imports: [MatCardModule, UnitFields],
   template: `
     <mat-card appearance="outlined" class="cw-club-units">
-      <mat-card-header><h2 mat-card-title>Club units</h2></mat-card-header>
+      <mat-card-header
+        ><h2 mat-card-title i18n="Heading: the units of measure the club uses">
+          Club units
+        </h2></mat-card-header
+      >
       <mat-card-content>
-        <p class="cw-muted">
+        <p class="cw-muted" i18n>
           What everyone in the club reads and types for distances and temperatures: the plan wizard, plans,
           pitch-side, the printed card and e-mails. Anyone can choose their own on their account page. Plans
           are the same whatever you choose.
@@ -36,7 +43,7 @@ const FIELD_WORDS: Record<string, string> = { distance: 'Distances', temperature
         }
         <div aria-live="polite">
           @if (saved()) {
-            <p role="status" class="cw-muted" data-testid="club-units-saved">Saved for the club.</p>
+            <p role="status" class="cw-muted" data-testid="club-units-saved" i18n>Saved for the club.</p>
           }
           @if (error(); as text) {
             <p class="cw-form-error" role="alert">{{ text }}</p>

@@ -28,9 +28,20 @@ export interface MemberRoleData {
   selector: 'cw-member-role-dialog',
   imports: [FormsModule, MatButtonModule, MatDialogModule, MatRadioModule],
   template: `
-    <h2 mat-dialog-title>{{ data.self ? 'Your role' : data.member.name + '’s role' }}</h2>
+    <h2 mat-dialog-title>
+      @if (data.self) {
+        <ng-container i18n>Your role</ng-container>
+      } @else {
+        <ng-container i18n>{{ data.member.name }}’s role</ng-container>
+      }
+    </h2>
     <mat-dialog-content>
-      <mat-radio-group [(ngModel)]="role" class="cw-roles" aria-label="Role">
+      <mat-radio-group
+        [(ngModel)]="role"
+        class="cw-roles"
+        i18n-aria-label="A member's role in the club"
+        aria-label="Role"
+      >
         @for (choice of roles; track choice) {
           <mat-radio-button [value]="choice" [attr.data-role]="choice">
             <span class="cw-roles__name">{{ labels[choice] }}</span>
@@ -39,7 +50,7 @@ export interface MemberRoleData {
         }
       </mat-radio-group>
       @if (data.self && data.member.role === 'lead' && role() !== 'lead') {
-        <p class="cw-roles__warn">You will no longer see this page or change the club rules.</p>
+        <p class="cw-roles__warn" i18n>You will no longer see this page or change the club rules.</p>
       }
       <div aria-live="polite">
         @if (error(); as text) {
@@ -48,13 +59,21 @@ export interface MemberRoleData {
       </div>
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" mat-dialog-close>Keep as {{ inSentence[data.member.role] }}</button>
+      <button
+        mat-button
+        type="button"
+        mat-dialog-close
+        i18n="Button: keep the member's role, e.g. Keep as a coach"
+      >
+        Keep as {{ inSentence[data.member.role] }}
+      </button>
       <button
         mat-flat-button
         type="button"
         data-testid="confirm-role"
         [disabled]="busy() || role() === data.member.role"
         (click)="saveRole()"
+        i18n="Button: give the member the chosen role, e.g. Make an assistant"
       >
         Make {{ inSentence[role()] }}
       </button>

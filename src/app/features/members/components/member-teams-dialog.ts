@@ -22,16 +22,16 @@ export interface MemberTeamsData {
   selector: 'cw-member-teams-dialog',
   imports: [AgeGroupLabelPipe, MatButtonModule, MatCheckboxModule, MatDialogModule],
   template: `
-    <h2 mat-dialog-title>{{ data.member.name }}’s teams</h2>
+    <h2 mat-dialog-title i18n>{{ data.member.name }}’s teams</h2>
     <mat-dialog-content>
       @if (teams().length === 0) {
-        <p>The club has no teams yet.</p>
+        <p i18n>The club has no teams yet.</p>
       } @else {
-        <p class="cw-muted">
-          They see these teams and their plans{{
-            data.member.role === 'coach' ? ' and can change them' : ''
-          }}.
-        </p>
+        @if (data.member.role === 'coach') {
+          <p class="cw-muted" i18n>They see these teams and their plans and can change them.</p>
+        } @else {
+          <p class="cw-muted" i18n>They see these teams and their plans.</p>
+        }
         <ul class="cw-team-ticks" data-testid="member-teams">
           @for (team of teams(); track team.id) {
             <li>
@@ -53,7 +53,7 @@ export interface MemberTeamsData {
       </div>
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-flat-button type="button" [mat-dialog-close]="teams()">Done</button>
+      <button mat-flat-button type="button" [mat-dialog-close]="teams()" i18n>Done</button>
     </mat-dialog-actions>
   `,
   styles: `

@@ -19,14 +19,14 @@ export interface RemoveMemberData {
   selector: 'cw-remove-member-dialog',
   imports: [MatButtonModule, MatDialogModule],
   template: `
-    <h2 mat-dialog-title>Remove {{ data.member.name }} from {{ data.clubName }}?</h2>
+    <h2 mat-dialog-title i18n>Remove {{ data.member.name }} from {{ data.clubName }}?</h2>
     <mat-dialog-content>
       <ul class="cw-consequences">
-        <li>{{ data.member.name }} can no longer sign in, from their next tap.</li>
-        <li>They come off every team they helped with.</li>
-        <li>Plans they made stay with their teams.</li>
+        <li i18n>{{ data.member.name }} can no longer sign in, from their next tap.</li>
+        <li i18n>They come off every team they helped with.</li>
+        <li i18n>Plans they made stay with their teams.</li>
       </ul>
-      <p>To bring them back, invite them again.</p>
+      <p i18n>To bring them back, invite them again.</p>
       <div aria-live="polite">
         @if (error(); as text) {
           <p class="cw-form-error" role="alert">{{ text }}</p>
@@ -34,7 +34,9 @@ export interface RemoveMemberData {
       </div>
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" mat-dialog-close cdkFocusInitial>Keep {{ data.member.name }}</button>
+      <button mat-button type="button" mat-dialog-close cdkFocusInitial i18n>
+        Keep {{ data.member.name }}
+      </button>
       <button
         mat-flat-button
         type="button"
@@ -42,6 +44,7 @@ export interface RemoveMemberData {
         data-testid="confirm-remove-member"
         [disabled]="busy()"
         (click)="removeMember()"
+        i18n
       >
         Remove from club
       </button>

@@ -14,6 +14,7 @@ import { ICONS } from '../../../core/icons/shipped-icon';
 const MAX_PLAYERS = 60;
 const MAX_BYTES = 1024 * 1024;
 const MAX_NAME_LENGTH = 40;
+const TOO_LARGE = $localize`That file is larger than 1 MB. A squad list is usually a few kilobytes.`;
 
 /** A previewed line as the coach leaves it: the name they kept or typed, and whether to add it. */
 interface ImportLine extends CsvPreviewRow {
@@ -58,13 +59,18 @@ export class CsvImport {
       const name = cleanName(line.name);
       const key = nameKey(name);
       const earlier = firstLine.get(key);
-      if (!name) problems.set(line.row, 'Type a name or leave the line out.');
-      else if (/[@0-9<>]/.test(name)) problems.set(line.row, 'Leave out numbers, e-mail addresses and < >.');
+      if (!name) problems.set(line.row, $localize`Type a name or leave the line out.`);
+      else if (/[@0-9<>]/.test(name))
+        problems.set(line.row, $localize`Leave out numbers, e-mail addresses and < >.`);
       else if ([...name].length > MAX_NAME_LENGTH)
-        problems.set(line.row, `At most ${MAX_NAME_LENGTH} letters.`);
+        problems.set(line.row, $localize`At most ${MAX_NAME_LENGTH}:maxLength: letters.`);
       else if (line.clash && key === nameKey(line.displayName))
-        problems.set(line.row, line.note ?? 'This name is taken. Type another or leave the line out.');
-      else if (earlier !== undefined) problems.set(line.row, `Line ${earlier} has this name too.`);
+        problems.set(
+          line.row,
+          line.note ?? $localize`This name is taken. Type another or leave the line out.`,
+        );
+      else if (earlier !== undefined)
+        problems.set(line.row, $localize`Line ${earlier}:lineNumber: has this name too.`);
       else if (line.refused) problems.set(line.row, line.refused);
       if (earlier === undefined && name) firstLine.set(key, line.row);
     }
@@ -81,7 +87,7 @@ export class CsvImport {
     this.clear();
     if (!file) return;
     if (file.size > MAX_BYTES) {
-      this.error.set('That file is larger than 1 MB. A squad list is usually a few kilobytes.');
+      this.error.set(TOO_LARGE);
       return;
     }
     this.fileName.set(file.name);
@@ -115,7 +121,9 @@ export class CsvImport {
       next: (players) => {
         const created = players.length;
         this.clear();
-        this.done.set(`${created} player${created === 1 ? '' : 's'} added.`);
+        this.done.set(
+          created === 1 ? $localize`1 player added.` : $localize`${created}:count: players added.`,
+        );
         this.imported.emit(created);
       },
       error: (error: unknown) => this.fail(error),
@@ -144,12 +152,13 @@ export class CsvImport {
       );
     }
     if (byLine.length) {
-      const one = byLine.length === 1;
       this.error.set(
-        `${one ? 'A name is' : 'Some names are'} taken. Change ${one ? 'it' : 'them'} below and add again.`,
+        byLine.length === 1
+          ? $localize`A name is taken. Change it below and add again.`
+          : $localize`Some names are taken. Change them below and add again.`,
       );
     } else if (error instanceof HttpErrorResponse && error.status === 413) {
-      this.error.set('That file is larger than 1 MB. A squad list is usually a few kilobytes.');
+      this.error.set(TOO_LARGE);
     } else this.error.set(problem?.detail ?? problemMessage(error));
   }
 

@@ -37,22 +37,22 @@ function sameName(typed: string, name: string): boolean {
   template: `
     <form [formGroup]="form" (ngSubmit)="deleteTeam()" novalidate>
       <!-- Title and content side by side, so the dialog's spacing between them still applies. -->
-      <h2 mat-dialog-title>Delete {{ data.team.name }}?</h2>
+      <h2 mat-dialog-title i18n>Delete {{ data.team.name }}?</h2>
       <mat-dialog-content>
-        <p>This deletes the team for everyone in the club, together with:</p>
+        <p i18n>This deletes the team for everyone in the club, together with:</p>
         <ul class="cw-consequences">
           @if (playersText; as text) {
             <li>{{ text }}</li>
           }
-          <li>all its plans, with their attendance and station feedback</li>
-          <li>its kit bag</li>
+          <li i18n>all its plans, with their attendance and station feedback</li>
+          <li i18n>its kit bag</li>
         </ul>
-        <p>Its coaches and assistants stay in the club. You can't undo this.</p>
+        <p i18n>Its coaches and assistants stay in the club. You can't undo this.</p>
         @if (error(); as text) {
           <p class="cw-form-error" role="alert">{{ text }}</p>
         }
         <mat-form-field appearance="outline" class="cw-wide">
-          <mat-label>Type the team name to confirm</mat-label>
+          <mat-label i18n>Type the team name to confirm</mat-label>
           <input
             matInput
             [formControl]="typedName"
@@ -62,18 +62,19 @@ function sameName(typed: string, name: string): boolean {
             cdkFocusInitial
             data-testid="delete-team-name"
           />
-          <mat-hint>Type: {{ data.team.name }}</mat-hint>
-          <mat-error>Type {{ data.team.name }} to confirm.</mat-error>
+          <mat-hint i18n="What to type: the team's name">Type: {{ data.team.name }}</mat-hint>
+          <mat-error i18n>Type {{ data.team.name }} to confirm.</mat-error>
         </mat-form-field>
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-button type="button" mat-dialog-close>Keep team</button>
+        <button mat-button type="button" mat-dialog-close i18n>Keep team</button>
         <button
           mat-flat-button
           type="submit"
           class="cw-danger"
           [disabled]="busy()"
           data-testid="confirm-delete-team"
+          i18n
         >
           Delete team
         </button>
@@ -105,8 +106,8 @@ export class DeleteTeamDialog {
     this.data.playerCount === 0
       ? null
       : this.data.playerCount === 1
-        ? 'its 1 player'
-        : `its ${this.data.playerCount} players`;
+        ? $localize`:Goes with the deleted team:its 1 player`
+        : $localize`:Goes with the deleted team:its ${this.data.playerCount}:count: players`;
   protected readonly form = new FormGroup({ typedName: this.typedName });
 
   protected deleteTeam(): void {

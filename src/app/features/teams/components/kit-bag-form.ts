@@ -7,7 +7,12 @@ import type { KitBagDto } from '../../../../../shared/types';
 import { controlMessage } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
 
-export const KIT_LABELS = { balls: 'Balls', cones: 'Cones', bibs: 'Bibs', goals: 'Small goals' };
+export const KIT_LABELS = {
+  balls: $localize`Balls`,
+  cones: $localize`Cones`,
+  bibs: $localize`:Coloured vests players wear to show their side:Bibs`,
+  goals: $localize`Small goals`,
+};
 
 /** What is in the team's kit bag, as a form or, for those who may not change it, as plain figures. */
 @Component({
@@ -23,7 +28,7 @@ export const KIT_LABELS = { balls: 'Balls', cones: 'Cones', bibs: 'Bibs', goals:
             <mat-error>{{ message(form.controls[key], labels[key]) }}</mat-error>
           </mat-form-field>
         }
-        <div><button mat-flat-button type="submit">Save kit bag</button></div>
+        <div><button mat-flat-button type="submit" i18n>Save kit bag</button></div>
       </form>
     } @else {
       <dl class="cw-facts">

@@ -34,24 +34,36 @@ export interface PlayerDialogData {
     MatButtonModule,
   ],
   template: `
-    <h2 mat-dialog-title>{{ player ? 'Edit player' : 'Add a player' }}</h2>
+    <h2 mat-dialog-title>
+      @if (player) {
+        <ng-container i18n>Edit player</ng-container>
+      } @else {
+        <ng-container i18n>Add a player</ng-container>
+      }
+    </h2>
     <form [formGroup]="form" (ngSubmit)="save()" novalidate>
       <mat-dialog-content>
         @if (error(); as text) {
           <p class="cw-form-error" role="alert">{{ text }}</p>
         }
         <mat-form-field appearance="outline" class="cw-wide">
-          <mat-label>Name shown on plans</mat-label>
+          <mat-label i18n>Name shown on plans</mat-label>
           <input matInput formControlName="displayName" required cdkFocusInitial />
-          <mat-hint>A first name and initial is enough, e.g. "Sam T."</mat-hint>
-          <mat-error>{{ message(form.controls.displayName, 'Name') }}</mat-error>
+          <mat-hint i18n>A first name and initial is enough, e.g. "Sam T."</mat-hint>
+          <mat-error>{{ message(form.controls.displayName, nameLabel) }}</mat-error>
         </mat-form-field>
-        <mat-checkbox formControlName="goalkeeper">Goalkeeper</mat-checkbox>
+        <mat-checkbox formControlName="goalkeeper" i18n>Goalkeeper</mat-checkbox>
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-button type="button" mat-dialog-close>Cancel</button>
+        <button mat-button type="button" mat-dialog-close i18n>Cancel</button>
         <button mat-flat-button type="submit" [disabled]="saving()" data-testid="save-player">
-          {{ saving() ? 'Saving…' : player ? 'Save' : 'Add' }}
+          @if (saving()) {
+            <ng-container i18n>Saving…</ng-container>
+          } @else if (player) {
+            <ng-container i18n="Button that saves the changed player">Save</ng-container>
+          } @else {
+            <ng-container i18n="Button that adds the player to the squad">Add</ng-container>
+          }
         </button>
       </mat-dialog-actions>
     </form>
@@ -66,6 +78,8 @@ export class PlayerDialog {
   /** The player being edited; null when adding one. */
   protected readonly player = this.data.player;
   protected readonly message = controlMessage;
+  /** The name field as a refusal names it. */
+  protected readonly nameLabel = $localize`Name`;
   /** True from the tap on Add or Save until the server has answered. */
   protected readonly saving = signal(false);
   private readonly addKey = new RetryKey();
@@ -82,7 +96,7 @@ export class PlayerDialog {
     const value = this.form.getRawValue();
     const body = { ...value, displayName: value.displayName.trim() };
     const check = await checkAgainstSchema(this.form, this.player ? 'player-update' : 'player-create', body, {
-      displayName: 'Name',
+      displayName: this.nameLabel,
     });
     if (!check.ok) {
       this.saving.set(false);

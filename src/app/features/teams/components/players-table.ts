@@ -76,6 +76,18 @@ export class PlayersTable implements AfterViewInit {
     if (sort) this.dataSource.sort = sort;
   }
 
+  // Words with a value in an attribute are set here: a marked attribute with {{ }} on a plain
+  // element never reaches the page (angular/angular#43260).
+  /** What a screen reader says for a row's edit button. */
+  protected editLabel(player: PlayerDto): string {
+    return $localize`Edit ${player.displayName}:playerName:`;
+  }
+
+  /** What a screen reader says for a row's remove button. */
+  protected removeLabel(player: PlayerDto): string {
+    return $localize`Remove ${player.displayName}:playerName: from the squad`;
+  }
+
   protected applyFilter(text: string): void {
     this.filterText.set(text);
     this.dataSource.filter = text.trim().toLowerCase();

@@ -13,26 +13,30 @@ import { problemMessage } from '../../../core/http/problem-message';
   selector: 'cw-remove-player-dialog',
   imports: [MatDialogModule, MatButtonModule],
   template: `
-    <h2 mat-dialog-title>Remove {{ player.displayName }} from the squad?</h2>
+    <h2 mat-dialog-title i18n>Remove {{ player.displayName }} from the squad?</h2>
     <mat-dialog-content>
       <ul class="cw-consequences">
-        <li>{{ player.displayName }} goes off the player list and is no longer offered for new plans.</li>
-        <li>Past plans still show the name.</li>
-        <li>Their attendance ticks are deleted, so Team insight no longer counts them.</li>
+        <li i18n>
+          {{ player.displayName }} goes off the player list and is no longer offered for new plans.
+        </li>
+        <li i18n>Past plans still show the name.</li>
+        <li i18n>Their attendance ticks are deleted, so Team insight no longer counts them.</li>
       </ul>
       @if (player.active) {
-        <p class="cw-tip">
+        <p class="cw-tip" i18n>
           <strong>Only away for a while, say injured?</strong> Switch off <em>Active</em> instead: they stay
           on the list with their record and can come back any time.
         </p>
       }
-      <p>You can't undo this.</p>
+      <p i18n>You can't undo this.</p>
       @if (error(); as text) {
         <p class="cw-form-error" role="alert">{{ text }}</p>
       }
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" mat-dialog-close cdkFocusInitial>Keep {{ player.displayName }}</button>
+      <button mat-button type="button" mat-dialog-close cdkFocusInitial i18n>
+        Keep {{ player.displayName }}
+      </button>
       <button
         mat-flat-button
         type="button"
@@ -40,6 +44,7 @@ import { problemMessage } from '../../../core/http/problem-message';
         [disabled]="busy()"
         data-testid="confirm-remove-player"
         (click)="removePlayer()"
+        i18n
       >
         Remove player
       </button>

@@ -31,12 +31,13 @@ export interface ScheduleDialogData {
 /** Usual minutes a plan fills: a match warm-up, a training night. */
 const DEFAULT_MINUTES: Record<ScheduleKind, number> = { match: 20, training: 60 };
 
+/** Field names in the words a refusal uses ("Day is needed."). */
 const LABELS = {
-  date: 'Day',
-  startTime: 'Start time',
-  minutes: 'Minutes',
-  place: 'Place',
-  until: 'Last week',
+  date: $localize`Day`,
+  startTime: $localize`Start time`,
+  minutes: $localize`Minutes`,
+  place: $localize`Place`,
+  until: $localize`Last week`,
 };
 
 /**
@@ -58,41 +59,70 @@ const LABELS = {
     <h2 mat-dialog-title>{{ title }}</h2>
     <form [formGroup]="form" (ngSubmit)="save()" novalidate>
       <mat-dialog-content class="cw-fields">
-        <mat-button-toggle-group formControlName="kind" aria-label="Kind of session" class="cw-kind">
-          <mat-button-toggle value="training">Training</mat-button-toggle>
-          <mat-button-toggle value="match">Match</mat-button-toggle>
+        <mat-button-toggle-group
+          formControlName="kind"
+          i18n-aria-label
+          aria-label="Kind of session"
+          class="cw-kind"
+        >
+          <mat-button-toggle value="training" i18n="Kind of session: a training night"
+            >Training</mat-button-toggle
+          >
+          <mat-button-toggle value="match" i18n="Kind of session: a football match">Match</mat-button-toggle>
         </mat-button-toggle-group>
         <mat-form-field appearance="outline">
-          <mat-label>{{ repeat() ? 'First day' : 'Day' }}</mat-label>
+          <mat-label>
+            @if (repeat()) {
+              <ng-container i18n="Day of the first of the weekly sessions">First day</ng-container>
+            } @else {
+              <ng-container i18n="Day of the session">Day</ng-container>
+            }
+          </mat-label>
           <input matInput type="date" formControlName="date" data-testid="session-date" />
-          <mat-error>{{ message(form.controls.date, 'Day') }}</mat-error>
+          <mat-error>{{ message(form.controls.date, labels.date) }}</mat-error>
         </mat-form-field>
         <mat-form-field appearance="outline">
-          <mat-label>{{ isMatch() ? 'Kick-off' : 'Start time' }}</mat-label>
+          <mat-label>{{ startLabel() }}</mat-label>
           <input matInput type="time" formControlName="startTime" data-testid="session-time" />
-          <mat-error>{{ message(form.controls.startTime, isMatch() ? 'Kick-off' : 'Start time') }}</mat-error>
+          <mat-error>{{ message(form.controls.startTime, startLabel()) }}</mat-error>
         </mat-form-field>
         <mat-form-field appearance="outline">
-          <mat-label>{{ isMatch() ? 'Warm-up minutes' : 'Session minutes' }}</mat-label>
+          <mat-label>
+            @if (isMatch()) {
+              <ng-container i18n>Warm-up minutes</ng-container>
+            } @else {
+              <ng-container i18n>Session minutes</ng-container>
+            }
+          </mat-label>
           <input matInput type="number" inputmode="numeric" min="5" max="120" formControlName="minutes" />
-          <mat-hint>{{
-            isMatch() ? 'The warm-up Conewise plans before kick-off.' : 'How long the session runs.'
-          }}</mat-hint>
-          <mat-error>{{ message(form.controls.minutes, 'Minutes') }}</mat-error>
+          <mat-hint>
+            @if (isMatch()) {
+              <ng-container i18n>The warm-up Conewise plans before kick-off.</ng-container>
+            } @else {
+              <ng-container i18n>How long the session runs.</ng-container>
+            }
+          </mat-hint>
+          <mat-error>{{ message(form.controls.minutes, labels.minutes) }}</mat-error>
         </mat-form-field>
         <mat-form-field appearance="outline">
-          <mat-label>Place (optional)</mat-label>
-          <input matInput formControlName="place" maxlength="120" placeholder="e.g. Meadow Lane, pitch 2" />
-          <mat-error>{{ message(form.controls.place, 'Place') }}</mat-error>
+          <mat-label i18n="Where the session is held">Place (optional)</mat-label>
+          <input
+            matInput
+            formControlName="place"
+            maxlength="120"
+            i18n-placeholder="An example of a place: a ground and its pitch"
+            placeholder="e.g. Meadow Lane, pitch 2"
+          />
+          <mat-error>{{ message(form.controls.place, labels.place) }}</mat-error>
         </mat-form-field>
         @if (!data.session) {
-          <mat-checkbox formControlName="repeat" data-testid="session-repeat">Every week</mat-checkbox>
+          <mat-checkbox formControlName="repeat" data-testid="session-repeat" i18n>Every week</mat-checkbox>
           @if (repeat()) {
             <mat-form-field appearance="outline">
-              <mat-label>Until</mat-label>
+              <mat-label i18n="Last day the weekly session repeats on">Until</mat-label>
               <input matInput type="date" formControlName="until" data-testid="session-until" />
               <mat-hint>{{ countHint() }}</mat-hint>
-              <mat-error>{{ message(form.controls.until, 'Until') }}</mat-error>
+              <mat-error>{{ message(form.controls.until, untilLabel) }}</mat-error>
             </mat-form-field>
           }
         }
@@ -101,9 +131,13 @@ const LABELS = {
         }
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-button type="button" mat-dialog-close>Cancel</button>
+        <button mat-button type="button" mat-dialog-close i18n>Cancel</button>
         <button mat-flat-button type="submit" [disabled]="saving()" data-testid="session-save">
-          {{ data.session ? 'Save' : 'Add' }}
+          @if (data.session) {
+            <ng-container i18n="Button that saves the changed session">Save</ng-container>
+          } @else {
+            <ng-container i18n="Button that adds the session to the schedule">Add</ng-container>
+          }
         </button>
       </mat-dialog-actions>
     </form>
@@ -136,11 +170,14 @@ export class ScheduleDialog {
   protected readonly message = controlMessage;
   protected readonly saving = signal(false);
   protected readonly error = signal<string | null>(null);
+  protected readonly labels = LABELS;
+  /** The name the last-day field gives itself in a message. */
+  protected readonly untilLabel = $localize`Until`;
   protected readonly title = this.data.session
-    ? 'Change this session'
+    ? $localize`Change this session`
     : this.data.weekly
-      ? 'Add a weekly session'
-      : 'Add a session';
+      ? $localize`Add a weekly session`
+      : $localize`Add a session`;
 
   protected readonly form = inject(NonNullableFormBuilder).group({
     kind: [this.data.session?.kind ?? ('training' as ScheduleKind)],
@@ -158,13 +195,18 @@ export class ScheduleDialog {
   private readonly value = toSignal(this.form.valueChanges, { initialValue: this.form.getRawValue() });
   protected readonly isMatch = computed(() => this.value().kind === 'match');
   protected readonly repeat = computed(() => !!this.value().repeat);
+  /** A match starts at kick-off; a training night at its start time. */
+  protected readonly startLabel = computed(() => (this.isMatch() ? $localize`Kick-off` : LABELS.startTime));
   protected readonly countHint = computed(() => {
     const { date, until } = this.value();
-    if (!date || !until || until < date) return `Up to ${MAX_WEEKLY_SESSIONS} weeks at once.`;
+    if (!date || !until || until < date)
+      return $localize`Up to ${MAX_WEEKLY_SESSIONS}:maxWeeks: weeks at once.`;
     const count = weeklyDates(date, until).length;
-    return count > MAX_WEEKLY_SESSIONS
-      ? `That is more than ${MAX_WEEKLY_SESSIONS} weeks: choose an earlier day.`
-      : `Adds ${count} ${count === 1 ? 'session' : 'sessions'}, one a week.`;
+    if (count > MAX_WEEKLY_SESSIONS)
+      return $localize`That is more than ${MAX_WEEKLY_SESSIONS}:maxWeeks: weeks: choose an earlier day.`;
+    return count === 1
+      ? $localize`Adds 1 session, one a week.`
+      : $localize`Adds ${count}:count: sessions, one a week.`;
   });
 
   constructor() {
@@ -187,7 +229,7 @@ export class ScheduleDialog {
     };
     const weekly = !this.data.session && raw.repeat;
     if (weekly && !raw.until) {
-      this.form.controls.until.setErrors({ message: 'Choose the last week to repeat on.' });
+      this.form.controls.until.setErrors({ message: $localize`Choose the last week to repeat on.` });
       this.form.controls.until.markAsTouched();
       return;
     }

@@ -25,10 +25,16 @@ import { UnitChoice } from '../../../core/units/unit-choice';
 import { LEVEL_LABELS } from '../../../core/labels/plan-labels';
 import { AgeGroupLabelPipe } from '../../../shared/pipes/age-group-label';
 
+/** Field names in the words a refusal uses ("Team name is needed."). */
 const LABELS = {
-  name: 'Team name',
-  'usualSpace.width': 'Usual space width',
-  'usualSpace.length': 'Usual space length',
+  name: $localize`Team name`,
+  'usualSpace.width': $localize`Usual space width`,
+  'usualSpace.length': $localize`Usual space length`,
+};
+/** The two space fields' own names, under each field. */
+const SPACE_LABELS = {
+  width: $localize`:Width of the usual space:Width`,
+  length: $localize`:Length of the usual space:Length`,
 };
 
 /** The team's name, age group, level and the space it usually trains on: a form, or plain values. */
@@ -63,7 +69,7 @@ export class TeamDefaultsForm {
   /** False shows the values without a form: the member may not change this team. */
   readonly editable = input(true);
   /** Words on the submit button: "Save team details" on the team page, "Create team" when adding one. */
-  readonly submitLabel = input('Save team details');
+  readonly submitLabel = input($localize`Save team details`);
   /** The server schema the value must meet: creating a team asks for more than updating one. */
   readonly schemaName = input<'team-update' | 'team-create'>('team-update');
   /** Whether to offer a Cancel button (adding a team), which emits `dismiss`. */
@@ -79,6 +85,8 @@ export class TeamDefaultsForm {
   protected readonly levels = LEVELS;
   protected readonly levelLabels = LEVEL_LABELS;
   protected readonly message = controlMessage;
+  protected readonly labels = LABELS;
+  protected readonly spaceLabels = SPACE_LABELS;
   /** True while the value is checked against the schema, before `save` is emitted. */
   protected readonly checking = signal(false);
   /** The person's distance unit: the usual space is typed and shown in it, and kept in metres. */

@@ -87,6 +87,23 @@ export class TeamSchedule {
     });
   }
 
+  // Words with a value in an attribute are set here: a marked attribute with {{ }} on a plain
+  // element never reaches the page (angular/angular#43260).
+  /** What a screen reader says for the question that asks before a session is deleted. */
+  protected confirmLabel(session: ScheduledSessionDto): string {
+    return $localize`:Names the day of the session about to be deleted:Delete ${this.day(session.date)}:day:`;
+  }
+
+  /** What a screen reader says for a session's change button. */
+  protected changeLabel(session: ScheduledSessionDto): string {
+    return $localize`:Kind of session, and its day:Change ${this.kindLabels[session.kind]}:kind: on ${this.day(session.date)}:day:`;
+  }
+
+  /** What a screen reader says for a session's delete button. */
+  protected deleteLabel(session: ScheduledSessionDto): string {
+    return $localize`:Kind of session, and its day:Delete ${this.kindLabels[session.kind]}:kind: on ${this.day(session.date)}:day:`;
+  }
+
   protected open(session?: ScheduledSessionDto, weekly = false): void {
     this.dialog
       .open<ScheduleDialog, ScheduleDialogData, number>(ScheduleDialog, {
@@ -98,7 +115,13 @@ export class TeamSchedule {
       .afterClosed()
       .subscribe((count) => {
         if (!count) return;
-        this.say(session ? 'Session saved.' : count === 1 ? 'Session added.' : `${count} sessions added.`);
+        this.say(
+          session
+            ? $localize`Session saved.`
+            : count === 1
+              ? $localize`Session added.`
+              : $localize`${count}:count: sessions added.`,
+        );
         this.load();
       });
   }
@@ -111,7 +134,7 @@ export class TeamSchedule {
         this.busy.set(false);
         this.confirming.set(null);
         this.sessions.update((list) => list.filter((s) => s.id !== session.id));
-        this.say('Session deleted.');
+        this.say($localize`Session deleted.`);
       },
       error: (error: unknown) => {
         this.busy.set(false);
@@ -125,9 +148,9 @@ export class TeamSchedule {
     if (!url) return;
     try {
       await navigator.clipboard.writeText(url);
-      this.say('Calendar link copied.');
+      this.say($localize`Calendar link copied.`);
     } catch {
-      this.say('Copying is blocked here: press and hold the link to copy it.');
+      this.say($localize`Copying is blocked here: press and hold the link to copy it.`);
     }
   }
 
@@ -142,7 +165,9 @@ export class TeamSchedule {
         this.renewing.set(false);
         this.feedPath.set(calendar.path);
         this.say(
-          replacing ? 'New calendar link made; the old one no longer works.' : 'Calendar link turned on.',
+          replacing
+            ? $localize`New calendar link made; the old one no longer works.`
+            : $localize`Calendar link turned on.`,
         );
       },
       error: (error: unknown) => {
@@ -160,7 +185,7 @@ export class TeamSchedule {
         this.busy.set(false);
         this.renewing.set(false);
         this.feedPath.set(null);
-        this.say('Calendar link turned off.');
+        this.say($localize`Calendar link turned off.`);
       },
       error: (error: unknown) => {
         this.busy.set(false);

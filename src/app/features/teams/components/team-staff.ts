@@ -26,21 +26,29 @@ interface StaffRow {
   imports: [FormsModule, MatButtonModule, MatFormFieldModule, ...ICONS, MatSelectModule, RoleChip],
   template: `
     @if (rows().length === 0) {
-      <p class="cw-muted">Nobody is on this team’s staff yet.</p>
+      <p class="cw-muted" i18n>Nobody is on this team’s staff yet.</p>
     } @else {
       <ul class="cw-staff" data-testid="team-staff">
         @for (row of rows(); track row.member.userId) {
           <li>
             @if (confirming() === row.member.userId) {
-              <span class="cw-staff__ask">Take {{ row.member.name }} off {{ team().name }}?</span>
+              <span class="cw-staff__ask" i18n>Take {{ row.member.name }} off {{ team().name }}?</span>
               <span class="cw-staff__buttons">
-                <button mat-button type="button" (click)="confirming.set(null)">Keep</button>
+                <button
+                  mat-button
+                  type="button"
+                  (click)="confirming.set(null)"
+                  i18n="Button: keep this person on the team's staff"
+                >
+                  Keep
+                </button>
                 <button
                   mat-flat-button
                   type="button"
                   class="cw-staff__danger"
                   [disabled]="busy()"
                   (click)="removeStaff(row.member)"
+                  i18n="Button: take this person off the team's staff"
                 >
                   Take off
                 </button>
@@ -53,7 +61,7 @@ interface StaffRow {
                   mat-icon-button
                   type="button"
                   class="cw-staff__remove"
-                  [attr.aria-label]="'Take ' + row.member.name + ' off this team'"
+                  [attr.aria-label]="takeOffLabel(row.member)"
                   (click)="confirming.set(row.member.userId)"
                 >
                   <mat-icon svgIcon="person_remove" aria-hidden="true" />
@@ -67,7 +75,7 @@ interface StaffRow {
     @if (candidates().length > 0) {
       <div class="cw-staff__add">
         <mat-form-field appearance="outline" subscriptSizing="dynamic">
-          <mat-label>Add someone from the club</mat-label>
+          <mat-label i18n>Add someone from the club</mat-label>
           <mat-select [(ngModel)]="picked" data-testid="staff-pick">
             @for (member of candidates(); track member.userId) {
               <mat-option [value]="member.userId"
@@ -77,7 +85,7 @@ interface StaffRow {
           </mat-select>
         </mat-form-field>
         <button mat-flat-button type="button" [disabled]="!picked() || busy()" (click)="addStaff()">
-          <mat-icon svgIcon="person_add" aria-hidden="true" /> Add to staff
+          <mat-icon svgIcon="person_add" aria-hidden="true" /> <ng-container i18n>Add to staff</ng-container>
         </button>
       </div>
     } @else if (can()) {
@@ -175,9 +183,17 @@ export class TeamStaff {
 
   protected readonly noneToAdd = computed(() =>
     this.user()?.role === 'lead'
-      ? 'Everyone in the club is on this team. Invite more people from the Members page.'
-      : 'Every assistant in the club is on this team. Ask the head of coaching to invite more.',
+      ? $localize`Everyone in the club is on this team. Invite more people from the Members page.`
+      : $localize`Every assistant in the club is on this team. Ask the head of coaching to invite more.`,
   );
+
+  /**
+   * What a screen reader says for a row's take-off button. Set here, not as a marked attribute
+   * with {{ }}: on a plain element that never reaches the page (angular/angular#43260).
+   */
+  protected takeOffLabel(member: MemberDto): string {
+    return $localize`Take ${member.name}:memberName: off this team`;
+  }
 
   protected addStaff(): void {
     const userId = this.picked();
