@@ -8,7 +8,12 @@ export const LEVEL_LABELS: Record<Level, string> = {
   advanced: $localize`:squad level:Advanced`,
 };
 
-/** An age group as coaches write it: "U10" stays (the trade's own shorthand), "adult" reads "Adult". */
+/**
+ * An age group as coaches write it: "U10" (the trade's own shorthand in English, written the way
+ * each language's coaches do in its translation), "adult" reads "Adult".
+ */
 export function ageGroupLabel(ageGroup: AgeGroup): string {
-  return ageGroup === 'adult' ? $localize`:age group:Adult` : ageGroup;
+  if (ageGroup === 'adult') return $localize`:age group:Adult`;
+  const years = ageGroup.slice(1);
+  return $localize`:age group, players under this age:U${years}:years:`;
 }

@@ -213,7 +213,7 @@ export class TeamPage {
       this.say(
         name
           ? $localize`${name}:memberName: is no longer on ${team.name}:teamName:.`
-          : $localize`They is no longer on ${team.name}:teamName:.`,
+          : $localize`They are no longer on ${team.name}:teamName:.`,
       );
     }
   }
