@@ -14,12 +14,12 @@ export const routes: Routes = [
   {
     // Public and read-only: a parent helper opens one plan through a link, with no account.
     path: 'helper',
-    title: 'Helper’s view · Conewise',
+    title: $localize`:Browser tab title:Helper’s view · Conewise`,
     loadComponent: () => import('./features/helper-view/helper-view-page').then((m) => m.HelperViewPage),
   },
   {
     path: 'plans/:planId/pitch-side',
-    title: 'Pitch-side · Conewise',
+    title: $localize`:Browser tab title:Pitch-side · Conewise`,
     canActivate: [signedInGuard],
     loadComponent: () => import('./features/pitch-side/pitch-side-page').then((m) => m.PitchSidePage),
   },
@@ -31,67 +31,67 @@ export const routes: Routes = [
       {
         path: '',
         pathMatch: 'full',
-        title: 'This week · Conewise',
+        title: $localize`:Browser tab title:This week · Conewise`,
         loadComponent: () => import('./features/home/home-page').then((m) => m.HomePage),
       },
       {
         path: 'teams',
-        title: 'Teams · Conewise',
+        title: $localize`:Browser tab title:Teams · Conewise`,
         loadComponent: () => import('./features/teams/team-list-page').then((m) => m.TeamListPage),
       },
       {
         path: 'teams/:teamId',
-        title: 'Team · Conewise',
+        title: $localize`:Browser tab title:Team · Conewise`,
         loadComponent: () => import('./features/teams/team-page').then((m) => m.TeamPage),
       },
       {
         path: 'teams/:teamId/plans',
-        title: 'Past plans · Conewise',
+        title: $localize`:Browser tab title:Past plans · Conewise`,
         loadComponent: () => import('./features/plans/plan-history-page').then((m) => m.PlanHistoryPage),
       },
       {
         path: 'teams/:teamId/insight',
-        title: 'Team insight · Conewise',
+        title: $localize`:Browser tab title:Team insight · Conewise`,
         loadComponent: () => import('./features/insight/team-insight-page').then((m) => m.TeamInsightPage),
       },
       {
         path: 'library',
-        title: 'Activities · Conewise',
+        title: $localize`:Browser tab title:Activities · Conewise`,
         loadComponent: () => import('./features/library/library-page').then((m) => m.LibraryPage),
       },
       {
         path: 'plan/new',
-        title: 'Plan a session · Conewise',
+        title: $localize`:Browser tab title:Plan a session · Conewise`,
         canActivate: [roleGuard('lead', 'coach')],
         loadComponent: () => import('./features/planner/plan-wizard').then((m) => m.PlanWizard),
       },
       {
         path: 'plans/:planId',
-        title: 'Plan · Conewise',
+        title: $localize`:Browser tab title:Plan · Conewise`,
         resolve: { started: prefetchPlan },
         loadComponent: () => import('./features/plans/plan-page').then((m) => m.PlanPage),
       },
       {
         path: 'account',
-        title: 'Your account · Conewise',
+        title: $localize`:Browser tab title:Your account · Conewise`,
         loadComponent: () => import('./features/account/account-page').then((m) => m.AccountPage),
       },
       {
         path: 'club/rules',
-        title: 'Club rules · Conewise',
+        title: $localize`:Browser tab title:Club rules · Conewise`,
         canActivate: [roleGuard('lead')],
         loadComponent: () => import('./features/club-rules/club-rules-page').then((m) => m.ClubRulesPage),
       },
       {
         path: 'club/members',
-        title: 'Members · Conewise',
+        title: $localize`:Browser tab title:Members · Conewise`,
         canActivate: [roleGuard('lead')],
         loadComponent: () => import('./features/members/members-page').then((m) => m.MembersPage),
       },
       {
         // For the head of coaching; monitoring asks /api/health itself, which stays public.
         path: 'status',
-        title: 'Is Conewise working? · Conewise',
+        title: $localize`:Browser tab title:Is Conewise working? · Conewise`,
         canActivate: [roleGuard('lead')],
         loadComponent: () => import('./features/status/status-page').then((m) => m.StatusPage),
       },
@@ -104,39 +104,39 @@ export const routes: Routes = [
     children: [
       {
         path: 'sign-in',
-        title: 'Sign in · Conewise',
+        title: $localize`:Browser tab title:Sign in · Conewise`,
         canActivate: [signedOutGuard],
         component: SignInPage,
       },
       {
         path: 'create-club',
-        title: 'Create a club · Conewise',
+        title: $localize`:Browser tab title:Create a club · Conewise`,
         canActivate: [signedOutGuard],
         loadComponent: () => import('./features/auth/create-club-page').then((m) => m.CreateClubPage),
       },
       {
         path: 'reset-password',
-        title: 'Choose a new password · Conewise',
+        title: $localize`:Browser tab title:Choose a new password · Conewise`,
         loadComponent: () => import('./features/auth/reset-password-page').then((m) => m.ResetPasswordPage),
       },
       {
         // The invitation e-mail's link: /join#<token> (the fragment never reaches a server).
         path: 'join',
-        title: 'Join your club · Conewise',
+        title: $localize`:Browser tab title:Join your club · Conewise`,
         loadComponent: () =>
           import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
       },
       {
         // Links e-mailed before the token moved into the fragment.
         path: 'invitations/:tokenInPath',
-        title: 'Join your club · Conewise',
+        title: $localize`:Browser tab title:Join your club · Conewise`,
         loadComponent: () =>
           import('./features/auth/accept-invitation-page').then((m) => m.AcceptInvitationPage),
       },
       {
         // The link mailed to a new account's address: /confirm-email#<token>.
         path: 'confirm-email',
-        title: 'Confirm your e-mail address · Conewise',
+        title: $localize`:Browser tab title:Confirm your e-mail address · Conewise`,
         loadComponent: () => import('./features/auth/confirm-email-page').then((m) => m.ConfirmEmailPage),
       },
     ],

@@ -12,7 +12,7 @@ import { LoadingState } from './core/http/loading-state';
   imports: [RouterOutlet],
   template: `
     @if (loading.busy()) {
-      <div class="cw-progress cw-no-print" role="progressbar" aria-label="Loading">
+      <div class="cw-progress cw-no-print" role="progressbar" aria-label="Loading" i18n-aria-label>
         <div class="cw-progress__bar"></div>
       </div>
     }

@@ -11,7 +11,10 @@ import { problemFieldErrors, problemMessage } from '../http/problem-message';
 import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
 import { AuthStore } from './auth-store';
 
-const LABELS = { currentPassword: 'Current password', newPassword: 'New password' } as const;
+const LABELS = {
+  currentPassword: $localize`Current password`,
+  newPassword: $localize`New password`,
+} as const;
 
 /**
  * A new password, given the current one. The server ends every session of the person with it;
@@ -21,15 +24,15 @@ const LABELS = { currentPassword: 'Current password', newPassword: 'New password
   selector: 'cw-change-password-dialog',
   imports: [ReactiveFormsModule, MatDialogModule, MatButtonModule, MatFormFieldModule, MatInputModule],
   template: `
-    <h2 mat-dialog-title>Change password</h2>
+    <h2 mat-dialog-title i18n>Change password</h2>
     @if (done()) {
       <mat-dialog-content>
-        <p role="status" data-testid="password-changed">
+        <p role="status" data-testid="password-changed" i18n>
           Your password is changed. Every other phone, tablet or computer signed in as you is now signed out.
         </p>
       </mat-dialog-content>
       <mat-dialog-actions align="end">
-        <button mat-flat-button type="button" mat-dialog-close cdkFocusInitial>Done</button>
+        <button mat-flat-button type="button" mat-dialog-close cdkFocusInitial i18n>Done</button>
       </mat-dialog-actions>
     } @else {
       <form [formGroup]="form" (ngSubmit)="save()" novalidate>
@@ -47,7 +50,7 @@ const LABELS = { currentPassword: 'Current password', newPassword: 'New password
           <mat-form-field appearance="outline" subscriptSizing="dynamic">
             <mat-label>{{ labels.newPassword }}</mat-label>
             <input matInput type="password" formControlName="newPassword" autocomplete="new-password" />
-            <mat-hint>{{ passwordHint }} Other devices will be signed out.</mat-hint>
+            <mat-hint i18n>{{ passwordHint }} Other devices will be signed out.</mat-hint>
             <mat-error>{{ message('newPassword') }}</mat-error>
           </mat-form-field>
           @if (error(); as text) {
@@ -55,9 +58,13 @@ const LABELS = { currentPassword: 'Current password', newPassword: 'New password
           }
         </mat-dialog-content>
         <mat-dialog-actions align="end">
-          <button mat-button type="button" mat-dialog-close>Cancel</button>
+          <button mat-button type="button" mat-dialog-close i18n>Cancel</button>
           <button mat-flat-button type="submit" [disabled]="busy()" data-testid="change-password">
-            {{ busy() ? 'Changing…' : 'Change password' }}
+            @if (busy()) {
+              <ng-container i18n>Changing…</ng-container>
+            } @else {
+              <ng-container i18n>Change password</ng-container>
+            }
           </button>
         </mat-dialog-actions>
       </form>
@@ -95,7 +102,7 @@ export class ChangePasswordDialog {
     const { currentPassword, newPassword } = this.form.getRawValue();
     if (newPassword && newPassword === currentPassword)
       this.form.controls.newPassword.setErrors({
-        message: 'The new password must differ from the current one.',
+        message: $localize`The new password must differ from the current one.`,
       });
     this.form.markAllAsTouched();
     if (this.form.invalid) return;
@@ -119,7 +126,7 @@ export class ChangePasswordDialog {
             Object.entries(problemFieldErrors(error)).map(([field, text]) => [
               field,
               field in LABELS && /^[a-z]/.test(text)
-                ? `${LABELS[field as keyof typeof LABELS]} ${text}.`
+                ? $localize`:A field's name, then the server's words about it:${LABELS[field as keyof typeof LABELS]}:field: ${text}:problem:.`
                 : text,
             ]),
           );

@@ -21,30 +21,39 @@ export interface SignOutDialogData {
   selector: 'cw-sign-out-dialog',
   imports: [MatDialogModule, MatButtonModule],
   template: `
-    <h2 mat-dialog-title>{{ data.everywhere ? 'Sign out on every device?' : 'Sign out?' }}</h2>
+    <h2 mat-dialog-title>
+      @if (data.everywhere) {
+        <ng-container i18n>Sign out on every device?</ng-container>
+      } @else {
+        <ng-container i18n>Sign out?</ng-container>
+      }
+    </h2>
     <mat-dialog-content>
       <ul class="cw-consequences">
         @if (data.everywhere) {
-          <li>Every phone, tablet and computer signed in as you is signed out, this one too.</li>
+          <li i18n>Every phone, tablet and computer signed in as you is signed out, this one too.</li>
         }
-        <li>Plans, players and pitch-side records kept on this device are cleared from it.</li>
+        <li i18n>Plans, players and pitch-side records kept on this device are cleared from it.</li>
         @if (data.unsent) {
-          <li data-testid="unsent-warning">
-            <strong>
-              {{ data.unsent === 1 ? '1 pitch-side change has' : data.unsent + ' pitch-side changes have' }}
+          <li data-testid="unsent-warning" i18n>
+            <strong
+              >{data.unsent, plural,
+                =1 {1 pitch-side change has}
+                other {{{ data.unsent }} pitch-side changes have}
+              }
               not reached the server yet</strong
             >
-            and will be lost. Wait for a connection to send {{ data.unsent === 1 ? 'it' : 'them' }} first.
+            and will be lost. Wait for a connection to send {data.unsent, plural, =1 {it} other {them}} first.
           </li>
         }
-        <li>Everything saved in the club stays.</li>
+        <li i18n>Everything saved in the club stays.</li>
       </ul>
       @if (error(); as text) {
         <p class="cw-form-error" role="alert">{{ text }}</p>
       }
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" mat-dialog-close cdkFocusInitial>Stay signed in</button>
+      <button mat-button type="button" mat-dialog-close cdkFocusInitial i18n>Stay signed in</button>
       <button
         mat-flat-button
         type="button"
@@ -53,7 +62,13 @@ export interface SignOutDialogData {
         (click)="confirm()"
         data-testid="confirm-sign-out"
       >
-        {{ busy() ? 'Signing out…' : data.everywhere ? 'Sign out everywhere' : 'Sign out' }}
+        @if (busy()) {
+          <ng-container i18n>Signing out…</ng-container>
+        } @else if (data.everywhere) {
+          <ng-container i18n>Sign out everywhere</ng-container>
+        } @else {
+          <ng-container i18n="Signs the person out of this device">Sign out</ng-container>
+        }
       </button>
     </mat-dialog-actions>
   `,

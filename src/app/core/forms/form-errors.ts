@@ -34,14 +34,15 @@ export function controlMessage(control: AbstractControl | null, label: string): 
   if (!control || !control.errors) return null;
   const errors = control.errors;
   if (typeof errors['message'] === 'string') return errors['message'];
-  if (errors['notNumber']) return `${label} must be a number, written in digits.`;
-  if (errors['required']) return `${label} is needed.`;
-  if (errors['email']) return `${label} must be an e-mail address like name@example.org.`;
-  if (errors['min']) return `${label} must be at least ${errors['min'].min}.`;
-  if (errors['max']) return `${label} must be at most ${errors['max'].max}.`;
-  if (errors['above']) return `${label} must be more than ${errors['above'].above}.`;
-  if (errors['below']) return `${label} must be less than ${errors['below'].below}.`;
-  if (errors['wholeNumber']) return `${label} must be a whole number.`;
-  if (errors['minlength']) return `${label} needs at least ${errors['minlength'].requiredLength} characters.`;
-  return `${label} is not valid.`;
+  if (errors['notNumber']) return $localize`${label}:field: must be a number, written in digits.`;
+  if (errors['required']) return $localize`${label}:field: is needed.`;
+  if (errors['email']) return $localize`${label}:field: must be an e-mail address like name@example.org.`;
+  if (errors['min']) return $localize`${label}:field: must be at least ${errors['min'].min}:limit:.`;
+  if (errors['max']) return $localize`${label}:field: must be at most ${errors['max'].max}:limit:.`;
+  if (errors['above']) return $localize`${label}:field: must be more than ${errors['above'].above}:limit:.`;
+  if (errors['below']) return $localize`${label}:field: must be less than ${errors['below'].below}:limit:.`;
+  if (errors['wholeNumber']) return $localize`${label}:field: must be a whole number.`;
+  if (errors['minlength'])
+    return $localize`${label}:field: needs at least ${errors['minlength'].requiredLength}:limit: characters.`;
+  return $localize`${label}:field: is not valid.`;
 }

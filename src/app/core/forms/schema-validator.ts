@@ -68,41 +68,44 @@ function plainMessage(error: ErrorObject, label: string): string {
   const params = error.params as Record<string, unknown>;
   switch (error.keyword) {
     case 'required':
-      return `${label} is needed.`;
+      return $localize`${label}:field: is needed.`;
     case 'minLength':
       return params['limit'] === 1
-        ? `${label} is needed.`
-        : `${label} needs at least ${params['limit']} characters.`;
+        ? $localize`${label}:field: is needed.`
+        : $localize`${label}:field: needs at least ${params['limit']}:limit: characters.`;
     case 'maxLength':
-      return `${label} can have at most ${params['limit']} characters.`;
+      return $localize`${label}:field: can have at most ${params['limit']}:limit: characters.`;
     case 'minimum':
-      return `${label} must be at least ${params['limit']}.`;
+      return $localize`${label}:field: must be at least ${params['limit']}:limit:.`;
     case 'maximum':
-      return `${label} must be at most ${params['limit']}.`;
+      return $localize`${label}:field: must be at most ${params['limit']}:limit:.`;
     case 'exclusiveMinimum':
-      return `${label} must be more than ${params['limit']}.`;
+      return $localize`${label}:field: must be more than ${params['limit']}:limit:.`;
     case 'minItems':
-      return `${label}: pick at least ${params['limit']}.`;
+      return $localize`${label}:field:: pick at least ${params['limit']}:limit:.`;
     case 'maxItems':
-      return `${label}: at most ${params['limit']}.`;
+      return $localize`${label}:field:: at most ${params['limit']}:limit:.`;
     case 'type':
-      return params['type'] === 'integer' || params['type'] === 'number'
-        ? `${label} must be a number${params['type'] === 'integer' ? ' without decimals' : ''}.`
-        : `${label} is not filled in the right way.`;
+      if (params['type'] === 'integer') return $localize`${label}:field: must be a number without decimals.`;
+      if (params['type'] === 'number') return $localize`${label}:field: must be a number.`;
+      return $localize`${label}:field: is not filled in the right way.`;
     case 'multipleOf':
-      return `${label} must be a whole number.`;
+      return $localize`${label}:field: must be a whole number.`;
     case 'enum':
-      return `${label}: choose one of the options.`;
+      return $localize`${label}:field:: choose one of the options.`;
     case 'format':
-      if (params['format'] === 'email') return `${label} must be an e-mail address like name@example.org.`;
-      if (params['format'] === 'date') return `${label} must be a date.`;
-      if (params['format'] === 'time') return `${label} must be a time like 10:30.`;
-      return `${label} is not in the expected form.`;
+      if (params['format'] === 'email')
+        return $localize`${label}:field: must be an e-mail address like name@example.org.`;
+      if (params['format'] === 'date') return $localize`${label}:field: must be a date.`;
+      if (params['format'] === 'time') return $localize`${label}:field: must be a time like 10:30.`;
+      return $localize`${label}:field: is not in the expected form.`;
     case 'pattern': {
       const description = (error.parentSchema as { description?: string } | undefined)?.description;
-      return description ? `${label}: ${description}` : `${label} is not in the expected form.`;
+      return description
+        ? $localize`:A field's name, then the schema's words on how to write it:${label}:field:: ${description}:rule:`
+        : $localize`${label}:field: is not in the expected form.`;
     }
     default:
-      return `${label} is not valid.`;
+      return $localize`${label}:field: is not valid.`;
   }
 }

@@ -7,7 +7,8 @@ import type { ProblemDto } from '../../../../shared/types';
  */
 export function problemMessage(error: unknown, { fields: withFields = true } = {}): string {
   if (error instanceof HttpErrorResponse) {
-    if (error.status === 0) return 'Conewise cannot reach the server. Check the connection and try again.';
+    if (error.status === 0)
+      return $localize`Conewise cannot reach the server. Check the connection and try again.`;
     const problem = error.error as Partial<ProblemDto> | null;
     if (problem && typeof problem === 'object') {
       const fields = withFields
@@ -17,12 +18,12 @@ export function problemMessage(error: unknown, { fields: withFields = true } = {
       if (head && fields) return `${head} (${fields})`;
       if (head) return head;
     }
-    if (error.status === 403) return 'Your role in the club does not allow this.';
-    if (error.status === 404) return 'That was not found. It may have been removed.';
+    if (error.status === 403) return $localize`Your role in the club does not allow this.`;
+    if (error.status === 404) return $localize`That was not found. It may have been removed.`;
     if (error.status >= 500)
-      return 'Something went wrong on the server. Nothing you saved was lost; try again.';
+      return $localize`Something went wrong on the server. Nothing you saved was lost; try again.`;
   }
-  return 'Something went wrong. Try again.';
+  return $localize`Something went wrong. Try again.`;
 }
 
 /** Field errors of a 400 problem, keyed by field name, for showing under form inputs. */

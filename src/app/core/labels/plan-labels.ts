@@ -4,6 +4,6 @@ export { ACTIVITY_KIND_LABELS, ageGroupLabel, FOCUS_LABELS, LEVEL_LABELS } from 
 
 /** Words shown for the engine's codes. */
 export const KIND_LABELS: Record<PlanKind, string> = {
-  'match-warm-up': 'Match warm-up',
-  training: 'Training session',
+  'match-warm-up': $localize`Match warm-up`,
+  training: $localize`Training session`,
 };

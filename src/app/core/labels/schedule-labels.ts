@@ -5,13 +5,13 @@ import { isoDate } from '../time/dates';
 
 /** Words for a scheduled session's kind. */
 export const SCHEDULE_KIND_LABELS: Record<ScheduleKind, string> = {
-  training: 'Training',
-  match: 'Match',
+  training: $localize`:Kind of scheduled session:Training`,
+  match: $localize`:Kind of scheduled session:Match`,
 };
 
 /** "Today", "Tomorrow" or "Thu 3 Dec" (in the browser's locale) for a YYYY-MM-DD day. */
 export function sessionDay(date: string, today = isoDate(new Date())): string {
-  if (date === today) return 'Today';
-  if (date === addDays(today, 1)) return 'Tomorrow';
+  if (date === today) return $localize`Today`;
+  if (date === addDays(today, 1)) return $localize`Tomorrow`;
   return dayWords(date);
 }

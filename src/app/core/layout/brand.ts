@@ -6,9 +6,14 @@ import { RouterLink } from '@angular/router';
   selector: 'cw-brand',
   imports: [RouterLink],
   template: `
-    <a class="cw-brand" routerLink="/" aria-label="Conewise, this week">
+    <a
+      class="cw-brand"
+      routerLink="/"
+      aria-label="Conewise, this week"
+      i18n-aria-label="Link to the This week page"
+    >
       <img src="assets/favicon.svg" alt="" width="28" height="28" />
-      <span>Conewise</span>
+      <span i18n="The product's name">Conewise</span>
     </a>
   `,
   styles: `

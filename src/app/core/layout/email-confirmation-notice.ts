@@ -14,8 +14,13 @@ import { problemMessage } from '../http/problem-message';
   imports: [MatButtonModule],
   template: `
     @if (email(); as address) {
-      <aside class="cw-confirm-notice cw-no-print" aria-label="E-mail address" data-testid="confirm-notice">
-        <p>
+      <aside
+        class="cw-confirm-notice cw-no-print"
+        aria-label="E-mail address"
+        i18n-aria-label
+        data-testid="confirm-notice"
+      >
+        <p i18n>
           <strong>Confirm your e-mail address.</strong> Open the link we sent to {{ address }}. Until then you
           can plan, but not invite people or e-mail plans.
         </p>
@@ -29,7 +34,11 @@ import { problemMessage } from '../http/problem-message';
             (click)="resend()"
             data-testid="confirm-resend"
           >
-            {{ sending() ? 'Sending…' : 'Send the link again' }}
+            @if (sending()) {
+              <ng-container i18n>Sending…</ng-container>
+            } @else {
+              <ng-container i18n>Send the link again</ng-container>
+            }
           </button>
         }
       </aside>

@@ -12,11 +12,31 @@ export interface NavItem {
 
 /** The main navigation, in the order a coach's week runs. */
 export const NAV_ITEMS: NavItem[] = [
-  { label: 'This week', icon: 'calendar_view_week', link: '/' },
-  { label: 'Plan a session', icon: 'add_task', link: '/plan/new', roles: ['lead', 'coach'] },
-  { label: 'Teams', icon: 'groups', link: '/teams' },
-  { label: 'Activities', icon: 'local_library', link: '/library' },
-  { label: 'Club rules', icon: 'rule_settings', link: '/club/rules', roles: ['lead'] },
-  { label: 'Members', icon: 'manage_accounts', link: '/club/members', roles: ['lead'] },
-  { label: 'Is Conewise working?', icon: 'monitor_heart', link: '/status', roles: ['lead'] },
+  { label: $localize`:Main navigation entry:This week`, icon: 'calendar_view_week', link: '/' },
+  {
+    label: $localize`:Main navigation entry:Plan a session`,
+    icon: 'add_task',
+    link: '/plan/new',
+    roles: ['lead', 'coach'],
+  },
+  { label: $localize`:Main navigation entry:Teams`, icon: 'groups', link: '/teams' },
+  { label: $localize`:Main navigation entry:Activities`, icon: 'local_library', link: '/library' },
+  {
+    label: $localize`:Main navigation entry:Club rules`,
+    icon: 'rule_settings',
+    link: '/club/rules',
+    roles: ['lead'],
+  },
+  {
+    label: $localize`:Main navigation entry:Members`,
+    icon: 'manage_accounts',
+    link: '/club/members',
+    roles: ['lead'],
+  },
+  {
+    label: $localize`:Main navigation entry:Is Conewise working?`,
+    icon: 'monitor_heart',
+    link: '/status',
+    roles: ['lead'],
+  },
 ];

@@ -17,14 +17,21 @@ import {
 } from '../../../../shared/time/locale-format';
 import { parseClock } from '../../../../shared/time/session-clock';
 
-/** The browser's locale, canonical ("en-US"); en-GB when the browser gives none usable. */
+/**
+ * The browser's locale, canonical ("en-US"); en-GB when the browser gives none usable. When the
+ * app is shown in another language than the browser's (a coach chose Spanish on an English
+ * phone), the app's language (`<html lang>`, set by each language's build) so dates read in it.
+ */
 export function browserLocale(): string {
-  return usableLocale(globalThis.navigator?.language);
+  const browser = usableLocale(globalThis.navigator?.language);
+  const page = globalThis.document?.documentElement.lang;
+  if (!page || page.split('-')[0]!.toLowerCase() === browser.split('-')[0]!.toLowerCase()) return browser;
+  return usableLocale(page);
 }
 
 /** "Tue 1 Dec" (en-GB), "Tue, Dec 1" (en-US) for a YYYY-MM-DD day; "No date" without one. */
 export function dayWords(date: string | null | undefined, style: DayStyle = 'short-day'): string {
-  return date ? dayText(date, browserLocale(), style) : 'No date';
+  return date ? dayText(date, browserLocale(), style) : $localize`No date`;
 }
 
 /** Minutes since midnight as a clock time: "18:05" (en-GB), "6:05 PM" (en-US). */

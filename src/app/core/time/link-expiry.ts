@@ -7,7 +7,8 @@ import { momentClockWords, momentDayWords, momentWords } from '../locale/locale-
 export function untilWords(expiresAt: string): string {
   const end = new Date(expiresAt);
   if (end.getHours() === 0 && end.getMinutes() === 0) {
-    return `the end of ${momentDayWords(new Date(end.getTime() - 60_000))}`;
+    const day = momentDayWords(new Date(end.getTime() - 60_000));
+    return $localize`:When a link stops working, e.g. the end of Wed 9 Dec:the end of ${day}:day:`;
   }
   return `${momentDayWords(end)}, ${momentClockWords(end)}`;
 }

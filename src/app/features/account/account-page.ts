@@ -17,7 +17,7 @@ import { ICONS } from '../../core/icons/shipped-icon';
 import { ROLE_LABELS } from '../../core/labels/role-labels';
 import { OwnUnits } from './own-units';
 
-const LABELS = { name: 'Your name' } as const;
+const LABELS = { name: $localize`Your name` } as const;
 
 /**
  * The signed-in person's own page: their name (which they change here), e-mail address, club and
@@ -91,7 +91,9 @@ export class AccountPage {
         const fields = Object.fromEntries(
           Object.entries(problemFieldErrors(error)).map(([field, text]) => [
             field,
-            field === 'name' ? `${LABELS.name} ${text}.` : text,
+            field === 'name'
+              ? $localize`:A field's name, then the server's words about it:${LABELS.name}:field: ${text}:problem:.`
+              : text,
           ]),
         );
         const unmatched = applyFieldErrors(this.form, fields);

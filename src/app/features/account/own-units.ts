@@ -4,7 +4,10 @@ import { AuthApi } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { FOLLOW_CLUB, UnitFields, unitProblem, type UnitPick } from '../../shared/components/unit-fields';
 
-const FIELD_WORDS: Record<string, string> = { distanceUnit: 'Distances', temperatureUnit: 'Temperatures' };
+const FIELD_WORDS: Record<string, string> = {
+  distanceUnit: $localize`Distances`,
+  temperatureUnit: $localize`Temperatures`,
+};
 
 /**
  * The person's own units on their account page: each follows the club's setting until they pick
@@ -14,8 +17,8 @@ const FIELD_WORDS: Record<string, string> = { distanceUnit: 'Distances', tempera
   selector: 'cw-own-units',
   imports: [UnitFields],
   template: `
-    <h2>Units</h2>
-    <p class="cw-muted">
+    <h2 i18n>Units</h2>
+    <p class="cw-muted" i18n>
       How you read and type distances and temperatures: on plans, the printed card and in e-mails you send.
       Plans are the same whatever you choose.
     </p>
@@ -29,7 +32,7 @@ const FIELD_WORDS: Record<string, string> = { distanceUnit: 'Distances', tempera
     />
     <div aria-live="polite">
       @if (saved()) {
-        <p role="status" class="cw-muted" data-testid="units-saved">Saved: {{ savedWords() }}.</p>
+        <p role="status" class="cw-muted" data-testid="units-saved" i18n>Saved: {{ savedWords() }}.</p>
       }
       @if (error(); as text) {
         <p class="cw-form-error" role="alert">{{ text }}</p>
@@ -52,7 +55,9 @@ export class OwnUnits {
   protected readonly savedWords = computed(() => {
     const units = this.auth.user()?.units;
     if (!units) return '';
-    return `${DISTANCE_UNIT_WORDS[units.distance].toLowerCase()} and ${TEMPERATURE_UNIT_WORDS[units.temperature]}`;
+    const distance = DISTANCE_UNIT_WORDS[units.distance].toLowerCase();
+    const temperature = TEMPERATURE_UNIT_WORDS[units.temperature];
+    return $localize`:The units a person reads, e.g. yards and °F:${distance}:distance: and ${temperature}:temperature:`;
   });
 
   /** Saves one choice ("club" goes back to following the club). */

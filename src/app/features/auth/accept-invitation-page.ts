@@ -14,7 +14,7 @@ import { problemFieldErrors, problemMessage } from '../../core/http/problem-mess
 import { ROLE_IN_A_SENTENCE } from '../../core/labels/role-labels';
 import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
 
-const LABELS = { name: 'Your name', password: 'Password' };
+const LABELS = { name: $localize`Your name`, password: $localize`Password` };
 
 /** The page an invitation link opens: the invitee sets their name and password and joins. */
 @Component({
@@ -68,13 +68,15 @@ export class AcceptInvitationPage {
     effect(() => {
       const token = this.token();
       if (!token) {
-        this.linkProblem.set('This invitation link is not complete. Open it again from the e-mail, whole.');
+        this.linkProblem.set(
+          $localize`This invitation link is not complete. Open it again from the e-mail, whole.`,
+        );
         return;
       }
       this.linkProblem.set(null);
       this.authApi.lookupInvitation(token).subscribe({
         next: (found) => this.invitation.set(found),
-        error: () => this.linkProblem.set('This invitation link has been used or has expired.'),
+        error: () => this.linkProblem.set($localize`This invitation link has been used or has expired.`),
       });
     });
   }

@@ -12,7 +12,12 @@ import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
 
-const LABELS = { clubName: 'Club name', name: 'Your name', email: 'E-mail', password: 'Password' };
+const LABELS = {
+  clubName: $localize`Club name`,
+  name: $localize`Your name`,
+  email: $localize`E-mail`,
+  password: $localize`Password`,
+};
 
 /** Creates a club with the person signing up as its lead. */
 @Component({

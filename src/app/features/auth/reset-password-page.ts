@@ -12,7 +12,7 @@ import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
 
-const LABELS = { email: 'E-mail', password: 'New password' } as const;
+const LABELS = { email: $localize`E-mail`, password: $localize`New password` } as const;
 
 /**
  * A forgotten password: ask for a link by e-mail, then, opened from that link, choose a new one.

@@ -14,6 +14,9 @@ import { problemFieldErrors, problemMessage } from '../../core/http/problem-mess
 
 type Field = 'email' | 'password';
 
+/** The fields' names, as their labels say. */
+const LABELS: Record<Field, string> = { email: $localize`E-mail`, password: $localize`Password` };
+
 /** The same reading of an address as Angular's e-mail validator (WHATWG's "valid e-mail address"). */
 const EMAIL =
   /^(?=.{1,254}$)(?=.{1,64}@)[a-zA-Z0-9!#$%&'*+/=?^_`{|}~-]+(?:\.[a-zA-Z0-9!#$%&'*+/=?^_`{|}~-]+)*@[a-zA-Z0-9](?:[a-zA-Z0-9-]{0,61}[a-zA-Z0-9])?(?:\.[a-zA-Z0-9](?:[a-zA-Z0-9-]{0,61}[a-zA-Z0-9])?)*$/;
@@ -56,9 +59,10 @@ export class SignInPage {
   private check(): Partial<Record<Field, string>> {
     const errors: Partial<Record<Field, string>> = {};
     const email = this.email().trim();
-    if (!email) errors.email = 'E-mail is needed.';
-    else if (!EMAIL.test(email)) errors.email = 'E-mail must be an e-mail address like name@example.org.';
-    if (!this.password()) errors.password = 'Password is needed.';
+    if (!email) errors.email = $localize`${LABELS.email}:field: is needed.`;
+    else if (!EMAIL.test(email))
+      errors.email = $localize`${LABELS.email}:field: must be an e-mail address like name@example.org.`;
+    if (!this.password()) errors.password = $localize`${LABELS.password}:field: is needed.`;
     return errors;
   }
 

@@ -9,7 +9,6 @@ import { ICONS } from '../../core/icons/shipped-icon';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { dayWords, timeWords } from '../../core/locale/locale-format';
 import { untilWords } from '../../core/time/link-expiry';
-import { GIVEN_TIME_IN_A_SENTENCE } from '../../../../shared/time/session-clock';
 import { PhaseTimeline } from '../plans/components/phase-timeline';
 import { PlanNotices } from '../plans/components/plan-notices';
 import { StationCard } from '../plans/components/station-card';
@@ -89,7 +88,7 @@ export class HelperViewPage {
     if (!token) {
       this.loaded.set({
         state: 'unknown',
-        message: 'This link is not complete. Open the whole link from the message the coach sent.',
+        message: $localize`This link is not complete. Open the whole link from the message the coach sent.`,
       });
       return;
     }
@@ -111,6 +110,10 @@ export class HelperViewPage {
   protected when(view: HelperViewDto): string {
     if (!view.date) return '';
     const day = dayWords(view.date, 'long-day');
-    return view.kickOff ? `${day}, ${GIVEN_TIME_IN_A_SENTENCE[view.kind]} ${timeWords(view.kickOff)}` : day;
+    if (!view.kickOff) return day;
+    const time = timeWords(view.kickOff);
+    return view.kind === 'match-warm-up'
+      ? $localize`:The day of a match warm-up and its kick-off time:${day}:day:, kick-off ${time}:time:`
+      : $localize`:The day of a training session and its start time:${day}:day:, start ${time}:time:`;
   }
 }

@@ -19,14 +19,14 @@ import { ICONS } from '../../core/icons/shipped-icon';
       <div class="cw-no-team" role="status" data-testid="no-team-yet">
         <mat-icon svgIcon="group_add" aria-hidden="true" />
         <div>
-          <p class="cw-no-team__head">You’re not on a team yet.</p>
-          <p>
-            Ask {{ leads() || 'your club’s head of coaching' }} to add you to your team. Once you are on it,
-            its players and plans show up here.
+          <p class="cw-no-team__head" i18n>You’re not on a team yet.</p>
+          <p i18n>
+            Ask {{ whom() }} to add you to your team. Once you are on it, its players and plans show up here.
           </p>
           @if (isCoach()) {
             <a mat-stroked-button routerLink="/teams">
-              <mat-icon svgIcon="add" aria-hidden="true" /> Or start your own team
+              <mat-icon svgIcon="add" aria-hidden="true" />
+              <ng-container i18n>Or start your own team</ng-container>
             </a>
           }
         </div>
@@ -73,6 +73,12 @@ export class NoTeamYet {
   });
   /** The club's leads by name ("Rhona Hale or Tom Ode"), read once the note is needed. */
   protected readonly leads = signal('');
+  /** Whom to ask: the leads by name, else in general words. */
+  protected readonly whom = computed(
+    () =>
+      this.leads() ||
+      $localize`:Whom a coach asks to be put on a team, when their names are not known:your club’s head of coaching`,
+  );
 
   constructor() {
     let asked = false;
@@ -85,7 +91,9 @@ export class NoTeamYet {
             members
               .filter((member) => member.role === 'lead')
               .map((member) => member.name)
-              .join(' or '),
+              .join(
+                $localize`:Between the names of the club's heads of coaching, e.g. Rhona Hale or Tom Ode: or `,
+              ),
           ),
         // Without names the note still says whom to ask, in general words.
         error: () => this.leads.set(''),

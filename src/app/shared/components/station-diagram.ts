@@ -119,7 +119,7 @@ export class StationDiagram {
         role: p.role,
         fill: style.fill,
         text: style.text,
-        mark: p.id === 'coach' ? 'C' : index >= 0 ? String(index + 1) : '',
+        mark: p.id === 'coach' ? COACH_MARK : index >= 0 ? String(index + 1) : '',
       };
     });
   });
@@ -153,10 +153,13 @@ export class StationDiagram {
       const style = POSITION_STYLE[role];
       items.push({ key: role, label: style.label, swatch: 'dot', fill: style.fill, text: style.text });
     }
-    if (this.station().conePositions.length) items.push({ key: 'cone', label: 'Cone', swatch: 'cone' });
+    if (this.station().conePositions.length)
+      items.push({ key: 'cone', label: $localize`:Key to a drawing:Cone`, swatch: 'cone' });
     const targets = this.targets();
-    if (targets.some((t) => t.kind === 'goal')) items.push({ key: 'goal', label: 'Goal', swatch: 'goal' });
-    if (targets.some((t) => t.kind === 'gate')) items.push({ key: 'gate', label: 'Gate', swatch: 'gate' });
+    if (targets.some((t) => t.kind === 'goal'))
+      items.push({ key: 'goal', label: $localize`:Key to a drawing:Goal`, swatch: 'goal' });
+    if (targets.some((t) => t.kind === 'gate'))
+      items.push({ key: 'gate', label: $localize`:Key to a drawing:Gate`, swatch: 'gate' });
     for (const label of new Set(this.zones().map((z) => zoneWords(z.label)))) {
       items.push({ key: 'zone-' + label, label, swatch: 'zone' });
     }
@@ -173,7 +176,10 @@ export class StationDiagram {
   protected readonly label = computed(() => {
     const s = this.station();
     const size = formatSize(this.units.distance(), s.area);
-    const head = `${ACTIVITY_KIND_LABELS[s.activityKind] ?? s.title}${s.format ? ', ' + s.format : ''} in ${size}`;
+    const activity = ACTIVITY_KIND_LABELS[s.activityKind] ?? s.title;
+    const head = s.format
+      ? $localize`:A drawn station, e.g. Keep-ball, 4v1 in 12 × 12 m:${activity}:activity:, ${s.format}:format: in ${size}:size:`
+      : $localize`:A drawn station, e.g. Keep-ball in 12 × 12 m:${activity}:activity: in ${size}:size:`;
     const names = this.names();
     const nameOf = (id: string): string | undefined =>
       names instanceof Map ? names.get(id) : names ? (names as Record<string, string>)[id] : undefined;
@@ -182,22 +188,26 @@ export class StationDiagram {
       const dots = this.dots().filter((d) => d.role === role);
       if (!dots.length) continue;
       const who = names
-        ? ` (${dots.map((d) => (d.id === 'coach' ? 'C' : `${d.mark} ${nameOf(d.id) ?? d.id}`)).join(', ')})`
+        ? ` (${dots.map((d) => (d.id === 'coach' ? COACH_MARK : `${d.mark} ${nameOf(d.id) ?? d.id}`)).join(', ')})`
         : '';
-      parts.push(`${dots.length} ${ROLE_WORDS[role][dots.length === 1 ? 0 : 1]}${who}`);
+      parts.push(`${ROLE_COUNT[role](dots.length)}${who}`);
     }
     const cones = this.looseCones().length;
-    if (cones) parts.push(count(cones, 'cone'));
+    if (cones) parts.push(cones === 1 ? $localize`1 cone` : $localize`${cones}:count: cones`);
     const targets = this.targets();
     const goals = targets.filter((t) => t.kind === 'goal').length;
     const gates = targets.length - goals;
-    if (goals) parts.push(count(goals, 'goal'));
-    if (gates) parts.push(count(gates, 'gate'));
+    if (goals) parts.push(goals === 1 ? $localize`1 goal` : $localize`${goals}:count: goals`);
+    if (gates) parts.push(gates === 1 ? $localize`1 gate` : $localize`${gates}:count: gates`);
     for (const [label, n] of tally(this.zones().map((z) => zoneWords(z.label).toLowerCase()))) {
-      parts.push(n === 1 ? `a ${label}` : `${n} × ${label}`);
+      parts.push(
+        n === 1
+          ? $localize`:One marked zone, e.g. a safe zone:a ${label}:zone:`
+          : $localize`${n}:count: × ${label}:zone:`,
+      );
     }
     for (const label of new Set(this.lines().map((l) => lineWords(l.label).toLowerCase())))
-      parts.push(`a ${label}`);
+      parts.push($localize`:One marked line, e.g. a halfway line:a ${label}:line:`);
     return parts.length ? `${head}: ${parts.join(', ')}` : head;
   });
 
@@ -219,17 +229,21 @@ export class StationDiagram {
   }
 }
 
-/** Singular and plural words for each role in the accessible label. */
-const ROLE_WORDS: Record<PositionRole, [string, string]> = {
-  player: ['player', 'players'],
-  attacker: ['attacker', 'attackers'],
-  defender: ['defender (bib)', 'defenders (bibs)'],
-  goalkeeper: ['goalkeeper', 'goalkeepers'],
-  'team-a': ['on side A (bibs)', 'on side A (bibs)'],
-  'team-b': ['on side B', 'on side B'],
-  server: ['server', 'servers'],
-  neutral: ['neutral', 'neutrals'],
-  coach: ['coach', 'coaches'],
+/** The letter in a joining coach's circle, and for them in the accessible label. */
+const COACH_MARK = $localize`:Letter in the circle of a coach who joins in, short for Coach:C`;
+
+/** How many of each role a station holds, in the accessible label ("4 attackers"). */
+const ROLE_COUNT: Record<PositionRole, (n: number) => string> = {
+  player: (n) => (n === 1 ? $localize`1 player` : $localize`${n}:count: players`),
+  attacker: (n) => (n === 1 ? $localize`1 attacker` : $localize`${n}:count: attackers`),
+  defender: (n) => (n === 1 ? $localize`1 defender (bib)` : $localize`${n}:count: defenders (bibs)`),
+  goalkeeper: (n) => (n === 1 ? $localize`1 goalkeeper` : $localize`${n}:count: goalkeepers`),
+  'team-a': (n) => $localize`:Players in the team wearing bibs:${n}:count: on side A (bibs)`,
+  'team-b': (n) => $localize`:Players in the other team:${n}:count: on side B`,
+  server: (n) => (n === 1 ? $localize`1 server` : $localize`${n}:count: servers`),
+  neutral: (n) => (n === 1 ? $localize`1 neutral` : $localize`${n}:count: neutrals`),
+  coach: (n) =>
+    n === 1 ? $localize`:A coach who joins in:1 coach` : $localize`:Coaches who join in:${n}:count: coaches`,
 };
 
 /** The two cones nearest a gate's centre, when the plan listed them there. */
@@ -245,20 +259,26 @@ function gateCones(gate: Point, cones: Point[]): [Point, Point] | null {
   return Math.hypot(mid.x - gate.x, mid.y - gate.y) < 0.3 ? [a.c, b.c] : null;
 }
 
+/** A zone's name as the plan gives it ("end zone"), else "safe zone" for "safe", or "zone". */
 function zoneWords(label: string): string {
-  const text = label.trim() || 'zone';
-  const words = /zone/i.test(text) ? text : `${text} zone`;
+  const text = label.trim();
+  const words = !text
+    ? $localize`:A marked area inside a drawn station:zone`
+    : /zone/i.test(text)
+      ? text
+      : $localize`:A marked area named by the plan, e.g. safe zone:${text}:name: zone`;
   return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
+/** A line's name as the plan gives it, else "halfway line" for "halfway", or "marked line". */
 function lineWords(label: string | undefined): string {
-  const text = label?.trim() || 'marked';
-  const words = /line/i.test(text) ? text : `${text} line`;
+  const text = label?.trim();
+  const words = !text
+    ? $localize`:A line drawn inside a station:marked line`
+    : /line/i.test(text)
+      ? text
+      : $localize`:A line named by the plan, e.g. halfway line:${text}:name: line`;
   return words.charAt(0).toUpperCase() + words.slice(1);
-}
-
-function count(n: number, word: string): string {
-  return `${n} ${word}${n === 1 ? '' : 's'}`;
 }
 
 function tally(labels: string[]): Map<string, number> {

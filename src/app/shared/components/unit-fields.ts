@@ -30,7 +30,7 @@ export type UnitPick =
   imports: [FormsModule, MatFormFieldModule, MatSelectModule],
   template: `
     <mat-form-field appearance="outline" subscriptSizing="dynamic">
-      <mat-label>Distances</mat-label>
+      <mat-label i18n>Distances</mat-label>
       <mat-select
         [ngModel]="distance()"
         (ngModelChange)="picked.emit({ quantity: 'distance', unit: $event })"
@@ -38,7 +38,11 @@ export type UnitPick =
         [attr.data-testid]="testIdPrefix() + '-distance-unit'"
       >
         @if (club(); as club) {
-          <mat-option value="club">As the club: {{ distanceWords[club.distance] }}</mat-option>
+          <mat-option
+            value="club"
+            i18n="A person's unit choice that follows the club's, e.g. As the club: Metres"
+            >As the club: {{ distanceWords[club.distance] }}</mat-option
+          >
         }
         @for (unit of distanceUnits; track unit) {
           <mat-option [value]="unit">{{ distanceWords[unit] }}</mat-option>
@@ -46,7 +50,7 @@ export type UnitPick =
       </mat-select>
     </mat-form-field>
     <mat-form-field appearance="outline" subscriptSizing="dynamic">
-      <mat-label>Temperatures</mat-label>
+      <mat-label i18n>Temperatures</mat-label>
       <mat-select
         [ngModel]="temperature()"
         (ngModelChange)="picked.emit({ quantity: 'temperature', unit: $event })"
@@ -54,7 +58,9 @@ export type UnitPick =
         [attr.data-testid]="testIdPrefix() + '-temperature-unit'"
       >
         @if (club(); as club) {
-          <mat-option value="club">As the club: {{ temperatureWords[club.temperature] }}</mat-option>
+          <mat-option value="club" i18n="A person's unit choice that follows the club's, e.g. As the club: °C"
+            >As the club: {{ temperatureWords[club.temperature] }}</mat-option
+          >
         }
         @for (unit of temperatureUnits; track unit) {
           <mat-option [value]="unit">{{ temperatureWords[unit] }}</mat-option>
@@ -95,6 +101,11 @@ export class UnitFields {
 export function unitProblem(error: unknown, fieldWords: Record<string, string>): string {
   const fields = Object.entries(problemFieldErrors(error));
   return fields.length
-    ? fields.map(([name, text]) => `${fieldWords[name] ?? name} ${text}.`).join(' ')
+    ? fields
+        .map(
+          ([name, text]) =>
+            $localize`:A field's name, then the server's words about it:${fieldWords[name] ?? name}:field: ${text}:problem:.`,
+        )
+        .join(' ')
     : problemMessage(error);
 }
