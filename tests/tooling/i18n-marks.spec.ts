@@ -15,11 +15,19 @@ describe('the i18n mark check', () => {
        <input placeholder="Search players" />
        <p i18n>{{ n }} bib{{ n === 1 ? '' : 's' }}</p>
        <button [attr.aria-label]="'Area of ' + title">x</button>
-       @if (ok) { <span>Saved</span> }`,
+       @if (ok) { <span>Saved</span> }
+       @switch (kind) { @case ('a') { <b>Training</b> } }`,
       'sample.html',
     );
-    expect(found.map((f) => f.text)).toEqual(['Teams', 'Search players', 's', 'Area of', 'Saved']);
-    expect(found.map((f) => f.line)).toEqual([1, 2, 3, 4, 5]);
+    expect(found.map((f) => f.text)).toEqual([
+      'Teams',
+      'Search players',
+      's',
+      'Area of',
+      'Saved',
+      'Training',
+    ]);
+    expect(found.map((f) => f.line)).toEqual([1, 2, 3, 4, 5, 6]);
   });
 
   it('finds an aria attribute bound as a property, which writes no attribute', () => {

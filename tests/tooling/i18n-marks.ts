@@ -81,6 +81,7 @@ const TECHNICAL = new Set([
   'color',
   'enterkeyhint',
   'xmlns',
+  'preserveaspectratio',
 ]);
 
 const WORDS = /[A-Za-z]{2,}/;
@@ -184,7 +185,16 @@ export function unmarkedIn(template: string, file: string, firstLine = 0): Unmar
       return;
     }
     // Control flow blocks (@if, @for, @switch, @defer…) and their branches.
-    for (const key of ['children', 'branches', 'cases', 'empty', 'placeholder', 'loading', 'error']) {
+    for (const key of [
+      'children',
+      'branches',
+      'cases',
+      'groups',
+      'empty',
+      'placeholder',
+      'loading',
+      'error',
+    ]) {
       visit((node as Record<string, unknown>)[key], marked);
     }
   };
