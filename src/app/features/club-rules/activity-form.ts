@@ -56,13 +56,21 @@ import {
 
 /** How an activity uses balls, in the form's words. */
 export const BALL_WORDS: Record<BallUse, string> = {
-  each: 'A ball each',
-  pair: 'One per pair',
-  group: 'A few per group',
-  none: 'No balls',
+  each: $localize`:How an activity uses balls:A ball each`,
+  pair: $localize`:How an activity uses balls:One per pair`,
+  group: $localize`:How an activity uses balls:A few per group`,
+  none: $localize`:How an activity uses balls:No balls`,
 };
 
-const INTENSITY_WORDS = ['', 'gentle', 'steady', 'lively', 'hard', 'match pace'];
+/** An intensity of 1 to 5 in words, after "Intensity: 3 of 5,". */
+const INTENSITY_WORDS = [
+  '',
+  $localize`:Intensity 1 of 5:gentle`,
+  $localize`:Intensity 2 of 5:steady`,
+  $localize`:Intensity 3 of 5:lively`,
+  $localize`:Intensity 4 of 5:hard`,
+  $localize`:Intensity 5 of 5:match pace`,
+];
 
 type ListKey = 'coachingPoints' | 'easier' | 'harder';
 
@@ -125,23 +133,23 @@ export class ActivityForm {
   protected readonly lists: { key: ListKey; title: string; item: string; add: string; max: number }[] = [
     {
       key: 'coachingPoints',
-      title: 'Coaching points',
-      item: 'Coaching point',
-      add: 'Add a coaching point',
+      title: $localize`Coaching points`,
+      item: $localize`:One line of the coaching points, numbered after it:Coaching point`,
+      add: $localize`Add a coaching point`,
       max: ACTIVITY_LIMITS.coachingPoints,
     },
     {
       key: 'easier',
-      title: 'Make it easier',
-      item: 'Easier step',
-      add: 'Add an easier step',
+      title: $localize`Make it easier`,
+      item: $localize`:One line of Make it easier, numbered after it:Easier step`,
+      add: $localize`Add an easier step`,
       max: ACTIVITY_LIMITS.easier,
     },
     {
       key: 'harder',
-      title: 'Make it harder',
-      item: 'Harder step',
-      add: 'Add a harder step',
+      title: $localize`Make it harder`,
+      item: $localize`:One line of Make it harder, numbered after it:Harder step`,
+      add: $localize`Add a harder step`,
       max: ACTIVITY_LIMITS.harder,
     },
   ];
@@ -218,7 +226,9 @@ export class ActivityForm {
     if (!p) return '';
     const s = p.station;
     const format = s.format ? `, ${s.format}` : '';
-    return `${p.ageGroup} ${LEVEL_LABELS[p.level].toLowerCase()} group of ${s.playerIds.length}${format} · ${formatSize(this.units.distance(), s.area)} · ${s.equipment.cones} cones`;
+    const level = LEVEL_LABELS[p.level].toLowerCase();
+    const size = formatSize(this.units.distance(), s.area);
+    return $localize`:Caption under the diagram preview, e.g. U10 intermediate group of 5, 4v1 · 10 × 10 m · 4 cones:${p.ageGroup}:ageGroup: ${level}:level: group of ${s.playerIds.length}:players:${format}:format: · ${size}:size: · ${s.equipment.cones}:cones: cones`;
   });
 
   private readonly matchers = new Map<string, ErrorStateMatcher>();
@@ -267,6 +277,11 @@ export class ActivityForm {
         .querySelector<HTMLInputElement>(`[data-line="${key}.${list.length - 1}"]`)
         ?.focus(),
     );
+  }
+
+  /** The remove button's name for a screen reader: "Remove coaching point 2". */
+  protected removeWords(item: string, index: number): string {
+    return $localize`:Button removing a numbered line, e.g. Remove coaching point 2:Remove ${item.toLowerCase()}:item: ${index + 1}:number:`;
   }
 
   protected removeLine(key: ListKey, index: number): void {

@@ -27,6 +27,11 @@ export interface ActivityEdit {
   failed: (message: string) => void;
 }
 
+/** The line beside an activity when its change could not be saved, with the reason. */
+function notSaved(reason: string): string {
+  return $localize`:Then the reason, e.g. someone else saved the draft first:Not saved: ${reason}:reason:`;
+}
+
 /** An activity as the list shows it, with its place in the rule set. */
 interface Row {
   index: number;
@@ -93,7 +98,7 @@ export class ClubActivities {
   );
 
   protected openNew(): void {
-    this.opened.set({ index: null, activity: null, readOnly: false, heading: 'New club activity' });
+    this.opened.set({ index: null, activity: null, readOnly: false, heading: $localize`New club activity` });
   }
 
   protected openRow(row: Row): void {
@@ -102,20 +107,27 @@ export class ClubActivities {
       index: row.index,
       activity: row.activity,
       readOnly: this.readOnly() || !club,
-      heading: club && !this.readOnly() ? `Change “${row.activity.title}”` : row.activity.title,
+      heading:
+        club && !this.readOnly()
+          ? $localize`:Heading of the form changing a club activity:Change “${row.activity.title}:activityTitle:”`
+          : row.activity.title,
     });
   }
 
   /** A club version of a starting activity: the same fields, a name of its own, a new id. */
   protected copyRow(row: Row): void {
-    const title = `${row.activity.title} (club version)`.slice(0, ACTIVITY_LIMITS.title);
+    const title =
+      $localize`:Name given to a club's copy of a starting activity:${row.activity.title}:activityTitle: (club version)`.slice(
+        0,
+        ACTIVITY_LIMITS.title,
+      );
     const copy: ActivityDefinition = { ...structuredClone(row.activity), title };
     delete copy.retired;
     this.opened.set({
       index: null,
       activity: copy,
       readOnly: false,
-      heading: `Club version of “${row.activity.title}”`,
+      heading: $localize`:Heading of the form copying a starting activity:Club version of “${row.activity.title}:activityTitle:”`,
     });
   }
 
@@ -133,9 +145,12 @@ export class ClubActivities {
       value: activity,
       saved: () => {
         this.opened.set(null);
-        this.say(activity.id, `Saved “${activity.title}” to the draft. Coaches get it when you publish.`);
+        this.say(
+          activity.id,
+          $localize`Saved “${activity.title}:activityTitle:” to the draft. Coaches get it when you publish.`,
+        );
       },
-      failed: (message) => this.say(key, `Not saved: ${message}`, true),
+      failed: (message) => this.say(key, notSaved(message), true),
     });
   }
 
@@ -148,7 +163,7 @@ export class ClubActivities {
     if (lost) {
       this.say(
         row.activity.id,
-        `Plans need at least one ${this.kindLabels[row.activity.kind].toLowerCase()} activity: add another before retiring this one.`,
+        $localize`:The kind of activity in lower case, e.g. speed:Plans need at least one ${this.kindLabels[row.activity.kind].toLowerCase()}:kind: activity: add another before retiring this one.`,
         true,
       );
       return;
@@ -156,8 +171,9 @@ export class ClubActivities {
     this.edit.emit({
       pointer,
       value: true,
-      saved: () => this.say(row.activity.id, 'Retired in the draft: once published, plans stop choosing it.'),
-      failed: (message) => this.say(row.activity.id, `Not saved: ${message}`, true),
+      saved: () =>
+        this.say(row.activity.id, $localize`Retired in the draft: once published, plans stop choosing it.`),
+      failed: (message) => this.say(row.activity.id, notSaved(message), true),
     });
   }
 
@@ -166,8 +182,11 @@ export class ClubActivities {
       pointer: toPointer(['parameters', 'activities', row.index, 'retired']),
       value: undefined,
       saved: () =>
-        this.say(row.activity.id, 'Brought back in the draft: once published, plans can choose it again.'),
-      failed: (message) => this.say(row.activity.id, `Not saved: ${message}`, true),
+        this.say(
+          row.activity.id,
+          $localize`Brought back in the draft: once published, plans can choose it again.`,
+        ),
+      failed: (message) => this.say(row.activity.id, notSaved(message), true),
     });
   }
 

@@ -152,11 +152,11 @@ export class ClubRulesPage {
 
   protected startEditing(): void {
     const from = this.published()?.id ?? 'default';
-    const name = this.published()?.name ?? 'Club rules';
+    const name = this.published()?.name ?? $localize`:Name of the club's first draft of rules:Club rules`;
     this.run(this.api.createDraft(name, from), (draft) => {
       this.versions.update((list) => [draft, ...list]);
       this.withBody(draft, (full) => this.takeDraft(full));
-      this.notice.set('Draft started. Nothing changes for coaches until you publish.');
+      this.notice.set($localize`Draft started. Nothing changes for coaches until you publish.`);
     });
   }
 
@@ -182,7 +182,7 @@ export class ClubRulesPage {
   protected discard(): void {
     this.body.set(this.baseBody());
     this.rebased.set(null);
-    this.notice.set('Unsaved changes discarded.');
+    this.notice.set($localize`Unsaved changes discarded.`);
   }
 
   protected save(then?: () => void, failed?: (message: string) => void): void {
@@ -199,7 +199,7 @@ export class ClubRulesPage {
         this.body.set(body);
         this.rebased.set(null);
         this.versions.update((list) => list.map((v) => (v.id === saved.id ? { ...saved, body } : v)));
-        this.notice.set('Draft saved.');
+        this.notice.set($localize`Draft saved.`);
         then?.();
       },
       error: (error: unknown) => {
@@ -210,7 +210,9 @@ export class ClubRulesPage {
             message: problemMessage(error),
             currentRevision: current.currentRevision ?? current.revision ?? null,
           });
-          failed?.('someone else saved the draft first; see the message at the top of the page.');
+          failed?.(
+            $localize`:Why a change was not saved, after Not saved:someone else saved the draft first; see the message at the top of the page.`,
+          );
         } else {
           this.refuse(error);
           failed?.(problemMessage(error, { fields: false }));
@@ -231,8 +233,11 @@ export class ClubRulesPage {
       this.rebased.set(result);
       this.conflict.set(null);
       this.versions.update((list) => list.map((v) => (v.id === theirs.id ? theirs : v)));
+      const count = result.reapplied.length;
       this.notice.set(
-        `Loaded ${theirs.authorName}'s save and re-applied your ${result.reapplied.length} change${result.reapplied.length === 1 ? '' : 's'}. Check, then save.`,
+        count === 1
+          ? $localize`Loaded ${theirs.authorName}:author:'s save and re-applied your 1 change. Check, then save.`
+          : $localize`Loaded ${theirs.authorName}:author:'s save and re-applied your ${count}:count: changes. Check, then save.`,
       );
     });
   }
@@ -241,7 +246,9 @@ export class ClubRulesPage {
     const draft = this.draft();
     if (!draft) return;
     if (this.allProblems().length) {
-      this.error.set('Fix the problems listed before publishing; coaches would get plans from broken rules.');
+      this.error.set(
+        $localize`Fix the problems listed before publishing; coaches would get plans from broken rules.`,
+      );
       return;
     }
     const data: PublishDialogData = { version: draft.version };
@@ -279,7 +286,7 @@ export class ClubRulesPage {
       next: (published) => {
         this.busy.set(false);
         this.notice.set(
-          `Published as version ${published.version}. New plans use it; old plans keep theirs.`,
+          $localize`Published as version ${published.version}:version:. New plans use it; old plans keep theirs.`,
         );
         this.load();
       },
@@ -299,10 +306,11 @@ export class ClubRulesPage {
 
   protected rollbackTo(version: RuleSetDto): void {
     if (this.busy()) return;
-    if (!confirm(`Publish version ${version.version} again? New plans will use it.`)) return;
+    if (!confirm($localize`Publish version ${version.version}:version: again? New plans will use it.`))
+      return;
     this.run(this.api.rollback(version.id), (published) => {
       this.notice.set(
-        `Rolled back: version ${version.version}'s rules are published again as version ${published.version}.`,
+        $localize`Rolled back: version ${version.version}:earlierVersion:'s rules are published again as version ${published.version}:newVersion:.`,
       );
       this.load();
     });

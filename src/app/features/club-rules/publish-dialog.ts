@@ -10,17 +10,15 @@ export interface PublishDialogData {
   version: number;
 }
 
-/** "7 teams", "1 coach": a count and its noun. */
-function count(n: number, one: string, many: string): string {
-  return `${n} ${n === 1 ? one : many}`;
-}
-
 /** The dialog's sentence for who the published rules reach. */
 export function reachWords(reach: RuleSetReachDto): string {
   if (reach.teams === 0)
-    return 'No team plans from the club’s rules yet: publishing sets the rules for every plan made from now on.';
-  const staff = reach.coaches ? ` (${count(reach.coaches, 'coach', 'coaches')} on their staff)` : '';
-  return `Publishing changes the plans every coach makes from now on for ${count(reach.teams, 'team', 'teams')}${staff}.`;
+    return $localize`No team plans from the club’s rules yet: publishing sets the rules for every plan made from now on.`;
+  const teams = reach.teams === 1 ? $localize`1 team` : $localize`${reach.teams}:count: teams`;
+  if (!reach.coaches)
+    return $localize`:Then 1 team or 7 teams:Publishing changes the plans every coach makes from now on for ${teams}:teams:.`;
+  const coaches = reach.coaches === 1 ? $localize`1 coach` : $localize`${reach.coaches}:count: coaches`;
+  return $localize`:Then 1 team or 7 teams, and 1 coach or 12 coaches:Publishing changes the plans every coach makes from now on for ${teams}:teams: (${coaches}:coaches: on their staff).`;
 }
 
 /**
@@ -31,20 +29,34 @@ export function reachWords(reach: RuleSetReachDto): string {
   selector: 'cw-publish-dialog',
   imports: [MatDialogModule, MatButtonModule],
   template: `
-    <h2 mat-dialog-title>Publish version {{ data.version }}?</h2>
+    <h2 mat-dialog-title i18n>Publish version {{ data.version }}?</h2>
     <mat-dialog-content data-testid="publish-reach">
       @if (reach(); as r) {
         <p>{{ words(r) }}</p>
       } @else if (error(); as text) {
-        <p class="cw-form-error" role="alert">Conewise could not count the teams: {{ text }}</p>
+        <p class="cw-form-error" role="alert" i18n>Conewise could not count the teams: {{ text }}</p>
       } @else {
-        <p>Counting the teams that plan from the club’s rules…</p>
+        <p i18n>Counting the teams that plan from the club’s rules…</p>
       }
-      <p>Plans already made keep their rules.</p>
+      <p i18n>Plans already made keep their rules.</p>
     </mat-dialog-content>
     <mat-dialog-actions align="end">
-      <button mat-button type="button" [mat-dialog-close]="false" cdkFocusInitial>Not yet</button>
-      <button mat-flat-button type="button" [mat-dialog-close]="true" data-testid="confirm-publish">
+      <button
+        mat-button
+        type="button"
+        [mat-dialog-close]="false"
+        cdkFocusInitial
+        i18n="Button closing the dialog without publishing"
+      >
+        Not yet
+      </button>
+      <button
+        mat-flat-button
+        type="button"
+        [mat-dialog-close]="true"
+        data-testid="confirm-publish"
+        i18n="Button making the draft the rules coaches' new plans use"
+      >
         Publish
       </button>
     </mat-dialog-actions>

@@ -21,7 +21,7 @@ import { RuleSetsApi } from './services/rule-sets-api';
 /** Conewise's own starting rules, as the server answers for the id "default". */
 const STARTING_RULES: RuleSetDto = {
   id: 'default',
-  name: 'Conewise starting rules',
+  name: $localize`Conewise starting rules`,
   version: 0,
   status: 'archived',
   body: undefined,
@@ -94,20 +94,29 @@ export class RuleHistory {
     });
   }
 
-  protected actionWord(action: string): string {
-    const words: Record<string, string> = {
-      create: 'started a draft, version',
-      update: 'saved the draft, version',
-      publish: 'published version',
-      rollback: 'published earlier rules again as version',
-    };
-    return words[action] ?? 'changed version';
+  /** What a log entry did, after who did it: "saved the draft, version 4". */
+  protected actionWords(entry: RuleSetChangeDto): string {
+    const version = this.versionOf(entry);
+    switch (entry.action) {
+      case 'create':
+        return $localize`:After a person's name in the change log:started a draft, version ${version}:version:`;
+      case 'update':
+        return $localize`:After a person's name in the change log:saved the draft, version ${version}:version:`;
+      case 'publish':
+        return $localize`:After a person's name in the change log:published version ${version}:version:`;
+      case 'rollback':
+        return $localize`:After a person's name in the change log:published earlier rules again as version ${version}:version:`;
+      default:
+        return $localize`:After a person's name in the change log:changed version ${version}:version:`;
+    }
   }
 
   /** "Draft", "Published" (what new plans use) or "Earlier version". */
   protected statusWords(version: RuleSetDto): string {
-    if (version.id === this.publishedId()) return 'Published';
-    return version.status === 'draft' ? 'Draft' : 'Earlier version';
+    if (version.id === this.publishedId()) return $localize`:State of a version of the rules:Published`;
+    return version.status === 'draft'
+      ? $localize`:State of a version of the rules:Draft`
+      : $localize`:State of a version of the rules:Earlier version`;
   }
 
   /** What a save changed, a line a place: "Group sizes › Keep-ball › Beginner › Most: 6 → 5". */
@@ -115,9 +124,16 @@ export class RuleHistory {
     const document = this.versions().find((v) => v.id === entry.ruleSetId)?.body;
     const lines = entry.changes
       ? entry.changes.map((change) => ruleChangeWords(change, document))
-      : entry.changedPaths.map((path) => (path === '(name)' ? 'Name' : rulePathWords(path, document)));
+      : entry.changedPaths.map((path) =>
+          path === '(name)'
+            ? $localize`:The name of a version of the rules:Name`
+            : rulePathWords(path, document),
+        );
     return lines.length > SHOWN_CHANGES + 1
-      ? [...lines.slice(0, SHOWN_CHANGES), `and ${lines.length - SHOWN_CHANGES} more changes`]
+      ? [
+          ...lines.slice(0, SHOWN_CHANGES),
+          $localize`:Last line of a shortened list of changes:and ${lines.length - SHOWN_CHANGES}:count: more changes`,
+        ]
       : lines;
   }
 
@@ -137,13 +153,17 @@ export class RuleHistory {
     const from = this.fromVersion();
     const to = this.toVersion();
     const name = (v: RuleSetDto | null) =>
-      v && v.id !== STARTING_RULES.id ? `version ${v.version}` : 'the starting rules';
-    return `${count} difference${count === 1 ? '' : 's'} from ${name(from)} to ${name(to)}`;
+      v && v.id !== STARTING_RULES.id
+        ? $localize`:In 3 differences from version 2 to version 4:version ${v.version}:version:`
+        : $localize`:In 3 differences from the starting rules to version 1:the starting rules`;
+    return count === 1
+      ? $localize`1 difference from ${name(from)}:from: to ${name(to)}:to:`
+      : $localize`${count}:count: differences from ${name(from)}:from: to ${name(to)}:to:`;
   }
 
   protected label(version: RuleSetDto): string {
-    if (version.id === STARTING_RULES.id) return 'Conewise starting rules';
-    return `Version ${version.version} · ${this.statusWords(version)} · ${version.authorName}`;
+    if (version.id === STARTING_RULES.id) return $localize`Conewise starting rules`;
+    return $localize`:A version in the compare list, its state and who saved it:Version ${version.version}:version: · ${this.statusWords(version)}:state: · ${version.authorName}:author:`;
   }
 
   protected choose(which: 'from' | 'to', event: Event): void {

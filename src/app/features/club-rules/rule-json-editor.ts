@@ -97,10 +97,15 @@ export class RuleJsonEditor {
       this.bodyChange.emit(parsed);
     } catch (error) {
       this.syntaxError.set({
-        message: error instanceof Error ? error.message : 'The text cannot be read.',
+        message: error instanceof Error ? error.message : $localize`The text cannot be read.`,
         at: syntaxErrorLocation(text, error),
       });
     }
+  }
+
+  /** "Line 12": where a problem sits in the text. */
+  protected lineWords(line: number): string {
+    return $localize`:Where a problem is in the rules as text:Line ${line}:line:`;
   }
 
   /** Puts the caret on the problem's line and selects that line. */

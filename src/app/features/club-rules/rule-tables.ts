@@ -60,18 +60,49 @@ interface LimitField {
 }
 
 const LIMIT_FIELDS: LimitField[] = [
-  { path: ['supervision', 'minAdults'], label: 'Fewest adults at a children’s session', measure: null },
-  { path: ['supervision', 'stationsPerAdult'], label: 'Stations one adult can oversee', measure: null },
-  { path: ['timing', 'drinksEveryMinutes'], label: 'Drinks break at least every (min)', measure: null },
-  { path: ['timing', 'heatDrinksEveryMinutes'], label: 'In the heat, at least every (min)', measure: null },
-  { path: ['timing', 'drinksMinutes'], label: 'Drinks break length (min)', measure: null },
-  { path: ['keepBallLimits', 'minM2PerPlayer'], label: 'Keep-ball room a player', measure: 'area' },
-  { path: ['keepBallLimits', 'minSideM'], label: 'Keep-ball shortest side', measure: 'distance' },
   {
-    path: ['keepBallLimits', 'twoDefendersFromAge'],
-    label: 'Two defenders in keep-ball from age',
+    path: ['supervision', 'minAdults'],
+    label: $localize`Fewest adults at a children’s session`,
     measure: null,
   },
+  {
+    path: ['supervision', 'stationsPerAdult'],
+    label: $localize`Stations one adult can oversee`,
+    measure: null,
+  },
+  {
+    path: ['timing', 'drinksEveryMinutes'],
+    label: $localize`Drinks break at least every (min)`,
+    measure: null,
+  },
+  {
+    path: ['timing', 'heatDrinksEveryMinutes'],
+    label: $localize`:After Drinks break at least every (min):In the heat, at least every (min)`,
+    measure: null,
+  },
+  { path: ['timing', 'drinksMinutes'], label: $localize`Drinks break length (min)`, measure: null },
+  {
+    path: ['keepBallLimits', 'minM2PerPlayer'],
+    label: $localize`:Followed by its unit, e.g. (m²):Keep-ball room a player`,
+    measure: 'area',
+  },
+  {
+    path: ['keepBallLimits', 'minSideM'],
+    label: $localize`:Followed by its unit, e.g. (m):Keep-ball shortest side`,
+    measure: 'distance',
+  },
+  {
+    path: ['keepBallLimits', 'twoDefendersFromAge'],
+    label: $localize`Two defenders in keep-ball from age`,
+    measure: null,
+  },
+];
+
+/** The touch target's numbers, with their labels. */
+const TOUCH_FIELDS: { key: string; label: string }[] = [
+  { key: 'minPerPlayer', label: $localize`Fewest touches per player` },
+  { key: 'maxPerPlayer', label: $localize`Most touches per player` },
+  { key: 'fromMinutes', label: $localize`For warm-ups of at least (minutes)` },
 ];
 
 /** The rule set's main tables as forms, so a lead tunes numbers without touching JSON. */
@@ -104,6 +135,7 @@ export class RuleTables implements RuleDocument {
   /** The reader's units: the tables store metres and °C and show and take these. */
   private readonly units = inject(UnitChoice);
   protected readonly limitFields = LIMIT_FIELDS;
+  protected readonly touchFields = TOUCH_FIELDS;
   /** "metres" or "yards", for the area sizes' heading. */
   protected readonly distanceName = computed(() => distanceUnitName(this.units.distance()));
 
@@ -191,7 +223,73 @@ export class RuleTables implements RuleDocument {
 
   /** "Ball mastery or Tag game": the kinds that can fill a part, most preferred first. */
   protected kindsLabel(kinds: string[]): string {
-    return kinds.map((k) => this.kindLabel(k)).join(' or ');
+    const labels = kinds.map((k) => this.kindLabel(k));
+    return labels.length
+      ? labels.reduce(
+          (list, kind) =>
+            $localize`:Kinds of activity that can fill a part of a session, e.g. Ball mastery or Tag game:${list}:kinds: or ${kind}:kind:`,
+        )
+      : '';
+  }
+
+  /** The formats cell's name for a screen reader: "Keep-ball formats for Beginner". */
+  protected formatsWords(level: string): string {
+    return $localize`:The level, e.g. Beginner:Keep-ball formats for ${this.levelWords[level]}:level:`;
+  }
+
+  /** "Most attackers per defender for Beginner", for a screen reader. */
+  protected mostAttackersWords(level: string): string {
+    return $localize`:The level, e.g. Beginner:Most attackers per defender for ${this.levelWords[level]}:level:`;
+  }
+
+  /** "Warm-up share of the minutes", for a screen reader; the part's name comes from the rules. */
+  protected shareWords(part: string): string {
+    return $localize`:A part of a session, e.g. Warm-up:${part}:part: share of the minutes`;
+  }
+
+  /** "Warm-up longest minutes", for a screen reader. */
+  protected longestWords(part: string): string {
+    return $localize`:A part of a session, e.g. Warm-up:${part}:part: longest minutes`;
+  }
+
+  /** "Under 9 to 10 games have goalkeepers", for a screen reader. */
+  protected goalkeepersWords(band: string): string {
+    return $localize`:An age band, e.g. Under 9 to 10:${this.bandWords(band)}:ageBand: games have goalkeepers`;
+  }
+
+  /** "Children per adult up to age 8", for a screen reader. */
+  protected ratioWords(upToAge: number): string {
+    return $localize`Children per adult up to age ${upToAge}:age:`;
+  }
+
+  /** "Under 9 may do Keep-ball", for a screen reader. */
+  protected allowedWords(age: string, kind: string): string {
+    return $localize`:An age group, then a kind of activity:${this.ageWords(age)}:ageGroup: may do ${this.kindLabel(kind)}:activity:`;
+  }
+
+  /** A group-size cell's name for a screen reader: "Keep-ball, Beginner, fewest players in a group". */
+  protected groupSizeWords(kind: string, field: string): string {
+    const activity = this.kindLabel(kind);
+    const level = this.levelWords[this.level()];
+    if (field === 'min') return $localize`${activity}:activity:, ${level}:level:, fewest players in a group`;
+    if (field === 'max') return $localize`${activity}:activity:, ${level}:level:, most players in a group`;
+    return $localize`${activity}:activity:, ${level}:level:, best players in a group`;
+  }
+
+  /** A players-a-side cell's name for a screen reader: "Under 9 to 10, most players a side". */
+  protected perSideWords(band: string, field: string): string {
+    const ages = this.bandWords(band);
+    return field === 'maxPerSide'
+      ? $localize`${ages}:ageBand:, most players a side`
+      : $localize`${ages}:ageBand:, fewest players a side`;
+  }
+
+  /** A touch-rate cell's name for a screen reader: "Keep-ball, touches a minute". */
+  protected touchRateWords(kind: string, field: string): string {
+    const activity = this.kindLabel(kind);
+    return field === 'activeShare'
+      ? $localize`${activity}:activity:, time in play (%)`
+      : $localize`${activity}:activity:, touches a minute`;
   }
 
   protected ratioRows(): { upToAge: number; childrenPerAdult: number }[] {
@@ -233,7 +331,7 @@ export class RuleTables implements RuleDocument {
       ...all,
       [level]: formats
         ? ''
-        : `Keep-ball, ${LEVEL_WORDS[level as keyof typeof LEVEL_WORDS] ?? level}: write formats like 4v1, 3v1.`,
+        : $localize`Keep-ball, ${LEVEL_WORDS[level as keyof typeof LEVEL_WORDS] ?? level}:level:: write formats like 4v1, 3v1.`,
     }));
     if (formats) this.edited.emit({ pointer: this.ptr('keepBall', level, 'formats'), value: formats });
   }

@@ -154,7 +154,7 @@ export class RuleTryIt {
     } catch (error) {
       // The sample squads still run; say why the team is missing from them.
       this.error.set(
-        `${team.name} was left out because its kit bag could not be read. ${problemMessage(error)}`,
+        $localize`:Then the server's reason:${team.name}:team: was left out because its kit bag could not be read. ${problemMessage(error)}:reason:`,
       );
       return [];
     }
@@ -164,7 +164,7 @@ export class RuleTryIt {
     try {
       return outlinePlan(await runPlan(request, ruleSet));
     } catch (error) {
-      return { error: error instanceof Error ? error.message : 'The engine could not make a plan.' };
+      return { error: error instanceof Error ? error.message : $localize`The engine could not make a plan.` };
     }
   }
 
@@ -175,7 +175,7 @@ export class RuleTryIt {
       const plans = await Promise.all(summaries.map((s) => firstValueFrom(this.api.plan(s.id))));
       return plans.map((plan) => ({
         id: plan.id,
-        label: `${plan.teamName}, ${plan.date ?? plan.createdAt.slice(0, 10)} (${plan.playerCount} players)`,
+        label: $localize`:A recent plan tried again, e.g. Harbour Herons U9, 2026-11-28 (12 players):${plan.teamName}:team:, ${plan.date ?? plan.createdAt.slice(0, 10)}:date: (${plan.playerCount}:count: players)`,
         request: { ...plan.request, seed: plan.seed },
       }));
     } catch {

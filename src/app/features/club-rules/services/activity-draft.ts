@@ -53,36 +53,37 @@ export const ACTIVITY_LIMITS = {
 
 /** The fields in the words of the form's labels. */
 const FIELD_WORDS: Record<string, string> = {
-  title: 'Name',
-  summary: 'One-line summary',
-  description: 'What the players do',
-  kind: 'Kind',
-  layout: 'Set-up',
-  'ages.from': 'Youngest age group',
-  'ages.to': 'Oldest age group',
-  levels: 'Levels',
-  focus: 'Works on',
-  intensity: 'Intensity',
-  balls: 'Balls',
-  bibs: 'Bibs',
-  'players.min': 'Fewest players',
-  'players.max': 'Most players',
-  coachingPoints: 'Coaching points',
-  easier: 'Easier steps',
-  harder: 'Harder steps',
+  title: $localize`:Label of the activity's name field:Name`,
+  summary: $localize`One-line summary`,
+  description: $localize`What the players do`,
+  kind: $localize`:Label of the field choosing what kind of activity it is:Kind`,
+  layout: $localize`:Label of the field choosing how an activity is laid out on the pitch:Set-up`,
+  'ages.from': $localize`Youngest age group`,
+  'ages.to': $localize`Oldest age group`,
+  levels: $localize`:Label of the playing levels an activity suits:Levels`,
+  focus: $localize`:Label of the skills an activity works on:Works on`,
+  intensity: $localize`:Label of how hard an activity is, 1 to 5:Intensity`,
+  balls: $localize`:Label of how the activity uses footballs:Balls`,
+  bibs: $localize`:Coloured vests that mark the sides:Bibs`,
+  'players.min': $localize`Fewest players`,
+  'players.max': $localize`Most players`,
+  coachingPoints: $localize`Coaching points`,
+  easier: $localize`:The steps that make an activity easier:Easier steps`,
+  harder: $localize`:The steps that make an activity harder:Harder steps`,
 };
 
 const LIST_ITEM_WORDS: Record<string, string> = {
-  coachingPoints: 'Coaching point',
-  easier: 'Easier step',
-  harder: 'Harder step',
+  coachingPoints: $localize`:One line of the coaching points, numbered after it:Coaching point`,
+  easier: $localize`:One line of Make it easier, numbered after it:Easier step`,
+  harder: $localize`:One line of Make it harder, numbered after it:Harder step`,
 };
 
 /** The words for a field path, list items numbered from 1: "Coaching point 3". */
 export function fieldWords(path: string): string {
   const item = /^(coachingPoints|easier|harder)\.(\d+)$/.exec(path);
-  if (item) return `${LIST_ITEM_WORDS[item[1]]} ${Number(item[2]) + 1}`;
-  return FIELD_WORDS[path] ?? 'This activity';
+  if (item)
+    return $localize`:A numbered line of a list, e.g. Coaching point 3:${LIST_ITEM_WORDS[item[1]]}:item: ${Number(item[2]) + 1}:number:`;
+  return FIELD_WORDS[path] ?? $localize`:Names the whole activity in a form message:This activity`;
 }
 
 /** The form's values for an activity (a blank form when none). */
@@ -173,9 +174,12 @@ export function fieldMessages(
   };
   const text = (path: 'title' | 'summary' | 'description', limit: number) => {
     const length = [...value[path].trim()].length;
-    if (length === 0) add(path, `${fieldWords(path)} is needed.`);
+    if (length === 0) add(path, $localize`${fieldWords(path)}:field: is needed.`);
     else if (length > limit)
-      add(path, `${fieldWords(path)}: keep it to ${limit} characters (now ${length}).`);
+      add(
+        path,
+        $localize`${fieldWords(path)}:field:: keep it to ${limit}:limit: characters (now ${length}:length:).`,
+      );
   };
   text('title', ACTIVITY_LIMITS.title);
   text('summary', ACTIVITY_LIMITS.summary);
@@ -186,23 +190,26 @@ export function fieldMessages(
       if (length > ACTIVITY_LIMITS.item)
         add(
           `${list}.${i}`,
-          `${fieldWords(`${list}.${i}`)}: keep it to ${ACTIVITY_LIMITS.item} characters (now ${length}).`,
+          $localize`${fieldWords(`${list}.${i}`)}:field:: keep it to ${ACTIVITY_LIMITS.item}:limit: characters (now ${length}:length:).`,
         );
     });
   }
   if (!value.coachingPoints.some((line) => line.trim()))
-    add('coachingPoints', 'Add at least one coaching point.');
-  if (!value.levels.length) add('levels', 'Choose at least one level.');
+    add('coachingPoints', $localize`Add at least one coaching point.`);
+  if (!value.levels.length) add('levels', $localize`Choose at least one level.`);
   for (const end of ['min', 'max'] as const) {
     if (value.players[end] === null || Number.isNaN(value.players[end]))
-      add(`players.${end}`, `${fieldWords(`players.${end}`)} is needed.`);
+      add(`players.${end}`, $localize`${fieldWords(`players.${end}`)}:field: is needed.`);
   }
   const activities = (ruleSet as { parameters?: { activities?: ActivityDefinition[] } } | null)?.parameters
     ?.activities;
   const title = value.title.trim().toLowerCase();
   const twin = (activities ?? []).find((a, i) => i !== index && a.title.trim().toLowerCase() === title);
   if (title && twin)
-    add('title', `Another activity is already called “${twin.title}”: pick a name coaches can tell apart.`);
+    add(
+      'title',
+      $localize`Another activity is already called “${twin.title}:activityTitle:”: pick a name coaches can tell apart.`,
+    );
 
   if (activities) {
     const doc = setAt(ruleSet, `/parameters/activities/${index}`, activity);
@@ -233,28 +240,35 @@ function fieldPath(pointer: string): string {
 export function coachWords(path: string, message: string): string {
   const words = fieldWords(path);
   let m: RegExpExecArray | null;
+  // The engine's messages are matched in its own (English) words; what the lead reads is translated.
   if ((m = /can have at most (\d+) characters/.exec(message)))
-    return `${words}: keep it to ${m[1]} characters.`;
-  if (/cannot be empty|is missing/.test(message)) return `${words} is needed.`;
-  if ((m = /can have at most (\d+) entries/.exec(message))) return `${words}: at most ${m[1]}.`;
+    return $localize`${words}:field:: keep it to ${m[1]}:limit: characters.`;
+  if (/cannot be empty|is missing/.test(message)) return $localize`${words}:field: is needed.`;
+  if ((m = /can have at most (\d+) entries/.exec(message)))
+    return $localize`:A list field and its most entries:${words}:field:: at most ${m[1]}:most:.`;
   if (/needs at least (one entry|\d+ entries)/.test(message))
-    return path === 'levels' ? 'Choose at least one level.' : 'Add at least one coaching point.';
-  if (/lists the same thing twice/.test(message)) return `${words}: each choice once.`;
-  if ((m = /must be at least (\d+)/.exec(message))) return `${words} must be at least ${m[1]}.`;
-  if ((m = /must be at most (\d+)/.exec(message))) return `${words} must be at most ${m[1]}.`;
-  if (/must be a whole number/.test(message)) return `${words} must be a whole number.`;
+    return path === 'levels'
+      ? $localize`Choose at least one level.`
+      : $localize`Add at least one coaching point.`;
+  if (/lists the same thing twice/.test(message)) return $localize`${words}:field:: each choice once.`;
+  if ((m = /must be at least (\d+)/.exec(message)))
+    return $localize`${words}:field: must be at least ${m[1]}:least:.`;
+  if ((m = /must be at most (\d+)/.exec(message)))
+    return $localize`${words}:field: must be at most ${m[1]}:most:.`;
+  if (/must be a whole number/.test(message)) return $localize`${words}:field: must be a whole number.`;
   if (/the oldest age \(.*\) is below the youngest/.test(message))
-    return 'The oldest age group must not be younger than the youngest.';
+    return $localize`The oldest age group must not be younger than the youngest.`;
   if (/the most players in a group \(\d+\) is below the fewest/.test(message))
-    return 'Most players must be at least the fewest players.';
-  if (/is the same as that of/.test(message)) return 'Another activity already has this name: pick another.';
+    return $localize`Most players must be at least the fewest players.`;
+  if (/is the same as that of/.test(message))
+    return $localize`Another activity already has this name: pick another.`;
   if (path === 'title' && /characters that are not allowed/.test(message))
-    return 'Name needs at least one letter or number.';
-  if (path === 'layout') return 'Choose one of the set-ups this kind can draw.';
-  if (/must be one of/.test(message)) return `${words}: choose one of the options.`;
+    return $localize`Name needs at least one letter or number.`;
+  if (path === 'layout') return $localize`Choose one of the set-ups this kind can draw.`;
+  if (/must be one of/.test(message)) return $localize`${words}:field:: choose one of the options.`;
   // The check's own sentence names the place already: keep only what is wrong.
   const what = message.slice(message.indexOf(': ') + 2).replace(/\.$/, '');
-  return `${words}: ${what}.`;
+  return $localize`:A field, then the rules check's own words about it:${words}:field:: ${what}:problem:.`;
 }
 
 function numberOrNaN(value: number | null): number {

@@ -9,10 +9,10 @@ export interface PlanOutline {
 }
 
 export const OUTLINE_ROWS: { key: keyof PlanOutline; label: string }[] = [
-  { key: 'groups', label: 'Groups' },
-  { key: 'areas', label: 'Areas' },
-  { key: 'timing', label: 'Timing' },
-  { key: 'warnings', label: 'Warnings' },
+  { key: 'groups', label: $localize`:A row comparing two plans:Groups` },
+  { key: 'areas', label: $localize`:A row comparing two plans:Areas` },
+  { key: 'timing', label: $localize`:A row comparing two plans:Timing` },
+  { key: 'warnings', label: $localize`:A row comparing two plans:Warnings` },
 ];
 
 /**
@@ -27,7 +27,9 @@ export function outlinePlan(plan: Plan): PlanOutline {
         ? `${s.playerIds.length - defenders}v${defenders}`
         : String(s.playerIds.length);
       // A coach who joins a group fills a place; say so, or a lone "1" reads like a mistake.
-      return s.coachJoins ? `${players} + coach` : players;
+      return s.coachJoins
+        ? $localize`:A group a coach joins, e.g. 3 + coach:${players}:players: + coach`
+        : players;
     });
     return `${phase.name}: ${sizes.join(' · ')}`;
   });
@@ -41,6 +43,6 @@ export function outlinePlan(plan: Plan): PlanOutline {
     groups: groups.join('\n'),
     areas: areas.join('\n'),
     timing: timing.join(' → '),
-    warnings: warnings.length ? warnings.join('\n') : 'none',
+    warnings: warnings.length ? warnings.join('\n') : $localize`:No warnings in a plan:none`,
   };
 }

@@ -10,7 +10,7 @@ export interface SampleSquad {
 const players = (count: number, keepers = 0) =>
   Array.from({ length: count }, (_, i) => ({
     id: `sample-${i + 1}`,
-    name: `Player ${i + 1}`,
+    name: $localize`:A made-up player's name in a sample squad:Player ${i + 1}:number:`,
     goalkeeper: i < keepers,
   }));
 
@@ -28,21 +28,21 @@ export function sampleSquads(ageGroup: AgeGroup, level: Level): SampleSquad[] {
     seed: 'try-it',
   });
   return [
-    { id: 'small', label: 'Small squad (5)', request: base(5) },
-    { id: 'odd', label: 'Odd numbers (13)', request: base(13) },
+    { id: 'small', label: $localize`:A sample squad of 5 players:Small squad (5)`, request: base(5) },
+    { id: 'odd', label: $localize`:A sample squad of 13 players:Odd numbers (13)`, request: base(13) },
     {
       id: 'large',
-      label: 'Large squad (24)',
+      label: $localize`:A sample squad of 24 players:Large squad (24)`,
       request: { ...base(24), coaches: 2, space: { width: 60, length: 70 } },
     },
     {
       id: 'tiny-space',
-      label: 'Tiny space (12 on 15 × 20 m)',
+      label: $localize`:A sample squad; the size stays in metres written as 15 × 20 m:Tiny space (12 on 15 × 20 m)`,
       request: { ...base(12), space: { width: 15, length: 20 } },
     },
     {
       id: 'no-goals',
-      label: 'No goals (11)',
+      label: $localize`:A sample squad of 11 players:No goals (11)`,
       request: { ...base(11), equipment: { balls: 12, cones: 24, bibs: 10, goals: 0 } },
     },
   ];

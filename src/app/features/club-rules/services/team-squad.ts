@@ -15,11 +15,14 @@ export function teamSquad(team: TeamDto, kit: KitBagDto): SampleSquad | null {
   const { width, length } = team.usualSpace;
   return {
     id: `team-${team.id}`,
-    label: `${team.name} as usual (${count} players on ${width} × ${length} m, ${kit.balls} balls, ${kit.goals} goals)`,
+    label: $localize`:A team's usual squad, space and kit; the size stays in metres written as 30 × 36 m:${team.name}:team: as usual (${count}:players: players on ${width}:width: × ${length}:length: m, ${kit.balls}:balls: balls, ${kit.goals}:goals: goals)`,
     request: {
       ageGroup: team.ageGroup,
       level: team.level,
-      players: Array.from({ length: count }, (_, i) => ({ id: `team-${i + 1}`, name: `Player ${i + 1}` })),
+      players: Array.from({ length: count }, (_, i) => ({
+        id: `team-${i + 1}`,
+        name: $localize`:A made-up player's name in a sample squad:Player ${i + 1}:number:`,
+      })),
       coaches: 1,
       equipment: { balls: kit.balls, cones: kit.cones, bibs: kit.bibs, goals: kit.goals },
       space: { width, length },
