@@ -16,6 +16,7 @@ import { problemFieldErrors, problemMessage } from '../../core/http/problem-mess
 import { ICONS } from '../../core/icons/shipped-icon';
 import { ROLE_LABELS } from '../../core/labels/role-labels';
 import { OwnUnits } from './own-units';
+import { LanguageChoice } from '../../core/locale/language-choice';
 
 const LABELS = { name: $localize`Your name` } as const;
 
@@ -34,6 +35,7 @@ const LABELS = { name: $localize`Your name` } as const;
     MatInputModule,
     ...ICONS,
     OwnUnits,
+    LanguageChoice,
   ],
   templateUrl: './account-page.html',
   styleUrl: './account-page.scss',

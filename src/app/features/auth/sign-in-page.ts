@@ -11,6 +11,7 @@ import { Router, RouterLink } from '@angular/router';
 import { AuthApi } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { LanguageChoice } from '../../core/locale/language-choice';
 
 type Field = 'email' | 'password';
 
@@ -28,7 +29,7 @@ const EMAIL =
  */
 @Component({
   selector: 'cw-sign-in-page',
-  imports: [RouterLink],
+  imports: [RouterLink, LanguageChoice],
   templateUrl: './sign-in-page.html',
   styleUrls: ['./auth-page.scss', './sign-in-page.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,
