@@ -112,7 +112,7 @@ export function changeoverWords(phases: readonly Phase[], index: number): string
         ? $localize`:Set-up line when the drinks break comes just before:Set up during the drinks break`
         : $localize`:Set-up line before a later phase:Set up first`;
   const things = parts.join(', ');
-  const line = $localize`:When to set up, then what to put out, e.g. "Set up first: 12 cones, lift 4 cones":${lead}:when:: ${things}:whatToSetUp:`;
+  const line = $localize`:When to set up, then what to put out, e.g. "Set up first" then "12 cones, lift 4 cones":${lead}:when:: ${things}:whatToSetUp:`;
   if (!change.minutes) return line;
   const time = $localize`:Minutes of a phase set aside for setting up:${change.minutes}:minutes: min of this phase`;
   return `${line} · ${time}`;

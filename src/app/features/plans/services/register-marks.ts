@@ -73,8 +73,8 @@ export function registerLine(marks: RegisterMarks, squad: number): string {
   const late = came.filter((m) => m.late !== null).length;
   const early = came.filter((m) => m.early !== null).length;
   const parts = [$localize`:The register in short:${came.length}:came: of ${squad}:squad: came`];
-  if (late) parts.push($localize`:The register in short: how many came late:${late}:count: late`);
-  if (early) parts.push($localize`:The register in short: how many left early:${early}:count: left early`);
+  if (late) parts.push($localize`:The register in short, how many came late:${late}:count: late`);
+  if (early) parts.push($localize`:The register in short, how many left early:${early}:count: left early`);
   return parts.join(' · ');
 }
 
