@@ -2,34 +2,38 @@
  * The club rules in words: levels, ages and the place of every parameter of a rule set, so the
  * rule tables, the rule-set check's messages, the history and the "try it" compare all name a
  * number the same way ("Group sizes › Keep-ball › Beginner › Most"), never by its JSON pointer.
+ * Every word is marked with `$localize`; sentences made of pieces are whole messages with
+ * placeholders, so a translation may reorder them.
  */
+import '../i18n/localize';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS } from './activity-words';
 import type { AgeGroup, Level, PlanKind } from './plan-request';
 import type { AgeBand } from './plan-rules';
+import { LEVEL_LABELS } from './squad-words';
 
-export const LEVEL_WORDS: Record<Level, string> = {
-  beginner: 'Beginner',
-  intermediate: 'Intermediate',
-  advanced: 'Advanced',
-};
+/** A level in the rules: the same words as a squad's level. */
+export const LEVEL_WORDS: Record<Level, string> = LEVEL_LABELS;
 
 export const PLAN_KIND_WORDS: Record<PlanKind, string> = {
-  'match-warm-up': 'Match warm-up',
-  training: 'Training session',
+  'match-warm-up': $localize`Match warm-up`,
+  training: $localize`Training session`,
 };
 
 /** "U10" → "Under 10"; "adult" → "Adults". */
 export function ageGroupWords(age: string): string {
   const under = /^U(\d+)$/.exec(age);
-  if (under) return `Under ${under[1]}`;
-  return age === 'adult' ? 'Adults' : age;
+  if (under)
+    return $localize`:age group in the club rules, players under this age, e.g. Under 10:Under ${under[1]}:age:`;
+  return age === 'adult' ? $localize`:age group in the club rules:Adults` : age;
 }
 
 /** "U6-U8" → "Under 6 to 8"; "U15-adult" → "Under 15 to adult". */
 export function ageBandWords(band: AgeBand | string): string {
   const match = /^U(\d+)-(U(\d+)|adult)$/.exec(band);
   if (!match) return band;
-  return `Under ${match[1]} to ${match[3] ?? 'adult'}`;
+  return match[3] === undefined
+    ? $localize`:band of age groups in the club rules, e.g. Under 15 to adult:Under ${match[1]}:youngest: to adult`
+    : $localize`:band of age groups in the club rules, e.g. Under 6 to 8:Under ${match[1]}:youngest: to ${match[3]}:oldest:`;
 }
 
 /** Words for a rule set's codes wherever one may stand as a key or a value: a kind, a level, an age. */
@@ -70,178 +74,309 @@ const step = (words: PathStep['words'], fields?: PathStep['fields'], each?: Path
 });
 const byCode = (fields?: PathStep['fields'], each?: PathStep) => step(codeWords, fields, each);
 const leaf = (words: string) => step(words);
-/** A row of a list: its own name when it has one, else "Row 3". */
-const row = (noun: string, nameOf: (value: Record<string, unknown>) => unknown, fields: PathStep['fields']) =>
+/** Words for the n-th entry of a list, counted from 1: "Row 3". */
+type Numbered = (n: number) => string;
+/** A row of a list: its own name when it has one, else its number ("Row 3"). */
+const row = (
+  numberedWords: Numbered,
+  nameOf: (value: Record<string, unknown>) => unknown,
+  fields: PathStep['fields'],
+) =>
   step((key, value) => {
     const name = value && typeof value === 'object' ? nameOf(value as Record<string, unknown>) : undefined;
     if (typeof name === 'string' && name.trim()) return name.trim().replace(/[.:;]+$/, '');
-    return /^\d+$/.test(key) ? `${noun} ${Number(key) + 1}` : humanise(key);
+    return /^\d+$/.test(key) ? numberedWords(Number(key) + 1) : humanise(key);
   }, fields);
-const numbered = (noun: string, each?: PathStep) =>
-  step((key) => (/^\d+$/.test(key) ? `${noun} ${Number(key) + 1}` : humanise(key)), undefined, each);
+const numbered = (numberedWords: Numbered, each?: PathStep) =>
+  step((key) => (/^\d+$/.test(key) ? numberedWords(Number(key) + 1) : humanise(key)), undefined, each);
+/** The rule set's own name, as a place in it. */
+const RULE_SET_NAME = $localize`:club rules|the rule set's own name, as a place in the club rules:Name`;
 
-const GROUP_SIZE = { min: leaf('Fewest'), preferred: leaf('Best'), max: leaf('Most') };
+const GROUP_SIZE = {
+  min: leaf($localize`:club rules|group size of an activity, the fewest players in a group:Fewest`),
+  preferred: leaf(
+    $localize`:club rules|group size of an activity, the best number of players in a group:Best`,
+  ),
+  max: leaf($localize`:club rules|group size of an activity, the most players in a group:Most`),
+};
 const AREA = {
-  width: leaf('Width'),
-  length: leaf('Length'),
-  forPlayers: leaf('For players'),
-  minWidth: leaf('Narrowest'),
-  maxWidth: leaf('Widest'),
-  step: leaf('Step'),
+  width: leaf($localize`:club rules|area of an activity, its width:Width`),
+  length: leaf($localize`:club rules|area of an activity, its length:Length`),
+  forPlayers: leaf(
+    $localize`:club rules|area of an activity, the number of players its width and length are for:For players`,
+  ),
+  minWidth: leaf($localize`:club rules|area of an activity, the narrowest it may be:Narrowest`),
+  maxWidth: leaf($localize`:club rules|area of an activity, the widest it may be:Widest`),
+  step: leaf($localize`:club rules|area of an activity, the step its size changes by:Step`),
 };
 
 /** The one label table: every parameter of a rule set, in the words of the rule tables. */
 const PARAMETERS: Record<string, PathStep> = {
   ageGroups: step(
-    'Activities by age',
-    undefined,
-    byCode({ allowedKinds: leaf('Activities allowed'), band: leaf('Age band'), index: leaf('Order') }),
-  ),
-  groupSizes: step('Group sizes', undefined, byCode(undefined, byCode(GROUP_SIZE))),
-  keepBall: step(
-    'Keep-ball ratios',
+    $localize`:heading in the club rules, the activities each age group may do:Activities by age`,
     undefined,
     byCode({
-      formats: step('Formats', undefined, numbered('Format')),
-      maxAttackersPerDefender: leaf('Most attackers per defender'),
+      allowedKinds: leaf($localize`:club rules, the activities an age group may do:Activities allowed`),
+      band: leaf($localize`:club rules, the band of ages an age group belongs to:Age band`),
+      index: leaf($localize`:club rules|the place of an age group from youngest to oldest:Order`),
     }),
   ),
-  keepBallLimits: step('Keep-ball room', {
-    minM2PerPlayer: leaf('Room a player'),
-    minSideM: leaf('Shortest side'),
-    twoDefendersFromAge: leaf('Two defenders from age'),
+  groupSizes: step(
+    $localize`:heading in the club rules, players in a group for each activity:Group sizes`,
+    undefined,
+    byCode(undefined, byCode(GROUP_SIZE)),
+  ),
+  keepBall: step(
+    $localize`:heading in the club rules, attackers against defenders in keep-ball:Keep-ball ratios`,
+    undefined,
+    byCode({
+      formats: step(
+        $localize`:club rules|the keep-ball formats such as 4v1:Formats`,
+        undefined,
+        numbered(
+          (n) => $localize`:club rules, a keep-ball format by its number, e.g. Format 2:Format ${n}:number:`,
+        ),
+      ),
+      maxAttackersPerDefender: leaf($localize`:club rules, keep-ball:Most attackers per defender`),
+    }),
+  ),
+  keepBallLimits: step($localize`:heading in the club rules, the space keep-ball needs:Keep-ball room`, {
+    minM2PerPlayer: leaf($localize`:club rules, keep-ball, the area each player needs:Room a player`),
+    minSideM: leaf($localize`:club rules, keep-ball, the shortest side of its area:Shortest side`),
+    twoDefendersFromAge: leaf(
+      $localize`:club rules, keep-ball, the age from which it has two defenders:Two defenders from age`,
+    ),
   }),
-  areas: step('Area sizes', undefined, byCode(undefined, byCode(AREA))),
-  areaLevelScale: step('Area scale by level', undefined, byCode()),
+  areas: step(
+    $localize`:heading in the club rules, the size of each activity’s area:Area sizes`,
+    undefined,
+    byCode(undefined, byCode(AREA)),
+  ),
+  areaLevelScale: step(
+    $localize`:heading in the club rules, how much bigger or smaller areas are for each level:Area scale by level`,
+    undefined,
+    byCode(),
+  ),
   sessionShapes: step(
-    'Parts of a session',
+    $localize`:heading in the club rules, the parts a session is made of:Parts of a session`,
     undefined,
     byCode(
       undefined,
       byCode(
         undefined,
-        row('Part', (v) => v['name'], {
-          share: leaf('Share'),
-          maxMinutes: leaf('Longest'),
-          kinds: leaf('Activities'),
-          name: leaf('Name'),
-          priority: leaf('Kept first when short of time'),
-          role: leaf('Role'),
-        }),
+        row(
+          (n) => $localize`:club rules, a part of a session by its number, e.g. Part 3:Part ${n}:number:`,
+          (v) => v['name'],
+          {
+            share: leaf($localize`:club rules|a part of a session, its share of the time:Share`),
+            maxMinutes: leaf(
+              $localize`:club rules|a part of a session, the most minutes it may last:Longest`,
+            ),
+            kinds: leaf($localize`:club rules|the activities a part of a session may use:Activities`),
+            name: leaf($localize`:club rules|the name of a part of a session:Name`),
+            priority: leaf($localize`:club rules, a part of a session:Kept first when short of time`),
+            role: leaf($localize`:club rules|what a part of a session is for:Role`),
+          },
+        ),
       ),
     ),
   ),
   themes: step(
-    'Training themes',
-    undefined,
-    byCode({ technical: leaf('Technical part'), opposed: leaf('Opposed part') }),
-  ),
-  gameFormats: step(
-    'Games and goalkeepers',
+    $localize`:heading in the club rules, the activities for each focus of a training session:Training themes`,
     undefined,
     byCode({
-      maxPerSide: leaf('Most a side'),
-      minPerSide: leaf('Fewest a side'),
-      goalkeepers: leaf('Goalkeepers'),
+      technical: leaf($localize`:club rules, a training theme, its unopposed activities:Technical part`),
+      opposed: leaf($localize`:club rules, a training theme, its activities with opponents:Opposed part`),
     }),
   ),
-  timing: step('Timing', {
-    minPhaseMinutes: leaf('Shortest part'),
-    drinksEveryMinutes: leaf('Drinks break at least every'),
-    heatDrinksEveryMinutes: leaf('In the heat, drinks at least every'),
-    drinksMinutes: leaf('Drinks break length'),
-    conesPerMinute: leaf('Cones put out a minute'),
-    goalMovesPerMinute: leaf('Goals moved a minute'),
-  }),
-  kinds: step(
-    'How activities adapt',
+  gameFormats: step(
+    $localize`:heading in the club rules, players a side in games and whether they have goalkeepers:Games and goalkeepers`,
     undefined,
     byCode({
-      harderWhenArea: leaf('Harder when the area is'),
-      substitutes: leaf('Played instead'),
-      rotatable: leaf('May be turned'),
+      maxPerSide: leaf($localize`:club rules, a game, the most players on each side:Most a side`),
+      minPerSide: leaf($localize`:club rules, a game, the fewest players on each side:Fewest a side`),
+      goalkeepers: leaf($localize`:club rules|whether games have goalkeepers:Goalkeepers`),
+    }),
+  ),
+  timing: step($localize`:club rules|heading, minutes and breaks:Timing`, {
+    minPhaseMinutes: leaf(
+      $localize`:club rules, timing, the fewest minutes a part of a session lasts:Shortest part`,
+    ),
+    drinksEveryMinutes: leaf(
+      $localize`:club rules, timing, followed by a number of minutes:Drinks break at least every`,
+    ),
+    heatDrinksEveryMinutes: leaf(
+      $localize`:club rules, timing, followed by a number of minutes:In the heat, drinks at least every`,
+    ),
+    drinksMinutes: leaf($localize`:club rules, timing, minutes of a drinks break:Drinks break length`),
+    conesPerMinute: leaf(
+      $localize`:club rules, timing, how fast a coach sets out cones:Cones put out a minute`,
+    ),
+    goalMovesPerMinute: leaf(
+      $localize`:club rules, timing, how fast a coach moves goals:Goals moved a minute`,
+    ),
+  }),
+  kinds: step(
+    $localize`:heading in the club rules, how each kind of activity is made harder or replaced:How activities adapt`,
+    undefined,
+    byCode({
+      harderWhenArea: leaf($localize`:club rules, followed by smaller or larger:Harder when the area is`),
+      substitutes: leaf(
+        $localize`:club rules, the activities that may replace a kind of activity:Played instead`,
+      ),
+      rotatable: leaf(
+        $localize`:club rules, whether an activity’s area may be turned round on the pitch:May be turned`,
+      ),
     }),
   ),
   touchRates: step(
-    'Touch rates',
+    $localize`:heading in the club rules, how often players touch the ball in each activity:Touch rates`,
     undefined,
     byCode({
-      perMinute: leaf('Touches a minute'),
-      activeShare: leaf('Share of time in play'),
-      byRole: step('By role', undefined, byCode()),
+      perMinute: leaf(
+        $localize`:club rules, touches of the ball a player makes each minute:Touches a minute`,
+      ),
+      activeShare: leaf(
+        $localize`:club rules, the share of an activity a player is in play:Share of time in play`,
+      ),
+      byRole: step(
+        $localize`:club rules, touch rates for goalkeepers, defenders and servers:By role`,
+        undefined,
+        byCode(),
+      ),
     }),
   ),
-  touchTarget: step('Touch targets', {
-    active: leaf('Warn when a warm-up falls short'),
-    minPerPlayer: leaf('Fewest touches per player'),
-    maxPerPlayer: leaf('Most touches per player'),
-    fromMinutes: leaf('For warm-ups of at least'),
+  touchTarget: step(
+    $localize`:heading in the club rules, the touches a warm-up should give each player:Touch targets`,
+    {
+      active: leaf($localize`:club rules, touch targets, on or off:Warn when a warm-up falls short`),
+      minPerPlayer: leaf($localize`:club rules, touch targets:Fewest touches per player`),
+      maxPerPlayer: leaf($localize`:club rules, touch targets:Most touches per player`),
+      fromMinutes: leaf(
+        $localize`:club rules, touch targets, followed by a number of minutes:For warm-ups of at least`,
+      ),
+    },
+  ),
+  cautions: step($localize`:club rules|heading, weather cautions:Safety`, {
+    heatC: leaf($localize`:club rules, safety, followed by a temperature:Hot weather from`),
+    coldC: leaf($localize`:club rules, safety, followed by a temperature:Cold weather below`),
   }),
-  cautions: step('Safety', { heatC: leaf('Hot weather from'), coldC: leaf('Cold weather below') }),
-  intensity: step('Intensity', { max: leaf('Highest') }),
-  supervision: step('Adults', {
+  intensity: step($localize`:club rules|heading, how hard activities may be:Intensity`, {
+    max: leaf($localize`:club rules|the highest intensity allowed:Highest`),
+  }),
+  supervision: step($localize`:club rules|heading, adults needed to supervise children:Adults`, {
     ratios: step(
-      'Children per adult',
+      $localize`:heading in the club rules, children one adult may supervise, by age:Children per adult`,
       undefined,
-      row('Row', (v) => (typeof v['upToAge'] === 'number' ? `Up to age ${v['upToAge']}` : undefined), {
-        childrenPerAdult: leaf('Children per adult'),
-        upToAge: leaf('Up to age'),
-      }),
+      row(
+        (n) => $localize`:club rules, a row of a table by its number, e.g. Row 3:Row ${n}:number:`,
+        (v) =>
+          typeof v['upToAge'] === 'number'
+            ? $localize`:club rules, a row of children per adult, named by its age, e.g. Up to age 8:Up to age ${v['upToAge']}:age:`
+            : undefined,
+        {
+          childrenPerAdult: leaf($localize`:club rules, children one adult may supervise:Children per adult`),
+          upToAge: leaf($localize`:club rules, the oldest age a row of children per adult is for:Up to age`),
+        },
+      ),
     ),
-    minAdults: leaf('Fewest adults at a children’s session'),
-    stationsPerAdult: leaf('Stations one adult can oversee'),
-    source: leaf('Source'),
+    minAdults: leaf($localize`:club rules, supervision:Fewest adults at a children’s session`),
+    stationsPerAdult: leaf($localize`:club rules, supervision:Stations one adult can oversee`),
+    source: leaf($localize`:club rules|where the supervision numbers come from:Source`),
   }),
-  layout: step('Layout', {
-    bufferM: leaf('Room between stations'),
-    shotClearanceM: leaf('Room behind goals'),
-    gateWidthM: leaf('Gate width'),
+  layout: step($localize`:club rules|heading, room around stations and goals on the pitch:Layout`, {
+    bufferM: leaf($localize`:club rules, layout, a distance:Room between stations`),
+    shotClearanceM: leaf($localize`:club rules, layout, a distance:Room behind goals`),
+    gateWidthM: leaf($localize`:club rules, layout, the width of a gate made of two cones:Gate width`),
   }),
-  allocation: step('Grouping', {
-    coachPenalty: leaf('Reluctance to add a coach to a group'),
-    fallbackStationPenalty: leaf('Reluctance to use a stand-in activity'),
+  allocation: step($localize`:club rules|heading, how players and coaches are put into groups:Grouping`, {
+    coachPenalty: leaf($localize`:club rules, grouping, a weight:Reluctance to add a coach to a group`),
+    fallbackStationPenalty: leaf(
+      $localize`:club rules, grouping, a weight:Reluctance to use a stand-in activity`,
+    ),
   }),
-  variety: step('Variety', { recentPenalty: leaf('Avoid recent activities') }),
-  focusBoost: step('Focus weight', undefined, byCode()),
-  activities: step(
-    'Our activities',
+  variety: step($localize`:club rules|heading, how plans avoid repeating activities:Variety`, {
+    recentPenalty: leaf($localize`:club rules, variety, a weight:Avoid recent activities`),
+  }),
+  focusBoost: step(
+    $localize`:heading in the club rules, how strongly each kind of activity follows a session’s focus:Focus weight`,
     undefined,
-    row('Activity', (v) => v['title'], {
-      id: leaf('Reference'),
-      kind: leaf('Kind'),
-      title: leaf('Title'),
-      summary: leaf('Summary'),
-      description: leaf('What the players do'),
-      coachingPoints: step('Coaching points', undefined, numbered('Point')),
-      easier: step('Easier', undefined, numbered('Way')),
-      harder: step('Harder', undefined, numbered('Way')),
-      ages: step('Ages', { from: leaf('Youngest'), to: leaf('Oldest') }),
-      levels: leaf('Levels'),
-      focus: leaf('Focus'),
-      intensity: leaf('Intensity'),
-      balls: leaf('Balls'),
-      bibs: leaf('Bibs'),
-      layout: leaf('Set-up'),
-      players: step('Players in a group', { min: leaf('Fewest'), max: leaf('Most') }),
-      origin: leaf('Added by the club'),
-      retired: leaf('Retired'),
-    }),
+    byCode(),
+  ),
+  activities: step(
+    $localize`:heading in the club rules, the club’s list of activities:Our activities`,
+    undefined,
+    row(
+      (n) =>
+        $localize`:club rules, an activity by its number in the list, e.g. Activity 3:Activity ${n}:number:`,
+      (v) => v['title'],
+      {
+        id: leaf($localize`:club rules|the short code that names an activity or a rule:Reference`),
+        kind: leaf($localize`:club rules|the kind of an activity:Kind`),
+        title: leaf($localize`:club rules|an activity’s title:Title`),
+        summary: leaf($localize`:club rules|an activity’s one-line summary:Summary`),
+        description: leaf($localize`:club rules, an activity’s description:What the players do`),
+        coachingPoints: step(
+          $localize`:club rules, an activity’s coaching points:Coaching points`,
+          undefined,
+          numbered(
+            (n) => $localize`:club rules, a coaching point by its number, e.g. Point 2:Point ${n}:number:`,
+          ),
+        ),
+        easier: step(
+          $localize`:club rules|ways to make an activity easier:Easier`,
+          undefined,
+          numbered(
+            (n) =>
+              $localize`:club rules, a way to make an activity easier or harder, by its number, e.g. Way 2:Way ${n}:number:`,
+          ),
+        ),
+        harder: step(
+          $localize`:club rules|ways to make an activity harder:Harder`,
+          undefined,
+          numbered(
+            (n) =>
+              $localize`:club rules, a way to make an activity easier or harder, by its number, e.g. Way 2:Way ${n}:number:`,
+          ),
+        ),
+        ages: step($localize`:club rules|the ages an activity suits:Ages`, {
+          from: leaf($localize`:club rules|the youngest age group an activity suits:Youngest`),
+          to: leaf($localize`:club rules|the oldest age group an activity suits:Oldest`),
+        }),
+        levels: leaf($localize`:club rules|the levels an activity suits:Levels`),
+        focus: leaf($localize`:club rules|what an activity works on:Focus`),
+        intensity: leaf($localize`:club rules|how hard an activity is, 1 to 5:Intensity`),
+        balls: leaf($localize`:club rules|the balls an activity needs:Balls`),
+        bibs: leaf($localize`:club rules|whether an activity needs bibs:Bibs`),
+        layout: leaf($localize`:club rules|how an activity is laid out:Set-up`),
+        players: step($localize`:club rules, players an activity takes:Players in a group`, {
+          min: leaf($localize`:club rules|the fewest players an activity takes:Fewest`),
+          max: leaf($localize`:club rules|the most players an activity takes:Most`),
+        }),
+        origin: leaf($localize`:club rules, an activity the club wrote itself:Added by the club`),
+        retired: leaf($localize`:club rules|an activity no longer used in new plans:Retired`),
+      },
+    ),
   ),
 };
 
 const DOCUMENT: Record<string, PathStep> = {
-  name: leaf('Name'),
-  id: leaf('Reference'),
-  version: leaf('Version number'),
+  name: leaf(RULE_SET_NAME),
+  id: leaf($localize`:club rules|the short code that names an activity or a rule:Reference`),
+  version: leaf($localize`:club rules, the number of a version of the rule set:Version number`),
   rules: step(
-    'Rules',
+    $localize`:club rules|heading, the rules that change a plan when their conditions are met:Rules`,
     undefined,
-    row('Rule', (v) => v['description'], {
-      id: leaf('Reference'),
-      description: leaf('Description'),
-      conditions: leaf('When'),
-      event: leaf('What it does'),
-    }),
+    row(
+      (n) => $localize`:club rules, a rule by its number, e.g. Rule 3:Rule ${n}:number:`,
+      (v) => v['description'],
+      {
+        id: leaf($localize`:club rules|the short code that names an activity or a rule:Reference`),
+        description: leaf($localize`:club rules|what a rule is for:Description`),
+        conditions: leaf($localize`:club rules|the conditions of a rule:When`),
+        event: leaf($localize`:club rules, what a rule changes in a plan:What it does`),
+      },
+    ),
   ),
 };
 
@@ -283,7 +418,11 @@ export function rulePathParts(pointer: string, document?: unknown): string[] {
     }
     const known: PathStep | undefined = table && Object.hasOwn(table, key) ? table[key] : each;
     if (!known) {
-      words.push(/^\d+$/.test(key) ? `Item ${Number(key) + 1}` : codeWords(key));
+      words.push(
+        /^\d+$/.test(key)
+          ? $localize`:club rules, an entry of a list by its number, e.g. Item 3:Item ${Number(key) + 1}:number:`
+          : codeWords(key),
+      );
       table = undefined;
       each = undefined;
       return;
@@ -298,31 +437,45 @@ export function rulePathParts(pointer: string, document?: unknown): string[] {
 /** The same place as one line: "Group sizes › Keep-ball › Beginner › Most". */
 export function rulePathWords(pointer: string, document?: unknown): string {
   const parts = rulePathParts(pointer, document);
-  return parts.length ? parts.join(' › ') : 'The whole rule set';
+  if (!parts.length)
+    return $localize`:club rules, the place meant when a message is about the whole rule set:The whole rule set`;
+  return parts.reduce(
+    (outer, inner) =>
+      $localize`:club rules, a place in the rules, a heading then what is under it, e.g. Group sizes › Keep-ball:${outer}:outer: › ${inner}:inner:`,
+  );
+}
+
+/** Attackers against defenders: "4v1". */
+function versusWords(attackers: unknown, defenders: unknown): string {
+  return $localize`:attackers against defenders in keep-ball, e.g. 4v1:${attackers}:attackers:v${defenders}:defenders:`;
 }
 
 /** A value of the rules as a person reads it: "4v1, 3v1", "Keep-ball, Duel", "Yes", an activity's title. */
 export function ruleValueWords(value: unknown): string {
   if (value === undefined || value === null) return '—';
-  if (typeof value === 'boolean') return value ? 'Yes' : 'No';
+  if (typeof value === 'boolean')
+    return value
+      ? $localize`:club rules, a setting that is on:Yes`
+      : $localize`:club rules, a setting that is off:No`;
   if (typeof value === 'number') return String(value);
   if (typeof value === 'string')
     return /^[a-z0-9]+(-[a-z0-9]+)*$|^U\d/.test(value) ? codeWords(value) : value;
   if (Array.isArray(value)) {
-    if (value.length === 0) return 'none';
+    if (value.length === 0) return $localize`:club rules, an empty list:none`;
     if (value.every((v) => v && typeof v === 'object' && 'attackers' in v && 'defenders' in v))
       return value
-        .map((v: { attackers: number; defenders: number }) => `${v.attackers}v${v.defenders}`)
+        .map((v: { attackers: number; defenders: number }) => versusWords(v.attackers, v.defenders))
         .join(', ');
     const words = value.map((v) => ruleValueWords(v)).join(', ');
     return words.length > 120 ? `${words.slice(0, 117)}…` : words;
   }
   const named = value as Record<string, unknown>;
   if (typeof named['attackers'] === 'number' && typeof named['defenders'] === 'number')
-    return `${named['attackers']}v${named['defenders']}`;
+    return versusWords(named['attackers'], named['defenders']);
   for (const key of ['title', 'description', 'name'])
-    if (typeof named[key] === 'string' && named[key]) return `“${named[key] as string}”`;
-  return 'a group of settings';
+    if (typeof named[key] === 'string' && named[key])
+      return $localize`:club rules, a title or name written in quotation marks:“${named[key] as string}:name:”`;
+  return $localize`:club rules, a value made of several settings:a group of settings`;
 }
 
 /** One change in words: "Group sizes › Keep-ball › Beginner › Most: 6 → 5". */
@@ -330,10 +483,18 @@ export function ruleChangeWords(
   change: { path: string; change: 'added' | 'removed' | 'changed'; before?: unknown; after?: unknown },
   document?: unknown,
 ): string {
-  const place = change.path === '(name)' ? 'Name' : rulePathWords(change.path, document);
-  if (change.change === 'added') return `${place}: added ${ruleValueWords(change.after)}`;
-  if (change.change === 'removed') return `${place}: removed (was ${ruleValueWords(change.before)})`;
-  return `${place}: ${ruleValueWords(change.before)} → ${ruleValueWords(change.after)}`;
+  const place = change.path === '(name)' ? RULE_SET_NAME : rulePathWords(change.path, document);
+  if (change.change === 'added') {
+    const value = ruleValueWords(change.after);
+    return $localize`:a change to the club rules, the place and the value added:${place}:place:: added ${value}:value:`;
+  }
+  if (change.change === 'removed') {
+    const value = ruleValueWords(change.before);
+    return $localize`:a change to the club rules, the place and the value removed:${place}:place:: removed (was ${value}:value:)`;
+  }
+  const before = ruleValueWords(change.before);
+  const after = ruleValueWords(change.after);
+  return $localize`:a change to the club rules, the place, the value before and after:${place}:place:: ${before}:before: → ${after}:after:`;
 }
 
 /** What "Club rules: …" needs to know of a version (RuleSetSummaryDto has it). */
@@ -349,12 +510,22 @@ export interface RulesNamed {
  * and the printed card say it (the date in the reader's locale).
  */
 export function rulesInWords(rules: RulesNamed | null, locale?: string): string {
-  if (!rules) return 'Club rules';
-  if (rules.builtIn) return 'Club rules: Conewise’s starting rules';
-  const when = rules.publishedAt
-    ? `, published ${new Intl.DateTimeFormat(locale, { day: 'numeric', month: 'short' }).format(new Date(rules.publishedAt))}`
-    : '';
-  const state =
-    rules.status === 'draft' ? ' (a draft)' : rules.status === 'archived' ? ' (an earlier version)' : '';
-  return `Club rules: ${rules.name}${when}${state}`;
+  if (!rules) return $localize`:the rules a plan was made with, when they are not known:Club rules`;
+  if (rules.builtIn) return $localize`:the rules a plan was made with:Club rules: Conewise’s starting rules`;
+  const name = rules.name;
+  if (!rules.publishedAt) {
+    if (rules.status === 'draft')
+      return $localize`:the rules a plan was made with, a draft:Club rules: ${name}:rulesName: (a draft)`;
+    if (rules.status === 'archived')
+      return $localize`:the rules a plan was made with, replaced since:Club rules: ${name}:rulesName: (an earlier version)`;
+    return $localize`:the rules a plan was made with:Club rules: ${name}:rulesName:`;
+  }
+  const date = new Intl.DateTimeFormat(locale, { day: 'numeric', month: 'short' }).format(
+    new Date(rules.publishedAt),
+  );
+  if (rules.status === 'draft')
+    return $localize`:the rules a plan was made with, a draft, and the day they were published, e.g. 3 Dec:Club rules: ${name}:rulesName:, published ${date}:date: (a draft)`;
+  if (rules.status === 'archived')
+    return $localize`:the rules a plan was made with, replaced since, and the day they were published, e.g. 3 Dec:Club rules: ${name}:rulesName:, published ${date}:date: (an earlier version)`;
+  return $localize`:the rules a plan was made with and the day they were published, e.g. 3 Dec:Club rules: ${name}:rulesName:, published ${date}:date:`;
 }

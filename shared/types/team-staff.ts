@@ -1,3 +1,4 @@
+import '../i18n/localize';
 import type { Role } from './api';
 
 /** Putting a member on a team's staff, or taking them off. */
@@ -29,15 +30,15 @@ export function staffChangeRefusal(
 ): string | null {
   if (caller.role === 'lead') return null;
   if (caller.role !== 'coach' || !teamStaffIds.includes(caller.id)) {
-    return 'Only the head of coaching and this team’s coaches can change who helps with it.';
+    return $localize`Only the head of coaching and this team’s coaches can change who helps with it.`;
   }
   if (member.userId === caller.id) {
     return change === 'remove'
-      ? 'You cannot take yourself off your own team. Ask the head of coaching.'
+      ? $localize`You cannot take yourself off your own team. Ask the head of coaching.`
       : null;
   }
   if (member.role !== 'assistant') {
-    return 'Coaches can add and remove assistants. Ask the head of coaching to change this team’s coaches.';
+    return $localize`Coaches can add and remove assistants. Ask the head of coaching to change this team’s coaches.`;
   }
   return null;
 }

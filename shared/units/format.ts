@@ -1,4 +1,5 @@
 /** The one place that writes distances, sizes, areas and temperatures for people. */
+import '../i18n/localize';
 import { distanceIn, temperatureIn } from './convert';
 import type { DistanceUnit, TemperatureUnit } from './units';
 
@@ -9,7 +10,9 @@ export function distanceSymbol(unit: DistanceUnit): 'm' | 'yd' {
 
 /** The unit in a sentence: "metres" or "yards". */
 export function distanceUnitName(unit: DistanceUnit): string {
-  return unit;
+  return unit === 'yards'
+    ? $localize`:distance unit inside a sentence, e.g. Space (yards):yards`
+    : $localize`:distance unit inside a sentence, e.g. Space (metres):metres`;
 }
 
 /** "°C" or "°F". */
@@ -39,7 +42,11 @@ export function formatSize(unit: DistanceUnit, size: { width: number; length: nu
 
 /** "40 by 60 yards", for sentences read aloud. */
 export function sizeInWords(unit: DistanceUnit, size: { width: number; length: number }): string {
-  return `${wholeDistance(unit, size.width)} by ${wholeDistance(unit, size.length)} ${distanceUnitName(unit)}`;
+  const width = wholeDistance(unit, size.width);
+  const length = wholeDistance(unit, size.length);
+  return unit === 'yards'
+    ? $localize`:an area's width by its length, read aloud:${width}:width: by ${length}:length: yards`
+    : $localize`:an area's width by its length, read aloud:${width}:width: by ${length}:length: metres`;
 }
 
 /** Square metres as "9 m²" / "11 yd²" (whole numbers in `unit`). */
