@@ -9,6 +9,8 @@ import { localeBuilds } from './build/locale-builds';
 import { clientAssets, clientShell, compressAnswers, noStore } from './middleware/client-files';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 import { createRequireAuth } from './middleware/require-auth';
+import { speakTheirLanguage } from './middleware/request-language';
+import { installTranslations } from './i18n/translations';
 import { createApiRouter } from './routes';
 import { outboxMailQueue, type MailQueue } from './services/mail-queue';
 
@@ -98,6 +100,8 @@ export function createApp(deps: AppDeps): Express {
   );
   app.use('/api', noStore);
   app.use('/api', express.json({ limit: JSON_BODY_LIMIT, type: ['application/json', 'application/*+json'] }));
+  installTranslations();
+  app.use('/api', speakTheirLanguage);
 
   const requireAuth = createRequireAuth(deps.dataSource, deps.config);
   app.use(

@@ -11,6 +11,7 @@
  */
 import { existsSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
+import { languageOf, SOURCE_LANGUAGE } from '../../shared/i18n/languages';
 
 export interface LocaleBuild {
   /** The language it is chosen for: "en", "es". */
@@ -20,9 +21,6 @@ export interface LocaleBuild {
   /** Where its hashed files are served: "/es" (or "" for a build without languages). */
   prefix: string;
 }
-
-/** The language the app is written in: chosen when the reader's is not built. */
-export const SOURCE_LANGUAGE = 'en';
 
 /** Files named with their content's hash (`main-AB12CD34.js`, `media/font-…-EF56GH78.woff2`). */
 export const HASHED_FILE = /-[A-Z0-9]{8}\.(?:js|css|woff2?|svg|png|jpe?g|webp)$/;
@@ -38,7 +36,7 @@ export function localeBuilds(staticDir: string | null): LocaleBuild[] {
   return readdirSync(staticDir, { withFileTypes: true })
     .filter((entry) => entry.isDirectory() && existsSync(join(staticDir, entry.name, 'index.html')))
     .map((entry) => ({
-      language: entry.name.split('-')[0]!.toLowerCase(),
+      language: languageOf(entry.name),
       dir: join(staticDir, entry.name),
       prefix: `/${entry.name}`,
     }))

@@ -3,7 +3,8 @@ import { join } from 'node:path';
 import compression from 'compression';
 import express, { Router, type Request, type RequestHandler, type Response } from 'express';
 import expressStaticGzip from 'express-static-gzip';
-import { HASHED_FILE, type LocaleBuild, SOURCE_LANGUAGE } from '../build/locale-builds';
+import { HASHED_FILE, type LocaleBuild } from '../build/locale-builds';
+import { languageFor } from './request-language';
 
 /**
  * Files whose name carries a content hash (`chunk-PS7PETOW.js`, `media/…-OJ3A7MQ4.woff2`): a new
@@ -11,20 +12,12 @@ import { HASHED_FILE, type LocaleBuild, SOURCE_LANGUAGE } from '../build/locale-
  */
 const HASHED = HASHED_FILE;
 
-/** The cookie that holds the language a person chose ("en", "es"); without it, the browser's. */
-export const LANGUAGE_COOKIE = 'cw-lang';
-
-/**
- * The build for this reader: the language they chose (the cookie), else the first of their
- * browser's languages (Accept-Language, negotiated by Express) that is built, else the source's.
- */
+/** The build in the reader's language (server/middleware/request-language.ts), else the source's. */
 export function buildFor(req: Request, builds: readonly LocaleBuild[]): LocaleBuild {
-  const languages = builds.map((b) => b.language);
-  const chosen = /(?:^|;\s*)cw-lang=([a-z]{2,3})\b/.exec(req.headers.cookie ?? '')?.[1];
-  const language =
-    (chosen && languages.includes(chosen) ? chosen : null) ||
-    (req.headers['accept-language'] ? req.acceptsLanguages(...languages) : null) ||
-    SOURCE_LANGUAGE;
+  const language = languageFor(
+    req,
+    builds.map((b) => b.language),
+  );
   return builds.find((b) => b.language === language) ?? builds[0]!;
 }
 

@@ -6,6 +6,7 @@ import { PlayerService } from '../services/player-service';
 import { RosterImportService } from '../services/roster-import-service';
 import type { ApiDeps } from './api-deps';
 import { scopeOf } from './scoped';
+import { speakTheirLanguage } from '../middleware/request-language';
 
 /** CSV uploads above this answer 413. */
 export const CSV_UPLOAD_LIMIT_BYTES = 1024 * 1024;
@@ -43,7 +44,7 @@ export function playersRouter({ dataSource, config, requireAuth }: ApiDeps): Rou
       res.status(201).json(await players(req).create(req.params['id'] as string, req.body));
     },
   );
-  router.post('/teams/:id/players/import', requireAuth, id, upload.single('file'), async (req, res) => {
+  router.post('/teams/:id/players/import', requireAuth, id, upload.single('file'), speakTheirLanguage, async (req, res) => {
     res.json(await imports(req).preview(req.params['id'] as string, req.file?.buffer));
   });
   router.post(

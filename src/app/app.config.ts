@@ -11,6 +11,7 @@ import { routes } from './app.routes';
 import { authInterceptor } from './core/auth/auth-interceptor';
 import { provideIcons } from './core/icons/provide-icons';
 import { idempotencyInterceptor } from './core/http/idempotency-interceptor';
+import { languageInterceptor } from './core/http/language-interceptor';
 import { loadingInterceptor } from './core/http/loading-interceptor';
 import { provideLocaleSync } from './core/locale/locale-sync';
 
@@ -25,7 +26,7 @@ export const appConfig: ApplicationConfig = {
     ),
     provideHttpClient(
       withFetch(),
-      withInterceptors([loadingInterceptor, idempotencyInterceptor, authInterceptor]),
+      withInterceptors([loadingInterceptor, languageInterceptor, idempotencyInterceptor, authInterceptor]),
     ),
     provideIcons(),
     provideLocaleSync(),

@@ -1,19 +1,5 @@
 import { ChangeDetectionStrategy, Component, LOCALE_ID, inject } from '@angular/core';
-
-/** A language the app is built in, named in itself (common practice: a reader finds their own). */
-export interface AppLanguage {
-  code: string;
-  name: string;
-}
-
-/** The languages built (angular.json's i18n): each a build of its own, served by the server. */
-export const APP_LANGUAGES: readonly AppLanguage[] = [
-  { code: 'en', name: 'English' },
-  { code: 'es', name: 'Español' },
-];
-
-/** The cookie the server reads to choose the build (server/middleware/client-files.ts). */
-const COOKIE = 'cw-lang';
+import { LANGUAGE_COOKIE, LANGUAGES, languageOf } from '../../../../shared/i18n/languages';
 
 /**
  * The app's language, chosen by a person: kept in a cookie for a year (the server sends that
@@ -66,13 +52,13 @@ const COOKIE = 'cw-lang';
   `,
 })
 export class LanguageChoice {
-  protected readonly languages = APP_LANGUAGES;
+  protected readonly languages = LANGUAGES;
   /** The language of the build on screen ("en-GB" → "en"). */
-  protected readonly current = inject(LOCALE_ID).split('-')[0]!.toLowerCase();
+  protected readonly current = languageOf(inject(LOCALE_ID));
 
   /** Keeps the choice and opens the page again in that language. */
   protected async choose(code: string): Promise<void> {
-    document.cookie = `${COOKIE}=${code}; path=/; max-age=31536000; SameSite=Lax`;
+    document.cookie = `${LANGUAGE_COOKIE}=${code}; path=/; max-age=31536000; SameSite=Lax`;
     const workers = (await globalThis.navigator?.serviceWorker?.getRegistrations?.()) ?? [];
     await Promise.all(workers.map((w) => w.unregister()));
     location.reload();
