@@ -6,6 +6,7 @@ import { RuleSet } from '../entities/rule-set';
 import { Team } from '../entities/team';
 import { notFound } from '../http/problem';
 import type { ClubScope } from './club-scope';
+import { inReaderWords } from '../i18n/rule-set-words';
 import { defaultRules } from './engine-port';
 import { cachedDocument, documentOf, type RuleSetRevision } from './rules-resolver';
 
@@ -119,7 +120,9 @@ export async function loadPlanInputs(
       ...(f.areaLength !== null ? { areaLength: f.areaLength } : {}),
       ...(f.groupSize !== null ? { groupSize: f.groupSize } : {}),
     }));
-  const rules = row.rules ? await publishedDocument(manager, scope.clubId, row.rules) : defaultRules();
+  const rules = inReaderWords(
+    row.rules ? await publishedDocument(manager, scope.clubId, row.rules) : defaultRules(),
+  );
   return {
     team,
     roster: row.roster,

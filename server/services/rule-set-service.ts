@@ -17,6 +17,7 @@ import type { AuthContext } from '../http/auth-context';
 import { DetailedProblem } from '../http/detailed-problem';
 import { badRequest, conflict } from '../http/problem';
 import { ClubScope } from './club-scope';
+import { inReaderWords, inSourceWords } from '../i18n/rule-set-words';
 import { defaultRules, ruleSetErrors } from './engine-port';
 import { jsonDiff } from './json-diff';
 import { documentOf } from './rules-resolver';
@@ -100,7 +101,7 @@ export class RuleSetService {
           `Version ${current.version} is ${current.status} and cannot change; start a draft from it.`,
         );
       }
-      const body = input.body === undefined ? current.body : { ...(input.body as object) };
+      const body = input.body === undefined ? current.body : inSourceWords({ ...(input.body as object) });
       const name = input.name ?? current.name;
       const result: { id: string }[] = await manager.query(
         `UPDATE rule_set SET body = $1, name = $2, revision = revision + 1, "updatedAt" = now(), "authorId" = $3
@@ -346,7 +347,7 @@ export function ruleSetDto(row: RuleSet & { author?: User | null }): RuleSetDto 
     name: row.name,
     version: row.version,
     status: row.status,
-    body: row.body,
+    body: inReaderWords(row.body as RuleSetDocument),
     authorId: row.authorId ?? '',
     authorName: row.author?.name ?? '',
     createdAt: row.createdAt.toISOString(),
@@ -362,7 +363,7 @@ function defaultDto(body: RuleSetDocument): RuleSetDto {
     name: body.name ?? 'Default rules',
     version: body.version,
     status: 'published',
-    body,
+    body: inReaderWords(body),
     authorId: '',
     authorName: 'Conewise',
     createdAt: epoch,

@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { RuleSetDocument } from '../../shared/types/plan-rules';
 import { RuleSet } from '../entities/rule-set';
+import { inReaderWords } from '../i18n/rule-set-words';
 import { defaultRules } from './engine-port';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
@@ -33,12 +34,12 @@ export function documentOf(row: RuleSet): RuleSetDocument {
   return doc;
 }
 
-/** The club's published rules, or the engine's default when it has published none. */
+/** The club's published rules, or the engine's default when it has published none, in the reader's words. */
 export async function publishedRules(manager: EntityManager, clubId: string): Promise<RuleSetDocument> {
   const row = await manager
     .getRepository(RuleSet)
     .findOne({ where: { clubId, status: 'published' }, order: { version: 'DESC' } });
-  return row ? documentOf(row) : defaultRules();
+  return inReaderWords(row ? documentOf(row) : defaultRules());
 }
 
 /** The rules a stored plan was made with (its id and version), so old plans keep their rules. */
@@ -49,7 +50,7 @@ export async function rulesOfPlan(
 ): Promise<RuleSetDocument> {
   if (UUID.test(ruleSetId)) {
     const row = await manager.getRepository(RuleSet).findOne({ where: { id: ruleSetId, clubId } });
-    if (row) return documentOf(row);
+    if (row) return inReaderWords(documentOf(row));
   }
-  return defaultRules();
+  return inReaderWords(defaultRules());
 }
