@@ -1,12 +1,15 @@
 /**
  * The Spanish translation is complete and keeps every placeholder: each message extracted from
- * the app (src/locale/messages.xlf, written by `ng extract-i18n`) has a Spanish target in
- * messages.es.xlf that holds the same placeholders (a name, a number, the start and end of a tag)
- * and, for plurals and choices, the same cases. The Spanish build refuses a message without a
- * translation (angular.json: i18nMissingTranslation "error"); this says which one, and why.
+ * the app (src/locale/messages.xlf, written by `ng extract-i18n`) and from what only the server
+ * says (server/locale/messages.xlf, written by server/cli/extract-words.ts) has a Spanish target
+ * in messages.es.xlf beside it that holds the same placeholders (a name, a number, the start and
+ * end of a tag) and, for plurals and choices, the same cases. The Spanish build refuses a message
+ * without a translation (angular.json: i18nMissingTranslation "error"); the server would say it
+ * in English; this says which one, and why.
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { LANGUAGES } from '../../shared/i18n/languages';
 
 interface Unit {
   id: string;
@@ -15,7 +18,7 @@ interface Unit {
 }
 
 function unitsOf(file: string): Map<string, Unit> {
-  const xml = readFileSync(new URL(`../../src/locale/${file}`, import.meta.url), 'utf8');
+  const xml = readFileSync(new URL(`../../${file}`, import.meta.url), 'utf8');
   const units = new Map<string, Unit>();
   for (const [, id, body] of xml.matchAll(/<trans-unit id="([^"]+)"[^>]*>([\s\S]*?)<\/trans-unit>/g)) {
     units.set(id!, {
@@ -35,12 +38,15 @@ const cases = (text: string) =>
     ? [...text.replace(/<x [^>]*\/>/g, '').matchAll(/(?:^|[\s}])(=\d+|[a-z][a-z-]*) \{/g)].map((m) => m[1])
     : [];
 
-describe('the Spanish translation', () => {
-  const source = unitsOf('messages.xlf');
-  const spanish = unitsOf('messages.es.xlf');
+describe.each([
+  { folder: 'src/locale', who: 'the app', least: 1000 },
+  { folder: 'server/locale', who: 'the server', least: 50 },
+])('the Spanish translation of what $who says', ({ folder, least }) => {
+  const source = unitsOf(`${folder}/messages.xlf`);
+  const spanish = unitsOf(`${folder}/messages.es.xlf`);
 
-  it('has every message the app shows, and none it no longer shows', () => {
-    expect(source.size).toBeGreaterThan(1000);
+  it('has every message, and none that is no longer said', () => {
+    expect(source.size).toBeGreaterThan(least);
     const untranslated = [...source.keys()].filter((id) => !spanish.get(id)?.target?.trim());
     expect(untranslated.map((id) => `${id}: ${source.get(id)!.source}`)).toEqual([]);
     expect([...spanish.keys()].filter((id) => !source.has(id))).toEqual([]);
@@ -62,5 +68,15 @@ describe('the Spanish translation', () => {
     const same = [...spanish.values()].filter((u) => u.target === u.source);
     // Names, formats and symbols read the same in both ("Conewise", "1v1", "°C").
     expect(same.length / spanish.size).toBeLessThan(0.05);
+  });
+});
+
+describe('the languages', () => {
+  it('are the ones the app is built in (angular.json) and the ones the server reads', () => {
+    const angular = JSON.parse(readFileSync(new URL('../../angular.json', import.meta.url), 'utf8'));
+    const i18n = angular.projects.conewise.i18n;
+    expect([i18n.sourceLocale.code ?? i18n.sourceLocale, ...Object.keys(i18n.locales)]).toEqual(
+      LANGUAGES.map((l) => l.locale),
+    );
   });
 });
