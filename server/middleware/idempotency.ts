@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { createHash } from 'node:crypto';
 import type { Request, RequestHandler, Response } from 'express';
 import type { DataSource } from 'typeorm';
@@ -76,10 +77,10 @@ export function idempotencyKeyOf(req: Request): string | null {
   if (header === undefined) return null;
   const match = typeof header === 'string' ? KEY.exec(header.trim()) : null;
   if (!match)
-    throw badRequest(`The ${IDEMPOTENCY_KEY_HEADER} header is not a usable key.`, [
+    throw badRequest($localize`The ${IDEMPOTENCY_KEY_HEADER}:header: header is not a usable key.`, [
       {
         field: IDEMPOTENCY_KEY_HEADER,
-        message: 'must be 8 to 128 letters, digits, dashes, underscores, dots or colons, sent once',
+        message: $localize`:field error after the header's name:must be 8 to 128 letters, digits, dashes, underscores, dots or colons, sent once`,
       },
     ]);
   return match[1]!;
@@ -136,8 +137,8 @@ export function idempotency(dataSource: DataSource): RequestHandler {
           res.setHeader('Retry-After', '1');
           throw new HttpError(
             409,
-            'Still being processed',
-            `The same request is still being processed. Send it again in a moment with the same ${IDEMPOTENCY_KEY_HEADER} to get its answer.`,
+            $localize`:title of an error answer:Still being processed`,
+            $localize`The same request is still being processed. Send it again in a moment with the same ${IDEMPOTENCY_KEY_HEADER}:header: to get its answer.`,
             undefined,
             '/problems/request-in-progress',
           );
@@ -145,10 +146,15 @@ export function idempotency(dataSource: DataSource): RequestHandler {
         if (row.requestHash !== hash)
           throw new DetailedProblem(
             422,
-            'Key already used',
-            `This ${IDEMPOTENCY_KEY_HEADER} was already used for a different request. Send a new key with each new request.`,
+            $localize`:title of an error answer:Key already used`,
+            $localize`This ${IDEMPOTENCY_KEY_HEADER}:header: was already used for a different request. Send a new key with each new request.`,
             {},
-            [{ field: IDEMPOTENCY_KEY_HEADER, message: 'was already used with a different body' }],
+            [
+              {
+                field: IDEMPOTENCY_KEY_HEADER,
+                message: $localize`:field error after the header's name:was already used with a different body`,
+              },
+            ],
             '/problems/idempotency-key-reused',
           );
         replay(res, row.status, row.headers ?? {}, row.body ?? '');

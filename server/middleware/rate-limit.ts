@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import type { DataSource } from 'typeorm';
@@ -16,19 +17,19 @@ export function authRateLimit(config: AppConfig, dataSource: DataSource, name: s
     config,
     dataSource,
     name,
-    'Too many sign-in attempts from here. Wait a few minutes.',
+    () => $localize`Too many sign-in attempts from here. Wait a few minutes.`,
   );
 }
 
 /**
  * The same per-IP limit for any public route that needs no sign-in (calendar feeds, helper links),
- * with its own counter (`name`) and message.
+ * with its own counter (`name`) and message (a function, so it is said in each reader's language).
  */
 export function publicRateLimit(
   config: AppConfig,
   dataSource: DataSource,
   name: string,
-  message: string,
+  message: () => string,
 ): RequestHandler {
   return rateLimit({
     windowMs: config.authRateLimit.windowMs,
@@ -36,6 +37,15 @@ export function publicRateLimit(
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     store: new PostgresRateLimitStore(dataSource, name),
-    handler: (_req, _res, next) => next(new HttpError(429, 'Too many requests', message)),
+    handler: (_req, _res, next) =>
+      next(
+        new HttpError(
+          429,
+          $localize`:title of an error answer:Too many requests`,
+          message(),
+          undefined,
+          '/problems/too-many-requests',
+        ),
+      ),
   });
 }

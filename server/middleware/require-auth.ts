@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { createSecretKey } from 'node:crypto';
 import type { Request, RequestHandler } from 'express';
 import { Passport } from 'passport';
@@ -85,7 +86,7 @@ export function createRequireAuth(dataSource: DataSource, config: AppConfig): Re
     authenticate(req, res, (error?: unknown) => {
       if (!error) return next();
       if (error instanceof HttpError || (error as { status?: number }).status !== 401) return next(error);
-      next(unauthorized('A valid sign-in token is required.'));
+      next(unauthorized($localize`A valid sign-in token is required.`));
     });
   };
 }

@@ -1,6 +1,6 @@
+import '../../shared/i18n/localize';
 import type { RequestHandler } from 'express';
 import type { Role } from '../../shared/types/api';
-import { ROLE_IN_A_SENTENCE } from '../../shared/types/role-words';
 import { authOf } from '../http/auth-context';
 import { forbidden } from '../http/problem';
 
@@ -8,14 +8,25 @@ import { forbidden } from '../http/problem';
 export function requireRole(...roles: Role[]): RequestHandler {
   return (req, _res, next) => {
     const auth = authOf(req);
-    if (!roles.includes(auth.role)) return next(forbidden(`Only ${whoMay(roles)} can do this.`));
+    if (!roles.includes(auth.role)) return next(forbidden(onlyThey(roles)));
     next();
   };
 }
 
-/** "the head of coaching or a coach": who may, in the glossary's words. */
-function whoMay(roles: Role[]): string {
-  return roles
-    .map((role) => (role === 'lead' ? 'the head of coaching' : ROLE_IN_A_SENTENCE[role]))
-    .join(' or ');
+/**
+ * "Only the head of coaching or a coach can do this.": who may, in the glossary's words, each
+ * choice of roles a whole sentence (roles in the order head of coaching, coach, assistant).
+ */
+function onlyThey(roles: Role[]): string {
+  const lead = roles.includes('lead');
+  const coach = roles.includes('coach');
+  const assistant = roles.includes('assistant');
+  if (lead && coach && assistant)
+    return $localize`Only the head of coaching or a coach or an assistant can do this.`;
+  if (lead && coach) return $localize`Only the head of coaching or a coach can do this.`;
+  if (lead && assistant) return $localize`Only the head of coaching or an assistant can do this.`;
+  if (coach && assistant) return $localize`Only a coach or an assistant can do this.`;
+  if (coach) return $localize`Only a coach can do this.`;
+  if (assistant) return $localize`Only an assistant can do this.`;
+  return $localize`Only the head of coaching can do this.`;
 }

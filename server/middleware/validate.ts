@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Ajv, { type ErrorObject, type ValidateFunction } from 'ajv';
@@ -42,7 +43,8 @@ function compiled(ajv: Ajv, name: string): ValidateFunction {
 
 /**
  * A message the schema words itself: `"messages": { "<keyword>": "…" }` beside the keyword, in a
- * coach's words (ajv's own, such as "must match pattern", are for developers).
+ * coach's words (ajv's own, such as "must match pattern", are for developers). These are the
+ * schema's data, in the source language.
  */
 function schemaMessage(error: ErrorObject): string | undefined {
   const messages = (error.parentSchema as { messages?: Record<string, unknown> } | undefined)?.messages;
@@ -56,15 +58,15 @@ export function fieldErrors(errors: ErrorObject[] | null | undefined, prefix = '
   const out: FieldError[] = [];
   for (const error of errors ?? []) {
     let path = error.instancePath.replace(/^\//, '');
-    let message = error.message ?? 'is not valid';
+    let message = error.message ?? $localize`:field error after the field's name:is not valid`;
     if (error.keyword === 'required') {
       path = [path, (error.params as { missingProperty: string }).missingProperty].filter(Boolean).join('/');
-      message = 'is required';
+      message = $localize`:field error after the field's name:is required`;
     } else if (error.keyword === 'additionalProperties') {
       path = [path, (error.params as { additionalProperty: string }).additionalProperty]
         .filter(Boolean)
         .join('/');
-      message = 'is not a known field';
+      message = $localize`:field error after the field's name:is not a known field`;
     }
     message = schemaMessage(error) ?? message;
     const field = [prefix, path].filter(Boolean).join('.') || prefix || '(body)';
@@ -103,10 +105,11 @@ export function validate(spec: ValidationSpec): RequestHandler {
       else Object.defineProperty(req, 'query', { value: copy, writable: true, configurable: true });
     }
     if (body) {
-      if (req.body === undefined) errors.push({ field: '(body)', message: 'a JSON body is required' });
+      if (req.body === undefined)
+        errors.push({ field: '(body)', message: $localize`a JSON body is required` });
       else if (!body(req.body)) errors.push(...fieldErrors(body.errors));
     }
-    if (errors.length) return next(badRequest('Some fields are not valid.', errors));
+    if (errors.length) return next(badRequest($localize`Some fields are not valid.`, errors));
     next();
   };
 }

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { Router } from 'express';
 import { publicRateLimit } from '../middleware/rate-limit';
 import { validate } from '../middleware/validate';
@@ -17,7 +18,7 @@ export function calendarRouter({ dataSource, config, requireAuth }: ApiDeps): Ro
     config,
     dataSource,
     'calendar',
-    'Too many calendar requests from here. Wait a few minutes.',
+    () => $localize`Too many calendar requests from here. Wait a few minutes.`,
   );
   const service = (req: Parameters<typeof scopeOf>[0]) => new CalendarService(scopeOf(req, dataSource));
 

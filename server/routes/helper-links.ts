@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { Router } from 'express';
 import { HELPER_TOKEN_HEADER } from '../../shared/types/helper-view';
 import { authOf } from '../http/auth-context';
@@ -18,7 +19,7 @@ export function helperLinksRouter({ dataSource, config, requireAuth }: ApiDeps):
     config,
     dataSource,
     'helper-view',
-    'Too many tries from here. Wait a few minutes and open the link again.',
+    () => $localize`Too many tries from here. Wait a few minutes and open the link again.`,
   );
 
   router.get('/helper-view', limiter, async (req, res) => {

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { Router, type Request } from 'express';
 import { authOf } from '../http/auth-context';
 import { ifMatchNumber } from '../http/detailed-problem';
@@ -15,8 +16,8 @@ import type { ApiDeps } from './api-deps';
 export function ifMatchOf(req: Request): number | null {
   const value = ifMatchNumber(req.get('if-match'));
   if (value === 'invalid')
-    throw badRequest('If-Match must be a version number.', [
-      { field: 'If-Match', message: 'must be a number' },
+    throw badRequest($localize`If-Match must be a version number.`, [
+      { field: 'If-Match', message: $localize`:field error after the header's name:must be a number` },
     ]);
   return value;
 }

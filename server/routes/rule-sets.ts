@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { Router } from 'express';
 import { authOf } from '../http/auth-context';
 import { HttpError } from '../http/problem';
@@ -64,7 +65,13 @@ export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
     async (req, res) => {
       const revision = ifMatchOf(req);
       if (revision === null) {
-        throw new HttpError(428, 'Precondition required', 'Send If-Match with the revision you edited.');
+        throw new HttpError(
+          428,
+          $localize`:title of an error answer:Precondition required`,
+          $localize`Send If-Match with the revision you edited.`,
+          undefined,
+          '/problems/precondition-required',
+        );
       }
       const dto = await ruleSets.update(authOf(req), req.params['id'] as string, req.body, revision);
       res.setHeader('ETag', `"${dto.revision}"`).json(dto);

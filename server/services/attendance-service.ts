@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { In, type DataSource } from 'typeorm';
 import type { AttendanceDto, AttendanceEntryDto } from '../../shared/types';
 import { Attendance } from '../entities/attendance';
@@ -70,17 +71,25 @@ export class AttendanceService {
       const minutes = plan.plan.request.minutes;
       entries.forEach(({ playerId, lateMinutes = 0, leftEarlyMinutes = 0 }, i) => {
         const at = field === 'players' ? `players/${i}/playerId` : `playerIds/${i}`;
-        if (!known.has(playerId)) errors.push({ field: at, message: 'is not a player of this team' });
-        else if (seen.has(playerId)) errors.push({ field: at, message: 'is on the register twice' });
+        if (!known.has(playerId))
+          errors.push({
+            field: at,
+            message: $localize`:field error after the field's name:is not a player of this team`,
+          });
+        else if (seen.has(playerId))
+          errors.push({
+            field: at,
+            message: $localize`:field error after the field's name:is on the register twice`,
+          });
         seen.add(playerId);
         if (lateMinutes + leftEarlyMinutes >= minutes) {
           errors.push({
             field: `players/${i}/${leftEarlyMinutes ? 'leftEarlyMinutes' : 'lateMinutes'}`,
-            message: `leaves no time in the ${minutes}-minute session`,
+            message: $localize`:field error after the field's name:leaves no time in the ${minutes}:minutes:-minute session`,
           });
         }
       });
-      if (errors.length) throw badRequest('Some players on the register are not right.', errors);
+      if (errors.length) throw badRequest($localize`Some players on the register are not right.`, errors);
       await manager.getRepository(Attendance).delete({ planId: plan.id, clubId: auth.clubId });
       if (entries.length) {
         await manager.getRepository(Attendance).insert(

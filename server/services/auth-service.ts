@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import bcrypt from 'bcryptjs';
 import type { DataSource } from 'typeorm';
 import type { AuthResponse, UserDto } from '../../shared/types/api';
@@ -39,9 +40,13 @@ export function userDto(auth: AuthContext): UserDto {
 }
 
 export function emailTaken(): HttpError {
-  return new HttpError(409, 'E-mail already registered', 'An account with this e-mail already exists.', [
-    { field: 'email', message: 'is already registered' },
-  ]);
+  return new HttpError(
+    409,
+    $localize`:title of an error answer:E-mail already registered`,
+    $localize`An account with this e-mail already exists.`,
+    [{ field: 'email', message: $localize`:field error after the field's name:is already registered` }],
+    '/problems/e-mail-already-registered',
+  );
 }
 
 // Compared against when the e-mail is unknown, so both paths take about as long.
@@ -100,13 +105,13 @@ export class AuthService {
     const ok = await bcrypt.compare(input.password, user?.passwordHash ?? DUMMY_HASH);
     if (!user || !ok) {
       await countFailure(this.dataSource.manager, email);
-      throw unauthorized('E-mail or password is wrong.');
+      throw unauthorized($localize`E-mail or password is wrong.`);
     }
     await clearFailures(this.dataSource.manager, email);
     const membership = await this.dataSource
       .getRepository(Membership)
       .findOne({ where: { userId: user.id }, relations: { club: true } });
-    if (!membership?.club) throw unauthorized('This account no longer belongs to a club.');
+    if (!membership?.club) throw unauthorized($localize`This account no longer belongs to a club.`);
     return this.respond(
       {
         userId: user.id,
@@ -159,13 +164,31 @@ export class AuthService {
     const user = await this.dataSource.getRepository(User).findOneBy({ id: auth.userId });
     if (!user) throw unauthorized();
     if (!(await bcrypt.compare(input.currentPassword, user.passwordHash)))
-      throw new HttpError(400, 'Wrong current password', 'Your current password is not right.', [
-        { field: 'currentPassword', message: 'is not your current password' },
-      ]);
+      throw new HttpError(
+        400,
+        $localize`:title of an error answer:Wrong current password`,
+        $localize`Your current password is not right.`,
+        [
+          {
+            field: 'currentPassword',
+            message: $localize`:field error after the field's name:is not your current password`,
+          },
+        ],
+        '/problems/wrong-current-password',
+      );
     if (input.newPassword === input.currentPassword)
-      throw new HttpError(400, 'Same password', 'Choose a new password different from the current one.', [
-        { field: 'newPassword', message: 'is the same as the current password' },
-      ]);
+      throw new HttpError(
+        400,
+        $localize`:title of an error answer:Same password`,
+        $localize`Choose a new password different from the current one.`,
+        [
+          {
+            field: 'newPassword',
+            message: $localize`:field error after the field's name:is the same as the current password`,
+          },
+        ],
+        '/problems/same-password',
+      );
     const passwordHash = await hashPassword(input.newPassword);
     await this.dataSource.query(
       `UPDATE app_user SET "passwordHash" = $2, "tokenVersion" = "tokenVersion" + 1 WHERE id = $1`,

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import ical, { ICalCalendarMethod } from 'ical-generator';
 import type { EntityManager } from 'typeorm';
 import type { TeamCalendarDto } from '../../shared/types/schedule';
@@ -42,7 +43,7 @@ export function calendarDocument(
   const link = `${publicUrl.replace(/\/$/, '')}/teams/${team.id}`;
   const calendar = ical({
     name: `${label} · Conewise`,
-    description: `Training nights and matches of ${label}.`,
+    description: $localize`:a team calendar's description:Training nights and matches of ${label}:team:.`,
     prodId: { company: 'Conewise', product: 'team-calendar', language: 'EN' },
     method: ICalCalendarMethod.PUBLISH,
     ttl: 60 * 60,
@@ -61,10 +62,12 @@ export function calendarDocument(
       end: start.add(session.minutes, 'minute'),
       timezone: timeZone,
       stamp: session.updatedAt,
-      summary: match ? `${label}: match (kick-off ${time})` : `${label}: training`,
+      summary: match
+        ? $localize`:a match in a team calendar:${label}:team:: match (kick-off ${time}:kickOff:)`
+        : $localize`:a training session in a team calendar:${label}:team:: training`,
       description: match
-        ? `Warm-up ${session.minutes} minutes before kick-off at ${time}.`
-        : `Training at ${time}, ${session.minutes} minutes.`,
+        ? $localize`:a match in a team calendar:Warm-up ${session.minutes}:minutes: minutes before kick-off at ${time}:kickOff:.`
+        : $localize`:a training session in a team calendar:Training at ${time}:start:, ${session.minutes}:minutes: minutes.`,
       ...(session.place ? { location: session.place } : {}),
       url: link,
     });

@@ -1,12 +1,28 @@
+import '../../shared/i18n/localize';
 import type { EntityManager, EntityTarget, FindOptionsWhere, ObjectLiteral } from 'typeorm';
 import { Player } from '../entities/player';
 import { RuleSet } from '../entities/rule-set';
 import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
 import type { AuthContext } from '../http/auth-context';
-import { forbidden, notFound } from '../http/problem';
+import { forbidden, type Missing, notFound } from '../http/problem';
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** What running a team's session involves, as the refusal names it. */
+export type RunningWork = 'take its register' | 'judge its stations' | 'change who is at its session';
+
+/** The refusal for someone not on the team's staff, a whole sentence for each kind of work. */
+function onlyItsStaff(doing: RunningWork): string {
+  switch (doing) {
+    case 'take its register':
+      return $localize`Only the head of coaching and the team’s own coaches and assistants can take its register.`;
+    case 'judge its stations':
+      return $localize`Only the head of coaching and the team’s own coaches and assistants can judge its stations.`;
+    case 'change who is at its session':
+      return $localize`Only the head of coaching and the team’s own coaches and assistants can change who is at its session.`;
+  }
+}
 
 /**
  * The one place that ties data to the caller's club. Every service loads club-owned rows by
@@ -31,7 +47,7 @@ export class ClubScope {
   async byId<T extends ObjectLiteral & { clubId: string }>(
     entity: EntityTarget<T>,
     id: string,
-    what: string,
+    what: Missing,
   ): Promise<T> {
     if (!UUID.test(id)) throw notFound(what);
     const row = await this.manager
@@ -83,7 +99,7 @@ export class ClubScope {
   assertManageable(team: Team | null, attached: boolean): Team {
     if (!team) throw notFound('team');
     if (!this.canManageWhenAttached(attached))
-      throw forbidden('Only the head of coaching and the team’s coaches can change this team.');
+      throw forbidden($localize`Only the head of coaching and the team’s coaches can change this team.`);
     return team;
   }
 
@@ -95,13 +111,11 @@ export class ClubScope {
 
   /**
    * A team whose sessions the caller runs (register, pitch-side records): the lead, or a coach or
-   * assistant attached to it; else 404 / 403.
+   * assistant attached to it; else 404 / 403 saying what they may not do.
    */
-  async teamToRun(id: string, doing = 'take its register'): Promise<Team> {
+  async teamToRun(id: string, doing: RunningWork = 'take its register'): Promise<Team> {
     const team = await this.team(id);
-    if (this.auth.role !== 'lead' && !(await this.isAttached(team.id))) {
-      throw forbidden(`Only the head of coaching and the team’s own coaches and assistants can ${doing}.`);
-    }
+    if (this.auth.role !== 'lead' && !(await this.isAttached(team.id))) throw forbidden(onlyItsStaff(doing));
     return team;
   }
 
@@ -109,7 +123,7 @@ export class ClubScope {
   async teamToRead(id: string): Promise<Team> {
     const team = await this.team(id);
     if (this.auth.role === 'assistant' && !(await this.isAttached(team.id))) {
-      throw forbidden('Assistants see the teams they help with.');
+      throw forbidden($localize`Assistants see the teams they help with.`);
     }
     return team;
   }

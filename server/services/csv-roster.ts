@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { createHmac } from 'node:crypto';
 import { CsvError, parse } from 'csv-parse/sync';
 import type { CsvPreview, CsvPreviewRow, CsvRowError } from '../../shared/types/api';
@@ -42,21 +43,25 @@ const DELIMITERS = [',', ';', '\t'];
 
 const fileError = (message: string) => badRequest(message, [{ field: 'file', message }]);
 
+/** A name too long to keep, on line `line`. */
+const tooLong = (line: number) =>
+  $localize`Line ${line}:line:: the name is longer than ${MAX_NAME_LENGTH}:maxLetters: letters even when shortened.`;
+
 /** Reads the upload as UTF-8 text (a byte-order mark is dropped), or answers 400 saying which encoding to use. */
 export function decodeUtf8(buffer: Buffer): string {
-  if (buffer.length === 0) throw fileError('The file is empty.');
+  if (buffer.length === 0) throw fileError($localize`The file is empty.`);
   if ((buffer[0] === 0xff && buffer[1] === 0xfe) || (buffer[0] === 0xfe && buffer[1] === 0xff)) {
-    throw fileError('The file is UTF-16 text. Save it as “CSV UTF-8” and upload it again.');
+    throw fileError($localize`The file is UTF-16 text. Save it as “CSV UTF-8” and upload it again.`);
   }
   let text: string;
   try {
     text = new TextDecoder('utf-8', { fatal: true }).decode(buffer);
   } catch {
     throw fileError(
-      'The file is not UTF-8 text (perhaps Latin-1 or a spreadsheet file). Save it as “CSV UTF-8”.',
+      $localize`The file is not UTF-8 text (perhaps Latin-1 or a spreadsheet file). Save it as “CSV UTF-8”.`,
     );
   }
-  if (text.includes('\u0000')) throw fileError('The file is not a text file. Upload a CSV file.');
+  if (text.includes('\u0000')) throw fileError($localize`The file is not a text file. Upload a CSV file.`);
   return text.replace(/^\uFEFF/, '');
 }
 
@@ -114,11 +119,11 @@ export function importSignature(
 function parseProblem(code: string, line: number, start: number): never {
   let message: string;
   if (code === 'CSV_QUOTE_NOT_CLOSED') {
-    message = `Line ${start} opens a quotation mark (") that is never closed. Remove it or add the closing one.`;
+    message = $localize`Line ${start}:line: opens a quotation mark (") that is never closed. Remove it or add the closing one.`;
   } else if (code === 'CSV_INVALID_CLOSING_QUOTE' || code === 'CSV_NON_TRIMABLE_CHAR_AFTER_CLOSING_QUOTE') {
-    message = `Line ${line} has text straight after a closing quotation mark ("). Remove the quotation marks around that name.`;
+    message = $localize`Line ${line}:line: has text straight after a closing quotation mark ("). Remove the quotation marks around that name.`;
   } else {
-    message = `Line ${line} could not be read. Save the list again as “CSV UTF-8” from your spreadsheet.`;
+    message = $localize`Line ${line}:line: could not be read. Save the list again as “CSV UTF-8” from your spreadsheet.`;
   }
   throw fileError(message);
 }
@@ -247,15 +252,15 @@ export function previewRoster(
 ): CsvPreview {
   // The heading, MAX_PREVIEW_LINES lines, and one more that tells whether the file goes on.
   const { lines } = readLines(text, MAX_PREVIEW_LINES + 2);
-  if (!lines.length) throw fileError('The file has no lines with names.');
+  if (!lines.length) throw fileError($localize`The file has no lines with names.`);
   const [header, ...read] = lines;
   const records = read.slice(0, MAX_PREVIEW_LINES);
   const stoppedAt = read[MAX_PREVIEW_LINES]?.line;
   const columns = findColumns(header!.cells);
   if (columns.name < 0 && columns.first < 0) {
+    const firstLine = header!.cells.join(', ').slice(0, 80);
     throw fileError(
-      `The first line must name the columns: “Name”, and “Goalkeeper” if you have one. ` +
-        `This file's first line says “${header!.cells.join(', ').slice(0, 80)}”.`,
+      $localize`The first line must name the columns: “Name”, and “Goalkeeper” if you have one. This file's first line says “${firstLine}:firstLine:”.`,
     );
   }
 
@@ -278,29 +283,28 @@ export function previewRoster(
     const nameCells = [columns.name, columns.first, columns.family].filter((i) => i >= 0);
     if (nameCells.some((i) => (cells[i] ?? '').length > MAX_NAME_CELL)) {
       // Far too long to be a name however it is shortened: refused before any work on it.
-      problem(
-        'name',
-        `Line ${line}: the name is longer than ${MAX_NAME_LENGTH} letters even when shortened.`,
-      );
+      problem('name', tooLong(line));
       continue;
     }
     const raw = fullName(cells, columns);
     const rawKeeper = (columns.keeper >= 0 ? (cells[columns.keeper] ?? '') : '').toLowerCase();
     if (!raw) {
-      problem('name', `Line ${line} has no name.`);
+      problem('name', $localize`Line ${line}:line: has no name.`);
       continue;
     }
     if (/[@0-9<>]/.test(raw)) {
+      const said = quoted(raw);
       problem(
         'name',
-        `Line ${line}: “${quoted(raw)}” is not just a name. Leave out numbers, e-mail addresses and < >.`,
+        $localize`Line ${line}:line:: “${said}:name:” is not just a name. Leave out numbers, e-mail addresses and < >.`,
       );
       continue;
     }
     if (!YES.includes(rawKeeper) && !NO.includes(rawKeeper)) {
+      const said = quoted(rawKeeper);
       problem(
         'goalkeeper',
-        `Line ${line}: Goalkeeper says “${quoted(rawKeeper)}”. Write yes or no, or leave it empty.`,
+        $localize`Line ${line}:line:: Goalkeeper says “${said}:answer:”. Write yes or no, or leave it empty.`,
       );
       continue;
     }
@@ -309,10 +313,7 @@ export function previewRoster(
     const picked = twin ? { name: shortName(raw), clash: true as const } : pickName(raw, taken);
     if (!twin) fullNameLines.set(nameKey(raw), line);
     if ([...picked.name].length > MAX_NAME_LENGTH) {
-      problem(
-        'name',
-        `Line ${line}: the name is longer than ${MAX_NAME_LENGTH} letters even when shortened.`,
-      );
+      problem('name', tooLong(line));
       continue;
     }
     if (rows.length >= MAX_IMPORT_ROWS) {
@@ -320,18 +321,26 @@ export function previewRoster(
       continue;
     }
     const row: CsvPreviewRow = { row: line, displayName: picked.name, goalkeeper: YES.includes(rawKeeper) };
-    const where = (name: string) =>
-      onTeam.has(name) ? 'on the team' : `in this file (line ${firstLineOf.get(nameKey(name))})`;
+    // Where a name is already: on the team, else on an earlier line of this file.
+    const earlierLine = (name: string) => (onTeam.has(name) ? null : firstLineOf.get(nameKey(name)));
     if (picked.clash) {
       row.clash = true;
+      const name = picked.name;
+      const earlier = earlierLine(name);
       row.note = twin
-        ? `Line ${twin} has the same name. Type a name the team can tell apart, or leave the line out.`
-        : `${picked.name} is already ${where(picked.name)}. Type a name the team can tell apart, or leave the line out.`;
+        ? $localize`Line ${twin}:line: has the same name. Type a name the team can tell apart, or leave the line out.`
+        : earlier === null
+          ? $localize`${name}:name: is already on the team. Type a name the team can tell apart, or leave the line out.`
+          : $localize`${name}:name: is already in this file (line ${earlier}:line:). Type a name the team can tell apart, or leave the line out.`;
     } else {
       if (picked.lengthenedFrom) {
+        const from = picked.lengthenedFrom;
+        const name = picked.name;
+        const earlier = earlierLine(from);
         row.note =
-          `${picked.lengthenedFrom} is already ${where(picked.lengthenedFrom)}, so this player is “${picked.name}”. ` +
-          'Leave the line out if it is the same child.';
+          earlier === null
+            ? $localize`${from}:shortName: is already on the team, so this player is “${name}:longerName:”. Leave the line out if it is the same child.`
+            : $localize`${from}:shortName: is already in this file (line ${earlier}:line:), so this player is “${name}:longerName:”. Leave the line out if it is the same child.`;
       }
       taken.add(picked.name);
       firstLineOf.set(nameKey(picked.name), line);
@@ -339,12 +348,15 @@ export function previewRoster(
     rows.push(row);
   }
   if (leftOut.length) {
-    const span =
-      leftOut.length === 1 ? `Line ${leftOut[0]} was` : `Lines ${leftOut[0]} to ${leftOut.at(-1)} were`;
+    const first = leftOut[0]!;
+    const last = leftOut.at(-1)!;
     errors.push({
-      row: leftOut[0]!,
+      row: first,
       field: 'file',
-      message: `${span} left out: one file adds at most ${MAX_IMPORT_ROWS} players.`,
+      message:
+        leftOut.length === 1
+          ? $localize`Line ${first}:line: was left out: one file adds at most ${MAX_IMPORT_ROWS}:maxPlayers: players.`
+          : $localize`Lines ${first}:firstLine: to ${last}:lastLine: were left out: one file adds at most ${MAX_IMPORT_ROWS}:maxPlayers: players.`,
     });
   }
   if (unlisted) {
@@ -353,15 +365,15 @@ export function previewRoster(
       field: 'file',
       message:
         unlisted === 1
-          ? `Line ${firstUnlisted} cannot be used either. Fix the lines above and choose the file again to see why.`
-          : `${unlisted} more lines, from line ${firstUnlisted} on, cannot be used either. Fix the lines above and choose the file again to see why.`,
+          ? $localize`Line ${firstUnlisted}:line: cannot be used either. Fix the lines above and choose the file again to see why.`
+          : $localize`${unlisted}:count: more lines, from line ${firstUnlisted}:line: on, cannot be used either. Fix the lines above and choose the file again to see why.`,
     });
   }
   if (stoppedAt !== undefined) {
     errors.push({
       row: stoppedAt,
       field: 'file',
-      message: `Reading stopped at line ${stoppedAt}: a preview reads at most ${MAX_PREVIEW_LINES} lines under the heading. Put the rest in another file.`,
+      message: $localize`Reading stopped at line ${stoppedAt}:line:: a preview reads at most ${MAX_PREVIEW_LINES}:maxLines: lines under the heading. Put the rest in another file.`,
     });
   }
   return { importId: sign(rows), rows, errors };

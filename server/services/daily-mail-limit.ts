@@ -1,11 +1,20 @@
+import '../../shared/i18n/localize';
 import type { EntityManager } from 'typeorm';
 import { tooManyRequests } from '../http/problem';
 
-/** What a club's daily e-mail limits count, by outbox kind, and how each is named to people. */
-const COUNTED = {
-  invitation: { one: 'invitation', many: 'invitations' },
-  'plan-share': { one: 'plan e-mail', many: 'plan e-mails' },
-} as const;
+/** What a club's daily e-mail limits count, by outbox kind. */
+type Counted = 'invitation' | 'plan-share';
+
+/** "Your club can send 20 invitations in any 24 hours …": the limit in a whole sentence per kind. */
+function limitSentence(kind: Counted, limit: number, left: number, adding: number): string {
+  if (kind === 'invitation')
+    return left > 0
+      ? $localize`Your club can send ${limit}:limit: invitations in any 24 hours and has ${left}:left: left, fewer than the ${adding}:asked: asked for.`
+      : $localize`Your club can send ${limit}:limit: invitations in any 24 hours, and has sent them all.`;
+  return left > 0
+    ? $localize`Your club can send ${limit}:limit: plan e-mails in any 24 hours and has ${left}:left: left, fewer than the ${adding}:asked: asked for.`
+    : $localize`Your club can send ${limit}:limit: plan e-mails in any 24 hours, and has sent them all.`;
+}
 
 /**
  * Refuses with 429 and Retry-After when queuing `adding` more e-mails of `kind` would take the
@@ -15,7 +24,7 @@ const COUNTED = {
 export async function refuseOverDailyLimit(
   manager: EntityManager,
   clubId: string,
-  kind: keyof typeof COUNTED,
+  kind: Counted,
   adding: number,
   limit: number,
 ): Promise<void> {
@@ -26,7 +35,6 @@ export async function refuseOverDailyLimit(
     [clubId, kind],
   )) as [{ sent: number }];
   if (sent + adding <= limit) return;
-  const words = COUNTED[kind];
   // Room comes back as the oldest of the day's e-mails turn 24 hours old.
   const needed = Math.min(sent, sent + adding - limit);
   const rows = (await manager.query(
@@ -39,11 +47,12 @@ export async function refuseOverDailyLimit(
   const seconds = rows[0]?.seconds ?? 24 * 3600;
   const hours = Math.ceil(seconds / 3600);
   const left = Math.max(0, limit - sent);
+  const tryAgain =
+    hours === 1 ? $localize`Try again in 1 hour.` : $localize`Try again in ${hours}:hours: hours.`;
   throw tooManyRequests(
-    'Daily limit reached',
-    `Your club can send ${limit} ${words.many} in any 24 hours` +
-      (left > 0 ? ` and has ${left} left, fewer than the ${adding} asked for.` : ', and has sent them all.') +
-      ` Try again in ${hours} hour${hours === 1 ? '' : 's'}.`,
+    $localize`:title of an error answer:Daily limit reached`,
+    `${limitSentence(kind, limit, left, adding)} ${tryAgain}`,
     seconds,
+    '/problems/daily-limit-reached',
   );
 }

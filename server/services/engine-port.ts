@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import {
   applyEdit as engineApplyEdit,
   applyProgression as engineApplyProgression,
@@ -50,7 +51,7 @@ async function guarded<T>(work: () => T | Promise<T>): Promise<T> {
   } catch (error) {
     if (error instanceof PlanRequestError) {
       throw badRequest(
-        'The plan request is not valid.',
+        $localize`The plan request is not valid.`,
         error.errors.map((e) => ({ field: join('request', e.field), message: e.message })),
       );
     }

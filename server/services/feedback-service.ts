@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { FeedbackDto, FeedbackVerdict } from '../../shared/types/api';
 import type { Plan, Station } from '../../shared/types/plan';
@@ -20,13 +21,19 @@ export interface FeedbackInput {
 export function stationOf(plan: Plan, phaseIndex: number, stationId: string): Station {
   const phase = plan.phases[phaseIndex];
   if (!phase)
-    throw badRequest('No such phase in this plan.', [
-      { field: 'phaseIndex', message: 'is not a phase of this plan' },
+    throw badRequest($localize`No such phase in this plan.`, [
+      {
+        field: 'phaseIndex',
+        message: $localize`:field error after the field's name:is not a phase of this plan`,
+      },
     ]);
   const station = phase.stations.find((s) => s.id === stationId);
   if (!station) {
-    throw badRequest('No such station in that phase.', [
-      { field: 'stationId', message: 'is not a station of that phase' },
+    throw badRequest($localize`No such station in that phase.`, [
+      {
+        field: 'stationId',
+        message: $localize`:field error after the field's name:is not a station of that phase`,
+      },
     ]);
   }
   return station;

@@ -1,3 +1,5 @@
+import '../../shared/i18n/localize';
+
 /**
  * First names only, for people outside the club's staff: "Kai M." → "Kai". The first word of the
  * stored name is kept and the rest (initials, surnames) dropped; when two players share a first
@@ -6,12 +8,17 @@
 export function firstNames(names: readonly (string | undefined)[]): string[] {
   const seen = new Map<string, number>();
   return names.map((name, index) => {
-    const first = firstWord(name) ?? `Player ${index + 1}`;
+    const first = firstWord(name) ?? unnamedPlayer(index + 1);
     const key = first.toLocaleLowerCase();
     const count = (seen.get(key) ?? 0) + 1;
     seen.set(key, count);
     return count === 1 ? first : `${first} ${count}`;
   });
+}
+
+/** A player without a name, by their place in the squad. */
+function unnamedPlayer(place: number): string {
+  return $localize`:a player without a name, numbered in squad order:Player ${place}:number:`;
 }
 
 /** The first word of a name, without a trailing full stop or comma; null when there is none. */

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { createHash, randomBytes } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { HttpError } from '../http/problem';
@@ -19,9 +20,10 @@ export function hashLinkToken(token: string): string {
 export function linkUnusable(): HttpError {
   return new HttpError(
     400,
-    'Link not usable',
-    'This link was used already or is out of date. Ask for a new one.',
-    [{ field: 'token', message: 'is used or out of date' }],
+    $localize`:title of an error answer:Link not usable`,
+    $localize`This link was used already or is out of date. Ask for a new one.`,
+    [{ field: 'token', message: $localize`:field error after the field's name:is used or out of date` }],
+    '/problems/link-not-usable',
   );
 }
 

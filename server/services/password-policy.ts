@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { dictionary } from '@zxcvbn-ts/language-common';
 import { badRequest, type HttpError } from '../http/problem';
 
@@ -9,9 +10,16 @@ import { badRequest, type HttpError } from '../http/problem';
  * tests/tooling/password-rules.spec.ts. Signing in judges nothing, so older passwords still work.
  */
 
-/** Said under the field when a chosen password is on the list. */
-export const COMMON_PASSWORD_MESSAGE =
-  'This password is one of the most commonly used ones, so it is easy to guess. Choose another.';
+/** Said under the field when a chosen password is on the list, in the reader's language. */
+export function commonPasswordMessage(): string {
+  return $localize`This password is one of the most commonly used ones, so it is easy to guess. Choose another.`;
+}
+
+/**
+ * The same words in the source language, read once at load (outside any request, so never
+ * translated): for checks that compare the English answer. The server says commonPasswordMessage().
+ */
+export const COMMON_PASSWORD_MESSAGE = commonPasswordMessage();
 
 /**
  * The most common passwords (about 49,000, from @zxcvbn-ts/language-common), lower-cased, held
@@ -30,7 +38,7 @@ export function isCommonPassword(password: string): boolean {
 /** The 400 for a new password that may not be chosen, naming its field; null when it may. */
 export function newPasswordRefusal(password: string, field: string): HttpError | null {
   if (!isCommonPassword(password)) return null;
-  return badRequest('Choose a password that is harder to guess.', [
-    { field, message: COMMON_PASSWORD_MESSAGE },
+  return badRequest($localize`Choose a password that is harder to guess.`, [
+    { field, message: commonPasswordMessage() },
   ]);
 }

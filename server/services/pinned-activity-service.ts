@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { PinnedActivitiesDto } from '../../shared/types/api';
 import { Team } from '../entities/team';
 import { badRequest, type FieldError } from '../http/problem';
@@ -21,14 +22,18 @@ export class PinnedActivityService {
     activityIds.forEach((id, i) => {
       const activity = library.get(id);
       if (!activity)
-        errors.push({ field: `activityIds/${i}`, message: `“${id}” is not an activity in the club’s rules` });
+        errors.push({
+          field: `activityIds/${i}`,
+          message: $localize`“${id}:activityId:” is not an activity in the club’s rules`,
+        });
       else if (activity.retired)
         errors.push({
           field: `activityIds/${i}`,
-          message: `${activity.title} is retired and no longer planned`,
+          message: $localize`${activity.title}:activity: is retired and no longer planned`,
         });
     });
-    if (errors.length) throw badRequest('Some pinned activities are not in the club’s rules.', errors);
+    if (errors.length)
+      throw badRequest($localize`Some pinned activities are not in the club’s rules.`, errors);
     const pins = [...new Set(activityIds)];
     await this.scope.manager
       .getRepository(Team)

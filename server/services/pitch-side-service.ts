@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { In, type DataSource } from 'typeorm';
 import type { StationVerdict } from '../../shared/types/plan-edit';
 import type { PlanChangeDto } from '../../shared/types/plan-api';
@@ -50,17 +51,21 @@ export class PitchSideService {
       const byId = new Map(roster.map((p) => [p.id, p]));
       const errors: FieldError[] = [];
       addIds.forEach((id, i) => {
-        if (!byId.has(id)) errors.push({ field: `add/${i}`, message: 'is not a player of this team' });
+        if (!byId.has(id))
+          errors.push({
+            field: `add/${i}`,
+            message: $localize`:field error after the field's name:is not a player of this team`,
+          });
       });
-      if (errors.length) throw badRequest('Some arrivals are not in this team.', errors);
+      if (errors.length) throw badRequest($localize`Some arrivals are not in this team.`, errors);
       const add: PresentPlayer[] = [...new Set(addIds)]
         .filter((id) => !present.has(id))
         .map((id) => ({ id, name: byId.get(id)!.displayName, goalkeeper: byId.get(id)!.goalkeeper }));
       const remove = [...new Set(input.remove ?? [])].filter((id) => present.has(id));
       if (!add.length && !remove.length) return { plan: sessionPlanDto(row, team.name), moves: [] };
       if (present.size + add.length - remove.length < 1) {
-        throw badRequest('A plan needs at least one player.', [
-          { field: 'remove', message: 'would leave nobody' },
+        throw badRequest($localize`A plan needs at least one player.`, [
+          { field: 'remove', message: $localize`:field error after the field's name:would leave nobody` },
         ]);
       }
       const rules = await rulesOfPlan(manager, auth.clubId, row.ruleSetId);

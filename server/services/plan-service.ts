@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { Page, PlanSummaryDto, SessionPlanDto } from '../../shared/types/api';
 import type { Plan } from '../../shared/types/plan';
@@ -64,7 +65,7 @@ export class PlanService {
     const manager = this.dataSource.manager;
     const scope = new ClubScope(manager, auth);
     const requestErrors = engine.planRequestErrors(input.request);
-    if (requestErrors.length) throw badRequest('The plan request is not valid.', requestErrors);
+    if (requestErrors.length) throw badRequest($localize`The plan request is not valid.`, requestErrors);
     // Team, access, roster, feedback, recent activities, pins and rules in one round trip.
     const inputs = await loadPlanInputs(manager, scope, input.teamId, RECENT_FEEDBACK_LIMIT);
     const { team, roster, rules } = inputs;
@@ -144,11 +145,14 @@ export class PlanService {
       const row = await lockPlan(manager, scope, id);
       const team = await scope.teamToManage(row.teamId);
       if (ifMatch !== null && ifMatch !== row.version) {
+        const current = row.version;
         throw new DetailedProblem(
           409,
-          'Conflict',
-          `The plan changed since version ${ifMatch}; it is now at version ${row.version}. Reload and re-apply.`,
+          $localize`:title of an error answer:Conflict`,
+          $localize`The plan changed since version ${ifMatch}:sentVersion:; it is now at version ${current}:currentVersion:. Reload and re-apply.`,
           { currentVersion: row.version },
+          undefined,
+          '/problems/conflict',
         );
       }
       const rules = await rulesOfPlan(manager, auth.clubId, row.ruleSetId);
@@ -184,7 +188,7 @@ export class PlanService {
   private async replaceWhole(row: SessionPlan, sent: Plan, rules: RuleSetDocument): Promise<Plan> {
     const plan: Plan = { ...sent, request: row.plan.request, ruleSet: row.plan.ruleSet, seed: row.plan.seed };
     const shapeErrors = checkPlanShape(plan);
-    if (shapeErrors.length) throw badRequest('The edited plan is not a valid plan.', shapeErrors);
+    if (shapeErrors.length) throw badRequest($localize`The edited plan is not a valid plan.`, shapeErrors);
     const violations = await engine.checkPlan(plan, rules);
     if (violations.length) throw violationsProblem(violations);
     return plan;
@@ -203,8 +207,11 @@ async function assertSessionOfTeam(
     [sessionId, teamId, clubId],
   );
   if (!rows.length) {
-    throw badRequest('The scheduled session is not one of this team’s.', [
-      { field: 'scheduledSessionId', message: 'is not a session on this team’s schedule' },
+    throw badRequest($localize`The scheduled session is not one of this team’s.`, [
+      {
+        field: 'scheduledSessionId',
+        message: $localize`:field error after the field's name:is not a session on this team’s schedule`,
+      },
     ]);
   }
 }
@@ -293,8 +300,8 @@ export function violationsProblem(violations: engine.Violation[]): DetailedProbl
   const said = [...new Set(violations.map((v) => v.message))].join(' ');
   return new DetailedProblem(
     422,
-    'Plan breaks the club rules',
-    `The change would break the rules this plan was made with: ${said}`,
+    $localize`:title of an error answer:Plan breaks the club rules`,
+    $localize`The change would break the rules this plan was made with: ${said}:brokenRules:`,
     { violations },
     undefined,
     '/problems/rule-violations',
@@ -322,12 +329,15 @@ export function requestWithRoster(
   const players: PresentPlayer[] = request.players.map((p, i) => {
     const known = byId.get(p.id);
     if (!known) {
-      errors.push({ field: `request/players/${i}/id`, message: 'is not a player of this team' });
+      errors.push({
+        field: `request/players/${i}/id`,
+        message: $localize`:field error after the field's name:is not a player of this team`,
+      });
       return p;
     }
     return { id: p.id, name: known.displayName, goalkeeper: p.goalkeeper ?? known.goalkeeper };
   });
-  if (errors.length) throw badRequest('Some players are not in this team.', errors);
+  if (errors.length) throw badRequest($localize`Some players are not in this team.`, errors);
   const recentFeedback = request.recentFeedback ?? history.recentFeedback;
   const recentActivityIds = request.recentActivityIds ?? history.recentActivityIds;
   const pinnedActivityIds = request.pinnedActivityIds ?? history.pinnedActivityIds;

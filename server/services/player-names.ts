@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { cleanName, type TakenNames } from '../../shared/types/player-name';
 import { conflict } from '../http/problem';
 
@@ -6,8 +7,8 @@ export { cleanName, nameKey, pickName, shortName, TakenNames } from '../../share
 /** Answers 409 in a coach's words when a team already has a player of that name. */
 export function assertNameFree(name: string, taken: TakenNames): void {
   if (!taken.has(name)) return;
+  const player = cleanName(name);
   throw conflict(
-    `There is already a player called ${cleanName(name)} on this team. Add another letter of the ` +
-      'family name, or use a name the team knows them by.',
+    $localize`There is already a player called ${player}:name: on this team. Add another letter of the family name, or use a name the team knows them by.`,
   );
 }

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { CsvPreview, CsvPreviewRow, PlayerDto } from '../../shared/types/api';
 import { Player } from '../entities/player';
 import { badRequest, type FieldError } from '../http/problem';
@@ -18,8 +19,8 @@ export class RosterImportService {
   async preview(teamId: string, file: Buffer | undefined): Promise<CsvPreview> {
     const team = await this.scope.teamToManage(teamId);
     if (!file)
-      throw badRequest('Choose a CSV file to upload.', [
-        { field: 'file', message: 'Choose a CSV file to upload.' },
+      throw badRequest($localize`Choose a CSV file to upload.`, [
+        { field: 'file', message: $localize`Choose a CSV file to upload.` },
       ]);
     const text = decodeUtf8(file);
     const names = await teamPlayerNames(this.scope.manager, this.scope, team.id);
@@ -34,9 +35,8 @@ export class RosterImportService {
   async commit(teamId: string, input: { importId: string; rows: CommitRow[] }): Promise<PlayerDto[]> {
     const team = await this.scope.teamToManage(teamId);
     if (importSignature(this.secret, team.id, input.rows) !== input.importId) {
-      throw badRequest('These are not the lines the preview read. Choose the file again.', [
-        { field: 'file', message: 'These are not the lines the preview read. Choose the file again.' },
-      ]);
+      const stale = $localize`These are not the lines the preview read. Choose the file again.`;
+      throw badRequest(stale, [{ field: 'file', message: stale }]);
     }
     return this.scope.manager.transaction(async (manager) => {
       const taken = new TakenNames(await teamPlayerNames(manager, this.scope, team.id));
@@ -48,7 +48,7 @@ export class RosterImportService {
           clashes.push({
             row: row.row,
             field: 'name',
-            message: `Line ${row.row}: there is already a ${name} on the team or above in this list. Type a name the team can tell apart.`,
+            message: $localize`Line ${row.row}:line:: there is already a ${name}:name: on the team or above in this list. Type a name the team can tell apart.`,
           });
         } else taken.add(name);
       }
@@ -56,7 +56,7 @@ export class RosterImportService {
         throw badRequest(
           clashes.length === 1
             ? clashes[0]!.message
-            : `${clashes.length} names are taken. Change them and add again.`,
+            : $localize`${clashes.length}:count: names are taken. Change them and add again.`,
           clashes,
         );
       }

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { DataSource } from 'typeorm';
 import type { Plan } from '../../shared/types/plan';
 import type { AgeGroup, Level, PlanRequest } from '../../shared/types/plan-request';
@@ -22,10 +23,15 @@ interface Case {
   request: PlanRequest;
 }
 
+/** A sample squad's player, numbered. */
+function samplePlayer(place: number): string {
+  return $localize`:a player of a sample squad, numbered:Player ${place}:number:`;
+}
+
 /** Squads that stress the rules: few, odd, many, a tiny patch, no goals, an hour's training with keepers. */
 export function sampleRequests(ageGroup: AgeGroup, level: Level): Case[] {
   const squad = (n: number) =>
-    Array.from({ length: n }, (_, i) => ({ id: `sample-${i + 1}`, name: `Player ${i + 1}` }));
+    Array.from({ length: n }, (_, i) => ({ id: `sample-${i + 1}`, name: samplePlayer(i + 1) }));
   const base = (n: number): PlanRequest => ({
     ageGroup,
     level,
@@ -38,22 +44,34 @@ export function sampleRequests(ageGroup: AgeGroup, level: Level): Case[] {
     seed: 'rules-preview',
   });
   return [
-    { label: 'sample: small squad (6)', source: 'sample', request: base(6) },
-    { label: 'sample: odd numbers (13)', source: 'sample', request: base(13) },
-    { label: 'sample: large squad (22)', source: 'sample', request: base(22) },
     {
-      label: 'sample: tiny space (12 on 15 × 12 m)',
+      label: $localize`:a sample squad the head of coaching tries draft rules on:sample: small squad (6)`,
+      source: 'sample',
+      request: base(6),
+    },
+    {
+      label: $localize`:a sample squad the head of coaching tries draft rules on:sample: odd numbers (13)`,
+      source: 'sample',
+      request: base(13),
+    },
+    {
+      label: $localize`:a sample squad the head of coaching tries draft rules on:sample: large squad (22)`,
+      source: 'sample',
+      request: base(22),
+    },
+    {
+      label: $localize`:a sample squad the head of coaching tries draft rules on:sample: tiny space (12 on 15 × 12 m)`,
       source: 'sample',
       request: { ...base(12), space: { width: 15, length: 12 } },
     },
     {
-      label: 'sample: no goals (12)',
+      label: $localize`:a sample squad the head of coaching tries draft rules on:sample: no goals (12)`,
       source: 'sample',
       request: { ...base(12), equipment: { ...base(12).equipment, goals: 0 } },
     },
     {
       // Long enough for drinks breaks, a theme and the keepers' own warm-up.
-      label: 'sample: an hour’s training with 2 goalkeepers (16)',
+      label: $localize`:a sample squad the head of coaching tries draft rules on:sample: an hour’s training with 2 goalkeepers (16)`,
       source: 'sample',
       request: {
         ...base(16),
@@ -77,7 +95,8 @@ export class RuleSetPreviewService {
     const manager = this.dataSource.manager;
     const draft = await this.ruleSets.resolve(manager, auth, draftId);
     const errors = engine.ruleSetErrors(draft.body);
-    if (errors.length) throw badRequest('The draft is not a valid rule set; fix it to try it.', errors);
+    if (errors.length)
+      throw badRequest($localize`The draft is not a valid rule set; fix it to try it.`, errors);
     const against = await this.ruleSets.resolve(manager, auth, 'published');
     const firstTeam = await manager
       .getRepository(Team)
@@ -96,9 +115,11 @@ export class RuleSetPreviewService {
       .limit(input.recentPlans ?? 3)
       .getRawAndEntities();
     recent.entities.forEach((row, i) => {
-      const teamName = (recent.raw[i] as { team_name?: string })?.team_name ?? 'team';
+      const teamName =
+        (recent.raw[i] as { team_name?: string })?.team_name ?? $localize`:a team without a name:team`;
+      const date = row.date ?? row.createdAt.toISOString().slice(0, 10);
       cases.push({
-        label: `recent plan: ${teamName}, ${row.date ?? row.createdAt.toISOString().slice(0, 10)}`,
+        label: $localize`:one of the club's recent plans the head of coaching tries draft rules on:recent plan: ${teamName}:teamName:, ${date}:date:`,
         source: 'recent-plan',
         request: { ...row.request, seed: row.seed },
       });
@@ -145,33 +166,75 @@ export function outline(plan: Plan): PlanOutline {
   };
 }
 
-/** Plain-words differences between two outlines. */
+/**
+ * Plain-words differences between two outlines, each line a whole message ("before → after"),
+ * so a translation can word it its own way.
+ */
 export function differences(a: PlanOutline, b: PlanOutline): string[] {
   const out: string[] = [];
   if (a.error || b.error) {
-    if (a.error !== b.error) out.push(`plan: ${a.error ?? 'made'} → ${b.error ?? 'made'}`);
+    if (a.error !== b.error) {
+      const made = $localize`:the plan was made without an error, in a rule preview line:made`;
+      const before = a.error ?? made;
+      const after = b.error ?? made;
+      out.push(
+        $localize`:a rule preview line, the current rules' plan then the draft's:plan: ${before}:before: → ${after}:after:`,
+      );
+    }
     return out;
   }
-  if (a.phases.length !== b.phases.length) out.push(`phases: ${a.phases.length} → ${b.phases.length}`);
+  if (a.phases.length !== b.phases.length) {
+    const before = a.phases.length;
+    const after = b.phases.length;
+    out.push($localize`:a rule preview line, how many phases:phases: ${before}:before: → ${after}:after:`);
+  }
   const n = Math.max(a.phases.length, b.phases.length);
   for (let i = 0; i < n; i++) {
     const x = a.phases[i];
     const y = b.phases[i];
+    const number = i + 1;
     if (!x || !y) {
-      out.push(x ? `phase ${i + 1} (${x.name}) dropped` : `phase ${i + 1} (${y!.name}) added`);
+      out.push(
+        x
+          ? $localize`:a rule preview line:phase ${number}:number: (${x.name}:phaseName:) dropped`
+          : $localize`:a rule preview line:phase ${number}:number: (${y!.name}:phaseName:) added`,
+      );
       continue;
     }
     const label = x.name === y.name ? x.name : `${x.name} → ${y.name}`;
-    if (x.name !== y.name) out.push(`phase ${i + 1}: ${label}`);
-    if (x.minutes !== y.minutes) out.push(`${label}: ${x.minutes} → ${y.minutes} min`);
-    if (x.groups.join() !== y.groups.join())
-      out.push(`${label}: groups ${x.groups.join(', ')} → ${y.groups.join(', ')}`);
-    if (x.areas.join() !== y.areas.join())
-      out.push(`${label}: area ${x.areas.join(', ')} → ${y.areas.join(', ')}`);
+    if (x.name !== y.name)
+      out.push(
+        $localize`:a rule preview line, a renamed phase:phase ${number}:number:: ${label}:phaseNames:`,
+      );
+    if (x.minutes !== y.minutes) {
+      const before = x.minutes;
+      const after = y.minutes;
+      out.push(
+        $localize`:a rule preview line, a phase's minutes:${label}:phase:: ${before}:before: → ${after}:after: min`,
+      );
+    }
+    if (x.groups.join() !== y.groups.join()) {
+      const before = x.groups.join(', ');
+      const after = y.groups.join(', ');
+      out.push(
+        $localize`:a rule preview line, a phase's group sizes:${label}:phase:: groups ${before}:before: → ${after}:after:`,
+      );
+    }
+    if (x.areas.join() !== y.areas.join()) {
+      const before = x.areas.join(', ');
+      const after = y.areas.join(', ');
+      out.push(
+        $localize`:a rule preview line, a phase's areas:${label}:phase:: area ${before}:before: → ${after}:after:`,
+      );
+    }
   }
-  for (const w of b.warnings.filter((w) => !a.warnings.includes(w))) out.push(`new warning: ${w}`);
-  for (const w of a.warnings.filter((w) => !b.warnings.includes(w))) out.push(`warning gone: ${w}`);
-  for (const c of b.cautions.filter((c) => !a.cautions.includes(c))) out.push(`new caution: ${c}`);
-  for (const c of a.cautions.filter((c) => !b.cautions.includes(c))) out.push(`caution gone: ${c}`);
+  for (const w of b.warnings.filter((w) => !a.warnings.includes(w)))
+    out.push($localize`:a rule preview line:new warning: ${w}:warning:`);
+  for (const w of a.warnings.filter((w) => !b.warnings.includes(w)))
+    out.push($localize`:a rule preview line:warning gone: ${w}:warning:`);
+  for (const c of b.cautions.filter((c) => !a.cautions.includes(c)))
+    out.push($localize`:a rule preview line:new caution: ${c}:caution:`);
+  for (const c of a.cautions.filter((c) => !b.cautions.includes(c)))
+    out.push($localize`:a rule preview line:caution gone: ${c}:caution:`);
   return out;
 }

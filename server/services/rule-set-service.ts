@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { RuleSetDto } from '../../shared/types/api';
@@ -91,16 +92,12 @@ export class RuleSetService {
   ): Promise<RuleSetDto> {
     if (input.body !== undefined) {
       const errors = ruleSetErrors(input.body);
-      if (errors.length) throw badRequest('The rule set is not valid.', errors);
+      if (errors.length) throw badRequest($localize`The rule set is not valid.`, errors);
     }
     return this.dataSource.transaction(async (manager) => {
       const scope = new ClubScope(manager, auth);
       const current = await scope.ruleSet(id);
-      if (current.status !== 'draft') {
-        throw conflict(
-          `Version ${current.version} is ${current.status} and cannot change; start a draft from it.`,
-        );
-      }
+      if (current.status !== 'draft') throw conflict(cannotChange(current));
       const body = input.body === undefined ? current.body : inSourceWords({ ...(input.body as object) });
       const name = input.name ?? current.name;
       const result: { id: string }[] = await manager.query(
@@ -111,11 +108,11 @@ export class RuleSetService {
       const updated = (Array.isArray(result[0]) ? result[0] : result) as { id: string }[];
       if (!updated.length) {
         const fresh = await this.reload(manager, id);
+        const now = fresh.revision;
         throw new DetailedProblem(
           409,
-          'Conflict',
-          `Someone saved this draft after revision ${ifMatch}; it is now at revision ${fresh.revision}. ` +
-            'Reload it and re-apply your change.',
+          $localize`:title of an error answer:Conflict`,
+          $localize`Someone saved this draft after revision ${ifMatch}:sentRevision:; it is now at revision ${now}:currentRevision:. Reload it and re-apply your change.`,
           { currentRevision: fresh.revision, current: fresh },
           undefined,
           '/problems/stale-revision',
@@ -139,13 +136,14 @@ export class RuleSetService {
       await lockClubRuleSets(manager, auth.clubId);
       const scope = new ClubScope(manager, auth);
       const row = await scope.ruleSet(id);
-      if (row.status !== 'draft') throw conflict(`Version ${row.version} is already ${row.status}.`);
+      if (row.status !== 'draft') throw conflict(alreadyDone(row));
       if (ifMatch !== null && ifMatch !== row.revision) {
         const current = await this.reload(manager, id);
+        const now = row.revision;
         throw new DetailedProblem(
           409,
-          'Conflict',
-          `The draft changed after revision ${ifMatch}; review revision ${row.revision} before publishing.`,
+          $localize`:title of an error answer:Conflict`,
+          $localize`The draft changed after revision ${ifMatch}:sentRevision:; review revision ${now}:currentRevision: before publishing.`,
           { currentRevision: row.revision, current },
           undefined,
           '/problems/stale-revision',
@@ -153,7 +151,7 @@ export class RuleSetService {
       }
       const errors = ruleSetErrors(row.body);
       if (errors.length)
-        throw badRequest('The draft is not a valid rule set; fix it before publishing.', errors);
+        throw badRequest($localize`The draft is not a valid rule set; fix it before publishing.`, errors);
       return this.makePublished(manager, auth, row, 'publish');
     });
   }
@@ -222,7 +220,7 @@ export class RuleSetService {
     const row = resolved.row;
     return {
       id: resolved.ref.id,
-      name: row?.name ?? 'Conewise starting rules',
+      name: row?.name ?? $localize`Conewise starting rules`,
       version: resolved.ref.version,
       status: row ? row.status : 'published',
       publishedAt: row?.publishedAt ? row.publishedAt.toISOString() : null,
@@ -254,7 +252,7 @@ export class RuleSetService {
         body,
         ref: {
           id: DEFAULT_RULE_SET_ID,
-          name: body.name ?? 'Default rules',
+          name: body.name ?? $localize`Default rules`,
           version: body.version,
           status: 'built-in',
         },
@@ -337,6 +335,22 @@ async function recordChange(
   });
 }
 
+/** Why a version that is not a draft cannot change, a whole sentence for each state. */
+function cannotChange(row: Pick<RuleSet, 'version' | 'status'>): string {
+  const version = row.version;
+  return row.status === 'published'
+    ? $localize`Version ${version}:version: is published and cannot change; start a draft from it.`
+    : $localize`Version ${version}:version: is archived and cannot change; start a draft from it.`;
+}
+
+/** Why a version that is not a draft cannot be published, a whole sentence for each state. */
+function alreadyDone(row: Pick<RuleSet, 'version' | 'status'>): string {
+  const version = row.version;
+  return row.status === 'published'
+    ? $localize`Version ${version}:version: is already published.`
+    : $localize`Version ${version}:version: is already archived.`;
+}
+
 function refOf(row: RuleSet): RuleSetRef {
   return { id: row.id, name: row.name, version: row.version, status: row.status };
 }
@@ -360,7 +374,7 @@ function defaultDto(body: RuleSetDocument): RuleSetDto {
   const epoch = new Date(0).toISOString();
   return {
     id: DEFAULT_RULE_SET_ID,
-    name: body.name ?? 'Default rules',
+    name: body.name ?? $localize`Default rules`,
     version: body.version,
     status: 'published',
     body: inReaderWords(body),

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { EntityManager } from 'typeorm';
 import {
   addDays,
@@ -82,7 +83,7 @@ export class ScheduleService {
     const team = await this.scope.team(teamId);
     if (this.scope.auth.role !== 'lead' && !(await this.scope.isAttached(team.id))) {
       throw forbidden(
-        'Only the head of coaching and this team’s coaches and assistants can change its schedule.',
+        $localize`Only the head of coaching and this team’s coaches and assistants can change its schedule.`,
       );
     }
     return team;
@@ -149,16 +150,20 @@ export class ScheduleService {
   async createWeekly(teamId: string, body: WeeklySessionsBody): Promise<ScheduledSessionDto[]> {
     const team = await this.teamToSchedule(teamId);
     if (body.until < body.date) {
-      throw badRequest('The last day comes before the first.', [
-        { field: 'until', message: 'must be on or after the first day' },
+      throw badRequest($localize`The last day comes before the first.`, [
+        {
+          field: 'until',
+          message: $localize`:field error after the field's name:must be on or after the first day`,
+        },
       ]);
     }
     const dates = weeklyDates(body.date, body.until);
     if (dates.length > MAX_WEEKLY_SESSIONS) {
-      throw badRequest(`At most ${MAX_WEEKLY_SESSIONS} weeks can be added at once.`, [
+      const lastPossible = addDays(body.date, 7 * (MAX_WEEKLY_SESSIONS - 1));
+      throw badRequest($localize`At most ${MAX_WEEKLY_SESSIONS}:maxWeeks: weeks can be added at once.`, [
         {
           field: 'until',
-          message: `must be within ${MAX_WEEKLY_SESSIONS} weeks of the first day (last possible: ${addDays(body.date, 7 * (MAX_WEEKLY_SESSIONS - 1))})`,
+          message: $localize`:field error after the field's name:must be within ${MAX_WEEKLY_SESSIONS}:maxWeeks: weeks of the first day (last possible: ${lastPossible}:lastDate:)`,
         },
       ]);
     }

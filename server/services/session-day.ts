@@ -5,6 +5,7 @@
  * locale formats (the browser uses the same ones), zone arithmetic from dayjs (local-time.ts),
  * clock times of a plan from shared/time/session-clock.
  */
+import '../../shared/i18n/localize';
 import { clockText, dayText, momentClockText, type DayStyle } from '../../shared/time/locale-format';
 import { parseClock, type SessionClock } from '../../shared/time/session-clock';
 import { dayjs, zonedMoment } from './local-time';
@@ -34,7 +35,9 @@ export function sessionInWords(date: string | null, time: string | null, locale:
 /** A plan minute on the clock in the locale's style ("18:15", "6:15 PM"), or "min 15" when the plan has no time. */
 export function minuteInWords(clock: SessionClock, minute: number, locale: string): string {
   const at = clock.at(minute);
-  return at === null ? `min ${minute}` : clockText(at, locale);
+  return at === null
+    ? $localize`:a minute of a plan that has no clock time, min short for minute:min ${minute}:minute:`
+    : clockText(at, locale);
 }
 
 /**
@@ -51,7 +54,8 @@ export function helperLinkExpiry(date: string | null, now: Date, timeZone: strin
 export function expiryInWords(expiresAt: Date, locale: string, timeZone: string): string {
   const local = dayjs(expiresAt).tz(timeZone);
   if (local.hour() === 0 && local.minute() === 0) {
-    return `the end of ${dayInWords(local.subtract(1, 'day').format('YYYY-MM-DD'), locale)}`;
+    const day = dayInWords(local.subtract(1, 'day').format('YYYY-MM-DD'), locale);
+    return $localize`:when a link stops working, e.g. the end of Wednesday 9 December:the end of ${day}:day:`;
   }
   return `${dayInWords(local.format('YYYY-MM-DD'), locale)}, ${momentClockText(expiresAt, locale, timeZone)}`;
 }

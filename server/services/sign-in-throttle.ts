@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { EntityManager } from 'typeorm';
 import { tooManyRequests } from '../http/problem';
 
@@ -22,9 +23,12 @@ export async function refuseIfLocked(manager: EntityManager, email: string): Pro
   if (seconds === undefined) return;
   const minutes = Math.ceil(seconds / 60);
   throw tooManyRequests(
-    'Too many wrong passwords',
-    `Too many wrong passwords for this account. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}, or choose a new password with "Forgot your password?".`,
+    $localize`:title of an error answer:Too many wrong passwords`,
+    minutes === 1
+      ? $localize`:the quoted words are the sign-in page's link to a new password:Too many wrong passwords for this account. Try again in 1 minute, or choose a new password with "Forgot your password?".`
+      : $localize`:the quoted words are the sign-in page's link to a new password:Too many wrong passwords for this account. Try again in ${minutes}:minutes: minutes, or choose a new password with "Forgot your password?".`,
     seconds,
+    '/problems/too-many-wrong-passwords',
   );
 }
 

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { In, type DataSource } from 'typeorm';
 import { attendanceFromPlan } from '../../engine';
 import type { AttendanceEntryDto } from '../../shared/types/attendance';
@@ -11,10 +12,10 @@ import { ClubScope } from './club-scope';
 /** How many of the team's latest sessions the insight covers. */
 export const INSIGHT_SESSIONS = 30;
 
-const ESTIMATE_NOTE =
-  'Touches are estimates from each activity’s typical rate per minute, not counts. Players who came late or ' +
-  'left early count as present. Sessions without a register count the players the plan was made for, ' +
-  'with pitch-side arrivals and leavers.';
+/** How the insight's numbers are made, said under them. */
+function estimateNote(): string {
+  return $localize`Touches are estimates from each activity’s typical rate per minute, not counts. Players who came late or left early count as present. Sessions without a register count the players the plan was made for, with pitch-side arrivals and leavers.`;
+}
 
 /** Attendance over time and estimated touches per player, from stored plans and attendance. */
 export class TeamInsightService {
@@ -100,7 +101,7 @@ export class TeamInsightService {
       squadSize: roster.filter((p) => p.active).length,
       sessions,
       players,
-      estimateNote: ESTIMATE_NOTE,
+      estimateNote: estimateNote(),
     };
   }
 }

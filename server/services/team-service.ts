@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { In, type EntityManager } from 'typeorm';
 import type { Role, TeamDto } from '../../shared/types/api';
 import { staffChangeRefusal } from '../../shared/types/team-staff';
@@ -83,7 +84,7 @@ export class TeamService {
   /** The team, its staff and its empty kit bag in one transaction: all of it or nothing. */
   async create(input: TeamInput): Promise<TeamDto> {
     const auth = this.scope.auth;
-    if (auth.role === 'assistant') throw forbidden('Assistants cannot create teams.');
+    if (auth.role === 'assistant') throw forbidden($localize`Assistants cannot create teams.`);
     const staffIds = [...new Set(input.coachIds ?? [])];
     if (auth.role === 'coach' && !staffIds.includes(auth.userId)) staffIds.unshift(auth.userId);
     const roles = await this.staffRoles(staffIds, 'coachIds');
@@ -176,8 +177,8 @@ export class TeamService {
     const roles = new Map(members.map((m) => [m.userId, m.role]));
     if (userIds.some((userId) => !roles.has(userId))) {
       if (!field) throw notFound('member');
-      throw badRequest('Someone picked for this team is not a member of the club.', [
-        { field, message: 'Pick coaches and assistants from the club’s members.' },
+      throw badRequest($localize`Someone picked for this team is not a member of the club.`, [
+        { field, message: $localize`Pick coaches and assistants from the club’s members.` },
       ]);
     }
     return roles;
