@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { In, IsNull, MoreThan, type DataSource, type EntityManager } from 'typeorm';
 import type { AuthResponse, InvitationDto, MemberDto, Role } from '../../shared/types/api';
 import { ROLE_IN_A_SENTENCE } from '../../shared/types/role-words';
@@ -121,8 +122,9 @@ export class MemberService {
     await this.withMembersLocked(async (manager) => {
       const membership = await this.membership(manager, userId);
       if (membership.role === 'lead' && role !== 'lead' && (await this.leadCount(manager)) <= 1) {
+        const club = this.scope.auth.clubName;
         throw conflict(
-          `${this.scope.auth.clubName} needs at least one head of coaching. Make someone else head of coaching first, then change this role.`,
+          $localize`${club}:clubName: needs at least one head of coaching. Make someone else head of coaching first, then change this role.`,
         );
       }
       await manager.getRepository(Membership).update({ id: membership.id }, { role });
@@ -135,10 +137,12 @@ export class MemberService {
   async remove(userId: string): Promise<void> {
     await this.withMembersLocked(async (manager) => {
       const membership = await this.membership(manager, userId);
-      if (membership.userId === this.scope.auth.userId) throw conflict('You cannot remove yourself.');
+      if (membership.userId === this.scope.auth.userId)
+        throw conflict($localize`You cannot remove yourself.`);
+      const club = this.scope.auth.clubName;
       if (membership.role === 'lead' && (await this.leadCount(manager)) <= 1)
         throw conflict(
-          `${this.scope.auth.clubName} needs at least one head of coaching. Make someone else head of coaching first, then remove this member.`,
+          $localize`${club}:clubName: needs at least one head of coaching. Make someone else head of coaching first, then remove this member.`,
         );
       // A user belongs to one club, so leaving it removes the account; their plans stay.
       await manager.getRepository(User).delete({ id: membership.userId });
@@ -214,16 +218,27 @@ export class MemberService {
 }
 
 const alreadyMember = (email: string, clubName: string) =>
-  new HttpError(409, 'Already a member', `${email} is already a member of ${clubName}.`, [
-    { field: 'email', message: `is already a member of ${clubName}` },
-  ]);
+  new HttpError(
+    409,
+    $localize`:title of an error answer:Already a member`,
+    $localize`${email}:email: is already a member of ${clubName}:clubName:.`,
+    [
+      {
+        field: 'email',
+        message: $localize`:field error after the field's name:is already a member of ${clubName}:clubName:`,
+      },
+    ],
+    '/problems/already-a-member',
+  );
 
 /** Told only to whoever opened the invitation sent to the address, that is, its owner. */
 const accountElsewhere = () =>
   new HttpError(
     409,
-    'Address has an account',
-    'This e-mail address already has a Conewise account, in another club. An account belongs to one club: sign in with it, or ask whoever invited you to invite another address.',
+    $localize`:title of an error answer:Address has an account`,
+    $localize`This e-mail address already has a Conewise account, in another club. An account belongs to one club: sign in with it, or ask whoever invited you to invite another address.`,
+    undefined,
+    '/problems/address-has-an-account',
   );
 
 /** Removes an account that never confirmed its address, and its club if no one else is in it. */
@@ -241,8 +256,11 @@ async function discardUnconfirmedAccount(manager: EntityManager, userId: string)
 }
 
 const invalidToken = () =>
-  badRequest('This invitation link is not valid: it may have expired or been used already.', [
-    { field: 'token', message: 'has expired, was used already or is unknown' },
+  badRequest($localize`This invitation link is not valid: it may have expired or been used already.`, [
+    {
+      field: 'token',
+      message: $localize`:field error after the field's name:has expired, was used already or is unknown`,
+    },
   ]);
 
 /** The public side of invitations: look one up by token, accept it. */
