@@ -44,9 +44,16 @@ export function playersRouter({ dataSource, config, requireAuth }: ApiDeps): Rou
       res.status(201).json(await players(req).create(req.params['id'] as string, req.body));
     },
   );
-  router.post('/teams/:id/players/import', requireAuth, id, upload.single('file'), speakTheirLanguage, async (req, res) => {
-    res.json(await imports(req).preview(req.params['id'] as string, req.file?.buffer));
-  });
+  router.post(
+    '/teams/:id/players/import',
+    requireAuth,
+    id,
+    upload.single('file'),
+    speakTheirLanguage,
+    async (req, res) => {
+      res.json(await imports(req).preview(req.params['id'] as string, req.file?.buffer));
+    },
+  );
   router.post(
     '/teams/:id/players/import/commit',
     requireAuth,
