@@ -3,7 +3,9 @@
  * parts, pins), time it with drinks breaks, plan the keepers, build each phase, count the
  * changeovers, sum up, trace.
  */
+import '../shared/i18n/localize';
 import type { Phase, Plan, PlanRequest, RuleSetDocument, StationKind } from '../shared/types';
+import { FOCUS_LABELS } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
 import { evaluateRules } from './club-rules/evaluate-rules';
 import { stepsByVerdict } from './club-rules/feedback-steps';
@@ -50,12 +52,13 @@ export async function generatePlan(
   const theme = chooseTheme(ctx);
   if (theme) {
     ctx.focus = [theme, ...ctx.focus.filter((f) => f !== theme)];
+    const themeWords = FOCUS_LABELS[theme].toLowerCase();
     ctx.trace.push({
       ruleId: 'engine.theme',
       fired: true,
       effect: req.focus?.length
-        ? `theme: ${theme} (the coach's first focus)`
-        : `theme: ${theme} (the one the team's recent plans used least)`,
+        ? $localize`:why panel, the session's theme taken from what the coach asked for first:theme: ${themeWords}:theme: (the coach's first focus)`
+        : $localize`:why panel, the session's theme chosen because recent plans used it least:theme: ${themeWords}:theme: (the one the team's recent plans used least)`,
     });
   }
   const slots = sessionSlots(ctx, rules, theme);
@@ -68,7 +71,7 @@ export async function generatePlan(
   ctx.trace.push({
     ruleId: 'engine.estimates',
     fired: true,
-    effect: `Each player: about ${range(Object.values(totals.touches))} touches, on the ball or in play ${Math.round(totals.activeShare * 100)}% of the time (estimates)`,
+    effect: $localize`:why panel, estimated touches per player (a number or a range such as 40–55) and the share of time on the ball:Each player: about ${range(Object.values(totals.touches))}:touches: touches, on the ball or in play ${Math.round(totals.activeShare * 100)}:percent:% of the time (estimates)`,
   });
   const plan: Plan = {
     request: req,
@@ -166,15 +169,15 @@ function buildPhases(
   if (ctx.keepers.length && !warmed && ctx.request.kind === 'match-warm-up') {
     ctx.warnings.push({
       code: 'keepers-not-warmed',
-      message:
-        'No room for the keepers’ own warm-up in this plan, so they play out: warm them up as keepers before kick-off (handling, footwork, then shots), away from the others.',
+      message: $localize`:notice on a match warm-up with no goalkeepers' warm-up in it:No room for the keepers’ own warm-up in this plan, so they play out: warm them up as keepers before kick-off (handling, footwork, then shots), away from the others.`,
     });
   }
   return phases;
 }
 
 function range(values: number[]): string {
-  if (!values.length) return 'none';
+  if (!values.length)
+    return $localize`:why panel, no touches to estimate, in place of a number of touches:none`;
   const lo = Math.min(...values);
   const hi = Math.max(...values);
   return lo === hi ? `${lo}` : `${lo}–${hi}`;

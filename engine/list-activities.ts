@@ -1,4 +1,5 @@
 /** The activities of a rule set for the swap menu and the library, each usable for the request or not, and why. */
+import '../shared/i18n/localize';
 import type { AgeGroup, Level, Plan, PlanRequest, RuleSetDocument, StationKind } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
 import { activityBlocked } from './planning/activities';
@@ -55,7 +56,7 @@ export function listActivities(
           kit: request.equipment,
         })
           ? null
-          : 'too few players or not enough kit for it');
+          : $localize`:why an activity cannot be chosen for today's session:too few players or not enough kit for it`);
       if (reason) {
         option.allowed = false;
         option.reason = reason;

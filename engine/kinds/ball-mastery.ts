@@ -1,4 +1,5 @@
 /** Ball-mastery: every player on the ball, touch challenges while travelling. */
+import '../../shared/i18n/localize';
 import type { KindModule } from './kind-module';
 import {
   ballNeed,
@@ -7,6 +8,7 @@ import {
   groupCount,
   place,
   row,
+  setUp,
   spread,
   tableSizes,
   waitingFor,
@@ -15,8 +17,16 @@ import {
 export const ballMastery: KindModule = {
   kind: 'ball-mastery',
   layouts: [
-    { id: 'grid', label: 'A square grid with a few gates to dribble through' },
-    { id: 'lanes', label: 'Lanes: travel from line to line across the grid' },
+    setUp(
+      'grid',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:A square grid with a few gates to dribble through`,
+    ),
+    setUp(
+      'lanes',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Lanes: travel from line to line across the grid`,
+    ),
   ],
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
@@ -25,9 +35,9 @@ export const ballMastery: KindModule = {
     roles: {},
     format:
       activity.balls === 'pair'
-        ? 'in pairs (threes when balls are short)'
+        ? $localize`:station format in a coach's shorthand, balls shared:in pairs (threes when balls are short)`
         : activity.balls === 'each'
-          ? 'a ball each'
+          ? $localize`:station format in a coach's shorthand, every player has a ball:a ball each`
           : '',
   }),
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1),

@@ -1,4 +1,5 @@
 /** The drinks break: a phase of its own in the timeline, with no stations. */
+import '../../shared/i18n/localize';
 import type { Phase } from '../../shared/types';
 
 export const BREAK_ACTIVITY_ID = 'drinks-break';
@@ -6,7 +7,9 @@ export const BREAK_ACTIVITY_ID = 'drinks-break';
 /** A drinks break from `start` for `minutes`; `hot` says why it came early. */
 export function breakPhase(start: number, minutes: number, hot: boolean): Phase {
   return {
-    name: hot ? 'Drinks break (heat)' : 'Drinks break',
+    name: hot
+      ? $localize`:name of a phase of the session, a drinks break brought early by the heat:Drinks break (heat)`
+      : $localize`:name of a phase of the session:Drinks break`,
     activityId: BREAK_ACTIVITY_ID,
     activityKind: 'break',
     startMinute: start,

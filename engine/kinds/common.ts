@@ -1,4 +1,5 @@
 /** Helpers the kind modules share: default sizes, balls and waiting by ball use, and point layouts. */
+import '../../shared/i18n/localize';
 import type {
   ActivityDefinition,
   BallUse,
@@ -8,7 +9,44 @@ import type {
   StationKind,
 } from '../../shared/types';
 import { intersectRange, type SizeRule } from '../planning/size-rule';
-import type { BallNeed, LocalPoint, LocalPosition } from './kind-module';
+import type { BallNeed, KindLayout, LocalPoint, LocalPosition } from './kind-module';
+
+/**
+ * A set-up with its words read on each use (`words` returns a `$localize` message), so the server
+ * says them in the reader's language rather than the one it started in.
+ */
+export function setUp(id: string, words: () => string): KindLayout {
+  return {
+    id,
+    get label() {
+      return words();
+    },
+  };
+}
+
+/** Two sides' numbers in a coach's shorthand: "3v3". */
+export function sides(a: number, b: number): string {
+  return $localize`:station format, players of one side against the other, e.g. 3v3:${a}:sideA:v${b}:sideB:`;
+}
+
+/** Two sides and, with an odd number, a neutral: "3v3", "3v3 + 1 neutral". */
+export function sidesWithNeutral(a: number, b: number, neutral: boolean): string {
+  return neutral
+    ? $localize`:station format, two sides and one neutral player, e.g. 3v3 + 1 neutral:${a}:sideA:v${b}:sideB: + 1 neutral`
+    : sides(a, b);
+}
+
+/** Two sides' outfield players, "+ goalkeepers" when they have them: "3v3 + goalkeepers". */
+export function sidesWithKeepers(a: number, b: number, keepers: boolean): string {
+  return keepers
+    ? $localize`:station format in a coach's shorthand, two sides and their goalkeepers:${a}:sideA:v${b}:sideB: + goalkeepers`
+    : sides(a, b);
+}
+
+/** The coaching point a neutral player brings. */
+export function neutralPoint(): string {
+  return $localize`:coaching point for a station with a neutral player:The neutral plays for whichever side has the ball`;
+}
 
 /** The club's group sizes for the kind and level, narrowed to the activity's player range. */
 export function tableSizes(

@@ -1,12 +1,32 @@
 /** Directional possession: two sides keep the ball and score by getting it into an end zone or through a gate. */
+import '../../shared/i18n/localize';
 import type { KindModule } from './kind-module';
-import { ballNeed, corners, groupCount, place, spread, tableSizes, waitingFor } from './common';
+import {
+  ballNeed,
+  corners,
+  groupCount,
+  neutralPoint,
+  place,
+  setUp,
+  sidesWithNeutral,
+  spread,
+  tableSizes,
+  waitingFor,
+} from './common';
 
 export const directionalPossession: KindModule = {
   kind: 'directional-possession',
   layouts: [
-    { id: 'end-zones', label: 'Two sides; score by receiving the ball in the end zone' },
-    { id: 'gates', label: 'Two sides; score through one of the gates on the end line' },
+    setUp(
+      'end-zones',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Two sides; score by receiving the ball in the end zone`,
+    ),
+    setUp(
+      'gates',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Two sides; score through one of the gates on the end line`,
+    ),
   ],
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
@@ -19,8 +39,8 @@ export const directionalPossession: KindModule = {
     const b = rest.filter((_, i) => i % 2 === 1);
     return {
       roles: { teams: [a, b], neutrals: neutral },
-      format: `${a.length}v${b.length}${neutral.length ? ' + 1 neutral' : ''}`,
-      points: neutral.length ? ['The neutral plays for whichever side has the ball'] : undefined,
+      format: sidesWithNeutral(a.length, b.length, neutral.length > 0),
+      points: neutral.length ? [neutralPoint()] : undefined,
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 2),
@@ -49,6 +69,7 @@ export const directionalPossession: KindModule = {
         positions,
       };
     }
+    const endZone = $localize`:words drawn in a zone of a station diagram, where players score:end zone`;
     return {
       essential: [
         { u: 0, v: depth },
@@ -59,8 +80,8 @@ export const directionalPossession: KindModule = {
       outline: corners(across, along),
       extra: [],
       zones: [
-        { u: 0, v: 0, across, along: depth, label: 'end zone' },
-        { u: 0, v: along - depth, across, along: depth, label: 'end zone' },
+        { u: 0, v: 0, across, along: depth, label: endZone },
+        { u: 0, v: along - depth, across, along: depth, label: endZone },
       ],
       positions,
     };

@@ -1,13 +1,32 @@
 /** Duels: 1v1 in side-by-side lanes to the end line, or 2v2 / 2v1 in a box with a target at each end. */
+import '../../shared/i18n/localize';
 import type { LocalPoint, KindModule } from './kind-module';
-import { ballNeed, corners, groupCount, place, tableSizes, waitingFor } from './common';
+import {
+  ballNeed,
+  corners,
+  groupCount,
+  neutralPoint,
+  place,
+  setUp,
+  sidesWithNeutral,
+  tableSizes,
+  waitingFor,
+} from './common';
 import { rangeRule } from '../planning/size-rule';
 
 export const duel: KindModule = {
   kind: 'duel',
   layouts: [
-    { id: 'lanes', label: 'Side-by-side lanes, 1v1 in each, score over the end line' },
-    { id: 'box', label: 'A box with a small goal or gate at each end, 2v2 or 2v1' },
+    setUp(
+      'lanes',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Side-by-side lanes, 1v1 in each, score over the end line`,
+    ),
+    setUp(
+      'box',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:A box with a small goal or gate at each end, 2v2 or 2v1`,
+    ),
   ],
   facesShots: false,
   targets: (layout) => (layout === 'box' ? { ends: 2, keepers: false } : { ends: 0, keepers: false }),
@@ -27,8 +46,8 @@ export const duel: KindModule = {
       const b = rest.filter((_, i) => i % 2 === 1);
       return {
         roles: { attackers: a, defenders: b, teams: [a, b], neutrals: neutral },
-        format: `${a.length}v${b.length}${neutral.length ? ' + 1 neutral' : ''}`,
-        points: neutral.length ? ['The neutral plays for whichever side has the ball'] : undefined,
+        format: sidesWithNeutral(a.length, b.length, neutral.length > 0),
+        points: neutral.length ? [neutralPoint()] : undefined,
       };
     }
     const lanes = Math.max(1, Math.floor(ids.length / 2));
@@ -36,8 +55,10 @@ export const duel: KindModule = {
     const defenders = ids.filter((_, i) => i % 2 === 1);
     return {
       roles: { attackers, defenders, teams: [attackers, defenders], rotation: ids },
-      format: `1v1 in ${lanes} lane${lanes === 1 ? '' : 's'}${ids.length % 2 ? ' (one 2v1)' : ''}`,
-      points: ['Swap attacker and defender after every duel; rest while your partner carries the ball back'],
+      format: lanesFormat(lanes, ids.length % 2 === 1),
+      points: [
+        $localize`:coaching point that follows from the roles:Swap attacker and defender after every duel; rest while your partner carries the ball back`,
+      ],
     };
   },
   balls: (activity, station) =>
@@ -82,6 +103,17 @@ export const duel: KindModule = {
     };
   },
 };
+
+/** "1v1 in 3 lanes", with "(one 2v1)" when a player is over. */
+function lanesFormat(lanes: number, odd: boolean): string {
+  if (lanes === 1)
+    return odd
+      ? $localize`:station format in a coach's shorthand, duels side by side, one lane with three players:1v1 in 1 lane (one 2v1)`
+      : $localize`:station format in a coach's shorthand, duels side by side:1v1 in 1 lane`;
+  return odd
+    ? $localize`:station format in a coach's shorthand, duels side by side, one lane with three players:1v1 in ${lanes}:lanes: lanes (one 2v1)`
+    : $localize`:station format in a coach's shorthand, duels side by side:1v1 in ${lanes}:lanes: lanes`;
+}
 
 function sideRow(n: number, v: number, across: number): LocalPoint[] {
   return Array.from({ length: n }, (_, i) => ({ u: (across * (i + 1)) / (n + 1), v }));

@@ -1,29 +1,39 @@
 /** A goalkeepers' warm-up in a real goal: handling, footwork, then shots. */
+import '../../shared/i18n/localize';
 import type { KindModule } from './kind-module';
-import { ballNeed, coachAt, groupCount, place, tableSizes, waitingFor } from './common';
+import { ballNeed, coachAt, groupCount, place, setUp, tableSizes, waitingFor } from './common';
 
 export const goalkeeping: KindModule = {
   kind: 'goalkeeping',
-  layouts: [{ id: 'goal', label: 'A goalkeeper in a real goal, a server in front' }],
+  layouts: [
+    setUp(
+      'goal',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:A goalkeeper in a real goal, a server in front`,
+    ),
+  ],
   facesShots: false,
   targets: () => ({ ends: 1, keepers: true }),
   sizes: (params, level, _band, activity) => tableSizes(params, 'goalkeeping', level, activity),
   roles: ({ players, keepers, coachJoins }) => {
     const servers = players.map((p) => p.id).filter((id) => !keepers.includes(id));
     const who = coachJoins
-      ? 'a coach serving'
+      ? $localize`:who serves the goalkeepers, after their number:a coach serving`
       : servers.length
-        ? `${servers.length} serving`
+        ? $localize`:who serves the goalkeepers, after their number:${servers.length}:servers: serving`
         : keepers.length > 1
-          ? 'serving each other'
-          : 'with a ball of their own';
+          ? $localize`:who serves the goalkeepers, after their number:serving each other`
+          : $localize`:who serves the goalkeeper, after their number:with a ball of their own`;
     return {
       roles: { goalkeeper: keepers, servers, rotation: keepers },
-      format: `${keepers.length} goalkeeper${keepers.length === 1 ? '' : 's'}, ${who}`,
+      format:
+        keepers.length === 1
+          ? $localize`:station format in a coach's shorthand, then who serves:1 goalkeeper, ${who}:whoServes:`
+          : $localize`:station format in a coach's shorthand, then who serves:${keepers.length}:goalkeepers: goalkeepers, ${who}:whoServes:`,
       points: [
         keepers.length > 1
-          ? 'Goalkeepers swap between the goal and serving every six to eight balls'
-          : 'Server: start with throws to the hands, then volleys, then shots along the ground',
+          ? $localize`:coaching point that follows from the roles:Goalkeepers swap between the goal and serving every six to eight balls`
+          : $localize`:coaching point that follows from the roles:Server: start with throws to the hands, then volleys, then shots along the ground`,
       ],
     };
   },

@@ -1,7 +1,8 @@
 /** Keep-ball: a passing square against defenders; a defender who wins the ball breaks out to score. */
+import '../../shared/i18n/localize';
 import type { KeepBallFormat, Level, RuleParameters } from '../../shared/types';
 import type { KindModule } from './kind-module';
-import { ballNeed, circle, corners, groupCount, perimeter, place, waitingFor } from './common';
+import { ballNeed, circle, corners, groupCount, perimeter, place, setUp, waitingFor } from './common';
 import type { SizeRule } from '../planning/size-rule';
 
 /** The keep-ball format for a group (players plus a joining coach), most preferred first. */
@@ -34,7 +35,12 @@ export function keepBallSizes(
 
 export const keepBall: KindModule = {
   kind: 'keep-ball',
-  layouts: [{ id: 'square', label: 'A square with a breakout gate on two sides' }],
+  layouts: [
+    setUp(
+      'square',
+      () => $localize`:set-up of an activity, how it is laid out:A square with a breakout gate on two sides`,
+    ),
+  ],
   facesShots: false,
   targets: () => ({ ends: 2, optional: true, keepers: false }),
   sizes: (params, level, _band, activity) => keepBallSizes(params, level, activity.players),
@@ -49,11 +55,15 @@ export const keepBall: KindModule = {
     const a = attackers.length + coachJoins;
     return {
       roles: { attackers, defenders, rotation: [...defenders, ...attackers] },
-      format: `${a}v${defenders.length}`,
+      format: $localize`:attackers against defenders in keep-ball, e.g. 4v1:${a}:attackers:v${defenders.length}:defenders:`,
       points:
         defenders.length > 1
-          ? ['Defenders: the first presses the ball, the second covers the pass through the middle']
-          : ['Defender: curve your run to cut off one pass, then press the ball'],
+          ? [
+              $localize`:coaching point that follows from the roles:Defenders: the first presses the ball, the second covers the pass through the middle`,
+            ]
+          : [
+              $localize`:coaching point that follows from the roles:Defender: curve your run to cut off one pass, then press the ball`,
+            ],
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 1),

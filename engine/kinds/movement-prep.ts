@@ -1,10 +1,16 @@
 /** Movement preparation for U13 and older: travelling movements in lanes, building to accelerations. */
+import '../../shared/i18n/localize';
 import type { KindModule, LocalPoint } from './kind-module';
-import { ballNeed, groupCount, place, row, tableSizes, waitingFor } from './common';
+import { ballNeed, groupCount, place, row, setUp, tableSizes, waitingFor } from './common';
 
 export const movementPrep: KindModule = {
   kind: 'movement-prep',
-  layouts: [{ id: 'lanes', label: 'Lanes marked at both ends: out and back' }],
+  layouts: [
+    setUp(
+      'lanes',
+      () => $localize`:set-up of an activity, how it is laid out:Lanes marked at both ends: out and back`,
+    ),
+  ],
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
   sizes: (params, level, _band, activity) => tableSizes(params, 'movement-prep', level, activity),
@@ -12,7 +18,10 @@ export const movementPrep: KindModule = {
     const lanes = laneCount(players.length);
     return {
       roles: {},
-      format: `${lanes} lane${lanes === 1 ? '' : 's'}, going in waves`,
+      format:
+        lanes === 1
+          ? $localize`:station format in a coach's shorthand, lanes that go one after another:1 lane, going in waves`
+          : $localize`:station format in a coach's shorthand, lanes that go one after another:${lanes}:lanes: lanes, going in waves`,
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1),

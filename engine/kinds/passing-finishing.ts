@@ -1,6 +1,17 @@
 /** Passing and finishing in threes: pass round a triangle, the third drives at goal and shoots. */
+import '../../shared/i18n/localize';
 import type { KindModule, LocalPoint } from './kind-module';
-import { ballNeed, coachAt, corners, groupCount, outfieldIds, place, tableSizes, waitingFor } from './common';
+import {
+  ballNeed,
+  coachAt,
+  corners,
+  groupCount,
+  outfieldIds,
+  place,
+  setUp,
+  tableSizes,
+  waitingFor,
+} from './common';
 
 /** Outfield players who can be busy at once in a group of three roles. */
 const ACTIVE = 3;
@@ -8,8 +19,15 @@ const ACTIVE = 3;
 export const passingFinishing: KindModule = {
   kind: 'passing-finishing',
   layouts: [
-    { id: 'triangle', label: 'Pass round a triangle; the third player drives at goal and shoots' },
-    { id: 'set-and-shoot', label: 'Pass in, lay it back, shoot first time' },
+    setUp(
+      'triangle',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Pass round a triangle; the third player drives at goal and shoots`,
+    ),
+    setUp(
+      'set-and-shoot',
+      () => $localize`:set-up of an activity, how it is laid out:Pass in, lay it back, shoot first time`,
+    ),
   ],
   facesShots: true,
   targets: () => ({ ends: 1, keepers: true }),
@@ -19,9 +37,13 @@ export const passingFinishing: KindModule = {
     const n = outfield.length + coachJoins;
     return {
       roles: { goalkeeper: keepers, rotation: outfield },
-      format: `${n} + ${keepers.length ? 'goalkeeper' : 'an empty goal'}`,
+      format: keepers.length
+        ? $localize`:station format in a coach's shorthand, players shooting at a goalkeeper:${n}:players: + goalkeeper`
+        : $localize`:station format in a coach's shorthand, players shooting at a goal with nobody in it:${n}:players: + an empty goal`,
       points: keepers.length
-        ? ['Shooters: hit the target first; the goalkeeper sets the pace between shots']
+        ? [
+            $localize`:coaching point that follows from the roles:Shooters: hit the target first; the goalkeeper sets the pace between shots`,
+          ]
         : undefined,
     };
   },

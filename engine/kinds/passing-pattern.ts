@@ -1,4 +1,5 @@
 /** Passing patterns: pairs through gates, triangles and squares, pass and follow. */
+import '../../shared/i18n/localize';
 import type { KindModule, LocalPoint } from './kind-module';
 import {
   ballNeed,
@@ -8,6 +9,7 @@ import {
   groupCount,
   place,
   row,
+  setUp,
   tableSizes,
   waitingFor,
 } from './common';
@@ -15,9 +17,19 @@ import {
 export const passingPattern: KindModule = {
   kind: 'passing-pattern',
   layouts: [
-    { id: 'pairs', label: 'Pairs pass through a gate across a channel' },
-    { id: 'triangle', label: 'A triangle of cones: pass and follow your pass' },
-    { id: 'square', label: 'A square of cones with a give-and-go' },
+    setUp(
+      'pairs',
+      () => $localize`:set-up of an activity, how it is laid out:Pairs pass through a gate across a channel`,
+    ),
+    setUp(
+      'triangle',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:A triangle of cones: pass and follow your pass`,
+    ),
+    setUp(
+      'square',
+      () => $localize`:set-up of an activity, how it is laid out:A square of cones with a give-and-go`,
+    ),
   ],
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
@@ -29,12 +41,10 @@ export const passingPattern: KindModule = {
     const pairs = Math.floor(total / 2) - (total % 2 && total > 1 ? 1 : 0);
     const format =
       layout === 'pairs'
-        ? total % 2 && total > 1
-          ? pairs
-            ? `${pairs} pair${pairs === 1 ? '' : 's'} and a three`
-            : 'a three'
-          : `${pairs} pair${pairs === 1 ? '' : 's'}`
-        : `${layout === 'triangle' ? 'triangle' : 'square'} of ${total}`;
+        ? pairsFormat(pairs, total % 2 === 1 && total > 1)
+        : layout === 'triangle'
+          ? $localize`:station format in a coach's shorthand, players round a triangle of cones:triangle of ${total}:players:`
+          : $localize`:station format in a coach's shorthand, players round a square of cones:square of ${total}:players:`;
     return { roles: {}, format };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 1),
@@ -85,3 +95,15 @@ export const passingPattern: KindModule = {
     };
   },
 };
+
+/** "3 pairs", "2 pairs and a three", "a three". */
+function pairsFormat(pairs: number, three: boolean): string {
+  if (!three)
+    return pairs === 1
+      ? $localize`:station format in a coach's shorthand, passing in twos:1 pair`
+      : $localize`:station format in a coach's shorthand, passing in twos:${pairs}:pairs: pairs`;
+  if (!pairs) return $localize`:station format in a coach's shorthand, one group of three passing:a three`;
+  return pairs === 1
+    ? $localize`:station format in a coach's shorthand, passing in twos and one group of three:1 pair and a three`
+    : $localize`:station format in a coach's shorthand, passing in twos and one group of three:${pairs}:pairs: pairs and a three`;
+}

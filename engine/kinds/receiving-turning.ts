@@ -1,12 +1,31 @@
 /** Receiving and turning: a receiver between servers opens up, receives and turns away. */
+import '../../shared/i18n/localize';
 import type { KindModule, LocalPoint } from './kind-module';
-import { ballNeed, coachAt, corners, gateAcross, groupCount, place, tableSizes, waitingFor } from './common';
+import {
+  ballNeed,
+  coachAt,
+  corners,
+  gateAcross,
+  groupCount,
+  place,
+  setUp,
+  tableSizes,
+  waitingFor,
+} from './common';
 
 export const receivingTurning: KindModule = {
   kind: 'receiving-turning',
   layouts: [
-    { id: 'channel', label: 'A channel: server, receiver in the middle, server' },
-    { id: 'square', label: 'Servers on the corners of a square, a receiver in the middle' },
+    setUp(
+      'channel',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:A channel: server, receiver in the middle, server`,
+    ),
+    setUp(
+      'square',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Servers on the corners of a square, a receiver in the middle`,
+    ),
   ],
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
@@ -20,8 +39,10 @@ export const receivingTurning: KindModule = {
     const servers = ids.slice(receivers.length);
     return {
       roles: { attackers: receivers, servers, rotation: ids },
-      format: `${servers.length + coachJoins} serving, ${receivers.length} receiving`,
-      points: ['Swap the receiver every six to eight balls'],
+      format: $localize`:station format in a coach's shorthand, players who pass and players who receive:${servers.length + coachJoins}:servers: serving, ${receivers.length}:receivers: receiving`,
+      points: [
+        $localize`:coaching point that follows from the roles:Swap the receiver every six to eight balls`,
+      ],
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 1),

@@ -1,4 +1,5 @@
 /** Shooting games: finishing against defenders and a goalkeeper, under pressure. */
+import '../../shared/i18n/localize';
 import type { KindModule, LocalPoint } from './kind-module';
 import {
   ballNeed,
@@ -6,6 +7,8 @@ import {
   groupCount,
   outfieldIds,
   place,
+  setUp,
+  sidesWithKeepers,
   tableSizes,
   twoSides,
   waitingFor,
@@ -14,11 +17,16 @@ import {
 export const shootingGame: KindModule = {
   kind: 'shooting-game',
   layouts: [
-    {
-      id: 'one-goal',
-      label: 'Attackers against defenders at one goal; a defender who wins it counters to a gate',
-    },
-    { id: 'two-goals', label: 'A small box between two goals, shoot on sight' },
+    setUp(
+      'one-goal',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Attackers against defenders at one goal; a defender who wins it counters to a gate`,
+    ),
+    setUp(
+      'two-goals',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:A small box between two goals, shoot on sight`,
+    ),
   ],
   facesShots: true,
   targets: (layout) => ({ ends: layout === 'two-goals' ? 2 : 1, keepers: true }),
@@ -31,7 +39,7 @@ export const shootingGame: KindModule = {
       const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
       return {
         roles: { goalkeeper: keepers, teams },
-        format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + goalkeepers' : ''}`,
+        format: sidesWithKeepers(out(teams[0]), out(teams[1]), keepers.length > 0),
       };
     }
     const defenderCount = outfield.length >= 6 ? 2 : 1;
@@ -39,8 +47,10 @@ export const shootingGame: KindModule = {
     const attackers = outfield.slice(0, outfield.length - defenderCount);
     return {
       roles: { goalkeeper: keepers, attackers, defenders, rotation: [...defenders, ...attackers] },
-      format: `${attackers.length}v${defenders.length}${keepers.length ? ' + goalkeeper' : ''}`,
-      points: ['Swap the defenders every two minutes'],
+      format: keepers.length
+        ? $localize`:station format in a coach's shorthand, attackers against defenders and a goalkeeper:${attackers.length}:attackers:v${defenders.length}:defenders: + goalkeeper`
+        : $localize`:station format in a coach's shorthand, attackers against defenders:${attackers.length}:attackers:v${defenders.length}:defenders:`,
+      points: [$localize`:coaching point that follows from the roles:Swap the defenders every two minutes`],
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 3),

@@ -1,14 +1,35 @@
 /** Small-sided games: even sides within the age's format, a goalkeeper each side or none. */
+import '../../shared/i18n/localize';
 import { rangeRule } from '../planning/size-rule';
 import type { KindModule } from './kind-module';
-import { ballNeed, corners, groupCount, place, spread, tableSizes, twoSides, waitingFor } from './common';
+import {
+  ballNeed,
+  corners,
+  groupCount,
+  place,
+  setUp,
+  sides,
+  spread,
+  tableSizes,
+  twoSides,
+  waitingFor,
+} from './common';
 
 export const smallSidedGame: KindModule = {
   kind: 'small-sided-game',
   layouts: [
-    { id: 'goals', label: 'Two goals (or gates), one at each end' },
-    { id: 'end-lines', label: 'Score by stopping the ball on the end line' },
-    { id: 'four-gates', label: 'Two gates at each end to attack' },
+    setUp(
+      'goals',
+      () => $localize`:set-up of an activity, how it is laid out:Two goals (or gates), one at each end`,
+    ),
+    setUp(
+      'end-lines',
+      () => $localize`:set-up of an activity, how it is laid out:Score by stopping the ball on the end line`,
+    ),
+    setUp(
+      'four-gates',
+      () => $localize`:set-up of an activity, how it is laid out:Two gates at each end to attack`,
+    ),
   ],
   facesShots: true,
   targets: (layout) =>
@@ -30,9 +51,13 @@ export const smallSidedGame: KindModule = {
     );
     return {
       roles: { teams, goalkeeper: keepers },
-      format: `${teams[0].length}v${teams[1].length}${keepers.length ? ' with goalkeepers' : ''}`,
+      format: keepers.length
+        ? $localize`:station format in a coach's shorthand, a game between two sides with a goalkeeper each:${teams[0].length}:sideA:v${teams[1].length}:sideB: with goalkeepers`
+        : sides(teams[0].length, teams[1].length),
       points: keepers.length
-        ? ['Goalkeepers start every attack with a throw or a pass along the ground']
+        ? [
+            $localize`:coaching point that follows from the roles:Goalkeepers start every attack with a throw or a pass along the ground`,
+          ]
         : undefined,
     };
   },
@@ -60,7 +85,13 @@ export const smallSidedGame: KindModule = {
               { u: across * 0.8, v: along, edge: 'far' },
             ]
           : [],
-      lines: [{ from: { u: 0, v: along / 2 }, to: { u: across, v: along / 2 }, label: 'halfway' }],
+      lines: [
+        {
+          from: { u: 0, v: along / 2 },
+          to: { u: across, v: along / 2 },
+          label: $localize`:words drawn on the halfway line of a station diagram:halfway`,
+        },
+      ],
       positions: [
         ...place(
           a.filter((id) => keepers.includes(id)),

@@ -1,12 +1,20 @@
 /** Speed: short, sharp reaction and sprint races in lanes, with full rest between goes. */
+import '../../shared/i18n/localize';
 import type { KindModule, LocalPoint } from './kind-module';
-import { ballNeed, coachAt, groupCount, place, row, tableSizes, waitingFor } from './common';
+import { ballNeed, coachAt, groupCount, place, row, setUp, tableSizes, waitingFor } from './common';
 
 export const speed: KindModule = {
   kind: 'speed',
   layouts: [
-    { id: 'lanes', label: 'Pairs race side by side in lanes' },
-    { id: 'race-to-ball', label: 'A ball between two players: race to win it and dribble over the line' },
+    setUp(
+      'lanes',
+      () => $localize`:set-up of an activity, how it is laid out:Pairs race side by side in lanes`,
+    ),
+    setUp(
+      'race-to-ball',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:A ball between two players: race to win it and dribble over the line`,
+    ),
   ],
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
@@ -16,8 +24,10 @@ export const speed: KindModule = {
     const lanes = Math.max(1, Math.floor(total / 2));
     return {
       roles: {},
-      format: `${lanes} lane${lanes === 1 ? '' : 's'} of ${total % 2 ? '2–3' : '2'}`,
-      points: ['Full rest between races: walk back, then go again'],
+      format: lanesOf(lanes, total % 2 === 1),
+      points: [
+        $localize`:coaching point that follows from the roles:Full rest between races: walk back, then go again`,
+      ],
     };
   },
   balls: (activity, station) =>
@@ -49,3 +59,14 @@ export const speed: KindModule = {
     };
   },
 };
+
+/** "3 lanes of 2", "3 lanes of 2–3" when one lane races three. */
+function lanesOf(lanes: number, three: boolean): string {
+  if (lanes === 1)
+    return three
+      ? $localize`:station format in a coach's shorthand, racing lanes, one of them with three players:1 lane of 2–3`
+      : $localize`:station format in a coach's shorthand, racing lanes of two players:1 lane of 2`;
+  return three
+    ? $localize`:station format in a coach's shorthand, racing lanes, one of them with three players:${lanes}:lanes: lanes of 2–3`
+    : $localize`:station format in a coach's shorthand, racing lanes of two players:${lanes}:lanes: lanes of 2`;
+}

@@ -1,6 +1,17 @@
 /** Tag games: chasing and dribbling games in a grid, every child with a ball where there are balls. */
+import '../../shared/i18n/localize';
 import type { KindModule, LocalZone } from './kind-module';
-import { ballNeed, circle, corners, groupCount, place, spread, tableSizes, waitingFor } from './common';
+import {
+  ballNeed,
+  circle,
+  corners,
+  groupCount,
+  place,
+  setUp,
+  spread,
+  tableSizes,
+  waitingFor,
+} from './common';
 
 /** About one tagger for every five players, one to three. */
 export function taggerCount(players: number): number {
@@ -10,8 +21,15 @@ export function taggerCount(players: number): number {
 export const tagGame: KindModule = {
   kind: 'tag-game',
   layouts: [
-    { id: 'grid', label: 'A square grid, taggers start in the middle' },
-    { id: 'safe-corners', label: 'A grid with a small safe zone in each corner' },
+    setUp(
+      'grid',
+      () => $localize`:set-up of an activity, how it is laid out:A square grid, taggers start in the middle`,
+    ),
+    setUp(
+      'safe-corners',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:A grid with a small safe zone in each corner`,
+    ),
   ],
   facesShots: false,
   targets: () => ({ ends: 0, keepers: false }),
@@ -22,8 +40,13 @@ export const tagGame: KindModule = {
     const runners = ids.slice(0, ids.length - taggers.length);
     return {
       roles: { attackers: runners, defenders: taggers, rotation: [...taggers, ...runners] },
-      format: `${taggers.length} tagger${taggers.length === 1 ? '' : 's'}, ${runners.length} running`,
-      points: ['Change the taggers every minute or so, so everyone chases and everyone escapes'],
+      format:
+        taggers.length === 1
+          ? $localize`:station format in a coach's shorthand, chasers and the players they chase:1 tagger, ${runners.length}:runners: running`
+          : $localize`:station format in a coach's shorthand, chasers and the players they chase:${taggers.length}:taggers: taggers, ${runners.length}:runners: running`,
+      points: [
+        $localize`:coaching point that follows from the roles:Change the taggers every minute or so, so everyone chases and everyone escapes`,
+      ],
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1),
@@ -36,6 +59,7 @@ export const tagGame: KindModule = {
     const zones: LocalZone[] = [];
     const extra = [];
     if (layout === 'safe-corners') {
+      const safe = $localize`:words drawn in a corner zone of a tag game where nobody can be tagged:safe`;
       const s = Math.max(2, Math.min(4, Math.min(across, along) / 5));
       for (const [u, v] of [
         [0, 0],
@@ -43,7 +67,7 @@ export const tagGame: KindModule = {
         [across - s, along - s],
         [0, along - s],
       ]) {
-        zones.push({ u, v, across: s, along: s, label: 'safe' });
+        zones.push({ u, v, across: s, along: s, label: safe });
       }
       extra.push(
         { u: s, v: s },

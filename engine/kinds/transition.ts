@@ -1,16 +1,32 @@
 /** Transition: attack against defence, and the moment the ball changes hands. */
+import '../../shared/i18n/localize';
 import type { KindModule } from './kind-module';
-import { ballNeed, corners, groupCount, place, tableSizes, twoSides, waitingFor } from './common';
+import {
+  ballNeed,
+  corners,
+  groupCount,
+  place,
+  setUp,
+  sidesWithKeepers,
+  tableSizes,
+  twoSides,
+  waitingFor,
+} from './common';
 import { spreadAcross } from './shooting-game';
 
 export const transition: KindModule = {
   kind: 'transition',
   layouts: [
-    { id: 'waves', label: 'Attackers go at a goal; defenders who win it counter through the gates' },
-    {
-      id: 'two-goals',
-      label: 'Two sides, two goals; switch from attack to defence the moment the ball is lost',
-    },
+    setUp(
+      'waves',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Attackers go at a goal; defenders who win it counter through the gates`,
+    ),
+    setUp(
+      'two-goals',
+      () =>
+        $localize`:set-up of an activity, how it is laid out:Two sides, two goals; switch from attack to defence the moment the ball is lost`,
+    ),
   ],
   facesShots: true,
   targets: (layout) => (layout === 'two-goals' ? { ends: 2, keepers: true } : { ends: 1, keepers: false }),
@@ -21,7 +37,7 @@ export const transition: KindModule = {
     const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
     return {
       roles: { teams, goalkeeper: keepers },
-      format: `${out(teams[0])}v${out(teams[1])}${keepers.length ? ' + goalkeepers' : ''}`,
+      format: sidesWithKeepers(out(teams[0]), out(teams[1]), keepers.length > 0),
     };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 3),
