@@ -2,8 +2,8 @@ export { renderPlanPdf } from './render-pdf';
 export {
   planCardDefinition,
   PAPERS,
-  GOAL_SAFETY_NOTE,
-  STANDING_SAFETY_NOTE,
+  goalSafetyNote,
+  standingSafetyNote,
   type CardInput,
   type Paper,
 } from './plan-card';

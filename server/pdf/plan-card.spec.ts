@@ -5,6 +5,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { generatePlan } from '../../engine';
 import type { Phase, Plan, PlanRequest } from '../../shared/types';
+import { inLanguage } from '../i18n/translations';
 import { ACTIVITY_KIND_LABELS, POSITION_STYLE } from '../../shared/types/activity-words';
 import { changeoverText, groupList, legendKeys } from './plan-card';
 import { MISSING_MARK, cardRuns, printableContent } from './printable';
@@ -177,5 +178,16 @@ describe('set-up words', () => {
       changeoverText({ conesPlaced: 0, conesLifted: 0, goalsMoved: 0, minutes: 0 }, phase({})),
     ).toBeNull();
     expect(changeoverText(undefined, phase({}))).toBeNull();
+  });
+});
+
+describe('the card’s language', () => {
+  it('tells screen readers the language its words are in: the reader’s', async () => {
+    const plan = await generatePlan(request(8, { seed: 'card-language' }));
+    const input = { plan, teamName: 'U12 Larks' };
+    // The document catalogue's /Lang entry (ISO 32000-1 14.9.2), written uncompressed.
+    const lang = (pdf: Buffer) => /\/Lang \(([^)]*)\)/.exec(pdf.toString('latin1'))?.[1];
+    expect(lang(await renderPlanPdf(input))).toBe('en-GB');
+    expect(lang(await inLanguage('es', () => renderPlanPdf(input)))).toBe('es');
   });
 });

@@ -1,4 +1,7 @@
+import '../../shared/i18n/localize';
 import type { Column, Content, TDocumentDefinitions, TableCell } from 'pdfmake/interfaces';
+import { LANGUAGES } from '../../shared/i18n/languages';
+import { currentLanguage } from '../i18n/translations';
 import type { Changeover, Equipment, Phase, Plan, PositionRole, Station } from '../../shared/types';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, POSITION_STYLE } from '../../shared/types/activity-words';
 import { ageGroupLabel, LEVEL_LABELS } from '../../shared/types/squad-words';
@@ -7,7 +10,13 @@ import { dayInWords, minuteInWords, timeInWords } from '../services/session-day'
 import { DEFAULT_UNITS, formatSize, inUnitsDeep, type DistanceUnit, type Units } from '../../shared/units';
 import { CARD_FONT } from './fonts';
 import { printableContent } from './printable';
-import { diagramMarks, legendSymbolSvg, stationDiagramSvg, type LegendKey } from './station-diagram';
+import {
+  coachMark,
+  diagramMarks,
+  legendSymbolSvg,
+  stationDiagramSvg,
+  type LegendKey,
+} from './station-diagram';
 
 export type Paper = 'a4' | 'letter';
 export const PAPERS: readonly Paper[] = ['a4', 'letter'];
@@ -31,12 +40,10 @@ export interface CardInput {
 }
 
 /** Printed on every card, whatever the plan says (US CPSC movable-goal guidance; common practice otherwise). */
-export const GOAL_SAFETY_NOTE =
-  'Anchor or weight every movable goal and never let anyone climb or hang on one (US Consumer Product Safety ' +
-  'Commission, movable soccer goal safety).';
-export const STANDING_SAFETY_NOTE =
-  'Check the surface before you start, keep water to hand and give breaks in the heat. Follow your local ' +
-  'rules, the club safeguarding policy and qualified first-aid advice.';
+export const goalSafetyNote = (): string =>
+  $localize`:safety note printed on every card:Anchor or weight every movable goal and never let anyone climb or hang on one (US Consumer Product Safety Commission, movable soccer goal safety).`;
+export const standingSafetyNote = (): string =>
+  $localize`:safety note printed on every card:Check the surface before you start, keep water to hand and give breaks in the heat. Follow your local rules, the club safeguarding policy and qualified first-aid advice.`;
 
 /** Sizes that shrink when a card would run onto a second page. */
 export interface CardDensity {
@@ -96,24 +103,27 @@ export const SMALLEST: CardDensity = {
   soloDiagramHeight: 42,
 };
 
-const KIT_LABELS: Record<keyof Equipment, [one: string, many: string]> = {
-  balls: ['ball', 'balls'],
-  cones: ['cone', 'cones'],
-  bibs: ['bib', 'bibs'],
-  goals: ['small goal', 'small goals'],
-};
+const KIT_KEYS: (keyof Equipment)[] = ['balls', 'cones', 'bibs', 'goals'];
 
-const KIT_KEYS = Object.keys(KIT_LABELS) as (keyof Equipment)[];
-/** The same, short, for a station's line. */
-const SHORT_KIT: Record<keyof Equipment, [one: string, many: string]> = {
-  balls: ['ball', 'balls'],
-  cones: ['cone', 'cones'],
-  bibs: ['bib', 'bibs'],
-  goals: ['goal', 'goals'],
-};
-
-function kitCount(kind: keyof Equipment, count: number): string {
-  return `${count} ${KIT_LABELS[kind][count === 1 ? 0 : 1]}`;
+/** "12 cones", "1 small goal": a number of a kind of kit; `short` for a station's line ("1 goal"). */
+function kitCount(kind: keyof Equipment, count: number, short = false): string {
+  const one = count === 1;
+  switch (kind) {
+    case 'balls':
+      return one ? $localize`:kit on the card:1 ball` : $localize`:kit on the card:${count}:count: balls`;
+    case 'cones':
+      return one ? $localize`:kit on the card:1 cone` : $localize`:kit on the card:${count}:count: cones`;
+    case 'bibs':
+      return one ? $localize`:kit on the card:1 bib` : $localize`:kit on the card:${count}:count: bibs`;
+    case 'goals':
+      if (short)
+        return one
+          ? $localize`:small goals a station needs, in short:1 goal`
+          : $localize`:small goals a station needs, in short:${count}:count: goals`;
+      return one
+        ? $localize`:kit on the card:1 small goal`
+        : $localize`:kit on the card:${count}:count: small goals`;
+  }
 }
 
 const PAGE_WIDTH: Record<Paper, number> = { a4: 595.28, letter: 612 };
@@ -126,25 +136,25 @@ const BREAK_TINT = '#dcebf3';
 const MUTED = '#44524a';
 
 /** The legend's order and words: the start-position roles, then the kit markers. */
-const LEGEND: [LegendKey, string][] = [
+const legendEntries = (): [LegendKey, string][] => [
   ...(Object.keys(POSITION_STYLE) as PositionRole[]).map((role): [LegendKey, string] => [
     role,
     POSITION_STYLE[role].label,
   ]),
-  ['cone', 'Cone'],
-  ['goal', 'Goal'],
-  ['gate', 'Gate (two cones)'],
+  ['cone', $localize`:in the key to the card's diagrams:Cone`],
+  ['goal', $localize`:in the key to the card's diagrams, a small goal:Goal`],
+  ['gate', $localize`:in the key to the card's diagrams:Gate (two cones)`],
 ];
 
 /** Short role tags in the group list, so the list still reads on a grey printout. */
-const ROLE_TAGS: Partial<Record<PositionRole, string>> = {
-  goalkeeper: 'goalkeeper',
-  defender: 'defender',
-  'team-a': 'A',
-  'team-b': 'B',
-  server: 'server',
-  neutral: 'neutral',
-};
+const roleTags = (): Partial<Record<PositionRole, string>> => ({
+  goalkeeper: $localize`:a player's role in brackets after their name on the card:goalkeeper`,
+  defender: $localize`:a player's role in brackets after their name on the card:defender`,
+  'team-a': $localize`:a player's side in brackets after their name on the card, short for Team A:A`,
+  'team-b': $localize`:a player's side in brackets after their name on the card, short for Team B:B`,
+  server: $localize`:a player's role in brackets after their name on the card, the one who serves the ball:server`,
+  neutral: $localize`:a player's role in brackets after their name on the card, plays for whichever side has the ball:neutral`,
+});
 
 /** The pdfmake document for one plan's card: header, timeline, legend, a block per phase, kit and cautions. */
 export function planCardDefinition(
@@ -173,6 +183,7 @@ export function planCardDefinition(
 
   return {
     pageSize: paper === 'a4' ? 'A4' : 'LETTER',
+    language: cardLanguage(),
     pageMargins: [MARGIN, MARGIN, MARGIN, MARGIN + 6],
     info: { title: `${input.teamName} — ${kindLabel(plan)}`, creator: 'Conewise' },
     defaultStyle: {
@@ -191,8 +202,9 @@ export function planCardDefinition(
     },
     footer: (page: number, pages: number) => {
       onPageCount?.(pages);
+      const rules = input.rules ?? $localize`:the card's footer when the club's rules are gone:Club rules`;
       return {
-        text: `Conewise card · ${input.rules ?? 'Club rules'} · plan ref ${plan.seed} · page ${page} of ${pages}`,
+        text: $localize`:the card's footer, plan ref is the plan's reference:Conewise card · ${rules}:rules: · plan ref ${plan.seed}:planRef: · page ${page}:page: of ${pages}:pages:`,
         fontSize: 6,
         color: '#7a857e',
         margin: [MARGIN, 8, MARGIN, 0],
@@ -214,20 +226,23 @@ function header(input: CardInput, at: MinuteText, timed: boolean): Content {
   const request = plan.request;
   const when = [
     input.date ? dayInWords(input.date, input.locale ?? 'en-GB', 'short-day-year') : null,
-    input.kickOff
-      ? `${plan.request.kind === 'match-warm-up' ? 'kick-off' : 'start'} ${timeInWords(input.kickOff, input.locale ?? 'en-GB')}`
-      : null,
-    `${planLength(plan.phases)} min`,
+    input.kickOff ? startInWords(plan, timeInWords(input.kickOff, input.locale ?? 'en-GB')) : null,
+    minutesInWords(planLength(plan.phases)),
   ].filter(Boolean);
+  const players = request.players.length;
+  const size = formatSize((input.units ?? DEFAULT_UNITS).distance, request.space);
   const facts = [
     ageGroupLabel(request.ageGroup),
     LEVEL_LABELS[request.level],
-    `${request.players.length} players`,
-    `${request.coaches} ${request.coaches === 1 ? 'coach' : 'coaches'}`,
-    `space ${formatSize((input.units ?? DEFAULT_UNITS).distance, request.space)}`,
-    timed ? `arrive by ${at(-10)}` : null,
+    $localize`:how many players the session is for:${players}:count: players`,
+    request.coaches === 1
+      ? $localize`:how many coaches run the session:1 coach`
+      : $localize`:how many coaches run the session:${request.coaches}:count: coaches`,
+    $localize`:the space the session has, width by length:space ${size}:size:`,
+    timed ? $localize`:when players should arrive:arrive by ${at(-10)}:time:` : null,
   ].filter(Boolean);
-  const theme = plan.theme ? ` · theme: ${FOCUS_LABELS[plan.theme] ?? plan.theme}` : '';
+  const focus = plan.theme ? (FOCUS_LABELS[plan.theme] ?? plan.theme) : null;
+  const theme = focus ? ` · ${$localize`:the session's focus:theme: ${focus}:theme:`}` : '';
   return {
     margin: [0, 0, 0, 6],
     columns: [
@@ -259,7 +274,12 @@ function timeline(plan: Plan, at: MinuteText, width: number): Content {
     fillColor: isBreak(phase) ? BREAK_TINT : TINT[Math.min(Math.max((phase.intensity ?? 2) - 1, 0), 4)],
     stack: [
       { text: `${at(phase.startMinute)}–${at(phase.endMinute)}`, bold: true },
-      { text: isBreak(phase) ? 'Drinks' : phase.name, style: 'small' },
+      {
+        text: isBreak(phase)
+          ? $localize`:a drinks break on the card's timeline, in one word:Drinks`
+          : phase.name,
+        style: 'small',
+      },
     ],
   }));
   const widths: number[] = plan.phases.map((phase) =>
@@ -273,7 +293,7 @@ function timeline(plan: Plan, at: MinuteText, width: number): Content {
       color: '#ffffff',
       stack: [
         { text: at(total), bold: true },
-        { text: 'Kick-off', style: 'small' },
+        { text: $localize`:the end of a match warm-up on the card's timeline:Kick-off`, style: 'small' },
       ],
     });
     fitted.push(endCell - 4);
@@ -297,7 +317,9 @@ export function legendKeys(plan: Plan): LegendKey[] {
   const marks = new Set<LegendKey>();
   for (const phase of plan.phases)
     for (const station of phase.stations) diagramMarks(station).forEach((m) => marks.add(m));
-  return LEGEND.map(([key]) => key).filter((key) => marks.has(key));
+  return legendEntries()
+    .map(([key]) => key)
+    .filter((key) => marks.has(key));
 }
 
 const LEGEND_FONT = 6.6;
@@ -305,7 +327,7 @@ const LEGEND_FONT = 6.6;
 function legend(plan: Plan): Content {
   const keys = legendKeys(plan);
   if (!keys.length) return { text: '' };
-  const words = new Map(LEGEND);
+  const words = new Map(legendEntries());
   // Fixed widths from the condensed face's character widths (about half the size, with room to
   // spare): auto-sized columns squeeze the last entries into two lines.
   const widthOf = (label: string) => Math.ceil(label.length * LEGEND_FONT * 0.5) + 2;
@@ -314,7 +336,7 @@ function legend(plan: Plan): Content {
     columnGap: 2,
     fontSize: LEGEND_FONT,
     columns: [
-      { width: 18, text: 'Key', style: 'label' },
+      { width: 18, text: $localize`:heading of the key to the card's diagrams:Key`, style: 'label' },
       ...keys.flatMap((key): Column[] => {
         const label = words.get(key) ?? key;
         return [
@@ -359,7 +381,7 @@ function phaseBlock(phase: Phase, allBefore: Phase[], ctx: CardContext): Content
   const heading = [phaseHeading(phase, previous, at)];
   const before = resumed(phase, allBefore);
   if (before) {
-    const same = `same groups, set-up and coaching as ${at(before.startMinute)}–${at(before.endMinute)}: play on`;
+    const same = $localize`:a phase that carries on after a drinks break:same groups, set-up and coaching as ${at(before.startMinute)}:start:–${at(before.endMinute)}:end:: play on`;
     return { margin: [0, 2, 0, density.gap], stack: [phaseHeading(phase, previous, at, same)] };
   }
   if (phase.stations.length === 1) {
@@ -441,7 +463,9 @@ function breakRow(phase: Phase, at: MinuteText, density: CardDensity): Content {
                 bold: true,
               },
               { text: phase.name || ACTIVITY_KIND_LABELS.break, bold: true },
-              { text: `  · ${minutes} min · water for everyone; set up the next part now if you can` },
+              {
+                text: `  · ${$localize`:a drinks break on the card:${minutes}:minutes: min · water for everyone; set up the next part now if you can`}`,
+              },
             ],
           },
         ],
@@ -462,7 +486,11 @@ function phaseHeading(phase: Phase, previous: Phase | undefined, at: MinuteText,
       `${at(phase.startMinute)}–${at(phase.endMinute)}  `,
       { text: phase.name },
       {
-        text: `${kindText}  · ${minutes} min${phase.intensity ? ` · intensity ${phase.intensity}/5` : ''}`,
+        text: `${kindText}  · ${minutesInWords(minutes)}${
+          phase.intensity
+            ? ` · ${$localize`:how hard a phase is, out of 5:intensity ${phase.intensity}:intensity:/5`}`
+            : ''
+        }`,
         bold: false,
       },
       note ? { text: ` · ${note}`, bold: false, fontSize: 7.5 } : '',
@@ -481,20 +509,25 @@ export function changeoverText(
   if (!changeover) return null;
   const { conesPlaced, conesLifted, goalsMoved, minutes } = changeover;
   const work = [
-    conesPlaced ? `${conesPlaced} ${conesPlaced === 1 ? 'cone' : 'cones'}` : null,
-    conesLifted ? `lift ${conesLifted}` : null,
-    goalsMoved ? `move ${goalsMoved} ${goalsMoved === 1 ? 'goal' : 'goals'}` : null,
+    conesPlaced ? kitCount('cones', conesPlaced) : null,
+    conesLifted ? $localize`:cones to pick up before a phase:lift ${conesLifted}:count:` : null,
+    goalsMoved
+      ? goalsMoved === 1
+        ? $localize`:small goals to carry to a new place before a phase:move 1 goal`
+        : $localize`:small goals to carry to a new place before a phase:move ${goalsMoved}:count: goals`
+      : null,
   ].filter(Boolean);
   if (!work.length) return null;
   const when =
     minutes > 0
-      ? ` — ${minutes} min`
+      ? minutesInWords(minutes)
       : !previous
-        ? ' — before the start'
+        ? $localize`:when the kit work before the first phase is done:before the start`
         : isBreak(previous)
-          ? ' — during the drinks break'
+          ? $localize`:when the kit work before a phase is done:during the drinks break`
           : '';
-  return `Set up: ${work.join(', ')}${when}`;
+  const setUp = $localize`:the kit work before a phase:Set up: ${work.join(', ')}:work:`;
+  return when ? `${setUp} — ${when}` : setUp;
 }
 
 /** A phase with one station: the diagram on the left, group and coaching beside it. */
@@ -518,7 +551,11 @@ function soloStation(phase: Phase, station: Station, ctx: CardContext): Content 
           { text: groupList(station, names).join(' · '), style: 'small' },
           notesLine(station),
           shownAt
-            ? { text: `Coaching as at ${shownAt}.`, style: 'small', italics: true }
+            ? {
+                text: $localize`:an activity explained earlier on the card, at these times:Coaching as at ${shownAt}:times:.`,
+                style: 'small',
+                italics: true,
+              }
             : coachingStack(station),
         ],
       },
@@ -543,6 +580,7 @@ export function groupList(station: Station, names: (id: string) => string): stri
   const roleOf = new Map(station.positions.map((p) => [p.id, p.role]));
   const keepers = new Set(station.roles.goalkeeper ?? []);
   const defenders = new Set(station.roles.defenders ?? []);
+  const allTags = roleTags();
   const entry = (id: string, tags: Partial<Record<PositionRole, string>>) => {
     const role =
       roleOf.get(id) ?? (keepers.has(id) ? 'goalkeeper' : defenders.has(id) ? 'defender' : undefined);
@@ -563,20 +601,30 @@ export function groupList(station: Station, names: (id: string) => string): stri
     group = [
       ...sides.map(
         (side, i) =>
-          `${POSITION_STYLE[i === 0 ? 'team-a' : 'team-b'].label}: ${side.map((id) => entry(id, { goalkeeper: 'goalkeeper' })).join(', ')}`,
+          `${POSITION_STYLE[i === 0 ? 'team-a' : 'team-b'].label}: ${side.map((id) => entry(id, { goalkeeper: allTags.goalkeeper })).join(', ')}`,
       ),
       ...[...others].map(([label, entries]) => `${label}: ${entries.join(', ')}`),
     ];
   } else {
-    group = station.playerIds.map((id) => entry(id, ROLE_TAGS));
+    group = station.playerIds.map((id) => entry(id, allTags));
   }
-  if (station.coachJoins) group.push('C: a coach joins');
+  if (station.coachJoins)
+    group.push(
+      $localize`:the last line of a group list, after the coach's letter on the diagram:${coachMark()}:coachLetter:: a coach joins`,
+    );
   return group;
 }
 
 function notesLine(station: Station): Content {
   return station.notes?.length
-    ? { text: [{ text: 'Note: ', style: 'label' }, station.notes.join(' ')], style: 'small', italics: true }
+    ? {
+        text: [
+          { text: `${$localize`:label before a station's notes on the card:Note`}: `, style: 'label' },
+          station.notes.join(' '),
+        ],
+        style: 'small',
+        italics: true,
+      }
     : '';
 }
 
@@ -637,25 +685,33 @@ function stationCell(
 function stationFacts(phase: Phase, station: Station): string {
   const kind =
     station.activityKind !== phase.activityKind ? ACTIVITY_KIND_LABELS[station.activityKind] : null;
-  const kit = KIT_KEYS.filter((k) => station.equipment[k] > 0).map(
-    (k) => `${station.equipment[k]} ${SHORT_KIT[k][station.equipment[k] === 1 ? 0 : 1]}`,
+  const kit = KIT_KEYS.filter((k) => station.equipment[k] > 0).map((k) =>
+    kitCount(k, station.equipment[k], true),
   );
-  return [kind, kit.join(', ') || 'no kit'].filter(Boolean).join(' · ');
+  return [kind, kit.join(', ') || $localize`:a station that needs no kit:no kit`].filter(Boolean).join(' · ');
 }
 
+/** The headings of an activity's coaching on the card. */
+const coachingWords = () => ({
+  points: $localize`:heading on the card, what the coach looks for and says:Coaching points`,
+  easier: $localize`:heading on the card, ways to make an activity easier:Easier`,
+  harder: $localize`:heading on the card, ways to make an activity harder:Harder`,
+});
+
 function coachingStack(station: Station): Content {
+  const words = coachingWords();
   return {
     margin: [0, 2, 0, 0],
     style: 'small',
     stack: [
       station.coachingPoints.length
-        ? { text: [{ text: 'Coaching points: ', style: 'label' }, station.coachingPoints.join('; ')] }
+        ? { text: [{ text: `${words.points}: `, style: 'label' }, station.coachingPoints.join('; ')] }
         : '',
       station.progressions.easier.length
-        ? { text: [{ text: 'Easier: ', style: 'label' }, station.progressions.easier.join('; ')] }
+        ? { text: [{ text: `${words.easier}: `, style: 'label' }, station.progressions.easier.join('; ')] }
         : '',
       station.progressions.harder.length
-        ? { text: [{ text: 'Harder: ', style: 'label' }, station.progressions.harder.join('; ')] }
+        ? { text: [{ text: `${words.harder}: `, style: 'label' }, station.progressions.harder.join('; ')] }
         : '',
     ],
   };
@@ -667,26 +723,28 @@ function coachingColumns(station: Station): Content {
     width: '*',
     stack: [{ text: title, style: 'label' }, items.length ? { ul: items, style: 'small' } : { text: '—' }],
   });
+  const words = coachingWords();
   return {
     margin: [0, 3, 0, 0],
     columnGap: 10,
     columns: [
-      list('Coaching points', station.coachingPoints),
-      list('Easier', station.progressions.easier),
-      list('Harder', station.progressions.harder),
+      list(words.points, station.coachingPoints),
+      list(words.easier, station.progressions.easier),
+      list(words.harder, station.progressions.harder),
     ],
   };
 }
 
 /** The same in one paragraph, for a card short of room. */
 function coachingRunOn(station: Station): Content {
+  const words = coachingWords();
   return {
     margin: [0, 2, 0, 0],
     style: 'small',
     text: [
-      ...coachingPart('Coaching points', station.coachingPoints),
-      ...coachingPart('Easier', station.progressions.easier),
-      ...coachingPart('Harder', station.progressions.harder),
+      ...coachingPart(words.points, station.coachingPoints),
+      ...coachingPart(words.easier, station.progressions.easier),
+      ...coachingPart(words.harder, station.progressions.harder),
     ],
   };
 }
@@ -701,6 +759,7 @@ function coachingPart(label: string, items: string[]): Content[] {
  */
 function coachingParagraphs(phase: Phase, activities: Station[], titled: boolean, ctx: CardContext): Content {
   const part = coachingPart;
+  const words = coachingWords();
   if (!titled && !shownBefore(activities[0], phase, ctx)) {
     const [station] = activities;
     const line = (label: string, items: string[]): Content =>
@@ -709,9 +768,9 @@ function coachingParagraphs(phase: Phase, activities: Station[], titled: boolean
       style: 'small',
       stack: [
         station.description ? { text: station.description, margin: [0, 0, 0, 2] } : '',
-        line('Coaching points', station.coachingPoints),
-        line('Easier', station.progressions.easier),
-        line('Harder', station.progressions.harder),
+        line(words.points, station.coachingPoints),
+        line(words.easier, station.progressions.easier),
+        line(words.harder, station.progressions.harder),
       ],
     };
   }
@@ -723,13 +782,16 @@ function coachingParagraphs(phase: Phase, activities: Station[], titled: boolean
         margin: [0, 0, 0, 2],
         style: 'small',
         text: shownAt
-          ? [{ text: `${station.title}: `, bold: true }, `coaching as at ${shownAt}.`]
+          ? [
+              { text: `${station.title}: `, bold: true },
+              $localize`:an activity explained earlier on the card, at these times:coaching as at ${shownAt}:times:.`,
+            ]
           : [
               { text: `${station.title}: `, bold: true },
               station.description ? `${station.description} ` : '',
-              ...part('Coaching points', station.coachingPoints),
-              ...part('Easier', station.progressions.easier),
-              ...part('Harder', station.progressions.harder),
+              ...part(words.points, station.coachingPoints),
+              ...part(words.easier, station.progressions.easier),
+              ...part(words.harder, station.progressions.harder),
             ],
       };
     }),
@@ -750,11 +812,15 @@ function kitChecklist(plan: Plan): Content {
     fontSize,
     columnGap: 2,
     columns: [
-      { width: 48, text: 'Kit checklist', style: 'label' },
+      {
+        width: 48,
+        text: $localize`:heading on the card, kit to pack with a box to tick:Kit checklist`,
+        style: 'label',
+      },
       ...(kinds.length
         ? kinds.flatMap((k): Column[] => {
             const need = kitCount(k, plan.equipmentNeeded[k]);
-            const has = ` (bag has ${plan.equipmentAvailable[k]})`;
+            const has = ` ${$localize`:how many of this kit the club's bag holds:(bag has ${plan.equipmentAvailable[k]}:count:)`}`;
             const short = plan.equipmentAvailable[k] < plan.equipmentNeeded[k];
             return [
               box,
@@ -764,7 +830,12 @@ function kitChecklist(plan: Plan): Content {
               },
             ];
           })
-        : [{ width: '*', text: 'No kit needed.' } as Column]),
+        : [
+            {
+              width: '*',
+              text: $localize`:the card's kit checklist when a plan needs none:No kit needed.`,
+            } as Column,
+          ]),
     ],
   };
 }
@@ -789,12 +860,15 @@ function closingBlock(plan: Plan): Content {
     unbreakable: true,
     margin: [0, 4, 0, 0],
     stack: [
-      { text: 'Safety', style: 'phase', margin: [0, 0, 0, 2] },
+      { text: $localize`:heading of the card's safety notes:Safety`, style: 'phase', margin: [0, 0, 0, 2] },
       ...(notices.length ? [list] : []),
       {
         text: [
-          plan.cautions.some((c) => /anchor|weight/i.test(c.message)) ? '' : GOAL_SAFETY_NOTE + ' ',
-          STANDING_SAFETY_NOTE,
+          // The club rules' caution says it already (by its code, whatever language it is in).
+          plan.cautions.some((c) => c.code === 'goals-anchored' || /anchor|weight/i.test(c.message))
+            ? ''
+            : goalSafetyNote() + ' ',
+          standingSafetyNote(),
         ],
         margin: [0, 2, 0, 0],
         italics: true,
@@ -852,5 +926,25 @@ function nameLookup(input: CardInput): (id: string) => string {
 }
 
 function kindLabel(plan: Plan): string {
-  return plan.request.kind === 'match-warm-up' ? 'Match warm-up' : 'Training session';
+  return plan.request.kind === 'match-warm-up'
+    ? $localize`:the kind of session on the card:Match warm-up`
+    : $localize`:the kind of session on the card:Training session`;
+}
+
+/** "kick-off 18:00" for a match warm-up, "start 10:00" for training. */
+function startInWords(plan: Plan, time: string): string {
+  return plan.request.kind === 'match-warm-up'
+    ? $localize`:when the match kicks off, on the card:kick-off ${time}:time:`
+    : $localize`:when training starts, on the card:start ${time}:time:`;
+}
+
+/** "12 min". */
+function minutesInWords(minutes: number): string {
+  return $localize`:a length of time in minutes:${minutes}:minutes: min`;
+}
+
+/** The language of the card's words (the reader's), as a BCP 47 tag: the PDF says it for screen readers. */
+function cardLanguage(): string {
+  const code = currentLanguage();
+  return LANGUAGES.find((language) => language.code === code)?.locale ?? code;
 }

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import { CARD_FACES, CARD_FONT, EMOJI_FONT, faceCovers } from './fonts';
 
 /**
@@ -9,13 +10,23 @@ import { CARD_FACES, CARD_FONT, EMOJI_FONT, faceCovers } from './fonts';
 /** Printed for a character no face has: an empty square from the emoji face, never "?". */
 export const MISSING_MARK = '◻';
 
-const REPLACEMENTS: Record<string, string> = {
-  '→': 'to',
-  '←': 'from',
-  '≤': '<=',
-  '≥': '>=',
-  '✓': 'OK',
-};
+/** Words or signs printed for a few signs no face has. */
+function replacement(grapheme: string): string | undefined {
+  switch (grapheme) {
+    case '→':
+      return $localize`:printed on the card for a right arrow, as in 14 m to 16 m:to`;
+    case '←':
+      return $localize`:printed on the card for a left arrow, as in 16 m from 14 m:from`;
+    case '≤':
+      return '<=';
+    case '≥':
+      return '>=';
+    case '✓':
+      return $localize`:printed on the card for a tick mark:OK`;
+    default:
+      return undefined;
+  }
+}
 
 /** Letters with no accent to drop, for the one-font SVG labels. */
 const LOOKALIKES: Record<string, string> = { ł: 'l', Ł: 'L', đ: 'd', Đ: 'D' };
@@ -43,7 +54,8 @@ function runFor(grapheme: string): TextRun {
   // An emoji sequence or a letter with a mark no single face has: its first character alone.
   const first = faceFor(codePoints.slice(0, 1));
   if (first && first !== CARD_FONT) return { text: String.fromCodePoint(codePoints[0]!), font: first };
-  if (REPLACEMENTS[grapheme]) return { text: REPLACEMENTS[grapheme], font: CARD_FONT };
+  const replaced = replacement(grapheme);
+  if (replaced) return { text: replaced, font: CARD_FONT };
   const base = [...grapheme.normalize('NFKD')].filter((c) => faceCovers(latin!, c.codePointAt(0)!)).join('');
   if (base) return { text: base, font: CARD_FONT };
   return { text: MISSING_MARK, font: EMOJI_FONT };

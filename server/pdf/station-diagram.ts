@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type {
   GoalPlacement,
   MarkedLine,
@@ -22,9 +23,14 @@ const INK = {
 /** What a card's legend can list: the start-position roles and the kit markers. */
 export type LegendKey = PositionRole | 'cone' | 'goal' | 'gate';
 
+/** The letter in a coach's circle ("C"); the group list's line for a coach who joins says it too. */
+export function coachMark(): string {
+  return $localize`:the letter in a coach's circle on the card's diagrams, short for coach:C`;
+}
+
 /** The text in a start position's circle: the player's number in the group list, "C" for a coach. */
 export function positionLabel(station: Station, position: StartPosition): string {
-  if (position.role === 'coach') return 'C';
+  if (position.role === 'coach') return coachMark();
   const index = station.playerIds.indexOf(position.id);
   return index >= 0 ? String(index + 1) : '';
 }

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { AppConfig } from '../config';
 import { EmailVerification } from '../entities/email-verification';
@@ -14,15 +15,16 @@ export const VERIFICATIONS_PER_HOUR = 3;
 /** The confirmation e-mail. The token is in the link's fragment (after #), never sent to servers. */
 export function verificationMail(config: AppConfig, name: string, clubName: string, token: string) {
   const link = `${config.publicUrl.replace(/\/$/, '')}/confirm-email#${token}`;
+  const hours = VERIFICATION_TTL_HOURS;
   return {
-    subject: 'Confirm your e-mail address for Conewise',
+    subject: $localize`:subject of the e-mail that confirms a new account's address:Confirm your e-mail address for Conewise`,
     text: [
-      `Hello ${name},`,
+      $localize`:greeting at the top of an e-mail:Hello ${name}:name:,`,
       '',
-      `You made ${clubName} on Conewise with this address. Open this link to confirm it is yours: ${link}`,
+      $localize`:e-mail that confirms a new account's address:You made ${clubName}:clubName: on Conewise with this address. Open this link to confirm it is yours: ${link}:link:`,
       '',
-      `The link works once and for ${VERIFICATION_TTL_HOURS} hours. Until then you can plan, but not invite`,
-      'people or e-mail plans. If you did not make this account, ignore this e-mail.',
+      // One paragraph, its line broken where the English breaks it.
+      $localize`:e-mail that confirms a new account's address, one paragraph with a line break:The link works once and for ${hours}:hours: hours. Until then you can plan, but not invite\npeople or e-mail plans. If you did not make this account, ignore this e-mail.`,
     ].join('\n'),
     link,
   };
@@ -32,8 +34,8 @@ export function verificationMail(config: AppConfig, name: string, clubName: stri
 export function emailNotConfirmed(email: string): HttpError {
   return new HttpError(
     403,
-    'E-mail address not confirmed',
-    `Confirm your e-mail address first: open the link we sent to ${email}. Your account page can send it again.`,
+    $localize`:title of an error answer:E-mail address not confirmed`,
+    $localize`Confirm your e-mail address first: open the link we sent to ${email}:email:. Your account page can send it again.`,
     undefined,
     '/problems/email-not-confirmed',
   );
@@ -41,10 +43,10 @@ export function emailNotConfirmed(email: string): HttpError {
 
 /** What the person is told after asking for another link. */
 export function resendWords(outcome: 'sent' | 'confirmed' | 'wait', email: string): string {
-  if (outcome === 'confirmed') return `${email} is confirmed already.`;
+  if (outcome === 'confirmed') return $localize`${email}:email: is confirmed already.`;
   if (outcome === 'wait')
-    return `We sent ${VERIFICATIONS_PER_HOUR} links to ${email} in the last hour: open the newest, or ask again later.`;
-  return `A new link is on its way to ${email}. It works for ${VERIFICATION_TTL_HOURS} hours.`;
+    return $localize`We sent ${VERIFICATIONS_PER_HOUR}:count: links to ${email}:email: in the last hour: open the newest, or ask again later.`;
+  return $localize`A new link is on its way to ${email}:email:. It works for ${VERIFICATION_TTL_HOURS}:hours: hours.`;
 }
 
 /**

@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { DataSource, EntityManager } from 'typeorm';
 import { IsNull } from 'typeorm';
 import type { Phase, Station, StationRoles } from '../../shared/types/plan';
@@ -28,14 +29,20 @@ export function helperLinkUrl(config: AppConfig, token: string): string {
 const linkNotKnown = () =>
   new HttpError(
     404,
-    'Helper link not known',
-    'This link is not known. Check that the whole link was copied, or ask the coach for a new one.',
+    $localize`:title of an error answer:Helper link not known`,
+    $localize`This link is not known. Check that the whole link was copied, or ask the coach for a new one.`,
     undefined,
     '/problems/helper-link-unknown',
   );
 
 const linkEnded = (detail: string) =>
-  new HttpError(410, 'Helper link ended', detail, undefined, '/problems/helper-link-ended');
+  new HttpError(
+    410,
+    $localize`:title of an error answer:Helper link ended`,
+    detail,
+    undefined,
+    '/problems/helper-link-ended',
+  );
 
 /**
  * Helper links: the team's staff (its coaches and assistants) or the lead make one for a plan,
@@ -53,7 +60,7 @@ export class HelperLinkService {
     const plan = await scope.plan(planId);
     if (auth.role !== 'lead' && !(await scope.isAttached(plan.teamId))) {
       throw forbidden(
-        'Only the team’s coaches and assistants and the head of coaching can share helper links.',
+        $localize`Only the team’s coaches and assistants and the head of coaching can share helper links.`,
       );
     }
     return plan;
@@ -90,7 +97,7 @@ export class HelperLinkService {
     const expiresAt = await this.expiryFor(plan);
     if (!expiresAt) {
       throw conflict(
-        'This session is more than a day ago, and a helper link only works until the end of the day after the session.',
+        $localize`This session is more than a day ago, and a helper link only works until the end of the day after the session.`,
       );
     }
     const token = newLinkToken();
@@ -147,11 +154,15 @@ export class HelperLinkService {
       .findOne({ where: { tokenHash: hashLinkToken(token) } });
     if (!link) throw linkNotKnown();
     if (link.revokedAt) {
-      throw linkEnded('The coach has stopped this link. Ask them for a new one if you are still helping.');
+      throw linkEnded(
+        $localize`The coach has stopped this link. Ask them for a new one if you are still helping.`,
+      );
     }
     if (link.expiresAt <= new Date()) {
       const when = await this.expiryWords(link.expiresAt, link.clubId);
-      throw linkEnded(`This link stopped working at ${when}. Ask the coach for a new one if you need it.`);
+      throw linkEnded(
+        $localize`This link stopped working at ${when}:when:. Ask the coach for a new one if you need it.`,
+      );
     }
     const plan = await this.dataSource
       .getRepository(SessionPlan)
@@ -222,7 +233,8 @@ export function helperView(row: SessionPlan, teamName: string, expiresAt: Date, 
     if (!known) {
       known = `h${aliases.size + 1}`;
       aliases.set(id, known);
-      names[known] = `Player ${aliases.size}`;
+      names[known] =
+        $localize`:a player in a helper's view of a plan, who is not named:Player ${aliases.size}:number:`;
     }
     return known;
   };

@@ -51,16 +51,19 @@ export function invitationMail(
   teamName: string | null = null,
 ) {
   const link = `${config.publicUrl.replace(/\/$/, '')}/join#${token}`;
+  const as = ROLE_IN_A_SENTENCE[role];
+  const hours = config.invitationTtlHours;
   return {
-    subject: `${inviter} invited you to ${clubName} on Conewise`,
+    subject: $localize`:subject of the invitation e-mail:${inviter}:inviter: invited you to ${clubName}:clubName: on Conewise`,
     text: [
-      `${inviter} invited you to join ${clubName} on Conewise as ${ROLE_IN_A_SENTENCE[role]}` +
-        (teamName ? ` with ${teamName}.` : '.'),
+      teamName
+        ? $localize`:invitation e-mail, the role reads e.g. a coach:${inviter}:inviter: invited you to join ${clubName}:clubName: on Conewise as ${as}:role: with ${teamName}:teamName:.`
+        : $localize`:invitation e-mail, the role reads e.g. a coach:${inviter}:inviter: invited you to join ${clubName}:clubName: on Conewise as ${as}:role:.`,
       '',
-      `Choose your name and password here: ${link}`,
+      $localize`:invitation e-mail:Choose your name and password here: ${link}:link:`,
       '',
-      `The link works once and expires in ${config.invitationTtlHours} hours.`,
-      'If you were not expecting this, you can ignore this e-mail.',
+      $localize`:invitation e-mail:The link works once and expires in ${hours}:hours: hours.`,
+      $localize`:invitation e-mail:If you were not expecting this, you can ignore this e-mail.`,
     ].join('\n'),
     link,
   };

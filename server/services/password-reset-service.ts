@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { DataSource } from 'typeorm';
 import type { AppConfig } from '../config';
 import { Membership } from '../entities/membership';
@@ -14,23 +15,28 @@ export const RESET_TTL_MINUTES = 30;
 /** Reset e-mails one address can be sent in an hour; asking more often sends nothing more. */
 export const RESETS_PER_HOUR = 3;
 
-/** The same answer whether or not an account uses the address, so it tells no one who has one. */
+/**
+ * The same answer whether or not an account uses the address, so it tells no one who has one.
+ * A getter, so each request reads it in its own language (and JSON still writes `message`).
+ */
 export const RESET_REQUESTED = {
-  message: `If an account uses this address, an e-mail with a link to choose a new password is on its way. The link works once, for ${RESET_TTL_MINUTES} minutes.`,
-} as const;
+  get message(): string {
+    return $localize`If an account uses this address, an e-mail with a link to choose a new password is on its way. The link works once, for ${RESET_TTL_MINUTES}:minutes: minutes.`;
+  },
+};
 
 /** The reset e-mail. The token is in the link's fragment (after #), which browsers never send. */
 export function passwordResetMail(config: AppConfig, name: string, token: string) {
   const link = `${config.publicUrl.replace(/\/$/, '')}/reset-password#${token}`;
   return {
-    subject: 'Choose a new Conewise password',
+    subject: $localize`:subject of the password reset e-mail:Choose a new Conewise password`,
     text: [
-      `Hello ${name},`,
+      $localize`:greeting at the top of an e-mail:Hello ${name}:name:,`,
       '',
-      `Someone (we hope you) asked to choose a new password for this address on Conewise: ${link}`,
+      $localize`:password reset e-mail:Someone (we hope you) asked to choose a new password for this address on Conewise: ${link}:link:`,
       '',
-      `The link works once and for ${RESET_TTL_MINUTES} minutes. Using it signs you out everywhere.`,
-      'If you did not ask, ignore this e-mail: your password stays as it is.',
+      $localize`:password reset e-mail:The link works once and for ${RESET_TTL_MINUTES}:minutes: minutes. Using it signs you out everywhere.`,
+      $localize`:password reset e-mail:If you did not ask, ignore this e-mail: your password stays as it is.`,
     ].join('\n'),
     link,
   };

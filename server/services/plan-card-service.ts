@@ -1,3 +1,4 @@
+import '../../shared/i18n/localize';
 import type { DataSource } from 'typeorm';
 import type { ShareResultDto } from '../../shared/types/plan-api';
 import type { AppConfig } from '../config';
@@ -61,7 +62,7 @@ export class PlanCardService {
     const rules = await this.rulesWords(auth, row, locale);
     const pdf = await render(row, team, input.paper ?? 'a4', locale, auth.units, rules);
     const when = sessionInWords(row.date, row.kickOff, locale);
-    const subject = `${team.name}: ${kindLabel(row)}${when ? ` on ${when}` : ''}`;
+    const subject = shareSubject(row, team, when);
     const attachment = {
       filename: cardFilename(row, team),
       contentType: 'application/pdf',
@@ -125,8 +126,28 @@ async function render(
   );
 }
 
-function kindLabel(row: SessionPlan): string {
-  return row.kind === 'match-warm-up' ? 'match warm-up' : 'training session';
+/** "U12 Larks: training session on Saturday 5 December at 10:00". */
+function shareSubject(row: SessionPlan, team: Team, when: string | null): string {
+  const teamName = team.name;
+  if (row.kind === 'match-warm-up')
+    return when
+      ? $localize`:subject of the e-mail that shares a plan:${teamName}:teamName:: match warm-up on ${when}:when:`
+      : $localize`:subject of the e-mail that shares a plan:${teamName}:teamName:: match warm-up`;
+  return when
+    ? $localize`:subject of the e-mail that shares a plan:${teamName}:teamName:: training session on ${when}:when:`
+    : $localize`:subject of the e-mail that shares a plan:${teamName}:teamName:: training session`;
+}
+
+/** "Sam Reed shared the training session for U12 Larks on Saturday 5 December at 10:00 with you." */
+function sharedLine(row: SessionPlan, team: Team, sender: string, when: string | null): string {
+  const teamName = team.name;
+  if (row.kind === 'match-warm-up')
+    return when
+      ? $localize`:first line of the e-mail that shares a plan:${sender}:sender: shared the match warm-up for ${teamName}:teamName: on ${when}:when: with you.`
+      : $localize`:first line of the e-mail that shares a plan:${sender}:sender: shared the match warm-up for ${teamName}:teamName: with you.`;
+  return when
+    ? $localize`:first line of the e-mail that shares a plan:${sender}:sender: shared the training session for ${teamName}:teamName: on ${when}:when: with you.`
+    : $localize`:first line of the e-mail that shares a plan:${sender}:sender: shared the training session for ${teamName}:teamName: with you.`;
 }
 
 function cardFilename(row: SessionPlan, team: Team): string {
@@ -150,23 +171,25 @@ function shareText(
   const clock = sessionClock(row.plan.request.kind, row.kickOff, planLength(row.plan.phases));
   const at = (minute: number) => minuteInWords(clock, minute, locale);
   const lines = row.plan.phases.map((p) => `${at(p.startMinute)}–${at(p.endMinute)}  ${p.name}`);
+  const minutes = planLength(row.plan.phases);
+  const players = row.playerCount;
   return [
-    `${sender} shared the ${kindLabel(row)} for ${team.name}${when ? ` on ${when}` : ''} with you.`,
+    sharedLine(row, team, sender, when),
     message ? `\n${message}\n` : '',
     ...(helper
       ? [
-          'See the plan on your phone, no account needed:',
+          $localize`:e-mail that shares a plan, before the helper link:See the plan on your phone, no account needed:`,
           helper.url,
-          `The link shows the stations, the groups (first names only), the areas, diagrams, coaching points and timings. It stops working at ${helper.until}, or sooner if the coach stops it. Please keep it to yourself.`,
+          $localize`:e-mail that shares a plan, after the helper link:The link shows the stations, the groups (first names only), the areas, diagrams, coaching points and timings. It stops working at ${helper.until}:until:, or sooner if the coach stops it. Please keep it to yourself.`,
           '',
         ]
       : []),
-    `${planLength(row.plan.phases)} minutes, ${row.playerCount} players:`,
+    $localize`:e-mail that shares a plan, before its list of phases:${minutes}:minutes: minutes, ${players}:players: players:`,
     ...lines,
     '',
-    'The printable card is attached (PDF).',
-    `To answer ${sender}, reply to this e-mail.`,
-    'Anchor or weight movable goals and never let anyone climb them; follow your local rules and the club safeguarding policy.',
+    $localize`:e-mail that shares a plan:The printable card is attached (PDF).`,
+    $localize`:e-mail that shares a plan:To answer ${sender}:sender:, reply to this e-mail.`,
+    $localize`:safety note at the end of the e-mail that shares a plan:Anchor or weight movable goals and never let anyone climb them; follow your local rules and the club safeguarding policy.`,
   ]
     .filter((l, i, all) => l !== '' || (i > 0 && all[i - 1] !== ''))
     .join('\n');
