@@ -1,4 +1,5 @@
 /** Runs the club's json-rules-engine rules on the facts and turns fired events into effects. */
+import '../../shared/i18n/localize';
 import type {
   ActivityKind,
   StationKind,
@@ -92,16 +93,16 @@ function applyEvent(
       return event.params.effect;
     case 'forbid-activity':
       outcome.forbidden.push({ ...event.params });
-      return `Leaves out ${leftOut(event.params, parameters)}: ${event.params.reason}`;
+      return $localize`:what a club rule did, an activity it left out of the plan and the rule's reason:Leaves out ${leftOut(event.params, parameters)}:activity:: ${event.params.reason}:reason:`;
     case 'require-activity':
       outcome.required.push({ kind: event.params.kind, reason: event.params.reason });
-      return `Adds ${ACTIVITY_KIND_LABELS[event.params.kind] ?? 'an activity'}: ${event.params.reason}`;
+      return $localize`:what a club rule did, a kind of activity it added to the plan and the rule's reason:Adds ${ACTIVITY_KIND_LABELS[event.params.kind] ?? anActivity()}:activity:: ${event.params.reason}:reason:`;
     case 'warning':
       outcome.warnings.push({ code: event.params.code, message: event.params.message });
-      return `Adds a note for the coach: ${event.params.message}`;
+      return $localize`:what a club rule did, a note it added for the coach:Adds a note for the coach: ${event.params.message}:note:`;
     case 'caution':
       outcome.cautions.push({ ...event.params });
-      return `Adds a safety note: ${event.params.message}`;
+      return $localize`:what a club rule did, a safety note it added to the plan:Adds a safety note: ${event.params.message}:note:`;
     case 'progression-step':
       outcome.steps[event.params.kind] = {
         direction: event.params.direction,
@@ -116,9 +117,16 @@ function applyEvent(
 function leftOut(params: { kind?: ActivityKind; activityId?: string }, parameters: RuleParameters): string {
   if (params.activityId) {
     const title = parameters.activities.find((a) => a.id === params.activityId)?.title;
-    return title ? `“${title}”` : 'one activity';
+    return title
+      ? $localize`:an activity's title in quotation marks, left out of a plan by a club rule:“${title}:activity:”`
+      : $localize`:an activity left out of a plan by a club rule, not named:one activity`;
   }
-  return params.kind ? ACTIVITY_KIND_LABELS[params.kind] : 'an activity';
+  return params.kind ? ACTIVITY_KIND_LABELS[params.kind] : anActivity();
+}
+
+/** Any one activity, when a rule names neither a kind nor an activity. */
+function anActivity(): string {
+  return $localize`:an activity a club rule adds or leaves out, not named:an activity`;
 }
 
 /** Copies only the branches an override touches; the cached document stays untouched. */

@@ -1,4 +1,5 @@
 /** A coach's edit to a plan: the edited plan with kit, totals, notices and trace recomputed. */
+import '../../shared/i18n/localize';
 import type { Plan, PlanEdit, RuleSetDocument, Station } from '../../shared/types';
 import { checkPlan } from '../check-plan';
 import { compileRuleSet } from '../club-rules/compile-rule-set';
@@ -46,7 +47,7 @@ export async function tryEdit(
       const verdict = (edit.step === 'smaller') === smallerIsHarder ? 'too-easy' : 'too-hard';
       const out = progressionOutcome(plan, edit.phaseIndex, edit.stationId, verdict, ruleSet);
       return {
-        plan: relabel(out.plan, plan, 'edit.resize-area', `${station.title}: area ${edit.step}`),
+        plan: relabel(out.plan, plan, 'edit.resize-area', resizedWords(station.title, edit.step)),
         refused: out.refused,
       };
     }
@@ -61,6 +62,13 @@ function stationAt(plan: Plan, phaseIndex: number, stationId: string): Station {
   const station = plan.phases[phaseIndex]?.stations.find((s) => s.id === stationId);
   if (!station) throw new RangeError(`No station ${stationId} in phase ${phaseIndex}`);
   return station;
+}
+
+/** The trace line of a coach's resize: "Rondo square: area larger". */
+function resizedWords(title: string, step: 'larger' | 'smaller'): string {
+  return step === 'larger'
+    ? $localize`:a coach made an activity's area larger, the activity's title first:${title}:activity:: area larger`
+    : $localize`:a coach made an activity's area smaller, the activity's title first:${title}:activity:: area smaller`;
 }
 
 function relabel(out: Plan, before: Plan, ruleId: string, effect: string): Plan {
@@ -106,7 +114,7 @@ function movePlayer(
         {
           ruleId: 'edit.move-player',
           fired: true,
-          effect: `${who}: ${from.title} → ${target.title} in ${phase.name}`,
+          effect: $localize`:a coach moved a player from one activity to another in a part of the session:${who}:player:: ${from.title}:fromActivity: → ${target.title}:toActivity: in ${phase.name}:part:`,
         },
       ],
     },
@@ -172,7 +180,11 @@ async function swapActivity(
         warnings: [...plan.warnings, { code: 'swap-refused', message }],
         trace: [
           ...plan.trace,
-          { ruleId: 'edit.swap-activity', fired: false, effect: `${activity.title} refused: ${reason}` },
+          {
+            ruleId: 'edit.swap-activity',
+            fired: false,
+            effect: $localize`:an activity a coach asked for was not used, and why, the reason starts in lower case:${activity.title}:activity: refused: ${reason}:reason:`,
+          },
         ],
       },
       refused: message,
@@ -201,7 +213,7 @@ async function swapActivity(
         {
           ruleId: 'edit.swap-activity',
           fired: true,
-          effect: `${phase.name}: now ${activity.title}`,
+          effect: $localize`:a part of the session now plays the activity a coach chose:${phase.name}:part:: now ${activity.title}:activity:`,
         },
       ],
     },

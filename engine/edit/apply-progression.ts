@@ -2,6 +2,7 @@
  * Pitch-side feedback on a station: too easy steps the area one step harder, too hard one step
  * easier (the direction per activity comes from the rule set), within the rule's bounds.
  */
+import '../../shared/i18n/localize';
 import type { Plan, RuleSetDocument, StationVerdict } from '../../shared/types';
 import { checkPlan } from '../check-plan';
 import { compileRuleSet } from '../club-rules/compile-rule-set';
@@ -39,11 +40,20 @@ export function progressionOutcome(
     refused,
   });
   if (verdict === 'right')
-    return unchanged(`${station.title}: about right, area stays ${describeArea(station.area)}`, null);
+    return unchanged(
+      $localize`:pitch-side feedback, an activity was about right so its area stays, e.g. 20 × 30 m:${station.title}:activity:: about right, area stays ${describeArea(station.area)}:area:`,
+      null,
+    );
   const smallerIsHarder = params.kinds[station.activityKind].harderWhenArea === 'smaller';
   const size = (verdict === 'too-easy') === smallerIsHarder ? 'smaller' : 'larger';
   const step = stepArea(plan, phaseIndex, stationId, size, ruleSet);
-  if (!step.ok) return unchanged(`${station.title}: ${words(verdict)}. ${step.reason}`, step.reason);
+  if (!step.ok)
+    return unchanged(
+      verdict === 'too-easy'
+        ? $localize`:pitch-side feedback, an activity was too easy but its area cannot change, and why:${station.title}:activity:: too easy. ${step.reason}:reason:`
+        : $localize`:pitch-side feedback, an activity was too hard but its area cannot change, and why:${station.title}:activity:: too hard. ${step.reason}:reason:`,
+      step.reason,
+    );
   const phases = plan.phases.map((p, i) => (i === phaseIndex ? { ...p, stations: step.stations } : p));
   const refreshed = refreshPlan(plan, phases, params);
   const result = {
@@ -53,7 +63,7 @@ export function progressionOutcome(
       {
         ruleId,
         fired: true,
-        effect: `${station.title} ${words(verdict)}: area ${describeArea(step.from)} → ${describeArea(step.to)}`,
+        effect: steppedWords(station.title, verdict, describeArea(step.from), describeArea(step.to)),
       },
     ],
   };
@@ -69,6 +79,9 @@ export function progressionOutcome(
   };
 }
 
-function words(verdict: StationVerdict): string {
-  return verdict === 'too-easy' ? 'too easy' : verdict === 'too-hard' ? 'too hard' : 'about right';
+/** The trace line of a stepped area: "Rondo square too easy: area 12 × 12 m → 10 × 10 m". */
+function steppedWords(title: string, verdict: 'too-easy' | 'too-hard', from: string, to: string): string {
+  return verdict === 'too-easy'
+    ? $localize`:pitch-side feedback, an activity was too easy so its area changed, e.g. 12 × 12 m → 10 × 10 m:${title}:activity: too easy: area ${from}:areaBefore: → ${to}:areaAfter:`
+    : $localize`:pitch-side feedback, an activity was too hard so its area changed, e.g. 10 × 10 m → 12 × 12 m:${title}:activity: too hard: area ${from}:areaBefore: → ${to}:areaAfter:`;
 }

@@ -4,6 +4,7 @@
  * with the leaver out or the arrival in where there is room, or the phase rebuilt for the new
  * squad with its stations matched to the old ones.
  */
+import '../../shared/i18n/localize';
 import type {
   ActivityDefinition,
   AgeBand,
@@ -141,7 +142,7 @@ export async function replan(
       {
         ruleId: 'engine.replan',
         fired: true,
-        effect: `from minute ${change.fromMinute}: ${arrivals.length} arrive, ${changed.rosterChanges!.at(-1)!.removed.length} leave; ${moved} player(s) change group`,
+        effect: $localize`:pitch-side re-plan after players arrive late or leave early, from a minute of the session:from minute ${change.fromMinute}:minute:: ${arrivals.length}:arrivals: arrive, ${changed.rosterChanges!.at(-1)!.removed.length}:leavers: leave; ${moved}:moved: player(s) change group`,
       },
     ],
   };

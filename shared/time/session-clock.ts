@@ -47,10 +47,14 @@ export function startOffset(kind: PlanKind, length: number): number {
   return endsAtGivenTime(kind) ? -length : 0;
 }
 
-/** The name of the time a plan is given, as a field label: "Kick-off" or "Start time". */
+/** The name of the time a plan is given, as a field label: "Kick-off" or "Start time" (getters, made on each read). */
 export const GIVEN_TIME_LABELS: Record<PlanKind, string> = {
-  'match-warm-up': $localize`Kick-off`,
-  training: $localize`Start time`,
+  get 'match-warm-up'() {
+    return $localize`Kick-off`;
+  },
+  get training() {
+    return $localize`Start time`;
+  },
 };
 
 /** The same in a sentence before the time: "kick-off 10:30", "start 18:00". */

@@ -10,5 +10,13 @@ import '../i18n/localize';
 /** The fewest characters of a new password: OWASP ASVS 4.0 2.1.1 (at least 12 characters). */
 export const MIN_PASSWORD_LENGTH = 12;
 
-/** The hint under a new-password field. */
-export const PASSWORD_HINT = $localize`At least ${MIN_PASSWORD_LENGTH}:count: characters, and not one of the most common passwords.`;
+/** The hint under a new-password field, in the reader's language (made on each call). */
+export function passwordHint(): string {
+  return $localize`At least ${MIN_PASSWORD_LENGTH}:count: characters, and not one of the most common passwords.`;
+}
+
+/**
+ * The same hint made once, when the module loads: for the app, whose build for each language
+ * already holds its words. Code on the server calls `passwordHint()`, which follows the request.
+ */
+export const PASSWORD_HINT: string = passwordHint();

@@ -14,9 +14,14 @@ import { LEVEL_LABELS } from './squad-words';
 /** A level in the rules: the same words as a squad's level. */
 export const LEVEL_WORDS: Record<Level, string> = LEVEL_LABELS;
 
+/** A kind of plan in the rules; a getter per kind, so each read is in the reader's language. */
 export const PLAN_KIND_WORDS: Record<PlanKind, string> = {
-  'match-warm-up': $localize`Match warm-up`,
-  training: $localize`Training session`,
+  get 'match-warm-up'() {
+    return $localize`Match warm-up`;
+  },
+  get training() {
+    return $localize`Training session`;
+  },
 };
 
 /** "U10" → "Under 10"; "adult" → "Adults". */
@@ -60,7 +65,8 @@ function humanise(key: string): string {
 
 /** One step of a path: fixed words, or words made from the key and the value found there. */
 interface PathStep {
-  words: string | ((key: string, value: unknown) => string);
+  /** Called on each use (never a string made at load), so the words are in the reader's language. */
+  words: (key: string, value: unknown) => string;
   /** Named keys below this step. */
   fields?: Record<string, PathStep>;
   /** Any key (a kind, a level, a row) below this step. */
@@ -73,7 +79,11 @@ const step = (words: PathStep['words'], fields?: PathStep['fields'], each?: Path
   ...(each ? { each } : {}),
 });
 const byCode = (fields?: PathStep['fields'], each?: PathStep) => step(codeWords, fields, each);
-const leaf = (words: string) => step(words);
+/**
+ * A step with fixed words. Words are functions throughout the tables (never strings made when the
+ * module loads), so the server says them in the language of the request that reads them.
+ */
+const leaf = (words: () => string) => step(words);
 /** Words for the n-th entry of a list, counted from 1: "Row 3". */
 type Numbered = (n: number) => string;
 /** A row of a list: its own name when it has one, else its number ("Row 3"). */
@@ -90,75 +100,81 @@ const row = (
 const numbered = (numberedWords: Numbered, each?: PathStep) =>
   step((key) => (/^\d+$/.test(key) ? numberedWords(Number(key) + 1) : humanise(key)), undefined, each);
 /** The rule set's own name, as a place in it. */
-const RULE_SET_NAME = $localize`:club rules|the rule set's own name, as a place in the club rules:Name`;
+const ruleSetName = () => $localize`:club rules|the rule set's own name, as a place in the club rules:Name`;
 
 const GROUP_SIZE = {
-  min: leaf($localize`:club rules|group size of an activity, the fewest players in a group:Fewest`),
+  min: leaf(() => $localize`:club rules|group size of an activity, the fewest players in a group:Fewest`),
   preferred: leaf(
-    $localize`:club rules|group size of an activity, the best number of players in a group:Best`,
+    () => $localize`:club rules|group size of an activity, the best number of players in a group:Best`,
   ),
-  max: leaf($localize`:club rules|group size of an activity, the most players in a group:Most`),
+  max: leaf(() => $localize`:club rules|group size of an activity, the most players in a group:Most`),
 };
 const AREA = {
-  width: leaf($localize`:club rules|area of an activity, its width:Width`),
-  length: leaf($localize`:club rules|area of an activity, its length:Length`),
+  width: leaf(() => $localize`:club rules|area of an activity, its width:Width`),
+  length: leaf(() => $localize`:club rules|area of an activity, its length:Length`),
   forPlayers: leaf(
-    $localize`:club rules|area of an activity, the number of players its width and length are for:For players`,
+    () =>
+      $localize`:club rules|area of an activity, the number of players its width and length are for:For players`,
   ),
-  minWidth: leaf($localize`:club rules|area of an activity, the narrowest it may be:Narrowest`),
-  maxWidth: leaf($localize`:club rules|area of an activity, the widest it may be:Widest`),
-  step: leaf($localize`:club rules|area of an activity, the step its size changes by:Step`),
+  minWidth: leaf(() => $localize`:club rules|area of an activity, the narrowest it may be:Narrowest`),
+  maxWidth: leaf(() => $localize`:club rules|area of an activity, the widest it may be:Widest`),
+  step: leaf(() => $localize`:club rules|area of an activity, the step its size changes by:Step`),
 };
 
 /** The one label table: every parameter of a rule set, in the words of the rule tables. */
 const PARAMETERS: Record<string, PathStep> = {
   ageGroups: step(
-    $localize`:heading in the club rules, the activities each age group may do:Activities by age`,
+    () => $localize`:heading in the club rules, the activities each age group may do:Activities by age`,
     undefined,
     byCode({
-      allowedKinds: leaf($localize`:club rules, the activities an age group may do:Activities allowed`),
-      band: leaf($localize`:club rules, the band of ages an age group belongs to:Age band`),
-      index: leaf($localize`:club rules|the place of an age group from youngest to oldest:Order`),
+      allowedKinds: leaf(() => $localize`:club rules, the activities an age group may do:Activities allowed`),
+      band: leaf(() => $localize`:club rules, the band of ages an age group belongs to:Age band`),
+      index: leaf(() => $localize`:club rules|the place of an age group from youngest to oldest:Order`),
     }),
   ),
   groupSizes: step(
-    $localize`:heading in the club rules, players in a group for each activity:Group sizes`,
+    () => $localize`:heading in the club rules, players in a group for each activity:Group sizes`,
     undefined,
     byCode(undefined, byCode(GROUP_SIZE)),
   ),
   keepBall: step(
-    $localize`:heading in the club rules, attackers against defenders in keep-ball:Keep-ball ratios`,
+    () => $localize`:heading in the club rules, attackers against defenders in keep-ball:Keep-ball ratios`,
     undefined,
     byCode({
       formats: step(
-        $localize`:club rules|the keep-ball formats such as 4v1:Formats`,
+        () => $localize`:club rules|the keep-ball formats such as 4v1:Formats`,
         undefined,
         numbered(
           (n) => $localize`:club rules, a keep-ball format by its number, e.g. Format 2:Format ${n}:number:`,
         ),
       ),
-      maxAttackersPerDefender: leaf($localize`:club rules, keep-ball:Most attackers per defender`),
+      maxAttackersPerDefender: leaf(() => $localize`:club rules, keep-ball:Most attackers per defender`),
     }),
   ),
-  keepBallLimits: step($localize`:heading in the club rules, the space keep-ball needs:Keep-ball room`, {
-    minM2PerPlayer: leaf($localize`:club rules, keep-ball, the area each player needs:Room a player`),
-    minSideM: leaf($localize`:club rules, keep-ball, the shortest side of its area:Shortest side`),
-    twoDefendersFromAge: leaf(
-      $localize`:club rules, keep-ball, the age from which it has two defenders:Two defenders from age`,
-    ),
-  }),
+  keepBallLimits: step(
+    () => $localize`:heading in the club rules, the space keep-ball needs:Keep-ball room`,
+    {
+      minM2PerPlayer: leaf(() => $localize`:club rules, keep-ball, the area each player needs:Room a player`),
+      minSideM: leaf(() => $localize`:club rules, keep-ball, the shortest side of its area:Shortest side`),
+      twoDefendersFromAge: leaf(
+        () =>
+          $localize`:club rules, keep-ball, the age from which it has two defenders:Two defenders from age`,
+      ),
+    },
+  ),
   areas: step(
-    $localize`:heading in the club rules, the size of each activity’s area:Area sizes`,
+    () => $localize`:heading in the club rules, the size of each activity’s area:Area sizes`,
     undefined,
     byCode(undefined, byCode(AREA)),
   ),
   areaLevelScale: step(
-    $localize`:heading in the club rules, how much bigger or smaller areas are for each level:Area scale by level`,
+    () =>
+      $localize`:heading in the club rules, how much bigger or smaller areas are for each level:Area scale by level`,
     undefined,
     byCode(),
   ),
   sessionShapes: step(
-    $localize`:heading in the club rules, the parts a session is made of:Parts of a session`,
+    () => $localize`:heading in the club rules, the parts a session is made of:Parts of a session`,
     undefined,
     byCode(
       undefined,
@@ -168,105 +184,118 @@ const PARAMETERS: Record<string, PathStep> = {
           (n) => $localize`:club rules, a part of a session by its number, e.g. Part 3:Part ${n}:number:`,
           (v) => v['name'],
           {
-            share: leaf($localize`:club rules|a part of a session, its share of the time:Share`),
+            share: leaf(() => $localize`:club rules|a part of a session, its share of the time:Share`),
             maxMinutes: leaf(
-              $localize`:club rules|a part of a session, the most minutes it may last:Longest`,
+              () => $localize`:club rules|a part of a session, the most minutes it may last:Longest`,
             ),
-            kinds: leaf($localize`:club rules|the activities a part of a session may use:Activities`),
-            name: leaf($localize`:club rules|the name of a part of a session:Name`),
-            priority: leaf($localize`:club rules, a part of a session:Kept first when short of time`),
-            role: leaf($localize`:club rules|what a part of a session is for:Role`),
+            kinds: leaf(() => $localize`:club rules|the activities a part of a session may use:Activities`),
+            name: leaf(() => $localize`:club rules|the name of a part of a session:Name`),
+            priority: leaf(() => $localize`:club rules, a part of a session:Kept first when short of time`),
+            role: leaf(() => $localize`:club rules|what a part of a session is for:Role`),
           },
         ),
       ),
     ),
   ),
   themes: step(
-    $localize`:heading in the club rules, the activities for each focus of a training session:Training themes`,
+    () =>
+      $localize`:heading in the club rules, the activities for each focus of a training session:Training themes`,
     undefined,
     byCode({
-      technical: leaf($localize`:club rules, a training theme, its unopposed activities:Technical part`),
-      opposed: leaf($localize`:club rules, a training theme, its activities with opponents:Opposed part`),
+      technical: leaf(
+        () => $localize`:club rules, a training theme, its unopposed activities:Technical part`,
+      ),
+      opposed: leaf(
+        () => $localize`:club rules, a training theme, its activities with opponents:Opposed part`,
+      ),
     }),
   ),
   gameFormats: step(
-    $localize`:heading in the club rules, players a side in games and whether they have goalkeepers:Games and goalkeepers`,
+    () =>
+      $localize`:heading in the club rules, players a side in games and whether they have goalkeepers:Games and goalkeepers`,
     undefined,
     byCode({
-      maxPerSide: leaf($localize`:club rules, a game, the most players on each side:Most a side`),
-      minPerSide: leaf($localize`:club rules, a game, the fewest players on each side:Fewest a side`),
-      goalkeepers: leaf($localize`:club rules|whether games have goalkeepers:Goalkeepers`),
+      maxPerSide: leaf(() => $localize`:club rules, a game, the most players on each side:Most a side`),
+      minPerSide: leaf(() => $localize`:club rules, a game, the fewest players on each side:Fewest a side`),
+      goalkeepers: leaf(() => $localize`:club rules|whether games have goalkeepers:Goalkeepers`),
     }),
   ),
-  timing: step($localize`:club rules|heading, minutes and breaks:Timing`, {
+  timing: step(() => $localize`:club rules|heading, minutes and breaks:Timing`, {
     minPhaseMinutes: leaf(
-      $localize`:club rules, timing, the fewest minutes a part of a session lasts:Shortest part`,
+      () => $localize`:club rules, timing, the fewest minutes a part of a session lasts:Shortest part`,
     ),
     drinksEveryMinutes: leaf(
-      $localize`:club rules, timing, followed by a number of minutes:Drinks break at least every`,
+      () => $localize`:club rules, timing, followed by a number of minutes:Drinks break at least every`,
     ),
     heatDrinksEveryMinutes: leaf(
-      $localize`:club rules, timing, followed by a number of minutes:In the heat, drinks at least every`,
+      () =>
+        $localize`:club rules, timing, followed by a number of minutes:In the heat, drinks at least every`,
     ),
-    drinksMinutes: leaf($localize`:club rules, timing, minutes of a drinks break:Drinks break length`),
+    drinksMinutes: leaf(() => $localize`:club rules, timing, minutes of a drinks break:Drinks break length`),
     conesPerMinute: leaf(
-      $localize`:club rules, timing, how fast a coach sets out cones:Cones put out a minute`,
+      () => $localize`:club rules, timing, how fast a coach sets out cones:Cones put out a minute`,
     ),
     goalMovesPerMinute: leaf(
-      $localize`:club rules, timing, how fast a coach moves goals:Goals moved a minute`,
+      () => $localize`:club rules, timing, how fast a coach moves goals:Goals moved a minute`,
     ),
   }),
   kinds: step(
-    $localize`:heading in the club rules, how each kind of activity is made harder or replaced:How activities adapt`,
+    () =>
+      $localize`:heading in the club rules, how each kind of activity is made harder or replaced:How activities adapt`,
     undefined,
     byCode({
-      harderWhenArea: leaf($localize`:club rules, followed by smaller or larger:Harder when the area is`),
+      harderWhenArea: leaf(
+        () => $localize`:club rules, followed by smaller or larger:Harder when the area is`,
+      ),
       substitutes: leaf(
-        $localize`:club rules, the activities that may replace a kind of activity:Played instead`,
+        () => $localize`:club rules, the activities that may replace a kind of activity:Played instead`,
       ),
       rotatable: leaf(
-        $localize`:club rules, whether an activity’s area may be turned round on the pitch:May be turned`,
+        () =>
+          $localize`:club rules, whether an activity’s area may be turned round on the pitch:May be turned`,
       ),
     }),
   ),
   touchRates: step(
-    $localize`:heading in the club rules, how often players touch the ball in each activity:Touch rates`,
+    () =>
+      $localize`:heading in the club rules, how often players touch the ball in each activity:Touch rates`,
     undefined,
     byCode({
       perMinute: leaf(
-        $localize`:club rules, touches of the ball a player makes each minute:Touches a minute`,
+        () => $localize`:club rules, touches of the ball a player makes each minute:Touches a minute`,
       ),
       activeShare: leaf(
-        $localize`:club rules, the share of an activity a player is in play:Share of time in play`,
+        () => $localize`:club rules, the share of an activity a player is in play:Share of time in play`,
       ),
       byRole: step(
-        $localize`:club rules, touch rates for goalkeepers, defenders and servers:By role`,
+        () => $localize`:club rules, touch rates for goalkeepers, defenders and servers:By role`,
         undefined,
         byCode(),
       ),
     }),
   ),
   touchTarget: step(
-    $localize`:heading in the club rules, the touches a warm-up should give each player:Touch targets`,
+    () => $localize`:heading in the club rules, the touches a warm-up should give each player:Touch targets`,
     {
-      active: leaf($localize`:club rules, touch targets, on or off:Warn when a warm-up falls short`),
-      minPerPlayer: leaf($localize`:club rules, touch targets:Fewest touches per player`),
-      maxPerPlayer: leaf($localize`:club rules, touch targets:Most touches per player`),
+      active: leaf(() => $localize`:club rules, touch targets, on or off:Warn when a warm-up falls short`),
+      minPerPlayer: leaf(() => $localize`:club rules, touch targets:Fewest touches per player`),
+      maxPerPlayer: leaf(() => $localize`:club rules, touch targets:Most touches per player`),
       fromMinutes: leaf(
-        $localize`:club rules, touch targets, followed by a number of minutes:For warm-ups of at least`,
+        () => $localize`:club rules, touch targets, followed by a number of minutes:For warm-ups of at least`,
       ),
     },
   ),
-  cautions: step($localize`:club rules|heading, weather cautions:Safety`, {
-    heatC: leaf($localize`:club rules, safety, followed by a temperature:Hot weather from`),
-    coldC: leaf($localize`:club rules, safety, followed by a temperature:Cold weather below`),
+  cautions: step(() => $localize`:club rules|heading, weather cautions:Safety`, {
+    heatC: leaf(() => $localize`:club rules, safety, followed by a temperature:Hot weather from`),
+    coldC: leaf(() => $localize`:club rules, safety, followed by a temperature:Cold weather below`),
   }),
-  intensity: step($localize`:club rules|heading, how hard activities may be:Intensity`, {
-    max: leaf($localize`:club rules|the highest intensity allowed:Highest`),
+  intensity: step(() => $localize`:club rules|heading, how hard activities may be:Intensity`, {
+    max: leaf(() => $localize`:club rules|the highest intensity allowed:Highest`),
   }),
-  supervision: step($localize`:club rules|heading, adults needed to supervise children:Adults`, {
+  supervision: step(() => $localize`:club rules|heading, adults needed to supervise children:Adults`, {
     ratios: step(
-      $localize`:heading in the club rules, children one adult may supervise, by age:Children per adult`,
+      () =>
+        $localize`:heading in the club rules, children one adult may supervise, by age:Children per adult`,
       undefined,
       row(
         (n) => $localize`:club rules, a row of a table by its number, e.g. Row 3:Row ${n}:number:`,
@@ -275,56 +304,66 @@ const PARAMETERS: Record<string, PathStep> = {
             ? $localize`:club rules, a row of children per adult, named by its age, e.g. Up to age 8:Up to age ${v['upToAge']}:age:`
             : undefined,
         {
-          childrenPerAdult: leaf($localize`:club rules, children one adult may supervise:Children per adult`),
-          upToAge: leaf($localize`:club rules, the oldest age a row of children per adult is for:Up to age`),
+          childrenPerAdult: leaf(
+            () => $localize`:club rules, children one adult may supervise:Children per adult`,
+          ),
+          upToAge: leaf(
+            () => $localize`:club rules, the oldest age a row of children per adult is for:Up to age`,
+          ),
         },
       ),
     ),
-    minAdults: leaf($localize`:club rules, supervision:Fewest adults at a children’s session`),
-    stationsPerAdult: leaf($localize`:club rules, supervision:Stations one adult can oversee`),
-    source: leaf($localize`:club rules|where the supervision numbers come from:Source`),
+    minAdults: leaf(() => $localize`:club rules, supervision:Fewest adults at a children’s session`),
+    stationsPerAdult: leaf(() => $localize`:club rules, supervision:Stations one adult can oversee`),
+    source: leaf(() => $localize`:club rules|where the supervision numbers come from:Source`),
   }),
-  layout: step($localize`:club rules|heading, room around stations and goals on the pitch:Layout`, {
-    bufferM: leaf($localize`:club rules, layout, a distance:Room between stations`),
-    shotClearanceM: leaf($localize`:club rules, layout, a distance:Room behind goals`),
-    gateWidthM: leaf($localize`:club rules, layout, the width of a gate made of two cones:Gate width`),
+  layout: step(() => $localize`:club rules|heading, room around stations and goals on the pitch:Layout`, {
+    bufferM: leaf(() => $localize`:club rules, layout, a distance:Room between stations`),
+    shotClearanceM: leaf(() => $localize`:club rules, layout, a distance:Room behind goals`),
+    gateWidthM: leaf(() => $localize`:club rules, layout, the width of a gate made of two cones:Gate width`),
   }),
-  allocation: step($localize`:club rules|heading, how players and coaches are put into groups:Grouping`, {
-    coachPenalty: leaf($localize`:club rules, grouping, a weight:Reluctance to add a coach to a group`),
-    fallbackStationPenalty: leaf(
-      $localize`:club rules, grouping, a weight:Reluctance to use a stand-in activity`,
-    ),
-  }),
-  variety: step($localize`:club rules|heading, how plans avoid repeating activities:Variety`, {
-    recentPenalty: leaf($localize`:club rules, variety, a weight:Avoid recent activities`),
+  allocation: step(
+    () => $localize`:club rules|heading, how players and coaches are put into groups:Grouping`,
+    {
+      coachPenalty: leaf(
+        () => $localize`:club rules, grouping, a weight:Reluctance to add a coach to a group`,
+      ),
+      fallbackStationPenalty: leaf(
+        () => $localize`:club rules, grouping, a weight:Reluctance to use a stand-in activity`,
+      ),
+    },
+  ),
+  variety: step(() => $localize`:club rules|heading, how plans avoid repeating activities:Variety`, {
+    recentPenalty: leaf(() => $localize`:club rules, variety, a weight:Avoid recent activities`),
   }),
   focusBoost: step(
-    $localize`:heading in the club rules, how strongly each kind of activity follows a session’s focus:Focus weight`,
+    () =>
+      $localize`:heading in the club rules, how strongly each kind of activity follows a session’s focus:Focus weight`,
     undefined,
     byCode(),
   ),
   activities: step(
-    $localize`:heading in the club rules, the club’s list of activities:Our activities`,
+    () => $localize`:heading in the club rules, the club’s list of activities:Our activities`,
     undefined,
     row(
       (n) =>
         $localize`:club rules, an activity by its number in the list, e.g. Activity 3:Activity ${n}:number:`,
       (v) => v['title'],
       {
-        id: leaf($localize`:club rules|the short code that names an activity or a rule:Reference`),
-        kind: leaf($localize`:club rules|the kind of an activity:Kind`),
-        title: leaf($localize`:club rules|an activity’s title:Title`),
-        summary: leaf($localize`:club rules|an activity’s one-line summary:Summary`),
-        description: leaf($localize`:club rules, an activity’s description:What the players do`),
+        id: leaf(() => $localize`:club rules|the short code that names an activity or a rule:Reference`),
+        kind: leaf(() => $localize`:club rules|the kind of an activity:Kind`),
+        title: leaf(() => $localize`:club rules|an activity’s title:Title`),
+        summary: leaf(() => $localize`:club rules|an activity’s one-line summary:Summary`),
+        description: leaf(() => $localize`:club rules, an activity’s description:What the players do`),
         coachingPoints: step(
-          $localize`:club rules, an activity’s coaching points:Coaching points`,
+          () => $localize`:club rules, an activity’s coaching points:Coaching points`,
           undefined,
           numbered(
             (n) => $localize`:club rules, a coaching point by its number, e.g. Point 2:Point ${n}:number:`,
           ),
         ),
         easier: step(
-          $localize`:club rules|ways to make an activity easier:Easier`,
+          () => $localize`:club rules|ways to make an activity easier:Easier`,
           undefined,
           numbered(
             (n) =>
@@ -332,49 +371,49 @@ const PARAMETERS: Record<string, PathStep> = {
           ),
         ),
         harder: step(
-          $localize`:club rules|ways to make an activity harder:Harder`,
+          () => $localize`:club rules|ways to make an activity harder:Harder`,
           undefined,
           numbered(
             (n) =>
               $localize`:club rules, a way to make an activity easier or harder, by its number, e.g. Way 2:Way ${n}:number:`,
           ),
         ),
-        ages: step($localize`:club rules|the ages an activity suits:Ages`, {
-          from: leaf($localize`:club rules|the youngest age group an activity suits:Youngest`),
-          to: leaf($localize`:club rules|the oldest age group an activity suits:Oldest`),
+        ages: step(() => $localize`:club rules|the ages an activity suits:Ages`, {
+          from: leaf(() => $localize`:club rules|the youngest age group an activity suits:Youngest`),
+          to: leaf(() => $localize`:club rules|the oldest age group an activity suits:Oldest`),
         }),
-        levels: leaf($localize`:club rules|the levels an activity suits:Levels`),
-        focus: leaf($localize`:club rules|what an activity works on:Focus`),
-        intensity: leaf($localize`:club rules|how hard an activity is, 1 to 5:Intensity`),
-        balls: leaf($localize`:club rules|the balls an activity needs:Balls`),
-        bibs: leaf($localize`:club rules|whether an activity needs bibs:Bibs`),
-        layout: leaf($localize`:club rules|how an activity is laid out:Set-up`),
-        players: step($localize`:club rules, players an activity takes:Players in a group`, {
-          min: leaf($localize`:club rules|the fewest players an activity takes:Fewest`),
-          max: leaf($localize`:club rules|the most players an activity takes:Most`),
+        levels: leaf(() => $localize`:club rules|the levels an activity suits:Levels`),
+        focus: leaf(() => $localize`:club rules|what an activity works on:Focus`),
+        intensity: leaf(() => $localize`:club rules|how hard an activity is, 1 to 5:Intensity`),
+        balls: leaf(() => $localize`:club rules|the balls an activity needs:Balls`),
+        bibs: leaf(() => $localize`:club rules|whether an activity needs bibs:Bibs`),
+        layout: leaf(() => $localize`:club rules|how an activity is laid out:Set-up`),
+        players: step(() => $localize`:club rules, players an activity takes:Players in a group`, {
+          min: leaf(() => $localize`:club rules|the fewest players an activity takes:Fewest`),
+          max: leaf(() => $localize`:club rules|the most players an activity takes:Most`),
         }),
-        origin: leaf($localize`:club rules, an activity the club wrote itself:Added by the club`),
-        retired: leaf($localize`:club rules|an activity no longer used in new plans:Retired`),
+        origin: leaf(() => $localize`:club rules, an activity the club wrote itself:Added by the club`),
+        retired: leaf(() => $localize`:club rules|an activity no longer used in new plans:Retired`),
       },
     ),
   ),
 };
 
 const DOCUMENT: Record<string, PathStep> = {
-  name: leaf(RULE_SET_NAME),
-  id: leaf($localize`:club rules|the short code that names an activity or a rule:Reference`),
-  version: leaf($localize`:club rules, the number of a version of the rule set:Version number`),
+  name: leaf(ruleSetName),
+  id: leaf(() => $localize`:club rules|the short code that names an activity or a rule:Reference`),
+  version: leaf(() => $localize`:club rules, the number of a version of the rule set:Version number`),
   rules: step(
-    $localize`:club rules|heading, the rules that change a plan when their conditions are met:Rules`,
+    () => $localize`:club rules|heading, the rules that change a plan when their conditions are met:Rules`,
     undefined,
     row(
       (n) => $localize`:club rules, a rule by its number, e.g. Rule 3:Rule ${n}:number:`,
       (v) => v['description'],
       {
-        id: leaf($localize`:club rules|the short code that names an activity or a rule:Reference`),
-        description: leaf($localize`:club rules|what a rule is for:Description`),
-        conditions: leaf($localize`:club rules|the conditions of a rule:When`),
-        event: leaf($localize`:club rules, what a rule changes in a plan:What it does`),
+        id: leaf(() => $localize`:club rules|the short code that names an activity or a rule:Reference`),
+        description: leaf(() => $localize`:club rules|what a rule is for:Description`),
+        conditions: leaf(() => $localize`:club rules|the conditions of a rule:When`),
+        event: leaf(() => $localize`:club rules, what a rule changes in a plan:What it does`),
       },
     ),
   ),
@@ -427,7 +466,7 @@ export function rulePathParts(pointer: string, document?: unknown): string[] {
       each = undefined;
       return;
     }
-    words.push(typeof known.words === 'string' ? known.words : known.words(key, node));
+    words.push(known.words(key, node));
     table = known.fields;
     each = known.each;
   });
@@ -483,7 +522,7 @@ export function ruleChangeWords(
   change: { path: string; change: 'added' | 'removed' | 'changed'; before?: unknown; after?: unknown },
   document?: unknown,
 ): string {
-  const place = change.path === '(name)' ? RULE_SET_NAME : rulePathWords(change.path, document);
+  const place = change.path === '(name)' ? ruleSetName() : rulePathWords(change.path, document);
   if (change.change === 'added') {
     const value = ruleValueWords(change.after);
     return $localize`:a change to the club rules, the place and the value added:${place}:place:: added ${value}:value:`;

@@ -1,11 +1,20 @@
 import '../i18n/localize';
 import type { AgeGroup, Level } from './plan-request';
 
-/** A squad's level in words, on every screen, the card and e-mails (never the code). */
+/**
+ * A squad's level in words, on every screen, the card and e-mails (never the code). Getters, so
+ * each read is in the reader's language.
+ */
 export const LEVEL_LABELS: Record<Level, string> = {
-  beginner: $localize`:squad level:Beginner`,
-  intermediate: $localize`:squad level:Intermediate`,
-  advanced: $localize`:squad level:Advanced`,
+  get beginner() {
+    return $localize`:squad level:Beginner`;
+  },
+  get intermediate() {
+    return $localize`:squad level:Intermediate`;
+  },
+  get advanced() {
+    return $localize`:squad level:Advanced`;
+  },
 };
 
 /**

@@ -33,14 +33,22 @@ export function effectiveUnits(club: Units, own: UnitOverride): Units {
   return { distance: own.distance ?? club.distance, temperature: own.temperature ?? club.temperature };
 }
 
-/** The choices in words, for lists and selects. */
+/** The choices in words, for lists and selects (getters: made on each read, in the reader's language). */
 export const DISTANCE_UNIT_WORDS: Record<DistanceUnit, string> = {
-  metres: $localize`Metres`,
-  yards: $localize`Yards`,
+  get metres() {
+    return $localize`Metres`;
+  },
+  get yards() {
+    return $localize`Yards`;
+  },
 };
 export const TEMPERATURE_UNIT_WORDS: Record<TemperatureUnit, string> = {
-  celsius: $localize`Degrees Celsius (°C)`,
-  fahrenheit: $localize`Degrees Fahrenheit (°F)`,
+  get celsius() {
+    return $localize`Degrees Celsius (°C)`;
+  },
+  get fahrenheit() {
+    return $localize`Degrees Fahrenheit (°F)`;
+  },
 };
 
 export function isDistanceUnit(value: unknown): value is DistanceUnit {
