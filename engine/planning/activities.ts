@@ -2,6 +2,7 @@
  * Which activities a request may use, and how well each fits: age, level, the club's rules, the
  * kit, the weather, the focus, the coach's pins and what the team did lately.
  */
+import '../../shared/i18n/localize';
 import type {
   ActivityDefinition,
   ActivityKind,
@@ -10,7 +11,7 @@ import type {
   RuleParameters,
   StationKind,
 } from '../../shared/types';
-import { AGE_GROUPS } from '../../shared/types';
+import { AGE_GROUPS, ageGroupLabel } from '../../shared/types';
 import { kindModule, layoutOf } from '../kinds/registry';
 import type { BuildContext } from './context';
 
@@ -21,6 +22,29 @@ function hostsKeepers(a: ActivityDefinition): number {
   return m.facesShots && t.keepers ? t.ends : 0;
 }
 
+/**
+ * Why something may not be used: the club's reason, or a function that writes the engine's own
+ * words (so a check that needs only yes or no writes none); null when it may be used.
+ */
+type Block = string | (() => string) | null;
+
+function words(block: Block): string | null {
+  return typeof block === 'function' ? block() : block;
+}
+
+function kindBlock(
+  params: RuleParameters,
+  age: AgeGroup,
+  forbidden: ForbiddenActivity[],
+  kind: ActivityKind,
+): Block {
+  if (!params.ageGroups[age].allowedKinds.includes(kind))
+    return () =>
+      $localize`:why an activity cannot be used today:not in the club's activities for ${ageInSentence(age)}:ageGroup:`;
+  const rule = forbidden.find((f) => f.kind === kind && !f.activityId);
+  return rule ? rule.reason : null;
+}
+
 /** Why a kind may not be used, or null when it may. */
 export function kindBlocked(
   params: RuleParameters,
@@ -28,9 +52,24 @@ export function kindBlocked(
   forbidden: ForbiddenActivity[],
   kind: ActivityKind,
 ): string | null {
-  if (!params.ageGroups[age].allowedKinds.includes(kind)) return `not in the club's activities for ${age}`;
-  const rule = forbidden.find((f) => f.kind === kind && !f.activityId);
-  return rule ? rule.reason : null;
+  return words(kindBlock(params, age, forbidden, kind));
+}
+
+function activityBlock(
+  params: RuleParameters,
+  age: AgeGroup,
+  forbidden: ForbiddenActivity[],
+  activity: ActivityDefinition,
+): Block {
+  if (activity.retired) return () => $localize`:why an activity cannot be used today:retired by the club`;
+  const byKind = kindBlock(params, age, forbidden, activity.kind);
+  if (byKind) return byKind;
+  const rule = forbidden.find((f) => f.activityId === activity.id);
+  if (rule) return rule.reason;
+  if (!suitsAge(activity, age))
+    return () =>
+      $localize`:why an activity cannot be used today, e.g. made for U9–U12:made for ${ageInSentence(activity.ages.from)}:youngest:–${ageInSentence(activity.ages.to)}:oldest:`;
+  return null;
 }
 
 /**
@@ -43,13 +82,17 @@ export function activityBlocked(
   forbidden: ForbiddenActivity[],
   activity: ActivityDefinition,
 ): string | null {
-  if (activity.retired) return 'retired by the club';
-  const byKind = kindBlocked(params, age, forbidden, activity.kind);
-  if (byKind) return byKind;
-  const rule = forbidden.find((f) => f.activityId === activity.id);
-  if (rule) return rule.reason;
-  if (!suitsAge(activity, age)) return `made for ${activity.ages.from}–${activity.ages.to}`;
-  return null;
+  return words(activityBlock(params, age, forbidden, activity));
+}
+
+/** Why an activity the age may play cannot be used with this squad: its numbers or the kit. */
+export function notEnoughForIt(): string {
+  return $localize`:why an activity cannot be used today:too few players or not enough kit for it`;
+}
+
+/** An age group inside a sentence: "U10" as coaches write it, "adult" in lower case. */
+export function ageInSentence(age: AgeGroup): string {
+  return age === 'adult' ? $localize`:age group inside a sentence, e.g. for adult:adult` : ageGroupLabel(age);
 }
 
 export function suitsAge(activity: Pick<ActivityDefinition, 'ages'>, age: AgeGroup): boolean {
@@ -73,7 +116,7 @@ export function rankedActivities(ctx: ChoiceContext, kind: StationKind, kindRank
   const out: Ranked[] = [];
   for (const a of params.activities) {
     if (a.kind !== kind) continue;
-    if (activityBlocked(params, request.ageGroup, ctx.forbidden, a)) continue;
+    if (activityBlock(params, request.ageGroup, ctx.forbidden, a)) continue;
     out.push({ activity: a, score: activityScore(ctx, a) - kindRank + ctx.rng() * JITTER });
   }
   // Above the day's intensity limit (the heat) only when the kind has nothing calmer; a pin stays.

@@ -5,6 +5,7 @@
  * waiting and steps. Each of the part's activities is tried in turn until one runs cleanly in
  * the space, kit and weather; the first that runs at all is kept otherwise.
  */
+import '../../shared/i18n/localize';
 import type {
   ActivityDefinition,
   Notice,
@@ -37,10 +38,11 @@ import {
 import type { BuildContext } from './context';
 import { equipPhase } from './kit';
 import { packStations, reuseLayout } from './layout';
-import { markPhase } from './markings';
+import { isTargetlessNote, markPhase } from './markings';
 import { progressionsFor } from './progressions';
 import { nameFor } from './session-shape';
-import type { PhaseSpec } from './timing';
+import { adultsInWords } from './supervision';
+import { continuedName, withoutContinued, type PhaseSpec } from './timing';
 
 /** What building needs besides the request: the rules, warnings and trace to add to. */
 export type PhaseContext = Pick<
@@ -114,7 +116,7 @@ function commit(ctx: PhaseContext, attempt: Attempt): Phase {
 function continued(spec: PhaseSpec, phaseIndex: number, previous: Phase): Phase {
   const stations = previous.stations.map((s, k) => ({ ...s, id: `p${phaseIndex + 1}-s${k + 1}` }));
   return {
-    name: `${previous.name.replace(/ \(continued\)$/, '')} (continued)`,
+    name: continuedName(withoutContinued(previous.name)),
     activityId: previous.activityId,
     activityKind: previous.activityKind,
     startMinute: spec.startMinute,
@@ -188,7 +190,7 @@ function tryActivity(
       if (Number.isFinite(free.cost) && free.groups.length > allocation.groups.length) {
         warnings.push({
           code: 'stations-per-adult',
-          message: `With ${request.coaches || 'no'} adult${request.coaches === 1 ? '' : 's'}, at most ${ctx.supervision.maxStations} stations run at once, so groups are larger than usual; another adult or parent helper would let more groups play.`,
+          message: $localize`With ${adultsInWords(request.coaches)}:adults:, at most ${ctx.supervision.maxStations}:stations: stations run at once, so groups are larger than usual; another adult or parent helper would let more groups play.`,
         });
       }
     }
@@ -225,7 +227,7 @@ function tryActivity(
       if (cap < cap0) {
         warnings.push({
           code: 'fewer-stations',
-          message: `${spec.name}: fewer, larger groups so the stations fit the space.`,
+          message: $localize`${spec.name}:phaseName:: fewer, larger groups so the stations fit the space.`,
         });
       }
       return finishAttempt(ctx, spec, placed, activities, allocation.cost, previous, warnings, trace);
@@ -262,7 +264,10 @@ function finishAttempt(
     trace.push({
       ruleId: 'engine.coach-fill-in',
       fired: true,
-      effect: `${name}: a coach joins ${coachStations.length === 1 ? 'one group' : `${coachStations.length} groups`} to even the numbers or to serve a goalkeeper`,
+      effect:
+        coachStations.length === 1
+          ? $localize`${name}:phaseName:: a coach joins one group to even the numbers or to serve a goalkeeper`
+          : $localize`${name}:phaseName:: a coach joins ${coachStations.length}:groups: groups to even the numbers or to serve a goalkeeper`,
     });
   }
   const allowedWait = ctx.cold ? 0 : 1;
@@ -285,7 +290,7 @@ function finishAttempt(
       (s, i) =>
         (s.waiting ?? 0) <= allowedWait &&
         (activities[i].balls === 'none' || s.equipment.balls > 0) &&
-        !(s.notes ?? []).some((n) => n.startsWith('No goal or cones')),
+        !(s.notes ?? []).some(isTargetlessNote),
     );
   return {
     phase: {
@@ -615,12 +620,12 @@ function sharedArea(
   } else station.area = whole;
   ctx.warnings.push({
     code: 'space-too-small',
-    message: `${name}: nothing in this part fits ${n} players in ${request.space.width} × ${request.space.length} m with this kit, so they play together in one area.`,
+    message: $localize`${name}:phaseName:: nothing in this part fits ${n}:players: players in ${request.space.width}:width: × ${request.space.length}:length: m with this kit, so they play together in one area.`,
   });
   ctx.trace.push({
     ruleId: 'engine.layout-fallback',
     fired: true,
-    effect: `${name}: everyone in one area (${activity.title})`,
+    effect: $localize`${name}:phaseName:: everyone in one area (${activity.title}:activityTitle:)`,
   });
   markPhase(stations, activities, params, request.equipment, ctx.warnings, name);
   equipPhase(stations, activities, request.equipment, ctx.warnings, name, ctx.cold);

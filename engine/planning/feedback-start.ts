@@ -4,6 +4,7 @@
  * from the area that ran, for the group that gave it, and leaves other activities of the same
  * kind alone. Each new group scales the start to its own size (`widthForGroup`).
  */
+import '../../shared/i18n/localize';
 import { ACTIVITY_KIND_LABELS, type FeedbackFact, type Phase, type StationKind } from '../../shared/types';
 import type { ProgressionStep } from '../club-rules/evaluate-rules';
 import { verdictKey, type VerdictSteps } from '../club-rules/feedback-steps';
@@ -81,11 +82,24 @@ function startOf(
   };
 }
 
-const VERDICT_WORDS: Record<FeedbackFact['verdict'], string> = {
-  'too-easy': 'too easy',
-  'too-hard': 'too hard',
-  right: 'about right',
-};
+/** A coach's verdict inside a sentence: "was marked too easy". */
+function verdictWords(verdict: FeedbackFact['verdict']): string {
+  switch (verdict) {
+    case 'too-easy':
+      return $localize`:a coach's verdict on an activity, was marked …:too easy`;
+    case 'too-hard':
+      return $localize`:a coach's verdict on an activity, was marked …:too hard`;
+    case 'right':
+      return $localize`:a coach's verdict on an activity, was marked …:about right`;
+  }
+}
+
+/** How the start compares with the usual area: "17% smaller", "the same size". */
+function sizeWords(change: number): string {
+  if (change < 0) return $localize`:an area compared with the usual one:${-change}:percent:% smaller`;
+  if (change > 0) return $localize`:an area compared with the usual one:${change}:percent:% larger`;
+  return $localize`:an area compared with the usual one:the same size`;
+}
 
 /**
  * One trace entry per start that a station of the plan really uses, its description a sentence
@@ -102,25 +116,35 @@ export function feedbackTrace(ctx: BuildContext, starts: FeedbackStart[], phases
         : st.activityKind === start.kind && !own.has(st.activityId),
     );
     if (!used) continue;
+    const kindName = ACTIVITY_KIND_LABELS[start.kind];
     const title = start.activityId
       ? `‘${activityById(ctx.params, start.activityId)?.title ?? used.title}’`
-      : `a ${ACTIVITY_KIND_LABELS[start.kind].toLowerCase()} station`;
+      : $localize`:a station of some kind, e.g. a keep-ball station:a ${kindName.toLowerCase()}:kindName: station`;
     const change = Math.round((start.width / start.from - 1) * 100);
-    const size = change < 0 ? `${-change}% smaller` : change > 0 ? `${change}% larger` : 'the same size';
+    const size = sizeWords(change);
     const stuck = start.step.direction !== 'keep' && change === 0;
-    const groups = start.forGroup ? ` for groups of ${start.forGroup}` : '';
-    const scaled = start.forGroup ? ', scaled to each group’s size' : '';
+    const group = start.forGroup;
+    const verdict = start.verdict ? verdictWords(start.verdict) : '';
     const description = !start.verdict
-      ? `A club rule starts ${title} ${size} than usual today${scaled}.`
+      ? group
+        ? $localize`A club rule starts ${title}:station: ${size}:size: than usual today, scaled to each group’s size.`
+        : $localize`A club rule starts ${title}:station: ${size}:size: than usual today.`
       : stuck
-        ? `Last time ${title} was marked ${VERDICT_WORDS[start.verdict]}${groups}, but its area is already at the club’s limit, so it is the same size today.`
-        : `Last time ${title} was marked ${VERDICT_WORDS[start.verdict]}${groups}, so its area is ${size} today${scaled}.`;
-    const group = start.forGroup ? ` for a group of ${start.forGroup}, scaled to each group's size` : '';
+        ? group
+          ? $localize`Last time ${title}:station: was marked ${verdict}:verdict: for groups of ${group}:groupSize:, but its area is already at the club’s limit, so it is the same size today.`
+          : $localize`Last time ${title}:station: was marked ${verdict}:verdict:, but its area is already at the club’s limit, so it is the same size today.`
+        : group
+          ? $localize`Last time ${title}:station: was marked ${verdict}:verdict: for groups of ${group}:groupSize:, so its area is ${size}:size: today, scaled to each group’s size.`
+          : $localize`Last time ${title}:station: was marked ${verdict}:verdict:, so its area is ${size}:size: today.`;
+    const side = describeArea({ width: start.width, length: start.width });
+    const reason = start.step.reason;
     ctx.trace.push({
       ruleId: 'engine.feedback-start',
       description,
       fired: true,
-      effect: `${ACTIVITY_KIND_LABELS[start.kind]} area starts at ${describeArea({ width: start.width, length: start.width })} wide${group} (last ${start.from} m): ${start.step.reason}`,
+      effect: group
+        ? $localize`${kindName}:kindName: area starts at ${side}:side: wide for a group of ${group}:groupSize:, scaled to each group's size (last ${start.from}:lastSide: m): ${reason}:reason:`
+        : $localize`${kindName}:kindName: area starts at ${side}:side: wide (last ${start.from}:lastSide: m): ${reason}:reason:`,
     });
   }
 }

@@ -2,8 +2,10 @@
  * Goalkeepers: who may go in goal today, which phase gives them their own warm-up (handling,
  * footwork, then shots) and from which phase they stand in a real goal.
  */
+import '../../shared/i18n/localize';
 import type { AgeBand, Notice, PlanRequest, PresentPlayer, RuleParameters } from '../../shared/types';
 import { kindModule, layoutOf } from '../kinds/registry';
+import { ageInSentence } from './activities';
 import type { BuildContext } from './context';
 import type { PhaseSpec } from './timing';
 
@@ -21,8 +23,8 @@ export function eligibleKeepers(
       warnings: [
         {
           code: 'keepers-play-out',
-          message: `At ${request.ageGroup} everyone plays out: small games at this age have no goalkeepers, so today’s goalkeepers join in as outfield players.`,
-          source: 'US Soccer Player Development Initiatives (2016): 4v4 for U6–U8, no goalkeepers',
+          message: $localize`At ${ageInSentence(request.ageGroup)}:ageGroup: everyone plays out: small games at this age have no goalkeepers, so today’s goalkeepers join in as outfield players.`,
+          source: $localize`:the guidance a notice rests on, keep the publication's name and year:US Soccer Player Development Initiatives (2016): 4v4 for U6–U8, no goalkeepers`,
         },
       ],
     };
@@ -33,8 +35,7 @@ export function eligibleKeepers(
       warnings: [
         {
           code: 'keepers-no-goal',
-          message:
-            'No goals in the bag: goalkeepers play as outfield players today — a goalkeeper only goes in goal where a real goal stands.',
+          message: $localize`No goals in the bag: goalkeepers play as outfield players today — a goalkeeper only goes in goal where a real goal stands.`,
         },
       ],
     };
@@ -101,6 +102,21 @@ export function planKeepers(ctx: BuildContext, specs: PhaseSpec[]): void {
   ctx.trace.push({
     ruleId: 'engine.keepers',
     fired: true,
-    effect: `${ctx.keepers.length === 1 ? 'The goalkeeper does' : `${ctx.keepers.length} goalkeepers do`} their own warm-up in ${marked.join(' and ')}${inGoal ? `, then ${ctx.keepers.length === 1 ? 'goes' : 'go'} in goal from ${inGoal.name}` : ''}`,
+    effect: keepersPlan(ctx.keepers.length, marked, inGoal?.name),
   });
+}
+
+/** "The goalkeeper does their own warm-up in Arrival and Passing practice, then goes in goal from …". */
+function keepersPlan(keepers: number, warmUp: string[], inGoal: string | undefined): string {
+  const phases =
+    warmUp.length === 2
+      ? $localize`:two phases of the session:${warmUp[0]}:firstPhase: and ${warmUp[1]}:secondPhase:`
+      : warmUp[0];
+  if (keepers === 1)
+    return inGoal === undefined
+      ? $localize`The goalkeeper does their own warm-up in ${phases}:phases:`
+      : $localize`The goalkeeper does their own warm-up in ${phases}:phases:, then goes in goal from ${inGoal}:phaseName:`;
+  return inGoal === undefined
+    ? $localize`${keepers}:count: goalkeepers do their own warm-up in ${phases}:phases:`
+    : $localize`${keepers}:count: goalkeepers do their own warm-up in ${phases}:phases:, then go in goal from ${inGoal}:phaseName:`;
 }

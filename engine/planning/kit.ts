@@ -3,6 +3,7 @@
  * everyone play without waiting, shared fairly, then spares. Waiting is counted honestly from
  * the places and the balls each station ends up with.
  */
+import '../../shared/i18n/localize';
 import type { ActivityDefinition, Notice, Station } from '../../shared/types';
 import { kindModule } from '../kinds/registry';
 
@@ -35,7 +36,10 @@ export function equipPhase(
     const waiting = stations.reduce((sum, s) => sum + (s.waiting ?? 0), 0);
     warnings.push({
       code: 'balls-short',
-      message: `${phaseName}: ${first.wanted} balls would keep everyone busy, the bag has ${kit.balls}; ${waiting} player${waiting === 1 ? '' : 's'} share${waiting === 1 ? 's' : ''} a ball in turns.`,
+      message:
+        waiting === 1
+          ? $localize`${phaseName}:phaseName:: ${first.wanted}:wanted: balls would keep everyone busy, the bag has ${kit.balls}:balls:; 1 player shares a ball in turns.`
+          : $localize`${phaseName}:phaseName:: ${first.wanted}:wanted: balls would keep everyone busy, the bag has ${kit.balls}:balls:; ${waiting}:waiting: players share a ball in turns.`,
     });
   }
   // Waiting is told, not hidden: more than one at a station, or anyone at all in the cold.
@@ -45,21 +49,32 @@ export function equipPhase(
     const n = over.reduce((sum, s) => sum + (s.waiting ?? 0), 0);
     warnings.push({
       code: 'waiting',
-      message: `${phaseName}: ${n} player${n === 1 ? '' : 's'} wait${n === 1 ? 's' : ''} for a turn${cold ? ' in the cold' : ''} — keep them busy (juggling, fetching balls) and swap often.`,
+      message: waitingMessage(phaseName, n, cold),
     });
   }
   if (stations.some((s, i) => s.equipment.balls === 0 && needs[i].needed > 0)) {
     warnings.push({
       code: 'station-without-ball',
-      message: `${phaseName}: some stations have no ball at all.`,
+      message: $localize`${phaseName}:phaseName:: some stations have no ball at all.`,
     });
   }
   if (bibs.short > 0) {
     warnings.push({
       code: 'bibs-short',
-      message: `${phaseName}: ${bibs.wanted} bibs needed, ${kit.bibs} in the bag — use shirt colours to tell sides apart.`,
+      message: $localize`${phaseName}:phaseName:: ${bibs.wanted}:wanted: bibs needed, ${kit.bibs}:bibs: in the bag — use shirt colours to tell sides apart.`,
     });
   }
+}
+
+/** Players waiting for a turn in a phase, told as a whole sentence for each case. */
+function waitingMessage(phaseName: string, n: number, cold: boolean): string {
+  if (n === 1)
+    return cold
+      ? $localize`${phaseName}:phaseName:: 1 player waits for a turn in the cold — keep them busy (juggling, fetching balls) and swap often.`
+      : $localize`${phaseName}:phaseName:: 1 player waits for a turn — keep them busy (juggling, fetching balls) and swap often.`;
+  return cold
+    ? $localize`${phaseName}:phaseName:: ${n}:waiting: players wait for a turn in the cold — keep them busy (juggling, fetching balls) and swap often.`
+    : $localize`${phaseName}:phaseName:: ${n}:waiting: players wait for a turn — keep them busy (juggling, fetching balls) and swap often.`;
 }
 
 function share(demand: number[], available: number): { given: number[]; wanted: number; short: number } {

@@ -6,6 +6,7 @@
  * breakout gates and extras — never more than the bag holds, and a station that goes without
  * is told what to use instead.
  */
+import '../../shared/i18n/localize';
 import type {
   ActivityDefinition,
   GoalPlacement,
@@ -155,12 +156,13 @@ export function markPhase(
       }
     }
   };
-  const tier = (pick: (d: Drawing) => LocalPoint[], what: string | null) => {
+  const words = markingNotes();
+  const tier = (pick: (d: Drawing) => LocalPoint[], note: string | null) => {
     stations.forEach((_, i) => {
       const points = pick(drawings[i]);
       if (!points.length) return;
       if (points.length > conesLeft) {
-        if (what) notes[i].push(`No cones left for ${what}: use bibs, bags or bottles instead.`);
+        if (note) notes[i].push(note);
         return;
       }
       cones[i].push(...points.map((p) => toSpace(frames[i], p.u, p.v)));
@@ -168,11 +170,11 @@ export function markPhase(
     });
   };
   endGates(false);
-  tier((d) => d.essential, 'its spots and lines');
+  tier((d) => d.essential, words.spots);
   stations.forEach((_, i) => {
     for (const g of drawings[i].gates ?? []) {
       if (conesLeft < 2) {
-        notes[i].push('No cones left for its gates: two bibs or bottles make each gate.');
+        notes[i].push(words.gates);
         break;
       }
       const dir = edgeDirection(frames[i], g.edge === 'near' ? 'near' : 'far');
@@ -182,7 +184,7 @@ export function markPhase(
       conesLeft -= 2;
     }
   });
-  tier((d) => d.outline, 'its corners');
+  tier((d) => d.outline, words.corners);
   endGates(true);
   tier((d) => d.extra, null);
 
@@ -220,11 +222,11 @@ export function markPhase(
         ...(l.label ? { label: l.label } : {}),
       }));
     } else delete station.lines;
-    if (targetless) notes[i].push(targetlessAdvice(station.activityKind));
+    if (targetless) notes[i].push(targetlessAdvice(station.activityKind, words));
     if (notes[i].length)
-      station.notes = [...(station.notes ?? []).filter((n) => !isMarkingNote(n)), ...notes[i]];
+      station.notes = [...(station.notes ?? []).filter((n) => !isMarkingNote(n, words)), ...notes[i]];
     else if (station.notes) {
-      station.notes = station.notes.filter((n) => !isMarkingNote(n));
+      station.notes = station.notes.filter((n) => !isMarkingNote(n, words));
       if (!station.notes.length) delete station.notes;
     }
   });
@@ -233,13 +235,13 @@ export function markPhase(
     pushOnce(
       warnings,
       'gates-for-goals',
-      `${phaseName}: gates of two cones stand in where there are not enough goals.`,
+      $localize`${phaseName}:phaseName:: gates of two cones stand in where there are not enough goals.`,
     );
   }
   if (shotsBlocked) {
     warnings.push({
       code: 'shots-toward-station',
-      message: `${phaseName}: the space leaves less than ${params.layout.shotClearanceM} m behind some goals before the next station — shoot low and check the line before each shot.`,
+      message: $localize`${phaseName}:phaseName:: the space leaves less than ${params.layout.shotClearanceM}:metres: m behind some goals before the next station — shoot low and check the line before each shot.`,
     });
   }
 }
@@ -264,10 +266,39 @@ export function keepersAtOnce(station: Pick<Station, 'activityKind' | 'roles'>):
   return station.activityKind === 'goalkeeping' ? Math.min(1, keepers) : keepers;
 }
 
-const MARKING_NOTE = /^No cones left|^No goal or cones/;
+/** What a station is told when the bag runs out of cones or goals for it. */
+function markingNotes() {
+  return {
+    spots: $localize`:note on a station:No cones left for its spots and lines: use bibs, bags or bottles instead.`,
+    corners: $localize`:note on a station:No cones left for its corners: use bibs, bags or bottles instead.`,
+    gates: $localize`:note on a station:No cones left for its gates: two bibs or bottles make each gate.`,
+    ...targetlessNotes(),
+  };
+}
 
-function isMarkingNote(note: string): boolean {
-  return MARKING_NOTE.test(note);
+/** What a station with neither a goal nor cones for a gate at an end is told to do instead. */
+function targetlessNotes() {
+  return {
+    endLine: $localize`:note on a station:No goal or cones for a gate: score by stopping the ball on the end line.`,
+    endZone: $localize`:note on a station:No goal or cones for a gate: finish by passing into a marked end zone.`,
+  };
+}
+
+type MarkingNotes = ReturnType<typeof markingNotes>;
+
+/** The English openings too, so a plan saved before a note's wording changed is still tidied. */
+const MARKING_NOTE = /^No cones left|^No goal or cones/;
+const TARGETLESS_NOTE = /^No goal or cones/;
+
+function isMarkingNote(note: string, words: MarkingNotes): boolean {
+  return MARKING_NOTE.test(note) || Object.values(words).includes(note);
+}
+
+/** Whether a station's note says it has neither a goal nor cones for a gate at an end. */
+export function isTargetlessNote(note: string): boolean {
+  if (TARGETLESS_NOTE.test(note)) return true;
+  const words = targetlessNotes();
+  return note === words.endLine || note === words.endZone;
 }
 
 function goalRank(s: Station): number {
@@ -276,10 +307,9 @@ function goalRank(s: Station): number {
   return i < 0 ? GOAL_PRIORITY.length : i;
 }
 
-function targetlessAdvice(kind: StationKind): string {
-  if (kind === 'small-sided-game' || kind === 'transition' || kind === 'duel')
-    return 'No goal or cones for a gate: score by stopping the ball on the end line.';
-  return 'No goal or cones for a gate: finish by passing into a marked end zone.';
+function targetlessAdvice(kind: StationKind, words: MarkingNotes): string {
+  if (kind === 'small-sided-game' || kind === 'transition' || kind === 'duel') return words.endLine;
+  return words.endZone;
 }
 
 function pushOnce(warnings: Notice[], code: string, message: string): void {

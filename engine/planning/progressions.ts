@@ -1,4 +1,5 @@
 /** Easier and harder steps for a station: the next area within the club's bounds, then the activity's own steps. */
+import '../../shared/i18n/localize';
 import type {
   ActivityDefinition,
   AgeBand,
@@ -52,10 +53,15 @@ export function progressionsFor(
   const from = describeArea(station.area);
   return {
     easier: easierArea
-      ? [`Area ${from} → ${describeArea(easierArea)}`, ...activity.easier]
+      ? [areaStep(from, describeArea(easierArea)), ...activity.easier]
       : [...activity.easier],
     harder: harderArea
-      ? [`Area ${from} → ${describeArea(harderArea)}`, ...activity.harder]
+      ? [areaStep(from, describeArea(harderArea)), ...activity.harder]
       : [...activity.harder],
   };
+}
+
+/** The area step a coach can take: "Area 14 m → 16 m". */
+function areaStep(from: string, to: string): string {
+  return $localize`:an easier or harder step for a station, its area from one size to another:Area ${from}:fromSize: → ${to}:toSize:`;
 }

@@ -3,9 +3,17 @@
  * re-fills the technical and opposed parts, each part gets its activities ranked, the coach's
  * pins and the club's required kinds find a place, and short slots lose their least important parts.
  */
+import '../../shared/i18n/localize';
 import type { ActivityDefinition, Focus, SessionSlot, SlotRole, StationKind } from '../../shared/types';
 import { ACTIVITY_KIND_LABELS, FOCUSES } from '../../shared/types';
-import { activityBlocked, activityById, kindBlocked, rankedActivities, type Ranked } from './activities';
+import {
+  activityBlocked,
+  activityById,
+  kindBlocked,
+  notEnoughForIt,
+  rankedActivities,
+  type Ranked,
+} from './activities';
 import { activityFeasible, type AllocationRules } from './allocation';
 import { addWarning, type BuildContext } from './context';
 
@@ -21,26 +29,40 @@ export interface SlotPlan {
   candidates: ActivityDefinition[];
 }
 
-const KIND_NAMES: Record<StationKind, string> = {
-  'ball-mastery': 'Ball mastery',
-  'tag-game': 'Tag game',
-  duel: '1v1 duels',
-  'receiving-turning': 'Receive and turn',
-  'passing-pattern': 'Passing practice',
-  'passing-finishing': 'Pass and finish',
-  'shooting-game': 'Shooting game',
-  'keep-ball': 'Keep-ball',
-  'directional-possession': 'Possession to a target',
-  transition: 'Transition game',
-  'small-sided-game': 'Small-sided game',
-  goalkeeping: 'Goalkeepers’ warm-up',
-  speed: 'Speed',
-  'movement-prep': 'Movement preparation',
-  'cool-down': 'Cool-down',
-};
-
+/** A part of the session named after the kind it plays. */
 export function nameFor(kind: StationKind): string {
-  return KIND_NAMES[kind];
+  switch (kind) {
+    case 'ball-mastery':
+      return $localize`:name of a part of the session:Ball mastery`;
+    case 'tag-game':
+      return $localize`:name of a part of the session:Tag game`;
+    case 'duel':
+      return $localize`:name of a part of the session:1v1 duels`;
+    case 'receiving-turning':
+      return $localize`:name of a part of the session:Receive and turn`;
+    case 'passing-pattern':
+      return $localize`:name of a part of the session:Passing practice`;
+    case 'passing-finishing':
+      return $localize`:name of a part of the session:Pass and finish`;
+    case 'shooting-game':
+      return $localize`:name of a part of the session:Shooting game`;
+    case 'keep-ball':
+      return $localize`:name of a part of the session:Keep-ball`;
+    case 'directional-possession':
+      return $localize`:name of a part of the session:Possession to a target`;
+    case 'transition':
+      return $localize`:name of a part of the session:Transition game`;
+    case 'small-sided-game':
+      return $localize`:name of a part of the session:Small-sided game`;
+    case 'goalkeeping':
+      return $localize`:name of a part of the session:Goalkeepers’ warm-up`;
+    case 'speed':
+      return $localize`:name of a part of the session:Speed`;
+    case 'movement-prep':
+      return $localize`:name of a part of the session:Movement preparation`;
+    case 'cool-down':
+      return $localize`:name of a part of the session:Cool-down`;
+  }
 }
 
 /** The training theme: the coach's first focus, else the one the team's recent plans used least. */
@@ -100,7 +122,7 @@ export function sessionSlots(
       ctx.trace.push({
         ruleId: 'engine.intensity',
         fired: true,
-        effect: `${slot.name}: left out, nothing for it is gentle enough today (intensity ${params.intensity.max} or less)`,
+        effect: $localize`${slot.name}:phaseName:: left out, nothing for it is gentle enough today (intensity ${params.intensity.max}:maxIntensity: or less)`,
       });
       decided[index] = null;
       continue;
@@ -112,7 +134,7 @@ export function sessionSlots(
         ctx.trace.push({
           ruleId: 'engine.phase-substitute',
           fired: true,
-          effect: `${slot.name}: ${kinds.map((k) => ACTIVITY_KIND_LABELS[k]).join(' or ')} could not be played (${whyNot(ctx, kinds[0])}), so ${ranked[0].activity.title}`,
+          effect: $localize`${slot.name}:phaseName:: ${eitherKind(kinds)}:kinds: could not be played (${whyNot(ctx, kinds[0])}:reason:), so ${ranked[0].activity.title}:activityTitle:`,
         });
       }
     }
@@ -120,7 +142,7 @@ export function sessionSlots(
       addWarning(
         ctx,
         'phase-dropped',
-        `No activity could fill “${slot.name}” for this group, so that part is left out.`,
+        $localize`No activity could fill “${slot.name}:phaseName:” for this group, so that part is left out.`,
       );
       decided[index] = null;
       continue;
@@ -149,7 +171,7 @@ export function sessionSlots(
     // Nothing in the shape can be played: everyone together in one grid (see sharedGridPhase).
     slots.push({
       role: 'arrival',
-      name: 'Everyone together',
+      name: $localize`:name of a part of the session:Everyone together`,
       kinds: [],
       share: 1,
       priority: 0,
@@ -208,7 +230,18 @@ function substituteKinds(ctx: BuildContext, kinds: StationKind[]): StationKind[]
 function whyNot(ctx: BuildContext, kind: StationKind): string {
   const blocked = kindBlocked(ctx.params, ctx.request.ageGroup, ctx.forbidden, kind);
   if (blocked) return blocked;
-  return 'too few players or not enough kit for it';
+  return notEnoughForIt();
+}
+
+/** Kinds in words as alternatives: "Keep-ball or Small-sided game". */
+function eitherKind(kinds: StationKind[]): string {
+  return kinds
+    .map((k) => ACTIVITY_KIND_LABELS[k])
+    .reduce(
+      (list, next) =>
+        list ? $localize`:one or another kind of activity:${list}:earlier: or ${next}:later:` : next,
+      '',
+    );
 }
 
 /** Pins go first in a part that plays their kind, else into a part of their own before the last. */
@@ -218,11 +251,14 @@ function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefin
   for (const id of request.pinnedActivityIds ?? []) {
     const a = activityById(params, id);
     const blocked = a
-      ? (activityBlocked(params, request.ageGroup, ctx.forbidden, a) ??
-        (fits(a) ? null : 'too few players or not enough kit for it'))
-      : 'not in the club’s activities';
+      ? (activityBlocked(params, request.ageGroup, ctx.forbidden, a) ?? (fits(a) ? null : notEnoughForIt()))
+      : $localize`:why an activity cannot be used today:not in the club’s activities`;
     if (!a || blocked) {
-      addWarning(ctx, 'pin-not-used', `${a?.title ?? id} was pinned but cannot be used today: ${blocked}.`);
+      addWarning(
+        ctx,
+        'pin-not-used',
+        $localize`${a?.title ?? id}:activityTitle: was pinned but cannot be used today: ${blocked}:reason:.`,
+      );
       continue;
     }
     let slot = slots.find((s) => !taken.has(s) && s.candidates.some((c) => c.kind === a.kind));
@@ -248,7 +284,7 @@ function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefin
     ctx.trace.push({
       ruleId: 'engine.pinned',
       fired: true,
-      effect: `${a.title} pinned by the coach: in “${slot.name}”`,
+      effect: $localize`${a.title}:activityTitle: pinned by the coach: in “${slot.name}:phaseName:”`,
     });
   }
 }
@@ -278,7 +314,7 @@ function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityD
     ctx.trace.push({
       ruleId: 'engine.required-phase',
       fired: true,
-      effect: `added ${ACTIVITY_KIND_LABELS[req.kind]}: ${req.reason}`,
+      effect: $localize`:a part added to the session because a club rule requires its kind:added ${ACTIVITY_KIND_LABELS[req.kind]}:kindName:: ${req.reason}:reason:`,
     });
   }
 }

@@ -1,4 +1,5 @@
 /** Plan-wide figures after the phases are built: kit needed, touches, active share, touch target. */
+import '../../shared/i18n/localize';
 import type { Equipment, Notice, Phase, Plan, RuleParameters } from '../../shared/types';
 import { estimateTouches } from './touches';
 
@@ -40,7 +41,7 @@ export function summarize(
     if (below > 0) {
       warnings.push({
         code: 'touches-below-target',
-        message: `Estimated touches: ${below} player(s) below ${target.minPerPlayer} (lowest ${Math.min(...values)}); aim at ${target.minPerPlayer}–${target.maxPerPlayer} before kick-off — more ball mastery or more balls would help.`,
+        message: $localize`Estimated touches: ${below}:players: player(s) below ${target.minPerPlayer}:minTouches: (lowest ${Math.min(...values)}:lowest:); aim at ${target.minPerPlayer}:aimFrom:–${target.maxPerPlayer}:aimTo: before kick-off — more ball mastery or more balls would help.`,
       });
     }
   }

@@ -2,7 +2,9 @@
  * Children per adult against the club's ratios, a helpful warning when the adults are too few
  * (or none), and how many stations can run at once: `stationsPerAdult` for each adult present.
  */
+import '../../shared/i18n/localize';
 import type { Notice, PlanRequest, RuleParameters, Supervision } from '../../shared/types';
+import { ageInSentence } from './activities';
 
 export function superviseRequest(
   request: PlanRequest,
@@ -27,25 +29,42 @@ export function superviseRequest(
     if (adults === 0) {
       warnings.push({
         code: 'no-adult',
-        message: `No adult entered for ${children} ${children === 1 ? 'child' : 'children'}. A session needs someone in charge, and the usual guidance is at least ${recommended} adults here (1 adult for every ${ratio.childrenPerAdult} at ${request.ageGroup}, never fewer than ${s.minAdults}).`,
+        message: $localize`No adult entered for ${childrenInWords(children)}:children:. A session needs someone in charge, and the usual guidance is at least ${recommended}:recommended: adults here (1 adult for every ${ratio.childrenPerAdult}:childrenPerAdult: at ${ageInSentence(request.ageGroup)}:ageGroup:, never fewer than ${s.minAdults}:minAdults:).`,
         source: s.source,
       });
     } else if (adults < recommended) {
       const more = recommended - adults;
+      const who = childrenInWords(children);
+      const age = ageInSentence(request.ageGroup);
+      const present = adultsInWords(adults);
+      const per = ratio.childrenPerAdult;
       warnings.push({
         code: 'supervision-ratio',
-        message: `${children} ${children === 1 ? 'child' : 'children'} at ${request.ageGroup} with ${adults} adult${adults === 1 ? '' : 's'}: the usual guidance is at least ${recommended} (1 for every ${ratio.childrenPerAdult}, never fewer than ${s.minAdults}). Ask ${more} parent${more === 1 ? '' : 's'} or helper${more === 1 ? '' : 's'} to stay: one can run a station, one can look after drinks, kit and anyone who gets hurt.`,
+        message:
+          more === 1
+            ? $localize`${who}:children: at ${age}:ageGroup: with ${present}:adults:: the usual guidance is at least ${recommended}:recommended: (1 for every ${per}:childrenPerAdult:, never fewer than ${s.minAdults}:minAdults:). Ask 1 parent or helper to stay: one can run a station, one can look after drinks, kit and anyone who gets hurt.`
+            : $localize`${who}:children: at ${age}:ageGroup: with ${present}:adults:: the usual guidance is at least ${recommended}:recommended: (1 for every ${per}:childrenPerAdult:, never fewer than ${s.minAdults}:minAdults:). Ask ${more}:more: parents or helpers to stay: one can run a station, one can look after drinks, kit and anyone who gets hurt.`,
         source: s.source,
       });
     }
   } else if (adults === 0) {
     warnings.push({
       code: 'no-adult',
-      message:
-        'No coach entered: the plan assumes one person runs it, with at most ' +
-        s.stationsPerAdult +
-        ' stations at once.',
+      message: $localize`No coach entered: the plan assumes one person runs it, with at most ${s.stationsPerAdult}:stations: stations at once.`,
     });
   }
   return { supervision, warnings };
+}
+
+/** "1 child", "12 children". */
+function childrenInWords(n: number): string {
+  return n === 1 ? $localize`1 child` : $localize`${n}:count: children`;
+}
+
+/** Adults inside a sentence: "no adults", "1 adult", "3 adults". */
+export function adultsInWords(n: number): string {
+  if (n === 0) return $localize`:how many adults, inside a sentence:no adults`;
+  return n === 1
+    ? $localize`:how many adults, inside a sentence:1 adult`
+    : $localize`:how many adults, inside a sentence:${n}:count: adults`;
 }

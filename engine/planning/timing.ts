@@ -3,6 +3,7 @@
  * minutes that sum exactly; drinks breaks in the timeline at least every `drinksEveryMinutes`
  * (`heatDrinksEveryMinutes` in the heat), splitting a part that would run past one.
  */
+import '../../shared/i18n/localize';
 import type { ActivityDefinition, SlotRole, StationKind } from '../../shared/types';
 import type { BuildContext } from './context';
 import type { SlotPlan } from './session-shape';
@@ -47,16 +48,46 @@ export function planTimeline(ctx: BuildContext, slots: SlotPlan[]): PhaseSpec[] 
   ctx.trace.push({
     ruleId: 'engine.timing',
     fired: true,
-    effect: timeline.map((s) => `${s.name} ${s.endMinute - s.startMinute} min`).join(', '),
+    effect: timeline
+      .map(
+        (s) =>
+          $localize`:a part of the session and its minutes:${s.name}:phaseName: ${s.endMinute - s.startMinute}:minutes: min`,
+      )
+      .join(', '),
   });
   if (placed) {
     ctx.trace.push({
       ruleId: 'engine.drinks',
       fired: true,
-      effect: `${placed} drinks break${placed === 1 ? '' : 's'} of ${t.drinksMinutes} min: no stretch runs more than ${stretch} min without one${ctx.hot ? ' (heat)' : ''}`,
+      effect: drinksEffect(placed, t.drinksMinutes, stretch, ctx.hot),
     });
   }
   return timeline;
+}
+
+/** The drinks breaks placed, as a whole sentence for each case. */
+function drinksEffect(breaks: number, minutes: number, stretch: number, hot: boolean): string {
+  if (breaks === 1)
+    return hot
+      ? $localize`1 drinks break of ${minutes}:minutes: min: no stretch runs more than ${stretch}:stretch: min without one (heat)`
+      : $localize`1 drinks break of ${minutes}:minutes: min: no stretch runs more than ${stretch}:stretch: min without one`;
+  return hot
+    ? $localize`${breaks}:breaks: drinks breaks of ${minutes}:minutes: min: no stretch runs more than ${stretch}:stretch: min without one (heat)`
+    : $localize`${breaks}:breaks: drinks breaks of ${minutes}:minutes: min: no stretch runs more than ${stretch}:stretch: min without one`;
+}
+
+/** The name of a part's second half after a drinks break: "Passing practice (continued)". */
+export function continuedName(name: string): string {
+  return $localize`:a part of the session that goes on after a drinks break:${name}:phaseName: (continued)`;
+}
+
+/** The name without its "(continued)", in whatever order the language puts the two. */
+export function withoutContinued(name: string): string {
+  const [before, after] = continuedName('\u0000').split('\u0000');
+  if (after === undefined || (!before && !after)) return name;
+  const marked =
+    name.length >= before.length + after.length && name.startsWith(before) && name.endsWith(after);
+  return marked ? name.slice(before.length, name.length - after.length) : name;
 }
 
 /** When breaks and parts did not settle, the longest part absorbs the difference. */
@@ -94,7 +125,7 @@ function dropForTime(ctx: BuildContext, slots: SlotPlan[], minutes: number): Slo
     ctx.trace.push({
       ruleId: 'engine.short-slot',
       fired: true,
-      effect: `${minutes} min fits ${maxPhases} part(s) of ${ctx.params.timing.minPhaseMinutes}+ min: left out ${drop.name}`,
+      effect: $localize`${minutes}:minutes: min fits ${maxPhases}:parts: part(s) of ${ctx.params.timing.minPhaseMinutes}:minPhaseMinutes:+ min: left out ${drop.name}:phaseName:`,
     });
   }
   return kept;
@@ -166,7 +197,7 @@ function withBreaks(
   let played = 0;
   const push = (slot: SlotPlan, length: number, continues: boolean) => {
     out.push({
-      name: continues ? `${slot.name} (continued)` : slot.name,
+      name: continues ? continuedName(slot.name) : slot.name,
       slot: slot.role,
       candidates: slot.candidates,
       kinds: slot.kinds,
@@ -180,7 +211,9 @@ function withBreaks(
   };
   const drink = () => {
     out.push({
-      name: hot ? 'Drinks break (heat)' : 'Drinks break',
+      name: hot
+        ? $localize`:name of a drinks break taken for the heat:Drinks break (heat)`
+        : $localize`:name of a part of the session:Drinks break`,
       slot: 'break',
       candidates: [],
       startMinute: clock,

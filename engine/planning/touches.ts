@@ -3,8 +3,18 @@
  * by role: a goalkeeper handles, a defender presses, a server feeds — none gets an outfield
  * player's figure — and players waiting for a turn or a ball are not counted as busy.
  */
+import '../../shared/i18n/localize';
 import type { Phase, Plan, RuleParameters, Station, TouchRate } from '../../shared/types';
 
+/** What the touch figures are: shown beside them on the plan. */
+export function estimateNote(): string {
+  return $localize`Touches and active share are estimates from the club rules’ per-activity rates, not counts.`;
+}
+
+/**
+ * @deprecated Read once at load, so never translated: use `estimateNote()`. Kept only while
+ * engine/generate-plan.ts still reads it.
+ */
 export const ESTIMATE_NOTE =
   'Touches and active share are estimates from the club rules’ per-activity rates, not counts.';
 
