@@ -29,13 +29,21 @@ const KIT: (keyof Equipment)[] = ['balls', 'cones', 'bibs', 'goals'];
 function kitOver(key: keyof Equipment, phase: string, used: number, bag: number): string {
   switch (key) {
     case 'balls':
-      return $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses ${used}:used: balls; the bag has ${bag}:inBag:.`;
+      return used === 1
+        ? $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses 1 ball; the bag has ${bag}:inBag:.`
+        : $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses ${used}:used: balls; the bag has ${bag}:inBag:.`;
     case 'cones':
-      return $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses ${used}:used: cones; the bag has ${bag}:inBag:.`;
+      return used === 1
+        ? $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses 1 cone; the bag has ${bag}:inBag:.`
+        : $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses ${used}:used: cones; the bag has ${bag}:inBag:.`;
     case 'bibs':
-      return $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses ${used}:used: bibs; the bag has ${bag}:inBag:.`;
+      return used === 1
+        ? $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses 1 bib; the bag has ${bag}:inBag:.`
+        : $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses ${used}:used: bibs; the bag has ${bag}:inBag:.`;
     case 'goals':
-      return $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses ${used}:used: goals; the bag has ${bag}:inBag:.`;
+      return used === 1
+        ? $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses 1 goal; the bag has ${bag}:inBag:.`
+        : $localize`:a phase of the plan uses more kit than the bag holds:${phase}:phase: uses ${used}:used: goals; the bag has ${bag}:inBag:.`;
   }
 }
 
@@ -92,7 +100,10 @@ export function checkPlan(plan: Plan, ruleSet: RuleSetDocument = defaultRuleSet)
     if (phase.stations.length > maxStations) {
       notices.push({
         code: 'too-many-stations',
-        message: $localize`:more stations at once than the adults can oversee:${label}:phase:: ${phase.stations.length}:stations: stations at once with ${request.coaches}:adults: adult(s); one adult can oversee about ${params.supervision.stationsPerAdult}:perAdult:.`,
+        message:
+          request.coaches === 1
+            ? $localize`:more stations at once than the one adult can oversee:${label}:phase:: ${phase.stations.length}:stations: stations at once with 1 adult; one adult can oversee about ${params.supervision.stationsPerAdult}:perAdult:.`
+            : $localize`:more stations at once than the adults can oversee:${label}:phase:: ${phase.stations.length}:stations: stations at once with ${request.coaches}:adults: adults; one adult can oversee about ${params.supervision.stationsPerAdult}:perAdult:.`,
       });
     }
     const rects = phase.stations.map((s) => rectOf(s.position, s.area));

@@ -23,7 +23,7 @@ import { chooseTheme, sessionSlots } from './planning/session-shape';
 import { summarize } from './planning/summary';
 import { superviseRequest } from './planning/supervision';
 import { planTimeline } from './planning/timing';
-import { ESTIMATE_NOTE } from './planning/touches';
+import { estimateNote } from './planning/touches';
 import { createRng, generateSeed } from './random';
 import { defaultRuleSet } from './rule-sets';
 import { validatePlanRequest, type FieldError } from './schema/validate-plan-request';
@@ -85,7 +85,7 @@ export async function generatePlan(
     trace: ctx.trace,
     ruleSet: { id: compiled.document.id, version: compiled.document.version },
     seed,
-    estimateNote: ESTIMATE_NOTE,
+    estimateNote: estimateNote(),
     forbiddenActivities: outcome.forbidden,
     supervision: ctx.supervision,
   };

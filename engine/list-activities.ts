@@ -1,8 +1,7 @@
 /** The activities of a rule set for the swap menu and the library, each usable for the request or not, and why. */
-import '../shared/i18n/localize';
 import type { AgeGroup, Level, Plan, PlanRequest, RuleSetDocument, StationKind } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
-import { activityBlocked } from './planning/activities';
+import { activityBlocked, notEnoughForIt } from './planning/activities';
 import { activityFeasible } from './planning/allocation';
 import { effectiveParameters } from './planning/effective-parameters';
 import { defaultRuleSet } from './rule-sets';
@@ -56,7 +55,7 @@ export function listActivities(
           kit: request.equipment,
         })
           ? null
-          : $localize`:why an activity cannot be chosen for today's session:too few players or not enough kit for it`);
+          : notEnoughForIt());
       if (reason) {
         option.allowed = false;
         option.reason = reason;

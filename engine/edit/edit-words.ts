@@ -33,7 +33,9 @@ export const editWords = {
   },
   /** A swap whose activity does not fit. */
   swapNoFit(players: number): string {
-    return $localize`:why an activity cannot be used, ends a sentence that starts with the activity's title and cannot be used here:it does not fit the space or the kit for ${players}:players: players`;
+    return players === 1
+      ? $localize`:why an activity cannot be used, ends a sentence that starts with the activity's title and cannot be used here:it does not fit the space or the kit for 1 player`
+      : $localize`:why an activity cannot be used, ends a sentence that starts with the activity's title and cannot be used here:it does not fit the space or the kit for ${players}:players: players`;
   },
   /** A drinks break has nothing to swap. */
   get swapBreak(): string {

@@ -142,7 +142,12 @@ export async function replan(
       {
         ruleId: 'engine.replan',
         fired: true,
-        effect: $localize`:pitch-side re-plan after players arrive late or leave early, from a minute of the session:from minute ${change.fromMinute}:minute:: ${arrivals.length}:arrivals: arrive, ${changed.rosterChanges!.at(-1)!.removed.length}:leavers: leave; ${moved}:moved: player(s) change group`,
+        effect: replanEffect(
+          change.fromMinute,
+          arrivals.length,
+          changed.rosterChanges!.at(-1)!.removed.length,
+          moved,
+        ),
       },
     ],
   };
@@ -320,4 +325,11 @@ function movesBetween(before: Phase, after: Phase, phaseIndex: number): PlayerMo
   for (const [id, to] of now)
     if (!was.has(id)) moves.push({ playerId: id, fromStationId: null, toStationId: to, phaseIndex });
   return moves;
+}
+
+/** The why panel's line for a pitch-side re-plan: who came and went from a minute, and who moved. */
+function replanEffect(minute: number, arrived: number, left: number, moved: number): string {
+  return moved === 1
+    ? $localize`:pitch-side re-plan after players arrive late or leave early, from a minute of the session:from minute ${minute}:minute:: ${arrived}:arrivals: arrived, ${left}:leavers: left; 1 player changes group`
+    : $localize`:pitch-side re-plan after players arrive late or leave early, from a minute of the session:from minute ${minute}:minute:: ${arrived}:arrivals: arrived, ${left}:leavers: left; ${moved}:moved: players change group`;
 }

@@ -41,9 +41,18 @@ export function summarize(
     if (below > 0) {
       warnings.push({
         code: 'touches-below-target',
-        message: $localize`Estimated touches: ${below}:players: player(s) below ${target.minPerPlayer}:minTouches: (lowest ${Math.min(...values)}:lowest:); aim at ${target.minPerPlayer}:aimFrom:–${target.maxPerPlayer}:aimTo: before kick-off — more ball mastery or more balls would help.`,
+        message: touchesBelow(below, target, Math.min(...values)),
       });
     }
   }
   return { touches, activeShare, equipmentNeeded: equipmentNeeded(phases) };
+}
+
+/** The warning when some players' estimated touches fall short of the club's aim. */
+function touchesBelow(below: number, target: RuleParameters['touchTarget'], lowest: number): string {
+  const aimFrom = target.minPerPlayer;
+  const aimTo = target.maxPerPlayer;
+  return below === 1
+    ? $localize`Estimated touches: 1 player below ${aimFrom}:minTouches: (lowest ${lowest}:lowest:); aim at ${aimFrom}:aimFrom:–${aimTo}:aimTo: before kick-off — more ball mastery or more balls would help.`
+    : $localize`Estimated touches: ${below}:players: players below ${aimFrom}:minTouches: (lowest ${lowest}:lowest:); aim at ${aimFrom}:aimFrom:–${aimTo}:aimTo: before kick-off — more ball mastery or more balls would help.`;
 }

@@ -125,7 +125,10 @@ function dropForTime(ctx: BuildContext, slots: SlotPlan[], minutes: number): Slo
     ctx.trace.push({
       ruleId: 'engine.short-slot',
       fired: true,
-      effect: $localize`${minutes}:minutes: min fits ${maxPhases}:parts: part(s) of ${ctx.params.timing.minPhaseMinutes}:minPhaseMinutes:+ min: left out ${drop.name}:phaseName:`,
+      effect:
+        maxPhases === 1
+          ? $localize`:why a part of the session was left out, the session is too short:${minutes}:minutes: min fits 1 part of ${ctx.params.timing.minPhaseMinutes}:minPhaseMinutes:+ min: left out ${drop.name}:phaseName:`
+          : $localize`:why a part of the session was left out, the session is too short:${minutes}:minutes: min fits ${maxPhases}:parts: parts of ${ctx.params.timing.minPhaseMinutes}:minPhaseMinutes:+ min: left out ${drop.name}:phaseName:`,
     });
   }
   return kept;

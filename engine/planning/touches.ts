@@ -11,13 +11,6 @@ export function estimateNote(): string {
   return $localize`Touches and active share are estimates from the club rules’ per-activity rates, not counts.`;
 }
 
-/**
- * @deprecated Read once at load, so never translated: use `estimateNote()`. Kept only while
- * engine/generate-plan.ts still reads it.
- */
-export const ESTIMATE_NOTE =
-  'Touches and active share are estimates from the club rules’ per-activity rates, not counts.';
-
 export type TouchRole = 'outfield' | 'goalkeeper' | 'defender' | 'server';
 
 /** How a player's touches are counted at a station. */

@@ -234,7 +234,9 @@ function header(input: CardInput, at: MinuteText, timed: boolean): Content {
   const facts = [
     ageGroupLabel(request.ageGroup),
     LEVEL_LABELS[request.level],
-    $localize`:how many players the session is for:${players}:count: players`,
+    players === 1
+      ? $localize`:how many players the session is for:1 player`
+      : $localize`:how many players the session is for:${players}:count: players`,
     request.coaches === 1
       ? $localize`:how many coaches run the session:1 coach`
       : $localize`:how many coaches run the session:${request.coaches}:count: coaches`,

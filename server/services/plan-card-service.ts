@@ -184,7 +184,9 @@ function shareText(
           '',
         ]
       : []),
-    $localize`:e-mail that shares a plan, before its list of phases:${minutes}:minutes: minutes, ${players}:players: players:`,
+    players === 1
+      ? $localize`:e-mail that shares a plan, before its list of phases:${minutes}:minutes: minutes, 1 player:`
+      : $localize`:e-mail that shares a plan, before its list of phases:${minutes}:minutes: minutes, ${players}:players: players:`,
     ...lines,
     '',
     $localize`:e-mail that shares a plan:The printable card is attached (PDF).`,
