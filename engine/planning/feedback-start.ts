@@ -126,9 +126,11 @@ export function feedbackTrace(ctx: BuildContext, starts: FeedbackStart[], phases
     const group = start.forGroup;
     const verdict = start.verdict ? verdictWords(start.verdict) : '';
     const description = !start.verdict
-      ? group
-        ? $localize`A club rule starts ${title}:station: ${size}:size: than usual today, scaled to each group’s size.`
-        : $localize`A club rule starts ${title}:station: ${size}:size: than usual today.`
+      ? change === 0
+        ? $localize`A club rule starts ${title}:station: at its usual size today.`
+        : group
+          ? $localize`A club rule starts ${title}:station: ${size}:size: than usual today, scaled to each group’s size.`
+          : $localize`A club rule starts ${title}:station: ${size}:size: than usual today.`
       : stuck
         ? group
           ? $localize`Last time ${title}:station: was marked ${verdict}:verdict: for groups of ${group}:groupSize:, but its area is already at the club’s limit, so it is the same size today.`

@@ -11,9 +11,11 @@ const ALL = LANGUAGES.map((language) => language.code);
  * language on screen.
  */
 export function languageFor(req: Request, offered: readonly string[] = ALL): LanguageCode {
-  const chosen = chosenLanguage(req.headers.cookie);
+  // The error handler asks too, and must answer even for a request that never fully arrived.
+  const headers = req.headers ?? {};
+  const chosen = chosenLanguage(headers.cookie);
   if (chosen && offered.includes(chosen)) return chosen;
-  const accepted = req.headers['accept-language'] ? req.acceptsLanguages(...offered) : false;
+  const accepted = headers['accept-language'] ? req.acceptsLanguages(...offered) : false;
   return (accepted || (offered.includes(SOURCE_LANGUAGE) ? SOURCE_LANGUAGE : offered[0])) as LanguageCode;
 }
 

@@ -32,12 +32,33 @@ function quoted(cell: string): string {
   return chars.length > MAX_QUOTED ? `${chars.slice(0, MAX_QUOTED).join('')}…` : cell;
 }
 
-// Column headings are compared in lower case with anything but letters removed.
-const NAME_HEADERS = ['name', 'displayname', 'player', 'playername', 'fullname', 'child'];
+// Column headings are compared in lower case with anything but letters removed. A file is read
+// the same whatever the reader's language: English and Spanish headings and answers both count.
+const NAME_HEADERS = [
+  'name',
+  'displayname',
+  'player',
+  'playername',
+  'fullname',
+  'child',
+  'nombre',
+  'jugador',
+];
 const FIRST_HEADERS = ['firstname', 'givenname', 'forename'];
-const FAMILY_HEADERS = ['lastname', 'familyname', 'surname'];
-const KEEPER_HEADERS = ['goalkeeper', 'gk', 'keeper', 'goalie', 'playsingoal'];
-const YES = ['yes', 'y', 'true', '1', 'gk', 'x'];
+const FAMILY_HEADERS = ['lastname', 'familyname', 'surname', 'apellido'];
+const KEEPER_HEADERS = [
+  'goalkeeper',
+  'gk',
+  'keeper',
+  'goalie',
+  'playsingoal',
+  'portero',
+  'portera',
+  'arquero',
+];
+/** "Nombre" beside "Apellidos" is the first name (Spanish lists keep the family names apart). */
+const GIVEN_NAME_ALONE = 'nombre';
+const YES = ['yes', 'y', 'true', '1', 'gk', 'x', 'sí', 'si', 's'];
 const NO = ['no', 'n', 'false', '0', ''];
 const DELIMITERS = [',', ';', '\t'];
 
@@ -222,12 +243,15 @@ interface Columns {
 
 function findColumns(header: string[]): Columns {
   const find = (list: string[]) => header.findIndex((cell) => matches(list, cell));
-  return {
+  const columns = {
     name: find(NAME_HEADERS),
     first: find(FIRST_HEADERS),
     family: find(FAMILY_HEADERS),
     keeper: find(KEEPER_HEADERS),
   };
+  if (columns.name >= 0 && columns.family >= 0 && headingKey(header[columns.name]!) === GIVEN_NAME_ALONE)
+    return { ...columns, name: -1, first: columns.name };
+  return columns;
 }
 
 function fullName(cells: string[], columns: Columns): string {

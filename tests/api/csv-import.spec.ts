@@ -93,6 +93,21 @@ describe('CSV roster import', () => {
     expect(await names()).toEqual(['Ben T.', 'Ifeoma', 'Maya O.', 'Théo L.']);
   });
 
+  it('reads a Spanish club list: “Nombre” and “Apellidos” make the name, “Portero” with sí or no', async () => {
+    const csv = ['Nombre;Apellidos;Portero', 'Lucía;Ferrer;Sí', 'Mateo;Ruiz;no', 'Inés;Marín;quizá'].join(
+      '\n',
+    );
+    const response = await preview(upload(csv), club.coach.token, teamId);
+    expect(response.status, response.text).toBe(200);
+    expect(response.body.rows.map((r: Row) => [r.displayName, r.goalkeeper])).toEqual([
+      ['Lucía F.', true],
+      ['Mateo R.', false],
+    ]);
+    expect(response.body.errors.map((e: { row: number; field: string }) => [e.row, e.field])).toEqual([
+      [4, 'goalkeeper'],
+    ]);
+  });
+
   it('refuses a commit whose lines differ from the preview', async () => {
     const response = await preview(upload('Name\nNia K.\nOwen P.\n'));
     expect(response.body.rows).toHaveLength(2);

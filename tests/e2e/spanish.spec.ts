@@ -7,6 +7,8 @@
 import { readFileSync } from 'node:fs';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import defaultRules from '../../rules/default-rule-set.json';
+import startingRulesInSpanish from '../../rules/words/es.json';
 import { DEMO_PASSWORD } from '../../server/seed';
 import { DESKTOP, launchBrowser, PHONE, planDrawn, screenshot, type TestBrowser } from './support/browser';
 
@@ -30,6 +32,12 @@ function spanish(english: string): string {
 
 /** English words that must not be left on a Spanish screen (each is translated in the file). */
 const ENGLISH = ['This week', 'Plan a session', 'Sign out', 'Coaching points', 'Make it easier'];
+
+/** The starting rules' activity titles and coaching points, in English and in Spanish. */
+const ACTIVITIES = defaultRules.parameters.activities;
+const RULE_WORDS: Record<string, string> = startingRulesInSpanish;
+const englishActivityWords = ACTIVITIES.flatMap((a) => [a.title, ...a.coachingPoints]);
+const spanishTitles = ACTIVITIES.map((a) => RULE_WORDS[a.title]!);
 
 describe('a coach in Spanish', () => {
   const baseUrl = inject('baseUrl');
@@ -80,6 +88,9 @@ describe('a coach in Spanish', () => {
     const text = await page.locator('main').innerText();
     expect(text).toContain(spanish('Coaching points'));
     for (const english of ENGLISH) expect(text, english).not.toContain(english);
+    // The activities come from the club's starting rules, read in Spanish.
+    expect(spanishTitles.filter((title) => text.includes(title)).length).toBeGreaterThan(0);
+    expect(englishActivityWords.filter((words) => text.includes(words))).toEqual([]);
   });
 
   it('switches to English on the account page, and back to Spanish', async () => {
