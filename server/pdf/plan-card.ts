@@ -338,7 +338,13 @@ function legend(plan: Plan): Content {
     columnGap: 2,
     fontSize: LEGEND_FONT,
     columns: [
-      { width: 18, text: $localize`:heading of the key to the card's diagrams:Key`, style: 'label' },
+      // As wide as the word needs: "Key" is short, another language's word may not be.
+      {
+        width: 'auto',
+        text: $localize`:heading of the key to the card's diagrams:Key`,
+        style: 'label',
+        margin: [0, 0, 4, 0],
+      },
       ...keys.flatMap((key): Column[] => {
         const label = words.get(key) ?? key;
         return [
