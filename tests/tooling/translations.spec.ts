@@ -52,6 +52,16 @@ describe.each([
     expect([...spanish.keys()].filter((id) => !source.has(id))).toEqual([]);
   });
 
+  it('has every translation looked at again when its English changed', () => {
+    // The merge keeps the old translation of a reworded message and marks it state="new".
+    const stale = [
+      ...readFileSync(new URL(`../../${folder}/messages.es.xlf`, import.meta.url), 'utf8').matchAll(
+        /<trans-unit id="([^"]+)"[^>]*>(?:(?!<\/trans-unit>)[\s\S])*?<target state="new"/g,
+      ),
+    ].map((m) => `${m[1]}: ${source.get(m[1]!)?.source}`);
+    expect(stale).toEqual([]);
+  });
+
   it('keeps each message’s placeholders and plural cases', () => {
     const broken = [...spanish.values()]
       .filter((u) => u.target !== null)

@@ -30,7 +30,7 @@ export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'
         <strong>{{ name }}</strong>
       </p>
       <ul class="cw-consequences">
-        <li i18n>The plan goes for everyone in the club, with its stations and groups.</li>
+        <li i18n>The plan is deleted for everyone in the club, with its stations and groups.</li>
         <li i18n>Who came and how each station went in this session are deleted with it.</li>
         <li i18n>The players stay on the team.</li>
       </ul>
