@@ -16,12 +16,6 @@ export function commonPasswordMessage(): string {
 }
 
 /**
- * The same words in the source language, read once at load (outside any request, so never
- * translated): for checks that compare the English answer. The server says commonPasswordMessage().
- */
-export const COMMON_PASSWORD_MESSAGE = commonPasswordMessage();
-
-/**
  * The most common passwords (about 49,000, from @zxcvbn-ts/language-common), lower-cased, held
  * in memory for the life of the process. OWASP ASVS 4.0 2.1.7: passwords are checked against a
  * set of breached or common passwords.

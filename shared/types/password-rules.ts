@@ -14,9 +14,3 @@ export const MIN_PASSWORD_LENGTH = 12;
 export function passwordHint(): string {
   return $localize`At least ${MIN_PASSWORD_LENGTH}:count: characters, and not one of the most common passwords.`;
 }
-
-/**
- * The same hint made once, when the module loads: for the app, whose build for each language
- * already holds its words. Code on the server calls `passwordHint()`, which follows the request.
- */
-export const PASSWORD_HINT: string = passwordHint();

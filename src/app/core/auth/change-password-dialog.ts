@@ -8,7 +8,7 @@ import { switchMap } from 'rxjs';
 import { AuthApi } from '../api/auth-api';
 import { applyFieldErrors, controlMessage } from '../forms/form-errors';
 import { problemFieldErrors, problemMessage } from '../http/problem-message';
-import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
+import { MIN_PASSWORD_LENGTH, passwordHint } from '../../../../shared/types/password-rules';
 import { AuthStore } from './auth-store';
 
 const LABELS = {
@@ -83,7 +83,7 @@ export class ChangePasswordDialog {
   private readonly authApi = inject(AuthApi);
   private readonly auth = inject(AuthStore);
   protected readonly labels = LABELS;
-  protected readonly passwordHint = PASSWORD_HINT;
+  protected readonly passwordHint = passwordHint();
   protected readonly form = inject(NonNullableFormBuilder).group({
     currentPassword: ['', [Validators.required]],
     newPassword: ['', [Validators.required, Validators.minLength(MIN_PASSWORD_LENGTH)]],

@@ -12,7 +12,7 @@ import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { ROLE_IN_A_SENTENCE } from '../../core/labels/role-labels';
-import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
+import { MIN_PASSWORD_LENGTH, passwordHint } from '../../../../shared/types/password-rules';
 
 const LABELS = { name: $localize`Your name`, password: $localize`Password` };
 
@@ -49,7 +49,7 @@ export class AcceptInvitationPage {
     password: ['', [Validators.required, Validators.minLength(MIN_PASSWORD_LENGTH)]],
   });
   protected readonly labels = LABELS;
-  protected readonly passwordHint = PASSWORD_HINT;
+  protected readonly passwordHint = passwordHint();
   protected readonly error = signal<string | null>(null);
   /** Why the link cannot be used (incomplete, used or expired): the page then offers no form. */
   protected readonly linkProblem = signal<string | null>(null);

@@ -10,7 +10,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
-import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
+import { MIN_PASSWORD_LENGTH, passwordHint } from '../../../../shared/types/password-rules';
 
 const LABELS = {
   clubName: $localize`Club name`,
@@ -46,7 +46,7 @@ export class CreateClubPage {
     password: ['', [Validators.required, Validators.minLength(MIN_PASSWORD_LENGTH)]],
   });
   protected readonly labels = LABELS;
-  protected readonly passwordHint = PASSWORD_HINT;
+  protected readonly passwordHint = passwordHint();
   protected readonly error = signal<string | null>(null);
   protected readonly sending = signal(false);
   protected readonly message = controlMessage;

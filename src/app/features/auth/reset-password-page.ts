@@ -10,7 +10,7 @@ import type { Observable } from 'rxjs';
 import { AuthApi } from '../../core/api/auth-api';
 import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
-import { MIN_PASSWORD_LENGTH, PASSWORD_HINT } from '../../../../shared/types/password-rules';
+import { MIN_PASSWORD_LENGTH, passwordHint } from '../../../../shared/types/password-rules';
 
 const LABELS = { email: $localize`E-mail`, password: $localize`New password` } as const;
 
@@ -42,7 +42,7 @@ export class ResetPasswordPage {
   /** The e-mailed link's token, or null when the page was opened to ask for a link. */
   protected readonly token = signal<string | null>(null);
   protected readonly labels = LABELS;
-  protected readonly passwordHint = PASSWORD_HINT;
+  protected readonly passwordHint = passwordHint();
   protected readonly askForm = this.formBuilder.group({
     email: ['', [Validators.required, Validators.email]],
   });
