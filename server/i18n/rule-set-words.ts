@@ -41,3 +41,26 @@ export function inReaderWords<T extends object>(document: T, language = currentL
 export function inSourceWords<T>(document: T): T {
   return mapRuleSetWords(document, sourceOf);
 }
+
+/**
+ * One change of a rule set (a JSON pointer and what it said before and after) in the reader's
+ * words: a history line shows the starting rules' sentences in the reader's language too.
+ */
+export function changeInReaderWords<C extends { path: string; before?: unknown; after?: unknown }>(
+  change: C,
+): C {
+  const segments = change.path.split('/').filter(Boolean);
+  const inList = /^\d+$/.test(segments.at(-1) ?? '');
+  const key = (inList ? segments.at(-2) : segments.at(-1)) ?? '';
+  const read = (value: unknown) => {
+    if (value === undefined) return value;
+    const wrapped = { [key]: inList ? [value] : value };
+    const translated = inReaderWords(wrapped)[key];
+    return inList ? (translated as unknown[])[0] : translated;
+  };
+  return {
+    ...change,
+    ...('before' in change ? { before: read(change.before) } : {}),
+    ...('after' in change ? { after: read(change.after) } : {}),
+  };
+}

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import defaultRules from '../../rules/default-rule-set.json';
 import { ruleSetWords } from '../../shared/i18n/rule-set-words';
-import { inReaderWords, inSourceWords, RULE_WORDS } from './rule-set-words';
+import { changeInReaderWords, inReaderWords, inSourceWords, RULE_WORDS } from './rule-set-words';
 import { currentLanguage, inLanguage, installTranslations, readXliff } from './translations';
 
 describe('the server in the reader’s language', () => {
@@ -65,5 +65,28 @@ describe('the starting rules’ words', () => {
     expect(inSourceWords(read)).toEqual(clubs);
     expect(inReaderWords(clubs, 'es')).toBe(read);
     expect(inReaderWords(clubs, 'en')).toBe(clubs);
+  });
+
+  it('reads a history line of the rules in the reader’s words, whatever part of the rules it touched', () => {
+    const first = defaultRules.parameters.activities[0]!;
+    const lines = [
+      {
+        path: '/parameters/activities/0/coachingPoints/1',
+        change: 'changed',
+        before: first.coachingPoints[1],
+        after: 'Ours',
+      },
+      { path: '/parameters/activities/0/title', change: 'changed', before: first.title, after: first.title },
+      { path: '/parameters/activities/0', change: 'removed', before: first },
+      { path: '/parameters/groupSizes/keep-ball/beginner/max', change: 'changed', before: 6, after: 5 },
+    ];
+    const read = inLanguage('es', () => lines.map(changeInReaderWords));
+    expect(read[0]).toEqual({ ...lines[0], before: spanish[first.coachingPoints[1]!], after: 'Ours' });
+    expect(read[1]!.after).toBe(spanish[first.title]);
+    expect((read[2]!.before as typeof first).coachingPoints).toEqual(
+      first.coachingPoints.map((p) => spanish[p]),
+    );
+    expect(read[3]).toEqual(lines[3]);
+    expect(lines.map(changeInReaderWords)).toEqual(lines);
   });
 });

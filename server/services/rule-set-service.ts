@@ -18,7 +18,7 @@ import type { AuthContext } from '../http/auth-context';
 import { DetailedProblem } from '../http/detailed-problem';
 import { badRequest, conflict } from '../http/problem';
 import { ClubScope } from './club-scope';
-import { inReaderWords, inSourceWords } from '../i18n/rule-set-words';
+import { changeInReaderWords, inReaderWords, inSourceWords } from '../i18n/rule-set-words';
 import { defaultRules, ruleSetErrors } from './engine-port';
 import { jsonDiff } from './json-diff';
 import { documentOf } from './rules-resolver';
@@ -193,7 +193,7 @@ export class RuleSetService {
       authorId: r.authorId,
       authorName: r.authorName,
       changedPaths: r.changedPaths,
-      ...(r.changes ? { changes: r.changes as RuleSetDiffEntry[] } : {}),
+      ...(r.changes ? { changes: (r.changes as RuleSetDiffEntry[]).map(changeInReaderWords) } : {}),
       createdAt: r.createdAt.toISOString(),
     }));
   }
@@ -233,7 +233,11 @@ export class RuleSetService {
     const [a, b] = [await this.resolve(manager, auth, from), await this.resolve(manager, auth, to)];
     // The id and version inside a document always differ between versions; they are not rule changes.
     const strip = (d: RuleSetDocument) => ({ ...d, id: undefined, version: undefined });
-    return { from: a.ref, to: b.ref, changes: jsonDiff(strip(a.body), strip(b.body)) };
+    return {
+      from: a.ref,
+      to: b.ref,
+      changes: jsonDiff(strip(a.body), strip(b.body)).map(changeInReaderWords),
+    };
   }
 
   /** Resolves 'default', 'published' or an id of the caller's club (404 otherwise). */
