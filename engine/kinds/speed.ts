@@ -43,10 +43,13 @@ export const speed: KindModule = {
       { u: c.u, v: along },
     ]);
     const extra = layout === 'race-to-ball' ? centres.map((c) => ({ u: c.u, v: along / 2 })) : [];
+    // A pair stands side by side in its lane, far enough apart to be told apart on a diagram
+    // (a quarter of the lane either side of its middle, at most 1.5 m); a third waits between them.
+    const apart = Math.min(across / lanes / 4, 1.5);
     const stand = Array.from({ length: total }, (_, i) => {
-      const c = centres[Math.min(Math.floor(i / 2), lanes - 1)];
-      const side = i % 2 === 0 ? -0.5 : 0.5;
-      return { u: c.u + side + (i >= lanes * 2 ? 0.5 : 0), v: i >= lanes * 2 ? 0.2 : 1 };
+      const c = centres[Math.min(Math.floor(i / 2), lanes - 1)]!;
+      if (i >= lanes * 2) return { u: c.u, v: 0.2 };
+      return { u: c.u + (i % 2 === 0 ? -apart : apart), v: 1 };
     });
     return {
       essential,
