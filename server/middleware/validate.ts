@@ -6,6 +6,7 @@ import addFormats from 'ajv-formats';
 import type { RequestHandler } from 'express';
 import { PROJECT_ROOT } from '../config';
 import { badRequest, type FieldError } from '../http/problem';
+import { schemaWords } from '../../shared/i18n/schema-words';
 
 /** The JSON Schemas shared with the client: shared/schemas/api/<name>.schema.json. */
 export const API_SCHEMA_DIR = join(PROJECT_ROOT, 'shared', 'schemas', 'api');
@@ -43,13 +44,13 @@ function compiled(ajv: Ajv, name: string): ValidateFunction {
 
 /**
  * A message the schema words itself: `"messages": { "<keyword>": "…" }` beside the keyword, in a
- * coach's words (ajv's own, such as "must match pattern", are for developers). These are the
- * schema's data, in the source language.
+ * coach's words (ajv's own, such as "must match pattern", are for developers). The schema holds
+ * them in the source language; the reader gets them in theirs (shared/i18n/schema-words.ts).
  */
 function schemaMessage(error: ErrorObject): string | undefined {
   const messages = (error.parentSchema as { messages?: Record<string, unknown> } | undefined)?.messages;
   const message = messages?.[error.keyword];
-  return typeof message === 'string' ? message : undefined;
+  return typeof message === 'string' ? schemaWords(message) : undefined;
 }
 
 /** Turns ajv errors into one entry per field, named by its path (e.g. "players/3/id"). */

@@ -12,6 +12,7 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import startingRulesInSpanish from '../../rules/words/es.json';
 import { inLanguage } from '../../server/i18n/translations';
+import { schemaWords } from '../../shared/i18n/schema-words';
 import type { Plan } from '../../shared/types';
 import type { SessionPlanDto } from '../../shared/types/api';
 import {
@@ -165,5 +166,15 @@ describe('the API in Spanish', () => {
     );
     expect(es.body.errors[0].message).not.toBe(en.body.errors[0].message);
     expect(chosen.body.title).toBe(es.body.title);
+    // A problem the request schema words itself reads in Spanish too.
+    const badTag = await app.api.call('PATCH', '/api/auth/me', {
+      body: { locale: 'not a tag' },
+      token: club.coach.token,
+      headers: SPANISH,
+    });
+    expect(badTag.status).toBe(400);
+    const words = inLanguage('es', () => schemaWords('must be a language tag such as en-GB'));
+    expect(words).not.toBe('must be a language tag such as en-GB');
+    expect(badTag.body.errors).toContainEqual({ field: 'locale', message: words });
   });
 });

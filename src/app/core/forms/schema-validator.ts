@@ -1,4 +1,5 @@
 import type { ErrorObject } from 'ajv';
+import { schemaWords } from '../../../../shared/i18n/schema-words';
 
 /** Field path ("email", "usualSpace.width") → a message in plain words. */
 export type FieldErrors = Record<string, string>;
@@ -100,7 +101,8 @@ function plainMessage(error: ErrorObject, label: string): string {
       if (params['format'] === 'time') return $localize`${label}:field: must be a time like 10:30.`;
       return $localize`${label}:field: is not in the expected form.`;
     case 'pattern': {
-      const description = (error.parentSchema as { description?: string } | undefined)?.description;
+      const written = (error.parentSchema as { description?: string } | undefined)?.description;
+      const description = written && schemaWords(written);
       return description
         ? $localize`:A field's name, then the schema's words on how to write it:${label}:field:: ${description}:rule:`
         : $localize`${label}:field: is not in the expected form.`;
