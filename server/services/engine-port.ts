@@ -55,8 +55,12 @@ async function guarded<T>(work: () => T | Promise<T>): Promise<T> {
         error.errors.map((e) => ({ field: join('request', e.field), message: e.message })),
       );
     }
-    // The engine throws RangeError for a phase, station or player the plan does not have.
-    if (error instanceof RangeError) throw badRequest(error.message);
+    // The engine throws RangeError for a phase, station or player the plan does not have: the
+    // page asking was opened on an older plan. Its ids are for developers, not for the coach.
+    if (error instanceof RangeError)
+      throw badRequest(
+        $localize`That part of the plan is no longer there: the plan has changed since this page was opened. Reload the plan and try again.`,
+      );
     throw error;
   }
 }

@@ -202,6 +202,9 @@ describe('/api/plans', () => {
       { token: home.coach.token },
     );
     expect(response.status).toBe(400);
+    // Said in words, without the engine's ids.
+    expect(response.body.detail).toMatch(/Reload the plan/);
+    expect(response.text).not.toContain('no-such-station');
   });
 
   it('never answers 5xx to junk bodies', async () => {
