@@ -66,9 +66,14 @@ async function waitUntilGone(folder: string): Promise<boolean> {
   return !postgresRunningIn(folder);
 }
 
+/** The processes of PostgreSQL (or its tools) working on `folder`, as ps lists them. */
+function postgresIn(folder: string): string[] {
+  const ps = spawnSync('ps', ['-eo', 'pid,stat,etime,args'], { encoding: 'utf8' }).stdout;
+  return ps.split('\n').filter((line) => line.includes('postgres') && line.includes(folder));
+}
+
 function postgresRunningIn(folder: string): boolean {
-  const ps = spawnSync('ps', ['-eo', 'args'], { encoding: 'utf8' }).stdout;
-  return ps.split('\n').some((line) => line.includes('postgres') && line.includes(folder));
+  return postgresIn(folder).length > 0;
 }
 
 describe('npm start', () => {
@@ -98,7 +103,10 @@ describe('npm start', () => {
     } finally {
       await interrupt(first);
     }
-    expect(await waitUntilGone(dataDir)).toBe(true);
+    expect(
+      await waitUntilGone(dataDir),
+      `still running:\n${postgresIn(dataDir).join('\n')}\n--- npm start said:\n${first.output()}`,
+    ).toBe(true);
     expect(first.output()).toContain('SIGINT: stopping');
 
     const second = await npmStart(port);
