@@ -124,6 +124,10 @@ describe('activity library', () => {
     await page.getByRole('heading', { name: 'Plan a session' }).waitFor();
     await page.getByTestId('team-select').click();
     await page.getByRole('option', { name: new RegExp(TEAM) }).click();
+    // The squad arrives after the team is chosen: the first step is only complete with it.
+    await expect
+      .poll(() => page.getByTestId('present-count').textContent(), { timeout: 15_000 })
+      .toMatch(/\b(1[0-9]|[1-9]) here/);
     await page.getByRole('button', { name: 'Next: kit and space' }).click();
     await page.getByRole('button', { name: 'Next: time and aim' }).click();
     await page.getByRole('button', { name: 'Next: the plan' }).click();
