@@ -270,8 +270,11 @@ function header(input: CardInput, at: MinuteText, timed: boolean): Content {
 /** One row of phase cells, widths proportional to their minutes, ending at kick-off for a warm-up. */
 function timeline(plan: Plan, at: MinuteText, width: number): Content {
   const total = Math.max(planLength(plan.phases), 1);
-  const endCell = plan.request.kind === 'match-warm-up' ? 46 : 0;
-  const usable = width - endCell - plan.phases.length * 4;
+  const endCell = plan.request.kind === 'match-warm-up' ? 40 : 0;
+  // A table is as wide as its columns plus each cell's padding (4 + 4) and the lines between
+  // them (2 each, one more than the columns): all of it inside the page.
+  const columns = plan.phases.length + (endCell ? 1 : 0);
+  const usable = width - endCell - columns * 10 - 2;
   const cells: TableCell[] = plan.phases.map((phase) => ({
     fillColor: isBreak(phase) ? BREAK_TINT : TINT[Math.min(Math.max((phase.intensity ?? 2) - 1, 0), 4)],
     stack: [
@@ -298,7 +301,7 @@ function timeline(plan: Plan, at: MinuteText, width: number): Content {
         { text: $localize`:the end of a match warm-up on the card's timeline:Kick-off`, style: 'small' },
       ],
     });
-    fitted.push(endCell - 4);
+    fitted.push(endCell);
   }
   return {
     margin: [0, 0, 0, 4],
