@@ -1,5 +1,5 @@
 /**
- * Starts only the HTTP server and the outbox sender, configured from the environment:
+ * Starts only the HTTP server, the outbox sender and the retention purge, configured from the environment:
  * DATABASE_URL (required), PORT, HOST, JWT_SECRET, PUBLIC_URL, SMTP_HOST, SMTP_PORT, MAIL_FROM
  * (SEND_MAIL=false leaves mail queued). Run several of these on one database behind a load
  * balancer; each is stateless. `npm start` (server/start.ts) is the one-command local setup.
@@ -9,6 +9,7 @@ import { connectAndMigrate, createDataSource } from './data-source';
 import { startHttpServer } from './http-server';
 import { startMailSender } from './mail-hooks';
 import { mailSettingsFromEnv } from './mail/mail-settings';
+import { startRetentionJob } from './services/retention-service';
 
 const databaseUrl = process.env['DATABASE_URL'];
 if (!databaseUrl) {
@@ -33,6 +34,11 @@ const http = await startHttpServer({
 });
 const mailSender =
   process.env['SEND_MAIL'] === 'false' ? null : startMailSender({ dataSource, mail: mailSettingsFromEnv() });
+// Every instance runs the purge on a timer; an advisory lock lets one purge at a time.
+const retention = startRetentionJob({
+  dataSource,
+  onError: (error) => console.error('[conewise] retention purge failed:', (error as Error).message),
+});
 console.log(`[conewise] API listening on ${http.url}`);
 if (!process.env['JWT_SECRET']) {
   console.log(
@@ -46,6 +52,7 @@ async function stop(signal: string): Promise<void> {
   stopping = true;
   console.log(`[conewise] ${signal}: stopping`);
   await mailSender?.stop();
+  await retention.stop();
   await http.close();
   await dataSource.destroy();
   process.exit(0);

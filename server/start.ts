@@ -14,6 +14,7 @@ import { startMailSender, type Stoppable } from './mail-hooks';
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
 import { mailSettingsFromEnv } from './mail/mail-settings';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemo } from './seed';
+import { startRetentionJob } from './services/retention-service';
 
 const log = (message: string) => console.log(message);
 const cleanups: (() => Promise<unknown>)[] = [];
@@ -76,6 +77,11 @@ async function main(): Promise<void> {
   const mail = mailSettingsFromEnv(fake ? { host: '127.0.0.1', port: fake.port, secure: false } : {});
   const sender: Stoppable = startMailSender({ dataSource, mail });
   cleanups.push(() => sender.stop());
+  const retention = startRetentionJob({
+    dataSource,
+    onError: (error) => console.error('[conewise] retention purge failed:', (error as Error).message),
+  });
+  cleanups.push(() => retention.stop());
 
   const config = loadConfig({ staticDir: CLIENT_DIST, jwtSecret });
   let http: RunningHttpServer;

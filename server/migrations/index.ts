@@ -17,6 +17,7 @@ import { SignInThrottle1764640000000 } from './1764640000000-sign-in-throttle';
 import { RateLimitHits1764641000000 } from './1764641000000-rate-limit-hits';
 import { RuleChangeValues1764645000000 } from './1764645000000-rule-change-values';
 import { Units1764644000000 } from './1764644000000-units';
+import { Retention1764646000000 } from './1764646000000-retention';
 
 /** Migrations in the order they run. Add each new one here (no globs under ESM). */
 export const MIGRATIONS = [
@@ -39,4 +40,5 @@ export const MIGRATIONS = [
   UserLocale1764643000000,
   Units1764644000000,
   RuleChangeValues1764645000000,
+  Retention1764646000000,
 ];

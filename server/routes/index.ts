@@ -2,6 +2,7 @@ import { Router } from 'express';
 import type { ApiDeps } from './api-deps';
 import { authRouter } from './auth';
 import { calendarRouter } from './calendar';
+import { clubRetentionRouter } from './club-retention';
 import { clubUnitsRouter } from './club-units';
 import { healthRouter } from './health';
 import { helperLinksRouter } from './helper-links';
@@ -38,5 +39,6 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(scheduleRouter(deps));
   api.use(calendarRouter(deps));
   api.use(clubUnitsRouter(deps));
+  api.use(clubRetentionRouter(deps));
   return api;
 }

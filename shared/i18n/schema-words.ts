@@ -54,6 +54,8 @@ const WORDS: Readonly<Record<string, () => string>> = {
     $localize`:a field's problem, after the field's name:must be a whole number of days`,
   'must be a whole number of minutes': () =>
     $localize`:a field's problem, after the field's name:must be a whole number of minutes`,
+  'must be a whole number of seasons from 1 to 10': () =>
+    $localize`:a field's problem, after the field's name:must be a whole number of seasons from 1 to 10`,
   "must be an activity's id": () =>
     $localize`:a field's problem, after the field's name:must be an activity's id`,
   'must be an object with the list of activities to pin': () =>

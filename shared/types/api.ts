@@ -27,6 +27,12 @@ export interface UserDto {
 /** The club's unit setting, as GET and PUT /api/club/units answer it. */
 export type ClubUnitsDto = Units;
 
+/** How long the club keeps plans, attendance and feedback, as GET and PUT /api/club/retention answer it. */
+export interface ClubRetentionDto {
+  /** Whole seasons of 365 days, 1 to 10 (3 for a new club). */
+  seasons: number;
+}
+
 export interface AuthResponse {
   token: string;
   user: UserDto;
