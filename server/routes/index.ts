@@ -4,6 +4,7 @@ import { authRouter } from './auth';
 import { calendarRouter } from './calendar';
 import { clubRetentionRouter } from './club-retention';
 import { clubUnitsRouter } from './club-units';
+import { dataExportRouter } from './data-export';
 import { healthRouter } from './health';
 import { helperLinksRouter } from './helper-links';
 import { invitationsRouter } from './invitations';
@@ -39,6 +40,7 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(scheduleRouter(deps));
   api.use(calendarRouter(deps));
   api.use(clubUnitsRouter(deps));
+  api.use(dataExportRouter(deps));
   api.use(clubRetentionRouter(deps));
   return api;
 }
