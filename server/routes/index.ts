@@ -1,8 +1,10 @@
 import { Router } from 'express';
 import type { ApiDeps } from './api-deps';
+import { accountDeletionRouter } from './account-deletion';
 import { authRouter } from './auth';
 import { calendarRouter } from './calendar';
 import { clubRetentionRouter } from './club-retention';
+import { clubDeletionRouter } from './club-deletion';
 import { clubUnitsRouter } from './club-units';
 import { dataExportRouter } from './data-export';
 import { healthRouter } from './health';
@@ -40,6 +42,8 @@ export function createApiRouter(deps: ApiDeps): Router {
   api.use(scheduleRouter(deps));
   api.use(calendarRouter(deps));
   api.use(clubUnitsRouter(deps));
+  api.use(accountDeletionRouter(deps));
+  api.use(clubDeletionRouter(deps));
   api.use(dataExportRouter(deps));
   api.use(clubRetentionRouter(deps));
   return api;

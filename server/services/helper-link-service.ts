@@ -9,6 +9,7 @@ import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
 import type { AuthContext } from '../http/auth-context';
 import { conflict, forbidden, HttpError, notFound } from '../http/problem';
+import { formerMember } from './account-erasure';
 import { ClubScope } from './club-scope';
 import { firstNames } from './first-names';
 import { clubTimeZone } from './schedule-service';
@@ -125,7 +126,7 @@ export class HelperLinkService {
         ORDER BY link."createdAt" DESC`,
       [plan.id, plan.clubId],
     );
-    return rows.map((row) => toDto(row, row.createdByName));
+    return rows.map((row) => toDto(row, row.createdByName ?? formerMember()));
   }
 
   /** Stops a link at once; stopping it twice is harmless. */

@@ -10,6 +10,7 @@ import { Team } from '../entities/team';
 import { User } from '../entities/user';
 import { badRequest, conflict, HttpError, notFound } from '../http/problem';
 import { AuthService, hashPassword, normaliseEmail } from './auth-service';
+import { eraseAccount } from './account-erasure';
 import type { ClubScope } from './club-scope';
 import { refuseOverDailyLimit } from './daily-mail-limit';
 import { INVITATION_MAIL, type MailQueue } from './mail-queue';
@@ -148,7 +149,7 @@ export class MemberService {
           $localize`${club}:clubName: needs at least one head of coaching. Make someone else head of coaching first, then remove this member.`,
         );
       // A user belongs to one club, so leaving it removes the account; their plans stay.
-      await manager.getRepository(User).delete({ id: membership.userId });
+      await eraseAccount(manager, membership.userId);
     });
   }
 

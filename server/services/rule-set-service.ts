@@ -17,6 +17,7 @@ import { User } from '../entities/user';
 import type { AuthContext } from '../http/auth-context';
 import { DetailedProblem } from '../http/detailed-problem';
 import { badRequest, conflict } from '../http/problem';
+import { formerMember } from './account-erasure';
 import { ClubScope } from './club-scope';
 import { changeInReaderWords, inReaderWords, inSourceWords } from '../i18n/rule-set-words';
 import { defaultRules, ruleSetErrors } from './engine-port';
@@ -191,7 +192,7 @@ export class RuleSetService {
       version: r.version,
       revision: r.revision,
       authorId: r.authorId,
-      authorName: r.authorName,
+      authorName: r.authorId === null ? formerMember() : r.authorName,
       changedPaths: r.changedPaths,
       ...(r.changes ? { changes: (r.changes as RuleSetDiffEntry[]).map(changeInReaderWords) } : {}),
       createdAt: r.createdAt.toISOString(),
@@ -367,7 +368,7 @@ export function ruleSetDto(row: RuleSet & { author?: User | null }): RuleSetDto 
     status: row.status,
     body: inReaderWords(row.body as RuleSetDocument),
     authorId: row.authorId ?? '',
-    authorName: row.author?.name ?? '',
+    authorName: row.author?.name ?? formerMember(),
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
     revision: row.revision,
