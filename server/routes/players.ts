@@ -67,6 +67,7 @@ export function playersRouter({ dataSource, config, requireAuth }: ApiDeps): Rou
   router.patch('/players/:id', requireAuth, id, validate({ body: 'player-update' }), async (req, res) => {
     res.json(await players(req).update(req.params['id'] as string, req.body));
   });
+  // Erases the child: row, attendance, and their name in the club's plans, notes and unsent mail.
   router.delete('/players/:id', requireAuth, id, async (req, res) => {
     await players(req).remove(req.params['id'] as string);
     res.status(204).end();

@@ -150,7 +150,8 @@ function sharedLine(row: SessionPlan, team: Team, sender: string, when: string |
     : $localize`:first line of the e-mail that shares a plan:${sender}:sender: shared the training session for ${teamName}:teamName: with you.`;
 }
 
-function cardFilename(row: SessionPlan, team: Team): string {
+/** The card's file name, as downloaded and as attached to an e-mail. */
+export function cardFilename(row: Pick<SessionPlan, 'date'>, team: Pick<Team, 'name'>): string {
   const slug =
     team.name
       .toLowerCase()

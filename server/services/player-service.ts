@@ -2,6 +2,7 @@ import { Not, type EntityManager } from 'typeorm';
 import type { PlayerDto } from '../../shared/types/api';
 import { Player } from '../entities/player';
 import type { ClubScope } from './club-scope';
+import { erasePlayer } from './player-erase';
 import { assertNameFree, cleanName, TakenNames } from './player-names';
 
 export function playerDto(player: Player): PlayerDto {
@@ -78,9 +79,12 @@ export class PlayerService {
     return playerDto(await this.repo.save(player));
   }
 
-  async remove(id: string): Promise<void> {
-    const player = await this.scope.player(id);
-    await this.scope.teamToManage(player.teamId);
-    await this.repo.delete({ id: player.id, clubId: this.scope.clubId });
+  /**
+   * Erases the player from Conewise (player-erase.ts): removing a child always takes their name
+   * out of the club's plans too; a coach who only wants them off the list for a while turns off
+   * Active instead.
+   */
+  async remove(id: string): Promise<{ label: string }> {
+    return erasePlayer(this.scope, id);
   }
 }

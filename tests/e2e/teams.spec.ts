@@ -87,7 +87,7 @@ describe('teams', () => {
     ['phone', PHONE],
     ['desktop', DESKTOP],
   ] as const) {
-    it(`a coach removes a player from the squad and the count drops (${label})`, async () => {
+    it(`a coach erases a player from Conewise and the count drops (${label})`, async () => {
       const coach = await club.login(U8_COACH);
       const { team, players: squad } = await club.team(coach, 'U8 Foxes');
       // A player of our own, so the demo squad other specs rely on stays as it was.
@@ -98,7 +98,7 @@ describe('teams', () => {
         { token: coach.token },
       );
       expect(created.status).toBe(201);
-      // The dialog says past plans keep the name: a plan with the player in it, to check that.
+      // The dialog says old plans stay with a neutral label: a plan with the player in it, to check that.
       const past = await club.plan(coach, team, [...squad, created.body]);
 
       const page = await pageAs(coach, viewport, `/teams/${team.id}`);
@@ -107,26 +107,30 @@ describe('teams', () => {
       // The team's own coach may delete it, as the API allows (after typing its name).
       expect(await page.getByRole('button', { name: 'Delete team' }).count()).toBe(1);
 
-      await page.getByRole('button', { name: `Remove ${displayName} from the squad` }).click();
-      const dialog = page.getByRole('dialog', { name: `Remove ${displayName} from the squad?` });
+      await page.getByRole('button', { name: `Erase ${displayName} from Conewise` }).click();
+      const dialog = page.getByRole('dialog', { name: `Erase ${displayName} from Conewise?` });
       await dialog.waitFor();
-      expect(await dialog.textContent()).toContain('Past plans still show the name.');
+      expect(await dialog.textContent()).toContain('Old plans stay and still print');
       await settled(page);
       await screenshot(page, 'team-remove-player');
       expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
-      await dialog.getByRole('button', { name: 'Remove player' }).click();
+      await dialog.getByRole('button', { name: 'Erase from Conewise' }).click();
       await dialog.waitFor({ state: 'detached' });
       await page.getByRole('cell', { name: displayName, exact: true }).waitFor({ state: 'detached' });
       await expect.poll(() => activeCount(page)).toBe(before - 1);
-      await page.getByText(`${displayName} removed from the squad.`).first().waitFor();
+      await page.getByText(`${displayName} erased from Conewise.`).first().waitFor();
 
       const players = await club.api.get<PlayerDto[]>(`/api/teams/${team.id}/players?includeInactive=true`, {
         token: coach.token,
       });
       expect(players.body.map((p) => p.id)).not.toContain(created.body.id);
       const plan = await club.api.get<SessionPlanDto>(`/api/plans/${past.id}`, { token: coach.token });
-      expect(plan.body.request.players).toContainEqual(expect.objectContaining({ name: displayName }));
+      // The old plan stays, with a neutral label where the name stood.
+      expect(plan.body.request.players).not.toContainEqual(expect.objectContaining({ name: displayName }));
+      expect(plan.body.request.players).toContainEqual(
+        expect.objectContaining({ name: expect.stringMatching(/^Former player \d+$/) }),
+      );
       await page.close();
     });
 

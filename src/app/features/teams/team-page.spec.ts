@@ -97,18 +97,21 @@ describe('TeamPage', () => {
     localStorage.clear();
   });
 
-  it('a coach of the team removes a player after reading what happens, and the row goes', async () => {
+  it('a coach of the team erases a player after reading what goes and what stays, and the row goes', async () => {
     const { fixture, http, root } = await setUp('coach');
-    button(root, 'Remove Rui M. from the squad').click();
+    button(root, 'Erase Rui M. from Conewise').click();
     await settle(fixture);
 
     const text = dialog()!.textContent!;
-    expect(text).toContain('Remove Rui M. from the squad?');
-    expect(text).toContain('Past plans still show the name.');
+    expect(text).toContain('Erase Rui M. from Conewise?');
+    expect(text).toContain('their attendance ticks are deleted');
+    expect(text).toContain('Old plans stay and still print');
+    expect(text).toContain('“Former player” and a number');
+    expect(text).toContain('have not gone out yet are not sent');
     expect(text).toContain('Switch off Active instead');
     http.expectNone('/api/players/p2');
 
-    button(dialog()!, 'Remove player').click();
+    button(dialog()!, 'Erase from Conewise').click();
     const request = http.expectOne('/api/players/p2');
     expect(request.request.method).toBe('DELETE');
     request.flush(null, { status: 204, statusText: 'No Content' });
@@ -122,7 +125,7 @@ describe('TeamPage', () => {
 
   it('keeping the player sends nothing and leaves the squad as it was', async () => {
     const { fixture, http, root } = await setUp('lead', 'lead-1');
-    button(root, 'Remove Ola K. from the squad').click();
+    button(root, 'Erase Ola K. from Conewise').click();
     await settle(fixture);
     button(dialog()!, 'Keep Ola K.').click();
     await settle(fixture);
@@ -131,13 +134,13 @@ describe('TeamPage', () => {
     expect(rowNames(root)).toEqual(['Ola K.', 'Rui M.', 'Tam J.']);
   });
 
-  it('a refused removal is shown in the dialog and the player stays', async () => {
+  it('a refused erasure is shown in the dialog and the player stays', async () => {
     const { fixture, http, root } = await setUp('coach');
-    button(root, 'Remove Tam J. from the squad').click();
+    button(root, 'Erase Tam J. from Conewise').click();
     await settle(fixture);
     // Tam is already inactive: no advice to switch Active off.
     expect(dialog()!.textContent).not.toContain('Switch off Active');
-    button(dialog()!, 'Remove player').click();
+    button(dialog()!, 'Erase from Conewise').click();
     http.expectOne('/api/players/p3').flush(
       {
         type: 'about:blank',
@@ -149,7 +152,7 @@ describe('TeamPage', () => {
     );
     await settle(fixture);
     expect(dialog()!.querySelector('[role=alert]')?.textContent).toContain('Only the head of coaching');
-    expect(button(dialog()!, 'Remove player').disabled).toBe(false);
+    expect(button(dialog()!, 'Erase from Conewise').disabled).toBe(false);
     expect(rowNames(root)).toContain('Tam J.');
   });
 
@@ -163,7 +166,7 @@ describe('TeamPage', () => {
       has((n) => n.endsWith('Plan a session')) && 'plan',
       has((n) => n.endsWith('Add a player')) && 'add player',
       has((n) => n === 'Edit Rui M.') && 'edit player',
-      has((n) => n === 'Remove Rui M. from the squad') && 'remove player',
+      has((n) => n === 'Erase Rui M. from Conewise') && 'remove player',
       root.querySelector('mat-checkbox, mat-slide-toggle') && 'player switches',
       root.textContent!.includes('Import players from a CSV file') && 'import',
       has((n) => n === 'Save kit bag') && 'save kit',

@@ -156,7 +156,7 @@ export class TeamPage {
         this.players.update((list) => list.filter((p) => p.id !== player.id));
         // The row and its button are gone; put focus somewhere that still exists.
         this.playersHeading()?.nativeElement.focus();
-        this.say($localize`${player.displayName}:playerName: removed from the squad.`);
+        this.say($localize`${player.displayName}:playerName: erased from Conewise.`);
       });
   }
 

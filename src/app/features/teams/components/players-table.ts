@@ -85,7 +85,7 @@ export class PlayersTable implements AfterViewInit {
 
   /** What a screen reader says for a row's remove button. */
   protected removeLabel(player: PlayerDto): string {
-    return $localize`Remove ${player.displayName}:playerName: from the squad`;
+    return $localize`Erase ${player.displayName}:playerName: from Conewise`;
   }
 
   protected applyFilter(text: string): void {

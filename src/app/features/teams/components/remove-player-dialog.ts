@@ -6,21 +6,24 @@ import { PlayersApi } from '../../../core/api/players-api';
 import { problemMessage } from '../../../core/http/problem-message';
 
 /**
- * Asks before a player is taken off the squad for good, and does it. Closes with `true` once the
- * server has removed the player; a refusal stays in the dialog so the coach can read it and retry.
+ * Asks before a player is erased from Conewise, saying what goes and what stays, and does it.
+ * Closes with `true` once the server has erased the player; a refusal stays in the dialog so the
+ * coach can read it and retry.
  */
 @Component({
   selector: 'cw-remove-player-dialog',
   imports: [MatDialogModule, MatButtonModule],
   template: `
-    <h2 mat-dialog-title i18n>Remove {{ player.displayName }} from the squad?</h2>
+    <h2 mat-dialog-title i18n>Erase {{ player.displayName }} from Conewise?</h2>
     <mat-dialog-content>
+      <p i18n>This takes {{ player.displayName }} out of Conewise for good.</p>
       <ul class="cw-consequences">
+        <li i18n>They go off the player list, and their attendance ticks are deleted.</li>
         <li i18n>
-          {{ player.displayName }} goes off the player list and is no longer offered for new plans.
+          Old plans stay and still print. Where a plan or a station note named {{ player.displayName }}, it
+          now says “Former player” and a number instead.
         </li>
-        <li i18n>Past plans still show the name.</li>
-        <li i18n>Their attendance ticks are deleted, so Team insight no longer counts them.</li>
+        <li i18n>E-mails that name them and have not gone out yet are not sent.</li>
       </ul>
       @if (player.active) {
         <p class="cw-tip" i18n>
@@ -46,7 +49,7 @@ import { problemMessage } from '../../../core/http/problem-message';
         (click)="removePlayer()"
         i18n
       >
-        Remove player
+        Erase from Conewise
       </button>
     </mat-dialog-actions>
   `,
