@@ -26,6 +26,7 @@ export const ICON_NAMES = [
   'content_copy',
   'delete',
   'devices',
+  'download',
   'edit',
   'error',
   'event',

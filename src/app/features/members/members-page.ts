@@ -24,6 +24,7 @@ import { AuthStore } from '../../core/auth/auth-store';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { momentDayWords, momentWords } from '../../core/locale/locale-format';
+import { DataDownload } from '../../shared/components/data-download';
 import { RoleChip } from '../../shared/components/role-chip';
 import { MemberRoleDialog, type MemberRoleData } from './components/member-role-dialog';
 import { MemberTeamsDialog, type MemberTeamsData } from './components/member-teams-dialog';
@@ -55,6 +56,7 @@ const DIALOG_SIZE = { width: '480px', maxWidth: 'calc(100vw - 32px)' };
     MatSelectModule,
     RoleChip,
     ClubUnits,
+    DataDownload,
   ],
   templateUrl: './members-page.html',
   styleUrl: './members-page.scss',

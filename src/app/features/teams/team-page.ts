@@ -35,6 +35,7 @@ import { TeamSchedule } from './components/team-schedule';
 import { canEditSchedule } from './schedule-permissions';
 import { READ_ONLY_NOTE, teamPermissions } from './team-permissions';
 import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
+import { DataDownload } from '../../shared/components/data-download';
 
 /** One team: its players, CSV import, kit bag and defaults, with the way into planning and out. */
 @Component({
@@ -52,6 +53,7 @@ import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
     TeamDefaultsForm,
     TeamStaff,
     TeamSchedule,
+    DataDownload,
   ],
   templateUrl: './team-page.html',
   styleUrl: './team-page.scss',
