@@ -61,7 +61,7 @@ const wrongPassword = () =>
     400,
     $localize`:title of an error answer:Wrong password`,
     $localize`Your password is not right, so your account was not deleted.`,
-    [{ field: 'password', message: $localize`:field error after the field's name:is not your password` }],
+    [{ field: 'password', message: $localize`:field error after the field's name:is not right` }],
     '/problems/wrong-password',
   );
 

@@ -234,7 +234,7 @@ describe('deleting an account and deleting a club', () => {
       body: { password: 'nope-nope-1' },
     });
     expect(wrong.status).toBe(400);
-    expect(wrong.body.errors).toEqual([{ field: 'password', message: 'is not your password' }]);
+    expect(wrong.body.errors).toEqual([{ field: 'password', message: 'is not right' }]);
     expect((await app.api.get('/api/auth/me', { token: second.token })).status).toBe(200);
 
     const gone = await app.api.delete('/api/auth/me', {

@@ -37,6 +37,11 @@ export class SignOut {
       });
   }
 
+  /** After the account or club is deleted on the server: clears the device, opens sign-in. */
+  afterDeletion(): Promise<void> {
+    return this.leave(true);
+  }
+
   private async leave(endedOnServer: boolean): Promise<void> {
     // Offline, the token still ends when it expires; clearing the device matters more.
     if (!endedOnServer) await firstValueFrom(this.authApi.signOut()).catch(() => undefined);

@@ -15,6 +15,7 @@ import { checkAgainstSchema } from '../../core/forms/schema-form';
 import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { ROLE_LABELS } from '../../core/labels/role-labels';
+import { DeleteAccount } from './delete-account';
 import { OwnUnits } from './own-units';
 import { LanguageChoice } from '../../core/locale/language-choice';
 
@@ -35,6 +36,7 @@ const LABELS = { name: $localize`Your name` } as const;
     MatInputModule,
     ...ICONS,
     OwnUnits,
+    DeleteAccount,
     LanguageChoice,
   ],
   templateUrl: './account-page.html',

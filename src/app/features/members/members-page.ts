@@ -30,6 +30,7 @@ import { MemberRoleDialog, type MemberRoleData } from './components/member-role-
 import { MemberTeamsDialog, type MemberTeamsData } from './components/member-teams-dialog';
 import { RemoveMemberDialog, type RemoveMemberData } from './components/remove-member-dialog';
 import { ClubUnits } from './components/club-units';
+import { DeleteClub } from './components/delete-club';
 import { ROLE_DESCRIPTIONS } from './role-descriptions';
 
 export { ROLE_DESCRIPTIONS };
@@ -56,6 +57,7 @@ const DIALOG_SIZE = { width: '480px', maxWidth: 'calc(100vw - 32px)' };
     MatSelectModule,
     RoleChip,
     ClubUnits,
+    DeleteClub,
     DataDownload,
   ],
   templateUrl: './members-page.html',
