@@ -109,6 +109,12 @@ export const routes: Routes = [
         component: SignInPage,
       },
       {
+        // Anyone may read it, signed in or not: the sign-in page and the account page link here.
+        path: 'privacy',
+        title: $localize`:Browser tab title:Children's data · Conewise`,
+        loadComponent: () => import('./features/privacy/privacy-page').then((m) => m.PrivacyPage),
+      },
+      {
         path: 'create-club',
         title: $localize`:Browser tab title:Create a club · Conewise`,
         canActivate: [signedOutGuard],

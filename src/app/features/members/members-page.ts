@@ -29,6 +29,7 @@ import { RoleChip } from '../../shared/components/role-chip';
 import { MemberRoleDialog, type MemberRoleData } from './components/member-role-dialog';
 import { MemberTeamsDialog, type MemberTeamsData } from './components/member-teams-dialog';
 import { RemoveMemberDialog, type RemoveMemberData } from './components/remove-member-dialog';
+import { ClubRetention } from './components/club-retention';
 import { ClubUnits } from './components/club-units';
 import { DeleteClub } from './components/delete-club';
 import { ROLE_DESCRIPTIONS } from './role-descriptions';
@@ -57,6 +58,7 @@ const DIALOG_SIZE = { width: '480px', maxWidth: 'calc(100vw - 32px)' };
     MatSelectModule,
     RoleChip,
     ClubUnits,
+    ClubRetention,
     DeleteClub,
     DataDownload,
   ],
