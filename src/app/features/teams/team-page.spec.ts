@@ -195,17 +195,24 @@ describe('TeamPage', () => {
     const { root } = await setUp('lead', 'lead-1');
     expect(changeControls(root)).toEqual(ALL_CONTROLS);
     expect(readOnlyNote(root)).toBeNull();
+    expect(root.querySelector('[data-testid="data-download"]')?.textContent?.trim()).toBe(
+      'Download this team’s data',
+    );
   });
 
   it('a coach attached to the team gets every control, delete included, as the API allows', async () => {
     const { root } = await setUp('coach', 'coach-1');
     expect(changeControls(root)).toEqual(ALL_CONTROLS);
     expect(readOnlyNote(root)).toBeNull();
+    expect(root.querySelector('[data-testid="data-download"]')?.textContent?.trim()).toBe(
+      'Download this team’s data',
+    );
   });
 
   it('a coach of another team sees the team read-only: no changing it, no deleting it', async () => {
     const { root } = await setUp('coach', 'coach-2');
     expect(changeControls(root)).toEqual([]);
+    expect(root.querySelector('[data-testid="data-download"]')).toBeNull();
     expect(readOnlyNote(root)).toBe('Only the head of coaching or this team’s coaches can change it.');
     // The same facts, as text: the squad's switches as Yes/No, kit and details under their labels.
     const rows = Array.from(root.querySelectorAll('tbody tr')).map((tr) =>
@@ -234,6 +241,7 @@ describe('TeamPage', () => {
   it('an assistant attached to the team sees it read-only too: helping is not changing', async () => {
     const { root } = await setUp('assistant', 'helper-1', { ...TEAM, coachIds: ['coach-1', 'helper-1'] });
     expect(changeControls(root)).toEqual([]);
+    expect(root.querySelector('[data-testid="data-download"]')).toBeNull();
     expect(readOnlyNote(root)).toBe('Only the head of coaching or this team’s coaches can change it.');
     // Reading stays open: past plans and insight.
     expect(root.querySelector('a[href="/teams/t1/plans"]')).not.toBeNull();
