@@ -77,6 +77,10 @@ const NOT_IN_A_BOUNDED_COLUMN = new Set([
   'invitation-accept.token',
   'invitation-lookup.token',
   'player-import-commit.importId',
+  // Compared and dropped: the password that confirms deleting an account, the club's name typed to
+  // confirm deleting it.
+  'account-delete.password',
+  'club-delete.clubName',
   // Looked up, not written.
   'auth-password-reset.email',
   'calendar-param.file',

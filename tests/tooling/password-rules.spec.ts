@@ -17,6 +17,7 @@ const NEW_PASSWORD_REF = 'common.schema.json#/definitions/password';
 const EXISTING_PASSWORD_FIELDS = [
   'api/auth-login.schema.json#password',
   'api/auth-password-change.schema.json#currentPassword',
+  'api/account-delete.schema.json#password',
 ];
 
 type Node = Record<string, unknown>;
