@@ -126,26 +126,12 @@ export async function erasePlayer(scope: ClubScope, playerId: string): Promise<{
     }
 
     const relabelled = (text: string) => relabel(text, names, label);
-    await relabelColumn(
-      manager,
-      'feedback',
-      'note',
-      ['id'],
-      '"clubId" = $1',
-      scope.clubId,
-      names,
-      relabelled,
-    );
-    await relabelColumn(
-      manager,
-      'outbox_message',
-      'subject',
-      ['id'],
-      '"clubId" = $1',
-      scope.clubId,
-      names,
-      relabelled,
-    );
+    for (const [table, column] of [
+      ['feedback', 'note'],
+      ['outbox_message', 'subject'],
+    ] as const) {
+      await relabelColumn(manager, table, column, ['id'], '"clubId" = $1', scope.clubId, names, relabelled);
+    }
     // Saved replies to repeated requests ("Add a player", a new plan) hold the name as sent.
     await relabelColumn(
       manager,

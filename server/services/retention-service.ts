@@ -1,4 +1,5 @@
 import type { DataSource, QueryRunner } from 'typeorm';
+import type { ClubRetentionDto } from '../../shared/types/api';
 import { Club } from '../entities/club';
 import { notFound } from '../http/problem';
 
@@ -39,14 +40,16 @@ const CLUB_CUTOFF = `($1::timestamptz - make_interval(days => c."keepSeasons" * 
 export class RetentionService {
   constructor(private readonly dataSource: DataSource) {}
 
-  async get(clubId: string): Promise<{ seasons: number }> {
+  async get(clubId: string): Promise<ClubRetentionDto> {
     const club = await this.dataSource.getRepository(Club).findOneBy({ id: clubId });
     if (!club) throw notFound('Club');
     return { seasons: club.keepSeasons };
   }
 
-  async set(clubId: string, seasons: number): Promise<{ seasons: number }> {
-    await this.dataSource.getRepository(Club).update({ id: clubId }, { keepSeasons: seasons });
+  /** Changes the setting (the body was checked against club-retention-update). */
+  async set(clubId: string, { seasons }: Partial<ClubRetentionDto>): Promise<ClubRetentionDto> {
+    if (seasons !== undefined)
+      await this.dataSource.getRepository(Club).update({ id: clubId }, { keepSeasons: seasons });
     return this.get(clubId);
   }
 

@@ -6,8 +6,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { switchMap } from 'rxjs';
 import { AuthApi } from '../api/auth-api';
-import { applyFieldErrors, controlMessage } from '../forms/form-errors';
-import { problemFieldErrors, problemMessage } from '../http/problem-message';
+import { controlMessage, showProblem } from '../forms/form-errors';
 import { MIN_PASSWORD_LENGTH, passwordHint } from '../../../../shared/types/password-rules';
 import { AuthStore } from './auth-store';
 
@@ -120,18 +119,7 @@ export class ChangePasswordDialog {
         },
         error: (error: unknown) => {
           this.busy.set(false);
-          // The server words most fields as a fragment ("is not your current password"): say
-          // whose. A whole sentence (a common password's reason) is shown as it is.
-          const fields = Object.fromEntries(
-            Object.entries(problemFieldErrors(error)).map(([field, text]) => [
-              field,
-              field in LABELS && /^[a-z]/.test(text)
-                ? $localize`:A field's name, then the server's words about it:${LABELS[field as keyof typeof LABELS]}:field: ${text}:problem:.`
-                : text,
-            ]),
-          );
-          const unmatched = applyFieldErrors(this.form, fields);
-          if (unmatched.length || !Object.keys(fields).length) this.error.set(problemMessage(error));
+          this.error.set(showProblem(this.form, error, LABELS));
         },
       });
   }

@@ -1,4 +1,5 @@
 import { AbstractControl, FormGroup } from '@angular/forms';
+import { problemFieldSentences, problemMessage } from '../http/problem-message';
 import type { FieldErrors } from './schema-validator';
 
 /**
@@ -17,6 +18,21 @@ export function applyFieldErrors(form: FormGroup, errors: FieldErrors): string[]
     }
   }
   return unmatched;
+}
+
+/**
+ * Shows a refused save on its form: each field's message under its control, read after the
+ * field's label (`labels`, keyed by the server's field names). Returns the message for above the
+ * form: the whole problem when no field was named or a named field has no control; else null.
+ */
+export function showProblem(
+  form: FormGroup,
+  error: unknown,
+  labels: Readonly<Record<string, string>>,
+): string | null {
+  const fields = problemFieldSentences(error, labels);
+  const unmatched = applyFieldErrors(form, fields);
+  return unmatched.length || !Object.keys(fields).length ? problemMessage(error) : null;
 }
 
 /** The control a path names, else its nearest named parent ("recipients.2" → recipients). */

@@ -34,3 +34,25 @@ export function problemFieldErrors(error: unknown): Record<string, string> {
   for (const item of problem?.errors ?? []) result[item.field] = item.message;
   return result;
 }
+
+/**
+ * Field errors of a 400 problem as whole sentences, keyed by field name. The server words most
+ * fields as a fragment ("is not your password"): with a label for the field it reads after the
+ * label ("Your password is not your password."); a whole sentence (a capital first) stays as it is.
+ */
+export function problemFieldSentences(
+  error: unknown,
+  labels: Readonly<Record<string, string>>,
+): Record<string, string> {
+  return Object.fromEntries(
+    Object.entries(problemFieldErrors(error)).map(([field, text]) => {
+      const label = labels[field];
+      return [
+        field,
+        label && /^[a-z]/.test(text)
+          ? $localize`:A field's name, then the server's words about it:${label}:field: ${text}:problem:.`
+          : text,
+      ];
+    }),
+  );
+}

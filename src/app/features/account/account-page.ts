@@ -10,9 +10,8 @@ import { AuthApi } from '../../core/api/auth-api';
 import { AccountDialogs } from '../../core/auth/account-dialogs';
 import { AuthStore } from '../../core/auth/auth-store';
 import { SignOut } from '../../core/auth/sign-out';
-import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
+import { controlMessage, showProblem } from '../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../core/forms/schema-form';
-import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { ROLE_LABELS } from '../../core/labels/role-labels';
 import { DeleteAccount } from './delete-account';
@@ -91,17 +90,7 @@ export class AccountPage {
       },
       error: (error: unknown) => {
         this.saving.set(false);
-        // The server words a field as a fragment ("is needed"): say whose.
-        const fields = Object.fromEntries(
-          Object.entries(problemFieldErrors(error)).map(([field, text]) => [
-            field,
-            field === 'name'
-              ? $localize`:A field's name, then the server's words about it:${LABELS.name}:field: ${text}:problem:.`
-              : text,
-          ]),
-        );
-        const unmatched = applyFieldErrors(this.form, fields);
-        if (unmatched.length || !Object.keys(fields).length) this.error.set(problemMessage(error));
+        this.error.set(showProblem(this.form, error, LABELS));
       },
     });
   }

@@ -6,8 +6,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { DeletionApi } from '../../core/api/deletion-api';
 import { SignOut } from '../../core/auth/sign-out';
-import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
-import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { controlMessage, showProblem } from '../../core/forms/form-errors';
 import { DeleteAccountDialog } from './delete-account-dialog';
 
 const LABELS = { password: $localize`Your password` } as const;
@@ -102,17 +101,7 @@ export class DeleteAccount {
       next: () => void this.signOut.afterDeletion(),
       error: (error: unknown) => {
         this.busy.set(false);
-        // "is not your password" reads after the field's name.
-        const fields = Object.fromEntries(
-          Object.entries(problemFieldErrors(error)).map(([field, text]) => [
-            field,
-            field === 'password' && /^[a-z]/.test(text)
-              ? $localize`:A field's name, then the server's words about it:${LABELS.password}:field: ${text}:problem:.`
-              : text,
-          ]),
-        );
-        const unmatched = applyFieldErrors(this.form, fields);
-        if (unmatched.length || !Object.keys(fields).length) this.error.set(problemMessage(error));
+        this.error.set(showProblem(this.form, error, LABELS));
       },
     });
   }

@@ -1,7 +1,9 @@
-import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import type { UserDto } from '../../../../shared/types';
 import { DEFAULT_UNITS, DISTANCE_UNIT_WORDS, TEMPERATURE_UNIT_WORDS } from '../../../../shared/units';
 import { AuthApi } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
+import { InstantSave } from '../../core/forms/instant-save';
 import { FOLLOW_CLUB, UnitFields, unitProblem, type UnitPick } from '../../shared/components/unit-fields';
 
 const FIELD_WORDS: Record<string, string> = {
@@ -26,15 +28,15 @@ const FIELD_WORDS: Record<string, string> = {
       [distance]="distance()"
       [temperature]="temperature()"
       [club]="clubUnits()"
-      [disabled]="saving()"
+      [disabled]="setting.saving()"
       testIdPrefix="own"
       (picked)="save($event)"
     />
     <div aria-live="polite">
-      @if (saved()) {
+      @if (setting.saved()) {
         <p role="status" class="cw-muted" data-testid="units-saved" i18n>Saved: {{ savedWords() }}.</p>
       }
-      @if (error(); as text) {
+      @if (setting.error(); as text) {
         <p class="cw-form-error" role="alert">{{ text }}</p>
       }
     </div>
@@ -48,9 +50,7 @@ export class OwnUnits {
   protected readonly clubUnits = computed(() => this.auth.user()?.clubUnits ?? DEFAULT_UNITS);
   protected readonly distance = computed(() => this.auth.user()?.ownUnits?.distance ?? FOLLOW_CLUB);
   protected readonly temperature = computed(() => this.auth.user()?.ownUnits?.temperature ?? FOLLOW_CLUB);
-  protected readonly saving = signal(false);
-  protected readonly saved = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly setting = new InstantSave<UserDto>((error) => unitProblem(error, FIELD_WORDS));
   /** "yards and °F": what the person now reads. */
   protected readonly savedWords = computed(() => {
     const units = this.auth.user()?.units;
@@ -62,21 +62,10 @@ export class OwnUnits {
 
   /** Saves one choice ("club" goes back to following the club). */
   protected save(pick: UnitPick): void {
-    if (this.saving()) return;
-    this.saving.set(true);
-    this.saved.set(false);
-    this.error.set(null);
     const field = pick.quantity === 'distance' ? 'distanceUnit' : 'temperatureUnit';
-    this.authApi.changeOwnUnits({ [field]: pick.unit === FOLLOW_CLUB ? null : pick.unit }).subscribe({
-      next: (user) => {
-        this.auth.updateUser(user);
-        this.saving.set(false);
-        this.saved.set(true);
-      },
-      error: (error: unknown) => {
-        this.saving.set(false);
-        this.error.set(unitProblem(error, FIELD_WORDS));
-      },
-    });
+    this.setting.save(
+      () => this.authApi.changeOwnUnits({ [field]: pick.unit === FOLLOW_CLUB ? null : pick.unit }),
+      (user) => this.auth.updateUser(user),
+    );
   }
 }

@@ -14,16 +14,21 @@ import { ICONS } from '../../core/icons/shipped-icon';
   imports: [MatButtonModule, MatCardModule, ...ICONS],
   template: `
     <mat-card appearance="outlined" class="cw-data-download">
+      <mat-card-header>
+        @if (forTeam()) {
+          <h2 mat-card-title i18n="Heading: downloading everything kept about one team">This team’s data</h2>
+        } @else {
+          <h2 mat-card-title i18n="Heading: downloading everything the club keeps">The club’s data</h2>
+        }
+      </mat-card-header>
       <mat-card-content>
         @if (forTeam()) {
-          <h2 i18n="Heading: downloading everything kept about one team">This team’s data</h2>
           <p class="cw-muted" i18n>
             Everything Conewise keeps about this team in one ZIP file: its players, who came to each session,
             how the stations went, its coaches and assistants, and its plans. A note inside says what each
             file is.
           </p>
         } @else {
-          <h2 i18n="Heading: downloading everything the club keeps">The club’s data</h2>
           <p class="cw-muted" i18n>
             Everything Conewise keeps for the club in one ZIP file: teams, players, who came to each session,
             how the stations went, members, plans and the club rules with their history. A note inside says
@@ -57,6 +62,9 @@ import { ICONS } from '../../core/icons/shipped-icon';
     </mat-card>
   `,
   styles: `
+    :host {
+      display: block;
+    }
     .cw-data-download {
       margin-top: 1.5rem;
     }

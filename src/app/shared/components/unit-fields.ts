@@ -11,7 +11,7 @@ import {
   type TemperatureUnit,
   type Units,
 } from '../../../../shared/units';
-import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
+import { problemFieldSentences, problemMessage } from '../../core/http/problem-message';
 
 /** The select's value for "follow the club" (a select cannot hold null and show it). */
 export const FOLLOW_CLUB = 'club';
@@ -74,8 +74,9 @@ export type UnitPick =
       flex-wrap: wrap;
       gap: 0.75rem;
     }
+    // Side by side where both fit their longest choice ("As the club: Degrees Celsius (°C)").
     mat-form-field {
-      flex: 1 1 12rem;
+      flex: 1 1 16rem;
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -99,13 +100,6 @@ export class UnitFields {
 
 /** A refused unit change in words: "Distances must be metres or yards." (field names as the selects say). */
 export function unitProblem(error: unknown, fieldWords: Record<string, string>): string {
-  const fields = Object.entries(problemFieldErrors(error));
-  return fields.length
-    ? fields
-        .map(
-          ([name, text]) =>
-            $localize`:A field's name, then the server's words about it:${fieldWords[name] ?? name}:field: ${text}:problem:.`,
-        )
-        .join(' ')
-    : problemMessage(error);
+  const fields = Object.values(problemFieldSentences(error, fieldWords));
+  return fields.length ? fields.join(' ') : problemMessage(error);
 }

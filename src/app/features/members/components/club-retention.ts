@@ -1,11 +1,12 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectModule } from '@angular/material/select';
 import { RouterLink } from '@angular/router';
+import type { ClubRetentionDto } from '../../../../../shared/types/api';
 import { ClubRetentionApi } from '../../../core/api/club-retention-api';
-import { problemMessage } from '../../../core/http/problem-message';
+import { InstantSave } from '../../../core/forms/instant-save';
 
 /** The choices the server accepts (shared/schemas/api/club-retention-update.schema.json). */
 const SEASON_CHOICES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
@@ -30,13 +31,13 @@ const SEASON_CHOICES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
           than this (a season counts as 365 days). Download the club's data first if you want a copy.
           <a routerLink="/privacy">What Conewise keeps about children</a>.
         </p>
-        @if (seasons(); as current) {
+        @if (setting.value(); as current) {
           <mat-form-field appearance="outline" subscriptSizing="dynamic">
             <mat-label i18n>Keep plans and attendance for</mat-label>
             <mat-select
-              [ngModel]="current"
+              [ngModel]="current.seasons"
               (ngModelChange)="save($event)"
-              [disabled]="saving()"
+              [disabled]="setting.saving()"
               data-testid="club-retention-seasons"
             >
               @for (choice of choices; track choice) {
@@ -49,10 +50,10 @@ const SEASON_CHOICES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
           </mat-form-field>
         }
         <div aria-live="polite">
-          @if (saved()) {
+          @if (setting.saved()) {
             <p role="status" class="cw-muted" data-testid="club-retention-saved" i18n>Saved for the club.</p>
           }
-          @if (error(); as text) {
+          @if (setting.error(); as text) {
             <p class="cw-form-error" role="alert">{{ text }}</p>
           }
         </div>
@@ -62,6 +63,9 @@ const SEASON_CHOICES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
   styles: `
     .cw-club-retention {
       margin-top: 1.5rem;
+      mat-form-field {
+        width: min(100%, 20rem);
+      }
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -70,33 +74,14 @@ export class ClubRetention {
   private readonly api = inject(ClubRetentionApi);
 
   protected readonly choices = SEASON_CHOICES;
-  protected readonly seasons = signal<number | null>(null);
-  protected readonly saving = signal(false);
-  protected readonly saved = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly setting = new InstantSave<ClubRetentionDto>();
 
   constructor() {
-    this.api.get().subscribe({
-      next: (setting) => this.seasons.set(setting.seasons),
-      error: (error: unknown) => this.error.set(problemMessage(error)),
-    });
+    this.setting.load(this.api.get());
   }
 
   protected save(seasons: number): void {
-    if (this.saving() || seasons === this.seasons()) return;
-    this.saving.set(true);
-    this.saved.set(false);
-    this.error.set(null);
-    this.api.set(seasons).subscribe({
-      next: (setting) => {
-        this.seasons.set(setting.seasons);
-        this.saving.set(false);
-        this.saved.set(true);
-      },
-      error: (error: unknown) => {
-        this.saving.set(false);
-        this.error.set(problemMessage(error));
-      },
-    });
+    if (seasons === this.setting.value()?.seasons) return;
+    this.setting.save(() => this.api.set(seasons));
   }
 }

@@ -1,10 +1,10 @@
-import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { MatCardModule } from '@angular/material/card';
 import type { Units } from '../../../../../shared/units';
 import { AuthApi } from '../../../core/api/auth-api';
 import { ClubUnitsApi } from '../../../core/api/club-units-api';
 import { AuthStore } from '../../../core/auth/auth-store';
-import { problemMessage } from '../../../core/http/problem-message';
+import { InstantSave } from '../../../core/forms/instant-save';
 import { FOLLOW_CLUB, UnitFields, unitProblem, type UnitPick } from '../../../shared/components/unit-fields';
 
 const FIELD_WORDS: Record<string, string> = {
@@ -32,20 +32,20 @@ const FIELD_WORDS: Record<string, string> = {
           pitch-side, the printed card and e-mails. Anyone can choose their own on their account page. Plans
           are the same whatever you choose.
         </p>
-        @if (units(); as current) {
+        @if (setting.value(); as current) {
           <cw-unit-fields
             [distance]="current.distance"
             [temperature]="current.temperature"
-            [disabled]="saving()"
+            [disabled]="setting.saving()"
             testIdPrefix="club"
             (picked)="save($event)"
           />
         }
         <div aria-live="polite">
-          @if (saved()) {
+          @if (setting.saved()) {
             <p role="status" class="cw-muted" data-testid="club-units-saved" i18n>Saved for the club.</p>
           }
-          @if (error(); as text) {
+          @if (setting.error(); as text) {
             <p class="cw-form-error" role="alert">{{ text }}</p>
           }
         </div>
@@ -64,38 +64,21 @@ export class ClubUnits {
   private readonly authApi = inject(AuthApi);
   private readonly auth = inject(AuthStore);
 
-  protected readonly units = signal<Units | null>(null);
-  protected readonly saving = signal(false);
-  protected readonly saved = signal(false);
-  protected readonly error = signal<string | null>(null);
+  protected readonly setting = new InstantSave<Units>((error) => unitProblem(error, FIELD_WORDS));
 
   constructor() {
-    this.api.get().subscribe({
-      next: (units) => this.units.set(units),
-      error: (error: unknown) => this.error.set(problemMessage(error)),
-    });
+    this.setting.load(this.api.get());
   }
 
   /** Saves one unit for the club, then reads the signed-in person again so every screen follows. */
   protected save(pick: UnitPick): void {
     // The club's own setting offers no "as the club" choice.
-    if (this.saving() || pick.unit === FOLLOW_CLUB) return;
-    this.saving.set(true);
-    this.saved.set(false);
-    this.error.set(null);
+    if (pick.unit === FOLLOW_CLUB) return;
     const change: Partial<Units> =
       pick.quantity === 'distance' ? { distance: pick.unit } : { temperature: pick.unit };
-    this.api.set(change).subscribe({
-      next: (units) => {
-        this.units.set(units);
-        this.saving.set(false);
-        this.saved.set(true);
-        this.authApi.me().subscribe({ next: (user) => this.auth.updateUser(user) });
-      },
-      error: (error: unknown) => {
-        this.saving.set(false);
-        this.error.set(unitProblem(error, FIELD_WORDS));
-      },
-    });
+    this.setting.save(
+      () => this.api.set(change),
+      () => this.authApi.me().subscribe({ next: (user) => this.auth.updateUser(user) }),
+    );
   }
 }

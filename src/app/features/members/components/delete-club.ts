@@ -7,8 +7,9 @@ import { MatInputModule } from '@angular/material/input';
 import { DeletionApi } from '../../../core/api/deletion-api';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { SignOut } from '../../../core/auth/sign-out';
-import { applyFieldErrors } from '../../../core/forms/form-errors';
-import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
+import { showProblem } from '../../../core/forms/form-errors';
+
+const LABELS = { clubName: $localize`The club's name` } as const;
 
 /**
  * The danger zone of the Members page (head of coaching only): the whole club goes for good once
@@ -96,16 +97,7 @@ export class DeleteClub {
       next: () => void this.signOut.afterDeletion(),
       error: (error: unknown) => {
         this.busy.set(false);
-        const fields = Object.fromEntries(
-          Object.entries(problemFieldErrors(error)).map(([field, text]) => [
-            field,
-            /^[a-z]/.test(text)
-              ? $localize`:A field's name, then the server's words about it:${$localize`The club's name`}:field: ${text}:problem:.`
-              : text,
-          ]),
-        );
-        const unmatched = applyFieldErrors(this.form, fields);
-        if (unmatched.length || !Object.keys(fields).length) this.error.set(problemMessage(error));
+        this.error.set(showProblem(this.form, error, LABELS));
       },
     });
   }
