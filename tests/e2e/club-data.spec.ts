@@ -7,10 +7,10 @@
 import { randomUUID } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import JSZip from 'jszip';
-import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AuthResponse, PlayerDto, TeamDto } from '../../shared/types';
 import {
+  animationsSettled,
   DESKTOP,
   launchBrowser,
   PHONE,
@@ -76,29 +76,8 @@ describe("children's data", () => {
     return registered.body;
   }
 
-  /** A page signed in as `auth`, with no earlier session left in the shared profile. */
-  async function pageAs(auth: AuthResponse, viewport: { width: number; height: number }, path: string) {
-    const page = await browser.newPage(viewport);
-    await page.goto(baseUrl + '/');
-    await page.evaluate(() => localStorage.removeItem('conewise.session'));
-    await club.open(page, auth, path);
-    return page;
-  }
-
-  /** Waits until dialogs, menus and field messages have finished animating. */
-  async function settled(page: Page): Promise<void> {
-    await page.waitForFunction(() =>
-      document
-        .getAnimations()
-        .every((a) => a.playState !== 'running' || a.effect?.getTiming().iterations === Infinity),
-    );
-  }
-
   it('the privacy page opens from the sign-in page, signed out, and says who sees what and for how long', async () => {
-    const page = await browser.newPage(PHONE);
-    await page.goto(baseUrl + '/');
-    await page.evaluate(() => localStorage.removeItem('conewise.session'));
-    await page.goto(`${baseUrl}/sign-in`);
+    const page = await club.newPage(browser, null, PHONE, '/sign-in');
     await page.getByRole('link', { name: "Children's data and privacy" }).click();
     await page.waitForURL(/\/privacy$/);
     await page.getByRole('heading', { name: "Children's data in Conewise", level: 1 }).waitFor();
@@ -129,7 +108,7 @@ describe("children's data", () => {
     );
     expect(player.status).toBe(201);
 
-    const page = await pageAs(lead, PHONE, '/club/members');
+    const page = await club.newPage(browser, lead, PHONE, '/club/members');
     const button = page.getByRole('button', { name: 'Download the club’s data' });
     await button.scrollIntoViewIfNeeded();
     const [download] = await Promise.all([page.waitForEvent('download'), button.click()]);
@@ -147,7 +126,7 @@ describe("children's data", () => {
     await field.click();
     await page.getByRole('option', { name: '2 seasons', exact: true }).click();
     await page.getByTestId('club-retention-saved').waitFor();
-    await settled(page);
+    await animationsSettled(page);
     await screenshot(page, 'club-data-phone');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
     const kept = await club.api.get<{ seasons: number }>('/api/club/retention', { token: lead.token });
@@ -171,13 +150,13 @@ describe("children's data", () => {
     expect(joined.status, joined.text).toBe(201);
 
     // The coach: password, the last question, then signed out.
-    const page = await pageAs(joined.body, DESKTOP, '/account');
+    const page = await club.newPage(browser, joined.body, DESKTOP, '/account');
     await page.getByRole('heading', { name: 'Delete my account' }).waitFor();
     await page.getByTestId('delete-account-password').fill(PASSWORD);
     await page.getByTestId('delete-account').click();
     const dialog = page.getByRole('dialog', { name: 'Delete your account for good?' });
     await dialog.waitFor();
-    await settled(page);
+    await animationsSettled(page);
     await screenshot(page, 'delete-account-desktop');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await dialog.getByTestId('confirm-delete-account').click();
@@ -204,7 +183,7 @@ describe("children's data", () => {
     await name.fill(clubName.toUpperCase());
     expect(await page.getByTestId('delete-club').isDisabled()).toBe(true);
     await name.fill(clubName);
-    await settled(page);
+    await animationsSettled(page);
     await screenshot(page, 'delete-club-desktop');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.getByTestId('delete-club').click();

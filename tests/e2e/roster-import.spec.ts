@@ -43,10 +43,7 @@ describe('roster import', () => {
       )
     ).body;
     await club.api.post(`/api/teams/${team.id}/players`, { displayName: 'Ben T.' }, { token: coach.token });
-    const page = await browser.newPage(PHONE);
-    await page.goto(baseUrl + '/');
-    await page.evaluate(() => localStorage.removeItem('conewise.session'));
-    await club.open(page, coach, `/teams/${team.id}`);
+    const page = await club.newPage(browser, coach, PHONE, `/teams/${team.id}`);
     await page.getByText('Import players from a CSV file').click();
     const panel = page.locator('cw-csv-import');
     await panel.getByText('Up to 60 players per file.').waitFor();

@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import type { AuthResponse, MemberDto, TeamDto } from '../../shared/types';
 import {
+  animationsSettled,
   launchBrowser,
   PHONE,
   screenshot,
@@ -43,23 +44,8 @@ describe('staff', () => {
   });
 
   /** A page signed in as `auth` (or signed out), on a phone. */
-  async function phonePage(auth: AuthResponse | null, path: string): Promise<Page> {
-    const page = await browser.newPage(PHONE);
-    await page.goto(baseUrl + '/');
-    await page.evaluate(() => localStorage.removeItem('conewise.session'));
-    if (auth) await club.open(page, auth, path);
-    else await page.goto(baseUrl + path);
-    return page;
-  }
-
-  /** Waits until dialogs and fields have finished animating. */
-  async function settled(page: Page): Promise<void> {
-    await page.waitForFunction(() =>
-      document
-        .getAnimations()
-        .every((a) => a.playState !== 'running' || a.effect?.getTiming().iterations === Infinity),
-    );
-  }
+  const phonePage = (auth: AuthResponse | null, path: string): Promise<Page> =>
+    club.newPage(browser, auth, PHONE, path);
 
   async function pick(page: Page, testId: string, option: string): Promise<void> {
     // Mid-screen, clear of the sticky toolbar, as a thumb would bring it.
@@ -67,7 +53,7 @@ describe('staff', () => {
     await field.evaluate((el) => el.scrollIntoView({ block: 'center' }));
     await field.click();
     await page.getByRole('option', { name: option, exact: true }).click();
-    await settled(page);
+    await animationsSettled(page);
   }
 
   async function teamNamed(teamName: string): Promise<TeamDto> {
@@ -209,7 +195,7 @@ describe('staff', () => {
     );
     await page.getByRole('checkbox', { name: new RegExp(SECOND_TEAM) }).check();
     expect((await ticked).status()).toBe(200);
-    await settled(page);
+    await animationsSettled(page);
     await screenshot(page, 'staff-member-teams');
     await page.getByRole('button', { name: 'Done' }).click();
     await expect.poll(async () => await row.textContent()).toContain(SECOND_TEAM);
@@ -217,7 +203,7 @@ describe('staff', () => {
     await page.getByRole('button', { name: `Change ${name}’s role` }).click();
     await page.getByRole('heading', { name: `${name}’s role` }).waitFor();
     await page.locator('mat-radio-button[data-role=coach] input').check();
-    await settled(page);
+    await animationsSettled(page);
     await screenshot(page, 'staff-role-dialog');
     await page.getByRole('button', { name: 'Make a coach' }).click();
     await page.getByText(`${name} is now a coach.`).waitFor();
@@ -232,14 +218,14 @@ describe('staff', () => {
     expect(await refusal.textContent()).toContain(
       'needs at least one head of coaching. Make someone else head of coaching first',
     );
-    await settled(page);
+    await animationsSettled(page);
     await screenshot(page, 'staff-last-lead');
     await page.getByRole('button', { name: 'Keep as head of coaching' }).click();
-    await settled(page);
+    await animationsSettled(page);
 
     await page.getByRole('button', { name: `Remove ${name} from the club` }).click();
     await page.getByRole('heading', { name: new RegExp(`Remove ${name} from`) }).waitFor();
-    await settled(page);
+    await animationsSettled(page);
     await screenshot(page, 'staff-remove-dialog');
     await page.getByTestId('confirm-remove-member').click();
     await page.getByText(`${name} was removed from the club.`).waitFor();

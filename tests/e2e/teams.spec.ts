@@ -5,8 +5,9 @@
  */
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import type { AuthResponse, PlayerDto, SessionPlanDto, TeamDto } from '../../shared/types';
+import type { PlayerDto, SessionPlanDto, TeamDto } from '../../shared/types';
 import {
+  animationsSettled,
   DESKTOP,
   launchBrowser,
   PHONE,
@@ -54,27 +55,6 @@ describe('teams', () => {
     await page.close();
   });
 
-  /**
-   * A page signed in as `auth`. The browser profile is shared by the whole file and `club.open`
-   * keeps a session already stored, so the one from an earlier test is cleared first.
-   */
-  async function pageAs(auth: AuthResponse, viewport: { width: number; height: number }, path: string) {
-    const page = await browser.newPage(viewport);
-    await page.goto(baseUrl + '/');
-    await page.evaluate(() => localStorage.removeItem('conewise.session'));
-    await club.open(page, auth, path);
-    return page;
-  }
-
-  /** Waits until the dialog's opening and the field's error have finished animating. */
-  async function settled(page: Page): Promise<void> {
-    await page.waitForFunction(() =>
-      document
-        .getAnimations()
-        .every((a) => a.playState !== 'running' || a.effect?.getTiming().iterations === Infinity),
-    );
-  }
-
   /** The "N active players" figure under the team's name. */
   async function activeCount(page: Page): Promise<number> {
     const text = (await page.locator('.cw-sub').textContent()) ?? '';
@@ -101,7 +81,7 @@ describe('teams', () => {
       // The dialog says old plans stay with a neutral label: a plan with the player in it, to check that.
       const past = await club.plan(coach, team, [...squad, created.body]);
 
-      const page = await pageAs(coach, viewport, `/teams/${team.id}`);
+      const page = await club.newPage(browser, coach, viewport, `/teams/${team.id}`);
       await page.getByRole('cell', { name: displayName, exact: true }).waitFor();
       const before = await activeCount(page);
       // The team's own coach may delete it, as the API allows (after typing its name).
@@ -111,7 +91,7 @@ describe('teams', () => {
       const dialog = page.getByRole('dialog', { name: `Erase ${displayName} from Conewise?` });
       await dialog.waitFor();
       expect(await dialog.textContent()).toContain('Old plans stay and still print');
-      await settled(page);
+      await animationsSettled(page);
       await screenshot(page, 'team-remove-player');
       expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
@@ -138,7 +118,7 @@ describe('teams', () => {
       const u8 = await club.login(U8_COACH);
       const { team, players: squad } = await club.team(u8, 'U8 Foxes');
       const other = await club.login(U12_COACH);
-      const page = await pageAs(other, viewport, `/teams/${team.id}`);
+      const page = await club.newPage(browser, other, viewport, `/teams/${team.id}`);
       await page.getByRole('heading', { name: 'U8 Foxes', level: 1 }).waitFor();
       await page.getByText('Only the head of coaching or this team’s coaches can change it.').waitFor();
       await page.getByRole('cell', { name: squad[0]!.displayName, exact: true }).waitFor();
@@ -172,7 +152,7 @@ describe('teams', () => {
       const team = created.body;
       await club.api.post(`/api/teams/${team.id}/players`, { displayName: 'Ivo N.' }, { token: lead.token });
 
-      const page = await pageAs(lead, viewport, `/teams/${team.id}`);
+      const page = await club.newPage(browser, lead, viewport, `/teams/${team.id}`);
       await page.getByRole('heading', { name, level: 1 }).waitFor();
       await page.getByRole('button', { name: 'Delete team' }).click();
       const dialog = page.getByRole('dialog', { name: `Delete ${name}?` });
@@ -184,7 +164,7 @@ describe('teams', () => {
       await field.fill('U11 Larks');
       await dialog.getByRole('button', { name: 'Delete team' }).click();
       await dialog.getByText(`Type ${name} to confirm.`).waitFor();
-      await settled(page);
+      await animationsSettled(page);
       await screenshot(page, 'team-delete');
       expect(await seriousAccessibilityViolations(page)).toEqual([]);
       expect((await club.api.get(`/api/teams/${team.id}`, { token: lead.token })).status).toBe(200);

@@ -89,12 +89,25 @@ interface AxeViolation {
 
 const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
 
+/**
+ * Waits until nothing on the page is mid-animation (a dialog opening, a field's message fading
+ * in); endless ones (a spinner) do not count.
+ */
+export async function animationsSettled(page: Page): Promise<void> {
+  await page.waitForFunction(
+    () =>
+      document
+        .getAnimations()
+        .every((a) => a.playState !== 'running' || a.effect?.getTiming().iterations === Infinity),
+    null,
+    { timeout: 10_000 },
+  );
+}
+
 /** Runs axe-core in the page and returns the serious and critical violations, described for a failure message. */
 export async function seriousAccessibilityViolations(page: Page): Promise<string[]> {
   // Colours are measured once nothing is mid-transition (a message fading in reads as low contrast).
-  await page.waitForFunction(() => document.getAnimations().every((a) => a.playState !== 'running'), null, {
-    timeout: 10_000,
-  });
+  await animationsSettled(page);
   // Evaluated through the DevTools protocol, so the app's Content-Security-Policy does not block it.
   await page.evaluate(axeSource);
   const violations = await page.evaluate(async () => {

@@ -5,6 +5,7 @@
 import type { Page } from 'playwright-core';
 import type { AuthResponse, PlanRequest, PlayerDto, SessionPlanDto, TeamDto } from '../../../shared/types';
 import { ApiClient } from '../../support/api-client';
+import type { TestBrowser } from './browser';
 
 export const DEMO_PASSWORD = 'conewise-demo';
 export const LEAD = 'lead@fernmoor.example.org';
@@ -37,6 +38,24 @@ export class ClubSession {
       JSON.stringify(auth),
     ] as const);
     await page.goto(this.baseUrl + path);
+  }
+
+  /**
+   * A new page of `browser` at `path`, signed in as `auth` or signed out (null). The browser
+   * profile is shared by a whole file, so whoever an earlier test signed in is cleared first.
+   */
+  async newPage(
+    browser: TestBrowser,
+    auth: AuthResponse | null,
+    viewport: { width: number; height: number },
+    path: string,
+  ): Promise<Page> {
+    const page = await browser.newPage(viewport);
+    await page.goto(`${this.baseUrl}/api/health`);
+    await page.evaluate((key) => localStorage.removeItem(key), SESSION_KEY);
+    if (auth) await this.open(page, auth, path);
+    else await page.goto(this.baseUrl + path);
+    return page;
   }
 
   async team(auth: AuthResponse, name: string): Promise<{ team: TeamDto; players: PlayerDto[] }> {
