@@ -25,7 +25,7 @@ const LABELS = { password: $localize`Your password` } as const;
       as made by a former member. The last head of coaching of a club makes someone else head of coaching
       first.
     </p>
-    <form class="cw-delete-account" [formGroup]="form" (ngSubmit)="ask()" novalidate>
+    <form class="cw-form-column" [formGroup]="form" (ngSubmit)="ask()" novalidate>
       <mat-form-field appearance="outline">
         <mat-label>{{ labels.password }}</mat-label>
         <input
@@ -53,17 +53,6 @@ const LABELS = { password: $localize`Your password` } as const;
         Delete my account
       </button>
     </form>
-  `,
-  styles: `
-    .cw-delete-account {
-      display: flex;
-      flex-direction: column;
-      gap: 4px;
-      button {
-        align-self: flex-start;
-        min-height: 44px;
-      }
-    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

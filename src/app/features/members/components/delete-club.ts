@@ -26,7 +26,7 @@ const LABELS = { clubName: $localize`The club's name` } as const;
         rules, invitations and every member's account. Everyone in the club is signed out. Download what you
         want to keep first.
       </p>
-      <form [formGroup]="form" (ngSubmit)="remove()" novalidate>
+      <form class="cw-form-column" [formGroup]="form" (ngSubmit)="remove()" novalidate>
         <mat-form-field appearance="outline">
           <mat-label i18n>Type the club's name to confirm</mat-label>
           <input matInput formControlName="clubName" autocomplete="off" data-testid="delete-club-name" />
@@ -62,14 +62,7 @@ const LABELS = { clubName: $localize`The club's name` } as const;
         color: var(--mat-sys-error);
       }
       form {
-        display: flex;
-        flex-direction: column;
-        gap: 4px;
         max-width: 480px;
-      }
-      button {
-        align-self: flex-start;
-        min-height: 44px;
       }
     }
   `,
