@@ -186,6 +186,14 @@ function exportFiles(h: Holdings): ExportFile[] {
   const teamName = new Map(h.teams.map((team) => [team.id, team.name]));
   const playerName = new Map(h.players.map((player) => [player.id, player.displayName]));
   const planDate = new Map(h.plans.map((plan) => [plan.id, plan.date ?? '']));
+  // "Rondo 5v1" rather than an id: the station's activity as its plan names it.
+  const stationTitle = new Map(
+    h.plans.flatMap((stored) =>
+      stored.plan.phases.flatMap((phase) =>
+        phase.stations.map((station) => [`${stored.id} ${station.id}`, station.title] as const),
+      ),
+    ),
+  );
   const memberName = new Map(h.members.map((member) => [member.userId, member.name]));
   const files: ExportFile[] = [
     {
@@ -283,7 +291,7 @@ function exportFiles(h: Holdings): ExportFile[] {
           planDate.get(row.planId) ?? '',
           teamName.get(row.teamId) ?? '',
           row.stationId,
-          row.activityId ?? row.activityKind ?? '',
+          stationTitle.get(`${row.planId} ${row.stationId}`) ?? row.activityId ?? row.activityKind ?? '',
           row.groupSize ?? '',
           verdictWord(row.verdict),
           row.note ?? '',

@@ -149,6 +149,8 @@ describe('downloading the club’s and a team’s data', () => {
     ]);
     expect(rows(files.get('feedback.csv')!)).toEqual([
       expect.objectContaining({
+        // The activity as the plan names it, not an id.
+        Activity: plan.plan.phases.find((p) => p.stations.length > 0)!.stations[0]!.title,
         Verdict: 'Too easy',
         Note: 'Needed a smaller area',
         'Judged by': 'Cora Coach',
