@@ -82,13 +82,10 @@ export class ClubScope {
     return rows.length > 0;
   }
 
-  /** Lead: every team. Coach: the teams they are attached to. Assistant: none. */
-  async canManage(team: Team): Promise<boolean> {
-    if (this.auth.role !== 'coach') return this.canManageWhenAttached(false);
-    return this.canManageWhenAttached(await this.isAttached(team.id));
-  }
-
-  /** The same rule as canManage, for a caller who already read whether they are attached. */
+  /**
+   * Whether the caller may change a team's data, given whether they are on its staff: the head of
+   * coaching every team, a coach the teams they are attached to, an assistant none.
+   */
   canManageWhenAttached(attached: boolean): boolean {
     if (this.auth.role === 'lead') return true;
     if (this.auth.role === 'coach') return attached;

@@ -4,7 +4,8 @@
  * 9.15 m, penalty area 16.5 m from the goal line.
  */
 import { describe, expect, it } from 'vitest';
-import { IFAB_LAW_1, spacePresetsFor, type PlanRequest } from '../../shared/types';
+import { IFAB_LAW_1, spacePresetsFor } from '../../shared/pitch/pitch-standards';
+import type { PlanRequest } from '../../shared/types';
 import { generatePlan, validatePlanRequest } from '../../engine';
 
 describe('IFAB Laws of the Game, Law 1', () => {

@@ -9,7 +9,7 @@ import {
   METRES_PER_YARD,
   spacePresetsFor,
   US_SOCCER_SMALL_SIDED_2016,
-} from '../../shared/types';
+} from '../../shared/pitch/pitch-standards';
 import { defaultRuleSet } from '../../engine';
 
 describe('US Soccer Player Development Initiatives (2016) small-sided standards', () => {

@@ -1,7 +1,7 @@
 import { Injectable } from '@angular/core';
 import type { AgeGroup } from '../../../../../shared/types';
 import type { DistanceUnit } from '../../../../../shared/units';
-import { spacePresetsFor, type SpacePreset } from '../../../../../shared/types/plan-pitch';
+import { spacePresetsFor, type SpacePreset } from '../../../../../shared/pitch/pitch-standards';
 
 export type { SpacePreset };
 

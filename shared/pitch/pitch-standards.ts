@@ -3,8 +3,7 @@
  * wizard) and reference checks. Each constant names its source.
  */
 import { metresFrom, METRES_PER_YARD, type DistanceUnit } from '../units';
-import type { AgeGroup } from './plan-request';
-import type { Space } from './plan-request';
+import type { AgeGroup, Space } from '../types/plan-request';
 
 export { METRES_PER_YARD };
 
