@@ -28,7 +28,7 @@ const junk = fc.oneof(
   ),
 );
 
-describe('junk bodies on plan-activity and rule-set routes', () => {
+describe('junk bodies on attendance, feedback, pitch-side and rule-set routes', () => {
   let app: TestApp;
   let club: ClubCast;
   let plan: SessionPlanDto;
