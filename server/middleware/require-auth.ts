@@ -17,6 +17,7 @@ import { HttpError, unauthorized } from '../http/problem';
 import type { DistanceUnit, TemperatureUnit } from '../../shared/units';
 import { unitFields } from '../services/unit-settings';
 import { VerifiedTokens } from '../http/verified-tokens';
+import { isUuid } from '../../shared/types/uuid';
 
 /** Claims Conewise puts in its tokens. */
 export interface TokenClaims {
@@ -91,8 +92,6 @@ export function createRequireAuth(dataSource: DataSource, config: AppConfig): Re
   };
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 /** What a session token says about itself, checked against the database on every request. */
 export interface TokenState {
   version: number;
@@ -110,8 +109,8 @@ export async function loadAuthContext(
   clubId: string,
   token: TokenState,
 ): Promise<AuthContext | null> {
-  if (!UUID.test(userId) || !UUID.test(clubId)) return null;
-  if (token.id !== null && !UUID.test(token.id)) return null;
+  if (!isUuid(userId) || !isUuid(clubId)) return null;
+  if (token.id !== null && !isUuid(token.id)) return null;
   // One joined read per request: the role and the session's standing are re-read every time, so
   // a removed member or an ended session loses access at once on every instance, in one round trip.
   const rows = await preparedQuery<{

@@ -6,8 +6,7 @@ import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
 import type { AuthContext } from '../http/auth-context';
 import { forbidden, type Missing, notFound } from '../http/problem';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isUuid } from '../../shared/types/uuid';
 
 /** What running a team's session involves, as the refusal names it. */
 export type RunningWork = 'take its register' | 'judge its stations' | 'change who is at its session';
@@ -49,7 +48,7 @@ export class ClubScope {
     id: string,
     what: Missing,
   ): Promise<T> {
-    if (!UUID.test(id)) throw notFound(what);
+    if (!isUuid(id)) throw notFound(what);
     const row = await this.manager
       .getRepository(entity)
       .findOne({ where: this.where<T>({ id } as unknown as FindOptionsWhere<T>) });

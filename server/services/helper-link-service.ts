@@ -17,8 +17,8 @@ import { expiryInWords, helperLinkExpiry } from './session-day';
 import { hashLinkToken, newLinkToken } from './link-token';
 import type { DistanceUnit, TemperatureUnit, Units } from '../../shared/units';
 import { unitsOf } from './unit-settings';
+import { isUuid } from '../../shared/types/uuid';
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 /** 32 random bytes in base64url: 43 characters. */
 const TOKEN = /^[A-Za-z0-9_-]{43}$/;
 
@@ -132,7 +132,7 @@ export class HelperLinkService {
   /** Stops a link at once; stopping it twice is harmless. */
   async revoke(auth: AuthContext, planId: string, linkId: string): Promise<void> {
     const plan = await this.planForStaff(auth, planId);
-    if (!UUID.test(linkId)) throw notFound('helper link');
+    if (!isUuid(linkId)) throw notFound('helper link');
     const result = await this.dataSource
       .getRepository(HelperLink)
       .update(

@@ -16,8 +16,7 @@ import { refuseOverDailyLimit } from './daily-mail-limit';
 import { INVITATION_MAIL, type MailQueue } from './mail-queue';
 import { unitsOf } from './unit-settings';
 import { hashLinkToken, newLinkToken } from './link-token';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isUuid } from '../../shared/types/uuid';
 
 function invitationDto(invitation: Invitation, teamName: string | null): InvitationDto {
   return {
@@ -98,7 +97,7 @@ export class MemberService {
 
   /** Members are addressed by user id; another club's member answers 404. */
   private async membership(manager: EntityManager, userId: string): Promise<Membership> {
-    const row = UUID.test(userId)
+    const row = isUuid(userId)
       ? await manager.getRepository(Membership).findOneBy(this.scope.where<Membership>({ userId }))
       : null;
     if (!row) throw notFound('member');

@@ -9,8 +9,7 @@ import type { ClubScope } from './club-scope';
 import { inReaderWords } from '../i18n/rule-set-words';
 import { defaultRules } from './engine-port';
 import { cachedDocument, documentOf, type RuleSetRevision } from './rules-resolver';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isUuid } from '../../shared/types/uuid';
 
 /** A roster entry as a plan request needs it. */
 export interface RosterEntry {
@@ -97,7 +96,7 @@ export async function loadPlanInputs(
   feedbackLimit: number,
   recentPlans = RECENT_PLANS_FOR_VARIETY,
 ): Promise<PlanInputs> {
-  if (!UUID.test(teamId)) throw notFound('team');
+  if (!isUuid(teamId)) throw notFound('team');
   const rows = await preparedQuery<InputsRow>(manager, 'plan-inputs', PLAN_INPUTS_SQL, [
     teamId,
     scope.clubId,

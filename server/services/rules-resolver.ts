@@ -3,8 +3,7 @@ import type { RuleSetDocument } from '../../shared/types/plan-rules';
 import { RuleSet } from '../entities/rule-set';
 import { inReaderWords } from '../i18n/rule-set-words';
 import { defaultRules } from './engine-port';
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+import { isUuid } from '../../shared/types/uuid';
 
 // A row's document never changes without its revision changing, so (id, revision) names one
 // document on every instance; keeping the same object lets the engine reuse its compiled rules.
@@ -48,7 +47,7 @@ export async function rulesOfPlan(
   clubId: string,
   ruleSetId: string,
 ): Promise<RuleSetDocument> {
-  if (UUID.test(ruleSetId)) {
+  if (isUuid(ruleSetId)) {
     const row = await manager.getRepository(RuleSet).findOne({ where: { id: ruleSetId, clubId } });
     if (row) return inReaderWords(documentOf(row));
   }
