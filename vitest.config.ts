@@ -10,6 +10,9 @@ export default defineConfig({
         test: {
           name: 'engine',
           environment: 'node',
+          // Property tests and the tooling checks (which parse the whole tree or start a process)
+          // take seconds on a loaded machine; a limit is a hang guard, not a speed target.
+          testTimeout: 30_000,
           setupFiles: ['@angular/localize/init', 'tests/support/fast-check-seed.ts'],
           include: [
             'engine/**/*.spec.ts',

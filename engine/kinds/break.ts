@@ -4,12 +4,17 @@ import type { Phase } from '../../shared/types';
 
 export const BREAK_ACTIVITY_ID = 'drinks-break';
 
+/** "Drinks break", or "Drinks break (heat)" when the heat brought it early. */
+export function breakName(hot: boolean): string {
+  return hot
+    ? $localize`:name of a phase of the session, a drinks break brought early by the heat:Drinks break (heat)`
+    : $localize`:name of a phase of the session:Drinks break`;
+}
+
 /** A drinks break from `start` for `minutes`; `hot` says why it came early. */
 export function breakPhase(start: number, minutes: number, hot: boolean): Phase {
   return {
-    name: hot
-      ? $localize`:name of a phase of the session, a drinks break brought early by the heat:Drinks break (heat)`
-      : $localize`:name of a phase of the session:Drinks break`,
+    name: breakName(hot),
     activityId: BREAK_ACTIVITY_ID,
     activityKind: 'break',
     startMinute: start,

@@ -15,6 +15,7 @@ import type {
   StationKind,
   TraceEntry,
 } from '../../shared/types';
+import { ACTIVITY_KIND_LABELS } from '../../shared/types';
 import { breakPhase } from '../kinds/break';
 import { kindModule, layoutOf } from '../kinds/registry';
 import { shuffle } from '../random';
@@ -40,7 +41,6 @@ import { equipPhase } from './kit';
 import { packStations, reuseLayout } from './layout';
 import { isTargetlessNote, markPhase } from './markings';
 import { progressionsFor } from './progressions';
-import { nameFor } from './session-shape';
 import { adultsInWords } from './supervision';
 import { continuedName, withoutContinued, type PhaseSpec } from './timing';
 
@@ -250,7 +250,9 @@ function finishAttempt(
 ): Attempt {
   const { request, params, band } = ctx;
   const name =
-    !spec.kinds || spec.kinds.includes(activities[0].kind) ? spec.name : nameFor(activities[0].kind);
+    !spec.kinds || spec.kinds.includes(activities[0].kind)
+      ? spec.name
+      : ACTIVITY_KIND_LABELS[activities[0].kind];
   const previousGoals = previous
     ? previous.stations.flatMap((s) => (s.goalPositions ?? []).filter((g) => g.kind === 'goal'))
     : [];
@@ -566,7 +568,8 @@ function sharedArea(
     rankedActivities(ctx, 'ball-mastery')[0]?.activity ??
     params.activities.find((a) => a.kind === 'ball-mastery' && !a.retired) ??
     params.activities[0];
-  const name = !spec.kinds || spec.kinds.includes(activity.kind) ? spec.name : nameFor(activity.kind);
+  const name =
+    !spec.kinds || spec.kinds.includes(activity.kind) ? spec.name : ACTIVITY_KIND_LABELS[activity.kind];
   const table = params.areas[activity.kind][ctx.band];
   const station = makeStation(
     ctx,

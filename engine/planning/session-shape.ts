@@ -29,42 +29,6 @@ export interface SlotPlan {
   candidates: ActivityDefinition[];
 }
 
-/** A part of the session named after the kind it plays. */
-export function nameFor(kind: StationKind): string {
-  switch (kind) {
-    case 'ball-mastery':
-      return $localize`:name of a part of the session:Ball mastery`;
-    case 'tag-game':
-      return $localize`:name of a part of the session:Tag game`;
-    case 'duel':
-      return $localize`:name of a part of the session:1v1 duels`;
-    case 'receiving-turning':
-      return $localize`:name of a part of the session:Receive and turn`;
-    case 'passing-pattern':
-      return $localize`:name of a part of the session:Passing practice`;
-    case 'passing-finishing':
-      return $localize`:name of a part of the session:Pass and finish`;
-    case 'shooting-game':
-      return $localize`:name of a part of the session:Shooting game`;
-    case 'keep-ball':
-      return $localize`:name of a part of the session:Keep-ball`;
-    case 'directional-possession':
-      return $localize`:name of a part of the session:Possession to a target`;
-    case 'transition':
-      return $localize`:name of a part of the session:Transition game`;
-    case 'small-sided-game':
-      return $localize`:name of a part of the session:Small-sided game`;
-    case 'goalkeeping':
-      return $localize`:name of a part of the session:Goalkeepers’ warm-up`;
-    case 'speed':
-      return $localize`:name of a part of the session:Speed`;
-    case 'movement-prep':
-      return $localize`:name of a part of the session:Movement preparation`;
-    case 'cool-down':
-      return $localize`:name of a part of the session:Cool-down`;
-  }
-}
-
 /** The training theme: the coach's first focus, else the one the team's recent plans used least. */
 export function chooseTheme(ctx: BuildContext): Focus | undefined {
   const { request, params } = ctx;
@@ -153,7 +117,7 @@ export function sessionSlots(
       name:
         kinds.includes(ranked[0].activity.kind) || slot.kinds.includes(ranked[0].activity.kind)
           ? slot.name
-          : nameFor(ranked[0].activity.kind),
+          : ACTIVITY_KIND_LABELS[ranked[0].activity.kind],
       share: slot.share,
       priority: slot.priority,
       maxMinutes: slot.maxMinutes,
@@ -266,7 +230,7 @@ function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefin
       const average = slots.length ? slots.reduce((s, x) => s + x.share, 0) / slots.length : 1;
       slot = {
         role: 'technical',
-        name: nameFor(a.kind),
+        name: ACTIVITY_KIND_LABELS[a.kind],
         kinds: [a.kind],
         share: average,
         priority: 0,
@@ -303,7 +267,7 @@ function placeRequired(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityD
     const slot: SlotPlan = {
       role:
         req.kind === 'small-sided-game' ? 'game' : req.kind === 'movement-prep' ? 'movement' : 'technical',
-      name: nameFor(req.kind),
+      name: ACTIVITY_KIND_LABELS[req.kind],
       kinds: [req.kind],
       share: average,
       priority: -1,

@@ -5,6 +5,7 @@
  */
 import '../../shared/i18n/localize';
 import type { ActivityDefinition, SlotRole, StationKind } from '../../shared/types';
+import { breakName } from '../kinds/break';
 import type { BuildContext } from './context';
 import type { SlotPlan } from './session-shape';
 
@@ -214,9 +215,7 @@ function withBreaks(
   };
   const drink = () => {
     out.push({
-      name: hot
-        ? $localize`:name of a drinks break taken for the heat:Drinks break (heat)`
-        : $localize`:name of a part of the session:Drinks break`,
+      name: breakName(hot),
       slot: 'break',
       candidates: [],
       startMinute: clock,

@@ -2,7 +2,12 @@
  * The plan's stations and phases in a coach's words, for the plan page and pitch-side alike:
  * who plays on which side, who serves, and what to set up before a phase.
  */
-import type { Phase, PositionRole, Station } from '../../../../../shared/types';
+import {
+  ACTIVITY_KIND_LABELS,
+  type Phase,
+  type PositionRole,
+  type Station,
+} from '../../../../../shared/types';
 
 /** One line of a station's roles: "Side A (bibs)" and the names on it. */
 export interface RoleLine {
@@ -86,7 +91,7 @@ export function isBreak(phase: Phase): boolean {
 
 /** "Drinks break · 2 min" (the engine names a break taken for the heat "Drinks break (heat)"). */
 export function breakWords(phase: Phase): string {
-  const name = phase.name || $localize`Drinks break`;
+  const name = phase.name || ACTIVITY_KIND_LABELS.break;
   return $localize`:A drinks break and its length in minutes:${name}:breakName: · ${phase.endMinute - phase.startMinute}:minutes: min`;
 }
 
