@@ -6,10 +6,10 @@
 import '../shared/i18n/localize';
 import type { Phase, Plan, PlanRequest, RuleSetDocument, StationKind } from '../shared/types';
 import { FOCUS_LABELS } from '../shared/types';
-import { compileRuleSet } from './club-rules/compile-rule-set';
-import { evaluateRules } from './club-rules/evaluate-rules';
+import { compileRuleSet, type CompiledRuleSet } from './club-rules/compile-rule-set';
+import { evaluateRules, type RuleOutcome } from './club-rules/evaluate-rules';
 import { stepsByVerdict } from './club-rules/feedback-steps';
-import { buildFacts } from './club-rules/facts';
+import { buildFacts, type Facts } from './club-rules/facts';
 import { rankedActivities } from './planning/activities';
 import type { AllocationRules } from './planning/allocation';
 import type { StartWidths } from './planning/areas';
@@ -43,9 +43,22 @@ export async function generatePlan(
   if (!validation.ok) throw new PlanRequestError(validation.errors);
   const compiled = compileRuleSet(ruleSet);
   const seed = request.seed ?? generateSeed();
-  const req: PlanRequest = Object.assign({}, request, { seed });
+  const req = Object.assign({}, request, { seed });
   const facts = buildFacts(req, compiled.document.parameters);
-  const outcome = await evaluateRules(compiled, facts);
+  return planFromRules(compiled, req, facts, await evaluateRules(compiled, facts));
+}
+
+/**
+ * The plan for a valid request with its seed set, once the club rules have run on its facts:
+ * a re-plan that has run them already builds its fresh plan here rather than run them again.
+ */
+export async function planFromRules(
+  compiled: CompiledRuleSet,
+  req: PlanRequest & { seed: string },
+  facts: Facts,
+  outcome: RuleOutcome,
+): Promise<Plan> {
+  const seed = req.seed;
   const verdictSteps = await stepsByVerdict(compiled, facts, req.recentFeedback, outcome.steps);
   const ctx = planContext(req, outcome, seed);
   const rules = allocationRules(ctx);
@@ -94,11 +107,7 @@ export async function generatePlan(
 }
 
 /** The build context for a request once the club rules have run. */
-export function planContext(
-  req: PlanRequest,
-  outcome: Awaited<ReturnType<typeof evaluateRules>>,
-  seed: string,
-): BuildContext {
+export function planContext(req: PlanRequest, outcome: RuleOutcome, seed: string): BuildContext {
   const params = effectiveParameters(outcome.parameters, req);
   const band = params.ageGroups[req.ageGroup].band;
   const { supervision, warnings: supervisionWarnings } = superviseRequest(req, params);

@@ -1,9 +1,8 @@
 /** The activities of a rule set for the swap menu and the library, each usable for the request or not, and why. */
 import type { AgeGroup, Level, Plan, PlanRequest, RuleSetDocument, StationKind } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
-import { activityBlocked, notEnoughForIt } from './planning/activities';
-import { activityFeasible } from './planning/allocation';
 import { effectiveParameters } from './planning/effective-parameters';
+import { whyUnusable } from './planning/usable';
 import { defaultRuleSet } from './rule-sets';
 
 export interface ActivityOption {
@@ -46,16 +45,7 @@ export function listActivities(
         allowed: true,
       };
       if (!request || !band) return option;
-      const reason =
-        activityBlocked(params, request.ageGroup, forbidden, a) ??
-        (activityFeasible(request.players.length, request.coaches, a, {
-          params,
-          level: request.level,
-          band,
-          kit: request.equipment,
-        })
-          ? null
-          : notEnoughForIt());
+      const reason = whyUnusable({ params, request, forbidden, band }, a);
       if (reason) {
         option.allowed = false;
         option.reason = reason;

@@ -1,19 +1,29 @@
 /** A coach's edit to a plan: the edited plan with kit, totals, notices and trace recomputed. */
 import '../../shared/i18n/localize';
-import type { Plan, PlanEdit, RuleSetDocument, Station } from '../../shared/types';
-import { checkPlan } from '../check-plan';
+import type {
+  AgeBand,
+  Level,
+  Plan,
+  PlanEdit,
+  PresentPlayer,
+  RuleParameters,
+  RuleSetDocument,
+  Station,
+} from '../../shared/types';
 import { compileRuleSet } from '../club-rules/compile-rule-set';
 import { generatePlan } from '../generate-plan';
 import { kindModule, layoutOf } from '../kinds/registry';
-import { activityBlocked, activityById } from '../planning/activities';
-import { buildPhase } from '../planning/build-phase';
+import { activityById } from '../planning/activities';
 import { effectiveParameters } from '../planning/effective-parameters';
+import { ruledOut } from '../planning/usable';
 import { generateSeed } from '../random';
 import { defaultRuleSet } from '../rule-sets';
 import { progressionOutcome } from './apply-progression';
+import { sizeFor } from './area-step';
 import type { EditOutcome } from './edit-outcome';
 import { editWords } from './edit-words';
-import { editContext, lastPlayedBefore, specOf } from './plan-context';
+import { withChecks } from './plan-checks';
+import { editContext, lastPlayedBefore, rebuildPhase, stationAt } from './plan-context';
 import { activityOfStation, refreshPlan } from './rebuild';
 
 export async function applyEdit(
@@ -43,8 +53,7 @@ export async function tryEdit(
       // Larger/smaller is the coach's call; map it onto the activity's harder/easier direction.
       const station = stationAt(plan, edit.phaseIndex, edit.stationId);
       const params = compileRuleSet(ruleSet).document.parameters;
-      const smallerIsHarder = params.kinds[station.activityKind].harderWhenArea === 'smaller';
-      const verdict = (edit.step === 'smaller') === smallerIsHarder ? 'too-easy' : 'too-hard';
+      const verdict = edit.step === sizeFor(params, station.activityKind, 'harder') ? 'too-easy' : 'too-hard';
       const out = progressionOutcome(plan, edit.phaseIndex, edit.stationId, verdict, ruleSet);
       return {
         plan: relabel(out.plan, plan, 'edit.resize-area', resizedWords(station.title, edit.step)),
@@ -58,12 +67,6 @@ export async function tryEdit(
   }
 }
 
-function stationAt(plan: Plan, phaseIndex: number, stationId: string): Station {
-  const station = plan.phases[phaseIndex]?.stations.find((s) => s.id === stationId);
-  if (!station) throw new RangeError(`No station ${stationId} in phase ${phaseIndex}`);
-  return station;
-}
-
 /** The trace line of a coach's resize: "Rondo square: area larger". */
 function resizedWords(title: string, step: 'larger' | 'smaller'): string {
   return step === 'larger'
@@ -74,11 +77,6 @@ function resizedWords(title: string, step: 'larger' | 'smaller'): string {
 function relabel(out: Plan, before: Plan, ruleId: string, effect: string): Plan {
   const added = out.trace.slice(before.trace.length);
   return { ...out, trace: [...before.trace, { ruleId, fired: true, effect }, ...added] };
-}
-
-function withChecks(plan: Plan, ruleSet: RuleSetDocument): Plan {
-  const checks = checkPlan(plan, ruleSet);
-  return { ...plan, warnings: [...plan.warnings, ...checks.map((c) => ({ ...c, code: `check:${c.code}` }))] };
 }
 
 function movePlayer(
@@ -99,7 +97,7 @@ function movePlayer(
     if (s.id !== from.id && s.id !== target.id) return s;
     const ids =
       s.id === from.id ? s.playerIds.filter((id) => id !== edit.playerId) : [...s.playerIds, edit.playerId];
-    return reRole(s, ids, byId, params, plan, band);
+    return reRole(s, ids, byId, params, plan.request.level, band);
   });
   // A station left empty disappears rather than stand unused.
   const kept = stations.filter((s) => s.playerIds.length > 0);
@@ -129,12 +127,10 @@ function movePlayer(
 export function reRole(
   s: Station,
   ids: string[],
-  byId: Map<string, Plan['request']['players'][number]>,
-  params: ReturnType<typeof effectiveParameters>,
-  plan: Plan,
-  band: ReturnType<typeof effectiveParameters>['ageGroups'][keyof ReturnType<
-    typeof effectiveParameters
-  >['ageGroups']]['band'],
+  byId: Map<string, PresentPlayer>,
+  params: RuleParameters,
+  level: Level,
+  band: AgeBand,
 ): Station {
   const activity = activityOfStation(params, s);
   const layout = layoutOf(activity);
@@ -149,7 +145,7 @@ export function reRole(
     keepers,
     coachJoins: s.coachJoins,
     params,
-    level: plan.request.level,
+    level,
     band,
   });
   return {
@@ -191,15 +187,16 @@ async function swapActivity(
     };
   };
   if (phase.activityKind === 'break') return refuse(editWords.swapBreak);
-  const blocked = activityBlocked(params, request.ageGroup, plan.forbiddenActivities ?? [], activity);
+  // As the plan recorded them: the rule set's tables and what its club rules forbade.
+  const blocked = ruledOut({ params, request, forbidden: plan.forbiddenActivities ?? [] }, activity);
   if (blocked) return refuse(blocked);
-  const { ctx, rules } = await editContext(
+  const context = await editContext(
     request,
     ruleSet,
     `${plan.seed}:swap:${edit.phaseIndex}:${edit.activityId}`,
   );
-  const spec = specOf(plan, edit.phaseIndex, [activity]);
-  const rebuilt = buildPhase(ctx, rules, spec, edit.phaseIndex, {}, lastPlayedBefore(plan, edit.phaseIndex));
+  const before = lastPlayedBefore(plan, edit.phaseIndex);
+  const rebuilt = rebuildPhase(context, plan, edit.phaseIndex, [activity], before);
   if (rebuilt.activityId !== activity.id) {
     return refuse(editWords.swapNoFit(request.players.length));
   }

@@ -4,12 +4,13 @@
  */
 import '../../shared/i18n/localize';
 import type { Plan, RuleSetDocument, StationVerdict } from '../../shared/types';
-import { checkPlan } from '../check-plan';
 import { compileRuleSet } from '../club-rules/compile-rule-set';
 import { describeArea } from '../planning/areas';
 import { defaultRuleSet } from '../rule-sets';
-import { stepArea } from './area-step';
+import { sizeFor, stepArea } from './area-step';
 import type { EditOutcome } from './edit-outcome';
+import { stationAt } from './plan-context';
+import { withChecks } from './plan-checks';
 import { refreshPlan } from './rebuild';
 
 export function applyProgression(
@@ -31,9 +32,7 @@ export function progressionOutcome(
   ruleSet: RuleSetDocument = defaultRuleSet,
 ): EditOutcome {
   const params = compileRuleSet(ruleSet).document.parameters;
-  const phase = plan.phases[phaseIndex];
-  const station = phase?.stations.find((s) => s.id === stationId);
-  if (!phase || !station) throw new RangeError(`No station ${stationId} in phase ${phaseIndex}`);
+  const station = stationAt(plan, phaseIndex, stationId);
   const ruleId = `progression.${station.activityKind}`;
   const unchanged = (effect: string, refused: string | null): EditOutcome => ({
     plan: { ...plan, trace: [...plan.trace, { ruleId, fired: false, effect }] },
@@ -44,8 +43,7 @@ export function progressionOutcome(
       $localize`:pitch-side feedback, an activity was about right so its area stays, e.g. 20 × 30 m:${station.title}:activity:: about right, area stays ${describeArea(station.area)}:area:`,
       null,
     );
-  const smallerIsHarder = params.kinds[station.activityKind].harderWhenArea === 'smaller';
-  const size = (verdict === 'too-easy') === smallerIsHarder ? 'smaller' : 'larger';
+  const size = sizeFor(params, station.activityKind, verdict === 'too-easy' ? 'harder' : 'easier');
   const step = stepArea(plan, phaseIndex, stationId, size, ruleSet);
   if (!step.ok)
     return unchanged(
@@ -56,25 +54,9 @@ export function progressionOutcome(
     );
   const phases = plan.phases.map((p, i) => (i === phaseIndex ? { ...p, stations: step.stations } : p));
   const refreshed = refreshPlan(plan, phases, params);
-  const result = {
-    ...refreshed,
-    trace: [
-      ...plan.trace,
-      {
-        ruleId,
-        fired: true,
-        effect: steppedWords(station.title, verdict, describeArea(step.from), describeArea(step.to)),
-      },
-    ],
-  };
+  const effect = steppedWords(station.title, verdict, describeArea(step.from), describeArea(step.to));
   return {
-    plan: {
-      ...result,
-      warnings: [
-        ...result.warnings,
-        ...checkPlan(result, ruleSet).map((c) => ({ ...c, code: `check:${c.code}` })),
-      ],
-    },
+    plan: withChecks({ ...refreshed, trace: [...plan.trace, { ruleId, fired: true, effect }] }, ruleSet),
     refused: null,
   };
 }

@@ -3,7 +3,7 @@
  * coach's words why it cannot step. The coach's resize, pitch-side "too easy / too hard" and the
  * plan page's limits on its buttons all ask this one function, so they never disagree.
  */
-import type { Area, Plan, RuleSetDocument, Station } from '../../shared/types';
+import type { Area, Plan, RuleParameters, RuleSetDocument, Station, StationKind } from '../../shared/types';
 import { compileRuleSet } from '../club-rules/compile-rule-set';
 import { insideSpace, rectOf, roomBetween } from '../geometry';
 import { boundedTable } from '../planning/areas';
@@ -11,8 +11,15 @@ import { packStations } from '../planning/layout';
 import { steppedArea, widthSide } from '../planning/progressions';
 import { defaultRuleSet } from '../rule-sets';
 import { editWords } from './edit-words';
+import { stationAt } from './plan-context';
 
 export type AreaSize = 'larger' | 'smaller';
+
+/** The step that makes a kind's activity harder or easier: the rule set says which size is harder. */
+export function sizeFor(params: RuleParameters, kind: StationKind, direction: 'harder' | 'easier'): AreaSize {
+  const harder = params.kinds[kind].harderWhenArea;
+  return direction === 'harder' ? harder : harder === 'smaller' ? 'larger' : 'smaller';
+}
 
 /** The stepped phase's stations (the stepped one first to change), or why the area stays. */
 export type AreaStep =
@@ -28,13 +35,11 @@ export function stepArea(
   ruleSet: RuleSetDocument = defaultRuleSet,
 ): AreaStep {
   const params = compileRuleSet(ruleSet).document.parameters;
+  const station = stationAt(plan, phaseIndex, stationId);
   const phase = plan.phases[phaseIndex];
-  const station = phase?.stations.find((s) => s.id === stationId);
-  if (!phase || !station) throw new RangeError(`No station ${stationId} in phase ${phaseIndex}`);
   const band = params.ageGroups[plan.request.ageGroup].band;
   const kind = station.activityKind;
-  const smallerIsHarder = params.kinds[kind].harderWhenArea === 'smaller';
-  const direction = (size === 'smaller') === smallerIsHarder ? 'harder' : 'easier';
+  const direction = size === sizeFor(params, kind, 'harder') ? 'harder' : 'easier';
   const total = station.playerIds.length + station.coachJoins;
   const space = plan.request.space;
   const next = steppedArea(params, kind, band, station.area, direction, space, total);

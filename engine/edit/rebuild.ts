@@ -3,22 +3,13 @@ import type { ActivityDefinition, Notice, Phase, Plan, RuleParameters, Station }
 import { layoutOf } from '../kinds/registry';
 import { activityById } from '../planning/activities';
 import { changeoverBetween } from '../planning/changeover';
+import { isDerivedNotice } from '../planning/derived-notices';
 import { effectiveParameters } from '../planning/effective-parameters';
 import { equipPhase } from '../planning/kit';
 import { markPhase } from '../planning/markings';
 import { progressionsFor } from '../planning/progressions';
 import { summarize } from '../planning/summary';
-
-/** Warning codes the phase and summary steps produce; rebuilt from scratch on every edit. */
-const DERIVED_CODES = new Set([
-  'waiting',
-  'gates-for-goals',
-  'shots-toward-station',
-  'balls-short',
-  'station-without-ball',
-  'bibs-short',
-  'touches-below-target',
-]);
+import { isCheckNotice } from './plan-checks';
 
 /**
  * The activity a station runs: from the rule set, or (for an activity the club has since
@@ -53,17 +44,14 @@ function isCold(plan: Plan, params: RuleParameters): boolean {
   return t !== undefined && t <= params.cautions.coldC;
 }
 
-export function refreshPlan(
-  plan: Plan,
-  phases: Phase[],
-  ruleParams: RuleParameters,
-  checks: Notice[] = [],
-): Plan {
+/**
+ * The plan with `phases` in place and what they imply written again: the notices the stations
+ * imply and the last re-check are dropped (the caller checks the result again).
+ */
+export function refreshPlan(plan: Plan, phases: Phase[], ruleParams: RuleParameters): Plan {
   const params = effectiveParameters(ruleParams, plan.request);
   const band = params.ageGroups[plan.request.ageGroup].band;
-  const warnings: Notice[] = plan.warnings.filter(
-    (w) => !DERIVED_CODES.has(w.code) && !w.code.startsWith('check:'),
-  );
+  const warnings: Notice[] = plan.warnings.filter((w) => !isDerivedNotice(w) && !isCheckNotice(w));
   const fresh = phases.map((p) => ({ ...p, stations: p.stations.map((s) => ({ ...s })) }));
   let lastPlayed: Phase | undefined;
   let breakSince = false;
@@ -107,6 +95,5 @@ export function refreshPlan(
     breakSince = false;
   }
   const totals = summarize(fresh, params, plan.request.minutes, warnings);
-  for (const c of checks) warnings.push({ ...c, code: `check:${c.code}` });
   return { ...plan, phases: fresh, ...totals, warnings };
 }

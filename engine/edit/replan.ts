@@ -7,7 +7,6 @@
 import '../../shared/i18n/localize';
 import type {
   ActivityDefinition,
-  AgeBand,
   Phase,
   Plan,
   PlayerMove,
@@ -16,19 +15,18 @@ import type {
   RuleSetDocument,
   Station,
 } from '../../shared/types';
-import { checkPlan } from '../check-plan';
-import { generatePlan, PlanRequestError } from '../generate-plan';
+import { planFromRules, PlanRequestError } from '../generate-plan';
 import { insideSpace, overlaps, gapBetween, rectOf } from '../geometry';
-import { kindModule, layoutOf } from '../kinds/registry';
-import { activityBlocked, activityById } from '../planning/activities';
+import { activityById } from '../planning/activities';
 import { sizeRuleOf } from '../planning/allocation';
 import { areaForWidth, baseWidth, boundedTable, meetsMinimum } from '../planning/areas';
-import { buildPhase } from '../planning/build-phase';
 import type { BuildContext } from '../planning/context';
 import { equipPhase } from '../planning/kit';
+import { ruledOut } from '../planning/usable';
 import { validatePlanRequest } from '../schema/validate-plan-request';
 import { reRole } from './apply-edit';
-import { editContext, specOf } from './plan-context';
+import { withChecks } from './plan-checks';
+import { editContext, rebuildPhase } from './plan-context';
 import { activityOfStation, refreshPlan } from './rebuild';
 
 export interface ReplanResult {
@@ -49,12 +47,14 @@ export async function replan(
   const request = { ...plan.request, players };
   const validation = validatePlanRequest(request);
   if (!validation.ok) throw new PlanRequestError(validation.errors);
-  const { ctx, rules: allocation } = await editContext(
+  const context = await editContext(
     request,
     rules,
     `${plan.seed}:replan:${change.fromMinute}:${players.length}`,
   );
-  const fresh = await generatePlan({ ...request, seed: plan.seed }, rules);
+  const { ctx, run } = context;
+  // The plan a coach would get for the new squad, from the same run of the club rules.
+  const fresh = await planFromRules(run.compiled, { ...request, seed: plan.seed }, run.facts, run.outcome);
   const byId = new Map(players.map((p) => [p.id, p]));
   const moves: PlayerMove[] = [];
   const phases: Phase[] = [];
@@ -69,16 +69,14 @@ export async function replan(
     const kept = inPlace(phase, removed, arrivals, byId, ctx);
     if (kept) options.push(kept);
     // The new numbers may rule an activity out (too few for a game): only allowed ones are tried.
-    const allowed = (a: ActivityDefinition | undefined): a is ActivityDefinition =>
-      !!a && !activityBlocked(ctx.params, request.ageGroup, ctx.forbidden, a);
+    const allowed = (a: ActivityDefinition | undefined): a is ActivityDefinition => !!a && !ruledOut(ctx, a);
     const candidates = [
       activityById(ctx.params, phase.activityId),
       activityById(ctx.params, fresh.phases[phaseIndex]?.activityId ?? ''),
     ].filter(allowed);
     if (candidates.length) {
-      const spec = specOf({ ...plan, request }, phaseIndex, candidates);
       options.push(
-        matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex),
+        matchIds(phase, rebuildPhase(context, plan, phaseIndex, candidates, lastPlayed), phaseIndex),
       );
     }
     // The fresh plan's groups for this phase, on this phase's clock, unless its keepers would
@@ -99,10 +97,7 @@ export async function replan(
     }
     if (!options.length) {
       // Nothing that ran before still fits the new numbers: everyone together (see sharedGridPhase).
-      const spec = specOf({ ...plan, request }, phaseIndex, []);
-      options.push(
-        matchIds(phase, buildPhase(ctx, allocation, spec, phaseIndex, {}, lastPlayed), phaseIndex),
-      );
+      options.push(matchIds(phase, rebuildPhase(context, plan, phaseIndex, [], lastPlayed), phaseIndex));
     }
     let best: { phase: Phase; moves: PlayerMove[]; count: number } | null = null;
     for (const option of options) {
@@ -151,14 +146,7 @@ export async function replan(
       },
     ],
   };
-  const checks = checkPlan(result, rules);
-  return {
-    plan: {
-      ...result,
-      warnings: [...result.warnings, ...checks.map((c) => ({ ...c, code: `check:${c.code}` }))],
-    },
-    moves,
-  };
+  return { plan: withChecks(result, rules), moves };
 }
 
 /**
@@ -173,13 +161,7 @@ function inPlace(
   ctx: BuildContext,
 ): Phase | null {
   const { params, request, band } = ctx;
-  if (
-    phase.stations.some((s) =>
-      activityBlocked(params, request.ageGroup, ctx.forbidden, activityOfStation(params, s)),
-    )
-  ) {
-    return null;
-  }
+  if (phase.stations.some((s) => ruledOut(ctx, activityOfStation(params, s)))) return null;
   let stations: Station[] = phase.stations
     .map((s) => ({ ...s, playerIds: s.playerIds.filter((id) => !removed.has(id)) }))
     .filter((s) => s.playerIds.length > 0);
@@ -201,7 +183,7 @@ function inPlace(
   }
   stations = stations.map((s) => {
     if (!changed.has(s.id)) return s;
-    const next = reRole(s, s.playerIds, byId, params, { ...phaseOwner(request) } as Plan, band as AgeBand);
+    const next = reRole(s, s.playerIds, byId, params, request.level, band);
     const activity = activityOfStation(params, next);
     const size = sizeRuleOf(activity, { params, level: request.level, band });
     if (activity.kind !== 'goalkeeping' && size && !size.allows(outfieldAfter(next)))
@@ -236,13 +218,7 @@ function inPlace(
     phase.name,
   );
   if (trial.some((s) => (s.waiting ?? 0) > (ctx.cold ? 0 : 1))) return null;
-  void kindModule;
-  void layoutOf;
   return { ...phase, stations };
-}
-
-function phaseOwner(request: Plan['request']): Pick<Plan, 'request'> {
-  return { request };
 }
 
 /** Outfield players of a station (keepers in goal are extra to a group's size). */

@@ -4,14 +4,15 @@
  * the places and the balls each station ends up with.
  */
 import '../../shared/i18n/localize';
-import type { ActivityDefinition, Notice, Station } from '../../shared/types';
+import type { ActivityDefinition, Station } from '../../shared/types';
 import { kindModule } from '../kinds/registry';
+import type { DerivedNotices } from './derived-notices';
 
 export function equipPhase(
   stations: Station[],
   activities: ActivityDefinition[],
   kit: { balls: number; bibs: number },
-  warnings: Notice[],
+  warnings: DerivedNotices,
   phaseName: string,
   cold = false,
 ): void {

@@ -10,7 +10,6 @@ import '../../shared/i18n/localize';
 import type {
   ActivityDefinition,
   GoalPlacement,
-  Notice,
   Point,
   RuleParameters,
   Station,
@@ -28,6 +27,7 @@ import {
 } from '../kinds/frame';
 import type { Drawing, LocalPoint } from '../kinds/kind-module';
 import { kindModule, layoutOf } from '../kinds/registry';
+import type { DerivedCode, DerivedNotices } from './derived-notices';
 
 /** Kinds whose end targets get goals first after keepers' stations, in this order. */
 const GOAL_PRIORITY: StationKind[] = [
@@ -55,7 +55,7 @@ export function markPhase(
   activities: ActivityDefinition[],
   params: RuleParameters,
   kit: { cones: number; goals: number },
-  warnings: Notice[],
+  warnings: DerivedNotices,
   phaseName: string,
   previousGoals: Point[] = [],
 ): void {
@@ -312,7 +312,7 @@ function targetlessAdvice(kind: StationKind, words: MarkingNotes): string {
   return words.endZone;
 }
 
-function pushOnce(warnings: Notice[], code: string, message: string): void {
+function pushOnce(warnings: DerivedNotices, code: DerivedCode, message: string): void {
   if (!warnings.some((w) => w.code === code && w.message === message)) warnings.push({ code, message });
 }
 

@@ -6,16 +6,10 @@
 import '../../shared/i18n/localize';
 import type { ActivityDefinition, Focus, SessionSlot, SlotRole, StationKind } from '../../shared/types';
 import { ACTIVITY_KIND_LABELS, FOCUSES } from '../../shared/types';
-import {
-  activityBlocked,
-  activityById,
-  kindBlocked,
-  notEnoughForIt,
-  rankedActivities,
-  type Ranked,
-} from './activities';
+import { activityById, kindBlocked, notEnoughForIt, rankedActivities, type Ranked } from './activities';
 import { activityFeasible, type AllocationRules } from './allocation';
 import { addWarning, type BuildContext } from './context';
+import { whyUnusable } from './usable';
 
 export interface SlotPlan {
   role: SlotRole;
@@ -128,7 +122,7 @@ export function sessionSlots(
   }
   for (const plan of decided) if (plan) slots.push(plan);
 
-  placePins(ctx, slots, fits);
+  placePins(ctx, slots);
   placeRequired(ctx, slots, fits);
   if (request.equipment.balls < n) addShortBallOptions(ctx, slots, fits);
   if (!slots.length) {
@@ -209,13 +203,13 @@ function eitherKind(kinds: StationKind[]): string {
 }
 
 /** Pins go first in a part that plays their kind, else into a part of their own before the last. */
-function placePins(ctx: BuildContext, slots: SlotPlan[], fits: (a: ActivityDefinition) => boolean): void {
+function placePins(ctx: BuildContext, slots: SlotPlan[]): void {
   const { params, request } = ctx;
   const taken = new Set<SlotPlan>();
   for (const id of request.pinnedActivityIds ?? []) {
     const a = activityById(params, id);
     const blocked = a
-      ? (activityBlocked(params, request.ageGroup, ctx.forbidden, a) ?? (fits(a) ? null : notEnoughForIt()))
+      ? whyUnusable(ctx, a)
       : $localize`:why an activity cannot be used today:not in the club’s activities`;
     if (!a || blocked) {
       addWarning(

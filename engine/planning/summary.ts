@@ -1,6 +1,7 @@
 /** Plan-wide figures after the phases are built: kit needed, touches, active share, touch target. */
 import '../../shared/i18n/localize';
-import type { Equipment, Notice, Phase, Plan, RuleParameters } from '../../shared/types';
+import type { Equipment, Phase, Plan, RuleParameters } from '../../shared/types';
+import type { DerivedNotices } from './derived-notices';
 import { estimateTouches } from './touches';
 
 export function equipmentNeeded(phases: Phase[]): Equipment {
@@ -25,7 +26,7 @@ export function summarize(
   phases: Phase[],
   params: RuleParameters,
   minutes: number,
-  warnings: Notice[],
+  warnings: DerivedNotices,
 ): Pick<Plan, 'touches' | 'activeShare' | 'equipmentNeeded'> {
   const { touches, activeShare } = estimateTouches(phases, params);
   const target = params.touchTarget;
