@@ -18,7 +18,7 @@ import { ageGroupLabel, GAME_LIKE_KINDS } from '../shared/types';
 import { compileRuleSet } from './club-rules/compile-rule-set';
 import { insideSpace, overlaps, rectOf, roomBetween } from './geometry';
 import { kindModule } from './kinds/registry';
-import { keepBallFormat } from './kinds/keep-ball';
+import { keepBallFormat, keepBallRatio, keepsKeepBallRatio } from './kinds/keep-ball';
 import { effectiveParameters } from './planning/effective-parameters';
 import { keepersAtOnce } from './planning/markings';
 import { defaultRuleSet } from './rule-sets';
@@ -262,8 +262,8 @@ function keepBallNotices(plan: Plan, params: RuleParameters, s: Station, where: 
   const defenders = s.roles.defenders ?? [];
   const attackers = (s.roles.attackers?.length ?? 0) + s.coachJoins;
   const out: Notice[] = [];
-  const max = Math.min(4, params.keepBall[level].maxAttackersPerDefender);
-  if (defenders.length === 0 || attackers / defenders.length > max || attackers / defenders.length < 2) {
+  const { max } = keepBallRatio(params, level);
+  if (!keepsKeepBallRatio(params, level, attackers, defenders.length)) {
     const suggested = keepBallFormat(params, level, attackers + defenders.length);
     out.push({
       code: 'keep-ball-ratio',

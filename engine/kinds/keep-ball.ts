@@ -5,13 +5,32 @@ import type { KindModule } from './kind-module';
 import { ballNeed, circle, corners, groupCount, perimeter, place, setUp, waitingFor } from './common';
 import type { SizeRule } from '../planning/size-rule';
 
+/**
+ * How many attackers per defender keep-ball at a level plays with: at least two (fewer and the
+ * defenders win the ball at once — common practice), at most the rule set's own parameter (its
+ * schema caps it at 4).
+ */
+export function keepBallRatio(params: RuleParameters, level: Level): { min: number; max: number } {
+  return { min: 2, max: params.keepBall[level].maxAttackersPerDefender };
+}
+
+/** Whether `attackers` against `defenders` keeps the level's ratio. */
+export function keepsKeepBallRatio(
+  params: RuleParameters,
+  level: Level,
+  attackers: number,
+  defenders: number,
+): boolean {
+  const { min, max } = keepBallRatio(params, level);
+  return defenders > 0 && attackers / defenders >= min && attackers / defenders <= max;
+}
+
 /** The keep-ball format for a group (players plus a joining coach), most preferred first. */
 export function keepBallFormat(params: RuleParameters, level: Level, total: number): KeepBallFormat {
   const exact = params.keepBall[level].formats.find((f) => f.attackers + f.defenders === total);
   if (exact) return exact;
   // Out-of-table sizes (after a coach's edit): fewest defenders that keep the level's ratio.
-  const maxRatio = params.keepBall[level].maxAttackersPerDefender;
-  const defenders = Math.max(1, Math.ceil(total / (maxRatio + 1)));
+  const defenders = Math.max(1, Math.ceil(total / (keepBallRatio(params, level).max + 1)));
   return { attackers: Math.max(0, total - defenders), defenders };
 }
 

@@ -21,6 +21,7 @@ import {
   rulePathWords,
 } from '../../shared/types/rule-words';
 import { DEFAULT_UNITS, measureSymbol, ruleSetMeasureAt } from '../../shared/units';
+import { keepBallRatio, keepsKeepBallRatio } from '../kinds/keep-ball';
 import { kindLayouts } from '../kinds/registry';
 // Precompiled from shared/schemas/rule-set.schema.json: no eval, so it runs under the app's CSP.
 import generated from './generated/rule-set.validator';
@@ -231,16 +232,15 @@ function semanticErrors(doc: RuleSetDocument): PointerError[] {
   }
 
   for (const level of LEVELS) {
-    const kb = params.keepBall[level];
-    kb.formats.forEach((f, i) => {
-      const ratio = f.attackers / f.defenders;
-      if (ratio > kb.maxAttackersPerDefender || ratio > 4 || ratio < 2) {
+    const { min, max } = keepBallRatio(params, level);
+    params.keepBall[level].formats.forEach((f, i) => {
+      if (!keepsKeepBallRatio(params, level, f.attackers, f.defenders)) {
         errors.push({
           pointer: `/parameters/keepBall/${level}/formats/${i}`,
           message:
-            ratio < 2
-              ? `Keep-ball, ${LEVEL_WORDS[level]}: ${f.attackers}v${f.defenders} has fewer than 2 attackers per defender.`
-              : `Keep-ball, ${LEVEL_WORDS[level]}: ${f.attackers}v${f.defenders} has more than ${Math.min(4, kb.maxAttackersPerDefender)} attackers per defender.`,
+            f.attackers / f.defenders < min
+              ? `Keep-ball, ${LEVEL_WORDS[level]}: ${f.attackers}v${f.defenders} has fewer than ${min} attackers per defender.`
+              : `Keep-ball, ${LEVEL_WORDS[level]}: ${f.attackers}v${f.defenders} has more than ${max} attackers per defender.`,
         });
       }
     });
