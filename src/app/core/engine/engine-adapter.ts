@@ -1,5 +1,13 @@
-/** Binds the engine (loaded lazily by BrowserEngine) to what the plan page needs. */
-import { areaLimits, checkPlan, listActivities, tryEdit } from '../../../../engine/index';
+/** Binds the engine (loaded lazily by BrowserEngine) to what the plan page and pitch-side need. */
+import {
+  areaLimits,
+  checkPlan,
+  leftEarlyIds,
+  listActivities,
+  progressionOutcome,
+  replan,
+  tryEdit,
+} from '../../../../engine/index';
 import type { BrowserEngineApi } from './browser-engine';
 
 export function createEngineAdapter(): BrowserEngineApi {
@@ -16,5 +24,9 @@ export function createEngineAdapter(): BrowserEngineApi {
         allowed: a.allowed,
         ...(a.reason ? { reason: a.reason } : {}),
       })),
+    replan: (plan, change, rules) => replan(plan, change, rules ?? undefined),
+    progression: (plan, phaseIndex, stationId, verdict, rules) =>
+      progressionOutcome(plan, phaseIndex, stationId, verdict, rules ?? undefined),
+    leftEarlyIds: (plan) => leftEarlyIds(plan),
   };
 }

@@ -3,7 +3,7 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import { applyProgression, generatePlan, progressionOutcome } from '../../../../engine/index';
+import { applyProgression, generatePlan, progressionOutcome, replan } from '../../../../engine/index';
 import type { Plan, SessionPlanDto, Station, StationVerdict } from '../../../../shared/types';
 import { PitchSidePage } from './pitch-side-page';
 import { inUnitsText } from '../../../../shared/units';
@@ -269,6 +269,46 @@ describe('PitchSidePage', () => {
       'Rondo start: Fen Q. joins station 1 (Square one)',
     );
     expect(el.querySelector('button[aria-label="Fen Q. leaves early"]')).not.toBeNull();
+  });
+
+  it("shows only the engine's re-plan: a working note until it is ready, never a guessed plan", async () => {
+    const players = ['a', 'b', 'c', 'd', 'e', 'f', 'g', 'h'].map((id) => ({ id, name: id.toUpperCase() }));
+    const real = await generatePlan({ ...plan.request, players: players.slice(0, 7), seed: 'pitch-replan' });
+    const t = setUp();
+    t.http.expectOne('/api/plans/p1').flush({ ...session, plan: real });
+    t.http.expectOne('/api/teams/t1/players').flush(
+      players.map((p) => ({
+        id: p.id,
+        teamId: 't1',
+        displayName: p.name,
+        goalkeeper: false,
+        active: true,
+      })),
+    );
+    t.http.expectOne('/api/rule-sets/rs1').flush({ id: 'rs1', body: null });
+    await t.settle();
+    const { el, button, fixture, http } = t;
+    const present = () =>
+      Array.from(el.querySelectorAll('[aria-label=Present] button')).map((b) => b.textContent!.trim());
+
+    button('button[aria-label="H arrives"]').click();
+    fixture.detectChanges();
+    expect(el.querySelector('[data-testid=replanning]')?.getAttribute('role')).toBe('status');
+    expect(present()).not.toContain('H');
+    expect(el.querySelector('[data-testid=moves]')).toBeNull();
+    http.expectOne('/api/plans/p1/replan');
+
+    const expected = await replan(real, { add: [{ id: 'h', name: 'H' }], fromMinute: 0 });
+    for (let i = 0; i < 100 && el.querySelector('[data-testid=replanning]'); i++) {
+      await new Promise((resolve) => setTimeout(resolve, 20));
+      await t.settle();
+    }
+    expect(el.querySelector('[data-testid=replanning]')).toBeNull();
+    expect(present()).toContain('H');
+    const stationOfH = expected.plan.phases[0].stations.findIndex((s) => s.playerIds.includes('h'));
+    const cards = el.querySelectorAll('cw-station-card');
+    expect(cards[stationOfH]?.textContent).toContain('H');
+    expect(el.querySelector('[data-testid=moves]')?.textContent).toContain('H joins');
   });
 
   it('runs a drinks break as a phase of its own: the countdown says so, no stations, and what to set up next', async () => {

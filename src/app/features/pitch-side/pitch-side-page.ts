@@ -6,10 +6,12 @@ import {
   effect,
   inject,
   input,
+  PendingTasks,
   signal,
   untracked,
 } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { catchError, EMPTY, merge, switchMap, tap, type Observable } from 'rxjs';
 import { MatButtonModule } from '@angular/material/button';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { RouterLink } from '@angular/router';
@@ -19,32 +21,24 @@ import type {
   PlayerDto,
   PlayerMove,
   PresentPlayer,
+  RosterChange,
+  RuleSetDocument,
   SessionPlanDto,
   StationVerdict,
 } from '../../../../shared/types';
 import { PlanRulesApi } from '../../core/api/plan-rules-api';
+import { BrowserEngine, type BrowserEngineApi } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
-import { ActionQueue } from './services/action-queue';
-import { newClientId } from './services/client-id';
-import { adjustRosterLocally } from './services/local-adjust';
-import { preloadEngine, progressLocally, replanLocally } from './services/offline-engine';
-import {
-  formatCountdown,
-  jumpToMinute,
-  pauseClock,
-  readClock,
-  startClock,
-  STOPPED_CLOCK,
-  type ClockState,
-} from './services/phase-clock';
-import { PhaseSignal } from './services/phase-signal';
+import { PhaseChime } from './services/phase-chime';
+import { formatCountdown } from './services/phase-clock';
+import { PitchClock } from './services/pitch-clock';
 import { PitchSideApi } from './services/pitch-side-api';
-import { readSnapshot, saveSnapshot } from './services/plan-snapshot';
+import { PitchSync } from './services/pitch-sync';
+import { PlanSnapshot, type PitchSnapshot } from './services/plan-snapshot';
 import { ScreenAwake } from './services/screen-awake';
 import { UnitChoice } from '../../core/units/unit-choice';
 import { StationCard } from './station-card';
-import { leftEarlyIds } from '../../../../engine/attendance-from-plan';
 import { RegisterPanel } from '../plans/components/register-panel';
 import { changeoverWords, isBreak } from '../plans/services/plan-words';
 
@@ -58,6 +52,7 @@ const DOUBLE_TAP_MS = 1500;
   templateUrl: './pitch-side-page.html',
   styleUrl: './pitch-side-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
+  providers: [PitchClock, PhaseChime, PitchSync],
 })
 export class PitchSidePage {
   /** The plan's id, from the route. */
@@ -65,16 +60,26 @@ export class PitchSidePage {
 
   private readonly api = inject(PitchSideApi);
   private readonly planRules = inject(PlanRulesApi);
-  protected readonly queue = inject(ActionQueue);
+  private readonly browserEngine = inject(BrowserEngine);
+  private readonly pendingTasks = inject(PendingTasks);
+  private readonly destroyRef = inject(DestroyRef);
+  protected readonly sync = inject(PitchSync);
+  private readonly clock = inject(PitchClock);
+  private readonly chime = inject(PhaseChime);
+  private readonly snapshots = inject(PlanSnapshot);
   private readonly units = inject(UnitChoice);
-  private readonly phaseSignal = new PhaseSignal();
   private readonly screenAwake = new ScreenAwake();
 
   protected readonly session = signal<SessionPlanDto | null>(null);
   protected readonly plan = signal<Plan | null>(null);
   protected readonly roster = signal<PlayerDto[]>([]);
-  private readonly rules = signal<unknown>(null);
-  protected readonly clock = signal<ClockState>(STOPPED_CLOCK);
+  private readonly rules = signal<RuleSetDocument | null>(null);
+  /** The engine, once loaded: pitch-side shows only plans it computed. */
+  private readonly engine = signal<BrowserEngineApi | null>(null);
+  /** How many of the coach's roster changes the engine is still re-planning. */
+  private readonly replanning = signal(0);
+  /** Roster changes re-planned one after another, each from the plan the one before left. */
+  private replans: Promise<void> = Promise.resolve();
   protected readonly verdicts = signal<Record<string, string>>({});
   /** The last verdict given per "phase:station" and when, to tell a double tap from a second step. */
   private readonly lastVerdict = new Map<string, { verdict: StationVerdict; at: number }>();
@@ -85,7 +90,8 @@ export class PitchSidePage {
   protected readonly fromDevice = signal(false);
   protected readonly announcement = signal('');
   protected readonly awake = signal(false);
-  private readonly now = signal(Date.now());
+  /** Whether the rest of the session is being re-planned: the screen says so rather than guess. */
+  protected readonly working = computed(() => this.replanning() > 0);
 
   /**
    * The plan as the coach reads it: the engine's texts (notes, safety, steps) in their units, once
@@ -98,13 +104,11 @@ export class PitchSidePage {
   protected readonly phases = computed(() => this.shown()?.phases ?? []);
   /** Changes the server refused, their reasons in the coach's units. */
   protected readonly refused = computed(() =>
-    this.queue.refused().map((refusal) => ({ ...refusal, message: this.units.text(refusal.message) })),
+    this.sync.refused().map((refusal) => ({ ...refusal, message: this.units.text(refusal.message) })),
   );
-  protected readonly reading = computed(() => readClock(this.clock(), this.phases(), this.now()));
-  protected readonly running = computed(
-    () => this.clock().startedAt !== null && this.clock().pausedAt === null,
-  );
-  protected readonly started = computed(() => this.clock().startedAt !== null);
+  protected readonly reading = computed(() => this.clock.read(this.phases()));
+  protected readonly running = this.clock.running;
+  protected readonly started = this.clock.started;
   protected readonly currentPhase = computed<Phase | null>(
     () => this.phases()[this.reading().phaseIndex] ?? null,
   );
@@ -139,12 +143,10 @@ export class PitchSidePage {
   protected readonly countdownLabel = computed(() =>
     this.onBreak() ? $localize`Time left in the drinks break` : $localize`Time left in this phase`,
   );
-  protected readonly pendingCount = computed(
-    () => this.queue.pending().filter((action) => action.planId === this.planId()).length,
-  );
+  protected readonly pendingCount = computed(() => this.sync.pendingCount(this.planId()));
   /** "Offline", "Syncing · 2 queued": the badge shown while changes wait for the network. */
   protected readonly badgeWords = computed(() => {
-    const state = this.queue.online()
+    const state = this.sync.online()
       ? $localize`:Changes are being sent to the server:Syncing`
       : $localize`:The phone has no network:Offline`;
     const count = this.pendingCount();
@@ -166,19 +168,21 @@ export class PitchSidePage {
       .map((player) => ({ id: player.id, name: this.names()[player.id] ?? player.id }))
       .sort((a, b) => a.name.localeCompare(b.name)),
   );
-  /** Players who came and went home early: they came, so they are not waited for. */
+  /** Players who came and went home early (they came, so they are not waited for); null until the engine says. */
   private readonly leftEarlyIds = computed(() => {
     const plan = this.plan();
-    return plan ? leftEarlyIds(plan) : new Set<string>();
+    const engine = this.engine();
+    return plan && engine ? engine.leftEarlyIds(plan) : null;
   });
   protected readonly leftEarly = computed(() =>
-    [...this.leftEarlyIds()]
+    [...(this.leftEarlyIds() ?? [])]
       .map((id) => this.names()[id] ?? $localize`:A player whose name is not known:A player`)
       .sort((a, b) => a.localeCompare(b)),
   );
   protected readonly absent = computed(() => {
     const here = new Set((this.plan()?.request.players ?? []).map((player) => player.id));
     const gone = this.leftEarlyIds();
+    if (!gone) return [];
     return this.roster()
       .filter((player) => player.active && !here.has(player.id) && !gone.has(player.id))
       .sort((a, b) => a.displayName.localeCompare(b.displayName));
@@ -220,78 +224,68 @@ export class PitchSidePage {
     return byStation;
   });
 
+  /** What the device keeps of the running plan, to reopen it without a network. */
+  private readonly copy = computed<PitchSnapshot | null>(() => {
+    const session = this.session();
+    const plan = this.plan();
+    if (!session || !plan) return null;
+    return {
+      session: { ...session, plan },
+      roster: this.roster(),
+      rules: this.rules(),
+      clock: this.clock.state(),
+      verdicts: this.verdicts(),
+    };
+  });
+
   constructor() {
-    const destroyRef = inject(DestroyRef);
     effect(() => {
       const planId = this.planId();
       untracked(() => this.load(planId));
     });
+    this.destroyRef.onDestroy(() => void this.screenAwake.release());
 
-    const ticker = setInterval(() => this.now.set(Date.now()), 1000);
-    destroyRef.onDestroy(() => {
-      clearInterval(ticker);
-      this.phaseSignal.close();
-      void this.screenAwake.release();
-    });
+    // The engine loads with the screen, so it is there (and cached) for the first change offline.
+    void this.pendingTasks.run(() => this.loadEngine().catch(() => undefined));
 
-    // A gentle signal whenever the running clock crosses into a new phase.
-    let lastPhase = -1;
     effect(() => {
-      const { phaseIndex, finished } = this.reading();
-      const running = this.running();
-      const marker = finished ? this.phases().length : phaseIndex;
-      if (running && lastPhase !== -1 && marker !== lastPhase) {
-        this.phaseSignal.play();
-        const phase = untracked(this.currentPhase);
-        this.announcement.set(
-          finished
-            ? $localize`:Read out when the session ends:Session finished.`
-            : $localize`:Read out when a phase begins:Now: ${phase?.name ?? ''}:phaseName:.`,
-        );
-      }
-      lastPhase = running ? marker : -1;
+      const reading = this.reading();
+      if (!this.chime.ringOnPhaseChange(reading, this.phases().length, this.running())) return;
+      const phase = untracked(this.currentPhase);
+      this.announcement.set(
+        reading.finished
+          ? $localize`:Read out when the session ends:Session finished.`
+          : $localize`:Read out when a phase begins:Now: ${phase?.name ?? ''}:phaseName:.`,
+      );
     });
 
     effect(() => {
-      const session = this.session();
-      const plan = this.plan();
-      if (!session || !plan) return;
-      saveSnapshot(session.id, {
-        session: { ...session, plan },
-        roster: this.roster(),
-        rules: this.rules(),
-        clock: this.clock(),
-        verdicts: this.verdicts(),
-      });
+      const copy = this.copy();
+      if (copy) this.snapshots.save(copy.session.id, copy);
     });
 
-    this.queue.synced.pipe(takeUntilDestroyed()).subscribe(({ action, change }) => {
-      if (action.planId !== this.planId() || !change?.plan?.phases) return;
-      const stillQueued = this.queue
-        .pending()
-        .some((other) => other.planId === action.planId && other.kind !== 'feedback');
-      if (stillQueued) return;
+    this.sync.serverPlans.pipe(takeUntilDestroyed()).subscribe((change) => {
+      if (change.planId !== this.planId()) return;
       this.plan.set(change.plan);
-      if (action.kind === 'replan') this.moves.set(change.moves);
+      if (change.kind === 'replan') this.moves.set(change.moves);
     });
-    void this.queue.flush();
   }
 
   protected startSession(): void {
-    this.phaseSignal.unlock();
-    this.clock.update((state) => startClock(state, Date.now()));
+    this.chime.unlock();
+    this.clock.start();
     void this.screenAwake.keepOn().then((on) => this.awake.set(on));
   }
 
   protected pauseSession(): void {
-    this.clock.update((state) => pauseClock(state, Date.now()));
+    this.clock.pause();
   }
 
   protected goToPhase(index: number): void {
     const phase = this.phases()[index];
     if (!phase) return;
-    this.phaseSignal.unlock();
-    this.clock.update((state) => jumpToMinute(state, phase.startMinute, Date.now()));
+    this.chime.unlock();
+    this.clock.jumpTo(phase.startMinute);
     this.announcement.set($localize`:Read out when a phase begins:Now: ${phase.name}:phaseName:.`);
   }
 
@@ -308,16 +302,7 @@ export class PitchSidePage {
   }
 
   protected verdictQueued(stationId: string): boolean {
-    const phaseIndex = this.reading().phaseIndex;
-    return this.queue
-      .pending()
-      .some(
-        (action) =>
-          action.planId === this.planId() &&
-          action.kind !== 'replan' &&
-          action.body.stationId === stationId &&
-          action.body.phaseIndex === phaseIndex,
-      );
+    return this.sync.verdictQueued(this.planId(), this.reading().phaseIndex, stationId);
   }
 
   /** Records how a station is going; too easy or too hard also steps the station. */
@@ -331,11 +316,11 @@ export class PitchSidePage {
     this.lastVerdict.set(key, { verdict, at: now });
     this.verdicts.update((all) => ({ ...all, [`${phaseIndex}:${stationId}`]: verdict }));
     this.refusals.update(({ [`${phaseIndex}:${stationId}`]: _, ...rest }) => rest);
-    const body = { phaseIndex, stationId, verdict };
     const plan = this.plan();
     if (plan && verdict !== 'right') {
-      // Step the station on screen at once; the server's answer replaces it when it arrives.
-      progressLocally(plan, phaseIndex, stationId, verdict, this.rules())
+      // The engine steps the station on screen at once; the server's answer replaces it when it arrives.
+      this.loadEngine()
+        .then((engine) => engine.progression(plan, phaseIndex, stationId, verdict, this.rules()))
         .then(({ plan: stepped, refused }) => {
           if (this.plan() !== plan) return;
           this.plan.set(stepped);
@@ -350,13 +335,7 @@ export class PitchSidePage {
         .catch(() => undefined);
     }
     // The progression call records the feedback too (once per clientId), for every verdict.
-    void this.queue.enqueue({
-      kind: 'progression',
-      clientId: newClientId(),
-      planId: this.planId(),
-      queuedAt: new Date().toISOString(),
-      body,
-    });
+    this.sync.sendVerdict(this.planId(), { phaseIndex, stationId, verdict });
     this.announcement.set(
       verdict === 'right'
         ? $localize`:Read out after the coach says a station is about right:Noted: about right.`
@@ -390,19 +369,8 @@ export class PitchSidePage {
   private changeRoster(change: { add?: PresentPlayer[]; remove?: string[] }): void {
     const plan = this.plan();
     if (!plan) return;
-    const fromMinute = this.started() ? Math.floor(this.reading().elapsedSeconds / 60) : 0;
-    const local = adjustRosterLocally(plan, { ...change, fromMinute });
-    this.plan.set(local.plan);
-    this.moves.set(local.moves);
-    // The engine's re-plan in the browser gives the same answer the server will; show it as soon as it is ready.
-    replanLocally(plan, { ...change, fromMinute }, this.rules())
-      .then((result) => {
-        if (this.plan() === local.plan) {
-          this.plan.set(result.plan);
-          this.moves.set(result.moves);
-        }
-      })
-      .catch(() => undefined);
+    const fromMinute = this.started() ? this.clock.minuteNow() : 0;
+    this.replan({ ...change, fromMinute });
     const who =
       change.add?.[0]?.name ??
       this.names()[change.remove?.[0] ?? ''] ??
@@ -412,47 +380,81 @@ export class PitchSidePage {
         ? $localize`:Read out when a player arrives:${who}:playerName: joins. Re-planning the rest of the session.`
         : $localize`:Read out when a player leaves early:${who}:playerName: leaves. Re-planning the rest of the session.`,
     );
-    void this.queue.enqueue({
-      kind: 'replan',
-      clientId: newClientId(),
-      planId: this.planId(),
-      queuedAt: new Date().toISOString(),
-      body: { ...change, fromMinute },
+    this.sync.sendRosterChange(this.planId(), { ...change, fromMinute });
+  }
+
+  /**
+   * The engine's re-plan in the browser, the same answer the server will give, shown as soon as it
+   * is ready (unless the server's came first); until then the screen says it is re-planning.
+   */
+  private replan(change: RosterChange): void {
+    this.replanning.update((count) => count + 1);
+    this.replans = this.replans.then(async () => {
+      const plan = this.plan();
+      try {
+        if (!plan) return;
+        const engine = await this.loadEngine();
+        const result = await engine.replan(plan, change, this.rules());
+        if (this.plan() !== plan) return;
+        this.plan.set(result.plan);
+        this.moves.set(result.moves);
+      } catch {
+        // No engine (offline before it was cached): the server's answer comes with the queue.
+      } finally {
+        this.replanning.update((count) => count - 1);
+      }
     });
   }
 
+  /** The engine (tried again after a failed load), kept for the parts of the screen it computes. */
+  private async loadEngine(): Promise<BrowserEngineApi> {
+    const engine = await this.browserEngine.load();
+    this.engine.set(engine);
+    return engine;
+  }
+
   private load(planId: string): void {
-    const snapshot = readSnapshot(planId);
+    const snapshot = this.snapshots.read(planId);
     if (snapshot) {
       this.session.set(snapshot.session);
       this.plan.set(snapshot.session.plan);
       this.roster.set(snapshot.roster);
       this.rules.set(snapshot.rules ?? null);
-      this.clock.set(snapshot.clock);
+      this.clock.restore(snapshot.clock);
       this.verdicts.set(snapshot.verdicts);
       this.fromDevice.set(true);
     }
-    this.api.getPlan(planId).subscribe({
-      next: (session) => {
-        this.loadError.set(null);
-        this.fromDevice.set(false);
-        this.session.set(session);
-        const waiting = this.queue.pendingFor(planId).some((action) => action.kind !== 'feedback');
-        // Changes made offline stay on screen until the server has them.
-        if (!waiting || !snapshot) this.plan.set(session.plan);
-        this.api.listPlayers(session.teamId).subscribe({
-          next: (players) => this.roster.set(players),
-          error: () => undefined,
-        });
-        this.planRules.get(session.ruleSetId).subscribe({
-          next: (ruleSet) => this.rules.set(ruleSet.body),
-          error: () => undefined,
-        });
-        preloadEngine();
-      },
-      error: (error: unknown) => {
-        if (!snapshot) this.loadError.set(problemMessage(error));
-      },
-    });
+    const quietly = <T>(call: Observable<T>, use: (value: T) => void) =>
+      call.pipe(
+        tap(use),
+        catchError(() => EMPTY),
+      );
+    this.api
+      .getPlan(planId)
+      .pipe(
+        tap({
+          next: (session) => {
+            this.loadError.set(null);
+            this.fromDevice.set(false);
+            this.session.set(session);
+            // Changes made offline stay on screen until the server has them.
+            if (!this.sync.waiting(planId) || !snapshot) this.plan.set(session.plan);
+          },
+          error: (error: unknown) => {
+            if (!snapshot) this.loadError.set(problemMessage(error));
+          },
+        }),
+        switchMap((session) =>
+          merge(
+            quietly(this.api.listPlayers(session.teamId), (players) => this.roster.set(players)),
+            quietly(this.planRules.get(session.ruleSetId), (ruleSet) =>
+              this.rules.set(ruleSet.body as RuleSetDocument),
+            ),
+          ),
+        ),
+        catchError(() => EMPTY),
+        takeUntilDestroyed(this.destroyRef),
+      )
+      .subscribe();
   }
 }

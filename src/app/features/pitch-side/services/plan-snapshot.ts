@@ -1,4 +1,5 @@
-import type { PlayerDto, SessionPlanDto } from '../../../../../shared/types';
+import { Injectable } from '@angular/core';
+import type { PlayerDto, RuleSetDocument, SessionPlanDto } from '../../../../../shared/types';
 import { plansWithQueuedActions } from './action-queue';
 import type { ClockState } from './phase-clock';
 import {
@@ -14,7 +15,7 @@ export interface PitchSnapshot {
   roster: PlayerDto[];
   clock: ClockState;
   /** The rule-set document the plan was made with, for re-plans without a network. */
-  rules?: unknown;
+  rules?: RuleSetDocument | null;
   /** Latest verdict per station key (`phaseIndex:stationId`). */
   verdicts: Record<string, string>;
 }
@@ -31,31 +32,36 @@ const MAKE_ROOM: RetentionPolicy = { ...SNAPSHOT_RETENTION, maxCopies: 0 };
  * Keeps the last state of a running plan on the device (beside the service worker's cache), and
  * drops old copies of other plans so the device's storage does not grow with every session.
  */
-export function saveSnapshot(planId: string, snapshot: PitchSnapshot, now = Date.now()): void {
-  try {
-    const value = JSON.stringify(snapshot);
-    let savedAt = prune(planId, now, SNAPSHOT_RETENTION);
+@Injectable({ providedIn: 'root' })
+export class PlanSnapshot {
+  /** Saves the plan's state; storage full or blocked loses only this copy, never the running plan. */
+  save(planId: string, snapshot: PitchSnapshot, now = Date.now()): void {
     try {
-      localStorage.setItem(key(planId), value);
-    } catch (error) {
-      if (!isQuotaError(error)) throw error;
-      savedAt = prune(planId, now, MAKE_ROOM);
-      localStorage.setItem(key(planId), value);
+      const value = JSON.stringify(snapshot);
+      let savedAt = prune(planId, now, SNAPSHOT_RETENTION);
+      try {
+        localStorage.setItem(key(planId), value);
+      } catch (error) {
+        if (!isQuotaError(error)) throw error;
+        savedAt = prune(planId, now, MAKE_ROOM);
+        localStorage.setItem(key(planId), value);
+      }
+      savedAt[planId] = now;
+      localStorage.setItem(SAVED_AT_KEY, JSON.stringify(savedAt));
+    } catch {
+      // Storage still full or blocked: the plan still runs; only a reload offline would lose it.
     }
-    savedAt[planId] = now;
-    localStorage.setItem(SAVED_AT_KEY, JSON.stringify(savedAt));
-  } catch {
-    // Storage still full or blocked: the plan still runs; only a reload offline would lose it.
   }
-}
 
-export function readSnapshot(planId: string): PitchSnapshot | null {
-  try {
-    const raw = localStorage.getItem(key(planId));
-    const parsed = raw ? (JSON.parse(raw) as PitchSnapshot) : null;
-    return parsed?.session?.plan?.phases ? parsed : null;
-  } catch {
-    return null;
+  /** The copy saved on this device, or null when there is none (or it cannot be read). */
+  read(planId: string): PitchSnapshot | null {
+    try {
+      const raw = localStorage.getItem(key(planId));
+      const parsed = raw ? (JSON.parse(raw) as PitchSnapshot) : null;
+      return parsed?.session?.plan?.phases ? parsed : null;
+    } catch {
+      return null;
+    }
   }
 }
 

@@ -1,6 +1,16 @@
-/** A gentle two-note chime and a short buzz when the phase changes. */
-export class PhaseSignal {
+import { DestroyRef, inject, Injectable } from '@angular/core';
+import type { ClockReading } from './phase-clock';
+
+/** A gentle two-note chime and a short buzz when the running clock crosses into another phase. */
+@Injectable()
+export class PhaseChime {
   private audio: AudioContext | null = null;
+  /** The phase (or the end, as the phase count) last seen while the clock ran; -1 while it did not. */
+  private lastMarker = -1;
+
+  constructor() {
+    inject(DestroyRef).onDestroy(() => this.close());
+  }
 
   /** Browsers allow sound only after a tap; call this from one. */
   unlock(): void {
@@ -12,7 +22,19 @@ export class PhaseSignal {
     void this.audio.resume?.();
   }
 
-  play(): void {
+  /**
+   * Chimes when this reading of the running clock is in another phase (or past the end) than the
+   * last one; a start, a resume or a reading while paused only remembers. Says whether it rang.
+   */
+  ringOnPhaseChange(reading: ClockReading, phaseCount: number, running: boolean): boolean {
+    const marker = reading.finished ? phaseCount : reading.phaseIndex;
+    const rings = running && this.lastMarker !== -1 && marker !== this.lastMarker;
+    this.lastMarker = running ? marker : -1;
+    if (rings) this.play();
+    return rings;
+  }
+
+  private play(): void {
     globalThis.navigator?.vibrate?.([160, 90, 160]);
     const audio = this.audio;
     if (!audio) return;
@@ -32,7 +54,7 @@ export class PhaseSignal {
     });
   }
 
-  close(): void {
+  private close(): void {
     void this.audio?.close();
     this.audio = null;
   }
