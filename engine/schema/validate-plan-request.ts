@@ -1,6 +1,7 @@
 /** Checks a PlanRequest against its JSON Schema and names each bad field (e.g. `players/3/id`). */
 import type { ErrorObject, ValidateFunction } from 'ajv';
 // Precompiled from shared/schemas/plan-request.schema.json: no eval, so it runs under the app's CSP.
+import { errorPath } from '../../shared/schemas/error-path';
 import generated from './generated/plan-request.validator';
 
 export interface FieldError {
@@ -41,13 +42,9 @@ function duplicatePlayers(value: unknown): FieldError[] {
   return out;
 }
 
-function fieldOf(instancePath: string, child?: string): string {
-  const parts = instancePath
-    .split('/')
-    .slice(1)
-    .map((p) => p.replace(/~1/g, '/').replace(/~0/g, '~'));
-  if (child !== undefined) parts.push(child);
-  // An empty key still needs a visible name.
+/** The field as "players/3/id"; an empty key still needs a visible name. */
+function fieldOf(e: ErrorObject): string {
+  const parts = errorPath(e);
   return parts.length ? parts.map((p) => (p === '' ? '""' : p)).join('/') : '(request)';
 }
 
@@ -55,21 +52,21 @@ function describe(e: ErrorObject): FieldError {
   const p = e.params as Record<string, unknown>;
   switch (e.keyword) {
     case 'required':
-      return { field: fieldOf(e.instancePath, String(p['missingProperty'])), message: 'is required' };
+      return { field: fieldOf(e), message: 'is required' };
     case 'additionalProperties':
       return {
-        field: fieldOf(e.instancePath, String(p['additionalProperty'])),
+        field: fieldOf(e),
         message: 'is not a known field',
       };
     case 'enum':
       return {
-        field: fieldOf(e.instancePath),
+        field: fieldOf(e),
         message: `must be one of ${(p['allowedValues'] as unknown[]).join(', ')}`,
       };
     case 'type':
-      return { field: fieldOf(e.instancePath), message: `must be ${withArticle(String(p['type']))}` };
+      return { field: fieldOf(e), message: `must be ${withArticle(String(p['type']))}` };
     default:
-      return { field: fieldOf(e.instancePath), message: e.message ?? 'is invalid' };
+      return { field: fieldOf(e), message: e.message ?? 'is invalid' };
   }
 }
 

@@ -3,6 +3,7 @@ import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import Ajv, { type ErrorObject, type ValidateFunction } from 'ajv';
 import addFormats from 'ajv-formats';
+import { errorPath } from '../../shared/schemas/error-path';
 import type { RequestHandler } from 'express';
 import { PROJECT_ROOT } from '../config';
 import { badRequest, type FieldError } from '../http/problem';
@@ -58,17 +59,11 @@ export function fieldErrors(errors: ErrorObject[] | null | undefined, prefix = '
   const seen = new Set<string>();
   const out: FieldError[] = [];
   for (const error of errors ?? []) {
-    let path = error.instancePath.replace(/^\//, '');
+    const path = errorPath(error).join('/');
     let message = error.message ?? $localize`:field error after the field's name:is not valid`;
-    if (error.keyword === 'required') {
-      path = [path, (error.params as { missingProperty: string }).missingProperty].filter(Boolean).join('/');
-      message = $localize`:field error after the field's name:is required`;
-    } else if (error.keyword === 'additionalProperties') {
-      path = [path, (error.params as { additionalProperty: string }).additionalProperty]
-        .filter(Boolean)
-        .join('/');
+    if (error.keyword === 'required') message = $localize`:field error after the field's name:is required`;
+    else if (error.keyword === 'additionalProperties')
       message = $localize`:field error after the field's name:is not a known field`;
-    }
     message = schemaMessage(error) ?? message;
     const field = [prefix, path].filter(Boolean).join('.') || prefix || '(body)';
     const key = `${field}|${message}`;

@@ -1,4 +1,5 @@
 import type { ErrorObject } from 'ajv';
+import { errorPath } from '../../../../shared/schemas/error-path';
 import { schemaWords } from '../../../../shared/i18n/schema-words';
 
 /** Field path ("email", "usualSpace.width") → a message in plain words. */
@@ -50,13 +51,9 @@ export function describeErrors(errors: ErrorObject[], labels: Record<string, str
   return result;
 }
 
+/** The field as Angular names its control ("space.width"), "_" for the whole value. */
 function fieldPath(error: ErrorObject): string {
-  const base = error.instancePath.replace(/^\//, '').split('/').filter(Boolean).join('.');
-  if (error.keyword === 'required') {
-    const missing = (error.params as { missingProperty: string }).missingProperty;
-    return base ? `${base}.${missing}` : missing;
-  }
-  return base || '_';
+  return errorPath(error).join('.') || '_';
 }
 
 function humanise(path: string): string {
