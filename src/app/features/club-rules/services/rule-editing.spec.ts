@@ -1,4 +1,4 @@
-import { locatePointer, locatePointers, syntaxErrorLocation } from './json-locations';
+import { firstSyntaxError, locatePointer, locatePointers, syntaxErrorLocation } from './json-locations';
 import { rebaseEdits } from './rebase-edits';
 import { textToFormats, formatsToText } from '../rule-tables';
 
@@ -32,6 +32,19 @@ describe('locatePointers', () => {
     expect(syntaxErrorLocation(broken, error)).toEqual({ line: 3, column: 8, offset: 19 });
     expect(syntaxErrorLocation('{"a": [1, 2,]}')?.column).toBe(13);
     expect(syntaxErrorLocation('{"a": 1} x')?.column).toBe(10);
+  });
+
+  it('holds the text to strict JSON, as JSON.parse does, and finds nothing wrong in valid text', () => {
+    expect(firstSyntaxError('{"a": 1 // why\n}')).toBe(8);
+    expect(firstSyntaxError('{"a": "open')).not.toBeNull();
+    expect(firstSyntaxError('')).toBe(0);
+    expect(firstSyntaxError(text)).toBeNull();
+  });
+
+  it('names keys with / and ~ as escaped pointers', () => {
+    const at = locatePointers('{\n  "a/b": {\n    "c~d": [true]\n  }\n}');
+    expect(at.get('/a~1b/c~0d')?.line).toBe(3);
+    expect(at.get('/a~1b/c~0d/0')).toEqual({ line: 3, column: 13, offset: 25 });
   });
 });
 
