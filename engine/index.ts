@@ -6,6 +6,7 @@ export { RuleSetError } from './club-rules/compile-rule-set';
 export { upgradeRuleSet, isFirstFormat } from './club-rules/upgrade-rule-set';
 export { jsonDiff, ruleSetChanges, type JsonChange, type ListComparison } from './club-rules/json-diff';
 export { sampleSquads, teamSquad, type SampleSquad } from './club-rules/sample-squads';
+export { outlinePlan, outlineChanges, type PlanOutline } from './club-rules/plan-outline';
 export { defaultRuleSet } from './rule-sets';
 export { checkPlan } from './check-plan';
 export { applyEdit, tryEdit } from './edit/apply-edit';

@@ -1,6 +1,6 @@
 /**
  * The club rules screens' one doorway into engine/: the rule-set check, the library's set-ups and
- * previews, the squads "try it" runs, plans made under a given rule set, and the one JSON diff.
+ * previews, the squads "try it" runs and the outline it compares, plans made under a given rule set, and the one JSON diff.
  */
 import {
   generatePlan,
@@ -14,12 +14,15 @@ import type { Plan, PlanRequest } from '../../../../../shared/types';
 export {
   defaultRuleSet,
   kindLayouts,
+  outlineChanges,
+  outlinePlan,
   previewActivity,
   sampleSquads,
   teamSquad,
   validateRuleSet,
   type ActivityPreview,
   type JsonChange,
+  type PlanOutline,
   type RuleSetDocument,
   type SampleSquad,
 } from '../../../../../engine/index';
