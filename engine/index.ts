@@ -4,6 +4,9 @@ export { validatePlanRequest, type FieldError, type RequestValidation } from './
 export { validateRuleSet, type PointerError, type RuleSetValidation } from './schema/validate-rule-set';
 export { RuleSetError } from './club-rules/compile-rule-set';
 export { upgradeRuleSet, isFirstFormat } from './club-rules/upgrade-rule-set';
+export { jsonDiff, ruleSetChanges, type JsonChange, type ListComparison } from './club-rules/json-diff';
+export { sampleSquads, teamSquad, type SampleSquad } from './club-rules/sample-squads';
+export { outlinePlan, outlineChanges, type PlanOutline } from './club-rules/plan-outline';
 export { defaultRuleSet } from './rule-sets';
 export { checkPlan } from './check-plan';
 export { applyEdit, tryEdit } from './edit/apply-edit';

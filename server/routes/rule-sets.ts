@@ -4,16 +4,14 @@ import { authOf } from '../http/auth-context';
 import { HttpError } from '../http/problem';
 import { requireRole } from '../middleware/require-role';
 import { validate } from '../middleware/validate';
-import { RuleSetPreviewService } from '../services/rule-set-preview';
 import { RuleSetService } from '../services/rule-set-service';
 import type { ApiDeps } from './api-deps';
 import { ifMatchOf } from './plans';
 
-/** /rule-sets: the club's rules. Every member reads; the lead drafts, tries, publishes and rolls back. */
+/** /rule-sets: the club's rules. Every member reads; the lead drafts, publishes and rolls back. */
 export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
   const router = Router();
   const ruleSets = new RuleSetService(dataSource);
-  const previews = new RuleSetPreviewService(dataSource, ruleSets);
   const lead = requireRole('lead');
   const id = validate({ params: 'rule-set-param' });
   const draftId = validate({ params: 'id-param' });
@@ -80,15 +78,5 @@ export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
   router.post('/rule-sets/:id/publish', requireAuth, lead, draftId, async (req, res) => {
     res.json(await ruleSets.publish(authOf(req), req.params['id'] as string, ifMatchOf(req)));
   });
-  router.post(
-    '/rule-sets/:id/preview',
-    requireAuth,
-    lead,
-    id,
-    validate({ body: 'rule-set-preview' }),
-    async (req, res) => {
-      res.json(await previews.preview(authOf(req), req.params['id'] as string, req.body));
-    },
-  );
   return router;
 }

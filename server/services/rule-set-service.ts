@@ -20,8 +20,7 @@ import { badRequest, conflict } from '../http/problem';
 import { formerMember } from './account-erasure';
 import { ClubScope } from './club-scope';
 import { changeInReaderWords, inReaderWords, inSourceWords } from '../i18n/rule-set-words';
-import { defaultRules, ruleSetErrors } from './engine-port';
-import { jsonDiff } from './json-diff';
+import { defaultRules, jsonDiff, ruleSetChanges, ruleSetErrors } from './engine-port';
 import { documentOf } from './rules-resolver';
 
 /** 'default' (the engine's), 'published' (the club's current), or a rule set's id. */
@@ -232,13 +231,7 @@ export class RuleSetService {
   async diff(auth: AuthContext, from: RuleSetRefInput, to: RuleSetRefInput): Promise<RuleSetDiffDto> {
     const manager = this.dataSource.manager;
     const [a, b] = [await this.resolve(manager, auth, from), await this.resolve(manager, auth, to)];
-    // The id and version inside a document always differ between versions; they are not rule changes.
-    const strip = (d: RuleSetDocument) => ({ ...d, id: undefined, version: undefined });
-    return {
-      from: a.ref,
-      to: b.ref,
-      changes: jsonDiff(strip(a.body), strip(b.body)).map(changeInReaderWords),
-    };
+    return { from: a.ref, to: b.ref, changes: ruleSetChanges(a.body, b.body).map(changeInReaderWords) };
   }
 
   /** Resolves 'default', 'published' or an id of the caller's club (404 otherwise). */

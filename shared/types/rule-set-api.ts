@@ -62,34 +62,6 @@ export interface RuleSetDiffDto {
   changes: RuleSetDiffEntry[];
 }
 
-/** The parts of a generated plan a head of coaching compares. */
-export interface PlanOutline {
-  /** Per phase: name, minutes, group sizes and area sides. */
-  phases: { name: string; minutes: number; groups: number[]; areas: string[] }[];
-  warnings: string[];
-  cautions: string[];
-  /** Set when the engine could not make a plan with these rules. */
-  error?: string;
-}
-
-/** One squad tried with the current rules and with the draft. */
-export interface PreviewCase {
-  /** e.g. "sample: odd numbers" or "recent plan: U10 Otters, 2026-11-28". */
-  label: string;
-  source: 'sample' | 'recent-plan';
-  current: PlanOutline;
-  draft: PlanOutline;
-  /** Plain-words differences: groups, areas, timing, warnings. */
-  differences: string[];
-}
-
-/** Answer of POST /api/rule-sets/:id/preview. */
-export interface RuleSetPreviewDto {
-  draft: { id: string; version: number };
-  against: { id: string; version: number };
-  cases: PreviewCase[];
-}
-
 /** 409 answer of PUT /api/rule-sets/:id when If-Match is stale. */
 export interface RuleSetConflictProblem {
   type: string;

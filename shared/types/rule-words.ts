@@ -6,6 +6,7 @@
  * placeholders, so a translation may reorder them.
  */
 import '../i18n/localize';
+import { childAt, pointerTokens } from '../json-pointer';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS } from './activity-words';
 import type { AgeGroup, Level, PlanKind } from './plan-request';
 import type { AgeBand } from './plan-rules';
@@ -419,37 +420,19 @@ const DOCUMENT: Record<string, PathStep> = {
   ),
 };
 
-/** The keys of an RFC 6901 pointer. */
-function tokens(pointer: string): string[] {
-  if (pointer === '' || pointer === '/') return [];
-  return pointer
-    .replace(/^\//, '')
-    .split('/')
-    .map((t) => t.replace(/~1/g, '/').replace(/~0/g, '~'));
-}
-
-/** The value under `key` of a list or object; in a list of rows with ids, the row with that id. */
-function child(node: unknown, key: string): unknown {
-  if (Array.isArray(node)) {
-    if (/^\d+$/.test(key)) return node[Number(key)];
-    return node.find((item) => item && typeof item === 'object' && (item as { id?: unknown }).id === key);
-  }
-  return node && typeof node === 'object' ? (node as Record<string, unknown>)[key] : undefined;
-}
-
 /**
  * The place of a pointer in a rule set, in words, one per step:
  * "/parameters/groupSizes/keep-ball/beginner/max" → ["Group sizes", "Keep-ball", "Beginner", "Most"].
  * `document` (the rule set) lets rows be named by their own name ("Arrival", an activity's title).
  */
 export function rulePathParts(pointer: string, document?: unknown): string[] {
-  const keys = tokens(pointer);
+  const keys = pointerTokens(pointer);
   let node: unknown = document;
   let table: Record<string, PathStep> | undefined = DOCUMENT;
   let each: PathStep | undefined;
   const words: string[] = [];
   keys.forEach((key, i) => {
-    node = child(node, key);
+    node = childAt(node, key);
     if (i === 0 && key === 'parameters') {
       table = PARAMETERS;
       each = undefined;

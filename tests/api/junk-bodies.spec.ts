@@ -55,7 +55,6 @@ describe('junk bodies on attendance, feedback, pitch-side and rule-set routes', 
       ['POST', `/api/plans/${plan.id}/share`],
       ['POST', '/api/rule-sets'],
       ['PUT', `/api/rule-sets/${draft.id}`],
-      ['POST', `/api/rule-sets/${draft.id}/preview`],
       ['POST', '/api/rule-sets/rollback'],
     ];
     await fc.assert(

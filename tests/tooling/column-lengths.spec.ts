@@ -91,8 +91,6 @@ const NOT_IN_A_BOUNDED_COLUMN = new Set([
   'rule-set-rollback.to',
   'plan-pdf-query.paper',
   'plan-share.paper',
-  'rule-set-preview.ageGroup',
-  'rule-set-preview.level',
   // Text columns (feedback.note) and the plan's json.
   'feedback-create.note',
   'plan-progression.note',

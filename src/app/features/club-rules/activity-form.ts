@@ -26,7 +26,7 @@ import {
   previewActivity,
   type ActivityPreview,
   type RuleSetDocument,
-} from '../../../../engine/index';
+} from './services/rules-engine';
 import {
   AGE_GROUPS,
   BALL_USES,

@@ -11,13 +11,13 @@ import {
 } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatExpansionModule } from '@angular/material/expansion';
-import { validateRuleSet } from '../../../../engine/index';
+import { validateRuleSet } from './services/rules-engine';
 import { STATION_KINDS, type ActivityDefinition } from '../../../../shared/types';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS } from '../../core/labels/plan-labels';
 import { ActivityForm } from './activity-form';
 import { ACTIVITY_LIMITS } from './services/activity-draft';
-import { setAt, toPointer } from './services/json-pointer';
+import { setAt, toPointer } from '../../../../shared/json-pointer';
 
 /** A change to the club's activities, saved to the draft at once; the page calls back with how it went. */
 export interface ActivityEdit {

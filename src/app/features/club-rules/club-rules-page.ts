@@ -22,9 +22,9 @@ import { PublishDialog, type PublishDialogData } from './publish-dialog';
 import { RuleJsonEditor } from './rule-json-editor';
 import { RuleTables, type RuleEdit } from './rule-tables';
 import { RuleTryIt } from './rule-try-it';
-import { diffJson } from './services/json-diff';
 import { rulePathWords } from '../../../../shared/types/rule-words';
-import { setAt } from './services/json-pointer';
+import { setAt } from '../../../../shared/json-pointer';
+import { editedChanges } from './services/rules-engine';
 import { rebaseEdits, type Rebased } from './services/rebase-edits';
 import { activityIndexOf, cellOf, refusalProblems } from './services/rule-cells';
 import { RuleSetsApi } from './services/rule-sets-api';
@@ -106,11 +106,11 @@ export class ClubRulesPage {
     this.editing() ? this.body() : (this.inForce()?.body ?? null),
   );
   protected readonly unsavedCount = computed(() =>
-    this.editing() ? diffJson(this.baseBody(), this.body()).length : 0,
+    this.editing() ? editedChanges(this.baseBody(), this.body()).length : 0,
   );
   protected readonly unpublishedCount = computed(() => {
     const published = this.published();
-    return this.editing() && published ? diffJson(published.body, this.body()).length : 0;
+    return this.editing() && published ? editedChanges(published.body, this.body()).length : 0;
   });
 
   constructor() {

@@ -15,7 +15,7 @@ import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { momentWords } from '../../core/locale/locale-format';
 import { ruleChangeWords, rulePathWords, ruleValueWords } from '../../../../shared/types/rule-words';
-import { diffJson, type JsonChange } from './services/json-diff';
+import { versionChanges, type JsonChange } from './services/rules-engine';
 import { RuleSetsApi } from './services/rule-sets-api';
 
 /** Conewise's own starting rules, as the server answers for the id "default". */
@@ -75,7 +75,7 @@ export class RuleHistory {
     if (!from || !to) return null;
     const bodies = this.bodies();
     if (!(from in bodies) || !(to in bodies)) return null;
-    return diffJson(bodies[from], bodies[to]).filter((c) => c.pointer !== '/version' && c.pointer !== '/id');
+    return versionChanges(bodies[from], bodies[to]);
   });
 
   constructor() {
@@ -139,10 +139,7 @@ export class RuleHistory {
 
   /** A place of the compared rules in words. */
   protected placeWords(change: JsonChange): string {
-    return rulePathWords(
-      change.pointer,
-      this.bodies()[this.toId() ?? ''] ?? this.bodies()[this.fromId() ?? ''],
-    );
+    return rulePathWords(change.path, this.bodies()[this.toId() ?? ''] ?? this.bodies()[this.fromId() ?? '']);
   }
 
   protected versionOf(entry: RuleSetChangeDto): number {

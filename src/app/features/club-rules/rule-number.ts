@@ -9,7 +9,7 @@ import {
   Renderer2,
   type Signal,
 } from '@angular/core';
-import { getAt } from './services/json-pointer';
+import { getAt } from '../../../../shared/json-pointer';
 import { measureIn, metricFrom, ruleSetMeasureAt, type Measure } from '../../../../shared/units';
 import { UnitChoice } from '../../core/units/unit-choice';
 

@@ -23,7 +23,7 @@ import {
 } from '../../../../shared/types';
 import { ageBandWords, ageGroupWords, LEVEL_WORDS } from '../../../../shared/types/rule-words';
 import { RULE_DOCUMENT, RuleNumber, type RuleDocument } from './rule-number';
-import { getAt, toPointer } from './services/json-pointer';
+import { getAt, toPointer } from '../../../../shared/json-pointer';
 import { cellOf, placeOf, problemsByCell, type RulePanel } from './services/rule-cells';
 import type { RuleProblem } from './services/rule-validation';
 import { distanceUnitName, measureSymbol, type Measure } from '../../../../shared/units';

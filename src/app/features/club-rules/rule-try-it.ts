@@ -13,11 +13,16 @@ import {
 import { TeamsApi } from '../../core/api/teams-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
-import { OUTLINE_ROWS, outlinePlan, type PlanOutline } from './services/plan-outline';
-import { runPlan } from './services/plan-runner';
 import { RuleSetsApi } from './services/rule-sets-api';
-import { sampleSquads, type SampleSquad } from './services/sample-squads';
-import { teamSquad } from './services/team-squad';
+import {
+  outlineChanges,
+  outlinePlan,
+  runPlan,
+  sampleSquads,
+  teamSquad,
+  type PlanOutline,
+  type SampleSquad,
+} from './services/rules-engine';
 import { SizeInUnitsPipe } from '../../shared/pipes/size-in-units';
 import { UnitChoice } from '../../core/units/unit-choice';
 import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';
@@ -33,6 +38,14 @@ export interface TryItResult {
 }
 
 const isOutline = (value: PlanOutline | { error: string }): value is PlanOutline => !('error' in value);
+
+/** The rows of a result, in the order the engine's outline lists them. */
+const OUTLINE_ROWS: { key: keyof PlanOutline; label: string }[] = [
+  { key: 'groups', label: $localize`:A row comparing two plans:Groups` },
+  { key: 'areas', label: $localize`:A row comparing two plans:Areas` },
+  { key: 'timing', label: $localize`:A row comparing two plans:Timing` },
+  { key: 'warnings', label: $localize`:A row comparing two plans:Warnings` },
+];
 
 /**
  * "Try it": the draft against one of the club's teams as it usually trains, sample squads of that
@@ -101,10 +114,7 @@ export class RuleTryIt {
             this.outline(item.request, this.draftBody()),
           ]),
         );
-        const changed =
-          isOutline(now) && isOutline(draft)
-            ? OUTLINE_ROWS.filter((row) => now[row.key] !== draft[row.key]).length
-            : 1;
+        const changed = isOutline(now) && isOutline(draft) ? outlineChanges(now, draft).length : 1;
         results.push({ id: item.id, label: this.units.text(item.label), now, draft, changed });
       }
       this.results.set(results);
@@ -116,7 +126,11 @@ export class RuleTryIt {
   }
 
   protected differs(result: TryItResult, key: keyof PlanOutline): boolean {
-    return isOutline(result.now) && isOutline(result.draft) && result.now[key] !== result.draft[key];
+    return (
+      isOutline(result.now) &&
+      isOutline(result.draft) &&
+      outlineChanges(result.now, result.draft).includes(key)
+    );
   }
 
   protected cell(outline: PlanOutline | { error: string }, key: keyof PlanOutline): string {

@@ -4,7 +4,7 @@
  * required/length checks with the rule-set schema's own limits, then the engine's check of the
  * whole draft with the activity in place, its JSON pointers mapped back to the fields.
  */
-import { validateRuleSet } from '../../../../../engine/index';
+import { validateRuleSet } from './rules-engine';
 import ruleSetSchema from '../../../../../shared/schemas/rule-set.schema.json';
 import type {
   ActivityDefinition,
@@ -14,7 +14,7 @@ import type {
   Level,
   StationKind,
 } from '../../../../../shared/types';
-import { setAt } from './json-pointer';
+import { setAt } from '../../../../../shared/json-pointer';
 
 /** What the form holds: an activity's fields as the lead edits them (numbers may be blank). */
 export interface ActivityFormValue {

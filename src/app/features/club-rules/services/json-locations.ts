@@ -1,19 +1,25 @@
 /**
  * Where each JSON pointer starts in a JSON text (1-based line and column), so a validation error
- * can be pinned to its line in the editor. A small scanner: it assumes the text already parsed.
+ * can be pinned to its line in the editor, and where the first syntax error is. jsonc-parser reads
+ * the text and gives every node's offset; it is held to strict JSON (no comments, no trailing
+ * commas), as JSON.parse is.
  */
+import { parseTree, type Node, type ParseError, type ParseOptions } from 'jsonc-parser';
+import { toPointer } from '../../../../../shared/json-pointer';
+
 export interface TextLocation {
   line: number;
   column: number;
   offset: number;
 }
 
-export function locatePointers(text: string): Map<string, TextLocation> {
-  const found = new Map<string, TextLocation>();
-  let i = 0;
+const STRICT: ParseOptions = { disallowComments: true, allowTrailingComma: false, allowEmptyContent: false };
+
+/** Turns offsets of one text into lines and columns. */
+function locator(text: string): (offset: number) => TextLocation {
   const lineStarts = [0];
   for (let k = 0; k < text.length; k++) if (text[k] === '\n') lineStarts.push(k + 1);
-  const locate = (offset: number): TextLocation => {
+  return (offset) => {
     let low = 0;
     let high = lineStarts.length - 1;
     while (low < high) {
@@ -23,53 +29,25 @@ export function locatePointers(text: string): Map<string, TextLocation> {
     }
     return { line: low + 1, column: offset - lineStarts[low] + 1, offset };
   };
-  const skip = () => {
-    while (i < text.length && /\s/.test(text[i])) i++;
-  };
-  const readString = (): string => {
-    const start = i;
-    i++;
-    while (i < text.length && text[i] !== '"') i += text[i] === '\\' ? 2 : 1;
-    i++;
-    return JSON.parse(text.slice(start, i)) as string;
-  };
-  const escape = (t: string) => t.replace(/~/g, '~0').replace(/\//g, '~1');
-  const value = (pointer: string, keyOffset: number) => {
-    skip();
-    found.set(pointer, locate(keyOffset >= 0 ? keyOffset : i));
-    const c = text[i];
-    if (c === '{') {
-      i++;
-      skip();
-      while (i < text.length && text[i] !== '}') {
-        const keyAt = i;
-        const key = readString();
-        skip();
-        i++; // colon
-        value(`${pointer}/${escape(key)}`, keyAt);
-        skip();
-        if (text[i] === ',') i++;
-        skip();
+}
+
+/** Every pointer of the document: a field at its key, a list entry and the root at its value. */
+export function locatePointers(text: string): Map<string, TextLocation> {
+  const found = new Map<string, TextLocation>();
+  const locate = locator(text);
+  const walk = (node: Node, path: (string | number)[], offset: number): void => {
+    found.set(toPointer(path), locate(offset));
+    if (node.type === 'object') {
+      for (const property of node.children ?? []) {
+        const [key, value] = property.children ?? [];
+        if (key && value) walk(value, [...path, String(key.value)], property.offset);
       }
-      i++;
-    } else if (c === '[') {
-      i++;
-      skip();
-      let index = 0;
-      while (i < text.length && text[i] !== ']') {
-        value(`${pointer}/${index++}`, -1);
-        skip();
-        if (text[i] === ',') i++;
-        skip();
-      }
-      i++;
-    } else if (c === '"') {
-      readString();
-    } else {
-      while (i < text.length && !/[\s,\]}]/.test(text[i])) i++;
+    } else if (node.type === 'array') {
+      (node.children ?? []).forEach((item, index) => walk(item, [...path, index], item.offset));
     }
   };
-  value('', -1);
+  const root = parseTree(text, [], STRICT);
+  if (root) walk(root, [], root.offset);
   return found;
 }
 
@@ -87,9 +65,7 @@ export function locatePointer(locations: Map<string, TextLocation>, pointer: str
 /** Line and column of the first JSON syntax error (browsers do not always say where). */
 export function syntaxErrorLocation(text: string, error?: unknown): TextLocation | null {
   const offset = firstSyntaxError(text) ?? positionFromMessage(error);
-  if (offset === null) return null;
-  const before = text.slice(0, offset).split('\n');
-  return { line: before.length, column: before.at(-1)!.length + 1, offset };
+  return offset === null ? null : locator(text)(Math.min(offset, text.length));
 }
 
 function positionFromMessage(error: unknown): number | null {
@@ -99,100 +75,7 @@ function positionFromMessage(error: unknown): number | null {
 
 /** Offset of the first character a strict JSON reader cannot take, or null when the text is valid. */
 export function firstSyntaxError(text: string): number | null {
-  let i = 0;
-  class Stop {
-    constructor(readonly at: number) {}
-  }
-  const fail = (): never => {
-    throw new Stop(i);
-  };
-  const skip = () => {
-    while (i < text.length && /[ \t\n\r]/.test(text[i])) i++;
-  };
-  const literal = (word: string) => {
-    if (text.startsWith(word, i)) i += word.length;
-    else fail();
-  };
-  const string = () => {
-    i++;
-    while (i < text.length && text[i] !== '"') {
-      if (text[i] === '\\') {
-        i++;
-        if (!/["\\/bfnrtu]/.test(text[i] ?? '')) fail();
-      } else if (text.charCodeAt(i) < 0x20) fail();
-      i++;
-    }
-    if (text[i] !== '"') fail();
-    i++;
-  };
-  const number = () => {
-    const match = /^-?(0|[1-9]\d*)(\.\d+)?([eE][+-]?\d+)?/.exec(text.slice(i));
-    if (!match) fail();
-    i += match![0].length;
-  };
-  const value = (): void => {
-    skip();
-    const c = text[i];
-    if (c === '{') {
-      i++;
-      skip();
-      if (text[i] === '}') {
-        i++;
-        return;
-      }
-      for (;;) {
-        skip();
-        if (text[i] !== '"') fail();
-        string();
-        skip();
-        if (text[i] !== ':') fail();
-        i++;
-        value();
-        skip();
-        if (text[i] === ',') {
-          i++;
-          continue;
-        }
-        if (text[i] === '}') {
-          i++;
-          return;
-        }
-        fail();
-      }
-    }
-    if (c === '[') {
-      i++;
-      skip();
-      if (text[i] === ']') {
-        i++;
-        return;
-      }
-      for (;;) {
-        value();
-        skip();
-        if (text[i] === ',') {
-          i++;
-          continue;
-        }
-        if (text[i] === ']') {
-          i++;
-          return;
-        }
-        fail();
-      }
-    }
-    if (c === '"') return string();
-    if (c === 't') return literal('true');
-    if (c === 'f') return literal('false');
-    if (c === 'n') return literal('null');
-    return number();
-  };
-  try {
-    value();
-    skip();
-    return i < text.length ? i : null;
-  } catch (stop) {
-    if (stop instanceof Stop) return Math.min(stop.at, text.length);
-    throw stop;
-  }
+  const errors: ParseError[] = [];
+  parseTree(text, errors, STRICT);
+  return errors.length ? Math.min(...errors.map((e) => e.offset)) : null;
 }

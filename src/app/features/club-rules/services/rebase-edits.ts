@@ -1,5 +1,5 @@
-import { diffJson, type JsonChange } from './json-diff';
-import { setAt } from './json-pointer';
+import { setAt } from '../../../../../shared/json-pointer';
+import { editedChanges, type JsonChange } from './rules-engine';
 
 /** The outcome of putting one lead's edits on top of another lead's newer save. */
 export interface Rebased {
@@ -14,14 +14,14 @@ const related = (a: string, b: string) => a === b || a.startsWith(`${b}/`) || b.
 
 /** Re-applies the changes from base to mine onto theirs, so a 409 never loses an edit. */
 export function rebaseEdits(base: unknown, mine: unknown, theirs: unknown): Rebased {
-  const myChanges = diffJson(base, mine);
-  const theirChanges = diffJson(base, theirs);
+  const myChanges = editedChanges(base, mine);
+  const theirChanges = editedChanges(base, theirs);
   let body = theirs;
   const overlaps: Rebased['overlaps'] = [];
   for (const change of myChanges) {
-    body = setAt(body, change.pointer, change.kind === 'removed' ? undefined : change.after);
-    const clash = theirChanges.find((other) => related(other.pointer, change.pointer));
-    if (clash) overlaps.push({ pointer: change.pointer, theirs: clash.after, mine: change.after });
+    body = setAt(body, change.path, change.change === 'removed' ? undefined : change.after);
+    const clash = theirChanges.find((other) => related(other.path, change.path));
+    if (clash) overlaps.push({ pointer: change.path, theirs: clash.after, mine: change.after });
   }
   return { body, reapplied: myChanges, overlaps };
 }

@@ -1,6 +1,6 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import type { ProblemDto } from '../../../../../shared/types';
-import { pointerTokens } from './json-pointer';
+import { pointerTokens } from '../../../../../shared/json-pointer';
 import type { RuleProblem } from './rule-validation';
 
 /** The folds of the rule tables, one per table. */

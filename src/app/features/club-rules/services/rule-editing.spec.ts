@@ -1,19 +1,6 @@
-import { diffJson } from './json-diff';
-import { locatePointer, locatePointers, syntaxErrorLocation } from './json-locations';
-import { getAt, setAt } from './json-pointer';
+import { firstSyntaxError, locatePointer, locatePointers, syntaxErrorLocation } from './json-locations';
 import { rebaseEdits } from './rebase-edits';
 import { textToFormats, formatsToText } from '../rule-tables';
-
-describe('JSON pointers', () => {
-  it('writes a copy and leaves the original alone', () => {
-    const original = { a: { b: [1, { c: 2 }] }, 'x/y': 1 };
-    const next = setAt(original, '/a/b/1/c', 5);
-    expect(getAt(next, '/a/b/1/c')).toBe(5);
-    expect(getAt(original, '/a/b/1/c')).toBe(2);
-    expect(getAt(setAt(original, '/x~1y', 2), '/x~1y')).toBe(2);
-    expect(getAt(setAt(original, '/a/b', undefined), '/a')).toEqual({});
-  });
-});
 
 describe('locatePointers', () => {
   const text = JSON.stringify(
@@ -46,6 +33,19 @@ describe('locatePointers', () => {
     expect(syntaxErrorLocation('{"a": [1, 2,]}')?.column).toBe(13);
     expect(syntaxErrorLocation('{"a": 1} x')?.column).toBe(10);
   });
+
+  it('holds the text to strict JSON, as JSON.parse does, and finds nothing wrong in valid text', () => {
+    expect(firstSyntaxError('{"a": 1 // why\n}')).toBe(8);
+    expect(firstSyntaxError('{"a": "open')).not.toBeNull();
+    expect(firstSyntaxError('')).toBe(0);
+    expect(firstSyntaxError(text)).toBeNull();
+  });
+
+  it('names keys with / and ~ as escaped pointers', () => {
+    const at = locatePointers('{\n  "a/b": {\n    "c~d": [true]\n  }\n}');
+    expect(at.get('/a~1b/c~0d')?.line).toBe(3);
+    expect(at.get('/a~1b/c~0d/0')).toEqual({ line: 3, column: 13, offset: 25 });
+  });
 });
 
 describe('rebaseEdits', () => {
@@ -55,7 +55,39 @@ describe('rebaseEdits', () => {
     const mine = { cautions: { heatC: 27, coldC: 2 }, kinds: ['a'] };
     const result = rebaseEdits(base, mine, theirs);
     expect(result.body).toEqual({ cautions: { heatC: 30, coldC: 2 }, kinds: ['a'] });
-    expect(result.reapplied.map((c) => c.pointer)).toEqual(['/cautions/coldC', '/kinds']);
+    expect(result.reapplied.map((c) => c.path)).toEqual(['/cautions/coldC', '/kinds']);
+    expect(result.overlaps).toEqual([]);
+  });
+
+  it('re-applies an edit of a rule row to that row, wherever the other save moved it', () => {
+    const base = {
+      rules: [
+        { id: 'heat', on: true },
+        { id: 'cold', on: true },
+      ],
+    };
+    const theirs = {
+      rules: [
+        { id: 'new', on: true },
+        { id: 'cold', on: true },
+        { id: 'heat', on: true },
+      ],
+    };
+    const mine = {
+      rules: [
+        { id: 'heat', on: false },
+        { id: 'cold', on: true },
+      ],
+    };
+    const result = rebaseEdits(base, mine, theirs);
+    expect(result.body).toEqual({
+      rules: [
+        { id: 'new', on: true },
+        { id: 'cold', on: true },
+        { id: 'heat', on: false },
+      ],
+    });
+    expect(result.reapplied.map((c) => c.path)).toEqual(['/rules/heat/on']);
     expect(result.overlaps).toEqual([]);
   });
 
@@ -63,23 +95,6 @@ describe('rebaseEdits', () => {
     const result = rebaseEdits({ heatC: 27 }, { heatC: 25 }, { heatC: 30 });
     expect(result.body).toEqual({ heatC: 25 });
     expect(result.overlaps).toEqual([{ pointer: '/heatC', theirs: 30, mine: 25 }]);
-  });
-});
-
-describe('diffJson', () => {
-  it('lists the deepest places that changed, arrays as one change unless objects of the same length', () => {
-    const changes = diffJson(
-      { a: { b: 1, c: [1, 2] }, list: [{ x: 1 }, { x: 2 }], short: [{ y: 1 }, { y: 2 }], gone: true },
-      { a: { b: 2, c: [1, 2, 3] }, list: [{ x: 1 }, { x: 3 }], short: [{ y: 1 }], added: 1 },
-    );
-    expect(changes).toEqual([
-      { pointer: '/a/b', kind: 'changed', before: 1, after: 2 },
-      { pointer: '/a/c', kind: 'changed', before: [1, 2], after: [1, 2, 3] },
-      { pointer: '/list/1/x', kind: 'changed', before: 2, after: 3 },
-      { pointer: '/short', kind: 'changed', before: [{ y: 1 }, { y: 2 }], after: [{ y: 1 }] },
-      { pointer: '/gone', kind: 'removed', before: true },
-      { pointer: '/added', kind: 'added', after: 1 },
-    ]);
   });
 });
 

@@ -1,6 +1,7 @@
-import type { Plan } from '../../../../../shared/types';
+import '../../shared/i18n/localize';
+import type { Plan } from '../../shared/types/plan';
 
-/** The parts of a plan a head of coaching compares between two rule sets. */
+/** The parts of a plan a head of coaching compares between two rule sets, a line of text each. */
 export interface PlanOutline {
   groups: string;
   areas: string;
@@ -8,16 +9,9 @@ export interface PlanOutline {
   warnings: string;
 }
 
-export const OUTLINE_ROWS: { key: keyof PlanOutline; label: string }[] = [
-  { key: 'groups', label: $localize`:A row comparing two plans:Groups` },
-  { key: 'areas', label: $localize`:A row comparing two plans:Areas` },
-  { key: 'timing', label: $localize`:A row comparing two plans:Timing` },
-  { key: 'warnings', label: $localize`:A row comparing two plans:Warnings` },
-];
-
 /**
  * One line per aspect, phase by phase, so two outlines compare as text; metric, in the engine's
- * own way of writing sizes ("12 × 20 m"), so the screen can put them into the reader's units.
+ * own way of writing sizes ("12 × 20 m"), so a screen can put them into the reader's units.
  */
 export function outlinePlan(plan: Plan): PlanOutline {
   const groups = plan.phases.map((phase) => {
@@ -45,4 +39,9 @@ export function outlinePlan(plan: Plan): PlanOutline {
     timing: timing.join(' → '),
     warnings: warnings.length ? warnings.join('\n') : $localize`:No warnings in a plan:none`,
   };
+}
+
+/** The aspects in which two outlines differ. */
+export function outlineChanges(now: PlanOutline, draft: PlanOutline): (keyof PlanOutline)[] {
+  return (['groups', 'areas', 'timing', 'warnings'] as const).filter((key) => now[key] !== draft[key]);
 }
