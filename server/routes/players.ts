@@ -44,6 +44,17 @@ export function playersRouter({ dataSource, config, requireAuth }: ApiDeps): Rou
       res.status(201).json(await players(req).create(req.params['id'] as string, req.body));
     },
   );
+  // Today's guests, all or none (the plan wizard, before it asks for the plan).
+  router.post(
+    '/teams/:id/guests',
+    requireAuth,
+    id,
+    validate({ body: 'guests-create' }),
+    once,
+    async (req, res) => {
+      res.status(201).json(await players(req).addGuests(req.params['id'] as string, req.body.guests));
+    },
+  );
   router.post(
     '/teams/:id/players/import',
     requireAuth,

@@ -63,6 +63,34 @@ export class PlayerService {
     return playerDto(player);
   }
 
+  /**
+   * Today's guests: added to the team's list as not active (they are in this plan and its
+   * register, not ticked next time), in one transaction, so a taken name adds none of them.
+   */
+  async addGuests(
+    teamId: string,
+    guests: readonly { displayName: string; goalkeeper?: boolean }[],
+  ): Promise<PlayerDto[]> {
+    const team = await this.scope.teamToManage(teamId);
+    return this.scope.manager.transaction(async (manager) => {
+      const taken = new TakenNames(await teamPlayerNames(manager, this.scope, team.id));
+      const rows = guests.map((guest) => {
+        const displayName = cleanName(guest.displayName);
+        assertNameFree(displayName, taken);
+        taken.add(displayName);
+        return {
+          clubId: this.scope.clubId,
+          teamId: team.id,
+          displayName,
+          goalkeeper: guest.goalkeeper ?? false,
+          active: false,
+        };
+      });
+      const saved = await manager.getRepository(Player).save(rows);
+      return saved.map(playerDto);
+    });
+  }
+
   async update(
     id: string,
     input: { displayName?: string; goalkeeper?: boolean; active?: boolean },

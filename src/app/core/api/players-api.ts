@@ -25,6 +25,17 @@ export class PlayersApi {
     return this.http.post<PlayerDto>(`/api/teams/${teamId}/players`, body, { context });
   }
 
+  /**
+   * Today's guests for a plan, added to the team's list as not active: all of them, or none when
+   * one name is taken (409).
+   */
+  addGuests(
+    teamId: string,
+    guests: Pick<PlayerBody, 'displayName' | 'goalkeeper'>[],
+  ): Observable<PlayerDto[]> {
+    return this.http.post<PlayerDto[]>(`/api/teams/${teamId}/guests`, { guests });
+  }
+
   update(id: string, body: Partial<PlayerBody>): Observable<PlayerDto> {
     return this.http.patch<PlayerDto>(`/api/players/${id}`, body);
   }

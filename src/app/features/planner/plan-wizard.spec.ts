@@ -222,7 +222,7 @@ describe('PlanWizard', () => {
     expect(body.request.conditions).toEqual({ temperatureC: 21.1 });
   });
 
-  it('adds a guest to the team as not active and plans with them', async () => {
+  it('adds the guests to the team in one request and plans with them', async () => {
     const { fixture, http, root, submit } = await setUp();
     const addGuest = Array.from(root.querySelectorAll('button')).find((b) =>
       b.textContent?.includes('Add a guest'),
@@ -234,19 +234,10 @@ describe('PlanWizard', () => {
     guestName.dispatchEvent(new Event('input'));
     await fixture.whenStable();
     await submit();
-    const created = http.expectOne({ method: 'POST', url: `/api/teams/${TEAM.id}/players` });
-    expect(created.request.body).toEqual({ displayName: 'Pip Q.', goalkeeper: false });
-    created.flush({ id: 'p99', teamId: TEAM.id, displayName: 'Pip Q.', goalkeeper: false, active: true });
-    await new Promise((resolve) => setTimeout(resolve, 0));
-    const deactivated = http.expectOne({ method: 'PATCH', url: '/api/players/p99' });
-    expect(deactivated.request.body).toEqual({ active: false });
-    deactivated.flush({
-      id: 'p99',
-      teamId: TEAM.id,
-      displayName: 'Pip Q.',
-      goalkeeper: false,
-      active: false,
-    });
+    // One request for all of today's guests: added together or not at all.
+    const added = http.expectOne({ method: 'POST', url: `/api/teams/${TEAM.id}/guests` });
+    expect(added.request.body).toEqual({ guests: [{ displayName: 'Pip Q.', goalkeeper: false }] });
+    added.flush([{ id: 'p99', teamId: TEAM.id, displayName: 'Pip Q.', goalkeeper: false, active: false }]);
     await new Promise((resolve) => setTimeout(resolve, 0));
     const body = http.expectOne('/api/plans').request.body as { request: PlanRequest };
     expect(body.request.players).toHaveLength(14);

@@ -577,22 +577,29 @@ export class PlanWizard {
    * not active: they appear in this plan and in attendance, but are not ticked next time.
    */
   private async registerGuests(teamId: string, guests: WizardValue['guests']): Promise<string[]> {
-    const ids: string[] = [];
-    for (const [i, guest] of guests.entries()) {
-      const body = { displayName: guest.name.trim(), goalkeeper: guest.goalkeeper };
-      // A guest added before a plan that then failed is used again, not added a second time.
-      const row = this.guests.at(i);
+    const wanted = guests.map((guest, i) => ({
+      row: this.guests.at(i),
+      body: { displayName: guest.name.trim(), goalkeeper: guest.goalkeeper },
+    }));
+    // A guest added before a plan that then failed is used again, not added a second time.
+    const earlierId = ({ row, body }: (typeof wanted)[number]) => {
       const earlier = this.addedGuests.get(row);
-      if (earlier && earlier.teamId === teamId && earlier.name === body.displayName) {
-        ids.push(earlier.id);
-        continue;
-      }
-      const created = await firstValueFrom(this.playersApi.create(teamId, body));
-      await firstValueFrom(this.playersApi.update(created.id, { active: false }));
-      this.addedGuests.set(row, { teamId, name: body.displayName, id: created.id });
-      ids.push(created.id);
-    }
-    return ids;
+      return earlier && earlier.teamId === teamId && earlier.name === body.displayName ? earlier.id : null;
+    };
+    const missing = wanted.filter((guest) => earlierId(guest) === null);
+    // One request: every new guest is added, or none is.
+    const added = missing.length
+      ? await firstValueFrom(
+          this.playersApi.addGuests(
+            teamId,
+            missing.map((guest) => guest.body),
+          ),
+        )
+      : [];
+    missing.forEach(({ row, body }, i) =>
+      this.addedGuests.set(row, { teamId, name: body.displayName, id: added[i]!.id }),
+    );
+    return wanted.map((guest) => earlierId(guest)!);
   }
 
   private showFieldErrors(errors: Record<string, string>): void {
