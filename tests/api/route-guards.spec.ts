@@ -19,6 +19,7 @@ const ROUTES: [method: string, path: string][] = [
   ['POST', `/api/teams/${SOME_ID}/players`],
   ['POST', `/api/teams/${SOME_ID}/players/import`],
   ['POST', `/api/teams/${SOME_ID}/players/import/commit`],
+  ['POST', `/api/teams/${SOME_ID}/guests`],
   ['PATCH', `/api/players/${SOME_ID}`],
   ['DELETE', `/api/players/${SOME_ID}`],
   ['GET', `/api/teams/${SOME_ID}/kit`],
