@@ -185,6 +185,31 @@ export function place(ids: string[], points: LocalPoint[], role: LocalPosition['
 }
 
 /** A joining coach's position, when there is one. */
+/**
+ * Each side's goalkeeper on their own goal line: side A's at the near end, side B's at the far end
+ * of an area `across` wide and `along` long (games with a goal at each end).
+ */
+export function keepersInGoals(
+  a: string[],
+  b: string[],
+  keepers: string[],
+  across: number,
+  along: number,
+): LocalPosition[] {
+  return [
+    ...place(
+      a.filter((id) => keepers.includes(id)),
+      [{ u: across / 2, v: 0.6 }],
+      'goalkeeper',
+    ),
+    ...place(
+      b.filter((id) => keepers.includes(id)),
+      [{ u: across / 2, v: along - 0.6 }],
+      'goalkeeper',
+    ),
+  ];
+}
+
 export function coachAt(station: Pick<Station, 'coachJoins'>, point: LocalPoint): LocalPosition[] {
   return station.coachJoins ? [{ id: 'coach', role: 'coach', u: point.u, v: point.v }] : [];
 }

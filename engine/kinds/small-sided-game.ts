@@ -13,6 +13,7 @@ import {
   tableSizes,
   twoSides,
   waitingFor,
+  keepersInGoals,
 } from './common';
 
 export const smallSidedGame: KindModule = {
@@ -93,16 +94,7 @@ export const smallSidedGame: KindModule = {
         },
       ],
       positions: [
-        ...place(
-          a.filter((id) => keepers.includes(id)),
-          [{ u: across / 2, v: 0.6 }],
-          'goalkeeper',
-        ),
-        ...place(
-          b.filter((id) => keepers.includes(id)),
-          [{ u: across / 2, v: along - 0.6 }],
-          'goalkeeper',
-        ),
+        ...keepersInGoals(a, b, keepers, across, along),
         ...place(outA, spread(outA.length, across, along / 2 - 1, 1.5, 0.5), 'team-a'),
         ...place(outB, spread(outB.length, across, along / 2 - 1, 1.5, along / 2 + 0.5), 'team-b'),
       ],

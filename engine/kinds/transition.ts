@@ -11,6 +11,7 @@ import {
   tableSizes,
   twoSides,
   waitingFor,
+  keepersInGoals,
 } from './common';
 import { spreadAcross } from './shooting-game';
 
@@ -51,16 +52,7 @@ export const transition: KindModule = {
     const positions = [
       ...place(outA, spreadAcross(outA.length, along * 0.3, across), 'team-a'),
       ...place(outB, spreadAcross(outB.length, along * 0.7, across), 'team-b'),
-      ...place(
-        a.filter((id) => keepers.includes(id)),
-        [{ u: across / 2, v: 0.6 }],
-        'goalkeeper',
-      ),
-      ...place(
-        b.filter((id) => keepers.includes(id)),
-        [{ u: across / 2, v: along - 0.6 }],
-        'goalkeeper',
-      ),
+      ...keepersInGoals(a, b, keepers, across, along),
     ];
     return {
       essential: [],
