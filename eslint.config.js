@@ -43,8 +43,6 @@ export default tseslint.config(
   },
   {
     files: ['src/**/*.ts'],
-    // TODO(boundaries): remove once pitch-side/club-rules move to core/api
-    ignores: ['src/app/features/pitch-side/pitch-side-page.ts'],
     rules: {
       // The client reaches the engine through its public API only, and never the server's code.
       'no-restricted-imports': [
