@@ -42,6 +42,26 @@ export default tseslint.config(
     },
   },
   {
+    files: ['src/**/*.ts'],
+    rules: {
+      // The client reaches the engine through its public API only, and never the server's code.
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              // The top-level engine/ (only ../ before it, so src/app/core/engine does not match), but not engine/index.
+              regex: '^(\\.\\./)+engine(/(?!index$).*)?$',
+              message:
+                'Import the engine through engine/index.ts (the client calls it through src/app/core/engine).',
+            },
+            { regex: '(^|/)server(/|$)', message: 'The client never imports the server.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['src/**/*.html'],
     extends: [...angular.configs.templateRecommended, ...angular.configs.templateAccessibility],
     rules: {},

@@ -17,7 +17,7 @@ export { applyProgression, progressionOutcome } from './edit/apply-progression';
 export { listActivities, type ActivityOption } from './list-activities';
 export { suitsAge } from './planning/activities';
 export { previewActivity, type ActivityPreview } from './preview-activity';
-export { attendanceFromPlan, leftEarlyIds } from './attendance-from-plan';
+export { attendanceFromPlan, leftEarlyIds } from '../shared/types/attendance';
 export { kindLayouts } from './kinds/registry';
 export type { KindLayout } from './kinds/kind-module';
 export type { RuleSetDocument, PlanEdit, PlayerMove, RosterChange, StationVerdict } from '../shared/types';

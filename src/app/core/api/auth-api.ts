@@ -116,6 +116,11 @@ export class AuthApi {
     return this.http.patch<UserDto>('/api/auth/me', body);
   }
 
+  /** PATCH /api/auth/me: the browser's locale (a BCP 47 tag) for the caller's cards and e-mails. */
+  changeLocale(locale: string): Observable<UserDto> {
+    return this.http.patch<UserDto>('/api/auth/me', { locale });
+  }
+
   /** PATCH /api/auth/me: the caller's own display name; answers the updated user. */
   changeName(name: string): Observable<UserDto> {
     return this.http.patch<UserDto>('/api/auth/me', { name });

@@ -1,8 +1,14 @@
 import { HttpClient, HttpContext, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { Page, PlanSummaryDto, PlanRequest, SessionPlanDto } from '../../../../shared/types';
-import type { Plan } from '../../../../shared/types';
+import type {
+  Page,
+  Plan,
+  PlanRequest,
+  PlanSummaryDto,
+  SessionPlanDto,
+  ShareResultDto,
+} from '../../../../shared/types';
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 
 export interface CreatePlanBody {
@@ -51,6 +57,7 @@ export class PlansApi {
     return this.http.get<Page<PlanSummaryDto>>('/api/plans', { params });
   }
 
+  /** GET /api/plans/:id: the one read of a stored plan (the plan page through PlanPrefetch, the wizard). */
   get(id: string): Observable<SessionPlanDto> {
     return this.http.get<SessionPlanDto>(`/api/plans/${id}`);
   }
@@ -72,13 +79,8 @@ export class PlansApi {
   }
 
   /** E-mails the card, printed on `paper`, to each recipient. */
-  share(
-    id: string,
-    recipients: string[],
-    message?: string,
-    paper?: CardPaper,
-  ): Observable<{ queued: number }> {
-    return this.http.post<{ queued: number }>(`/api/plans/${id}/share`, {
+  share(id: string, recipients: string[], message?: string, paper?: CardPaper): Observable<ShareResultDto> {
+    return this.http.post<ShareResultDto>(`/api/plans/${id}/share`, {
       recipients,
       ...(message ? { message } : {}),
       ...(paper ? { paper } : {}),

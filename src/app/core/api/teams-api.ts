@@ -8,6 +8,7 @@ import type {
   PinnedActivitiesDto,
   Space,
   TeamDto,
+  TeamInsightDto,
 } from '../../../../shared/types';
 
 export interface TeamBody {
@@ -17,7 +18,7 @@ export interface TeamBody {
   usualSpace?: Space;
 }
 
-/** Teams of the caller's club and each team's kit bag. */
+/** Teams of the caller's club: each team, its staff, kit bag, pinned activities and insight. */
 @Injectable({ providedIn: 'root' })
 export class TeamsApi {
   private readonly http = inject(HttpClient);
@@ -70,5 +71,10 @@ export class TeamsApi {
     return this.http
       .put<PinnedActivitiesDto>(`/api/teams/${id}/pinned-activities`, body)
       .pipe(map((saved) => saved.activityIds));
+  }
+
+  /** GET /api/teams/:id/insight: the team's attendance and estimated touches across its sessions. */
+  insight(id: string): Observable<TeamInsightDto> {
+    return this.http.get<TeamInsightDto>(`/api/teams/${encodeURIComponent(id)}/insight`);
   }
 }

@@ -1,4 +1,8 @@
-/** Binds the engine (loaded lazily by BrowserEngine) to what the plan page and pitch-side need. */
+/**
+ * The client's one way into the engine (engine/index.ts): binds it to what the plan page and
+ * pitch-side need, loaded lazily by BrowserEngine, and hands the screens that carry the engine in
+ * their own lazy chunk (the library) the calls they make as they draw.
+ */
 import {
   areaLimits,
   checkPlan,
@@ -9,6 +13,15 @@ import {
   tryEdit,
 } from '../../../../engine/index';
 import type { BrowserEngineApi } from './browser-engine';
+
+export {
+  isFirstFormat,
+  listActivities,
+  previewActivity,
+  suitsAge,
+  upgradeRuleSet,
+  type ActivityPreview,
+} from '../../../../engine/index';
 
 export function createEngineAdapter(): BrowserEngineApi {
   return {

@@ -1,4 +1,3 @@
-import { HttpClient } from '@angular/common/http';
 import {
   effect,
   inject,
@@ -6,6 +5,7 @@ import {
   makeEnvironmentProviders,
   provideEnvironmentInitializer,
 } from '@angular/core';
+import { AuthApi } from '../api/auth-api';
 import { AuthStore } from '../auth/auth-store';
 import { browserLocale } from './locale-format';
 
@@ -18,7 +18,7 @@ const SENT_KEY = 'conewise.locale-sent';
  */
 @Injectable({ providedIn: 'root' })
 export class LocaleSync {
-  private readonly http = inject(HttpClient);
+  private readonly authApi = inject(AuthApi);
   private readonly auth = inject(AuthStore);
 
   /** Watches who is signed in and sends their locale when this tab has not sent it yet. */
@@ -29,7 +29,7 @@ export class LocaleSync {
       const locale = browserLocale();
       const mark = `${user.id}|${locale}`;
       if (readSent() === mark) return;
-      this.http.patch('/api/auth/me', { locale }).subscribe({
+      this.authApi.changeLocale(locale).subscribe({
         next: () => writeSent(mark),
         error: () => undefined,
       });

@@ -13,11 +13,11 @@ import type { ChartConfiguration } from 'chart.js';
 import { MatButtonModule } from '@angular/material/button';
 import type { TeamDto } from '../../../../shared/types';
 import type { TeamInsightDto } from '../../../../shared/types/plan-api';
+import { TeamsApi } from '../../core/api/teams-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { dayWords, momentDayWords, numberWords } from '../../core/locale/locale-format';
 import { InsightChart } from './insight-chart';
-import { InsightApi } from './services/insight-api';
 import { LOW_TOUCH_SHARE, summariseInsight } from './services/insight-summary';
 
 const PITCH = '#2f7d4f';
@@ -35,7 +35,7 @@ export class TeamInsightPage {
   /** The team's id, from the route. */
   readonly teamId = input.required<string>();
 
-  private readonly api = inject(InsightApi);
+  private readonly teamsApi = inject(TeamsApi);
   protected readonly insight = signal<TeamInsightDto | null>(null);
   protected readonly team = signal<TeamDto | null>(null);
   protected readonly error = signal<string | null>(null);
@@ -127,11 +127,11 @@ export class TeamInsightPage {
 
   private load(teamId: string): void {
     this.error.set(null);
-    this.api.insight(teamId).subscribe({
+    this.teamsApi.insight(teamId).subscribe({
       next: (insight) => this.insight.set(insight),
       error: (error: unknown) => this.error.set(problemMessage(error)),
     });
-    this.api.team(teamId).subscribe({ next: (team) => this.team.set(team), error: () => undefined });
+    this.teamsApi.get(teamId).subscribe({ next: (team) => this.team.set(team), error: () => undefined });
   }
 
   /** A chart's words for screen readers: what it is, then what it shows. */

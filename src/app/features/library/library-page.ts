@@ -4,7 +4,6 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { RuleSetDocument } from '../../../../engine/index';
 import pinsSchema from '../../../../shared/schemas/api/team-pinned-activities.schema.json';
 import {
   AGE_GROUPS,
@@ -12,10 +11,11 @@ import {
   STATION_KINDS,
   type AgeGroup,
   type Focus,
+  type RuleSetDocument,
   type StationKind,
   type TeamDto,
 } from '../../../../shared/types';
-import { PlanRulesApi } from '../../core/api/plan-rules-api';
+import { RuleSetsApi } from '../../core/api/rule-sets-api';
 import { TeamsApi } from '../../core/api/teams-api';
 import { AuthStore } from '../../core/auth/auth-store';
 import { problemMessage } from '../../core/http/problem-message';
@@ -46,7 +46,7 @@ function pinsOf(team: TeamDto): string[] {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class LibraryPage {
-  private readonly rulesApi = inject(PlanRulesApi);
+  private readonly rulesApi = inject(RuleSetsApi);
   private readonly teamsApi = inject(TeamsApi);
   private readonly auth = inject(AuthStore);
 

@@ -1,9 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatMenuModule } from '@angular/material/menu';
-import { suitsAge } from '../../../../../engine';
-import { previewActivity, type ActivityPreview, type RuleSetDocument } from '../../../../../engine/index';
-import type { AgeGroup, Level } from '../../../../../shared/types';
+import type { AgeGroup, Level, RuleSetDocument } from '../../../../../shared/types';
+import { previewActivity, suitsAge, type ActivityPreview } from '../../../core/engine/engine-adapter';
 import { ICONS } from '../../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, LEVEL_LABELS } from '../../../core/labels/plan-labels';
 import { StationDiagram } from '../../../shared/components/station-diagram';

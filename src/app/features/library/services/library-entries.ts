@@ -1,10 +1,12 @@
-import {
-  isFirstFormat,
-  listActivities,
-  upgradeRuleSet,
-  type RuleSetDocument,
-} from '../../../../../engine/index';
-import type { ActivityDefinition, AgeGroup, Focus, Level, StationKind } from '../../../../../shared/types';
+import type {
+  ActivityDefinition,
+  AgeGroup,
+  Focus,
+  Level,
+  RuleSetDocument,
+  StationKind,
+} from '../../../../../shared/types';
+import { isFirstFormat, listActivities, upgradeRuleSet } from '../../../core/engine/engine-adapter';
 
 /** One activity as the library shows it: the engine's listing joined with its full definition. */
 export interface LibraryEntry {

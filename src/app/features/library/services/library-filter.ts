@@ -1,4 +1,4 @@
-import { suitsAge } from '../../../../../engine';
+import { suitsAge } from '../../../core/engine/engine-adapter';
 import type { AgeGroup, Focus, StationKind } from '../../../../../shared/types';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS } from '../../../core/labels/plan-labels';
 import type { LibraryEntry } from './library-entries';

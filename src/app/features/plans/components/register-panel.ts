@@ -11,14 +11,20 @@ import {
 import { MatButtonModule } from '@angular/material/button';
 import { MatExpansionModule } from '@angular/material/expansion';
 import { forkJoin } from 'rxjs';
-import { attendanceFromPlan } from '../../../../../engine/attendance-from-plan';
-import type { AttendanceDto, Plan, PlayerDto, SessionPlanDto, TeamDto } from '../../../../../shared/types';
+import {
+  attendanceFromPlan,
+  type AttendanceDto,
+  type Plan,
+  type PlayerDto,
+  type SessionPlanDto,
+  type TeamDto,
+} from '../../../../../shared/types';
+import { AttendanceApi } from '../../../core/api/attendance-api';
 import { PlayersApi } from '../../../core/api/players-api';
 import { TeamsApi } from '../../../core/api/teams-api';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { problemMessage } from '../../../core/http/problem-message';
 import { ICONS } from '../../../core/icons/shipped-icon';
-import { RegisterApi } from '../services/register-api';
 import {
   canTakeRegister,
   entriesOf,
@@ -66,7 +72,7 @@ export class RegisterPanel {
   /** The plan as it stands now (pitch-side's arrivals and leavers fill the register in). */
   readonly plan = input.required<Pick<Plan, 'request' | 'rosterChanges'>>();
 
-  private readonly registerApi = inject(RegisterApi);
+  private readonly attendanceApi = inject(AttendanceApi);
   private readonly playersApi = inject(PlayersApi);
   private readonly teamsApi = inject(TeamsApi);
   private readonly auth = inject(AuthStore);
@@ -167,7 +173,7 @@ export class RegisterPanel {
     const order = this.rows().map((r) => r.id);
     this.saving.set(true);
     this.error.set(null);
-    this.registerApi.save(this.session().id, entriesOf(this.marks(), order)).subscribe({
+    this.attendanceApi.save(this.session().id, entriesOf(this.marks(), order)).subscribe({
       next: (dto) => {
         this.saved.set(dto);
         this.edits.set(null);
@@ -193,7 +199,7 @@ export class RegisterPanel {
   private load(planId: string, teamId: string): void {
     this.loading.set(true);
     forkJoin({
-      register: this.registerApi.get(planId),
+      register: this.attendanceApi.get(planId),
       roster: this.playersApi.list(teamId, true),
       team: this.teamsApi.get(teamId),
     }).subscribe({

@@ -1,9 +1,9 @@
-import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { MatExpansionModule } from '@angular/material/expansion';
 import type { Plan, TraceEntry } from '../../../../../shared/types';
 import type { RuleSetSummaryDto } from '../../../../../shared/types/rule-set-api';
 import { rulesInWords } from '../../../../../shared/types/rule-words';
+import { RuleSetsApi } from '../../../core/api/rule-sets-api';
 
 /** Steps the planner takes by itself (timing, keepers, edits), as against the club's own rules. */
 export function isPlannerStep(entry: TraceEntry): boolean {
@@ -116,7 +116,7 @@ function plannerStepsWords(n: number): string {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class WhyPanel {
-  private readonly http = inject(HttpClient);
+  private readonly ruleSetsApi = inject(RuleSetsApi);
 
   readonly plan = input.required<Plan>();
   protected readonly clubRules = computed(() =>
@@ -146,7 +146,7 @@ export class WhyPanel {
     const id = this.plan().ruleSet.id;
     if (this.asked === id) return;
     this.asked = id;
-    this.http.get<RuleSetSummaryDto>(`/api/rule-sets/${encodeURIComponent(id)}/summary`).subscribe({
+    this.ruleSetsApi.summary(id).subscribe({
       next: (summary) => this.rules.set(summary),
       // Offline or gone: the line says "Club rules" and the details keep the rest.
       error: () => this.rules.set(null),

@@ -3,7 +3,7 @@ import { firstValueFrom } from 'rxjs';
 import type { Notice, Plan, RuleSetDocument, SessionPlanDto } from '../../../../../shared/types';
 import type { PlanEdit } from '../../../../../shared/types/plan-edit';
 import { PlansApi } from '../../../core/api/plans-api';
-import { PlanRulesApi } from '../../../core/api/plan-rules-api';
+import { RuleSetsApi } from '../../../core/api/rule-sets-api';
 import { ActivityOption, AreaLimits, BrowserEngine } from '../../../core/engine/browser-engine';
 import { PlanPrefetch } from './plan-prefetch';
 import { problemMessage } from '../../../core/http/problem-message';
@@ -30,7 +30,7 @@ export class PlanSession {
   private readonly plansApi = inject(PlansApi);
   private readonly prefetch = inject(PlanPrefetch);
   private readonly engine = inject(BrowserEngine);
-  private readonly planRules = inject(PlanRulesApi);
+  private readonly planRules = inject(RuleSetsApi);
   private readonly units = inject(UnitChoice);
   /** The rules of the open plan's rule set, fetched once per rule set id. */
   private rules: { id: string; document: Promise<RuleSetDocument | null> } | null = null;

@@ -1,11 +1,11 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { AttendanceDto, AttendanceEntryDto } from '../../../../../shared/types';
+import type { AttendanceDto, AttendanceEntryDto } from '../../../../shared/types';
 
-/** The register of one planned session: who came, how late, how early they left. */
+/** The register of one planned session (/api/plans/:id/attendance): who came, how late, how early they left. */
 @Injectable({ providedIn: 'root' })
-export class RegisterApi {
+export class AttendanceApi {
   private readonly http = inject(HttpClient);
 
   /** GET /api/plans/:id/attendance. */
