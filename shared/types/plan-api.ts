@@ -1,7 +1,24 @@
 /** API shapes for plan activity beyond the basic plan DTOs: pitch-side changes and team insight. */
 import type { FeedbackDto, SessionPlanDto } from './api';
-import type { PlayerMove } from './plan-edit';
-import type { PlanKind } from './plan-request';
+import type { PlayerMove, StationVerdict } from './plan-edit';
+import type { PlanKind, PresentPlayer } from './plan-request';
+
+/** Body of POST /api/plans/:id/replan (shared/schemas/api/plan-replan.schema.json). */
+export interface ReplanBody {
+  add?: PresentPlayer[];
+  remove?: string[];
+  fromMinute: number;
+  clientId?: string;
+}
+
+/** Body of POST /api/plans/:id/progression and /feedback. */
+export interface VerdictBody {
+  phaseIndex: number;
+  stationId: string;
+  verdict: StationVerdict;
+  clientId?: string;
+  note?: string;
+}
 
 /** Answer of POST /api/plans/:id/replan and /progression. */
 export interface PlanChangeDto {

@@ -2,12 +2,16 @@ import { HttpClient, HttpContext, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
 import type {
+  FeedbackDto,
   Page,
   Plan,
+  PlanChangeDto,
   PlanRequest,
   PlanSummaryDto,
   SessionPlanDto,
+  ReplanBody,
   ShareResultDto,
+  VerdictBody,
 } from '../../../../shared/types';
 import type { PlanEdit } from '../../../../shared/types/plan-edit';
 
@@ -85,5 +89,20 @@ export class PlansApi {
       ...(message ? { message } : {}),
       ...(paper ? { paper } : {}),
     });
+  }
+
+  /** Re-plans the phases still to come after arrivals and departures, moving as few as it can. */
+  replan(id: string, body: ReplanBody): Observable<PlanChangeDto> {
+    return this.http.post<PlanChangeDto>(`/api/plans/${id}/replan`, body);
+  }
+
+  /** Steps a station easier or harder (pitch-side's "too easy / too hard"). */
+  progression(id: string, body: VerdictBody): Observable<PlanChangeDto> {
+    return this.http.post<PlanChangeDto>(`/api/plans/${id}/progression`, body);
+  }
+
+  /** Records how a station went; stored once per `clientId`. */
+  feedback(id: string, body: VerdictBody): Observable<FeedbackDto> {
+    return this.http.post<FeedbackDto>(`/api/plans/${id}/feedback`, body);
   }
 }

@@ -13,6 +13,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatTabsModule } from '@angular/material/tabs';
 import type { RuleSetDto } from '../../../../shared/types';
+import type { RuleSetConflictProblem } from '../../../../shared/types/rule-set-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { momentDayWords } from '../../core/locale/locale-format';
@@ -27,7 +28,7 @@ import { setAt } from '../../../../shared/json-pointer';
 import { editedChanges } from './services/rules-engine';
 import { rebaseEdits, type Rebased } from './services/rebase-edits';
 import { activityIndexOf, cellOf, refusalProblems } from './services/rule-cells';
-import { RuleSetsApi } from './services/rule-sets-api';
+import { RuleSetsApi } from '../../core/api/rule-sets-api';
 import { loadRuleValidator, type RuleProblem } from './services/rule-validation';
 
 /** Tabs of the workspace, in order. */
@@ -205,10 +206,10 @@ export class ClubRulesPage {
       error: (error: unknown) => {
         this.busy.set(false);
         if (error instanceof HttpErrorResponse && error.status === 409) {
-          const current = (error.error as { revision?: number; currentRevision?: number } | null) ?? {};
+          const problem = error.error as Partial<RuleSetConflictProblem> | null;
           this.conflict.set({
             message: problemMessage(error),
-            currentRevision: current.currentRevision ?? current.revision ?? null,
+            currentRevision: problem?.currentRevision ?? null,
           });
           failed?.(
             $localize`:Why a change was not saved, after Not saved:someone else saved the draft first; see the message at the top of the page.`,

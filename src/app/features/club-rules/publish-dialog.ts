@@ -3,7 +3,7 @@ import { MatButtonModule } from '@angular/material/button';
 import { MAT_DIALOG_DATA, MatDialogModule } from '@angular/material/dialog';
 import type { RuleSetReachDto } from '../../../../shared/types/rule-set-api';
 import { problemMessage } from '../../core/http/problem-message';
-import { RuleSetsApi } from './services/rule-sets-api';
+import { RuleSetsApi } from '../../core/api/rule-sets-api';
 
 /** What the dialog is asked about: the draft's version number. */
 export interface PublishDialogData {

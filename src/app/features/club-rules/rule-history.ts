@@ -16,7 +16,7 @@ import { ICONS } from '../../core/icons/shipped-icon';
 import { momentWords } from '../../core/locale/locale-format';
 import { ruleChangeWords, rulePathWords, ruleValueWords } from '../../../../shared/types/rule-words';
 import { versionChanges, type JsonChange } from './services/rules-engine';
-import { RuleSetsApi } from './services/rule-sets-api';
+import { RuleSetsApi } from '../../core/api/rule-sets-api';
 
 /** Conewise's own starting rules, as the server answers for the id "default". */
 const STARTING_RULES: RuleSetDto = {

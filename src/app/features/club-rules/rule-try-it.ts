@@ -13,7 +13,7 @@ import {
 import { TeamsApi } from '../../core/api/teams-api';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
-import { RuleSetsApi } from './services/rule-sets-api';
+import { PlansApi } from '../../core/api/plans-api';
 import {
   outlineChanges,
   outlinePlan,
@@ -60,7 +60,7 @@ const OUTLINE_ROWS: { key: keyof PlanOutline; label: string }[] = [
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class RuleTryIt {
-  private readonly api = inject(RuleSetsApi);
+  private readonly plansApi = inject(PlansApi);
   private readonly teamsApi = inject(TeamsApi);
   /** The reader's units: the runs are metric, what they show is put into these. */
   protected readonly units = inject(UnitChoice);
@@ -185,8 +185,8 @@ export class RuleTryIt {
   /** The club's three latest plans, replayed with their own players, kit, space and seed. */
   private async recentCases(): Promise<{ id: string; label: string; request: PlanRequest }[]> {
     try {
-      const summaries = await firstValueFrom(this.api.recentPlans(3));
-      const plans = await Promise.all(summaries.map((s) => firstValueFrom(this.api.plan(s.id))));
+      const summaries = (await firstValueFrom(this.plansApi.list({ page: 1 }))).items.slice(0, 3);
+      const plans = await Promise.all(summaries.map((s) => firstValueFrom(this.plansApi.get(s.id))));
       return plans.map((plan) => ({
         id: plan.id,
         label: $localize`:A recent plan tried again, e.g. Harbour Herons U9, 2026-11-28 (12 players):${plan.teamName}:team:, ${plan.date ?? plan.createdAt.slice(0, 10)}:date: (${plan.playerCount}:count: players)`,

@@ -26,14 +26,15 @@ import type {
   SessionPlanDto,
   StationVerdict,
 } from '../../../../shared/types';
-import { PlanRulesApi } from '../../core/api/plan-rules-api';
+import { PlansApi } from '../../core/api/plans-api';
+import { PlayersApi } from '../../core/api/players-api';
+import { RuleSetsApi } from '../../core/api/rule-sets-api';
 import { BrowserEngine, type BrowserEngineApi } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { PhaseChime } from './services/phase-chime';
 import { formatCountdown } from './services/phase-clock';
 import { PitchClock } from './services/pitch-clock';
-import { PitchSideApi } from './services/pitch-side-api';
 import { PitchSync } from './services/pitch-sync';
 import { PlanSnapshot, type PitchSnapshot } from './services/plan-snapshot';
 import { ScreenAwake } from './services/screen-awake';
@@ -58,8 +59,9 @@ export class PitchSidePage {
   /** The plan's id, from the route. */
   readonly planId = input.required<string>();
 
-  private readonly api = inject(PitchSideApi);
-  private readonly planRules = inject(PlanRulesApi);
+  private readonly plans = inject(PlansApi);
+  private readonly players = inject(PlayersApi);
+  private readonly ruleSets = inject(RuleSetsApi);
   private readonly browserEngine = inject(BrowserEngine);
   private readonly pendingTasks = inject(PendingTasks);
   private readonly destroyRef = inject(DestroyRef);
@@ -429,8 +431,8 @@ export class PitchSidePage {
         tap(use),
         catchError(() => EMPTY),
       );
-    this.api
-      .getPlan(planId)
+    this.plans
+      .get(planId)
       .pipe(
         tap({
           next: (session) => {
@@ -446,8 +448,8 @@ export class PitchSidePage {
         }),
         switchMap((session) =>
           merge(
-            quietly(this.api.listPlayers(session.teamId), (players) => this.roster.set(players)),
-            quietly(this.planRules.get(session.ruleSetId), (ruleSet) =>
+            quietly(this.players.list(session.teamId), (players) => this.roster.set(players)),
+            quietly(this.ruleSets.get(session.ruleSetId), (ruleSet) =>
               this.rules.set(ruleSet.body as RuleSetDocument),
             ),
           ),

@@ -1,9 +1,10 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import { DestroyRef, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom, Observable, Subject, timeout, TimeoutError } from 'rxjs';
-import { problemMessage } from '../../../core/http/problem-message';
-import { PitchSideApi, type PlanChange, type ReplanBody, type VerdictBody } from './pitch-side-api';
+import type { PlanChangeDto, ReplanBody, VerdictBody } from '../../../../../shared/types';
+import { PlansApi } from '../../../core/api/plans-api';
 import { PITCH_SIDE_QUEUE_KEY } from '../../../core/auth/device-data';
+import { problemMessage } from '../../../core/http/problem-message';
 
 /** One pitch-side action waiting to reach the server. */
 export type QueuedAction =
@@ -14,7 +15,7 @@ export type QueuedAction =
 /** What the server made of a synced action. */
 export interface SyncedAction {
   action: QueuedAction;
-  change: PlanChange | null;
+  change: PlanChangeDto | null;
 }
 
 const STORAGE_KEY = PITCH_SIDE_QUEUE_KEY;
@@ -30,7 +31,7 @@ const SEND_TIMEOUT_MS = 15_000;
  */
 @Injectable({ providedIn: 'root' })
 export class ActionQueue {
-  private readonly api = inject(PitchSideApi);
+  private readonly api = inject(PlansApi);
   private readonly syncedActions = new Subject<SyncedAction>();
   private flushing = false;
   private retryTimer: ReturnType<typeof setTimeout> | null = null;
@@ -116,7 +117,7 @@ export class ActionQueue {
     }, delay);
   }
 
-  private send(action: QueuedAction): Promise<PlanChange | null> {
+  private send(action: QueuedAction): Promise<PlanChangeDto | null> {
     const clientId = action.clientId;
     switch (action.kind) {
       case 'replan':

@@ -4,8 +4,13 @@ import { TestBed } from '@angular/core/testing';
 import { PitchSync, type ServerPlan } from './pitch-sync';
 
 const QUEUE_KEY = 'conewise.pitch-side.queue';
-/** Enough of a stored plan for the queue to take it as one. */
+/** Enough of a plan to tell one from another. */
 const planOf = (seed: string) => ({ seed, phases: [] });
+/** The server's answer to a re-plan or progression (PlanChangeDto): the stored plan and who moved. */
+const changeOf = (seed: string, moves: unknown[] = []) => ({
+  plan: { id: 'p1', version: 2, plan: planOf(seed) },
+  moves,
+});
 
 describe('PitchSync', () => {
   beforeEach(() => {
@@ -28,7 +33,7 @@ describe('PitchSync', () => {
     expect(sync.verdictQueued('p1', 1, 's2')).toBe(true);
     expect(sync.verdictQueued('p1', 0, 's2')).toBe(false);
     expect(JSON.parse(localStorage.getItem(QUEUE_KEY)!)).toHaveLength(1);
-    request.flush({ plan: planOf('stepped'), moves: [] });
+    request.flush(changeOf('stepped'));
     await Promise.resolve();
     await new Promise((resolve) => setTimeout(resolve));
     expect(sync.pendingCount('p1')).toBe(0);
@@ -45,12 +50,12 @@ describe('PitchSync', () => {
     expect(sync.waiting('p1')).toBe(true);
     const first = http.expectOne('/api/plans/p1/replan');
     expect(first.request.body).toMatchObject({ add: [{ id: 'f' }], fromMinute: 3 });
-    first.flush({ plan: planOf('first'), moves: [] });
+    first.flush(changeOf('first'));
     const second = await waitForRequest(http);
     expect(second.request.body).toMatchObject({ remove: ['a'], fromMinute: 4 });
     expect(seen).toEqual([]);
     const move = { playerId: 'a', fromStationId: 's1', toStationId: null, phaseIndex: 1 };
-    second.flush({ plan: planOf('second'), moves: [move] });
+    second.flush(changeOf('second', [move]));
     await new Promise((resolve) => setTimeout(resolve));
     expect(seen).toEqual([{ planId: 'p1', kind: 'replan', plan: planOf('second'), moves: [move] }]);
     expect(sync.waiting('p1')).toBe(false);

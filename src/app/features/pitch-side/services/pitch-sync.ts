@@ -1,9 +1,8 @@
 import { inject, Injectable } from '@angular/core';
 import { filter, map, type Observable } from 'rxjs';
-import type { Plan, PlayerMove } from '../../../../../shared/types';
+import type { Plan, PlayerMove, ReplanBody, VerdictBody } from '../../../../../shared/types';
 import { ActionQueue, type QueuedAction } from './action-queue';
 import { newClientId } from './client-id';
-import type { ReplanBody, VerdictBody } from './pitch-side-api';
 
 /** A plan as the server stored it after the last change of it waiting on this device. */
 export interface ServerPlan {
@@ -30,11 +29,11 @@ export class PitchSync {
    * waits on the device: changes made since stay on screen until the server has them too.
    */
   readonly serverPlans: Observable<ServerPlan> = this.queue.synced.pipe(
-    filter(({ action, change }) => !!change?.plan?.phases && !this.waiting(action.planId)),
+    filter(({ action, change }) => !!change && !this.waiting(action.planId)),
     map(({ action, change }) => ({
       planId: action.planId,
       kind: action.kind,
-      plan: change!.plan,
+      plan: change!.plan.plan,
       moves: change!.moves,
     })),
   );

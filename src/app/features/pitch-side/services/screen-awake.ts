@@ -1,11 +1,6 @@
-interface WakeLockSentinelLike {
-  released: boolean;
-  release(): Promise<void>;
-}
-
 /** Keeps the phone's screen on while the session runs, where the browser offers Wake Lock. */
 export class ScreenAwake {
-  private sentinel: WakeLockSentinelLike | null = null;
+  private sentinel: WakeLockSentinel | null = null;
   private wanted = false;
   private readonly reacquire = () => {
     if (this.wanted && document.visibilityState === 'visible') void this.acquire();
@@ -33,10 +28,7 @@ export class ScreenAwake {
   private async acquire(): Promise<boolean> {
     if (!this.supported) return false;
     try {
-      const lock = (
-        navigator as unknown as { wakeLock: { request(type: 'screen'): Promise<WakeLockSentinelLike> } }
-      ).wakeLock;
-      this.sentinel = await lock.request('screen');
+      this.sentinel = await navigator.wakeLock.request('screen');
       return true;
     } catch {
       // Refused (battery saver, hidden tab): the session still runs, the screen may dim.
