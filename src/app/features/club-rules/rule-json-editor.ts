@@ -158,6 +158,8 @@ export class RuleJsonEditor {
             id: 'rule-json',
             'aria-labelledby': 'rule-json-label',
             'aria-multiline': 'true',
+            // Focusable as it is (contenteditable); said outright so checkers see the scroller's content can be reached by keyboard.
+            tabindex: '0',
             spellcheck: 'false',
             autocapitalize: 'off',
           }),
