@@ -87,13 +87,26 @@ describe('club rules', () => {
     expect(await page.getByRole('tab', { name: /JSON|text/i }).count()).toBe(0);
     await page.getByTestId('advanced-toggle').click();
     const editor = page.locator('#rule-json');
-    const document = JSON.parse(await editor.inputValue());
+    await editor.waitFor();
+    expect(await editor.getAttribute('aria-invalid')).toBe('false');
+    // The saved draft, as the editor shows it (it draws only the lines in view, so read it from the API).
+    const drafts = (await club.api.get<RuleSetDto[]>('/api/rule-sets', { token: lead.token })).body;
+    const draft = drafts.find((r) => r.status === 'draft');
+    const document = structuredClone(draft?.body) as {
+      parameters: { keepBall: { intermediate: { formats: unknown } } };
+    };
     document.parameters.keepBall.intermediate.formats = [{ attackers: 5, defenders: 1 }];
     const text = JSON.stringify(document, null, 2);
     // The whole document at once, as a paste would put it (typing 160 kB key by key is not the point here).
-    await editor.evaluate((area: HTMLTextAreaElement, value: string) => {
-      area.value = value;
-      area.dispatchEvent(new Event('input', { bubbles: true }));
+    // (Chromium's renderer gives up on keyboard.insertText of this size, so the paste event is sent.)
+    await editor.click();
+    await page.keyboard.press('Control+A');
+    await editor.evaluate((content, value: string) => {
+      const data = new DataTransfer();
+      data.setData('text/plain', value);
+      content.dispatchEvent(
+        new ClipboardEvent('paste', { clipboardData: data, bubbles: true, cancelable: true }),
+      );
     }, text);
     const problem = page.getByTestId('json-problems').locator('button').first();
     await problem.waitFor();
@@ -106,6 +119,11 @@ describe('club rules', () => {
     expect(await problem.textContent()).toContain(sentence);
     expect(await problem.textContent()).toMatch(new RegExp(`Line ${line}(?!\\d)`));
     await problem.click();
+    // The list takes the caret to the line, where the editor marks the same problem in the same words.
+    await expect.poll(() => page.locator('.cm-activeLineGutter').first().textContent()).toBe(String(line));
+    await expect.poll(() => editor.getAttribute('aria-invalid')).toBe('true');
+    await page.locator('.cm-lintRange-error').first().hover();
+    await expect.poll(() => page.locator('.cm-tooltip-lint').textContent()).toContain(sentence);
     await screenshot(page, 'club-rules-advanced-text');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await page.getByRole('button', { name: 'Discard' }).click();
