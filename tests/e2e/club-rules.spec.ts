@@ -92,11 +92,11 @@ describe('club rules', () => {
     // The saved draft, as the editor shows it (it draws only the lines in view, so read it from the API).
     const drafts = (await club.api.get<RuleSetDto[]>('/api/rule-sets', { token: lead.token })).body;
     const draft = drafts.find((r) => r.status === 'draft');
-    const document = structuredClone(draft?.body) as {
+    const edited = structuredClone(draft?.body) as {
       parameters: { keepBall: { intermediate: { formats: unknown } } };
     };
-    document.parameters.keepBall.intermediate.formats = [{ attackers: 5, defenders: 1 }];
-    const text = JSON.stringify(document, null, 2);
+    edited.parameters.keepBall.intermediate.formats = [{ attackers: 5, defenders: 1 }];
+    const text = JSON.stringify(edited, null, 2);
     // The whole document at once, as a paste would put it (typing 160 kB key by key is not the point here).
     // (Chromium's renderer gives up on keyboard.insertText of this size, so the paste event is sent.)
     await editor.click();
