@@ -180,6 +180,9 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     await target.scrollIntoViewIfNeeded();
     const end = (await target.boundingBox())!;
     await page.mouse.move(end.x + end.width / 2, end.y + end.height / 2, { steps: 20 });
+    // Let go once the drop preview shows in the target, as a coach would: on a busy machine the
+    // drag can lag the pointer, and letting go earlier drops on a station passed on the way.
+    await expect.poll(() => target.locator('.cdk-drag-placeholder').count(), { timeout: 10_000 }).toBe(1);
     await page.mouse.up();
     const patched = await saveResponse;
     expect(patched.status()).toBe(200);
