@@ -3,7 +3,7 @@ import { TestBed } from '@angular/core/testing';
 import { forEachDiagnostic, type Diagnostic } from '@codemirror/lint';
 import { EditorView } from '@codemirror/view';
 import defaultRules from '../../../../rules/default-rule-set.json';
-import { validateRuleSet } from '../../../../engine/schema/validate-rule-set';
+import { validateRuleSet } from '../../../../engine/index';
 import { RuleJsonEditor } from './rule-json-editor';
 import type { RuleProblem } from './services/rule-validation';
 
