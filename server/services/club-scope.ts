@@ -37,6 +37,15 @@ export class ClubScope {
     return this.auth.clubId;
   }
 
+  /**
+   * Runs `work` in one database transaction with the same caller's scope bound to it, so every
+   * read and write inside is all-or-nothing. Nested calls join the outer transaction.
+   */
+  transaction<T>(work: (scope: ClubScope) => Promise<T>): Promise<T> {
+    if (this.manager.queryRunner?.isTransactionActive) return work(this);
+    return this.manager.transaction((manager) => work(new ClubScope(manager, this.auth)));
+  }
+
   /** A where-clause limited to the caller's club. */
   where<T extends { clubId: string }>(extra: FindOptionsWhere<T> = {}): FindOptionsWhere<T> {
     return { ...extra, clubId: this.clubId } as FindOptionsWhere<T>;
@@ -66,6 +75,17 @@ export class ClubScope {
 
   plan(id: string): Promise<SessionPlan> {
     return this.byId(SessionPlan, id, 'plan');
+  }
+
+  /** A plan of the club locked for the rest of the transaction (call inside `transaction`), or 404. */
+  async lockedPlan(id: string): Promise<SessionPlan> {
+    if (!isUuid(id)) throw notFound('plan');
+    const row = await this.manager.getRepository(SessionPlan).findOne({
+      where: this.where<SessionPlan>({ id }),
+      lock: { mode: 'pessimistic_write' },
+    });
+    if (!row) throw notFound('plan');
+    return row;
   }
 
   ruleSet(id: string): Promise<RuleSet> {

@@ -11,7 +11,7 @@ import { ClubScope } from './club-scope';
 import * as engine from './engine-port';
 import { storeFeedback, stationOf } from './feedback-service';
 import { feedbackDto, sessionPlanDto } from './plan-dto';
-import { lockPlan, planColumns } from './plan-service';
+import { planColumns } from './plan-service';
 import { rulesOfPlan } from './rules-resolver';
 
 export interface ReplanInput {
@@ -39,7 +39,7 @@ export class PitchSideService {
   async replan(auth: AuthContext, planId: string, input: ReplanInput): Promise<PlanChangeDto> {
     return this.dataSource.transaction(async (manager) => {
       const scope = new ClubScope(manager, auth);
-      const row = await lockPlan(manager, scope, planId);
+      const row = await scope.lockedPlan(planId);
       const team = await scope.teamToRun(row.teamId, 'change who is at its session');
       const present = new Set(row.plan.request.players.map((p) => p.id));
       const addIds = (input.add ?? []).map((a) => (typeof a === 'string' ? a : a.id));
@@ -80,7 +80,7 @@ export class PitchSideService {
   async progression(auth: AuthContext, planId: string, input: ProgressionInput): Promise<PlanChangeDto> {
     return this.dataSource.transaction(async (manager) => {
       const scope = new ClubScope(manager, auth);
-      const row = await lockPlan(manager, scope, planId);
+      const row = await scope.lockedPlan(planId);
       const team = await scope.teamToRun(row.teamId, 'judge its stations');
       const station = stationOf(row.plan, input.phaseIndex, input.stationId);
       const { feedback, created } = await storeFeedback(manager, auth, row, station, input);

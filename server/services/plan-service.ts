@@ -142,7 +142,7 @@ export class PlanService {
   ): Promise<SessionPlanDto> {
     return this.dataSource.transaction(async (manager) => {
       const scope = new ClubScope(manager, auth);
-      const row = await lockPlan(manager, scope, id);
+      const row = await scope.lockedPlan(id);
       const team = await scope.teamToManage(row.teamId);
       if (ifMatch !== null && ifMatch !== row.version) {
         const current = row.version;
@@ -214,14 +214,6 @@ async function assertSessionOfTeam(
       },
     ]);
   }
-}
-
-/** The stored plan, locked for the rest of the transaction (404 outside the caller's club). */
-export async function lockPlan(manager: EntityManager, scope: ClubScope, id: string): Promise<SessionPlan> {
-  await scope.plan(id);
-  return manager
-    .getRepository(SessionPlan)
-    .findOneOrFail({ where: { id, clubId: scope.clubId }, lock: { mode: 'pessimistic_write' } });
 }
 
 const INSERT_PLAN_SQL = `
