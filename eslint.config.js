@@ -62,6 +62,27 @@ export default tseslint.config(
     },
   },
   {
+    // Screens and services reach the engine through the one adapter in src/app/core/engine (specs
+    // may build their fixtures with it directly).
+    files: ['src/**/*.ts'],
+    ignores: ['src/app/core/engine/**', 'src/**/*.spec.ts'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^(\\.\\./)+engine(/.*)?$',
+              message:
+                'Reach the engine through src/app/core/engine (BrowserEngine, or engine-adapter in a lazy screen).',
+            },
+            { regex: '(^|/)server(/|$)', message: 'The client never imports the server.' },
+          ],
+        },
+      ],
+    },
+  },
+  {
     files: ['src/**/*.html'],
     extends: [...angular.configs.templateRecommended, ...angular.configs.templateAccessibility],
     rules: {},

@@ -26,7 +26,7 @@ import {
   previewActivity,
   type ActivityPreview,
   type RuleSetDocument,
-} from './services/rules-engine';
+} from '../../core/engine/engine-adapter';
 import {
   AGE_GROUPS,
   BALL_USES,

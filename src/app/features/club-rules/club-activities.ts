@@ -11,7 +11,7 @@ import {
 } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatExpansionModule } from '@angular/material/expansion';
-import { validateRuleSet } from './services/rules-engine';
+import { validateRuleSet } from '../../core/engine/engine-adapter';
 import { STATION_KINDS, type ActivityDefinition } from '../../../../shared/types';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { ACTIVITY_KIND_LABELS } from '../../core/labels/plan-labels';

@@ -25,7 +25,7 @@ import { RuleTables, type RuleEdit } from './rule-tables';
 import { RuleTryIt } from './rule-try-it';
 import { rulePathWords } from '../../../../shared/types/rule-words';
 import { setAt } from '../../../../shared/json-pointer';
-import { editedChanges } from './services/rules-engine';
+import { editedChanges } from '../../core/engine/engine-adapter';
 import { rebaseEdits, type Rebased } from './services/rebase-edits';
 import { activityIndexOf, cellOf, refusalProblems } from './services/rule-cells';
 import { RuleSetsApi } from '../../core/api/rule-sets-api';

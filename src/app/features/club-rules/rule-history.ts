@@ -15,7 +15,7 @@ import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { momentWords } from '../../core/locale/locale-format';
 import { ruleChangeWords, rulePathWords, ruleValueWords } from '../../../../shared/types/rule-words';
-import { versionChanges, type JsonChange } from './services/rules-engine';
+import { versionChanges, type JsonChange } from '../../core/engine/engine-adapter';
 import { RuleSetsApi } from '../../core/api/rule-sets-api';
 
 /** Conewise's own starting rules, as the server answers for the id "default". */

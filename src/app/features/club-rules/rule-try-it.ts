@@ -22,7 +22,7 @@ import {
   teamSquad,
   type PlanOutline,
   type SampleSquad,
-} from './services/rules-engine';
+} from '../../core/engine/engine-adapter';
 import { SizeInUnitsPipe } from '../../shared/pipes/size-in-units';
 import { UnitChoice } from '../../core/units/unit-choice';
 import { AgeGroupLabelPipe } from '../../shared/pipes/age-group-label';

@@ -4,7 +4,7 @@
  * required/length checks with the rule-set schema's own limits, then the engine's check of the
  * whole draft with the activity in place, its JSON pointers mapped back to the fields.
  */
-import { validateRuleSet } from './rules-engine';
+import { validateRuleSet } from '../../../core/engine/engine-adapter';
 import ruleSetSchema from '../../../../../shared/schemas/rule-set.schema.json';
 import type {
   ActivityDefinition,

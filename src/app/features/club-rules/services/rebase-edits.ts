@@ -1,5 +1,5 @@
 import { setAt } from '../../../../../shared/json-pointer';
-import { editedChanges, type JsonChange } from './rules-engine';
+import { editedChanges, type JsonChange } from '../../../core/engine/engine-adapter';
 
 /** The outcome of putting one lead's edits on top of another lead's newer save. */
 export interface Rebased {
