@@ -7,6 +7,7 @@ import { RouterLink } from '@angular/router';
 import type { ClubRetentionDto } from '../../../../../shared/types/api';
 import { ClubRetentionApi } from '../../../core/api/club-retention-api';
 import { InstantSave } from '../../../core/forms/instant-save';
+import { SaveStatus } from '../../../shared/components/save-status';
 
 /** The choices the server accepts (shared/schemas/api/club-retention-update.schema.json). */
 const SEASON_CHOICES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
@@ -17,7 +18,7 @@ const SEASON_CHOICES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
  */
 @Component({
   selector: 'cw-club-retention',
-  imports: [FormsModule, MatCardModule, MatFormFieldModule, MatSelectModule, RouterLink],
+  imports: [FormsModule, MatCardModule, MatFormFieldModule, MatSelectModule, RouterLink, SaveStatus],
   template: `
     <mat-card appearance="outlined" class="cw-club-retention">
       <mat-card-header
@@ -49,14 +50,7 @@ const SEASON_CHOICES = [1, 2, 3, 4, 5, 6, 7, 8, 9, 10];
             </mat-select>
           </mat-form-field>
         }
-        <div aria-live="polite">
-          @if (setting.saved()) {
-            <p role="status" class="cw-muted" data-testid="club-retention-saved" i18n>Saved for the club.</p>
-          }
-          @if (setting.error(); as text) {
-            <p class="cw-form-error" role="alert">{{ text }}</p>
-          }
-        </div>
+        <cw-save-status [setting]="setting" testId="club-retention-saved" />
       </mat-card-content>
     </mat-card>
   `,

@@ -5,6 +5,7 @@ import { AuthApi } from '../../../core/api/auth-api';
 import { ClubUnitsApi } from '../../../core/api/club-units-api';
 import { AuthStore } from '../../../core/auth/auth-store';
 import { InstantSave } from '../../../core/forms/instant-save';
+import { SaveStatus } from '../../../shared/components/save-status';
 import { FOLLOW_CLUB, UnitFields, unitProblem, type UnitPick } from '../../../shared/components/unit-fields';
 
 const FIELD_WORDS: Record<string, string> = {
@@ -18,7 +19,7 @@ const FIELD_WORDS: Record<string, string> = {
  */
 @Component({
   selector: 'cw-club-units',
-  imports: [MatCardModule, UnitFields],
+  imports: [MatCardModule, SaveStatus, UnitFields],
   template: `
     <mat-card appearance="outlined" class="cw-club-units">
       <mat-card-header
@@ -41,14 +42,7 @@ const FIELD_WORDS: Record<string, string> = {
             (picked)="save($event)"
           />
         }
-        <div aria-live="polite">
-          @if (setting.saved()) {
-            <p role="status" class="cw-muted" data-testid="club-units-saved" i18n>Saved for the club.</p>
-          }
-          @if (setting.error(); as text) {
-            <p class="cw-form-error" role="alert">{{ text }}</p>
-          }
-        </div>
+        <cw-save-status [setting]="setting" testId="club-units-saved" />
       </mat-card-content>
     </mat-card>
   `,
