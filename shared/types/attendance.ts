@@ -1,4 +1,11 @@
 import type { Plan } from './plan';
+import type { PlanRequest } from './plan-request';
+
+/** What the register is read from: the plan's players and length, and its roster changes. */
+export interface PlanRoster {
+  request: Pick<PlanRequest, 'players' | 'minutes'>;
+  rosterChanges?: Plan['rosterChanges'];
+}
 
 /** One player who came to a session: on time, or late, or leaving early (both still count as came). */
 export interface AttendanceEntryDto {
@@ -17,7 +24,7 @@ export type AttendanceUpdate = { players: AttendanceEntryDto[] } | { playerIds: 
  * minute, with the minutes they came late or left early. A late arrival and an early leaver
  * both came; a player taken off before the start (minute 0) did not.
  */
-export function attendanceFromPlan(plan: Pick<Plan, 'request' | 'rosterChanges'>): AttendanceEntryDto[] {
+export function attendanceFromPlan(plan: PlanRoster): AttendanceEntryDto[] {
   const changes = [...(plan.rosterChanges ?? [])].sort((a, b) => a.fromMinute - b.fromMinute);
   const minutes = plan.request.minutes;
   // Who was there at the start: today's players with every change undone, newest first.
@@ -55,7 +62,7 @@ export function attendanceFromPlan(plan: Pick<Plan, 'request' | 'rosterChanges'>
 }
 
 /** Players who came and then left a running session, so nobody waits for them to arrive. */
-export function leftEarlyIds(plan: Pick<Plan, 'request' | 'rosterChanges'>): Set<string> {
+export function leftEarlyIds(plan: PlanRoster): Set<string> {
   const here = new Set(plan.request.players.map((p) => p.id));
   return new Set(
     attendanceFromPlan(plan)
