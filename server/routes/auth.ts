@@ -8,6 +8,7 @@ import { AuthService, userDto } from '../services/auth-service';
 import { EmailVerificationService, resendWords } from '../services/email-verification-service';
 import { PasswordResetService, RESET_REQUESTED } from '../services/password-reset-service';
 import type { ApiDeps } from './api-deps';
+import { scopeOf } from './scoped';
 
 /**
  * POST /auth/register, POST /auth/login, GET /auth/me, PATCH /auth/me (the caller's own name and locale);
@@ -23,7 +24,7 @@ export function authRouter(deps: ApiDeps): Router {
   const service = new AuthService(deps.dataSource, deps.config, verification);
   const limiter = authRateLimit(deps.config, deps.dataSource, 'sign-in');
   const resets = new PasswordResetService(deps.dataSource, deps.config, deps.mail);
-  const account = new AccountService(deps.dataSource);
+  const account = (req: Parameters<typeof scopeOf>[0]) => new AccountService(scopeOf(req, deps.dataSource));
 
   router.post(
     '/auth/register',
@@ -41,7 +42,7 @@ export function authRouter(deps: ApiDeps): Router {
     res.json(userDto(authOf(req)));
   });
   router.patch('/auth/me', deps.requireAuth, validate({ body: 'auth-me-update' }), async (req, res) => {
-    res.json(await account.update(authOf(req), req.body));
+    res.json(await account(req).update(req.body));
   });
   router.post('/auth/sign-out', deps.requireAuth, async (req, res) => {
     await service.signOut(authOf(req));

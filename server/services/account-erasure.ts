@@ -1,8 +1,8 @@
 import '../../shared/i18n/localize';
 import bcrypt from 'bcryptjs';
-import type { DataSource, EntityManager } from 'typeorm';
-import type { AuthContext } from '../http/auth-context';
+import type { EntityManager } from 'typeorm';
 import { conflict, HttpError, unauthorized } from '../http/problem';
+import type { ClubScope } from './club-scope';
 
 /**
  * What is stored in place of a deleted person's name where the club keeps something they made
@@ -67,25 +67,26 @@ const wrongPassword = () =>
 
 /** DELETE /api/auth/me: anyone deletes their own account, given their password. */
 export class AccountDeletionService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
-  async deleteOwn(auth: AuthContext, password: string): Promise<void> {
-    const [user] = (await this.dataSource.query(`SELECT "passwordHash" FROM app_user WHERE id = $1`, [
+  async deleteOwn(password: string): Promise<void> {
+    const { auth } = this.scope;
+    const [user] = (await this.scope.manager.query(`SELECT "passwordHash" FROM app_user WHERE id = $1`, [
       auth.userId,
     ])) as { passwordHash: string }[];
     if (!user) throw unauthorized();
     if (!(await bcrypt.compare(password, user.passwordHash))) throw wrongPassword();
-    await this.dataSource.transaction(async (manager) => {
+    await this.scope.transaction(async (scope) => {
       // The same lock as member changes (MemberService), so two leads deleting themselves at
       // once, or a lead demoting the other, take turns and the club keeps a head of coaching.
-      await manager.query('SELECT id FROM club WHERE id = $1 FOR NO KEY UPDATE', [auth.clubId]);
-      const [membership] = (await manager.query(
+      await scope.manager.query('SELECT id FROM club WHERE id = $1 FOR NO KEY UPDATE', [auth.clubId]);
+      const [membership] = (await scope.manager.query(
         `SELECT role FROM membership WHERE "userId" = $1 AND "clubId" = $2`,
         [auth.userId, auth.clubId],
       )) as { role: string }[];
       if (!membership) throw unauthorized();
       if (membership.role === 'lead') {
-        const [{ leads }] = (await manager.query(
+        const [{ leads }] = (await scope.manager.query(
           `SELECT count(*)::int AS leads FROM membership WHERE "clubId" = $1 AND role = 'lead'`,
           [auth.clubId],
         )) as { leads: number }[];
@@ -96,7 +97,7 @@ export class AccountDeletionService {
           );
         }
       }
-      await eraseAccount(manager, auth.userId);
+      await eraseAccount(scope.manager, auth.userId);
     });
   }
 }

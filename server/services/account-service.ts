@@ -1,11 +1,11 @@
-import type { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import type { UserDto } from '../../shared/types/api';
 import { usableLocale } from '../../shared/time/locale-format';
 import type { DistanceUnit, TemperatureUnit, UnitOverride } from '../../shared/units';
 import { User } from '../entities/user';
-import type { AuthContext } from '../http/auth-context';
 import { unauthorized } from '../http/problem';
 import { userDto } from './auth-service';
+import type { ClubScope } from './club-scope';
 import { unitFields } from './unit-settings';
 
 /** The fields of PATCH /api/auth/me (auth-me-update.schema.json); each is optional. */
@@ -18,21 +18,22 @@ interface AccountChange {
 
 /** What a signed-in person changes about themselves (never anyone else: the caller is the key). */
 export class AccountService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
   /**
    * A new display name and/or the browser's locale for the caller; answers the caller as everyone
    * now sees them. The locale is kept in canonical form (en-gb → en-GB); a tag Intl does not know
    * is not kept.
    */
-  async update(auth: AuthContext, input: AccountChange): Promise<UserDto> {
+  async update(input: AccountChange): Promise<UserDto> {
+    const { auth } = this.scope;
     const change: Partial<Pick<User, 'name' | 'locale' | 'distanceUnit' | 'temperatureUnit'>> = {};
     if (input.name !== undefined) change.name = input.name.trim();
     if (input.locale !== undefined) change.locale = usableLocale(input.locale, '') || null;
     // Units: null goes back to following the club.
     if (input.distanceUnit !== undefined) change.distanceUnit = input.distanceUnit;
     if (input.temperatureUnit !== undefined) change.temperatureUnit = input.temperatureUnit;
-    const result = await this.dataSource.getRepository(User).update({ id: auth.userId }, change);
+    const result = await this.scope.manager.getRepository(User).update({ id: auth.userId }, change);
     if (!result.affected) throw unauthorized();
     const ownUnits: UnitOverride = {
       distance: change.distanceUnit !== undefined ? change.distanceUnit : auth.ownUnits.distance,

@@ -1,11 +1,10 @@
 import '../../shared/i18n/localize';
-import { In, type DataSource } from 'typeorm';
+import { In } from 'typeorm';
 import type { AttendanceDto, AttendanceEntryDto } from '../../shared/types';
 import { Attendance } from '../entities/attendance';
 import { Player } from '../entities/player';
-import type { AuthContext } from '../http/auth-context';
 import { badRequest, type FieldError } from '../http/problem';
-import { ClubScope } from './club-scope';
+import type { ClubScope } from './club-scope';
 
 /** A body of PUT /plans/:id/attendance as validated: the new form or an older client's list. */
 export type AttendanceInput = { players: AttendanceEntryDto[] } | { playerIds: string[] };
@@ -38,31 +37,29 @@ function dtoOf(planId: string, entries: AttendanceEntryDto[]): AttendanceDto {
  * staff take it (the lead, its coaches and assistants); anyone who can see the team can read it.
  */
 export class AttendanceService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
-  async get(auth: AuthContext, planId: string): Promise<AttendanceDto> {
-    const scope = new ClubScope(this.dataSource.manager, auth);
-    const plan = await scope.plan(planId);
-    await scope.teamToRead(plan.teamId);
-    const rows = await this.dataSource.manager
+  async get(planId: string): Promise<AttendanceDto> {
+    const plan = await this.scope.plan(planId);
+    await this.scope.teamToRead(plan.teamId);
+    const rows = await this.scope.manager
       .getRepository(Attendance)
-      .find({ where: { planId: plan.id, clubId: auth.clubId }, order: { recordedAt: 'ASC' } });
+      .find({ where: { planId: plan.id, clubId: this.scope.clubId }, order: { recordedAt: 'ASC' } });
     return dtoOf(plan.id, rows.map(entryOf));
   }
 
   /** Replaces the register; every player must be one of the plan's team, each once. */
-  async put(auth: AuthContext, planId: string, input: AttendanceInput): Promise<AttendanceDto> {
+  async put(planId: string, input: AttendanceInput): Promise<AttendanceDto> {
     const { entries, field } = attendanceEntries(input);
-    return this.dataSource.transaction(async (manager) => {
-      const scope = new ClubScope(manager, auth);
+    return this.scope.transaction(async (scope) => {
       const plan = await scope.plan(planId);
       await scope.teamToRun(plan.teamId);
       const ids = entries.map((e) => e.playerId);
       const known = new Set(
         (
-          await manager.getRepository(Player).find({
+          await scope.manager.getRepository(Player).find({
             select: { id: true },
-            where: { id: In(ids), teamId: plan.teamId, clubId: auth.clubId },
+            where: { id: In(ids), teamId: plan.teamId, clubId: scope.clubId },
           })
         ).map((p) => p.id),
       );
@@ -90,16 +87,16 @@ export class AttendanceService {
         }
       });
       if (errors.length) throw badRequest($localize`Some players on the register are not right.`, errors);
-      await manager.getRepository(Attendance).delete({ planId: plan.id, clubId: auth.clubId });
+      await scope.manager.getRepository(Attendance).delete({ planId: plan.id, clubId: scope.clubId });
       if (entries.length) {
-        await manager.getRepository(Attendance).insert(
+        await scope.manager.getRepository(Attendance).insert(
           entries.map((e) => ({
-            clubId: auth.clubId,
+            clubId: scope.clubId,
             planId: plan.id,
             playerId: e.playerId,
             lateMinutes: e.lateMinutes ?? null,
             leftEarlyMinutes: e.leftEarlyMinutes ?? null,
-            recordedById: auth.userId,
+            recordedById: scope.auth.userId,
           })),
         );
       }

@@ -1,7 +1,7 @@
 import '../../shared/i18n/localize';
-import type { DataSource, EntityManager } from 'typeorm';
-import type { AuthContext } from '../http/auth-context';
+import type { EntityManager } from 'typeorm';
 import { badRequest, notFound } from '../http/problem';
+import type { ClubScope } from './club-scope';
 
 /** What a deletion statement's $1 is: the club's id, its members' ids or their e-mail addresses. */
 type Key = 'club' | 'members' | 'emails';
@@ -53,19 +53,19 @@ const nameDoesNotMatch = (clubName: string) =>
 
 /** DELETE /api/club: the head of coaching deletes the whole club, after typing its name. */
 export class ClubDeletionService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
-  async deleteClub(auth: AuthContext, typedName: string): Promise<void> {
-    await this.dataSource.transaction(async (manager) => {
+  async deleteClub(typedName: string): Promise<void> {
+    await this.scope.transaction(async (scope) => {
       // FOR UPDATE waits for member changes (which hold FOR NO KEY UPDATE) and blocks new ones.
-      const [club] = (await manager.query(`SELECT name FROM club WHERE id = $1 FOR UPDATE`, [
-        auth.clubId,
+      const [club] = (await scope.manager.query(`SELECT name FROM club WHERE id = $1 FOR UPDATE`, [
+        scope.clubId,
       ])) as {
         name: string;
       }[];
       if (!club) throw notFound('resource');
       if (typedName.trim() !== club.name.trim()) throw nameDoesNotMatch(club.name);
-      await deleteClubRows(manager, auth.clubId);
+      await deleteClubRows(scope.manager, scope.clubId);
     });
   }
 }

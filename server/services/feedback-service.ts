@@ -1,12 +1,12 @@
 import '../../shared/i18n/localize';
-import type { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import type { FeedbackDto, FeedbackVerdict } from '../../shared/types/api';
 import type { Plan, Station } from '../../shared/types/plan';
 import { Feedback } from '../entities/feedback';
 import type { SessionPlan } from '../entities/session-plan';
 import type { AuthContext } from '../http/auth-context';
 import { badRequest } from '../http/problem';
-import { ClubScope } from './club-scope';
+import type { ClubScope } from './club-scope';
 import { feedbackDto } from './plan-dto';
 
 export interface FeedbackInput {
@@ -89,31 +89,25 @@ export async function storeFeedback(
 
 /** Feedback on a plan's stations: record (idempotent by clientId) and list. */
 export class FeedbackService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
-  async record(
-    auth: AuthContext,
-    planId: string,
-    input: FeedbackInput,
-  ): Promise<{ dto: FeedbackDto; created: boolean }> {
-    return this.dataSource.transaction(async (manager) => {
-      const scope = new ClubScope(manager, auth);
+  async record(planId: string, input: FeedbackInput): Promise<{ dto: FeedbackDto; created: boolean }> {
+    return this.scope.transaction(async (scope) => {
       const row = await scope.plan(planId);
       // A verdict steers the team's next plan: only its own staff (or the lead) give one.
       await scope.teamToRun(row.teamId, 'judge its stations');
       const station = stationOf(row.plan, input.phaseIndex, input.stationId);
-      const { feedback, created } = await storeFeedback(manager, auth, row, station, input);
+      const { feedback, created } = await storeFeedback(scope.manager, scope.auth, row, station, input);
       return { dto: feedbackDto(feedback), created };
     });
   }
 
-  async list(auth: AuthContext, planId: string): Promise<FeedbackDto[]> {
-    const scope = new ClubScope(this.dataSource.manager, auth);
-    const row = await scope.plan(planId);
-    await scope.teamToRead(row.teamId);
-    const rows = await this.dataSource.manager
+  async list(planId: string): Promise<FeedbackDto[]> {
+    const row = await this.scope.plan(planId);
+    await this.scope.teamToRead(row.teamId);
+    const rows = await this.scope.manager
       .getRepository(Feedback)
-      .find({ where: { planId: row.id, clubId: auth.clubId }, order: { createdAt: 'ASC' } });
+      .find({ where: { planId: row.id, clubId: this.scope.clubId }, order: { createdAt: 'ASC' } });
     return rows.map(feedbackDto);
   }
 }

@@ -1,13 +1,12 @@
 import '../../shared/i18n/localize';
-import { In, type DataSource } from 'typeorm';
+import { In } from 'typeorm';
 import type { StationVerdict } from '../../shared/types/plan-edit';
 import type { PlanChangeDto } from '../../shared/types/plan-api';
 import type { PresentPlayer } from '../../shared/types/plan-request';
 import { Player } from '../entities/player';
 import { SessionPlan } from '../entities/session-plan';
-import type { AuthContext } from '../http/auth-context';
 import { badRequest, type FieldError } from '../http/problem';
-import { ClubScope } from './club-scope';
+import type { ClubScope } from './club-scope';
 import * as engine from './engine-port';
 import { storeFeedback, stationOf } from './feedback-service';
 import { feedbackDto, sessionPlanDto } from './plan-dto';
@@ -30,23 +29,22 @@ export interface ProgressionInput {
 
 /** Changes while the session runs: arrivals and leavers, and too easy / too hard on a station. */
 export class PitchSideService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
   /**
    * Re-plans the remaining phases. Adding someone already there or removing someone already gone
    * does nothing, so a replayed offline action changes the plan once.
    */
-  async replan(auth: AuthContext, planId: string, input: ReplanInput): Promise<PlanChangeDto> {
-    return this.dataSource.transaction(async (manager) => {
-      const scope = new ClubScope(manager, auth);
+  async replan(planId: string, input: ReplanInput): Promise<PlanChangeDto> {
+    return this.scope.transaction(async (scope) => {
       const row = await scope.lockedPlan(planId);
       const team = await scope.teamToRun(row.teamId, 'change who is at its session');
       const present = new Set(row.plan.request.players.map((p) => p.id));
       const addIds = (input.add ?? []).map((a) => (typeof a === 'string' ? a : a.id));
       const roster = addIds.length
-        ? await manager
+        ? await scope.manager
             .getRepository(Player)
-            .find({ where: { id: In(addIds), teamId: row.teamId, clubId: auth.clubId } })
+            .find({ where: { id: In(addIds), teamId: row.teamId, clubId: scope.clubId } })
         : [];
       const byId = new Map(roster.map((p) => [p.id, p]));
       const errors: FieldError[] = [];
@@ -68,29 +66,28 @@ export class PitchSideService {
           { field: 'remove', message: $localize`:field error after the field's name:would leave nobody` },
         ]);
       }
-      const rules = await rulesOfPlan(manager, auth.clubId, row.ruleSetId);
+      const rules = await rulesOfPlan(scope.manager, scope.clubId, row.ruleSetId);
       const result = await engine.replan(row.plan, { add, remove, fromMinute: input.fromMinute }, rules);
       Object.assign(row, planColumns(result.plan));
-      const saved = await manager.getRepository(SessionPlan).save(row);
+      const saved = await scope.manager.getRepository(SessionPlan).save(row);
       return { plan: sessionPlanDto(saved, team.name), moves: result.moves };
     });
   }
 
   /** Applies the station's progression step and stores the verdict once per clientId. */
-  async progression(auth: AuthContext, planId: string, input: ProgressionInput): Promise<PlanChangeDto> {
-    return this.dataSource.transaction(async (manager) => {
-      const scope = new ClubScope(manager, auth);
+  async progression(planId: string, input: ProgressionInput): Promise<PlanChangeDto> {
+    return this.scope.transaction(async (scope) => {
       const row = await scope.lockedPlan(planId);
       const team = await scope.teamToRun(row.teamId, 'judge its stations');
       const station = stationOf(row.plan, input.phaseIndex, input.stationId);
-      const { feedback, created } = await storeFeedback(manager, auth, row, station, input);
+      const { feedback, created } = await storeFeedback(scope.manager, scope.auth, row, station, input);
       if (!created || input.verdict === 'right') {
         return { plan: sessionPlanDto(row, team.name), moves: [], feedback: feedbackDto(feedback) };
       }
-      const rules = await rulesOfPlan(manager, auth.clubId, row.ruleSetId);
+      const rules = await rulesOfPlan(scope.manager, scope.clubId, row.ruleSetId);
       const plan = await engine.applyProgression(row.plan, input, rules);
       Object.assign(row, planColumns(plan));
-      const saved = await manager.getRepository(SessionPlan).save(row);
+      const saved = await scope.manager.getRepository(SessionPlan).save(row);
       return { plan: sessionPlanDto(saved, team.name), moves: [], feedback: feedbackDto(feedback) };
     });
   }

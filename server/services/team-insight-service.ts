@@ -1,13 +1,12 @@
 import '../../shared/i18n/localize';
-import { In, type DataSource } from 'typeorm';
+import { In } from 'typeorm';
 import { attendanceFromPlan } from '../../engine';
 import type { AttendanceEntryDto } from '../../shared/types/attendance';
 import type { InsightPlayerDto, InsightSessionDto, TeamInsightDto } from '../../shared/types/plan-api';
 import { Attendance } from '../entities/attendance';
 import { Player } from '../entities/player';
 import { SessionPlan } from '../entities/session-plan';
-import type { AuthContext } from '../http/auth-context';
-import { ClubScope } from './club-scope';
+import type { ClubScope } from './club-scope';
 
 /** How many of the team's latest sessions the insight covers. */
 export const INSIGHT_SESSIONS = 30;
@@ -19,13 +18,13 @@ function estimateNote(): string {
 
 /** Attendance over time and estimated touches per player, from stored plans and attendance. */
 export class TeamInsightService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
-  async insight(auth: AuthContext, teamId: string): Promise<TeamInsightDto> {
-    const manager = this.dataSource.manager;
-    const team = await new ClubScope(manager, auth).teamToRead(teamId);
+  async insight(teamId: string): Promise<TeamInsightDto> {
+    const { manager, clubId } = this.scope;
+    const team = await this.scope.teamToRead(teamId);
     const latest = await manager.getRepository(SessionPlan).find({
-      where: { teamId: team.id, clubId: auth.clubId },
+      where: { teamId: team.id, clubId },
       order: { date: { direction: 'DESC', nulls: 'LAST' }, createdAt: 'DESC' },
       take: INSIGHT_SESSIONS,
     });
@@ -33,7 +32,7 @@ export class TeamInsightService {
     const attendance = plans.length
       ? await manager
           .getRepository(Attendance)
-          .find({ where: { planId: In(plans.map((p) => p.id)), clubId: auth.clubId } })
+          .find({ where: { planId: In(plans.map((p) => p.id)), clubId } })
       : [];
     const cameTo = new Map<string, AttendanceEntryDto[]>();
     for (const a of attendance) {
@@ -44,9 +43,7 @@ export class TeamInsightService {
         ...(a.leftEarlyMinutes !== null ? { leftEarlyMinutes: a.leftEarlyMinutes } : {}),
       });
     }
-    const roster = await manager
-      .getRepository(Player)
-      .find({ where: { teamId: team.id, clubId: auth.clubId } });
+    const roster = await manager.getRepository(Player).find({ where: { teamId: team.id, clubId } });
     // `estimated`: sessions whose plan has a touch estimate for the player (one marked present
     // who was not in the plan has none, and a zero there would read as "less of the ball").
     const totals = new Map<string, { sessions: number; estimated: number; touches: number }>(
