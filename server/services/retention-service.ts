@@ -1,7 +1,4 @@
 import type { DataSource, QueryRunner } from 'typeorm';
-import type { ClubRetentionDto } from '../../shared/types/api';
-import { Club } from '../entities/club';
-import { notFound } from '../http/problem';
 
 /** A season, for retention: 365 days (a football season is shorter, a year is the plain rule). */
 export const DAYS_PER_SEASON = 365;
@@ -34,24 +31,12 @@ const NOTHING: Omit<PurgeResult, 'ran'> = { invitations: 0, plans: 0, attendance
 const CLUB_CUTOFF = `($1::timestamptz - make_interval(days => c."keepSeasons" * ${DAYS_PER_SEASON}))`;
 
 /**
- * Retention: the club's setting (how many seasons plans, attendance and feedback are kept) and
- * the purge that applies it, with the fixed limits for invitations and sent e-mail.
+ * Retention's purge, a job of the system's: removes what is past each club's setting (how many
+ * seasons plans, attendance and feedback are kept; ClubRetentionService) and the fixed limits for
+ * invitations and sent e-mail.
  */
 export class RetentionService {
   constructor(private readonly dataSource: DataSource) {}
-
-  async get(clubId: string): Promise<ClubRetentionDto> {
-    const club = await this.dataSource.getRepository(Club).findOneBy({ id: clubId });
-    if (!club) throw notFound('Club');
-    return { seasons: club.keepSeasons };
-  }
-
-  /** Changes the setting (the body was checked against club-retention-update). */
-  async set(clubId: string, { seasons }: Partial<ClubRetentionDto>): Promise<ClubRetentionDto> {
-    if (seasons !== undefined)
-      await this.dataSource.getRepository(Club).update({ id: clubId }, { keepSeasons: seasons });
-    return this.get(clubId);
-  }
 
   /**
    * Purges everything past its limit, as of `now`, in one transaction that holds the advisory

@@ -1,4 +1,3 @@
-import type { DataSource } from 'typeorm';
 import {
   effectiveUnits,
   type DistanceUnit,
@@ -6,11 +5,9 @@ import {
   type UnitOverride,
   type Units,
 } from '../../shared/units';
-import { Club } from '../entities/club';
-import { notFound } from '../http/problem';
 
 /** The unit columns of a club row and of a person's row. */
-interface ClubUnitColumns {
+export interface ClubUnitColumns {
   distanceUnit: DistanceUnit;
   temperatureUnit: TemperatureUnit;
 }
@@ -33,24 +30,4 @@ export function unitsOf(club: ClubUnitColumns, own: OwnUnitColumns | null) {
     { distance: club.distanceUnit, temperature: club.temperatureUnit },
     { distance: own?.distanceUnit ?? null, temperature: own?.temperatureUnit ?? null },
   );
-}
-
-/** The club's unit setting: everyone reads it; the head of coaching changes it (the route says who). */
-export class ClubUnitsService {
-  constructor(private readonly dataSource: DataSource) {}
-
-  async get(clubId: string): Promise<Units> {
-    const club = await this.dataSource.getRepository(Club).findOneBy({ id: clubId });
-    if (!club) throw notFound('Club');
-    return { distance: club.distanceUnit, temperature: club.temperatureUnit };
-  }
-
-  /** Sets one or both; what is not given stays. Answers the whole setting. */
-  async set(clubId: string, input: Partial<Units>): Promise<Units> {
-    const change: Partial<ClubUnitColumns> = {};
-    if (input.distance) change.distanceUnit = input.distance;
-    if (input.temperature) change.temperatureUnit = input.temperature;
-    if (Object.keys(change).length) await this.dataSource.getRepository(Club).update({ id: clubId }, change);
-    return this.get(clubId);
-  }
 }
