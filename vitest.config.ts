@@ -38,6 +38,19 @@ export default defineConfig({
       },
       {
         test: {
+          // Faults on purpose: a database restarted, an instance killed behind nginx, an answer
+          // lost on the wire. Each spec starts the clusters, instances and proxies it breaks.
+          name: 'faults',
+          environment: 'node',
+          setupFiles: ['@angular/localize/init'],
+          include: ['tests/faults/**/*.spec.ts'],
+          testTimeout: 180_000,
+          hookTimeout: 180_000,
+          fileParallelism: false,
+        },
+      },
+      {
+        test: {
           name: 'e2e',
           environment: 'node',
           include: ['tests/e2e/**/*.spec.ts'],

@@ -1,6 +1,6 @@
 /**
  * `npm test`: every suite in one go — lint, types, engine, client components, API on a throwaway
- * PostgreSQL, end-to-end in headless Chromium. Runs them all, then prints one summary and exits
+ * PostgreSQL, faults (restarts, kills, lost answers), end-to-end in headless Chromium. Runs them all, then prints one summary and exits
  * non-zero when anything failed.
  */
 import { spawnSync } from 'node:child_process';
@@ -54,6 +54,7 @@ const steps: Step[] = [
   { name: 'client', report: join(results, 'client.json'), command: ['npx', 'ng', 'test', '--watch=false'] },
   { name: 'build client', command: ['npm', 'run', '-s', 'build'] },
   vitestStep('api'),
+  vitestStep('faults'),
   vitestStep('e2e'),
 ];
 
@@ -94,7 +95,7 @@ function run(step: Step): Outcome {
 }
 
 try {
-  ensureSystemPackages(['postgresql', 'chromium', 'pdftotext']);
+  ensureSystemPackages(['postgresql', 'chromium', 'pdftotext', 'nginx']);
 } catch (error) {
   console.error((error as Error).message);
   process.exit(1);

@@ -6,6 +6,7 @@ const NEEDS = {
   postgresql: { package: 'postgresql', present: () => findPgBinDir() !== null },
   chromium: { package: 'chromium', present: () => existsSync('/usr/bin/chromium') },
   pdftotext: { package: 'poppler-utils', present: () => existsSync('/usr/bin/pdftotext') },
+  nginx: { package: 'nginx', present: () => existsSync('/usr/sbin/nginx') },
 } as const;
 
 export type SystemNeed = keyof typeof NEEDS;

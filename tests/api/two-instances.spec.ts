@@ -3,72 +3,17 @@
  * no shared memory. What one writes the other reads, a token from one is good at the other,
  * and each queued e-mail is delivered exactly once although both run an outbox sender.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
-import { PROJECT_ROOT } from '../../server/config';
-import { freePort } from '../../server/db/free-port';
 import { startFakeSmtp, type FakeSmtp } from '../../server/mail/fake-smtp';
-import { ApiClient } from '../support/api-client';
+import { startInstance, stopInstance, type ApiInstance } from '../support/api-instance';
 import { TEST_PASSWORD, uniqueEmail } from '../support/api-test-app';
-
-async function startInstance(env: Record<string, string>): Promise<{ api: ApiClient; child: ChildProcess }> {
-  const port = await freePort();
-  const child = spawn('npx', ['tsx', '--tsconfig', 'tsconfig.server.json', 'server/main.ts'], {
-    cwd: PROJECT_ROOT,
-    env: { ...process.env, ...env, PORT: String(port), LOG_LEVEL: 'silent' },
-    stdio: ['ignore', 'pipe', 'pipe'],
-    // Its own process group: npx does not pass SIGTERM on to the server it starts, and a
-    // server left running would keep taking later specs' e-mail from the shared outbox.
-    detached: true,
-  });
-  let output = '';
-  child.stdout!.on('data', (chunk) => (output += chunk));
-  child.stderr!.on('data', (chunk) => (output += chunk));
-  const api = new ApiClient(`http://127.0.0.1:${port}`);
-  // tsx compiles on start; on a busy machine that can take a while.
-  const deadline = Date.now() + 90_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`instance exited: ${output}`);
-    const ok = await api.get('/api/health').then(
-      (r) => r.status === 200,
-      () => false,
-    );
-    if (ok) return { api, child };
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
-  process.kill(-child.pid!, 'SIGTERM');
-  throw new Error(`instance did not come up: ${output}`);
-}
-
-/** Stops the whole process group (npx, tsx and the server) and waits until it has gone. */
-async function stopInstance(child: ChildProcess): Promise<void> {
-  try {
-    process.kill(-child.pid!, 'SIGTERM');
-  } catch {
-    return; // the group has already gone
-  }
-  for (let waited = 0; waited < 10_000; waited += 100) {
-    if (!groupAlive(child.pid!)) return;
-    await new Promise((resolve) => setTimeout(resolve, 100));
-  }
-  process.kill(-child.pid!, 'SIGKILL');
-}
-
-function groupAlive(pgid: number): boolean {
-  try {
-    process.kill(-pgid, 0);
-    return true;
-  } catch {
-    return false;
-  }
-}
 
 describe('two instances on one database', () => {
   let smtp: FakeSmtp;
-  let a: { api: ApiClient; child: ChildProcess };
-  let b: { api: ApiClient; child: ChildProcess };
+  let a: ApiInstance;
+  let b: ApiInstance;
 
   beforeAll(async () => {
     smtp = await startFakeSmtp();
