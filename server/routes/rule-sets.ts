@@ -30,10 +30,6 @@ export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
   router.get('/rule-sets/reach', requireAuth, lead, async (req, res) => {
     res.json(await ruleSets.reach(authOf(req)));
   });
-  router.get('/rule-sets/diff', requireAuth, validate({ query: 'rule-set-diff-query' }), async (req, res) => {
-    const { from, to } = req.query as { from: string; to: string };
-    res.json(await ruleSets.diff(authOf(req), from, to));
-  });
   router.post('/rule-sets', requireAuth, lead, validate({ body: 'rule-set-create' }), async (req, res) => {
     const dto = await ruleSets.createDraft(authOf(req), req.body);
     res.status(201).location(`/api/rule-sets/${dto.id}`).setHeader('ETag', `"${dto.revision}"`).json(dto);

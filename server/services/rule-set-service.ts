@@ -5,10 +5,8 @@ import type { RuleSetDto } from '../../shared/types/api';
 import type { RuleSetDocument } from '../../shared/types/plan-rules';
 import type {
   RuleSetChangeDto,
-  RuleSetDiffDto,
   RuleSetDiffEntry,
   RuleSetReachDto,
-  RuleSetRef,
   RuleSetSummaryDto,
 } from '../../shared/types/rule-set-api';
 import { RuleSet } from '../entities/rule-set';
@@ -20,7 +18,7 @@ import { badRequest, conflict } from '../http/problem';
 import { formerMember } from './account-erasure';
 import { ClubScope } from './club-scope';
 import { changeInReaderWords, inReaderWords, inSourceWords } from '../i18n/rule-set-words';
-import { defaultRules, jsonDiff, ruleSetChanges, ruleSetErrors } from './engine-port';
+import { defaultRules, jsonDiff, ruleSetErrors } from './engine-port';
 import { documentOf } from './rules-resolver';
 
 /** 'default' (the engine's), 'published' (the club's current), or a rule set's id. */
@@ -28,6 +26,14 @@ export type RuleSetRefInput = string;
 
 export const DEFAULT_RULE_SET_ID = 'default';
 const MAX_CHANGED_PATHS = 200;
+
+/** Which rule set a document is: a version of the club's, or the built-in default. */
+interface RuleSetRef {
+  id: string;
+  name: string;
+  version: number;
+  status: string;
+}
 
 /** A rule-set document with where it came from. */
 interface Resolved {
@@ -226,12 +232,6 @@ export class RuleSetService {
       publishedAt: row?.publishedAt ? row.publishedAt.toISOString() : null,
       builtIn: !row,
     };
-  }
-
-  async diff(auth: AuthContext, from: RuleSetRefInput, to: RuleSetRefInput): Promise<RuleSetDiffDto> {
-    const manager = this.dataSource.manager;
-    const [a, b] = [await this.resolve(manager, auth, from), await this.resolve(manager, auth, to)];
-    return { from: a.ref, to: b.ref, changes: ruleSetChanges(a.body, b.body).map(changeInReaderWords) };
   }
 
   /** Resolves 'default', 'published' or an id of the caller's club (404 otherwise). */
