@@ -1,6 +1,5 @@
 import '../../shared/i18n/localize';
 import { Router, type Request } from 'express';
-import { authOf } from '../http/auth-context';
 import { ifMatchNumber } from '../http/detailed-problem';
 import { badRequest } from '../http/problem';
 import { idempotency } from '../middleware/idempotency';
@@ -11,6 +10,7 @@ import type { Paper } from '../pdf';
 import { PlanCardService } from '../services/plan-card-service';
 import { PlanService, type ListPlansQuery } from '../services/plan-service';
 import type { ApiDeps } from './api-deps';
+import { scopeOf } from './scoped';
 
 /** The If-Match version, or 400 when the header is not a number. */
 export function ifMatchOf(req: Request): number | null {
@@ -25,14 +25,14 @@ export function ifMatchOf(req: Request): number | null {
 /** /plans: generate, list, read, edit, print and share session plans. */
 export function plansRouter({ dataSource, config, requireAuth, mail }: ApiDeps): Router {
   const router = Router();
-  const plans = new PlanService(dataSource);
-  const cards = new PlanCardService(dataSource, mail, config);
+  const plans = (req: Request) => new PlanService(scopeOf(req, dataSource));
+  const cards = (req: Request) => new PlanCardService(scopeOf(req, dataSource), mail, config);
   const id = validate({ params: 'id-param' });
   const planners = requireRole('lead', 'coach');
   const once = idempotency(dataSource);
 
   router.post('/plans', requireAuth, planners, validate({ body: 'plan-create' }), once, async (req, res) => {
-    const created = await plans.create(authOf(req), req.body);
+    const created = await plans(req).create(req.body);
     // The version as ETag, as GET /plans/:id answers, and no hash of the 22 kB body.
     res
       .status(201)
@@ -42,10 +42,10 @@ export function plansRouter({ dataSource, config, requireAuth, mail }: ApiDeps):
       .send(created.json);
   });
   router.get('/plans', requireAuth, validate({ query: 'plan-list-query' }), async (req, res) => {
-    res.json(await plans.list(authOf(req), req.query as unknown as ListPlansQuery));
+    res.json(await plans(req).list(req.query as unknown as ListPlansQuery));
   });
   router.get('/plans/:id', requireAuth, id, async (req, res) => {
-    const dto = await plans.get(authOf(req), req.params['id'] as string);
+    const dto = await plans(req).get(req.params['id'] as string);
     res.setHeader('ETag', `"${dto.version}"`).json(dto);
   });
   router.patch(
@@ -55,17 +55,17 @@ export function plansRouter({ dataSource, config, requireAuth, mail }: ApiDeps):
     id,
     validate({ body: 'plan-update' }),
     async (req, res) => {
-      const dto = await plans.update(authOf(req), req.params['id'] as string, req.body, ifMatchOf(req));
+      const dto = await plans(req).update(req.params['id'] as string, req.body, ifMatchOf(req));
       res.setHeader('ETag', `"${dto.version}"`).json(dto);
     },
   );
   router.delete('/plans/:id', requireAuth, planners, id, async (req, res) => {
-    await plans.remove(authOf(req), req.params['id'] as string);
+    await plans(req).remove(req.params['id'] as string);
     res.status(204).end();
   });
   router.get('/plans/:id/pdf', requireAuth, id, validate({ query: 'plan-pdf-query' }), async (req, res) => {
     const paper = (req.query as { paper: Paper }).paper;
-    const { pdf, filename } = await cards.pdf(authOf(req), req.params['id'] as string, paper);
+    const { pdf, filename } = await cards(req).pdf(req.params['id'] as string, paper);
     res.type('application/pdf').setHeader('Content-Disposition', `inline; filename="${filename}"`).send(pdf);
   });
   router.post(
@@ -77,7 +77,7 @@ export function plansRouter({ dataSource, config, requireAuth, mail }: ApiDeps):
     validate({ body: 'plan-share' }),
     once,
     async (req, res) => {
-      res.status(202).json(await cards.share(authOf(req), req.params['id'] as string, req.body));
+      res.status(202).json(await cards(req).share(req.params['id'] as string, req.body));
     },
   );
   return router;

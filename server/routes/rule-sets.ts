@@ -1,41 +1,37 @@
 import '../../shared/i18n/localize';
 import { Router } from 'express';
-import { authOf } from '../http/auth-context';
 import { HttpError } from '../http/problem';
 import { requireRole } from '../middleware/require-role';
 import { validate } from '../middleware/validate';
 import { RuleSetService } from '../services/rule-set-service';
 import type { ApiDeps } from './api-deps';
 import { ifMatchOf } from './plans';
+import { scopeOf } from './scoped';
 
 /** /rule-sets: the club's rules. Every member reads; the lead drafts, publishes and rolls back. */
 export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
   const router = Router();
-  const ruleSets = new RuleSetService(dataSource);
+  const ruleSets = (req: Parameters<typeof scopeOf>[0]) => new RuleSetService(scopeOf(req, dataSource));
   const lead = requireRole('lead');
   const id = validate({ params: 'rule-set-param' });
   const draftId = validate({ params: 'id-param' });
 
   router.get('/rule-sets', requireAuth, async (req, res) => {
-    res.json(await ruleSets.list(authOf(req)));
+    res.json(await ruleSets(req).list());
   });
   router.get(
     '/rule-sets/history',
     requireAuth,
     validate({ query: 'rule-set-history-query' }),
     async (req, res) => {
-      res.json(await ruleSets.history(authOf(req), (req.query as { ruleSetId?: string }).ruleSetId));
+      res.json(await ruleSets(req).history((req.query as { ruleSetId?: string }).ruleSetId));
     },
   );
   router.get('/rule-sets/reach', requireAuth, lead, async (req, res) => {
-    res.json(await ruleSets.reach(authOf(req)));
-  });
-  router.get('/rule-sets/diff', requireAuth, validate({ query: 'rule-set-diff-query' }), async (req, res) => {
-    const { from, to } = req.query as { from: string; to: string };
-    res.json(await ruleSets.diff(authOf(req), from, to));
+    res.json(await ruleSets(req).reach());
   });
   router.post('/rule-sets', requireAuth, lead, validate({ body: 'rule-set-create' }), async (req, res) => {
-    const dto = await ruleSets.createDraft(authOf(req), req.body);
+    const dto = await ruleSets(req).createDraft(req.body);
     res.status(201).location(`/api/rule-sets/${dto.id}`).setHeader('ETag', `"${dto.revision}"`).json(dto);
   });
   router.post(
@@ -44,15 +40,15 @@ export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
     lead,
     validate({ body: 'rule-set-rollback' }),
     async (req, res) => {
-      res.status(201).json(await ruleSets.rollback(authOf(req), req.body.to));
+      res.status(201).json(await ruleSets(req).rollback(req.body.to));
     },
   );
   router.get('/rule-sets/:id', requireAuth, id, async (req, res) => {
-    const dto = await ruleSets.get(authOf(req), req.params['id'] as string);
+    const dto = await ruleSets(req).get(req.params['id'] as string);
     res.setHeader('ETag', `"${dto.revision}"`).json(dto);
   });
   router.get('/rule-sets/:id/summary', requireAuth, id, async (req, res) => {
-    res.json(await ruleSets.summary(authOf(req), req.params['id'] as string));
+    res.json(await ruleSets(req).summary(req.params['id'] as string));
   });
   router.put(
     '/rule-sets/:id',
@@ -71,12 +67,12 @@ export function ruleSetsRouter({ dataSource, requireAuth }: ApiDeps): Router {
           '/problems/precondition-required',
         );
       }
-      const dto = await ruleSets.update(authOf(req), req.params['id'] as string, req.body, revision);
+      const dto = await ruleSets(req).update(req.params['id'] as string, req.body, revision);
       res.setHeader('ETag', `"${dto.revision}"`).json(dto);
     },
   );
   router.post('/rule-sets/:id/publish', requireAuth, lead, draftId, async (req, res) => {
-    res.json(await ruleSets.publish(authOf(req), req.params['id'] as string, ifMatchOf(req)));
+    res.json(await ruleSets(req).publish(req.params['id'] as string, ifMatchOf(req)));
   });
   return router;
 }

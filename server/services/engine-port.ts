@@ -21,8 +21,8 @@ import { badRequest, type FieldError } from '../http/problem';
  * so services never leak an engine exception as a 500.
  */
 
-/** Differences between two JSON documents / two versions of a rule set, as JSON pointers. */
-export { jsonDiff, ruleSetChanges } from '../../engine';
+/** Differences between two JSON documents, as JSON pointers. */
+export { jsonDiff } from '../../engine';
 
 /** The engine's built-in rule set (used when a club has published none). Treat as read-only. */
 export function defaultRules(): RuleSetDocument {

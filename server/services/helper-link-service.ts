@@ -7,10 +7,9 @@ import type { AppConfig } from '../config';
 import { HelperLink } from '../entities/helper-link';
 import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
-import type { AuthContext } from '../http/auth-context';
 import { conflict, forbidden, HttpError, notFound } from '../http/problem';
 import { formerMember } from './account-erasure';
-import { ClubScope } from './club-scope';
+import type { ClubScope } from './club-scope';
 import { firstNames } from './first-names';
 import { clubTimeZone } from './schedule-service';
 import { expiryInWords, helperLinkExpiry } from './session-day';
@@ -45,21 +44,30 @@ const linkEnded = (detail: string) =>
     '/problems/helper-link-ended',
   );
 
+/** "the end of Wednesday 9 December", in the given locale and the club's time zone. */
+async function linkEndInWords(
+  manager: EntityManager,
+  expiresAt: Date,
+  clubId: string,
+  locale: string,
+): Promise<string> {
+  return expiryInWords(expiresAt, locale, await clubTimeZone(manager, clubId));
+}
+
 /**
  * Helper links: the team's staff (its coaches and assistants) or the lead make one for a plan,
- * list the live ones and stop them; anyone holding a live link reads the plan as a helper needs it.
+ * list the live ones and stop them. Reading a plan through a link is HelperViewService's.
  */
 export class HelperLinkService {
   constructor(
-    private readonly dataSource: DataSource,
+    private readonly scope: ClubScope,
     private readonly config: AppConfig,
   ) {}
 
   /** A plan of the caller's club whose team the caller staffs (or any, for the lead); else 404 / 403. */
-  private async planForStaff(auth: AuthContext, planId: string): Promise<SessionPlan> {
-    const scope = new ClubScope(this.dataSource.manager, auth);
-    const plan = await scope.plan(planId);
-    if (auth.role !== 'lead' && !(await scope.isAttached(plan.teamId))) {
+  private async planForStaff(planId: string): Promise<SessionPlan> {
+    const plan = await this.scope.plan(planId);
+    if (this.scope.auth.role !== 'lead' && !(await this.scope.isAttached(plan.teamId))) {
       throw forbidden(
         $localize`Only the team’s coaches and assistants and the head of coaching can share helper links.`,
       );
@@ -67,34 +75,30 @@ export class HelperLinkService {
     return plan;
   }
 
-  async create(auth: AuthContext, planId: string): Promise<CreatedHelperLinkDto> {
-    const plan = await this.planForStaff(auth, planId);
-    const { link, url } = await this.issue(this.dataSource.manager, plan, auth.userId, 0);
-    return { ...toDto(link, auth.name), url };
+  async create(planId: string): Promise<CreatedHelperLinkDto> {
+    const plan = await this.planForStaff(planId);
+    const { link, url } = await this.issue(plan, 0);
+    return { ...toDto(link, this.scope.auth.name), url };
   }
 
   /** When a link made now for the plan would stop working; null when that is already past. */
   async expiryFor(plan: SessionPlan, now = new Date()): Promise<Date | null> {
-    const zone = await clubTimeZone(this.dataSource.manager, plan.clubId);
+    const zone = await clubTimeZone(this.scope.manager, plan.clubId);
     const expiresAt = helperLinkExpiry(plan.date, now, zone);
     return expiresAt > now ? expiresAt : null;
   }
 
-  /** "the end of Wednesday 9 December", in the given locale (the club's by default) and the club's time zone. */
-  async expiryWords(expiresAt: Date, clubId: string, locale = this.config.locale): Promise<string> {
-    return expiryInWords(expiresAt, locale, await clubTimeZone(this.dataSource.manager, clubId));
+  /** "the end of Wednesday 9 December", in the given locale and the club's time zone. */
+  expiryWords(expiresAt: Date, locale: string): Promise<string> {
+    return linkEndInWords(this.scope.manager, expiresAt, this.scope.clubId, locale);
   }
 
   /**
-   * Stores a new link for a plan whose permission the caller has checked, inside the caller's
-   * transaction. 409 when the session was more than a day ago (the link would be dead at once).
+   * Stores a new link, made by the caller, for a plan whose permission the caller has checked (in
+   * the scope's transaction, if it has one). 409 when the session was more than a day ago (the
+   * link would be dead at once).
    */
-  async issue(
-    manager: EntityManager,
-    plan: SessionPlan,
-    userId: string,
-    emailedTo: number,
-  ): Promise<{ link: HelperLink; url: string }> {
+  async issue(plan: SessionPlan, emailedTo: number): Promise<{ link: HelperLink; url: string }> {
     const expiresAt = await this.expiryFor(plan);
     if (!expiresAt) {
       throw conflict(
@@ -102,12 +106,13 @@ export class HelperLinkService {
       );
     }
     const token = newLinkToken();
-    const link = await manager.getRepository(HelperLink).save(
-      manager.getRepository(HelperLink).create({
+    const repo = this.scope.manager.getRepository(HelperLink);
+    const link = await repo.save(
+      repo.create({
         planId: plan.id,
         clubId: plan.clubId,
         tokenHash: hashLinkToken(token),
-        createdBy: userId,
+        createdBy: this.scope.auth.userId,
         emailedTo,
         expiresAt,
         revokedAt: null,
@@ -117,9 +122,9 @@ export class HelperLinkService {
   }
 
   /** The plan's links that still work, newest first. */
-  async list(auth: AuthContext, planId: string): Promise<HelperLinkDto[]> {
-    const plan = await this.planForStaff(auth, planId);
-    const rows: (HelperLink & { createdByName: string | null })[] = await this.dataSource.query(
+  async list(planId: string): Promise<HelperLinkDto[]> {
+    const plan = await this.planForStaff(planId);
+    const rows: (HelperLink & { createdByName: string | null })[] = await this.scope.manager.query(
       `SELECT link.*, maker.name AS "createdByName"
          FROM helper_link link LEFT JOIN app_user maker ON maker.id = link."createdBy"
         WHERE link."planId" = $1 AND link."clubId" = $2 AND link."revokedAt" IS NULL AND link."expiresAt" > now()
@@ -130,22 +135,27 @@ export class HelperLinkService {
   }
 
   /** Stops a link at once; stopping it twice is harmless. */
-  async revoke(auth: AuthContext, planId: string, linkId: string): Promise<void> {
-    const plan = await this.planForStaff(auth, planId);
+  async revoke(planId: string, linkId: string): Promise<void> {
+    const plan = await this.planForStaff(planId);
     if (!isUuid(linkId)) throw notFound('helper link');
-    const result = await this.dataSource
-      .getRepository(HelperLink)
-      .update(
-        { id: linkId, planId: plan.id, clubId: plan.clubId, revokedAt: IsNull() },
-        { revokedAt: new Date() },
-      );
+    const repo = this.scope.manager.getRepository(HelperLink);
+    const result = await repo.update(
+      { id: linkId, planId: plan.id, clubId: plan.clubId, revokedAt: IsNull() },
+      { revokedAt: new Date() },
+    );
     if (!result.affected) {
-      const exists = await this.dataSource
-        .getRepository(HelperLink)
-        .exists({ where: { id: linkId, planId: plan.id, clubId: plan.clubId } });
+      const exists = await repo.exists({ where: { id: linkId, planId: plan.id, clubId: plan.clubId } });
       if (!exists) throw notFound('helper link');
     }
   }
+}
+
+/** Anyone holding a live helper link, signed in or not, reads the plan as a helper needs it. */
+export class HelperViewService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly config: AppConfig,
+  ) {}
 
   /** The plan behind a live link, reduced to what a helper needs; 404 unknown, 410 ended. */
   async view(token: string | undefined): Promise<HelperViewDto> {
@@ -160,7 +170,12 @@ export class HelperLinkService {
       );
     }
     if (link.expiresAt <= new Date()) {
-      const when = await this.expiryWords(link.expiresAt, link.clubId);
+      const when = await linkEndInWords(
+        this.dataSource.manager,
+        link.expiresAt,
+        link.clubId,
+        this.config.locale,
+      );
       throw linkEnded(
         $localize`This link stopped working at ${when}:when:. Ask the coach for a new one if you need it.`,
       );

@@ -1,14 +1,12 @@
 import '../../shared/i18n/localize';
-import type { DataSource } from 'typeorm';
 import type { ShareResultDto } from '../../shared/types/plan-api';
 import type { AppConfig } from '../config';
-import type { AuthContext } from '../http/auth-context';
 import { planLength, sessionClock } from '../../shared/time/session-clock';
 import type { Paper } from '../pdf';
 import type { SessionPlan } from '../entities/session-plan';
 import type { Team } from '../entities/team';
 import { refuseOverDailyLimit } from './daily-mail-limit';
-import { ClubScope } from './club-scope';
+import type { ClubScope } from './club-scope';
 import { rulesInWords } from '../../shared/types/rule-words';
 import { HelperLinkService } from './helper-link-service';
 import type { MailQueue } from './mail-queue';
@@ -25,22 +23,18 @@ export interface SharePlanInput {
 
 /** The printed card of a stored plan: download it, or e-mail it through the outbox. */
 export class PlanCardService {
-  private readonly helperLinks: HelperLinkService;
-
   constructor(
-    private readonly dataSource: DataSource,
+    private readonly scope: ClubScope,
     private readonly mail: MailQueue,
     private readonly config: AppConfig,
-  ) {
-    this.helperLinks = new HelperLinkService(dataSource, config);
-  }
+  ) {}
 
-  async pdf(auth: AuthContext, planId: string, paper: Paper): Promise<{ pdf: Buffer; filename: string }> {
-    const scope = new ClubScope(this.dataSource.manager, auth);
-    const row = await scope.plan(planId);
-    const team = await scope.teamToRead(row.teamId);
-    const locale = await localeOf(this.dataSource.manager, auth.userId, this.config.locale);
-    const rules = await this.rulesWords(auth, row, locale);
+  async pdf(planId: string, paper: Paper): Promise<{ pdf: Buffer; filename: string }> {
+    const { manager, auth } = this.scope;
+    const row = await this.scope.plan(planId);
+    const team = await this.scope.teamToRead(row.teamId);
+    const locale = await localeOf(manager, auth.userId, this.config.locale);
+    const rules = await this.rulesWords(row, locale);
     return {
       pdf: await render(row, team, paper, locale, auth.units, rules),
       filename: cardFilename(row, team),
@@ -53,13 +47,13 @@ export class PlanCardService {
    * stays the club's sending address (mail from the coach's own domain sent by this server would
    * fail that domain's SPF/DKIM checks and be junked or refused); Reply-To is the coach.
    */
-  async share(auth: AuthContext, planId: string, input: SharePlanInput): Promise<ShareResultDto> {
-    const scope = new ClubScope(this.dataSource.manager, auth);
-    const row = await scope.plan(planId);
-    const team = await scope.teamToManage(row.teamId);
+  async share(planId: string, input: SharePlanInput): Promise<ShareResultDto> {
+    const { manager, auth } = this.scope;
+    const row = await this.scope.plan(planId);
+    const team = await this.scope.teamToManage(row.teamId);
     // The card and the e-mail read in the sender's locale (their browser's), else the club's.
-    const locale = await localeOf(this.dataSource.manager, auth.userId, this.config.locale);
-    const rules = await this.rulesWords(auth, row, locale);
+    const locale = await localeOf(manager, auth.userId, this.config.locale);
+    const rules = await this.rulesWords(row, locale);
     const pdf = await render(row, team, input.paper ?? 'a4', locale, auth.units, rules);
     const when = sessionInWords(row.date, row.kickOff, locale);
     const subject = shareSubject(row, team, when);
@@ -68,26 +62,27 @@ export class PlanCardService {
       contentType: 'application/pdf',
       contentBase64: pdf.toString('base64'),
     };
-    const expiresAt = await this.helperLinks.expiryFor(row);
-    const messageIds = await this.dataSource.transaction(async (manager) => {
+    const expiresAt = await new HelperLinkService(this.scope, this.config).expiryFor(row);
+    const messageIds = await this.scope.transaction(async (scope) => {
       await refuseOverDailyLimit(
-        manager,
+        scope.manager,
         auth.clubId,
         'plan-share',
         input.recipients.length,
         this.config.dailyMailLimits.shares,
       );
+      const helperLinks = new HelperLinkService(scope, this.config);
       const helper = expiresAt
         ? {
-            url: (await this.helperLinks.issue(manager, row, auth.userId, input.recipients.length)).url,
-            until: await this.helperLinks.expiryWords(expiresAt, row.clubId, locale),
+            url: (await helperLinks.issue(row, input.recipients.length)).url,
+            until: await helperLinks.expiryWords(expiresAt, locale),
           }
         : null;
       const text = shareText(row, team, auth.name, when, helper, locale, input.message);
       const ids: string[] = [];
       for (const recipient of input.recipients) {
         ids.push(
-          await this.mail.enqueue(manager, {
+          await this.mail.enqueue(scope.manager, {
             clubId: auth.clubId,
             kind: 'plan-share',
             recipients: [recipient],
@@ -104,8 +99,8 @@ export class PlanCardService {
   }
 
   /** "Club rules: Fernmoor rules, published 3 Dec" for the card's footer ("Club rules" if they are gone). */
-  private async rulesWords(auth: AuthContext, row: SessionPlan, locale: string): Promise<string> {
-    const summary = await new RuleSetService(this.dataSource).summary(auth, row.ruleSetId).catch(() => null);
+  private async rulesWords(row: SessionPlan, locale: string): Promise<string> {
+    const summary = await new RuleSetService(this.scope).summary(row.ruleSetId).catch(() => null);
     return rulesInWords(summary, locale);
   }
 }

@@ -1,5 +1,5 @@
 import '../../shared/i18n/localize';
-import type { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import type { Page, PlanSummaryDto, SessionPlanDto } from '../../shared/types/api';
 import type { Plan } from '../../shared/types/plan';
 import type { PlanEdit } from '../../shared/types/plan-edit';
@@ -9,10 +9,9 @@ import { preparedQuery } from '../db/prepared-query';
 import { Player } from '../entities/player';
 import { SessionPlan } from '../entities/session-plan';
 import { Team } from '../entities/team';
-import type { AuthContext } from '../http/auth-context';
 import { DetailedProblem } from '../http/detailed-problem';
 import { badRequest, type FieldError } from '../http/problem';
-import { ClubScope } from './club-scope';
+import type { ClubScope } from './club-scope';
 import * as engine from './engine-port';
 import { planSummaryDto, sessionPlanDto, sessionPlanJson, type PlanTexts } from './plan-dto';
 import { checkPlanShape } from './plan-shape';
@@ -58,16 +57,15 @@ export const RECENT_FEEDBACK_LIMIT = 12;
 
 /** Plans: generate with the club's rules, list, read, edit with engine re-checks. */
 export class PlanService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
   /** A new draft, answered as JSON text (see sessionPlanJson) with its id and version for headers. */
-  async create(auth: AuthContext, input: CreatePlanInput): Promise<CreatedPlan> {
-    const manager = this.dataSource.manager;
-    const scope = new ClubScope(manager, auth);
+  async create(input: CreatePlanInput): Promise<CreatedPlan> {
+    const { manager, auth } = this.scope;
     const requestErrors = engine.planRequestErrors(input.request);
     if (requestErrors.length) throw badRequest($localize`The plan request is not valid.`, requestErrors);
     // Team, access, roster, feedback, recent activities, pins and rules in one round trip.
-    const inputs = await loadPlanInputs(manager, scope, input.teamId, RECENT_FEEDBACK_LIMIT);
+    const inputs = await loadPlanInputs(manager, this.scope, input.teamId, RECENT_FEEDBACK_LIMIT);
     const { team, roster, rules } = inputs;
     if (input.scheduledSessionId)
       await assertSessionOfTeam(manager, auth.clubId, team.id, input.scheduledSessionId);
@@ -91,9 +89,8 @@ export class PlanService {
     return { id: row.id, version: row.version, json: sessionPlanJson(row, team.name, texts) };
   }
 
-  async list(auth: AuthContext, query: ListPlansQuery): Promise<Page<PlanSummaryDto>> {
-    const manager = this.dataSource.manager;
-    const scope = new ClubScope(manager, auth);
+  async list(query: ListPlansQuery): Promise<Page<PlanSummaryDto>> {
+    const { manager, auth } = this.scope;
     const qb = manager
       .getRepository(SessionPlan)
       .createQueryBuilder('p')
@@ -101,7 +98,7 @@ export class PlanService {
       .addSelect('t.name', 'team_name')
       .where('p."clubId" = :clubId', { clubId: auth.clubId });
     if (query.teamId) {
-      await scope.teamToRead(query.teamId);
+      await this.scope.teamToRead(query.teamId);
       qb.andWhere('p."teamId" = :teamId', { teamId: query.teamId });
     } else if (auth.role === 'assistant') {
       qb.andWhere('p."teamId" IN (SELECT tc."teamId" FROM team_coach tc WHERE tc."userId" = :userId)', {
@@ -126,22 +123,15 @@ export class PlanService {
     };
   }
 
-  async get(auth: AuthContext, id: string): Promise<SessionPlanDto> {
-    const scope = new ClubScope(this.dataSource.manager, auth);
-    const row = await scope.plan(id);
-    const team = await scope.teamToRead(row.teamId);
+  async get(id: string): Promise<SessionPlanDto> {
+    const row = await this.scope.plan(id);
+    const team = await this.scope.teamToRead(row.teamId);
     return sessionPlanDto(row, team.name);
   }
 
   /** One edit, several edits or a whole edited plan; every result is re-checked against the plan's rules. */
-  async update(
-    auth: AuthContext,
-    id: string,
-    input: UpdatePlanInput,
-    ifMatch: number | null,
-  ): Promise<SessionPlanDto> {
-    return this.dataSource.transaction(async (manager) => {
-      const scope = new ClubScope(manager, auth);
+  async update(id: string, input: UpdatePlanInput, ifMatch: number | null): Promise<SessionPlanDto> {
+    return this.scope.transaction(async (scope) => {
       const row = await scope.lockedPlan(id);
       const team = await scope.teamToManage(row.teamId);
       if (ifMatch !== null && ifMatch !== row.version) {
@@ -155,7 +145,7 @@ export class PlanService {
           '/problems/conflict',
         );
       }
-      const rules = await rulesOfPlan(manager, auth.clubId, row.ruleSetId);
+      const rules = await rulesOfPlan(scope.manager, scope.clubId, row.ruleSetId);
       const edits = input.edits ?? (input.edit ? [input.edit] : []);
       let plan = row.plan;
       if (input.plan) plan = await this.replaceWhole(row, input.plan, rules);
@@ -168,7 +158,7 @@ export class PlanService {
       if (input.status) row.status = input.status;
       if (input.date !== undefined) row.date = input.date;
       if (input.kickOff !== undefined) row.kickOff = input.kickOff;
-      const saved = await manager.getRepository(SessionPlan).save(row);
+      const saved = await scope.manager.getRepository(SessionPlan).save(row);
       return sessionPlanDto(saved, team.name);
     });
   }
@@ -177,11 +167,10 @@ export class PlanService {
    * Deletes a plan for the lead or a coach of its team (404 outside the club, 403 otherwise). Its
    * attendance and station feedback go with it (ON DELETE CASCADE on both tables).
    */
-  async remove(auth: AuthContext, id: string): Promise<void> {
-    const scope = new ClubScope(this.dataSource.manager, auth);
-    const row = await scope.plan(id);
-    await scope.teamToManage(row.teamId);
-    await this.dataSource.manager.getRepository(SessionPlan).delete({ id: row.id, clubId: auth.clubId });
+  async remove(id: string): Promise<void> {
+    const row = await this.scope.plan(id);
+    await this.scope.teamToManage(row.teamId);
+    await this.scope.manager.getRepository(SessionPlan).delete({ id: row.id, clubId: this.scope.clubId });
   }
 
   /** A whole plan from the client: it keeps the stored request, rules and seed, and must pass the engine's check. */

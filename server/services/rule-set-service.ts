@@ -1,26 +1,23 @@
 import '../../shared/i18n/localize';
 import { randomUUID } from 'node:crypto';
-import type { DataSource, EntityManager } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import type { RuleSetDto } from '../../shared/types/api';
 import type { RuleSetDocument } from '../../shared/types/plan-rules';
 import type {
   RuleSetChangeDto,
-  RuleSetDiffDto,
   RuleSetDiffEntry,
   RuleSetReachDto,
-  RuleSetRef,
   RuleSetSummaryDto,
 } from '../../shared/types/rule-set-api';
 import { RuleSet } from '../entities/rule-set';
 import { RuleSetChange, type RuleSetChangeAction } from '../entities/rule-set-change';
 import { User } from '../entities/user';
-import type { AuthContext } from '../http/auth-context';
 import { DetailedProblem } from '../http/detailed-problem';
 import { badRequest, conflict } from '../http/problem';
 import { formerMember } from './account-erasure';
-import { ClubScope } from './club-scope';
+import type { ClubScope } from './club-scope';
 import { changeInReaderWords, inReaderWords, inSourceWords } from '../i18n/rule-set-words';
-import { defaultRules, jsonDiff, ruleSetChanges, ruleSetErrors } from './engine-port';
+import { defaultRules, jsonDiff, ruleSetErrors } from './engine-port';
 import { documentOf } from './rules-resolver';
 
 /** 'default' (the engine's), 'published' (the club's current), or a rule set's id. */
@@ -28,6 +25,14 @@ export type RuleSetRefInput = string;
 
 export const DEFAULT_RULE_SET_ID = 'default';
 const MAX_CHANGED_PATHS = 200;
+
+/** Which rule set a document is: a version of the club's, or the built-in default. */
+interface RuleSetRef {
+  id: string;
+  name: string;
+  version: number;
+  status: string;
+}
 
 /** A rule-set document with where it came from. */
 interface Resolved {
@@ -41,61 +46,54 @@ interface Resolved {
  * publishing freezes a draft and archives the one before, so old plans keep the version they name.
  */
 export class RuleSetService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(private readonly scope: ClubScope) {}
 
-  async list(auth: AuthContext): Promise<RuleSetDto[]> {
-    const rows = await this.dataSource.manager.getRepository(RuleSet).find({
-      where: { clubId: auth.clubId },
+  async list(): Promise<RuleSetDto[]> {
+    const rows = await this.scope.manager.getRepository(RuleSet).find({
+      where: this.scope.where<RuleSet>(),
       relations: { author: true },
       order: { version: 'DESC', createdAt: 'DESC' },
     });
     return rows.map(ruleSetDto);
   }
 
-  async get(auth: AuthContext, id: RuleSetRefInput): Promise<RuleSetDto> {
-    const resolved = await this.resolve(this.dataSource.manager, auth, id);
+  async get(id: RuleSetRefInput): Promise<RuleSetDto> {
+    const resolved = await this.resolve(id);
     return resolved.row ? ruleSetDto(resolved.row) : defaultDto(resolved.body);
   }
 
   /** A new draft copied from the published rules (or the default, or a named version). */
-  async createDraft(
-    auth: AuthContext,
-    input: { name?: string; from?: RuleSetRefInput },
-  ): Promise<RuleSetDto> {
-    return this.dataSource.transaction(async (manager) => {
-      await lockClubRuleSets(manager, auth.clubId);
-      const base = await this.resolve(manager, auth, input.from ?? 'published');
+  async createDraft(input: { name?: string; from?: RuleSetRefInput }): Promise<RuleSetDto> {
+    return this.scope.transaction(async (scope) => {
+      const { manager, clubId } = scope;
+      await lockClubRuleSets(manager, clubId);
+      const base = await new RuleSetService(scope).resolve(input.from ?? 'published');
       const repo = manager.getRepository(RuleSet);
       const draft = repo.create({
         id: randomUUID(),
-        clubId: auth.clubId,
+        clubId,
         name: input.name ?? `${base.body.name ?? 'Club rules'} (draft)`.slice(0, 120),
-        version: (await maxVersion(manager, auth.clubId)) + 1,
+        version: (await maxVersion(manager, clubId)) + 1,
         status: 'draft',
         body: base.body,
-        authorId: auth.userId,
+        authorId: scope.auth.userId,
         basedOnId: base.row?.id ?? null,
       });
       draft.body = documentOf(draft);
       const row = await repo.save(draft);
-      await recordChange(manager, auth, row, 'create', []);
-      return this.reload(manager, row.id);
+      await recordChange(scope, row, 'create', []);
+      return reload(manager, row.id);
     });
   }
 
   /** Saves a draft when If-Match names its current revision; otherwise 409 with the current one. */
-  async update(
-    auth: AuthContext,
-    id: string,
-    input: { name?: string; body?: unknown },
-    ifMatch: number,
-  ): Promise<RuleSetDto> {
+  async update(id: string, input: { name?: string; body?: unknown }, ifMatch: number): Promise<RuleSetDto> {
     if (input.body !== undefined) {
       const errors = ruleSetErrors(input.body);
       if (errors.length) throw badRequest($localize`The rule set is not valid.`, errors);
     }
-    return this.dataSource.transaction(async (manager) => {
-      const scope = new ClubScope(manager, auth);
+    return this.scope.transaction(async (scope) => {
+      const { manager, auth } = scope;
       const current = await scope.ruleSet(id);
       if (current.status !== 'draft') throw conflict(cannotChange(current));
       const body = input.body === undefined ? current.body : inSourceWords({ ...(input.body as object) });
@@ -107,7 +105,7 @@ export class RuleSetService {
       );
       const updated = (Array.isArray(result[0]) ? result[0] : result) as { id: string }[];
       if (!updated.length) {
-        const fresh = await this.reload(manager, id);
+        const fresh = await reload(manager, id);
         const now = fresh.revision;
         throw new DetailedProblem(
           409,
@@ -125,20 +123,19 @@ export class RuleSetService {
         paths.unshift('(name)');
         changes.unshift({ path: '/name', change: 'changed', before: current.name, after: name });
       }
-      await recordChange(manager, auth, row, 'update', paths, changes);
-      return this.reload(manager, id);
+      await recordChange(scope, row, 'update', paths, changes);
+      return reload(manager, id);
     });
   }
 
   /** Makes a draft the club's rules for new plans; the previously published version is archived. */
-  async publish(auth: AuthContext, id: string, ifMatch: number | null): Promise<RuleSetDto> {
-    return this.dataSource.transaction(async (manager) => {
-      await lockClubRuleSets(manager, auth.clubId);
-      const scope = new ClubScope(manager, auth);
+  async publish(id: string, ifMatch: number | null): Promise<RuleSetDto> {
+    return this.scope.transaction(async (scope) => {
+      await lockClubRuleSets(scope.manager, scope.clubId);
       const row = await scope.ruleSet(id);
       if (row.status !== 'draft') throw conflict(alreadyDone(row));
       if (ifMatch !== null && ifMatch !== row.revision) {
-        const current = await this.reload(manager, id);
+        const current = await reload(scope.manager, id);
         const now = row.revision;
         throw new DetailedProblem(
           409,
@@ -152,35 +149,35 @@ export class RuleSetService {
       const errors = ruleSetErrors(row.body);
       if (errors.length)
         throw badRequest($localize`The draft is not a valid rule set; fix it before publishing.`, errors);
-      return this.makePublished(manager, auth, row, 'publish');
+      return makePublished(scope, row, 'publish');
     });
   }
 
   /** Publishes a copy of an earlier version (or the default) as the newest version. */
-  async rollback(auth: AuthContext, to: RuleSetRefInput): Promise<RuleSetDto> {
-    return this.dataSource.transaction(async (manager) => {
-      await lockClubRuleSets(manager, auth.clubId);
-      const target = await this.resolve(manager, auth, to);
+  async rollback(to: RuleSetRefInput): Promise<RuleSetDto> {
+    return this.scope.transaction(async (scope) => {
+      const { manager, clubId } = scope;
+      await lockClubRuleSets(manager, clubId);
+      const target = await new RuleSetService(scope).resolve(to);
       const repo = manager.getRepository(RuleSet);
       const row = repo.create({
         id: randomUUID(),
-        clubId: auth.clubId,
+        clubId,
         name: target.row ? target.row.name : (target.body.name ?? 'Default rules'),
-        version: (await maxVersion(manager, auth.clubId)) + 1,
+        version: (await maxVersion(manager, clubId)) + 1,
         status: 'draft',
         body: target.body,
-        authorId: auth.userId,
+        authorId: scope.auth.userId,
         basedOnId: target.row?.id ?? null,
       });
-      return this.makePublished(manager, auth, row, 'rollback');
+      return makePublished(scope, row, 'rollback');
     });
   }
 
-  async history(auth: AuthContext, ruleSetId?: string): Promise<RuleSetChangeDto[]> {
-    const scope = new ClubScope(this.dataSource.manager, auth);
-    if (ruleSetId) await scope.ruleSet(ruleSetId);
-    const rows = await this.dataSource.manager.getRepository(RuleSetChange).find({
-      where: { clubId: auth.clubId, ...(ruleSetId ? { ruleSetId } : {}) },
+  async history(ruleSetId?: string): Promise<RuleSetChangeDto[]> {
+    if (ruleSetId) await this.scope.ruleSet(ruleSetId);
+    const rows = await this.scope.manager.getRepository(RuleSetChange).find({
+      where: this.scope.where<RuleSetChange>(ruleSetId ? { ruleSetId } : {}),
       order: { createdAt: 'DESC' },
       take: 200,
     });
@@ -202,21 +199,21 @@ export class RuleSetService {
    * Who plans from the club's published rules: every team of the club (the club's rules are one
    * for all its teams) and the distinct members on their staff. Publishing changes their next plans.
    */
-  async reach(auth: AuthContext): Promise<RuleSetReachDto> {
-    const [row] = (await this.dataSource.manager.query(
+  async reach(): Promise<RuleSetReachDto> {
+    const [row] = (await this.scope.manager.query(
       `SELECT (SELECT COUNT(*) FROM team t WHERE t."clubId" = $1)::int AS teams,
               (SELECT COUNT(DISTINCT tc."userId") FROM team_coach tc
                  JOIN team t ON t.id = tc."teamId"
                  JOIN membership m ON m."userId" = tc."userId" AND m."clubId" = t."clubId"
                 WHERE t."clubId" = $1)::int AS coaches`,
-      [auth.clubId],
+      [this.scope.clubId],
     )) as { teams: number; coaches: number }[];
     return { teams: Number(row?.teams ?? 0), coaches: Number(row?.coaches ?? 0) };
   }
 
   /** A version's name, number, state and publishing date, without its document (any member). */
-  async summary(auth: AuthContext, id: RuleSetRefInput): Promise<RuleSetSummaryDto> {
-    const resolved = await this.resolve(this.dataSource.manager, auth, id);
+  async summary(id: RuleSetRefInput): Promise<RuleSetSummaryDto> {
+    const resolved = await this.resolve(id);
     const row = resolved.row;
     return {
       id: resolved.ref.id,
@@ -228,19 +225,13 @@ export class RuleSetService {
     };
   }
 
-  async diff(auth: AuthContext, from: RuleSetRefInput, to: RuleSetRefInput): Promise<RuleSetDiffDto> {
-    const manager = this.dataSource.manager;
-    const [a, b] = [await this.resolve(manager, auth, from), await this.resolve(manager, auth, to)];
-    return { from: a.ref, to: b.ref, changes: ruleSetChanges(a.body, b.body).map(changeInReaderWords) };
-  }
-
   /** Resolves 'default', 'published' or an id of the caller's club (404 otherwise). */
-  async resolve(manager: EntityManager, auth: AuthContext, ref: RuleSetRefInput): Promise<Resolved> {
+  async resolve(ref: RuleSetRefInput): Promise<Resolved> {
     if (ref === 'published') {
-      const row = await manager
+      const row = await this.scope.manager
         .getRepository(RuleSet)
-        .findOne({ where: { clubId: auth.clubId, status: 'published' }, order: { version: 'DESC' } });
-      if (!row) return this.resolve(manager, auth, DEFAULT_RULE_SET_ID);
+        .findOne({ where: this.scope.where<RuleSet>({ status: 'published' }), order: { version: 'DESC' } });
+      if (!row) return this.resolve(DEFAULT_RULE_SET_ID);
       return { row, body: documentOf(row), ref: refOf(row) };
     }
     if (ref === DEFAULT_RULE_SET_ID) {
@@ -256,37 +247,41 @@ export class RuleSetService {
         },
       };
     }
-    const row = await new ClubScope(manager, auth).ruleSet(ref);
+    const row = await this.scope.ruleSet(ref);
     return { row, body: documentOf(row), ref: refOf(row) };
   }
+}
 
-  private async makePublished(
-    manager: EntityManager,
-    auth: AuthContext,
-    row: RuleSet,
-    action: RuleSetChangeAction,
-  ): Promise<RuleSetDto> {
-    const version = Math.max(row.version, (await maxPublishedVersion(manager, auth.clubId)) + 1);
-    await manager.query(
-      `UPDATE rule_set SET status = 'archived', revision = revision + 1, "updatedAt" = now()
-        WHERE "clubId" = $1 AND status = 'published'`,
-      [auth.clubId],
-    );
-    row.version = version;
-    row.status = 'published';
-    row.publishedAt = new Date();
-    row.body = documentOf(row);
-    const saved = await manager.getRepository(RuleSet).save(row);
-    await recordChange(manager, auth, saved, action, []);
-    return this.reload(manager, saved.id);
-  }
+/**
+ * Publishes `row` as the club's newest version and archives the one before, inside the caller's
+ * transaction (which holds the club's rule-set lock).
+ */
+async function makePublished(
+  scope: ClubScope,
+  row: RuleSet,
+  action: RuleSetChangeAction,
+): Promise<RuleSetDto> {
+  const { manager, clubId } = scope;
+  const version = Math.max(row.version, (await maxPublishedVersion(manager, clubId)) + 1);
+  await manager.query(
+    `UPDATE rule_set SET status = 'archived', revision = revision + 1, "updatedAt" = now()
+      WHERE "clubId" = $1 AND status = 'published'`,
+    [clubId],
+  );
+  row.version = version;
+  row.status = 'published';
+  row.publishedAt = new Date();
+  row.body = documentOf(row);
+  const saved = await manager.getRepository(RuleSet).save(row);
+  await recordChange(scope, saved, action, []);
+  return reload(manager, saved.id);
+}
 
-  private async reload(manager: EntityManager, id: string): Promise<RuleSetDto> {
-    const row = await manager
-      .getRepository(RuleSet)
-      .findOneOrFail({ where: { id }, relations: { author: true } });
-    return ruleSetDto(row);
-  }
+async function reload(manager: EntityManager, id: string): Promise<RuleSetDto> {
+  const row = await manager
+    .getRepository(RuleSet)
+    .findOneOrFail({ where: { id }, relations: { author: true } });
+  return ruleSetDto(row);
 }
 
 /** Serialises rule-set writes of one club (version numbers, the single published row). */
@@ -311,14 +306,14 @@ async function maxPublishedVersion(manager: EntityManager, clubId: string): Prom
 }
 
 async function recordChange(
-  manager: EntityManager,
-  auth: AuthContext,
+  scope: ClubScope,
   row: RuleSet,
   action: RuleSetChangeAction,
   changedPaths: string[],
   changes: RuleSetDiffEntry[] | null = null,
 ): Promise<void> {
-  const repo = manager.getRepository(RuleSetChange);
+  const { auth } = scope;
+  const repo = scope.manager.getRepository(RuleSetChange);
   await repo.insert({
     clubId: auth.clubId,
     ruleSetId: row.id,

@@ -1,4 +1,4 @@
-/** API shapes for the club-rules workspace: history, diff and "try it" previews. */
+/** API shapes for the club-rules workspace: history, who plans from the rules, summaries, conflicts. */
 import type { RuleSetDto } from './api';
 
 export type RuleSetChangeAction = 'create' | 'update' | 'publish' | 'rollback';
@@ -46,20 +46,6 @@ export interface RuleSetDiffEntry {
   change: 'added' | 'removed' | 'changed';
   before?: unknown;
   after?: unknown;
-}
-
-export interface RuleSetRef {
-  id: string;
-  name: string;
-  version: number;
-  status: string;
-}
-
-/** Answer of GET /api/rule-sets/diff?from=&to=. */
-export interface RuleSetDiffDto {
-  from: RuleSetRef;
-  to: RuleSetRef;
-  changes: RuleSetDiffEntry[];
 }
 
 /** 409 answer of PUT /api/rule-sets/:id when If-Match is stale. */

@@ -86,8 +86,6 @@ const NOT_IN_A_BOUNDED_COLUMN = new Set([
   'calendar-param.file',
   'rule-set-param.id',
   'rule-set-create.from',
-  'rule-set-diff-query.from',
-  'rule-set-diff-query.to',
   'rule-set-rollback.to',
   'plan-pdf-query.paper',
   'plan-share.paper',
