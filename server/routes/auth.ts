@@ -45,11 +45,11 @@ export function authRouter(deps: ApiDeps): Router {
     res.json(await account(req).update(req.body));
   });
   router.post('/auth/sign-out', deps.requireAuth, async (req, res) => {
-    await service.signOut(authOf(req));
+    await account(req).signOut();
     res.status(204).end();
   });
   router.post('/auth/sign-out-everywhere', deps.requireAuth, async (req, res) => {
-    await service.signOutEverywhere(authOf(req));
+    await account(req).signOutEverywhere();
     res.status(204).end();
   });
   router.post(
@@ -59,7 +59,7 @@ export function authRouter(deps: ApiDeps): Router {
     validate({ body: 'auth-password-change' }),
     refuseCommonPassword('newPassword'),
     async (req, res) => {
-      await service.changePassword(authOf(req), req.body);
+      await account(req).changePassword(req.body);
       res.status(204).end();
     },
   );

@@ -1,10 +1,12 @@
+import '../../shared/i18n/localize';
+import bcrypt from 'bcryptjs';
 import type { EntityManager } from 'typeorm';
 import type { UserDto } from '../../shared/types/api';
 import { usableLocale } from '../../shared/time/locale-format';
 import type { DistanceUnit, TemperatureUnit, UnitOverride } from '../../shared/units';
 import { User } from '../entities/user';
-import { unauthorized } from '../http/problem';
-import { userDto } from './auth-service';
+import { HttpError, unauthorized } from '../http/problem';
+import { hashPassword, userDto } from './auth-service';
 import type { ClubScope } from './club-scope';
 import { unitFields } from './unit-settings';
 
@@ -16,7 +18,10 @@ interface AccountChange {
   temperatureUnit?: TemperatureUnit | null;
 }
 
-/** What a signed-in person changes about themselves (never anyone else: the caller is the key). */
+/**
+ * What a signed-in person does to their own account (never anyone else's: the caller is the key):
+ * their name, locale and units, their password, and ending their sessions.
+ */
 export class AccountService {
   constructor(private readonly scope: ClubScope) {}
 
@@ -44,6 +49,69 @@ export class AccountService {
       ...(change.name !== undefined ? { name: change.name } : {}),
       ...unitFields(auth.clubUnits, ownUnits),
     });
+  }
+
+  /**
+   * Ends the caller's own session: its token id is kept until the token would have expired, and
+   * expired entries are cleared in passing. A token from before token ids can only be ended by
+   * ending every session of the person.
+   */
+  async signOut(): Promise<void> {
+    const { auth } = this.scope;
+    if (!auth.token) return this.signOutEverywhere();
+    await this.scope.manager.query(
+      `INSERT INTO revoked_token (jti, "expiresAt") VALUES ($1, to_timestamp($2)) ON CONFLICT (jti) DO NOTHING`,
+      [auth.token.id, auth.token.expiresAt],
+    );
+    await this.scope.manager.query(`DELETE FROM revoked_token WHERE "expiresAt" < now()`);
+  }
+
+  /** Ends every session of the caller, on every device and instance, at once. */
+  async signOutEverywhere(): Promise<void> {
+    await this.scope.manager.query(`UPDATE app_user SET "tokenVersion" = "tokenVersion" + 1 WHERE id = $1`, [
+      this.scope.auth.userId,
+    ]);
+  }
+
+  /**
+   * A new password, given the current one; every session of the person ends with it (the device
+   * that changed it signs in again with the new password).
+   */
+  async changePassword(input: { currentPassword: string; newPassword: string }): Promise<void> {
+    const { auth } = this.scope;
+    const user = await this.scope.manager.getRepository(User).findOneBy({ id: auth.userId });
+    if (!user) throw unauthorized();
+    if (!(await bcrypt.compare(input.currentPassword, user.passwordHash)))
+      throw new HttpError(
+        400,
+        $localize`:title of an error answer:Wrong current password`,
+        $localize`Your current password is not right.`,
+        [
+          {
+            field: 'currentPassword',
+            message: $localize`:field error after the field's name:is not your current password`,
+          },
+        ],
+        '/problems/wrong-current-password',
+      );
+    if (input.newPassword === input.currentPassword)
+      throw new HttpError(
+        400,
+        $localize`:title of an error answer:Same password`,
+        $localize`Choose a new password different from the current one.`,
+        [
+          {
+            field: 'newPassword',
+            message: $localize`:field error after the field's name:is the same as the current password`,
+          },
+        ],
+        '/problems/same-password',
+      );
+    const passwordHash = await hashPassword(input.newPassword);
+    await this.scope.manager.query(
+      `UPDATE app_user SET "passwordHash" = $2, "tokenVersion" = "tokenVersion" + 1 WHERE id = $1`,
+      [auth.userId, passwordHash],
+    );
   }
 }
 
