@@ -7,9 +7,8 @@ import { MatInputModule } from '@angular/material/input';
 import { Router, RouterLink } from '@angular/router';
 import { AuthApi } from '../../core/api/auth-api';
 import { AuthStore } from '../../core/auth/auth-store';
-import { applyFieldErrors, controlMessage } from '../../core/forms/form-errors';
+import { controlMessage, showProblem } from '../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../core/forms/schema-form';
-import { problemFieldErrors, problemMessage } from '../../core/http/problem-message';
 import { MIN_PASSWORD_LENGTH, passwordHint } from '../../../../shared/types/password-rules';
 
 const LABELS = {
@@ -71,8 +70,7 @@ export class CreateClubPage {
       error: (error: unknown) => {
         this.sending.set(false);
         // Errors a field shows under itself are not repeated above the form.
-        const unmatched = applyFieldErrors(this.form, problemFieldErrors(error));
-        this.error.set(problemMessage(error, { fields: unmatched.length > 0 }));
+        this.error.set(showProblem(this.form, error, LABELS));
       },
     });
   }

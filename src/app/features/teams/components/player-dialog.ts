@@ -7,9 +7,8 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import type { PlayerDto } from '../../../../../shared/types';
 import { PlayersApi } from '../../../core/api/players-api';
-import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
+import { controlMessage, showProblem } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
-import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
 import { RetryKey } from '../../../core/http/retry-key';
 
 /** The team a new player joins, or the player being edited. */
@@ -109,8 +108,7 @@ export class PlayerDialog {
       next: (saved) => this.ref.close(saved),
       error: (error: unknown) => {
         this.saving.set(false);
-        const unmatched = applyFieldErrors(this.form, problemFieldErrors(error));
-        this.error.set([problemMessage(error), ...unmatched].join(' '));
+        this.error.set(showProblem(this.form, error, { displayName: this.nameLabel }));
       },
     });
   }

@@ -16,9 +16,8 @@ import {
   type ScheduleKind,
 } from '../../../../../shared/types';
 import { ScheduleApi } from '../../../core/api/schedule-api';
-import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
+import { controlMessage, showProblem } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
-import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
 import { isoDate } from '../../../core/time/dates';
 
 /** What the dialog is opened with: the team, and the session to change or whether to repeat a new one. */
@@ -254,8 +253,7 @@ export class ScheduleDialog {
       next: (saved) => this.ref.close(Array.isArray(saved) ? saved.length : 1),
       error: (error: unknown) => {
         this.saving.set(false);
-        const unmatched = applyFieldErrors(this.form, problemFieldErrors(error));
-        this.error.set(unmatched.length ? problemMessage(error) : null);
+        this.error.set(showProblem(this.form, error, LABELS));
       },
     });
   }
