@@ -12,9 +12,8 @@ import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/materia
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatInputModule } from '@angular/material/input';
 import { CardPaper, PlansApi } from '../../../core/api/plans-api';
-import { applyFieldErrors, controlMessage } from '../../../core/forms/form-errors';
+import { controlMessage, showProblem } from '../../../core/forms/form-errors';
 import { checkAgainstSchema } from '../../../core/forms/schema-form';
-import { problemFieldErrors, problemMessage } from '../../../core/http/problem-message';
 import { PAPER_LABELS } from '../services/paper-preference';
 import { HelperLinks } from './helper-links';
 
@@ -155,9 +154,7 @@ export class ShareDialog {
       next: (result) => this.ref.close(result.queued),
       error: (error: unknown) => {
         this.sending.set(false);
-        const fields = problemFieldErrors(error);
-        const unmatched = applyFieldErrors(this.form, fields);
-        this.error.set([problemMessage(error), ...unmatched].join(' '));
+        this.error.set(showProblem(this.form, error, FIELD_NAMES));
       },
     });
   }
