@@ -92,6 +92,25 @@ export function waitingByBalls(use: BallUse, count: number, balls: number, place
   return Math.max(placesWaiting, short);
 }
 
+/** The station's two sides and each side's outfield players (its goalkeepers stand in goal). */
+export function sidesOf(station: Pick<Station, 'roles'>): {
+  a: string[];
+  b: string[];
+  outA: string[];
+  outB: string[];
+  keepers: string[];
+} {
+  const keepers = station.roles.goalkeeper ?? [];
+  const [a, b] = station.roles.teams ?? [[], []];
+  return {
+    a,
+    b,
+    outA: a.filter((id) => !keepers.includes(id)),
+    outB: b.filter((id) => !keepers.includes(id)),
+    keepers,
+  };
+}
+
 /** Goalkeepers in the station (in goal) are not outfield players. */
 export function outfieldIds(station: Pick<Station, 'playerIds' | 'roles'>): string[] {
   const keepers = station.roles.goalkeeper ?? [];
@@ -215,6 +234,16 @@ export function coachAt(station: Pick<Station, 'coachJoins'>, point: LocalPoint)
 }
 
 /** Splits ids into two sides as evenly as possible, keepers first on each side. */
+/** Two sides with a goalkeeper each where there are keepers, and the format a coach writes ("4v4 + goalkeepers"). */
+export function sidesWithTheirKeepers(
+  ids: string[],
+  keepers: string[],
+): { teams: [string[], string[]]; format: string } {
+  const teams = twoSides(ids, keepers);
+  const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
+  return { teams, format: sidesWithKeepers(out(teams[0]), out(teams[1]), keepers.length > 0) };
+}
+
 export function twoSides(ids: string[], keepers: string[]): [string[], string[]] {
   const a: string[] = [];
   const b: string[] = [];

@@ -8,10 +8,10 @@ import {
   outfieldIds,
   place,
   setUp,
-  sidesWithKeepers,
   tableSizes,
-  twoSides,
   waitingFor,
+  sidesOf,
+  sidesWithTheirKeepers,
 } from './common';
 
 export const shootingGame: KindModule = {
@@ -35,12 +35,8 @@ export const shootingGame: KindModule = {
     const ids = players.map((p) => p.id);
     const outfield = ids.filter((id) => !keepers.includes(id));
     if (layout === 'two-goals') {
-      const teams = twoSides(ids, keepers);
-      const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
-      return {
-        roles: { goalkeeper: keepers, teams },
-        format: sidesWithKeepers(out(teams[0]), out(teams[1]), keepers.length > 0),
-      };
+      const { teams, format } = sidesWithTheirKeepers(ids, keepers);
+      return { roles: { goalkeeper: keepers, teams }, format };
     }
     const defenderCount = outfield.length >= 6 ? 2 : 1;
     const defenders = outfield.slice(outfield.length - defenderCount);
@@ -59,9 +55,7 @@ export const shootingGame: KindModule = {
   draw: ({ across, along }, station, layout) => {
     const keepers = station.roles.goalkeeper ?? [];
     if (layout === 'two-goals') {
-      const [a, b] = station.roles.teams ?? [[], []];
-      const outA = a.filter((id) => !keepers.includes(id));
-      const outB = b.filter((id) => !keepers.includes(id));
+      const { a, b, outA, outB } = sidesOf(station);
       const keeperA = a.filter((id) => keepers.includes(id));
       const keeperB = b.filter((id) => keepers.includes(id));
       return {

@@ -13,6 +13,7 @@ import {
   tableSizes,
   twoSides,
   waitingFor,
+  sidesOf,
   keepersInGoals,
 } from './common';
 
@@ -66,10 +67,7 @@ export const smallSidedGame: KindModule = {
   bibs: (station) => station.roles.teams?.[0].length ?? 0,
   waiting: (station, activity) => waitingFor(station, activity),
   draw: ({ across, along }, station, layout) => {
-    const keepers = station.roles.goalkeeper ?? [];
-    const [a, b] = station.roles.teams ?? [[], []];
-    const outA = a.filter((id) => !keepers.includes(id));
-    const outB = b.filter((id) => !keepers.includes(id));
+    const { a, b, outA, outB, keepers } = sidesOf(station);
     return {
       essential: [],
       outline: corners(across, along),

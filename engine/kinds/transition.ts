@@ -7,10 +7,10 @@ import {
   groupCount,
   place,
   setUp,
-  sidesWithKeepers,
   tableSizes,
-  twoSides,
   waitingFor,
+  sidesOf,
+  sidesWithTheirKeepers,
   keepersInGoals,
 } from './common';
 import { spreadAcross } from './shooting-game';
@@ -34,21 +34,14 @@ export const transition: KindModule = {
   sizes: (params, level, _band, activity) => tableSizes(params, 'transition', level, activity),
   roles: ({ players, keepers }) => {
     const ids = players.map((p) => p.id);
-    const teams = twoSides(ids, keepers);
-    const out = (side: string[]) => side.filter((id) => !keepers.includes(id)).length;
-    return {
-      roles: { teams, goalkeeper: keepers },
-      format: sidesWithKeepers(out(teams[0]), out(teams[1]), keepers.length > 0),
-    };
+    const { teams, format } = sidesWithTheirKeepers(ids, keepers);
+    return { roles: { teams, goalkeeper: keepers }, format };
   },
   balls: (activity, station) => ballNeed(activity.balls, groupCount(station), 1, 3),
   bibs: (station) => station.roles.teams?.[0].length ?? 0,
   waiting: (station, activity) => waitingFor(station, activity),
   draw: ({ across, along }, station, layout) => {
-    const keepers = station.roles.goalkeeper ?? [];
-    const [a, b] = station.roles.teams ?? [[], []];
-    const outA = a.filter((id) => !keepers.includes(id));
-    const outB = b.filter((id) => !keepers.includes(id));
+    const { a, b, outA, outB, keepers } = sidesOf(station);
     const positions = [
       ...place(outA, spreadAcross(outA.length, along * 0.3, across), 'team-a'),
       ...place(outB, spreadAcross(outB.length, along * 0.7, across), 'team-b'),
