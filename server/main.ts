@@ -9,6 +9,7 @@ import { connectAndMigrate, createDataSource } from './data-source';
 import { startHttpServer } from './http-server';
 import { startMailSender } from './mail-hooks';
 import { mailSettingsFromEnv } from './mail/mail-settings';
+import { closeCardPool } from './pdf/card-pool';
 import { startRetentionJob } from './services/retention-service';
 
 const databaseUrl = process.env['DATABASE_URL'];
@@ -54,6 +55,7 @@ async function stop(signal: string): Promise<void> {
   await mailSender?.stop();
   await retention.stop();
   await http.close();
+  await closeCardPool();
   await dataSource.destroy();
   process.exit(0);
 }

@@ -13,6 +13,7 @@ import { startHttpServer, type RunningHttpServer } from './http-server';
 import { startMailSender, type Stoppable } from './mail-hooks';
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
 import { mailSettingsFromEnv } from './mail/mail-settings';
+import { closeCardPool } from './pdf/card-pool';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemo } from './seed';
 import { startRetentionJob } from './services/retention-service';
 
@@ -97,6 +98,7 @@ async function main(): Promise<void> {
     return void (await stopAll(1));
   }
   cleanups.push(() => http.close());
+  cleanups.push(() => closeCardPool());
 
   log('');
   log(`  Conewise is running at ${http.url}`);

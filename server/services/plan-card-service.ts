@@ -2,6 +2,7 @@ import '../../shared/i18n/localize';
 import type { ShareResultDto } from '../../shared/types/plan-api';
 import type { AppConfig } from '../config';
 import { planLength, sessionClock } from '../../shared/time/session-clock';
+import { renderCard } from '../pdf/card-pool';
 import type { Paper } from '../pdf';
 import type { SessionPlan } from '../entities/session-plan';
 import type { Team } from '../entities/team';
@@ -113,9 +114,7 @@ async function render(
   units: Units,
   rules: string,
 ): Promise<Buffer> {
-  // pdfmake, pdfkit and fontkit are large: load them on the first card, not at server start.
-  const { renderPlanPdf } = await import('../pdf');
-  return renderPlanPdf(
+  return renderCard(
     { plan: row.plan, teamName: team.name, date: row.date, kickOff: row.kickOff, locale, units, rules },
     paper,
   );

@@ -13,6 +13,7 @@ import { Membership } from '../../server/entities/membership';
 import { OutboxMessage } from '../../server/entities/outbox-message';
 import { User } from '../../server/entities/user';
 import { startHttpServer, type RunningHttpServer } from '../../server/http-server';
+import { closeCardPool } from '../../server/pdf/card-pool';
 import { hashPassword } from '../../server/services/auth-service';
 import { ApiClient } from './api-client';
 
@@ -59,6 +60,7 @@ export async function startTestApp(
     http,
     async close() {
       await http.close();
+      await closeCardPool();
       if (dataSource.isInitialized) await dataSource.destroy();
     },
   };

@@ -15,6 +15,7 @@ import { CLIENT_DIST, loadConfig } from '../../server/config';
 import { connectAndMigrate, createDataSource } from '../../server/data-source';
 import { startThrowawayCluster } from '../../server/db/pg-cluster';
 import { startHttpServer } from '../../server/http-server';
+import { closeCardPool } from '../../server/pdf/card-pool';
 import { startMailSender } from '../../server/mail-hooks';
 import { startFakeSmtp } from '../../server/mail/fake-smtp';
 import { mailSettingsFromEnv } from '../../server/mail/mail-settings';
@@ -62,6 +63,7 @@ export async function setup(project: TestProject): Promise<void> {
     const http = await startHttpServer({ dataSource, config, port: 0, logger: pino({ level: 'silent' }) });
     config.publicUrl = http.url;
     stops.push(() => http.close());
+    stops.push(() => closeCardPool());
 
     project.provide('baseUrl', http.url);
     project.provide('mailUrl', `http://127.0.0.1:${fake.httpPort}`);
