@@ -8,11 +8,11 @@
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
-import { readFileSync } from 'node:fs';
 import autocannon from 'autocannon';
 import { startThrowawayCluster } from '../../server/db/pg-cluster';
 import { freePort } from '../../server/db/free-port';
 import { PROJECT_ROOT } from '../../server/config';
+import { benchClub, cpuSeconds, startApi } from './support/api-process';
 
 const DURATION_S = Number(process.env['BENCH_SECONDS'] ?? 20);
 const CONNECTIONS = 10;
@@ -23,54 +23,8 @@ interface Figures {
   p99Ms: number;
 }
 
-/** CPU seconds (user + system) the process has used so far, from /proc (Linux clock ticks of 10 ms). */
-function cpuSeconds(pid: number): number {
-  const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]!.split(' ');
-  return (Number(fields[11]) + Number(fields[12])) / 100;
-}
-
 function nodeFlags(): string[] {
   return (process.env['BENCH_API_NODE_FLAGS'] ?? '').split(/\s+/).filter(Boolean);
-}
-
-async function startApi(databaseUrl: string, port: number): Promise<ChildProcess> {
-  // node itself (tsx as a loader), so child.pid is the API's own process and its CPU time can be read.
-  const child = spawn(process.execPath, ['--import', 'tsx', ...nodeFlags(), 'server/main.ts'], {
-    cwd: PROJECT_ROOT,
-    env: {
-      ...process.env,
-      TSX_TSCONFIG_PATH: 'tsconfig.server.json',
-      DATABASE_URL: databaseUrl,
-      PORT: String(port),
-      SEND_MAIL: 'false',
-      LOG_LEVEL: 'warn',
-      JWT_SECRET: 'bench-secret-0123456789abcdef0123456789',
-      AUTH_RATE_MAX: '100000',
-    },
-    stdio: ['ignore', 'inherit', 'inherit'],
-  });
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`API exited with ${child.exitCode}`);
-    try {
-      if ((await fetch(`http://127.0.0.1:${port}/api/health`)).ok) return child;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 250));
-  }
-  child.kill('SIGTERM');
-  throw new Error('API did not become healthy within 60 s');
-}
-
-async function json(url: string, method: string, body: unknown, token?: string) {
-  const response = await fetch(url, {
-    method,
-    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
-    body: JSON.stringify(body),
-  });
-  if (!response.ok) throw new Error(`${method} ${url}: ${response.status} ${await response.text()}`);
-  return response.json();
 }
 
 function run(options: autocannon.Options): Promise<Figures> {
@@ -113,51 +67,9 @@ const cluster = await startThrowawayCluster(() => undefined);
 let api: ChildProcess | null = null;
 try {
   const port = await freePort();
-  api = await startApi(cluster.url, port);
+  api = await startApi(cluster.url, port, { nodeFlags: nodeFlags() });
   const base = `http://127.0.0.1:${port}`;
-  const { token } = await json(`${base}/api/auth/register`, 'POST', {
-    clubName: 'Bench Park Juniors',
-    name: 'Bea Bench',
-    email: 'bea.bench@example.org',
-    password: 'bench-password-1',
-  });
-  const team = await json(
-    `${base}/api/teams`,
-    'POST',
-    {
-      name: 'U10 Bench Larks',
-      ageGroup: 'U10',
-      level: 'intermediate',
-      usualSpace: { width: 40, length: 30 },
-    },
-    token,
-  );
-  const players: { id: string }[] = [];
-  for (let i = 0; i < 16; i++) {
-    players.push(
-      await json(
-        `${base}/api/teams/${team.id}/players`,
-        'POST',
-        { displayName: `Player ${String.fromCharCode(65 + i)}.` },
-        token,
-      ),
-    );
-  }
-  const planBody = JSON.stringify({
-    teamId: team.id,
-    date: '2026-12-05',
-    kickOff: '10:30',
-    request: {
-      ageGroup: 'U10',
-      level: 'intermediate',
-      players: players.map((p) => ({ id: p.id })),
-      coaches: 2,
-      equipment: { balls: 18, cones: 40, bibs: 12, goals: 4 },
-      space: { width: 40, length: 30 },
-      minutes: 25,
-      kind: 'match-warm-up',
-    },
-  });
+  const { token, planBody } = await benchClub(base);
   const auth = { authorization: `Bearer ${token}` };
   // Warm the engine's compiled rules and the JIT before measuring.
   await run({

@@ -8,6 +8,8 @@ declare module 'autocannon' {
       body?: string;
       connections?: number;
       duration?: number;
+      /** Requests per second across all connections (autocannon spaces them evenly). */
+      overallRate?: number;
       /** Changes each request before it is sent (here: a fresh Idempotency-Key on each). */
       requests?: { setupRequest?: (request: RequestParams) => RequestParams }[];
     }
