@@ -122,7 +122,9 @@ describe('auth: register, login, me', () => {
 
   it('a token already accepted is still checked: a changed signature, its expiry, a removed member', async () => {
     const claims = { club: lead.user.clubId, sub: lead.user.id };
-    const soon = jwt.sign({ ...claims, exp: Math.floor(Date.now() / 1000) + 2 }, app.config.jwtSecret, {
+    // Expires a few seconds from now: long enough to be used first on a slow machine.
+    const expiresAt = Math.floor(Date.now() / 1000) + 5;
+    const soon = jwt.sign({ ...claims, exp: expiresAt }, app.config.jwtSecret, {
       algorithm: 'HS256',
     });
     expect((await app.api.get('/api/auth/me', { token: soon })).status).toBe(200);
@@ -139,7 +141,8 @@ describe('auth: register, login, me', () => {
     await app.dataSource.query('DELETE FROM membership WHERE "userId" = $1', [coach.user.id]);
     expect((await app.api.get('/api/auth/me', { token: coach.token })).status).toBe(401);
 
-    await new Promise((resolve) => setTimeout(resolve, 3_100));
+    // Until the clock is past its expiry, however long the steps above took.
+    await new Promise((resolve) => setTimeout(resolve, Math.max(0, expiresAt * 1000 - Date.now()) + 1_100));
     const late = await app.api.get('/api/auth/me', { token: soon });
     expect(late.status).toBe(401);
     expect(late.headers.get('content-type')).toMatch(/problem\+json/);

@@ -16,6 +16,7 @@ import {
   launchBrowser,
   PHONE,
   planDrawn,
+  screenSettled,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
@@ -38,7 +39,7 @@ async function captureScreen(page: Page, name: string): Promise<string[]> {
   const findings: string[] = [];
   for (const viewport of [PHONE, DESKTOP]) {
     await page.setViewportSize(viewport);
-    await page.waitForTimeout(500);
+    await screenSettled(page);
     await screenshot(page, name);
     findings.push(
       ...(await seriousAccessibilityViolations(page)).map((v) => `${name}@${viewport.width}: ${v}`),

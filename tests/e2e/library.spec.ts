@@ -13,6 +13,7 @@ import {
   launchBrowser,
   PHONE,
   planDrawn,
+  screenSettled,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
@@ -115,7 +116,7 @@ describe('activity library', () => {
     expect(teams.body.find((t) => t.id === team.id)!.pinnedActivityIds).toContain(PINNED);
 
     await page.setViewportSize(DESKTOP);
-    await page.waitForTimeout(300);
+    await screenSettled(page);
     await picture(page, 'library-open');
     accessibility.push(...(await seriousAccessibilityViolations(page)).map((v) => `library@1440: ${v}`));
 
@@ -205,7 +206,7 @@ describe('activity library', () => {
     await picture(page, 'activity-form');
     accessibility.push(...(await seriousAccessibilityViolations(page)).map((v) => `activity-form@390: ${v}`));
     await page.setViewportSize(DESKTOP);
-    await page.waitForTimeout(300);
+    await screenSettled(page);
     await picture(page, 'activity-form');
     accessibility.push(
       ...(await seriousAccessibilityViolations(page)).map((v) => `activity-form@1440: ${v}`),

@@ -16,6 +16,7 @@ import {
   launchBrowser,
   PHONE,
   planDrawn,
+  screenSettled,
   screenshot,
   seriousAccessibilityViolations,
   type TestBrowser,
@@ -123,7 +124,7 @@ describe('no double actions, and plans can be deleted (phone)', () => {
     await page.getByTestId('delete-plan').click();
     const dialog = page.getByRole('dialog');
     await dialog.getByText('Who came and how each station went').waitFor();
-    await page.waitForTimeout(300);
+    await screenSettled(page);
     await screenshot(page, 'delete-plan-confirm');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
 

@@ -104,6 +104,17 @@ export async function animationsSettled(page: Page): Promise<void> {
   );
 }
 
+/**
+ * Waits until the screen is still after a change of size or a dialog opening: nothing mid-animation
+ * and two frames drawn since, so a photograph shows the settled layout (instead of a fixed pause).
+ */
+export async function screenSettled(page: Page): Promise<void> {
+  await animationsSettled(page);
+  await page.evaluate(
+    () => new Promise<void>((resolve) => requestAnimationFrame(() => requestAnimationFrame(() => resolve()))),
+  );
+}
+
 /** Runs axe-core in the page and returns the serious and critical violations, described for a failure message. */
 export async function seriousAccessibilityViolations(page: Page): Promise<string[]> {
   // Colours are measured once nothing is mid-transition (a message fading in reads as low contrast).
