@@ -63,6 +63,12 @@ describe('the printed card of a full squad’s hour with drinks breaks', () => {
     expect(letter.pages).toBe(1);
   });
 
+  it('comes out the same when printed again (laid out straight at the size it fitted at)', async () => {
+    const input = { plan, teamName: 'U12 Larks', date: '2026-12-05', kickOff: '18:00' };
+    expect(read(await renderPlanPdf(input, 'a4'))).toEqual(a4);
+    expect(read(await renderPlanPdf(input, 'letter'))).toEqual(letter);
+  });
+
   it('prints each drinks break as a row of its own, the set-up work, formats and kind labels', () => {
     const breaks = plan.phases.filter((p) => p.activityKind === 'break');
     expect(a4.text.split('Drinks break').length - 1).toBeGreaterThanOrEqual(breaks.length);

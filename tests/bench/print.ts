@@ -47,9 +47,9 @@ function percentile(sorted: number[], p: number): number {
   return Math.round(sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))]!);
 }
 
-/** Asks for a card every 1/CARDS_PER_SECOND s until stopped; each answer's time and status. */
+/** Asks for a card (of the next plan) every 1/CARDS_PER_SECOND s until stopped; each answer's time and status. */
 function startPrinter(
-  url: string,
+  urls: string[],
   token: string,
 ): { stop(): Promise<{ latency: Latency; asked: number; ok: number; other: Record<number, number> }> } {
   const times: number[] = [];
@@ -57,6 +57,7 @@ function startPrinter(
   const inFlight = new Set<Promise<void>>();
   let asked = 0;
   const timer = setInterval(() => {
+    const url = urls[asked % urls.length]!;
     asked++;
     const started = performance.now();
     const request = fetch(url, { headers: { authorization: `Bearer ${token}` } })
@@ -102,13 +103,19 @@ async function measure(
   try {
     const base = `http://127.0.0.1:${port}`;
     const club = await benchClub(base, label);
-    const plan = await json(`${base}/api/plans`, 'POST', JSON.parse(club.planBody), club.token);
-    const cardUrl = `${base}/api/plans/${plan.id}/pdf?paper=a4`;
+    // A different plan for every card asked for, as on a Saturday morning (a card printed again is
+    // laid out once, so repeats would flatter the figures).
+    const cardUrls: string[] = [];
+    for (let i = 0; i < SECONDS * CARDS_PER_SECOND + 8; i++) {
+      const plan = await json(`${base}/api/plans`, 'POST', JSON.parse(club.planBody), club.token);
+      cardUrls.push(`${base}/api/plans/${plan.id}/pdf?paper=a4`);
+    }
     // Warm the engine, pdfmake and the pool's thread before measuring.
-    for (let i = 0; i < 3; i++) await fetch(cardUrl, { headers: { authorization: `Bearer ${club.token}` } });
+    for (const url of cardUrls.splice(0, 3))
+      await fetch(url, { headers: { authorization: `Bearer ${club.token}` } });
     await plansAtSteadyRate(base, club.token, club.planBody);
     const plansAlone = await plansAtSteadyRate(base, club.token, club.planBody);
-    const printer = startPrinter(cardUrl, club.token);
+    const printer = startPrinter(cardUrls, club.token);
     const plansWhilePrinting = await plansAtSteadyRate(base, club.token, club.planBody);
     const cards = await printer.stop();
     return {
