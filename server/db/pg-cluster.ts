@@ -1,4 +1,4 @@
-import { execFileSync, spawnSync } from 'node:child_process';
+import { execFileSync, spawn, spawnSync } from 'node:child_process';
 import { createHash, randomBytes } from 'node:crypto';
 import {
   chmodSync,
@@ -29,7 +29,15 @@ export interface PgCluster {
   port: number;
   /** The data folder actually used (may differ from the requested one when running as root). */
   dataDir: string;
+  /** Stops for good (and deletes a throwaway cluster's data). */
   stop(): Promise<void>;
+  /**
+   * Stops the server as an operator would for a restart (fast shutdown: open sessions are cut,
+   * committed work is kept), leaving its data folder and port for start().
+   */
+  shutdown(): Promise<void>;
+  /** Starts a server stopped by shutdown() again on the same data folder and port. */
+  start(): Promise<void>;
 }
 
 export interface StartClusterOptions {
@@ -59,6 +67,26 @@ function runPg(binDir: string, tool: string, args: string[]): { status: number; 
     ? spawnSync('runuser', ['-u', OS_USER, '--', command, ...args], { encoding: 'utf8' })
     : spawnSync(command, args, { encoding: 'utf8' });
   return { status: result.status ?? 1, output: `${result.stdout ?? ''}${result.stderr ?? ''}` };
+}
+
+/**
+ * runPg without blocking: for starting and stopping a server while this process has requests of
+ * its own in flight (a fault test timing the answers it gets meanwhile).
+ */
+function runPgAsync(
+  binDir: string,
+  tool: string,
+  args: string[],
+): Promise<{ status: number; output: string }> {
+  const command = join(binDir, tool);
+  const child = isRoot() ? spawn('runuser', ['-u', OS_USER, '--', command, ...args]) : spawn(command, args);
+  let output = '';
+  child.stdout.on('data', (chunk) => (output += chunk));
+  child.stderr.on('data', (chunk) => (output += chunk));
+  return new Promise((resolve) => {
+    child.on('error', (error) => resolve({ status: 1, output: `${output}${error.message}` }));
+    child.on('close', (code) => resolve({ status: code ?? 1, output }));
+  });
 }
 
 function mustRunPg(binDir: string, tool: string, args: string[]): void {
@@ -176,7 +204,7 @@ export async function startCluster(options: StartClusterOptions): Promise<PgClus
 
   const port = options.port ?? (await freePort());
   const serverOptions = `-c listen_addresses=127.0.0.1 -c port=${port} -c unix_socket_directories='' -c fsync=${options.removeOnStop ? 'off' : 'on'}`;
-  mustRunPg(binDir, 'pg_ctl', [
+  const startArgs = [
     'start',
     '-D',
     dataDir,
@@ -187,17 +215,29 @@ export async function startCluster(options: StartClusterOptions): Promise<PgClus
     join(dataDir, 'postmaster.log'),
     '-o',
     serverOptions,
-  ]);
+  ];
+  const stopArgs = ['stop', '-D', dataDir, '-m', 'fast', '-w', '-t', '60'];
+  mustRunPg(binDir, 'pg_ctl', startArgs);
 
   let stopped = false;
   const stop = async (): Promise<void> => {
     if (stopped) return;
     stopped = true;
-    runPg(binDir, 'pg_ctl', ['stop', '-D', dataDir, '-m', 'fast', '-w', '-t', '60']);
+    runPg(binDir, 'pg_ctl', stopArgs);
     if (options.removeOnStop) {
       rmSync(dataDir, { recursive: true, force: true });
       rmSync(pwPath, { force: true });
     }
+  };
+  const shutdown = async (): Promise<void> => {
+    if (stopped) throw new Error('the cluster has been stopped for good');
+    const { status, output } = await runPgAsync(binDir, 'pg_ctl', stopArgs);
+    if (status !== 0) throw new Error(`pg_ctl stop failed (exit ${status}):\n${output}`);
+  };
+  const start = async (): Promise<void> => {
+    if (stopped) throw new Error('the cluster has been stopped for good');
+    const { status, output } = await runPgAsync(binDir, 'pg_ctl', startArgs);
+    if (status !== 0) throw new Error(`pg_ctl start failed (exit ${status}):\n${output}`);
   };
 
   try {
@@ -206,7 +246,7 @@ export async function startCluster(options: StartClusterOptions): Promise<PgClus
     await stop();
     throw error;
   }
-  return { url: clusterUrl(port, password, database), port, dataDir, stop };
+  return { url: clusterUrl(port, password, database), port, dataDir, stop, shutdown, start };
 }
 
 function clusterUrl(port: number, password: string, database: string): string {

@@ -1,5 +1,8 @@
-// Just the part of node-postgres that the cluster helper uses (no @types/pg in the project).
+// Just the part of node-postgres that the cluster helper and the pool's client use (no @types/pg
+// in the project).
 declare module 'pg' {
+  import type { EventEmitter } from 'node:events';
+
   export interface ClientConfig {
     host?: string;
     port?: number;
@@ -8,8 +11,15 @@ declare module 'pg' {
     database?: string;
     connectionString?: string;
   }
-  export class Client {
+  /** A message the server sent: an ErrorResponse's fields, among them its severity. */
+  export interface BackendMessage {
+    severity?: string;
+    code?: string;
+  }
+  export class Client extends EventEmitter {
     constructor(config?: ClientConfig | string);
+    /** The protocol connection: emits 'errorMessage' for each ErrorResponse. */
+    readonly connection: EventEmitter;
     connect(): Promise<void>;
     query(
       text: string,

@@ -1,10 +1,14 @@
 import '../../shared/i18n/localize';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { isDatabaseUnavailable } from '../db/database-unavailable';
 import { HttpError } from '../http/problem';
 import { inLanguage } from '../i18n/translations';
 import { languageFor } from './request-language';
 
 const PROBLEM_TYPE = 'application/problem+json';
+
+/** Retry-After of a 503 while the database is out of reach: a restart takes a few seconds. */
+export const DATABASE_RETRY_AFTER_SECONDS = 2;
 
 /** Unknown /api/* paths (and anything else nothing answered). */
 export const apiNotFound: RequestHandler = (req, _res, next) => {
@@ -41,7 +45,10 @@ function uploadRefusal(code: string): string | null {
   }
 }
 
-/** Maps errors thrown by body parsers, multer and the database onto problems. */
+/**
+ * Maps errors thrown by body parsers, multer and the database onto problems: a database out of
+ * reach (restarting, refusing connections, a lost connection) is a 503 with Retry-After.
+ */
 function asHttpError(error: unknown): HttpError {
   if (error instanceof HttpError) return error;
   const e = error as { type?: string; status?: number; code?: string; message?: string; field?: string };
@@ -101,6 +108,17 @@ function asHttpError(error: unknown): HttpError {
       '/problems/bad-request',
     );
   }
+  if (isDatabaseUnavailable(error)) {
+    const unavailable = new HttpError(
+      503,
+      $localize`:title of an error answer:Service unavailable`,
+      $localize`The database cannot be reached just now. Try again in a few seconds.`,
+      undefined,
+      '/problems/database-unavailable',
+    );
+    unavailable.retryAfterSeconds = DATABASE_RETRY_AFTER_SECONDS;
+    return unavailable;
+  }
   return new HttpError(
     500,
     $localize`:title of an error answer:Internal error`,
@@ -118,7 +136,9 @@ function asHttpError(error: unknown): HttpError {
  */
 export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   const problem = inLanguage(languageFor(req), () => asHttpError(error));
-  if (problem.status >= 500) req.log?.error({ err: error }, 'request failed');
+  if (problem.type === '/problems/database-unavailable')
+    req.log?.warn({ err: error }, 'database unavailable');
+  else if (problem.status >= 500) req.log?.error({ err: error }, 'request failed');
   if (res.headersSent) {
     res.end();
     return;

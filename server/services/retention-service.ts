@@ -27,6 +27,9 @@ export interface PurgeResult {
 
 const NOTHING: Omit<PurgeResult, 'ran'> = { invitations: 0, plans: 0, attendance: 0, feedback: 0, outbox: 0 };
 
+/** The longest one statement of the purge may run. */
+const PURGE_STATEMENT_TIMEOUT = '10min';
+
 /** The club's oldest kept moment: `now` less its seasons (SQL, with $1 the purge's `now`). */
 const CLUB_CUTOFF = `($1::timestamptz - make_interval(days => c."keepSeasons" * ${DAYS_PER_SEASON}))`;
 
@@ -48,6 +51,9 @@ export class RetentionService {
     await runner.connect();
     try {
       await runner.startTransaction();
+      // Nobody waits on the purge, and a first one after a club shortens its seasons may delete
+      // much: the pool's short statement timeout is lifted for this transaction.
+      await runner.query(`SET LOCAL statement_timeout = '${PURGE_STATEMENT_TIMEOUT}'`);
       const [{ locked }] = (await runner.query('SELECT pg_try_advisory_xact_lock($1::bigint) AS locked', [
         RETENTION_LOCK_KEY,
       ])) as { locked: boolean }[];
