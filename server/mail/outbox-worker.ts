@@ -26,6 +26,29 @@ export interface DrainResult {
   failed: number;
 }
 
+/** The options with every unset one (absent or undefined) at its default. */
+export type OutboxWorkerSettings = Required<Omit<OutboxWorkerOptions, 'onError'>> &
+  Pick<OutboxWorkerOptions, 'onError'>;
+
+const DEFAULTS = {
+  pollMs: 1_000,
+  batchSize: 10,
+  maxAttempts: 8,
+  baseDelayMs: 2_000,
+  maxDelayMs: 10 * 60_000,
+  leaseMs: 2 * 60_000,
+};
+
+/**
+ * Fills in the defaults. An option passed as undefined (as a caller forwarding an unset setting
+ * does) takes its default too: spread over the defaults it would replace them, and a poll
+ * interval of undefined makes setTimeout look again after 1 ms, for ever.
+ */
+export function outboxWorkerSettings(options: OutboxWorkerOptions): OutboxWorkerSettings {
+  const given = Object.fromEntries(Object.entries(options).filter(([, value]) => value !== undefined));
+  return { ...DEFAULTS, ...given } as OutboxWorkerSettings;
+}
+
 /** Delay before attempt `attempts + 1`: base · 2^(attempts − 1), capped. */
 export function retryDelayMs(attempts: number, baseDelayMs: number, maxDelayMs: number): number {
   return Math.min(maxDelayMs, baseDelayMs * 2 ** Math.max(0, attempts - 1));
@@ -41,19 +64,10 @@ export class OutboxWorker {
   private timer: NodeJS.Timeout | null = null;
   private running: Promise<unknown> | null = null;
   private stopped = false;
-  private readonly options: Required<Omit<OutboxWorkerOptions, 'onError'>> &
-    Pick<OutboxWorkerOptions, 'onError'>;
+  private readonly options: OutboxWorkerSettings;
 
   constructor(options: OutboxWorkerOptions) {
-    this.options = {
-      pollMs: 1_000,
-      batchSize: 10,
-      maxAttempts: 8,
-      baseDelayMs: 2_000,
-      maxDelayMs: 10 * 60_000,
-      leaseMs: 2 * 60_000,
-      ...options,
-    };
+    this.options = outboxWorkerSettings(options);
     const { mail } = options;
     this.transport = nodemailer.createTransport({
       host: mail.host,
