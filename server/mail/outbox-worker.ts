@@ -57,7 +57,9 @@ export function retryDelayMs(attempts: number, baseDelayMs: number, maxDelayMs: 
 /**
  * Sends what the outbox holds. Several workers (in one process or many) can run against one
  * database: each claims due rows with FOR UPDATE SKIP LOCKED and a lease, so a message goes to
- * one sender at a time and is marked sent once.
+ * one sender at a time and is marked sent once. Each claim counts an attempt, and a sender writes
+ * how its send went only while the attempt it claimed is the latest: one whose lease ran out
+ * mid-send (the message taken over by another) changes nothing when it finally hears back.
  */
 export class OutboxWorker {
   private readonly transport: Transporter;
@@ -153,8 +155,8 @@ export class OutboxWorker {
         `UPDATE outbox_message
             SET status = 'sent', "sentAt" = now(), "lastError" = NULL,
                 "textBody" = $2, "htmlBody" = NULL, attachments = '[]'::jsonb
-          WHERE id = $1`,
-        [message.id, CLEARED_BODY],
+          WHERE id = $1 AND attempts = $3`,
+        [message.id, CLEARED_BODY, message.attempts],
       );
       result.sent++;
     } catch (error) {
@@ -164,12 +166,13 @@ export class OutboxWorker {
       await db.query(
         `UPDATE outbox_message
             SET status = $2, "lastError" = $3, "nextAttemptAt" = now() + ($4::int * interval '1 millisecond')
-          WHERE id = $1`,
+          WHERE id = $1 AND attempts = $5`,
         [
           message.id,
           giveUp ? 'failed' : 'pending',
           String((error as Error)?.message ?? error).slice(0, 500),
           delay,
+          message.attempts,
         ],
       );
       if (giveUp) result.failed++;
