@@ -1,14 +1,15 @@
 /**
  * Starts only the HTTP server, the outbox sender and the retention purge, configured from the environment:
  * DATABASE_URL (required), PORT, HOST, JWT_SECRET, PUBLIC_URL, SMTP_HOST, SMTP_PORT, MAIL_FROM
- * (SEND_MAIL=false leaves mail queued). Run several of these on one database behind a load
- * balancer; each is stateless. `npm start` (server/start.ts) is the one-command local setup.
+ * (SEND_MAIL=false leaves mail queued), OUTBOX_POLL_MS, OUTBOX_LEASE_MS. Run several of these on
+ * one database behind a load balancer; each is stateless. `npm start` (server/start.ts) is the
+ * one-command local setup.
  */
 import { bindHostFromEnv, loadConfig } from './config';
 import { connectAndMigrate, createDataSource } from './data-source';
 import { startHttpServer } from './http-server';
 import { startMailSender } from './mail-hooks';
-import { mailSettingsFromEnv } from './mail/mail-settings';
+import { mailSettingsFromEnv, outboxTimingFromEnv, type OutboxTiming } from './mail/mail-settings';
 import { closeCardPool } from './pdf/card-pool';
 import { startRetentionJob } from './services/retention-service';
 
@@ -19,8 +20,10 @@ if (!databaseUrl) {
 }
 
 let config: ReturnType<typeof loadConfig>;
+let outboxTiming: OutboxTiming;
 try {
   config = loadConfig();
+  outboxTiming = outboxTimingFromEnv();
 } catch (error) {
   console.error(`[conewise] ${(error as Error).message}`);
   process.exit(2);
@@ -34,7 +37,9 @@ const http = await startHttpServer({
   host: bindHostFromEnv(),
 });
 const mailSender =
-  process.env['SEND_MAIL'] === 'false' ? null : startMailSender({ dataSource, mail: mailSettingsFromEnv() });
+  process.env['SEND_MAIL'] === 'false'
+    ? null
+    : startMailSender({ dataSource, mail: mailSettingsFromEnv(), ...outboxTiming });
 // Every instance runs the purge on a timer; an advisory lock lets one purge at a time.
 const retention = startRetentionJob({
   dataSource,

@@ -12,7 +12,7 @@ import { startCluster, type PgCluster } from './db/pg-cluster';
 import { startHttpServer, type RunningHttpServer } from './http-server';
 import { startMailSender, type Stoppable } from './mail-hooks';
 import { startFakeSmtp, type FakeSmtp } from './mail/fake-smtp';
-import { mailSettingsFromEnv } from './mail/mail-settings';
+import { mailSettingsFromEnv, outboxTimingFromEnv } from './mail/mail-settings';
 import { closeCardPool } from './pdf/card-pool';
 import { DEMO_PASSWORD, DEMO_PEOPLE, seedDemo } from './seed';
 import { startRetentionJob } from './services/retention-service';
@@ -43,6 +43,7 @@ async function main(): Promise<void> {
   const host = bindHostFromEnv();
   // Before the slow steps: a server reachable from other machines needs JWT_SECRET.
   const jwtSecret = loadJwtSecret(DATA_DIR, host);
+  const outboxTiming = outboxTimingFromEnv();
   process.env['PUBLIC_URL'] ??= `http://${host}:${port}`;
 
   if (process.env['SKIP_CLIENT_BUILD'] !== '1' && !buildClientIfStale(log)) {
@@ -76,7 +77,7 @@ async function main(): Promise<void> {
     cleanups.push(() => fake!.stop());
   }
   const mail = mailSettingsFromEnv(fake ? { host: '127.0.0.1', port: fake.port, secure: false } : {});
-  const sender: Stoppable = startMailSender({ dataSource, mail });
+  const sender: Stoppable = startMailSender({ dataSource, mail, ...outboxTiming });
   cleanups.push(() => sender.stop());
   const retention = startRetentionJob({
     dataSource,

@@ -29,6 +29,12 @@ export interface FakeSmtpOptions {
   dir?: string;
   /** Also list caught mail as JSON on loopback: GET / and GET /<id>.eml. 0 picks a free port. */
   httpPort?: number;
+  /**
+   * Recipients to hang on: RCPT TO for an address this matches is not answered (until release()),
+   * as from a mail server that stops responding mid-conversation, so the sender stays stuck in
+   * that send.
+   */
+  stall?: (recipient: string) => boolean;
 }
 
 export interface FakeSmtp {
@@ -36,6 +42,10 @@ export interface FakeSmtp {
   /** Port of the JSON listing, when one was asked for. */
   httpPort: number | null;
   messages(): CaughtMail[];
+  /** Recipients whose RCPT TO it is hanging on (or was), in order. */
+  stalled(): string[];
+  /** Answers every RCPT TO it is hanging on with a temporary failure (451), failing those sends. */
+  release(): void;
   /** Resolves with the first caught message matching, or rejects after timeoutMs. */
   waitFor(match: (mail: CaughtMail) => boolean, timeoutMs?: number): Promise<CaughtMail>;
   stop(): Promise<void>;
@@ -49,6 +59,8 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
   const host = options.host ?? '127.0.0.1';
   const caught: CaughtMail[] = [];
   const raws = new Map<string, Buffer>();
+  const stalled: string[] = [];
+  const hanging: ((error: Error & { responseCode?: number }) => void)[] = [];
   const waiters = new Set<() => void>();
   if (options.dir) mkdirSync(options.dir, { recursive: true });
 
@@ -56,6 +68,11 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
     authOptional: true,
     disabledCommands: ['STARTTLS', 'AUTH'],
     logger: false,
+    onRcptTo(address, _session, callback) {
+      if (!options.stall?.(address.address)) return callback();
+      stalled.push(address.address);
+      hanging.push(callback);
+    },
     onData(stream, session, callback) {
       const chunks: Buffer[] = [];
       stream.on('data', (chunk: Buffer) => chunks.push(chunk));
@@ -123,6 +140,11 @@ export async function startFakeSmtp(options: FakeSmtpOptions = {}): Promise<Fake
     port,
     httpPort: http ? (http.address() as AddressInfo).port : null,
     messages: () => [...caught],
+    stalled: () => [...stalled],
+    release() {
+      for (const answer of hanging.splice(0))
+        answer(Object.assign(new Error('Try again later'), { responseCode: 451 }));
+    },
     waitFor(match, timeoutMs = 10_000) {
       return new Promise((resolve, reject) => {
         const check = () => {

@@ -1,3 +1,15 @@
-export { OutboxWorker, retryDelayMs, type OutboxWorkerOptions, type DrainResult } from './outbox-worker';
-export { mailSettingsFromEnv, type MailSettings } from './mail-settings';
+export {
+  OutboxWorker,
+  outboxWorkerSettings,
+  retryDelayMs,
+  type OutboxWorkerOptions,
+  type OutboxWorkerSettings,
+  type DrainResult,
+} from './outbox-worker';
+export {
+  mailSettingsFromEnv,
+  outboxTimingFromEnv,
+  type MailSettings,
+  type OutboxTiming,
+} from './mail-settings';
 export { startFakeSmtp, type CaughtMail, type FakeSmtp, type FakeSmtpOptions } from './fake-smtp';

@@ -26,6 +26,29 @@ export interface DrainResult {
   failed: number;
 }
 
+/** The options with every unset one (absent or undefined) at its default. */
+export type OutboxWorkerSettings = Required<Omit<OutboxWorkerOptions, 'onError'>> &
+  Pick<OutboxWorkerOptions, 'onError'>;
+
+const DEFAULTS = {
+  pollMs: 1_000,
+  batchSize: 10,
+  maxAttempts: 8,
+  baseDelayMs: 2_000,
+  maxDelayMs: 10 * 60_000,
+  leaseMs: 2 * 60_000,
+};
+
+/**
+ * Fills in the defaults. An option passed as undefined (as a caller forwarding an unset setting
+ * does) takes its default too: spread over the defaults it would replace them, and a poll
+ * interval of undefined makes setTimeout look again after 1 ms, for ever.
+ */
+export function outboxWorkerSettings(options: OutboxWorkerOptions): OutboxWorkerSettings {
+  const given = Object.fromEntries(Object.entries(options).filter(([, value]) => value !== undefined));
+  return { ...DEFAULTS, ...given } as OutboxWorkerSettings;
+}
+
 /** Delay before attempt `attempts + 1`: base · 2^(attempts − 1), capped. */
 export function retryDelayMs(attempts: number, baseDelayMs: number, maxDelayMs: number): number {
   return Math.min(maxDelayMs, baseDelayMs * 2 ** Math.max(0, attempts - 1));
@@ -34,26 +57,19 @@ export function retryDelayMs(attempts: number, baseDelayMs: number, maxDelayMs: 
 /**
  * Sends what the outbox holds. Several workers (in one process or many) can run against one
  * database: each claims due rows with FOR UPDATE SKIP LOCKED and a lease, so a message goes to
- * one sender at a time and is marked sent once.
+ * one sender at a time and is marked sent once. Each claim counts an attempt, and a sender writes
+ * how its send went only while the attempt it claimed is the latest: one whose lease ran out
+ * mid-send (the message taken over by another) changes nothing when it finally hears back.
  */
 export class OutboxWorker {
   private readonly transport: Transporter;
   private timer: NodeJS.Timeout | null = null;
   private running: Promise<unknown> | null = null;
   private stopped = false;
-  private readonly options: Required<Omit<OutboxWorkerOptions, 'onError'>> &
-    Pick<OutboxWorkerOptions, 'onError'>;
+  private readonly options: OutboxWorkerSettings;
 
   constructor(options: OutboxWorkerOptions) {
-    this.options = {
-      pollMs: 1_000,
-      batchSize: 10,
-      maxAttempts: 8,
-      baseDelayMs: 2_000,
-      maxDelayMs: 10 * 60_000,
-      leaseMs: 2 * 60_000,
-      ...options,
-    };
+    this.options = outboxWorkerSettings(options);
     const { mail } = options;
     this.transport = nodemailer.createTransport({
       host: mail.host,
@@ -139,8 +155,8 @@ export class OutboxWorker {
         `UPDATE outbox_message
             SET status = 'sent', "sentAt" = now(), "lastError" = NULL,
                 "textBody" = $2, "htmlBody" = NULL, attachments = '[]'::jsonb
-          WHERE id = $1`,
-        [message.id, CLEARED_BODY],
+          WHERE id = $1 AND attempts = $3`,
+        [message.id, CLEARED_BODY, message.attempts],
       );
       result.sent++;
     } catch (error) {
@@ -150,12 +166,13 @@ export class OutboxWorker {
       await db.query(
         `UPDATE outbox_message
             SET status = $2, "lastError" = $3, "nextAttemptAt" = now() + ($4::int * interval '1 millisecond')
-          WHERE id = $1`,
+          WHERE id = $1 AND attempts = $5`,
         [
           message.id,
           giveUp ? 'failed' : 'pending',
           String((error as Error)?.message ?? error).slice(0, 500),
           delay,
+          message.attempts,
         ],
       );
       if (giveUp) result.failed++;

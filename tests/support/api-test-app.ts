@@ -170,7 +170,7 @@ export async function clubWithStaff(app: TestApp, clubName?: string): Promise<Cl
 
 /** A team owned by the club, created by the given member (a coach becomes attached). */
 export async function createTeam(
-  app: TestApp,
+  app: Pick<TestApp, 'api'>,
   token: string,
   body: Record<string, unknown> = {},
 ): Promise<{ id: string; [key: string]: unknown }> {
