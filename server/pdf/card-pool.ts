@@ -26,6 +26,9 @@ function cardPool(threads: number): Piscina<CardJob, Uint8Array> {
     maxThreads: threads,
     // A thread left idle this long ends; the next card starts one again.
     idleTimeout: 60_000,
+    // Below the request thread (and PostgreSQL on the same machine) in the CPU's queue: when cards
+    // and plans compete, plans go first and cards wait (Linux thread niceness, @napi-rs/nice).
+    niceIncrement: 10,
     // The worker is TypeScript, read through tsx as the server is.
     execArgv: ['--import', 'tsx'],
     env: { ...process.env, TSX_TSCONFIG_PATH: process.env['TSX_TSCONFIG_PATH'] ?? 'tsconfig.server.json' },

@@ -7,11 +7,12 @@
 import { randomBytes } from 'node:crypto';
 import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createDataSource, MIGRATION_LOCK } from '../../server/data-source';
+import { MIGRATION_LOCK } from '../../server/data-source';
 import { startThrowawayCluster, type PgCluster } from '../../server/db/pg-cluster';
 import { MIGRATIONS } from '../../server/migrations';
 import { startInstance, stopInstance, type ApiInstance } from '../support/api-instance';
 import { planBody, registerClubWithTeam } from '../support/club-with-team';
+import { expectSchemaMatchesEntities } from '../support/schema-check';
 
 const INSTANCES = 3;
 
@@ -79,15 +80,7 @@ describe('three instances starting together on an empty database', () => {
     }
 
     // Nothing left for the entities to change.
-    const dataSource = createDataSource({ url: cluster.url, poolSize: 1 });
-    await dataSource.initialize();
-    try {
-      const pending = await dataSource.driver.createSchemaBuilder().log();
-      expect(pending.upQueries.map((q) => q.query)).toEqual([]);
-      expect(await dataSource.showMigrations()).toBe(false);
-    } finally {
-      await dataSource.destroy();
-    }
+    await expectSchemaMatchesEntities(cluster.url);
 
     // Each instance serves a whole round trip; what one wrote the next one reads.
     for (const [i, instance] of instances.entries()) {
