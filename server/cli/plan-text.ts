@@ -5,6 +5,9 @@
  */
 import { ACTIVITY_KIND_LABELS, type Plan } from '../../shared/types';
 
+/** "1 goal", "2 goals". */
+const count = (n: number, thing: string) => `${n} ${thing}${n === 1 ? '' : 's'}`;
+
 export function planText(plan: Plan): string {
   const r = plan.request;
   const name = (id: string) => r.players.find((p) => p.id === id)?.name ?? id;
@@ -35,7 +38,7 @@ export function planText(plan: Plan): string {
       const waiting = s.waiting ? ` · ${s.waiting} waiting` : '';
       out.push(
         `    ${i + 1}. ${s.title} — ${s.format ?? ''} · ${s.playerIds.length}${s.coachJoins ? ' + coach' : ''} players · ${s.area.width} × ${s.area.length} m · ` +
-          `${s.equipment.balls} balls, ${s.equipment.cones} cones, ${s.equipment.goals} goals, ${s.equipment.bibs} bibs${inGoal}${waiting}`,
+          `${count(s.equipment.balls, 'ball')}, ${count(s.equipment.cones, 'cone')}, ${count(s.equipment.goals, 'goal')}, ${count(s.equipment.bibs, 'bib')}${inGoal}${waiting}`,
       );
       for (const note of s.notes ?? []) out.push(`       note: ${note}`);
     });

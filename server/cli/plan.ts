@@ -1,12 +1,14 @@
 /**
- * `npm run -s plan -- request.json` (or `-` for stdin): prints the Plan JSON for a request.
+ * `npm run -s plan -- request.json` (or `-` for stdin): prints the Plan JSON for a request;
+ * `npm run -s plan -- --text request.json` prints it as a coach reads it (plan-text.ts).
  * An invalid request exits with status 2 and one line per bad field on stderr.
  */
 import { readFileSync } from 'node:fs';
 import { generatePlan, PlanRequestError, RuleSetError, validatePlanRequest } from '../../engine';
 import type { PlanRequest } from '../../shared/types';
+import { planText } from './plan-text';
 
-const USAGE = 'usage: npm run -s plan -- <request.json | ->';
+const USAGE = 'usage: npm run -s plan -- [--text] <request.json | ->';
 
 function readInput(arg: string | undefined): string {
   if (!arg) throw new UsageError(USAGE);
@@ -22,9 +24,11 @@ function readInput(arg: string | undefined): string {
 class UsageError extends Error {}
 
 async function main(): Promise<number> {
+  const args = process.argv.slice(2);
+  const asText = args[0] === '--text';
   let text: string;
   try {
-    text = readInput(process.argv[2]);
+    text = readInput(asText ? args[1] : args[0]);
   } catch (error) {
     process.stderr.write(`${(error as Error).message}\n`);
     return 2;
@@ -43,7 +47,7 @@ async function main(): Promise<number> {
   }
   try {
     const plan = await generatePlan(value as PlanRequest);
-    process.stdout.write(`${JSON.stringify(plan, null, 2)}\n`);
+    process.stdout.write(asText ? `${planText(plan)}\n` : `${JSON.stringify(plan, null, 2)}\n`);
     return 0;
   } catch (error) {
     if (error instanceof PlanRequestError) {

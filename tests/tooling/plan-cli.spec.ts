@@ -1,4 +1,4 @@
-/** The plan CLI: Plan JSON on stdout; an invalid request exits 2 naming each field, no stack trace. */
+/** The plan CLI: Plan JSON (or, with --text, the plan as a coach reads it) on stdout; an invalid request exits 2 naming each field, no stack trace. */
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -38,6 +38,15 @@ describe('npm run plan', () => {
     expect(plan.phases.at(-1).endMinute).toBe(15);
     const fromStdin = run(['-'], JSON.stringify(valid));
     expect(fromStdin.stdout).toBe(fromFile.stdout);
+  }, 60_000);
+
+  it('prints it as a coach reads it with --text: the session line, each phase with its minutes', () => {
+    const result = run(['--text', '-'], JSON.stringify(valid));
+    expect(result.status).toBe(0);
+    const lines = result.stdout.trim().split('\n');
+    expect(lines[0]).toMatch(/^U9 beginner match warm-up, 15 min · 5 players/);
+    expect(lines.some((line) => /^ {2}\d+–15 min /.test(line))).toBe(true);
+    expect(result.stdout).not.toContain('"phases"');
   }, 60_000);
 
   it('exits 2 and names each bad field on stderr, without a stack trace', () => {
