@@ -62,7 +62,10 @@ export function equipPhase(
   if (bibs.short > 0) {
     warnings.push({
       code: 'bibs-short',
-      message: $localize`${phaseName}:phaseName:: ${bibs.wanted}:wanted: bibs needed, ${kit.bibs}:bibs: in the bag — use shirt colours to tell sides apart.`,
+      message:
+        bibs.wanted === 1
+          ? $localize`${phaseName}:phaseName:: 1 bib needed, ${kit.bibs}:bibs: in the bag — use shirt colours to tell sides apart.`
+          : $localize`${phaseName}:phaseName:: ${bibs.wanted}:wanted: bibs needed, ${kit.bibs}:bibs: in the bag — use shirt colours to tell sides apart.`,
     });
   }
 }
