@@ -41,7 +41,7 @@ export function clientIsStale(): boolean {
 
 /**
  * `ng build` (production, with esbuild's metafile), then the service worker's prefetch list (the
- * shell and the screens needed offline), then the compressed copies. False when the build failed.
+ * shell and the screens needed offline), the pages drawn in advance, then the compressed copies. False when the build failed.
  */
 export function buildClient(log: (m: string) => void = console.log): boolean {
   const result = spawnSync('npx', ['ng', 'build', '--stats-json'], {
@@ -77,6 +77,13 @@ export function buildClient(log: (m: string) => void = console.log): boolean {
     );
     log(`[conewise] ${name}: index.html preloads ${added.length} more chunks the first screen imports`);
   }
+  // The sign-in page drawn in advance (a browser is async; the build stays one synchronous call).
+  const drawn = spawnSync('npx', ['tsx', '--tsconfig', 'tsconfig.server.json', 'server/cli/prerender.ts'], {
+    cwd: PROJECT_ROOT,
+    stdio: 'inherit',
+    env: process.env,
+  });
+  if (drawn.status !== 0) return false;
   const { files, bytes, brotliBytes } = precompressClient();
   log(
     `[conewise] compressed ${files} built files: ${Math.round(bytes / 1024)} kB → ${Math.round(brotliBytes / 1024)} kB brotli`,

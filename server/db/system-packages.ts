@@ -1,10 +1,11 @@
 import { execFileSync } from 'node:child_process';
 import { existsSync, readdirSync } from 'node:fs';
+import { chromiumInstalled } from '../build/chromium';
 
 /** What Conewise needs from the operating system, with the Debian package that provides it. */
 const NEEDS = {
   postgresql: { package: 'postgresql', present: () => findPgBinDir() !== null },
-  chromium: { package: 'chromium', present: () => existsSync('/usr/bin/chromium') },
+  chromium: { package: 'chromium', present: chromiumInstalled },
   pdftotext: { package: 'poppler-utils', present: () => existsSync('/usr/bin/pdftotext') },
   nginx: { package: 'nginx', present: () => existsSync('/usr/sbin/nginx') },
 } as const;

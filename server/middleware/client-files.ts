@@ -1,9 +1,11 @@
+import { existsSync } from 'node:fs';
 import type { ServerResponse } from 'node:http';
 import { join } from 'node:path';
 import compression from 'compression';
 import express, { Router, type Request, type RequestHandler, type Response } from 'express';
 import expressStaticGzip from 'express-static-gzip';
 import { HASHED_FILE, type LocaleBuild } from '../build/locale-builds';
+import { PRERENDERED_PAGES } from '../build/prerender';
 import { languageFor } from './request-language';
 
 /**
@@ -65,6 +67,9 @@ export function compressAnswers(): RequestHandler {
  */
 const WORKER_SCRIPTS = /^\/(?:ngsw-worker|safety-worker|worker-basic\.min)\.js$/;
 
+/** Documents, served by clientShell with the security headers, never as plain files. */
+const PAGES = new Set(['/index.html', ...Object.values(PRERENDERED_PAGES).map((file) => `/${file}`)]);
+
 /**
  * The headers a built file needs. Helmet's set (the CSP, frame and referrer policies…) governs
  * documents and workers; on a script, stylesheet, font or image it does nothing but cost ~700
@@ -111,11 +116,15 @@ export function clientAssets(builds: readonly LocaleBuild[]): Router {
     return assets;
   };
   // Each language's hashed files under its folder (/es/main-….js): the same name in every language.
-  for (const build of builds) if (build.prefix) router.use(build.prefix, served(build.dir));
+  for (const build of builds) {
+    if (!build.prefix) continue;
+    const files = served(build.dir);
+    router.use(build.prefix, (req, res, next) => (PAGES.has(req.path) ? next() : files(req, res, next)));
+  }
   // The rest (ngsw.json, the manifest, icons) from the reader's language.
   const atRoot = new Map(builds.map((b) => [b, served(b.dir)]));
   router.use((req, res, next) => {
-    if (/^\/api(\/|$)|^\/index\.html$/.test(req.path) || WORKER_SCRIPTS.test(req.path)) return next();
+    if (/^\/api(\/|$)/.test(req.path) || PAGES.has(req.path) || WORKER_SCRIPTS.test(req.path)) return next();
     const build = buildFor(req, builds);
     if (!HASHED.test(req.path)) varyByLanguage(res, builds);
     atRoot.get(build)!(req, res, next);
@@ -125,7 +134,8 @@ export function clientAssets(builds: readonly LocaleBuild[]): Router {
 
 /**
  * After helmet: the worker scripts, and the app shell (index.html) for any client route such as
- * /teams/42 (history fallback) in the reader's language, both with the full security headers.
+ * /teams/42 (history fallback) in the reader's language, both with the full security headers;
+ * /sign-in gets its copy with the page already drawn.
  */
 export function clientShell(builds: readonly LocaleBuild[]): Router {
   const router = Router();
@@ -151,7 +161,10 @@ export function clientShell(builds: readonly LocaleBuild[]): Router {
     res.setHeader('Content-Language', build.language);
     // The helper's view of a plan is for one family's evening, not for search engines.
     if (req.path === '/helper') res.setHeader('X-Robots-Tag', 'noindex, nofollow');
-    res.sendFile(join(build.dir, 'index.html'));
+    // The sign-in page drawn at build time (server/build/prerender.ts) when the build has it.
+    const drawn = PRERENDERED_PAGES[req.path];
+    const page = drawn && existsSync(join(build.dir, drawn)) ? drawn : 'index.html';
+    res.sendFile(join(build.dir, page));
   });
   return router;
 }

@@ -14,7 +14,7 @@ import { join } from 'node:path';
 import { chromium } from 'playwright-core';
 import { buildClient } from '../../server/client-build';
 import { DEMO_PASSWORD } from '../../server/seed';
-import { CHROMIUM_ARGS } from '../e2e/support/browser';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../server/build/chromium';
 import { setup, teardown } from '../support/e2e-global-setup';
 import { byType, kilobytes, WireMeter } from './support/wire';
 
@@ -39,7 +39,7 @@ async function main(): Promise<void> {
   const baseUrl = provided.get('baseUrl')!;
   const profile = mkdtempSync(join(tmpdir(), 'conewise-bench-'));
   const context = await chromium.launchPersistentContext(profile, {
-    executablePath: '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     args: CHROMIUM_ARGS,
     headless: true,
     viewport: { width: 1440, height: 900 },

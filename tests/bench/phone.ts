@@ -24,7 +24,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type CDPSession, type Page } from 'playwright-core';
 import { DEMO_PASSWORD } from '../../server/seed';
-import { CHROMIUM_ARGS } from '../e2e/support/browser';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../server/build/chromium';
 import { startBenchStack, teardown } from './support/stack';
 import { byType, kilobytes, WireMeter, type WireRecord } from './support/wire';
 
@@ -237,7 +237,7 @@ async function main(): Promise<void> {
     const profile = mkdtempSync(join(tmpdir(), 'conewise-phone-'));
     profiles.push(profile);
     return chromium.launchPersistentContext(profile, {
-      executablePath: '/usr/bin/chromium',
+      executablePath: CHROMIUM_PATH,
       args: CHROMIUM_ARGS,
       headless: true,
       serviceWorkers,

@@ -8,16 +8,7 @@ import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
-
-export const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--no-first-run',
-];
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../../server/build/chromium';
 
 export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1440, height: 900 };
@@ -40,7 +31,7 @@ export interface TestBrowser {
 export async function launchBrowser(baseUrl: string, locale = 'en-GB'): Promise<TestBrowser> {
   const profile = mkdtempSync(join(tmpdir(), 'conewise-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
-    executablePath: '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     args: CHROMIUM_ARGS,
     headless: true,
     viewport: DESKTOP,
