@@ -26,9 +26,14 @@ export interface TestBrowser {
 
 /**
  * Launches Chromium with a fresh user-data-dir for one suite. The browser's locale (dates, clock
- * times, first day of the week) is British unless a suite asks for another.
+ * times, first day of the week) is British unless a suite asks for another; a suite that holds
+ * back the app's requests blocks the service worker, which would answer them out of sight.
  */
-export async function launchBrowser(baseUrl: string, locale = 'en-GB'): Promise<TestBrowser> {
+export async function launchBrowser(
+  baseUrl: string,
+  locale = 'en-GB',
+  serviceWorkers: 'allow' | 'block' = 'allow',
+): Promise<TestBrowser> {
   const profile = mkdtempSync(join(tmpdir(), 'conewise-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM_PATH,
@@ -37,6 +42,7 @@ export async function launchBrowser(baseUrl: string, locale = 'en-GB'): Promise<
     viewport: DESKTOP,
     acceptDownloads: true,
     locale,
+    serviceWorkers,
   });
   const origin = new URL(baseUrl).origin;
   const outsideRequests: string[] = [];

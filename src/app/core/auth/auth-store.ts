@@ -42,9 +42,9 @@ export class AuthStore {
   }
 }
 
-/** Whether this device keeps a session (read before the app starts, to fetch the screen's code). */
-export function hasStoredSession(): boolean {
-  return readStoredSession() !== null;
+/** The id of the person whose session this device keeps, or null (read before the app starts). */
+export function storedUserId(): string | null {
+  return readStoredSession()?.user.id ?? null;
 }
 
 function readStoredSession(): AuthResponse | null {

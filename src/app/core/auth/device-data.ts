@@ -3,8 +3,8 @@
  * the next person on a shared club tablet finds no roster, plan or pitch-side record.
  *
  * Kept: the session (AuthStore), pitch-side's copies of plans and its queue of changes not yet
- * sent (features/pitch-side), and the service worker's cache of API answers (ngsw-config.json's
- * data groups). The paper size chosen for printing is a setting of the device and stays.
+ * sent (features/pitch-side), the plan page as last drawn (core/startup/drawn-copy.ts), and the
+ * service worker's cache of API answers (ngsw-config.json's data groups). The paper size chosen for printing is a setting of the device and stays.
  */
 
 /** Every key Conewise writes in localStorage starts with this. */

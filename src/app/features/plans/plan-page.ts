@@ -10,7 +10,7 @@ import {
   signal,
   untracked,
 } from '@angular/core';
-import { NgTemplateOutlet } from '@angular/common';
+import { DOCUMENT, NgTemplateOutlet } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
@@ -25,6 +25,7 @@ import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 import { AuthStore } from '../../core/auth/auth-store';
 import { PrintState } from '../../core/layout/print-state';
 import { WHEN_IDLE } from '../../core/layout/when-idle';
+import { keepDrawnCopy } from '../../core/startup/drawn-copy';
 import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
@@ -81,6 +82,7 @@ export class PlanPage {
   private readonly dialog = inject(MatDialog);
   private readonly snackBar = inject(MatSnackBar);
   private readonly auth = inject(AuthStore);
+  private readonly document = inject(DOCUMENT);
   private readonly paperPreference = inject(PaperPreference);
   private readonly router = inject(Router);
   /** The reader's units, for the space in the header (the rest of the plan comes converted). */
@@ -153,6 +155,19 @@ export class PlanPage {
       afterNextRender(() => this.whenIdle(() => this.drawnPhases.update((n) => n + 1)), {
         injector: this.injector,
       });
+    });
+    // The page as first drawn, shown at once on this device's next visit (core/startup/drawn-copy.ts).
+    effect(() => {
+      const user = this.auth.user();
+      if (!this.session.plan() || !user || untracked(() => this.drawnUpTo()) !== 1) return;
+      afterNextRender(
+        () =>
+          this.whenIdle(() => {
+            const storage = this.document.defaultView?.localStorage;
+            if (storage) keepDrawnCopy(this.document, storage, this.document.location.pathname, user.id);
+          }),
+        { injector: this.injector },
+      );
     });
     // The area buttons grey out at their limits: worked out again for every plan on screen, once
     // they can be seen. On a phone they sit in folded station cards, so the engine (a large
