@@ -167,7 +167,12 @@ describe('PlanPage', () => {
     const http = TestBed.inject(HttpTestingController);
     fixture.detectChanges();
     http.expectOne('/api/plans/plan-1').flush(dto(served));
-    http.expectOne(`/api/rule-sets/${served.ruleSet.id}`).flush(ruleSetDto(rules));
+    // The plan's rules are read with the engine, when the area limits, an edit or the swap menu
+    // first need them: on a wide screen a coach's page works out the limits at once.
+    fixture.detectChanges();
+    const rulesRead = http.match(`/api/rule-sets/${served.ruleSet.id}`);
+    for (const read of rulesRead) read.flush(ruleSetDto(rules));
+    expect(rulesRead.length).toBe(role === 'assistant' || phone ? 0 : 1);
     await fixture.whenStable();
     fixture.detectChanges();
     // Later phases and the panels are drawn after the first paint (on idle or near the screen):
@@ -660,10 +665,11 @@ describe('PlanPage', () => {
       ([, l]) => l.larger || l.smaller,
     )!;
     const load = vi.spyOn(BrowserEngine.prototype, 'load');
-    const { fixture, root } = await setUp({ phone: true, shown: tight });
+    const { fixture, http, root } = await setUp({ phone: true, shown: tight });
     await settle(fixture);
-    // The engine is a large download: reading a plan on a phone does not fetch it.
+    // The engine is a large download: reading a plan on a phone does not fetch it, nor the rules.
     expect(load).not.toHaveBeenCalled();
+    http.expectNone(`/api/rule-sets/${tight.ruleSet.id}`);
 
     const [phaseIndex, stationId] = key.split(':');
     const phaseEl = root.querySelectorAll('[data-testid="phase"]')[Number(phaseIndex)];
@@ -673,6 +679,8 @@ describe('PlanPage', () => {
     const details = card.querySelector('details')!;
     details.open = true;
     details.dispatchEvent(new Event('toggle'));
+    await settle(fixture);
+    http.expectOne(`/api/rule-sets/${tight.ruleSet.id}`).flush(ruleSetDto(defaultRuleSet as RuleSetDocument));
     await settle(fixture);
     expect(load).toHaveBeenCalled();
     const size = limit.larger ? 'larger' : 'smaller';

@@ -73,11 +73,12 @@ export class PlanSession {
     this.saved.set(dto);
     this.plan.set(dto.plan);
     this.error.set(null);
-    void this.rulesOf(dto);
   }
 
   /**
    * The club rules the plan was made with, so the browser's re-check agrees with the server's.
+   * Read with the engine, when an edit, the swap menu or the area limits first need them (on a
+   * phone not before a station card is opened: ~23 kB the plan's first view does without).
    * Unreadable rules (offline, say) fall back to the engine's own; the server re-checks on save.
    */
   private rulesOf(dto: SessionPlanDto): Promise<RuleSetDocument | null> {
