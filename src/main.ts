@@ -3,6 +3,7 @@ import { App } from './app/app';
 import { appConfig } from './app/app.config';
 import { routes } from './app/app.routes';
 import { storedUserId } from './app/core/auth/auth-store';
+import { loadIconPaths } from './app/core/icons/provide-icons';
 import { loadScreenEarly } from './app/core/routing/early-screen';
 import { removeDrawnCopy, showDrawnCopy } from './app/core/startup/drawn-copy';
 import { carryOverTyping, typedBeforeStart } from './app/core/startup/first-paint';
@@ -10,7 +11,11 @@ import { carryOverTyping, typedBeforeStart } from './app/core/startup/first-pain
 // A signed-in coach opening a plan (or any screen) by its address: its code is fetched while the
 // app starts, not after. Signed out, the guards send them to sign-in, so nothing is fetched.
 const userId = storedUserId();
-if (userId) loadScreenEarly(location.pathname, routes);
+if (userId) {
+  loadScreenEarly(location.pathname, routes);
+  // Every signed-in screen draws icons: their chunk comes with the screen's code, not after it.
+  void loadIconPaths().catch(() => undefined);
+}
 
 // The page as this device last drew it at this address, on screen until the app has drawn it again.
 const copyShown = userId !== null && showDrawnCopy(document, localStorage, location.pathname, userId);

@@ -45,12 +45,30 @@ export class ShippedIconRegistry extends MatIconRegistry {
     // A pending task: the app (and a test's whenStable) is not stable until the icons are drawn.
     if (!this.loading) {
       const done = this.pendingTasks.add();
-      this.loading = import('./generated/icon-svgs')
-        .then(({ ICON_PATHS }) => (this.paths = ICON_PATHS))
+      this.loading = loadIconPaths()
+        .then((paths) => (this.paths = paths))
         .finally(done);
     }
     return this.loading;
   }
+}
+
+let iconPaths: Promise<Readonly<Record<string, string>>> | null = null;
+
+/**
+ * The shipped icons' paths (a chunk of their own). `main.ts` asks for them as a signed-in screen
+ * starts, so they arrive with the screen's code instead of one round trip after it.
+ */
+export function loadIconPaths(): Promise<Readonly<Record<string, string>>> {
+  iconPaths ??= import('./generated/icon-svgs').then(
+    ({ ICON_PATHS }) => ICON_PATHS,
+    (error: unknown) => {
+      // Not kept: the next icon drawn asks again (a dropped connection at start-up, say).
+      iconPaths = null;
+      throw error;
+    },
+  );
+  return iconPaths;
 }
 
 /** `<mat-icon svgIcon="menu" />` draws a shipped icon inline (see ShippedIconRegistry). */
