@@ -37,7 +37,7 @@ export function planText(plan: Plan): string {
         : '';
       const waiting = s.waiting ? ` · ${s.waiting} waiting` : '';
       out.push(
-        `    ${i + 1}. ${s.title} — ${s.format ?? ''} · ${s.playerIds.length}${s.coachJoins ? ' + coach' : ''} players · ${s.area.width} × ${s.area.length} m · ` +
+        `    ${i + 1}. ${s.title} — ${s.format ?? ''} · ${s.playerIds.length} players${s.coachJoins ? ' + the coach' : ''} · ${s.area.width} × ${s.area.length} m · ` +
           `${count(s.equipment.balls, 'ball')}, ${count(s.equipment.cones, 'cone')}, ${count(s.equipment.goals, 'goal')}, ${count(s.equipment.bibs, 'bib')}${inGoal}${waiting}`,
       );
       for (const note of s.notes ?? []) out.push(`       note: ${note}`);

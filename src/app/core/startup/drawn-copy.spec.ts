@@ -1,6 +1,8 @@
 import { forgetDeviceData } from '../auth/device-data';
 import { DRAWN_COPY_KEY, DRAWN_COPY_TAG, keepDrawnCopy, removeDrawnCopy, showDrawnCopy } from './drawn-copy';
 
+const COMPONENT_STYLE = '.cw-phase[_ngcontent-ng-c1]{margin:0}';
+
 /** A page with the build's entry script and the app drawn in <cw-root>. */
 function drawnApp(markup: string): HTMLElement {
   const script = document.createElement('script');
@@ -8,7 +10,8 @@ function drawnApp(markup: string): HTMLElement {
   script.src = '/en-GB/main-AB12CD34.js';
   document.body.append(script);
   const style = document.createElement('style');
-  style.textContent = '.cw-phase[_ngcontent-ng-c1]{margin:0}';
+  style.textContent = COMPONENT_STYLE;
+  style.dataset['test'] = 'drawn-copy';
   document.head.append(style);
   const root = document.createElement('cw-root');
   root.innerHTML = markup;
@@ -20,12 +23,16 @@ function drawnApp(markup: string): HTMLElement {
 function reloaded(): HTMLElement {
   const root = document.querySelector<HTMLElement>('cw-root')!;
   root.innerHTML = '';
-  for (const style of Array.from(document.head.querySelectorAll('style'))) style.remove();
+  // Only this file's own: other specs in the same document keep theirs.
+  for (const style of Array.from(document.head.querySelectorAll('style[data-test="drawn-copy"]')))
+    style.remove();
   return root;
 }
 
 describe('the copy of the plan page for the next visit', () => {
   afterEach(() => {
+    for (const style of Array.from(document.head.querySelectorAll('style[data-test="drawn-copy"]')))
+      style.remove();
     document.querySelector(DRAWN_COPY_TAG)?.remove();
     document.querySelector('cw-root')?.remove();
     for (const script of Array.from(document.querySelectorAll('script[type="module"]'))) script.remove();
@@ -42,7 +49,8 @@ describe('the copy of the plan page for the next visit', () => {
       userId: 'coach-1',
       build: expect.stringContaining('/en-GB/main-AB12CD34.js'),
       title: 'Plan · Conewise',
-      styles: ['.cw-phase[_ngcontent-ng-c1]{margin:0}'],
+      // Every style in <head> (other specs may have left theirs in this document).
+      styles: expect.arrayContaining([COMPONENT_STYLE]),
       html: '<h1 data-testid="plan-title">Match warm-up · U12 Otters</h1>',
     });
   });
