@@ -57,6 +57,18 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
   const accessibility: string[] = [];
   const workDir = mkdtempSync(join(tmpdir(), 'conewise-e2e-'));
 
+  /**
+   * The plan as stored, read by the page with its own session. (Once the service worker controls
+   * the page it answers the page's writes, and the page's own network log may no longer hold their
+   * bodies.)
+   */
+  const storedPlan = (on: Page, planId: string) =>
+    on.evaluate(async (id) => {
+      const { token } = JSON.parse(localStorage.getItem('conewise.session')!) as { token: string };
+      const answer = await fetch(`/api/plans/${id}`, { headers: { authorization: `Bearer ${token}` } });
+      return (await answer.json()) as SessionPlanDto;
+    }, planId);
+
   beforeAll(async () => {
     browser = await launchBrowser(baseUrl);
     page = await browser.newPage(DESKTOP);
@@ -115,14 +127,7 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     expect(response.status()).toBe(201);
     await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
     await planDrawn(page);
-    // Read back as stored. (Once the service worker controls the page it answers the POST, and the
-    // page's own network log may no longer hold the body.)
-    const id = new URL(page.url()).pathname.split('/').pop()!;
-    saved = await page.evaluate(async (planId) => {
-      const { token } = JSON.parse(localStorage.getItem('conewise.session')!) as { token: string };
-      const answer = await fetch(`/api/plans/${planId}`, { headers: { authorization: `Bearer ${token}` } });
-      return (await answer.json()) as SessionPlanDto;
-    }, id);
+    saved = await storedPlan(page, new URL(page.url()).pathname.split('/').pop()!);
     expect(saved.request.players).toHaveLength(13);
     expect(saved.request.equipment).toMatchObject({ cones: 12, goals: 2 });
   });
@@ -187,7 +192,7 @@ describe('a coach plans, adjusts, prints and shares a warm-up', () => {
     await page.mouse.up();
     const patched = await saveResponse;
     expect(patched.status()).toBe(200);
-    const stored = (await patched.json()) as SessionPlanDto;
+    const stored = await storedPlan(page, saved.id);
     const holder = stored.plan.phases[phaseIndex]!.stations.find((s) => s.playerIds.includes(playerId));
     expect(holder?.id).toBe(to!.id);
     expect(patched.request().postDataJSON()).toEqual({

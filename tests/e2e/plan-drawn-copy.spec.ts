@@ -4,11 +4,11 @@
  * it is never shown for another plan or another person, nothing in it can be used, and signing out
  * removes it from the phone.
  */
-import type { Page, Route } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { AuthResponse, SessionPlanDto } from '../../shared/types';
 import { DRAWN_COPY_KEY, DRAWN_COPY_TAG } from '../../src/app/core/startup/drawn-copy';
-import { launchBrowser, PHONE, planDrawn, screenshot, type TestBrowser } from './support/browser';
+import { holdBack, launchBrowser, PHONE, planDrawn, screenshot, type TestBrowser } from './support/browser';
 import { ClubSession, U12_COACH, U8_COACH } from './support/club-session';
 
 describe('a plan opened again on the same phone', () => {
@@ -37,16 +37,10 @@ describe('a plan opened again on the same phone', () => {
    */
   async function openHeldBack(id: string): Promise<{ page: Page; release: () => Promise<void> }> {
     const page = await browser.newPage(PHONE);
-    let held: Route | null = null;
-    let arrived!: () => void;
-    const asked = new Promise<void>((resolve) => (arrived = resolve));
-    await page.route(new RegExp(`/api/plans/${id}$`), (route) => {
-      held = route;
-      arrived();
-    });
+    const { asked, release } = await holdBack(page, new RegExp(`/api/plans/${id}$`));
     await page.goto(`${baseUrl}/plans/${id}`, { waitUntil: 'commit' });
     await asked;
-    return { page, release: () => held!.continue() };
+    return { page, release };
   }
 
   const copyOnScreen = (page: Page) =>

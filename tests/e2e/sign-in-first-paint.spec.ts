@@ -3,9 +3,9 @@
  * the app's scripts have arrived, it cannot be sent half-started, and what a quick coach types
  * before the app runs is still there when it does.
  */
-import type { Page, Route } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterEach, beforeEach, describe, expect, inject, it } from 'vitest';
-import { launchBrowser, PHONE, screenshot, type TestBrowser } from './support/browser';
+import { holdBack, launchBrowser, PHONE, screenshot, type TestBrowser } from './support/browser';
 import { DEMO_PASSWORD, U12_COACH } from './support/club-session';
 
 const APP_ENTRY = /\/main-[A-Z0-9]{8}\.js$/;
@@ -25,20 +25,8 @@ describe('the sign-in page before the app has started', () => {
   /** A phone page whose app entry script is held back until `release` is called. */
   async function heldBack(): Promise<{ page: Page; release: () => Promise<void> }> {
     const page = await browser!.newPage(PHONE);
-    let held: Route | null = null;
-    let arrived!: () => void;
-    const asked = new Promise<void>((resolve) => (arrived = resolve));
-    await page.route(APP_ENTRY, (route) => {
-      held = route;
-      arrived();
-    });
-    return {
-      page,
-      release: async () => {
-        await asked;
-        await held!.continue();
-      },
-    };
+    const { release } = await holdBack(page, APP_ENTRY);
+    return { page, release };
   }
 
   it('shows the whole sign-in page with no script run, its button off until the app starts', async () => {

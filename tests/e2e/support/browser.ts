@@ -7,7 +7,7 @@ import { mkdtempSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type BrowserContext, type Page, type Route } from 'playwright-core';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../../server/build/chromium';
 
 export const PHONE = { width: 390, height: 844 };
@@ -139,4 +139,28 @@ export async function seriousAccessibilityViolations(page: Page): Promise<string
 export async function planDrawn(page: Page): Promise<void> {
   await page.getByTestId('phase').first().waitFor();
   await page.locator('.cw-stations-waiting, .cw-panels-waiting').first().waitFor({ state: 'detached' });
+}
+
+/**
+ * Holds back the page's first request matching `url` (an app script, an API read) until `release`
+ * is called: what a slow link does, on demand. `asked` resolves once the page has made it.
+ */
+export async function holdBack(
+  page: Page,
+  url: RegExp,
+): Promise<{ asked: Promise<void>; release: () => Promise<void> }> {
+  let held: Route | null = null;
+  let arrived!: () => void;
+  const asked = new Promise<void>((resolve) => (arrived = resolve));
+  await page.route(url, (route) => {
+    held = route;
+    arrived();
+  });
+  return {
+    asked,
+    release: async () => {
+      await asked;
+      await held!.continue();
+    },
+  };
 }
