@@ -41,7 +41,8 @@ export function clientIsStale(): boolean {
 
 /**
  * `ng build` (production, with esbuild's metafile), then the service worker's prefetch list (the
- * shell and the screens needed offline), the pages drawn in advance, then the compressed copies. False when the build failed.
+ * shell and the screens needed offline), the pages drawn in advance, then the compressed copies.
+ * False when the build failed.
  */
 export function buildClient(log: (m: string) => void = console.log): boolean {
   const result = spawnSync('npx', ['ng', 'build', '--stats-json'], {

@@ -13,7 +13,7 @@
  * The page holds nothing about anyone (signed out, no API data), and nothing that runs: scripts
  * stay the build's own files, so the strict CSP is unchanged.
  */
-import { readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { LocaleBuild } from './locale-builds';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from './chromium';
@@ -66,17 +66,6 @@ export function pageWithFirstPaint(indexHtml: string, drawn: DrawnPage): string 
 
 const ORIGIN = 'http://conewise.build';
 
-const TYPES: Record<string, string> = {
-  '.js': 'text/javascript',
-  '.css': 'text/css',
-  '.html': 'text/html',
-  '.json': 'application/json',
-  '.webmanifest': 'application/manifest+json',
-  '.svg': 'image/svg+xml',
-  '.woff2': 'font/woff2',
-  '.png': 'image/png',
-};
-
 /** Draws each of PRERENDERED_PAGES in each build and writes it beside the build's index.html. */
 export async function prerenderPages(builds: readonly LocaleBuild[]): Promise<string[]> {
   const { chromium } = await import('playwright-core');
@@ -97,18 +86,13 @@ export async function prerenderPages(builds: readonly LocaleBuild[]): Promise<st
             build.prefix && url.pathname.startsWith(`${build.prefix}/`)
               ? url.pathname.slice(build.prefix.length)
               : url.pathname;
-          const extension = /\.[a-z0-9]+$/.exec(local)?.[0];
-          if (!extension) return route.fulfill({ status: 200, contentType: 'text/html', body: index });
-          try {
-            const body = readFileSync(join(build.dir, local));
-            return route.fulfill({
-              status: 200,
-              contentType: TYPES[extension] ?? 'application/octet-stream',
-              body,
-            });
-          } catch {
-            return route.fulfill({ status: 404, body: '' });
-          }
+          // A client route gets the app shell; a file its own bytes, typed by Playwright from its name.
+          if (!/\.[a-z0-9]+$/.test(local))
+            return route.fulfill({ status: 200, contentType: 'text/html', body: index });
+          const onDisk = join(build.dir, local);
+          return existsSync(onDisk)
+            ? route.fulfill({ path: onDisk })
+            : route.fulfill({ status: 404, body: '' });
         });
         await page.goto(`${ORIGIN}${path}`);
         await page.locator('cw-root button[type="submit"]').first().waitFor();
