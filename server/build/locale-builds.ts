@@ -22,8 +22,13 @@ export interface LocaleBuild {
   prefix: string;
 }
 
-/** Files named with their content's hash (`main-AB12CD34.js`, `media/font-…-EF56GH78.woff2`). */
-export const HASHED_FILE = /-[A-Z0-9]{8}\.(?:js|css|woff2?|svg|png|jpe?g|webp)$/;
+/**
+ * Files named with their content's hash: by esbuild, eight capitals or digits (`main-AB12CD34.js`,
+ * `media/font-…-EF56GH78.woff2`); by Angular's chunk optimizer (server/client-build.ts), scripts
+ * named with eight base64url characters (`chunk-Bx_9aQ-z.js`).
+ */
+export const HASHED_FILE =
+  /(?:-[A-Z0-9]{8}\.(?:js|css|woff2?|svg|png|jpe?g|webp)|(?:^|\/)chunk-[A-Za-z0-9_-]{8}\.js)$/;
 
 /**
  * The builds under the client folder: one per language folder holding an index.html (source

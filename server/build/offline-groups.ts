@@ -26,8 +26,25 @@ export const APP_ENTRY = 'src/main.ts';
 export interface BuildMetafile {
   outputs: Record<
     string,
-    { entryPoint?: string; imports?: { path: string; kind: string; external?: boolean }[] }
+    {
+      entryPoint?: string;
+      inputs?: Record<string, unknown>;
+      imports?: { path: string; kind: string; external?: boolean }[];
+    }
   >;
+}
+
+/**
+ * The built chunk that starts `entry` (a source file). esbuild names it as the chunk's entry
+ * point; after Angular's chunk optimizer (NG_BUILD_OPTIMIZE_CHUNKS, server/client-build.ts) only
+ * the app's entry keeps that name, and a lazy screen's chunk is the one holding its source file.
+ */
+export function chunkOf(meta: BuildMetafile, entry: string): string | undefined {
+  const outputs = Object.entries(meta.outputs);
+  return (
+    outputs.find(([, output]) => output.entryPoint === entry)?.[0] ??
+    outputs.find(([file, output]) => file.endsWith('.js') && output.inputs && entry in output.inputs)?.[0]
+  );
 }
 
 /** The parts of ngsw.json read and written here. */
@@ -42,17 +59,16 @@ export function filesNeededBy(
   entries: readonly string[],
   follow: 'static' | 'static-and-dynamic',
 ): Set<string> {
-  const byEntry = new Map<string, string>();
-  for (const [file, output] of Object.entries(meta.outputs)) {
-    if (output.entryPoint) byEntry.set(output.entryPoint, file);
-  }
   const needed = new Set<string>();
   const pending: string[] = [];
   for (const entry of entries) {
-    const file = byEntry.get(entry);
+    const file = chunkOf(meta, entry);
     if (!file) throw new Error(`the build has no chunk for ${entry}: is it still lazy-loaded?`);
     pending.push(file);
   }
+  // Screens import shared code from the app's own chunk once the chunk optimizer has merged it
+  // there; its dynamic imports are the route table (every screen), not what a screen needs.
+  const app = chunkOf(meta, APP_ENTRY);
   while (pending.length) {
     const file = pending.pop()!;
     if (needed.has(file)) continue;
@@ -61,7 +77,7 @@ export function filesNeededBy(
       if (imported.external) continue;
       if (
         imported.kind === 'import-statement' ||
-        (follow === 'static-and-dynamic' && imported.kind === 'dynamic-import')
+        (follow === 'static-and-dynamic' && imported.kind === 'dynamic-import' && file !== app)
       ) {
         pending.push(imported.path);
       }

@@ -9,11 +9,11 @@
  * index.html, which would otherwise refuse the changed file.
  */
 import { createHash } from 'node:crypto';
-import { APP_ENTRY, type BuildMetafile, filesNeededBy } from './offline-groups';
+import { APP_ENTRY, type BuildMetafile, chunkOf, filesNeededBy } from './offline-groups';
 
 /** index.html with a modulepreload hint for every static import of the app's entry. */
 export function completePreloadHints(html: string, meta: BuildMetafile): { html: string; added: string[] } {
-  const main = Object.entries(meta.outputs).find(([, output]) => output.entryPoint === APP_ENTRY)?.[0];
+  const main = chunkOf(meta, APP_ENTRY);
   if (!main) throw new Error(`the build has no chunk for ${APP_ENTRY}`);
   const hinted = new Set(
     [...html.matchAll(/<link rel="modulepreload" href="([^"]+)">/g)].map((match) => match[1]!),

@@ -123,20 +123,38 @@ describe('each language fetches its files from its folder', () => {
     const manifest = {
       index: '/index.html',
       assetGroups: [
-        { urls: ['/index.html', '/main-QW12ER34.js', '/media/font-EF56GH78.woff2', '/favicon.svg'] },
+        {
+          urls: [
+            '/index.html',
+            '/main-QW12ER34.js',
+            // The chunk optimizer's names: base64url hashes.
+            '/chunk-Bx_9aQ-z.js',
+            '/media/font-EF56GH78.woff2',
+            '/favicon.svg',
+            '/ngsw-worker.js',
+          ],
+        },
       ],
-      hashTable: { '/index.html': 'a', '/main-QW12ER34.js': 'b', '/media/font-EF56GH78.woff2': 'c' },
+      hashTable: {
+        '/index.html': 'a',
+        '/main-QW12ER34.js': 'b',
+        '/chunk-Bx_9aQ-z.js': 'd',
+        '/media/font-EF56GH78.woff2': 'c',
+      },
     };
     const placed = manifestUnderFolder(manifest, '/es');
     expect(placed.assetGroups![0]!.urls).toEqual([
       '/index.html',
       '/es/main-QW12ER34.js',
+      '/es/chunk-Bx_9aQ-z.js',
       '/es/media/font-EF56GH78.woff2',
       '/favicon.svg',
+      '/ngsw-worker.js',
     ]);
     expect(Object.keys(placed.hashTable)).toEqual([
       '/index.html',
       '/es/main-QW12ER34.js',
+      '/es/chunk-Bx_9aQ-z.js',
       '/es/media/font-EF56GH78.woff2',
     ]);
     expect(placed.index).toBe('/index.html');

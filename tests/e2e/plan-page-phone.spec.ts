@@ -152,8 +152,8 @@ describe('the plan page on a phone', () => {
 
     await page.reload();
     await planDrawn(page);
-    expect(await page.getByRole('radio', { name: 'US Letter' }).getAttribute('aria-checked')).toBe('true');
-    expect(await page.getByRole('radio', { name: 'A4' }).getAttribute('aria-checked')).toBe('false');
+    expect(await page.getByRole('radio', { name: 'US Letter' }).isChecked()).toBe(true);
+    expect(await page.getByRole('radio', { name: 'A4' }).isChecked()).toBe(false);
   });
 
   it('keeps every station open on a desktop, with no summary to open', async () => {

@@ -2,6 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   type BuildMetafile,
+  chunkOf,
   filesNeededBy,
   prefetchOfflineScreens,
   type ServiceWorkerManifest,
@@ -113,9 +114,42 @@ describe('the service worker prefetch list', () => {
     expect(moved).toBe(9);
   });
 
-  it('refuses a build where an offline screen is no longer its own chunk', () => {
+  it('refuses a build where no chunk holds an offline screen', () => {
     const meta = metafile();
     delete meta.outputs['chunk-SIDE0001.js']!.entryPoint;
     expect(() => prefetchOfflineScreens(manifest(), meta)).toThrow(/pitch-side-page\.ts/);
+  });
+
+  it("after the chunk optimizer, finds a lazy screen by the source it holds and does not follow the app's route table", () => {
+    // Angular's chunk optimizer (NG_BUILD_OPTIMIZE_CHUNKS) merges the shared code into main, which
+    // the screens then import; only main keeps its entry point, the others are known by their inputs.
+    const meta: BuildMetafile = {
+      outputs: {
+        'main-AAAA0002.js': {
+          entryPoint: 'src/main.ts',
+          inputs: { 'src/main.ts': {}, 'src/app/app.routes.ts': {} },
+          imports: [
+            { path: 'chunk-PLAN0002.js', kind: 'dynamic-import' },
+            { path: 'chunk-TEAM0002.js', kind: 'dynamic-import' },
+          ],
+        },
+        'chunk-PLAN0002.js': {
+          inputs: { 'src/app/features/plans/plan-page.ts': {}, 'src/app/features/plans/plan-session.ts': {} },
+          imports: [
+            { path: 'main-AAAA0002.js', kind: 'import-statement' },
+            { path: 'chunk-ENGN0002.js', kind: 'dynamic-import' },
+          ],
+        },
+        'chunk-PLAN0002.js.map': { inputs: { 'src/app/features/plans/plan-page.ts': {} } },
+        'chunk-ENGN0002.js': { inputs: { 'engine/index.ts': {} }, imports: [] },
+        'chunk-TEAM0002.js': { inputs: { 'src/app/features/teams/team-page.ts': {} }, imports: [] },
+      },
+    };
+    expect(chunkOf(meta, 'src/app/features/plans/plan-page.ts')).toBe('chunk-PLAN0002.js');
+    expect(chunkOf(meta, 'src/main.ts')).toBe('main-AAAA0002.js');
+    expect(chunkOf(meta, 'src/app/features/status/status-page.ts')).toBeUndefined();
+    expect(
+      [...filesNeededBy(meta, ['src/app/features/plans/plan-page.ts'], 'static-and-dynamic')].sort(),
+    ).toEqual(['/chunk-ENGN0002.js', '/chunk-PLAN0002.js', '/main-AAAA0002.js']);
   });
 });

@@ -1,4 +1,5 @@
 import {
+  ApplicationRef,
   effect,
   inject,
   Injectable,
@@ -15,11 +16,14 @@ const SENT_KEY = 'conewise.locale-sent';
  * Tells the server the browser's locale once per browser session of a signed-in person (after
  * sign-in, creating a club, joining, or reopening the app), so the cards and e-mails they send
  * write dates and times as their screen does. A failed send (offline) is tried again next time.
+ * It waits until the screen has drawn what it opened with: on a phone's link a request at start-up
+ * takes a connection and a slice of the main thread from the first paint (issue 12).
  */
 @Injectable({ providedIn: 'root' })
 export class LocaleSync {
   private readonly authApi = inject(AuthApi);
   private readonly auth = inject(AuthStore);
+  private readonly appRef = inject(ApplicationRef);
 
   /** Watches who is signed in and sends their locale when this tab has not sent it yet. */
   start(): void {
@@ -29,9 +33,13 @@ export class LocaleSync {
       const locale = browserLocale();
       const mark = `${user.id}|${locale}`;
       if (readSent() === mark) return;
-      this.authApi.changeLocale(locale).subscribe({
-        next: () => writeSent(mark),
-        error: () => undefined,
+      void this.appRef.whenStable().then(() => {
+        // Signed out or another person meanwhile: theirs is sent by the effect's next run.
+        if (this.auth.user()?.id !== user.id || readSent() === mark) return;
+        this.authApi.changeLocale(locale).subscribe({
+          next: () => writeSent(mark),
+          error: () => undefined,
+        });
       });
     });
   }

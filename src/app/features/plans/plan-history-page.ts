@@ -13,7 +13,8 @@ import { problemMessage } from '../../core/http/problem-message';
 import { ICONS } from '../../core/icons/shipped-icon';
 import { KIND_LABELS } from '../../core/labels/plan-labels';
 import { dayWords, timeWords } from '../../core/locale/locale-format';
-import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
+import { DeletePlanDialog } from './components/delete-plan-dialog';
+import { planName } from './services/plan-words';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 
 /** A team's past plans, newest first, each reusable for today with today's players. */

@@ -148,6 +148,8 @@ describe('PlanPage', () => {
           : []),
       ],
     });
+    // The register and why panels are a deferred block: their code is loaded like a route's.
+    await TestBed.compileComponents();
     TestBed.inject(AuthStore).signIn({
       token: 't',
       user: {
@@ -233,6 +235,9 @@ describe('PlanPage', () => {
     const total = plan.phases.reduce((n, p) => n + p.stations.length, 0);
     expect(root.querySelectorAll('cw-station-card').length).toBe(total);
     expect(root.querySelectorAll('cw-station-card .cw-group').length).toBe(total);
+    // The panels' code arrives a moment later (a deferred block, fetched in advance when idle).
+    await fixture.whenStable();
+    fixture.detectChanges();
     expect(root.querySelector('cw-register-panel')).not.toBeNull();
   });
 
@@ -241,11 +246,11 @@ describe('PlanPage', () => {
     vi.restoreAllMocks();
   });
 
-  /** The toggle button of the paper group that reads `label`. */
+  /** The radio of the paper group whose label reads `label`. */
   const paperButton = (root: HTMLElement, label: string) =>
-    Array.from(root.querySelectorAll<HTMLButtonElement>('[data-testid="paper"] button')).find(
-      (b) => b.textContent?.trim() === label,
-    )!;
+    Array.from(root.querySelectorAll<HTMLLabelElement>('[data-testid="paper"] label'))
+      .find((l) => l.textContent?.trim() === label)!
+      .querySelector('input')!;
 
   /** Clicks "Print card" and answers the PDF request; returns the paper it asked for. */
   async function printCard(
@@ -271,12 +276,12 @@ describe('PlanPage', () => {
     vi.spyOn(navigator, 'languages', 'get').mockReturnValue(['en-GB']);
     const download = stubDownload();
     const { fixture, http, root } = await setUp();
-    expect(paperButton(root, 'A4').getAttribute('aria-checked')).toBe('true');
+    expect(paperButton(root, 'A4').checked).toBe(true);
     expect(await printCard(fixture, http)).toBe('a4');
 
     paperButton(root, 'US Letter').click();
     await settle(fixture);
-    expect(paperButton(root, 'US Letter').getAttribute('aria-checked')).toBe('true');
+    expect(paperButton(root, 'US Letter').checked).toBe(true);
     expect(await printCard(fixture, http)).toBe('letter');
     expect(download).toHaveBeenCalledTimes(2);
     // The register panel reads its own data; this test is about the card.
@@ -295,7 +300,7 @@ describe('PlanPage', () => {
     // A reload: a fresh injector and page, only localStorage carried over.
     TestBed.resetTestingModule();
     const { fixture, http, root } = await setUp();
-    expect(paperButton(root, 'US Letter').getAttribute('aria-checked')).toBe('true');
+    expect(paperButton(root, 'US Letter').checked).toBe(true);
     expect(await printCard(fixture, http)).toBe('letter');
   });
 

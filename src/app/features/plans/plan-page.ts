@@ -12,10 +12,7 @@ import {
 } from '@angular/core';
 import { DOCUMENT, NgTemplateOutlet } from '@angular/common';
 import { MatButtonModule } from '@angular/material/button';
-import { MatButtonToggleModule } from '@angular/material/button-toggle';
-import { MatDialog } from '@angular/material/dialog';
 import { MatMenuModule } from '@angular/material/menu';
-import { MatSnackBar } from '@angular/material/snack-bar';
 import { CdkDropListGroup } from '@angular/cdk/drag-drop';
 import { Router, RouterLink } from '@angular/router';
 import { ACTIVITY_KINDS, type ActivityKind, type Phase } from '../../../../shared/types';
@@ -24,24 +21,25 @@ import { ICONS } from '../../core/icons/shipped-icon';
 import { mediaMatches, PHONE_WIDTH_QUERY } from '../../core/layout/media-query';
 import { AuthStore } from '../../core/auth/auth-store';
 import { PrintState } from '../../core/layout/print-state';
+import { OnDemandOverlays } from '../../core/layout/on-demand-overlays';
 import { WHEN_IDLE } from '../../core/layout/when-idle';
 import { keepDrawnCopy } from '../../core/startup/drawn-copy';
 import type { ActivityOption } from '../../core/engine/browser-engine';
 import { problemMessage } from '../../core/http/problem-message';
 import { ACTIVITY_KIND_LABELS, FOCUS_LABELS, KIND_LABELS } from '../../core/labels/plan-labels';
 import { dayWords, timeWords } from '../../core/locale/locale-format';
-import { DeletePlanDialog, planName } from './components/delete-plan-dialog';
 import { EditAnswer } from './components/edit-answer';
 import { PhaseTimeline } from './components/phase-timeline';
 import { PlanNotices } from './components/plan-notices';
-import { ShareDialog, ShareDialogData } from './components/share-dialog';
+import type { ShareDialog, ShareDialogData } from './components/share-dialog';
+import type { DeletePlanDialog } from './components/delete-plan-dialog';
 import { CardFeedback, PlayerMoveRequest, StationCard } from './components/station-card';
 import { RegisterPanel } from './components/register-panel';
 import { WhyPanel } from './components/why-panel';
 import { PAPER_LABELS, PaperPreference } from './services/paper-preference';
 import { PlanHandover } from './services/plan-handover';
 import { EditFeedback, PlanSession } from './services/plan-session';
-import { breakWords, changeoverWords, isBreak } from './services/plan-words';
+import { breakWords, changeoverWords, isBreak, planName } from './services/plan-words';
 import { SizeInUnitsPipe } from '../../shared/pipes/size-in-units';
 import { UnitChoice } from '../../core/units/unit-choice';
 
@@ -60,7 +58,6 @@ interface SwapGroup {
     RouterLink,
     CdkDropListGroup,
     MatButtonModule,
-    MatButtonToggleModule,
     ...ICONS,
     MatMenuModule,
     EditAnswer,
@@ -79,8 +76,8 @@ interface SwapGroup {
 export class PlanPage {
   protected readonly session = inject(PlanSession);
   private readonly plansApi = inject(PlansApi);
-  private readonly dialog = inject(MatDialog);
-  private readonly snackBar = inject(MatSnackBar);
+  /** The share and delete dialogs' code comes when one is opened, not with the page. */
+  private readonly overlays = inject(OnDemandOverlays);
   private readonly auth = inject(AuthStore);
   private readonly document = inject(DOCUMENT);
   private readonly paperPreference = inject(PaperPreference);
@@ -105,6 +102,7 @@ export class PlanPage {
   protected readonly printing = signal(false);
   protected readonly paper = this.paperPreference.paper;
   protected readonly paperLabels = PAPER_LABELS;
+  protected readonly paperOptions = Object.keys(PAPER_LABELS) as CardPaper[];
 
   /** Phones fold each station's details (the shell's own phone breakpoint); wider screens keep them open. */
   protected readonly compact = mediaMatches(PHONE_WIDTH_QUERY);
@@ -296,23 +294,25 @@ export class PlanPage {
   protected share(): void {
     const saved = this.session.saved();
     if (!saved) return;
-    this.dialog
-      .open<ShareDialog, ShareDialogData, number>(ShareDialog, {
-        data: { planId: saved.id, paper: this.paper(), canEmail: this.canEdit() },
-        width: '480px',
-      })
-      .afterClosed()
-      .subscribe((queued) => {
-        if (queued) {
-          const words =
+    this.overlays
+      .open<ShareDialog, ShareDialogData, number>(
+        () => import('./components/share-dialog').then((m) => m.ShareDialog),
+        {
+          data: { planId: saved.id, paper: this.paper(), canEmail: this.canEdit() },
+          width: '480px',
+        },
+      )
+      .subscribe({
+        next: (queued) => {
+          if (!queued) return;
+          this.overlays.notify(
             queued === 1
               ? $localize`1 e-mail queued for sending.`
-              : $localize`${queued}:count: e-mails queued for sending.`;
-          this.snackBar.open(words, undefined, {
-            duration: 4000,
-            politeness: 'polite',
-          });
-        }
+              : $localize`${queued}:count: e-mails queued for sending.`,
+            4000,
+          );
+        },
+        error: (error: unknown) => this.session.error.set(problemMessage(error)),
       });
   }
 
@@ -320,24 +320,21 @@ export class PlanPage {
   protected deletePlan(): void {
     const saved = this.session.saved();
     if (!saved) return;
-    this.dialog
-      .open<DeletePlanDialog, typeof saved, boolean>(DeletePlanDialog, {
-        data: saved,
-        width: '460px',
-        maxWidth: 'calc(100vw - 32px)',
-      })
-      .afterClosed()
-      .subscribe((deleted) => {
-        if (!deleted) return;
-        this.snackBar.open(
-          $localize`:A plan deleted, named by kind, day and team:${planName(saved)}:plan: deleted.`,
-          undefined,
-          {
-            duration: 5000,
-            politeness: 'polite',
-          },
-        );
-        void this.router.navigate(['/teams', saved.teamId, 'plans']);
+    this.overlays
+      .open<DeletePlanDialog, typeof saved, boolean>(
+        () => import('./components/delete-plan-dialog').then((m) => m.DeletePlanDialog),
+        { data: saved, width: '460px', maxWidth: 'calc(100vw - 32px)' },
+      )
+      .subscribe({
+        next: (deleted) => {
+          if (!deleted) return;
+          this.overlays.notify(
+            $localize`:A plan deleted, named by kind, day and team:${planName(saved)}:plan: deleted.`,
+            5000,
+          );
+          void this.router.navigate(['/teams', saved.teamId, 'plans']);
+        },
+        error: (error: unknown) => this.session.error.set(problemMessage(error)),
       });
   }
 }

@@ -4,17 +4,7 @@ import { MAT_DIALOG_DATA, MatDialogModule, MatDialogRef } from '@angular/materia
 import type { PlanSummaryDto } from '../../../../../shared/types';
 import { PlansApi } from '../../../core/api/plans-api';
 import { problemMessage } from '../../../core/http/problem-message';
-import { KIND_LABELS } from '../../../core/labels/plan-labels';
-import { dayWords } from '../../../core/locale/locale-format';
-
-/** "Training session of Tue 1 Dec for U10 Kestrels": how a plan is named when it is deleted. */
-export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'>): string {
-  const kind = KIND_LABELS[plan.kind];
-  if (!plan.date)
-    return $localize`:A plan named by its kind and team:${kind}:kind: for ${plan.teamName}:teamName:`;
-  const day = dayWords(plan.date);
-  return $localize`:A plan named by its kind, day and team:${kind}:kind: of ${day}:day: for ${plan.teamName}:teamName:`;
-}
+import { planName } from '../services/plan-words';
 
 /**
  * Asks before a plan is deleted, saying what goes with it, and deletes it. Closes with `true` once

@@ -1,13 +1,16 @@
 /**
  * The plan's stations and phases in a coach's words, for the plan page and pitch-side alike:
- * who plays on which side, who serves, and what to set up before a phase.
+ * who plays on which side, who serves, what to set up before a phase, and a plan's name.
  */
 import {
   ACTIVITY_KIND_LABELS,
   type Phase,
+  type PlanSummaryDto,
   type PositionRole,
   type Station,
 } from '../../../../../shared/types';
+import { KIND_LABELS } from '../../../core/labels/plan-labels';
+import { dayWords } from '../../../core/locale/locale-format';
 
 /** One line of a station's roles: "Side A (bibs)" and the names on it. */
 export interface RoleLine {
@@ -160,4 +163,13 @@ function luminance(hex: string): number {
   const channels = [1, 3, 5].map((i) => parseInt(hex.slice(i, i + 2), 16) / 255);
   const [r, g, b] = channels.map((c) => (c <= 0.04045 ? c / 12.92 : ((c + 0.055) / 1.055) ** 2.4));
   return 0.2126 * r + 0.7152 * g + 0.0722 * b;
+}
+
+/** "Training session of Tue 1 Dec for U10 Kestrels": how a plan is named when it is deleted. */
+export function planName(plan: Pick<PlanSummaryDto, 'kind' | 'date' | 'teamName'>): string {
+  const kind = KIND_LABELS[plan.kind];
+  if (!plan.date)
+    return $localize`:A plan named by its kind and team:${kind}:kind: for ${plan.teamName}:teamName:`;
+  const day = dayWords(plan.date);
+  return $localize`:A plan named by its kind, day and team:${kind}:kind: of ${day}:day: for ${plan.teamName}:teamName:`;
 }
