@@ -8,6 +8,7 @@ const NEEDS = {
   chromium: { package: 'chromium', present: chromiumInstalled },
   pdftotext: { package: 'poppler-utils', present: () => existsSync('/usr/bin/pdftotext') },
   nginx: { package: 'nginx', present: () => existsSync('/usr/sbin/nginx') },
+  openssl: { package: 'openssl', present: () => existsSync('/usr/bin/openssl') },
 } as const;
 
 export type SystemNeed = keyof typeof NEEDS;

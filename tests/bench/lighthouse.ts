@@ -12,6 +12,11 @@
  * median performance score is the one reported, as Lighthouse's own guidance on variability says.
  * ONLY_SIGN_IN=1 runs the sign-in page alone. Every plan run starts with an empty cache and no
  * service worker: a cold visit, like the sign-in page's (storage is kept only for the session).
+ *
+ * The plan page is measured twice: from the app's own server (plain HTTP/1.1 on loopback, where
+ * the browser opens at most six connections and each file waits its turn) and, as `planHttps`,
+ * through nginx serving HTTPS and HTTP/2 as a deployment does (tests/support/load-balancer.ts, a
+ * certificate made for the run and accepted by this browser only). DIRECT_ONLY=1 skips the second.
  */
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { createServer } from 'node:net';
@@ -24,6 +29,7 @@ import { DEMO_PASSWORD } from '../../server/seed';
 import type { Page, PlanSummaryDto } from '../../shared/types/api';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../server/build/chromium';
 import { DRAWN_COPY_KEY } from '../../src/app/core/startup/drawn-copy';
+import { startLoadBalancer, type LoadBalancer } from '../support/load-balancer';
 import { startBenchStack, teardown } from './support/stack';
 
 const COACH = 'coach.u12@fernmoor.example.org';
@@ -65,18 +71,21 @@ async function main(): Promise<void> {
   const port = await freePort();
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: CHROMIUM_PATH,
-    args: [...CHROMIUM_ARGS, `--remote-debugging-port=${port}`],
+    // The HTTPS proxy's certificate is made for the run: this browser, and only it, accepts it.
+    args: [...CHROMIUM_ARGS, '--ignore-certificate-errors', `--remote-debugging-port=${port}`],
     headless: true,
   });
   const results: Record<string, Scores> = {};
+  let proxy: LoadBalancer | null = null;
   try {
     const { session, planId } = await newestPlan(baseUrl);
     const once = async (url: string, signedIn: boolean) => {
       if (signedIn) {
         // Signed in without loading the app first (a file of the same origin); then an empty
         // cache and no service worker, as after the sign-in page's own run.
+        const origin = new URL(url).origin;
         const page = await context.newPage();
-        await page.goto(`${baseUrl}/assets/favicon.svg`);
+        await page.goto(`${origin}/assets/favicon.svg`);
         await page.evaluate(
           ([value, copy]) => {
             localStorage.setItem('conewise.session', value);
@@ -90,7 +99,7 @@ async function main(): Promise<void> {
         // The previous run's service worker would serve every file from its cache: a second visit,
         // not the cold one this page is measured on (storage is not reset, to keep the session).
         await cdp.send('Storage.clearDataForOrigin', {
-          origin: baseUrl,
+          origin,
           storageTypes: 'service_workers,cache_storage',
         });
         await page.close();
@@ -130,8 +139,8 @@ async function main(): Promise<void> {
         .map((id) => `${id.replace(/-/g, ' ')} ${lhr.audits[id]?.displayValue ?? '?'}`)
         .join(', ');
       const spread = runs.map((r) => Math.round(performance(r) * 100)).join(', ');
-      console.log(`${name.padEnd(8)} ${CATEGORIES.map((c) => `${c} ${scores[c]}`).join(' · ')}`);
-      console.log(`         median of ${RUNS} runs (performance ${spread}): ${metrics}`);
+      console.log(`${name.padEnd(9)} ${CATEGORIES.map((c) => `${c} ${scores[c]}`).join(' · ')}`);
+      console.log(`          median of ${RUNS} runs (performance ${spread}): ${metrics}`);
       const failing = Object.values(lhr.audits).filter(
         (a) =>
           a.score !== null &&
@@ -140,11 +149,18 @@ async function main(): Promise<void> {
           a.scoreDisplayMode !== 'manual',
       );
       for (const audit of failing.slice(0, 12))
-        console.log(`         – ${audit.id}: ${audit.title} (${audit.displayValue ?? audit.score})`);
+        console.log(`          – ${audit.id}: ${audit.title} (${audit.displayValue ?? audit.score})`);
     };
     if (!process.env['ONLY_PLAN']) await run('signIn', `${baseUrl}/sign-in`, false);
-    if (!process.env['ONLY_SIGN_IN']) await run('plan', `${baseUrl}/plans/${planId}`, true);
+    if (!process.env['ONLY_SIGN_IN']) {
+      await run('plan', `${baseUrl}/plans/${planId}`, true);
+      if (!process.env['DIRECT_ONLY']) {
+        proxy = await startLoadBalancer([Number(new URL(baseUrl).port)], { tls: true });
+        await run('planHttps', `${proxy.url}/plans/${planId}`, true);
+      }
+    }
   } finally {
+    await proxy?.stop();
     await context.close();
     rmSync(profile, { recursive: true, force: true });
     await teardown();

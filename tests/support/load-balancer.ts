@@ -1,6 +1,7 @@
 /**
  * nginx (Debian's /usr/sbin/nginx) as a reverse proxy on a free loopback port in front of API
- * instances, for the suites that break one of them. Everything it writes (config, pid file, logs,
+ * instances, for the suites that break one of them, and (with `tls`) as the HTTPS and HTTP/2 front a
+ * deployment puts before the app, for `bench:lighthouse`. Everything it writes (config, pid file, logs,
  * temp folders) lives in one temp folder, removed on stop().
  *
  * Retries are nginx's defaults made explicit: a request that could not reach an instance (refused,
@@ -9,7 +10,8 @@
  * create must not be made twice behind the client's back. No upstream keep-alive: each request
  * opens its own connection, so none is lost to an instance closing an idle one at the same moment.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
+import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
+import { request } from 'node:https';
 import { chmodSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -30,6 +32,12 @@ export interface LoadBalancerOptions {
    * instance when it cannot connect.
    */
   failTimeoutSeconds?: number;
+  /**
+   * HTTPS with HTTP/2 towards the browser, as a deployment serves phones, with a self-signed
+   * certificate for 127.0.0.1 made for the run (a browser must be told to accept it), and kept-alive
+   * connections to the instances. `api` cannot be used then (fetch refuses the certificate).
+   */
+  tls?: boolean;
 }
 
 export interface LoadBalancer {
@@ -56,6 +64,14 @@ export function nginxConfig(
   const servers = upstreams
     .map((upstream) => `    server 127.0.0.1:${upstream} max_fails=1 fail_timeout=${failTimeout}s;`)
     .join('\n');
+  const listen = options.tls
+    ? `listen 127.0.0.1:${port} ssl http2;
+    ssl_certificate ${dir}/cert.pem;
+    ssl_certificate_key ${dir}/key.pem;`
+    : `listen 127.0.0.1:${port};`;
+  // Kept-alive upstream connections only behind TLS: the fault suites want one connection per request.
+  const keepAlive = options.tls ? '\n    keepalive 16;' : '';
+  const reuse = options.tls ? '\n      proxy_set_header Connection "";' : '';
   return `daemon off;
 worker_processes 1;
 pid ${dir}/nginx.pid;
@@ -70,14 +86,14 @@ http {
   uwsgi_temp_path ${dir}/uwsgi;
   scgi_temp_path ${dir}/scgi;
   upstream conewise {
-${servers}
+${servers}${keepAlive}
   }
   server {
-    listen 127.0.0.1:${port};
+    ${listen}
     client_max_body_size 2m;
     location / {
       proxy_pass http://conewise;
-      proxy_http_version 1.1;
+      proxy_http_version 1.1;${reuse}
       proxy_set_header Host $host;
       proxy_set_header X-Forwarded-For $proxy_add_x_forwarded_for;
       proxy_set_header X-Forwarded-Proto $scheme;
@@ -102,6 +118,7 @@ export async function startLoadBalancer(
   chmodSync(dir, 0o711);
   const port = await freePort();
   const conf = join(dir, 'nginx.conf');
+  if (options.tls) selfSignedCertificate(dir);
   writeFileSync(conf, nginxConfig(dir, port, upstreams, options));
   // -e: the error log from the first line on (before the config is read nginx would open
   // /var/log/nginx/error.log, which only root may write).
@@ -120,7 +137,7 @@ export async function startLoadBalancer(
       return '';
     }
   };
-  const url = `http://127.0.0.1:${port}`;
+  const url = `${options.tls ? 'https' : 'http'}://127.0.0.1:${port}`;
   const balancer: LoadBalancer = {
     url,
     port,
@@ -140,16 +157,56 @@ export async function startLoadBalancer(
       rmSync(dir, { recursive: true, force: true });
       throw new Error(`nginx exited (${child.exitCode}): ${output}\n${log}`);
     }
-    const ok = await balancer.api.get('/api/health').then(
-      (r) => r.status === 200,
-      () => false,
-    );
+    const ok = options.tls
+      ? await healthyOverTls(url)
+      : await balancer.api.get('/api/health').then(
+          (r) => r.status === 200,
+          () => false,
+        );
     if (ok) return balancer;
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
   const log = balancer.errorLog();
   await balancer.stop();
   throw new Error(`nginx did not answer through port ${port}: ${output}\n${log}`);
+}
+
+/** A certificate and key for 127.0.0.1 (openssl, one day), as cert.pem and key.pem in `dir`. */
+function selfSignedCertificate(dir: string): void {
+  ensureSystemPackages(['openssl']);
+  execFileSync(
+    'openssl',
+    [
+      'req',
+      '-x509',
+      '-newkey',
+      'rsa:2048',
+      '-nodes',
+      '-days',
+      '1',
+      '-subj',
+      '/CN=127.0.0.1',
+      '-addext',
+      'subjectAltName=IP:127.0.0.1',
+      '-keyout',
+      join(dir, 'key.pem'),
+      '-out',
+      join(dir, 'cert.pem'),
+    ],
+    { stdio: 'ignore' },
+  );
+}
+
+/** Whether /api/health answers 200 through the TLS proxy at `url` (its own certificate accepted). */
+function healthyOverTls(url: string): Promise<boolean> {
+  return new Promise((resolve) => {
+    const asked = request(`${url}/api/health`, { rejectUnauthorized: false }, (response) => {
+      response.resume();
+      resolve(response.statusCode === 200);
+    });
+    asked.on('error', () => resolve(false));
+    asked.end();
+  });
 }
 
 /** SIGTERM (nginx's fast shutdown) to the group, SIGKILL if it is still there after 10 s. */
