@@ -87,8 +87,9 @@ describe('the plan page on a phone', () => {
     const cards = page.locator('cw-station-card');
     await cards.nth(0).locator('summary').click();
     await expect.poll(async () => (await openStates(page))[0]).toBe(true);
-    expect(await cards.nth(0).locator('.cw-points').isVisible()).toBe(true);
-    expect(await cards.nth(0).locator('[data-player]').first().isVisible()).toBe(true);
+    // The body is drawn on the details' toggle event, a task after `open` is set: wait for it.
+    await cards.nth(0).locator('.cw-points').waitFor({ state: 'visible', timeout: 5000 });
+    await cards.nth(0).locator('[data-player]').first().waitFor({ state: 'visible', timeout: 5000 });
 
     const second = cards.nth(1).locator('summary');
     await second.focus();
